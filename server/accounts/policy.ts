@@ -1,0 +1,3 @@
+import { requireRole } from "../http/policy.ts";
+
+export const canManageUsers = requireRole("admin");

@@ -1,0 +1,88 @@
+import type { NextFunction, Request, Response } from "express";
+import {
+  inviteUserSchema,
+  requestPasswordResetSchema,
+  setPasswordSchema,
+  signInSchema,
+  signUpSchema,
+} from "../../shared/accounts/schemas.ts";
+import { createRoutes } from "../http/route.ts";
+import { anyone, signedIn } from "../http/policy.ts";
+import { AppError } from "../http/app-error.ts";
+import { linkBase } from "../http/app-locals.ts";
+import { passport, SESSION_COOKIE } from "../http/auth.ts";
+import { kickOutbox } from "../mail/outbox.ts";
+import { canManageUsers } from "./policy.ts";
+import { signInRateLimit } from "./sign-in-limit.ts";
+import { toSessionUser } from "./dto.ts";
+import {
+  findCurrentUser,
+  inviteUser,
+  listCompanies,
+  listUsers,
+  requestPasswordReset,
+  setPasswordWithToken,
+  signUpCompany,
+} from "./service.ts";
+
+export const authRoutes = createRoutes("/api/auth");
+export const adminUserRoutes = createRoutes("/api/admin");
+
+function authenticate(req: Request, res: Response, next: NextFunction): Promise<Express.User | false> {
+  return new Promise((resolve, reject) => {
+    passport.authenticate("local", { session: false }, (err: unknown, user: Express.User | false) =>
+      err ? reject(err) : resolve(user),
+    )(req, res, next);
+  });
+}
+
+// passport 0.7 regenerates the session id inside logIn, so a planted id never becomes signed in.
+const logIn = (req: Request, user: Express.User) =>
+  new Promise<void>((resolve, reject) => req.logIn(user, (err) => (err ? reject(err) : resolve())));
+
+async function meOrThrow(userId: number) {
+  const found = await findCurrentUser(userId);
+  if (!found) throw new AppError("unauthenticated", "Sign in first");
+  return found.dto;
+}
+
+authRoutes.post("/sign-in", { allow: anyone, before: [signInRateLimit], body: signInSchema }, async (req, res, { body }) => {
+  req.body = body;
+  const user = await authenticate(req, res, () => undefined);
+  if (!user) throw new AppError("unauthenticated", "That e-mail and password do not match an account");
+  await logIn(req, user);
+  return meOrThrow(user.id);
+});
+
+authRoutes.post("/sign-out", { allow: anyone }, async (req, res) => {
+  await new Promise<void>((resolve, reject) => req.logout((err) => (err ? reject(err) : resolve())));
+  await new Promise<void>((resolve) => (req.session ? req.session.destroy(() => resolve()) : resolve()));
+  res.clearCookie(SESSION_COOKIE);
+  res.status(204).end();
+});
+
+authRoutes.get("/me", { allow: signedIn }, async (req) => meOrThrow(req.user!.id));
+
+authRoutes.post("/sign-up", { allow: anyone, body: signUpSchema }, async (req, res, { body }) => {
+  const user = await signUpCompany(body);
+  await logIn(req, toSessionUser(user));
+  res.status(201).json(await meOrThrow(user.id));
+});
+
+authRoutes.post("/password-reset", { allow: anyone, body: requestPasswordResetSchema }, async (req, res, { body }) => {
+  await requestPasswordReset(body.email, linkBase(req));
+  kickOutbox(req.app.locals);
+  res.status(202).json({ message: "If that e-mail has an account, a reset link is on its way." });
+});
+
+authRoutes.post("/set-password", { allow: anyone, body: setPasswordSchema }, async (_req, _res, { body }) => {
+  await setPasswordWithToken(body);
+});
+
+adminUserRoutes.get("/users", { allow: canManageUsers }, () => listUsers());
+adminUserRoutes.get("/companies", { allow: canManageUsers }, () => listCompanies());
+adminUserRoutes.post("/invitations", { allow: canManageUsers, body: inviteUserSchema }, async (req, res, { body }) => {
+  const invited = await inviteUser(req.user!, body, linkBase(req));
+  kickOutbox(req.app.locals);
+  res.status(201).json(invited);
+});

@@ -1,0 +1,134 @@
+import { UniqueConstraintError } from "sequelize";
+import type { InviteUser, SetPassword, SignUp } from "../../shared/accounts/schemas.ts";
+import { db } from "../db/sequelize.ts";
+import { AppError } from "../http/app-error.ts";
+import { Company } from "../companies/model.ts";
+import { enqueueMail } from "../mail/outbox.ts";
+import { recordAudit } from "../audit/index.ts";
+import { User } from "./model.ts";
+import { checkPassword, hashPassword } from "./passwords.ts";
+import { consumeToken, issueToken } from "./tokens.ts";
+import { inviteMail, resetMail } from "./emails.ts";
+import { toCurrentUserDto } from "./dto.ts";
+
+const emailTaken = () =>
+  new AppError("conflict", "An account with this e-mail already exists", [{ path: "body.email", message: "already in use" }]);
+
+export async function signUpCompany(input: SignUp) {
+  const passwordHash = await hashPassword(input.password);
+  try {
+    return await db().transaction(async (transaction) => {
+      const company = await Company.create(
+        {
+          name: input.companyName,
+          kind: input.kind,
+          addressLine: input.addressLine,
+          postalCode: input.postalCode,
+          timeZone: input.timeZone,
+          latitude: null,
+          longitude: null,
+        },
+        { transaction },
+      );
+      const user = await User.create(
+        {
+          companyId: company.id,
+          email: input.email,
+          name: input.name,
+          role: input.kind === "service" ? "provider_admin" : "buyer",
+          passwordHash,
+        },
+        { transaction },
+      );
+      await recordAudit({ actorUserId: user.id, action: "company.signed_up", subjectType: "company", subjectId: company.id, after: { name: company.name, kind: company.kind } }, transaction);
+      return user;
+    });
+  } catch (err) {
+    if (err instanceof UniqueConstraintError) throw emailTaken();
+    throw err;
+  }
+}
+
+/** The same answer, and about the same time, whether the e-mail is unknown or the password wrong. */
+export async function findUserBySignIn(email: string, password: string): Promise<User | null> {
+  const user = await User.findOne({ where: { email: email.toLowerCase(), active: true } });
+  const ok = await checkPassword(password, user?.passwordHash);
+  return ok ? user : null;
+}
+
+export async function findCurrentUser(userId: number) {
+  const user = await User.findOne({ where: { id: userId, active: true } });
+  if (!user) return null;
+  const company = await Company.findByPk(user.companyId);
+  if (!company) return null;
+  return { user, dto: toCurrentUserDto(user, company) };
+}
+
+export async function requestPasswordReset(email: string, linkBase: string): Promise<void> {
+  const user = await User.findOne({ where: { email: email.toLowerCase(), active: true } });
+  if (!user) return;
+  await db().transaction(async (transaction) => {
+    const token = await issueToken(user.id, "reset", transaction);
+    await enqueueMail(resetMail(user.email, user.name, `${linkBase}/set-password?token=${token}`), transaction);
+  });
+}
+
+export async function setPasswordWithToken(input: SetPassword): Promise<void> {
+  const passwordHash = await hashPassword(input.password);
+  await db().transaction(async (transaction) => {
+    const userId = await consumeToken(input.token, transaction);
+    if (!userId) {
+      throw new AppError("invalid_input", "This link has expired or was already used", [{ path: "body.token", message: "expired or used" }]);
+    }
+    await User.update({ passwordHash }, { where: { id: userId }, transaction });
+    await recordAudit({ actorUserId: userId, action: "user.password_set", subjectType: "user", subjectId: userId }, transaction);
+  });
+}
+
+export async function inviteUser(actor: Express.User, input: InviteUser, linkBase: string) {
+  const company = await Company.findByPk(input.companyId);
+  if (!company) throw new AppError("invalid_input", "No such company", [{ path: "body.companyId", message: "unknown company" }]);
+  const fits =
+    (company.kind === "service" && ["provider_admin", "technician"].includes(input.role)) ||
+    (company.kind === "shop" && input.role === "buyer") ||
+    (company.kind === "platform" && ["reviewer", "admin"].includes(input.role));
+  if (!fits) {
+    throw new AppError("invalid_input", `A ${company.kind} company cannot have a ${input.role}`, [{ path: "body.role", message: "does not fit the company" }]);
+  }
+  return createInvitedUser(actor, company, input, linkBase);
+}
+
+/** Creates a user without a password and e-mails a one-time link to set one (admin invites, technician accounts). */
+export async function createInvitedUser(
+  actor: Express.User,
+  company: Company,
+  input: { email: string; name: string; role: InviteUser["role"]; technicianId?: number },
+  linkBase: string,
+) {
+  try {
+    return await db().transaction(async (transaction) => {
+      const user = await User.create(
+        { companyId: company.id, email: input.email, name: input.name, role: input.role, passwordHash: null, technicianId: input.technicianId ?? null },
+        { transaction },
+      );
+      const token = await issueToken(user.id, "invite", transaction);
+      await enqueueMail(inviteMail(user.email, user.name, company.name, `${linkBase}/set-password?token=${token}`), transaction);
+      await recordAudit({ actorUserId: actor.id, action: "user.invited", subjectType: "user", subjectId: user.id, after: { email: user.email, role: user.role, companyId: company.id } }, transaction);
+      return { id: user.id, email: user.email, name: user.name, role: user.role, companyId: company.id };
+    });
+  } catch (err) {
+    if (err instanceof UniqueConstraintError) throw emailTaken();
+    throw err;
+  }
+}
+
+export async function listUsers() {
+  const [users, companies] = await Promise.all([User.findAll({ order: [["id", "ASC"]] }), Company.findAll()]);
+  const names = new Map(companies.map((c) => [c.id, c.name]));
+  return users.map((u) => ({ id: u.id, email: u.email, name: u.name, role: u.role, companyId: u.companyId, companyName: names.get(u.companyId) ?? "", active: u.active, invited: u.passwordHash === null }));
+}
+
+export async function listCompanies() {
+  const companies = await Company.findAll({ order: [["name", "ASC"]] });
+  return companies.map((c) => ({ id: c.id, name: c.name, kind: c.kind }));
+}

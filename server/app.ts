@@ -1,0 +1,72 @@
+import { existsSync } from "node:fs";
+import path from "node:path";
+import express, { type Express } from "express";
+import helmet from "helmet";
+import { pinoHttp } from "pino-http";
+import { randomUUID } from "node:crypto";
+import type pg from "pg";
+import type { Config } from "./config.ts";
+import { log } from "./log.ts";
+import { passport, sessionMiddleware } from "./http/auth.ts";
+import { requireCsrfHeader } from "./http/csrf.ts";
+import { apiNotFound, errorHandler } from "./http/error-handler.ts";
+import { healthRoutes } from "./health/routes.ts";
+import { authRoutes, adminUserRoutes } from "./accounts/index.ts";
+import { outboxRoutes } from "./mail/index.ts";
+import { technicianRoutes } from "./technicians/index.ts";
+import { credentialRoutes } from "./credentials/index.ts";
+import { createStorage } from "./storage/index.ts";
+import { createSignInLimiter } from "./accounts/sign-in-limit.ts";
+
+export interface AppDeps {
+  config: Config;
+  sessionPool: pg.Pool;
+  /** Folder of the built client; served with an index.html fallback for client routes. */
+  clientDir?: string;
+}
+
+const apiRouters = [healthRoutes, authRoutes, adminUserRoutes, outboxRoutes, technicianRoutes, credentialRoutes];
+
+export function createApp({ config, sessionPool, clientDir }: AppDeps): Express {
+  const app = express();
+  app.locals.config = config;
+  app.locals.storage = createStorage(config.UPLOADS_DIR);
+  app.locals.signInLimiter = createSignInLimiter(config.SIGN_IN_ATTEMPTS_PER_15_MIN);
+  app.disable("x-powered-by");
+  if (config.NODE_ENV === "production") app.set("trust proxy", 1);
+
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          // Uploaded PDFs are shown in the reviewer's side-by-side view from our own origin only.
+          "frame-src": ["'self'", "blob:"],
+          "object-src": ["'self'"],
+          "img-src": ["'self'", "data:", "blob:"],
+        },
+      },
+    }),
+  );
+  app.use(
+    pinoHttp({
+      logger: log,
+      genReqId: (req) => (req.headers["x-request-id"] as string | undefined) ?? randomUUID(),
+      autoLogging: { ignore: (req) => !req.url?.startsWith("/api") },
+    }),
+  );
+  app.use("/api", express.json({ limit: "100kb" }));
+  app.use("/api", sessionMiddleware(config, sessionPool));
+  app.use("/api", passport.session());
+  app.use("/api", requireCsrfHeader);
+  for (const routes of apiRouters) app.use(routes.router);
+  app.use("/api", apiNotFound);
+
+  const dist = clientDir ?? path.resolve(import.meta.dirname, "..", "dist");
+  if (existsSync(path.join(dist, "index.html"))) {
+    app.use(express.static(dist, { index: false, maxAge: "1h" }));
+    app.get("/{*splat}", (_req, res) => res.sendFile(path.join(dist, "index.html")));
+  }
+
+  app.use(errorHandler);
+  return app;
+}

@@ -1,0 +1,1 @@
+export { Company, initCompanyModel } from "./model.ts";

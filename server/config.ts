@@ -1,0 +1,53 @@
+import { z } from "zod";
+
+// The only file that reads process.env. Demo defaults are built in so `npm start` just works;
+// production refuses to start without a real session secret.
+const booleanText = z
+  .enum(["true", "false", "1", "0"])
+  .transform((v) => v === "true" || v === "1");
+
+const configSchema = z
+  .object({
+    NODE_ENV: z.enum(["development", "production", "test"]).default("development"),
+    HOST: z.string().default("127.0.0.1"),
+    PORT: z.coerce.number().int().min(0).max(65535).default(3000),
+    PUBLIC_URL: z.url().optional(),
+    DATABASE_URL: z.string().optional(),
+    PG_PORT: z.coerce.number().int().min(1024).max(65535).default(54329),
+    SMTP_URL: z.string().optional(),
+    SMTP_CATCHER_PORT: z.coerce.number().int().min(1024).max(65535).default(2525),
+    MAIL_FROM: z.string().default("Clearbench <no-reply@clearbench.test>"),
+    SESSION_SECRET: z.string().min(16).default("clearbench-demo-secret-change-me"),
+    UPLOADS_DIR: z.string().default("uploads"),
+    LOG_LEVEL: z.enum(["fatal", "error", "warn", "info", "debug", "trace", "silent"]).default("info"),
+    SIGN_IN_ATTEMPTS_PER_15_MIN: z.coerce.number().int().min(1).default(10),
+    BCRYPT_COST: z.coerce.number().int().min(4).max(15).default(12),
+    JOB_TIME_ZONE: z.string().default("America/Chicago"),
+    JOB_CRON: z.string().default("0 6 * * *"),
+    WARNING_DAYS: z
+      .string()
+      .default("60,30,14,7,1")
+      .transform((s) => s.split(",").map((d) => Number(d.trim())))
+      .pipe(z.array(z.number().int().min(1).max(365)).min(1)),
+    RUN_SCHEDULE: booleanText.default(true),
+  })
+  .superRefine((c, ctx) => {
+    if (c.NODE_ENV === "production" && c.SESSION_SECRET === "clearbench-demo-secret-change-me") {
+      ctx.addIssue({ code: "custom", path: ["SESSION_SECRET"], message: "set a real secret in production" });
+    }
+  });
+
+export type Config = Readonly<z.infer<typeof configSchema>>;
+
+export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
+  const parsed = configSchema.safeParse(env);
+  if (!parsed.success) {
+    const problems = parsed.error.issues.map((i) => `${i.path.join(".")}: ${i.message}`).join("; ");
+    throw new Error(`Invalid configuration: ${problems}`);
+  }
+  return Object.freeze(parsed.data);
+}
+
+export function publicUrl(config: Config): string {
+  return config.PUBLIC_URL ?? `http://${config.HOST === "0.0.0.0" ? "localhost" : config.HOST}:${config.PORT}`;
+}

@@ -1,0 +1,69 @@
+import { execFile } from "node:child_process";
+import { mkdtemp, readFile, rm, writeFile } from "node:fs/promises";
+import { tmpdir } from "node:os";
+import path from "node:path";
+import { promisify } from "node:util";
+import type { Response } from "express";
+import { AppError } from "../http/app-error.ts";
+import { recordAudit } from "../audit/index.ts";
+import type { FileStorage } from "../storage/index.ts";
+import { Document } from "./model.ts";
+
+const run = promisify(execFile);
+const PAGE_RENDER_TIMEOUT_MS = 15_000;
+const MAX_PREVIEW_PAGES = 10;
+
+async function loadDocument(id: number) {
+  const document = await Document.findByPk(id);
+  if (!document) throw new AppError("not_found", "That document was not found");
+  return document;
+}
+
+// Files are served as data, never as pages: no sniffing, no scripts, and a download by default.
+function setFileHeaders(res: Response, mime: string, disposition: "inline" | "attachment", name: string) {
+  res.setHeader("Content-Type", mime);
+  res.setHeader("X-Content-Type-Options", "nosniff");
+  res.setHeader("Content-Security-Policy", "default-src 'none'; sandbox");
+  res.setHeader("Cache-Control", "private, no-store");
+  const ascii = name.replace(/[^\x20-\x7e]/g, "_").replace(/["\\]/g, "_");
+  res.setHeader("Content-Disposition", `${disposition}; filename="${ascii}"; filename*=UTF-8''${encodeURIComponent(name)}`);
+}
+
+/** Sends the stored file; only images may be shown inline (a PDF is previewed as rendered pages instead). */
+export async function sendDocumentFile(user: Express.User, id: number, inline: boolean, storage: FileStorage, res: Response) {
+  const document = await loadDocument(id);
+  await recordAudit({ actorUserId: user.id, action: "document.downloaded", subjectType: "document", subjectId: id });
+  const disposition = inline && document.mime.startsWith("image/") ? "inline" : "attachment";
+  setFileHeaders(res, document.mime, disposition, document.originalName);
+  const stream = await storage.open(document.sha256);
+  await new Promise<void>((resolve, reject) => {
+    stream.on("error", reject);
+    res.on("finish", resolve);
+    stream.pipe(res);
+  });
+}
+
+/** A PNG of one page of a PDF, rendered by poppler's pdftoppm with a time limit: nothing of the PDF runs in the browser. */
+export async function sendPdfPage(id: number, page: number, storage: FileStorage, res: Response) {
+  const document = await loadDocument(id);
+  if (document.mime !== "application/pdf" || page > MAX_PREVIEW_PAGES) throw new AppError("not_found", "No such page");
+  const dir = await mkdtemp(path.join(tmpdir(), "clearbench-page-"));
+  try {
+    const chunks: Buffer[] = [];
+    for await (const chunk of await storage.open(document.sha256)) chunks.push(chunk as Buffer);
+    await writeFile(path.join(dir, "in.pdf"), Buffer.concat(chunks));
+    await run("pdftoppm", ["-png", "-r", "110", "-f", String(page), "-l", String(page), "-singlefile", path.join(dir, "in.pdf"), path.join(dir, "out")], {
+      timeout: PAGE_RENDER_TIMEOUT_MS,
+      killSignal: "SIGKILL",
+    }).catch(() => {
+      throw new AppError("not_found", "No such page");
+    });
+    const png = await readFile(path.join(dir, "out.png")).catch(() => {
+      throw new AppError("not_found", "No such page");
+    });
+    setFileHeaders(res, "image/png", "inline", `page-${page}.png`);
+    res.send(png);
+  } finally {
+    await rm(dir, { recursive: true, force: true });
+  }
+}

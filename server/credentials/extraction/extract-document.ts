@@ -1,0 +1,56 @@
+import type { FieldSet } from "../../../shared/credentials/credential-fields.ts";
+import { proposeFields, type FieldProposal } from "../../../shared/credentials/extract-fields.ts";
+import { isOcrAvailable, ocrImage, ocrPdf, type OcrOptions } from "./ocr.ts";
+import { extractPdfText } from "./pdf-text.ts";
+
+export const extractableMimes = ["application/pdf", "image/png", "image/jpeg"] as const;
+export type ExtractableMime = (typeof extractableMimes)[number];
+
+export interface ExtractDocumentInput {
+  bytes: Uint8Array;
+  /** Sniffed from the bytes by the caller, never taken from the upload's claim. */
+  mime: ExtractableMime;
+  /** The credential being submitted; without it only the text is returned. */
+  credentialType?: { code: string; fieldSet: FieldSet };
+  timeoutMs?: number;
+  ocr?: OcrOptions;
+}
+export interface ExtractedDocument {
+  text: string;
+  method: "pdf_text" | "ocr" | "none";
+  ocrAvailable: boolean;
+  proposal: FieldProposal | null;
+}
+
+// A scan can carry a few stray characters in its text layer (a stamp, a page number); below this it counts as no text.
+const MIN_TEXT_CHARACTERS = 20;
+
+const hasTextLayer = (text: string): boolean =>
+  (text.match(/[A-Za-z0-9]/g) ?? []).length >= MIN_TEXT_CHARACTERS;
+
+async function readText(
+  input: ExtractDocumentInput,
+  ocrAvailable: boolean,
+): Promise<Pick<ExtractedDocument, "text" | "method">> {
+  const ocrOptions = { ...input.ocr, ...(input.timeoutMs ? { timeoutMs: input.timeoutMs } : {}) };
+  if (input.mime === "application/pdf") {
+    const pdf = await extractPdfText(input.bytes, input.timeoutMs ? { timeoutMs: input.timeoutMs } : {});
+    if (hasTextLayer(pdf.text)) return { text: pdf.text, method: "pdf_text" };
+    if (!ocrAvailable) return { text: "", method: "none" };
+    return { text: await ocrPdf(input.bytes, ocrOptions), method: "ocr" };
+  }
+  if (!ocrAvailable) return { text: "", method: "none" };
+  return { text: await ocrImage(input.bytes, ocrOptions), method: "ocr" };
+}
+
+/**
+ * Reads an uploaded document: the PDF's own text first, OCR for scans and photos. Without OCR on the
+ * machine the method is "none" and the form asks for the fields by hand. Throws DocumentUnreadableError.
+ */
+export async function extractDocument(input: ExtractDocumentInput): Promise<ExtractedDocument> {
+  const ocrAvailable = await isOcrAvailable(input.ocr);
+  const { text, method } = await readText(input, ocrAvailable);
+  const type = input.credentialType;
+  const proposal = type && method !== "none" ? proposeFields(type.code, type.fieldSet, text) : null;
+  return { text, method, ocrAvailable, proposal };
+}

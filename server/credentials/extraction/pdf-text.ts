@@ -1,0 +1,85 @@
+import { createRequire } from "node:module";
+import { Worker } from "node:worker_threads";
+import { DocumentUnreadableError } from "./document-unreadable-error.ts";
+
+export { DocumentUnreadableError, type UnreadableReason } from "./document-unreadable-error.ts";
+
+export interface PdfTextOptions {
+  /** Wall-clock limit; the worker reading the PDF is terminated when it passes. */
+  timeoutMs?: number;
+  /** Pages read; a certificate or card has one or two, so a long file is cut short rather than read whole. */
+  maxPages?: number;
+}
+export interface PdfText {
+  text: string;
+  pageCount: number;
+  pagesRead: number;
+}
+
+const DEFAULT_TIMEOUT_MS = 10_000;
+const DEFAULT_MAX_PAGES = 10;
+// pdf.js can be made to allocate without bound by a hostile file; the worker's heap is capped so only it dies.
+const WORKER_HEAP_MB = 256;
+
+const pdfParsePath = createRequire(import.meta.url).resolve("pdf-parse");
+
+// The worker runs plain JavaScript (eval) so it needs no TypeScript loader in any runtime (tsx, Vitest).
+const WORKER_SOURCE = `
+const { parentPort, workerData } = require("node:worker_threads");
+const { PDFParse } = require(workerData.modulePath);
+(async () => {
+  const parser = new PDFParse({ data: workerData.bytes });
+  try {
+    const result = await parser.getText({ first: workerData.maxPages, pageJoiner: "" });
+    parentPort.postMessage({ ok: true, text: result.text, pageCount: result.total, pagesRead: result.pages.length });
+  } catch (err) {
+    parentPort.postMessage({ ok: false, name: String(err && err.name), message: String(err && err.message) });
+  } finally {
+    await parser.destroy().catch(() => undefined);
+  }
+})();
+`;
+
+type WorkerReply =
+  | { ok: true; text: string; pageCount: number; pagesRead: number }
+  | { ok: false; name: string; message: string };
+
+function toUnreadable(reply: Extract<WorkerReply, { ok: false }>): DocumentUnreadableError {
+  if (reply.name === "PasswordException") return new DocumentUnreadableError("encrypted");
+  return new DocumentUnreadableError("corrupt", reply.message);
+}
+
+/** The text layer of a PDF, read in a worker thread that is killed at the time limit. */
+export async function extractPdfText(bytes: Uint8Array, options: PdfTextOptions = {}): Promise<PdfText> {
+  if (bytes.byteLength === 0) throw new DocumentUnreadableError("empty");
+  if (!Buffer.from(bytes.subarray(0, 1024)).includes("%PDF-"))
+    throw new DocumentUnreadableError("corrupt", "no PDF header");
+  const timeoutMs = options.timeoutMs ?? DEFAULT_TIMEOUT_MS;
+  const worker = new Worker(WORKER_SOURCE, {
+    eval: true,
+    workerData: {
+      bytes: new Uint8Array(bytes),
+      maxPages: options.maxPages ?? DEFAULT_MAX_PAGES,
+      modulePath: pdfParsePath,
+    },
+    resourceLimits: { maxOldGenerationSizeMb: WORKER_HEAP_MB },
+    stdout: true,
+    stderr: true,
+  });
+  let timer: NodeJS.Timeout | undefined;
+  try {
+    const reply = await new Promise<WorkerReply>((resolve, reject) => {
+      timer = setTimeout(() => reject(new DocumentUnreadableError("timeout")), timeoutMs);
+      worker.once("message", resolve);
+      worker.once("error", (err) => reject(new DocumentUnreadableError("corrupt", err.message)));
+      worker.once("exit", (code) =>
+        reject(new DocumentUnreadableError("corrupt", `reader stopped (${code})`)),
+      );
+    });
+    if (!reply.ok) throw toUnreadable(reply);
+    return { text: reply.text, pageCount: reply.pageCount, pagesRead: reply.pagesRead };
+  } finally {
+    clearTimeout(timer);
+    await worker.terminate();
+  }
+}

@@ -1,0 +1,108 @@
+import { QueryTypes } from "sequelize";
+import type { QueueQuery } from "../../shared/credentials/schemas.ts";
+import { reviewerWarnings } from "../../shared/credentials/reviewer-checks.ts";
+import { db } from "../db/sequelize.ts";
+import { AppError } from "../http/app-error.ts";
+import { auditTrail } from "../audit/index.ts";
+import { User } from "../accounts/model.ts";
+import { Company } from "../companies/model.ts";
+import { Technician } from "../technicians/model.ts";
+import { Credential, CredentialType, Document } from "./model.ts";
+import { toCredentialDto, toCredentialDtos } from "./dto.ts";
+import { duplicateForOtherHolder } from "./upload-document.ts";
+
+export async function listOwnCredentials(user: Express.User, filter: { technicianId?: number; state?: string; holder?: "company" | "technician" }) {
+  const where: Record<string, unknown> = { companyId: user.companyId };
+  if (user.role === "technician") where.technicianId = user.technicianId ?? -1;
+  else if (filter.technicianId) where.technicianId = filter.technicianId;
+  if (filter.holder === "company") where.technicianId = null;
+  if (filter.state) where.state = filter.state;
+  const rows = await Credential.findAll({ where, order: [["submittedAt", "DESC"]], limit: 500 });
+  return toCredentialDtos(rows);
+}
+
+const FIELDS_FOR_BUYERS = new Set(["insurerName", "naic", "policyNumber", "effectiveDate", "expirationDate", "limits", "additionalInsured", "waiverOfSubrogation", "statutory", "course", "issueDate", "expiryDate", "builder", "controlFamily", "level", "trainer", "licenseNumber", "issuingAuthority", "state"]);
+
+/** One credential with its audit trail; reviewers also get the warnings computed beside the fields. */
+export async function findCredential(user: Express.User, id: number) {
+  const row = await Credential.findByPk(id);
+  if (!row) throw new AppError("not_found", "That credential was not found");
+  const dto = await toCredentialDto(row);
+  if (user.role === "buyer") {
+    return { ...dto, fields: Object.fromEntries(Object.entries(dto.fields).filter(([k]) => FIELDS_FOR_BUYERS.has(k))), returnReason: null, audit: [], warnings: [] };
+  }
+  const events = await auditTrail("credential", id);
+  const actors = await User.findAll({ where: { id: [...new Set(events.flatMap((e) => (e.actorUserId ? [e.actorUserId] : [])))] }, attributes: ["id", "name"] });
+  const actorName = new Map(actors.map((a) => [a.id, a.name]));
+  let warnings: { code: string; message: string }[] = [];
+  if (user.role === "reviewer" || user.role === "admin") {
+    const [type, company, technician, document] = await Promise.all([
+      CredentialType.findByPk(row.typeCode),
+      Company.findByPk(row.companyId),
+      row.technicianId ? Technician.findByPk(row.technicianId) : null,
+      Document.findByPk(row.documentId, { attributes: ["id", "sha256"] }),
+    ]);
+    warnings = reviewerWarnings({
+      fieldSet: type!.fieldSet,
+      fields: row.fields as never,
+      companyLegalName: company?.name ?? "",
+      technicianName: technician?.name,
+      duplicateOfOtherHolder: document ? await duplicateForOtherHolder(document.sha256, document.id, row.companyId, row.technicianId) : false,
+    });
+  }
+  return {
+    ...dto,
+    audit: events.map((e) => ({ id: e.id, action: e.action, actorName: e.actorUserId ? (actorName.get(e.actorUserId) ?? "") : "Clearbench", at: e.createdAt.toISOString(), before: e.before, after: e.after })),
+    warnings,
+  };
+}
+
+const SORT_SQL: Record<QueueQuery["sort"], string> = {
+  submittedAt: "c.submitted_at",
+  typeCode: "t.name",
+  companyName: "co.name",
+};
+
+/** The reviewers' queue: submitted credentials, filtered, sorted and paged in SQL (oldest first by default). */
+export async function findQueue(q: QueueQuery, now = new Date()) {
+  const where = ["c.state = 'submitted'"];
+  const replacements: Record<string, unknown> = { now, limit: q.pageSize, offset: (q.page - 1) * q.pageSize };
+  if (q.typeCode) {
+    where.push("c.type_code = :typeCode");
+    replacements.typeCode = q.typeCode;
+  }
+  if (q.companyId) {
+    where.push("c.company_id = :companyId");
+    replacements.companyId = q.companyId;
+  }
+  if (q.minWaitingHours !== undefined) {
+    where.push("c.submitted_at <= :cutoff");
+    replacements.cutoff = new Date(now.getTime() - q.minWaitingHours * 3_600_000);
+  }
+  const from = `FROM credentials c JOIN credential_types t ON t.code = c.type_code JOIN companies co ON co.id = c.company_id
+    LEFT JOIN technicians tech ON tech.id = c.technician_id WHERE ${where.join(" AND ")}`;
+  const order = `${SORT_SQL[q.sort]} ${q.dir === "desc" ? "DESC" : "ASC"}, c.id ASC`;
+  const [rows, totals] = await Promise.all([
+    db().query<{ id: number; type_code: string; type_name: string; company_id: number; company_name: string; holder_name: string; submitted_at: Date }>(
+      `SELECT c.id, c.type_code, t.name AS type_name, c.company_id, co.name AS company_name,
+        COALESCE(tech.name, co.name) AS holder_name, c.submitted_at ${from} ORDER BY ${order} LIMIT :limit OFFSET :offset`,
+      { replacements, type: QueryTypes.SELECT },
+    ),
+    db().query<{ total: number }>(`SELECT count(*)::int AS total ${from}`, { replacements, type: QueryTypes.SELECT }),
+  ]);
+  return {
+    rows: rows.map((r) => ({
+      id: r.id,
+      typeCode: r.type_code,
+      typeName: r.type_name,
+      companyId: r.company_id,
+      companyName: r.company_name,
+      holderName: r.holder_name,
+      submittedAt: new Date(r.submitted_at).toISOString(),
+      waitingHours: Math.max(0, Math.floor((now.getTime() - new Date(r.submitted_at).getTime()) / 3_600_000)),
+    })),
+    total: totals[0]?.total ?? 0,
+    page: q.page,
+    pageSize: q.pageSize,
+  };
+}

@@ -1,0 +1,3 @@
+export { credentialRoutes } from "./routes.ts";
+export { Credential, CredentialType, Document, initCredentialModels } from "./model.ts";
+export { loadCatalogue } from "./catalogue.ts";

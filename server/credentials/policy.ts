@@ -1,0 +1,69 @@
+import { requireOwnership, requireRole, type SignedInUser } from "../http/policy.ts";
+import { isTechnicianManagedBy } from "../technicians/policy.ts";
+import { Credential, Document } from "./model.ts";
+
+export const canReviewCredentials = requireRole("reviewer");
+export const canUploadDocuments = requireRole("provider_admin", "technician");
+export const canListOwnCredentials = requireRole("provider_admin", "technician");
+export const canEditCatalogue = requireRole("admin");
+export const canReadCatalogue = requireRole("provider_admin", "technician", "reviewer", "buyer", "admin");
+
+/** Who may see one credential: its company's admin, its technician, reviewers and admins; buyers once verified. */
+export async function canSeeCredential(user: SignedInUser, credential: Credential): Promise<boolean> {
+  switch (user.role) {
+    case "reviewer":
+    case "admin":
+      return true;
+    case "buyer":
+      return credential.state === "verified";
+    case "provider_admin":
+      return credential.companyId === user.companyId;
+    case "technician":
+      return credential.technicianId !== null && credential.technicianId === user.technicianId;
+  }
+}
+
+export const canViewCredential = requireOwnership(
+  requireRole("provider_admin", "technician", "reviewer", "buyer", "admin"),
+  "own company, own card, reviewer/admin, or a buyer once verified",
+  async (user, params) => {
+    const credential = await Credential.findByPk(Number(params.credentialId));
+    return credential ? canSeeCredential(user, credential) : false;
+  },
+);
+
+/**
+ * Files: the uploading company's admin and the technician it concerns, reviewers and admins; buyers only
+ * a certificate of insurance that has been verified.
+ */
+export async function canReadDocument(user: SignedInUser, documentId: number): Promise<boolean> {
+  const document = await Document.findByPk(documentId, { attributes: ["id", "companyId", "uploadedBy"] });
+  if (!document) return false;
+  if (user.role === "reviewer" || user.role === "admin") return true;
+  if (user.role === "provider_admin") return document.companyId === user.companyId;
+  const credentials = await Credential.findAll({ where: { documentId }, attributes: ["state", "typeCode", "technicianId", "companyId"] });
+  if (user.role === "technician") {
+    return document.uploadedBy === user.id || credentials.some((c) => c.technicianId !== null && c.technicianId === user.technicianId);
+  }
+  if (user.role === "buyer") {
+    const { CredentialType } = await import("./model.ts");
+    for (const c of credentials) {
+      if (c.state !== "verified") continue;
+      const type = await CredentialType.findByPk(c.typeCode, { attributes: ["category"] });
+      if (type?.category === "insurance") return true;
+    }
+  }
+  return false;
+}
+
+export const canDownloadDocument = requireOwnership(
+  requireRole("provider_admin", "technician", "reviewer", "buyer", "admin"),
+  "uploading company, its technician, reviewer/admin, or a buyer for a verified certificate",
+  (user, params) => canReadDocument(user, Number(params.documentId)),
+);
+
+/** A provider_admin may submit for the company or its technicians; a technician only for themself. */
+export async function canSubmitFor(user: SignedInUser, technicianId: number | undefined): Promise<boolean> {
+  if (technicianId === undefined) return user.role === "provider_admin";
+  return isTechnicianManagedBy(user, technicianId);
+}

@@ -1,0 +1,123 @@
+import { createHash } from "node:crypto";
+import { readFile, rm } from "node:fs/promises";
+import path from "node:path";
+import { fileTypeFromBuffer } from "file-type";
+import type { UploadDocument } from "../../shared/credentials/schemas.ts";
+import { reviewerWarnings } from "../../shared/credentials/reviewer-checks.ts";
+import { AppError } from "../http/app-error.ts";
+import { db } from "../db/sequelize.ts";
+import { recordAudit } from "../audit/index.ts";
+import type { FileStorage } from "../storage/index.ts";
+import { Company } from "../companies/model.ts";
+import { Technician } from "../technicians/model.ts";
+import { extractDocument, type ExtractableMime } from "./extraction/extract-document.ts";
+import { DocumentUnreadableError } from "./extraction/document-unreadable-error.ts";
+import { activeType } from "./catalogue.ts";
+import { canSubmitFor } from "./policy.ts";
+import { Credential, Document } from "./model.ts";
+
+const EXTENSIONS: Record<ExtractableMime, string[]> = {
+  "application/pdf": [".pdf"],
+  "image/png": [".png"],
+  "image/jpeg": [".jpg", ".jpeg"],
+};
+
+const UNREADABLE: Record<string, string> = {
+  empty: "The PDF has no pages or no content",
+  corrupt: "The PDF is damaged and cannot be read; export or scan it again",
+  timeout: "The PDF took too long to read; upload a simpler copy (print to PDF, or a scan)",
+  encrypted: "The PDF is password-protected; upload an unprotected copy",
+};
+
+export interface UploadedFile {
+  path: string;
+  originalname: string;
+  size: number;
+}
+
+/** Keeps a display name safe to store and to echo in a header: no folders, no control characters, bounded. */
+export function safeFileName(name: string): string {
+  const base = path.basename(name.replace(/\\/g, "/")).replace(/[\u0000-\u001f\u007f"<>|:*?]/g, "_").trim();
+  return Array.from(base || "document").slice(0, 120).join("");
+}
+
+async function sniff(bytes: Buffer, originalName: string): Promise<ExtractableMime> {
+  const detected = await fileTypeFromBuffer(bytes);
+  const mime = detected?.mime as ExtractableMime | undefined;
+  if (!mime || !(mime in EXTENSIONS)) {
+    throw new AppError("unsupported_type", "Only PDF, PNG or JPEG files are accepted (checked from the file's content)", [{ path: "file", message: "not a PDF, PNG or JPEG" }]);
+  }
+  const ext = path.extname(originalName).toLowerCase();
+  if (!EXTENSIONS[mime].includes(ext)) {
+    throw new AppError("unsupported_type", `The file's name says ${ext || "no type"} but its content is ${mime}; rename or re-export it`, [{ path: "file", message: "extension does not match content" }]);
+  }
+  return mime;
+}
+
+/**
+ * Stores an uploaded file and proposes fields read from it. The database row commits first; only then
+ * is the temporary file renamed into place, and any failure removes both, so nothing is half-saved.
+ */
+export async function uploadDocument(user: Express.User, input: UploadDocument, file: UploadedFile | undefined, storage: FileStorage) {
+  try {
+    if (!file) throw new AppError("invalid_input", "Choose a file to upload", [{ path: "file", message: "required" }]);
+    const type = await activeType(input.typeCode);
+    const technicianId = user.role === "technician" ? (input.technicianId ?? user.technicianId ?? undefined) : input.technicianId;
+    if (type.holder === "technician" && technicianId === undefined) {
+      throw new AppError("invalid_input", "Choose the technician this card belongs to", [{ path: "body.technicianId", message: "required for this type" }]);
+    }
+    if (type.holder === "company" && technicianId !== undefined) {
+      throw new AppError("invalid_input", "This type is held by the company, not a technician", [{ path: "body.technicianId", message: "must be empty for this type" }]);
+    }
+    if (!(await canSubmitFor(user, technicianId))) throw new AppError("not_found", "That technician was not found");
+    if (file.size === 0) throw new AppError("invalid_input", "The file is empty", [{ path: "file", message: "0 bytes" }]);
+
+    const bytes = await readFile(file.path);
+    const mime = await sniff(bytes, file.originalname);
+    const sha256 = createHash("sha256").update(bytes).digest("hex");
+    const extraction = await extractDocument({ bytes: new Uint8Array(bytes), mime, credentialType: { code: type.code, fieldSet: type.fieldSet } }).catch((err: unknown) => {
+      if (err instanceof DocumentUnreadableError) {
+        throw new AppError("invalid_input", UNREADABLE[err.reason] ?? "The file cannot be read", [{ path: "file", message: err.reason }]);
+      }
+      throw err;
+    });
+
+    const document = await db().transaction(async (transaction) => {
+      const row = await Document.create(
+        { companyId: user.companyId, uploadedBy: user.id, sha256, sizeBytes: file.size, mime, originalName: safeFileName(file.originalname), extractedText: extraction.text.slice(0, 100_000), extractionMethod: extraction.method },
+        { transaction },
+      );
+      await recordAudit({ actorUserId: user.id, action: "document.uploaded", subjectType: "document", subjectId: row.id, after: { sha256, mime, sizeBytes: file.size } }, transaction);
+      return row;
+    });
+    try {
+      await storage.commit(file.path, sha256);
+    } catch (err) {
+      await document.destroy();
+      throw err;
+    }
+
+    const [company, technician, otherHolder] = await Promise.all([
+      Company.findByPk(user.companyId),
+      technicianId ? Technician.findByPk(technicianId) : null,
+      duplicateForOtherHolder(sha256, document.id, user.companyId, technicianId ?? null),
+    ]);
+    const fields = extraction.proposal?.fields ?? {};
+    return {
+      document: { id: document.id, name: document.originalName, mime, sizeBytes: file.size, sha256 },
+      extraction: { method: extraction.method, ocrAvailable: extraction.ocrAvailable, fields, found: extraction.proposal?.found ?? [] },
+      warnings: reviewerWarnings({ fieldSet: type.fieldSet, fields: fields as never, companyLegalName: company?.name ?? "", technicianName: technician?.name, duplicateOfOtherHolder: otherHolder }),
+    };
+  } finally {
+    if (file) await rm(file.path, { force: true });
+  }
+}
+
+/** The same bytes already sit on a credential of a different holder (a copied card or certificate). */
+export async function duplicateForOtherHolder(sha256: string, documentId: number, companyId: number, technicianId: number | null): Promise<boolean> {
+  const others = await Document.findAll({ where: { sha256 }, attributes: ["id"] });
+  const ids = others.map((d) => d.id).filter((id) => id !== documentId);
+  if (ids.length === 0) return false;
+  const credentials = await Credential.findAll({ where: { documentId: ids }, attributes: ["companyId", "technicianId"] });
+  return credentials.some((c) => c.companyId !== companyId || c.technicianId !== technicianId);
+}

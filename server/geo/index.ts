@@ -1,0 +1,1 @@
+export { lookupPostalCode, type PostalPlace } from "./postal-codes.ts";

@@ -1,0 +1,127 @@
+import { Router, type NextFunction, type Request, type RequestHandler, type Response } from "express";
+import type { z } from "zod";
+import { AppError } from "./app-error.ts";
+import { zodToAppError } from "./error-handler.ts";
+import type { Policy, SignedInUser } from "./policy.ts";
+
+type Schemas = { params?: z.ZodType; query?: z.ZodType; body?: z.ZodType };
+type Maybe = z.ZodType | undefined;
+type Parsed<T> = T extends z.ZodType ? z.output<T> : Record<string, never>;
+export type RouteInput<P extends Maybe, Q extends Maybe, B extends Maybe> = {
+  params: Parsed<P>;
+  query: Parsed<Q>;
+  body: Parsed<B>;
+};
+
+export interface RouteOptions<P extends Maybe, Q extends Maybe, B extends Maybe> {
+  /** Who may call it: declared beside the route so a missing rule stands out. */
+  allow: Policy;
+  /** Middleware that must run before validation, e.g. the multer upload parser. */
+  before?: RequestHandler[];
+  params?: P;
+  query?: Q;
+  body?: B;
+}
+
+type Handler<P extends Maybe, Q extends Maybe, B extends Maybe> = (
+  req: Request & { user?: SignedInUser },
+  res: Response,
+  input: RouteInput<P, Q, B>,
+) => Promise<unknown> | unknown;
+
+export interface RouteEntry {
+  method: "get" | "post" | "put" | "patch" | "delete";
+  path: string;
+  policy: Policy;
+  schemas: Schemas;
+  upload: boolean;
+}
+
+/** Every route of the API, so tests can walk it and check each against its policy. */
+export const routeTable: RouteEntry[] = [];
+
+function authorize(policy: Policy, req: Request): SignedInUser | undefined {
+  if (policy.roles === "anyone") return req.user;
+  if (!req.user) throw new AppError("unauthenticated", "Sign in first");
+  if (policy.roles !== "signed_in" && !policy.roles.includes(req.user.role)) {
+    throw new AppError("forbidden", "Your role may not do this");
+  }
+  return req.user;
+}
+
+function parsePart(schema: z.ZodType | undefined, value: unknown, where: string): unknown {
+  if (!schema) return {};
+  const result = schema.safeParse(value ?? {});
+  if (!result.success) throw zodToAppError(result.error, where);
+  return result.data;
+}
+
+export function createRoutes(prefix: string) {
+  const router = Router();
+
+  function add<P extends Maybe, Q extends Maybe, B extends Maybe>(
+    method: RouteEntry["method"],
+    path: string,
+    options: RouteOptions<P, Q, B>,
+    handler: Handler<P, Q, B>,
+  ) {
+    routeTable.push({
+      method,
+      path: prefix + path,
+      policy: options.allow,
+      schemas: { params: options.params, query: options.query, body: options.body },
+      upload: Boolean(options.before?.length),
+    });
+    const guard: RequestHandler = (req, _res, next) => {
+      authorize(options.allow, req);
+      next();
+    };
+    const run = async (req: Request, res: Response, next: NextFunction) => {
+      const user = authorize(options.allow, req);
+      const input = {
+        params: parsePart(options.params, req.params, "params"),
+        query: parsePart(options.query, req.query, "query"),
+        body: parsePart(options.body, req.body, "body"),
+      } as RouteInput<P, Q, B>;
+      if (options.allow.owns && user && !(await options.allow.owns(user, input.params as Record<string, unknown>))) {
+        throw new AppError("not_found", "That record was not found");
+      }
+      const result = await handler(req, res, input);
+      if (!res.headersSent) {
+        if (result === undefined) res.status(204).end();
+        else res.json(result);
+      }
+      void next;
+    };
+    router[method](prefix + path, guard, ...(options.before ?? []), run);
+  }
+
+  return {
+    router,
+    get: <P extends Maybe = undefined, Q extends Maybe = undefined, B extends Maybe = undefined>(
+      path: string,
+      o: RouteOptions<P, Q, B>,
+      h: Handler<P, Q, B>,
+    ) => add("get", path, o, h),
+    post: <P extends Maybe = undefined, Q extends Maybe = undefined, B extends Maybe = undefined>(
+      path: string,
+      o: RouteOptions<P, Q, B>,
+      h: Handler<P, Q, B>,
+    ) => add("post", path, o, h),
+    put: <P extends Maybe = undefined, Q extends Maybe = undefined, B extends Maybe = undefined>(
+      path: string,
+      o: RouteOptions<P, Q, B>,
+      h: Handler<P, Q, B>,
+    ) => add("put", path, o, h),
+    patch: <P extends Maybe = undefined, Q extends Maybe = undefined, B extends Maybe = undefined>(
+      path: string,
+      o: RouteOptions<P, Q, B>,
+      h: Handler<P, Q, B>,
+    ) => add("patch", path, o, h),
+    delete: <P extends Maybe = undefined, Q extends Maybe = undefined, B extends Maybe = undefined>(
+      path: string,
+      o: RouteOptions<P, Q, B>,
+      h: Handler<P, Q, B>,
+    ) => add("delete", path, o, h),
+  };
+}

@@ -1,0 +1,36 @@
+import nodemailer, { type Transporter } from "nodemailer";
+
+export interface MailToSend {
+  from: string;
+  to: string;
+  subject: string;
+  text: string;
+  html?: string | null;
+}
+
+export interface Mailer {
+  send(mail: MailToSend): Promise<void>;
+  close(): void;
+}
+
+/** SMTP through nodemailer; `smtp://host:port` without TLS is what the local catcher speaks. */
+export function createSmtpMailer(smtpUrl: string): Mailer {
+  const url = new URL(smtpUrl);
+  const secure = url.protocol === "smtps:";
+  const transporter: Transporter = nodemailer.createTransport({
+    host: url.hostname,
+    port: Number(url.port || (secure ? 465 : 587)),
+    secure,
+    ignoreTLS: !secure && (url.hostname === "127.0.0.1" || url.hostname === "localhost"),
+    auth: url.username ? { user: decodeURIComponent(url.username), pass: decodeURIComponent(url.password) } : undefined,
+    connectionTimeout: 5_000,
+    greetingTimeout: 5_000,
+    socketTimeout: 10_000,
+  });
+  return {
+    async send(mail) {
+      await transporter.sendMail({ ...mail, html: mail.html ?? undefined });
+    },
+    close: () => transporter.close(),
+  };
+}

@@ -1,0 +1,12 @@
+import { createRoutes } from "../http/route.ts";
+import { requireRole } from "../http/policy.ts";
+import { CaughtMail } from "./model.ts";
+
+export const outboxRoutes = createRoutes("/api/admin");
+
+const canReadOutbox = requireRole("admin");
+
+outboxRoutes.get("/outbox", { allow: canReadOutbox }, async () => {
+  const mails = await CaughtMail.findAll({ order: [["id", "DESC"]], limit: 200 });
+  return mails.map((m) => ({ id: m.id, from: m.fromAddress, to: m.toAddress, subject: m.subject, text: m.textBody, receivedAt: m.receivedAt.toISOString() }));
+});

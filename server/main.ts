@@ -1,0 +1,63 @@
+import type { Server } from "node:http";
+import pg from "pg";
+import type { Config } from "./config.ts";
+import { configureLog, log } from "./log.ts";
+import { connectDatabase } from "./db/sequelize.ts";
+import { initModels } from "./db/associations.ts";
+import { migrate } from "./db/migrate.ts";
+import { createApp } from "./app.ts";
+import { setPasswordCost } from "./accounts/index.ts";
+import { createSmtpMailer, deliverDueMail } from "./mail/index.ts";
+
+export interface RunningServer {
+  server: Server;
+  port: number;
+  close(): Promise<void>;
+}
+
+const OUTBOX_INTERVAL_MS = 15_000;
+
+/** Connects, migrates, listens and starts the background senders; resolves once the port is open. */
+export async function startServer(config: Config): Promise<RunningServer> {
+  if (!config.DATABASE_URL) throw new Error("DATABASE_URL is required to start the server");
+  configureLog(config.LOG_LEVEL);
+  setPasswordCost(config.BCRYPT_COST);
+  const sequelize = connectDatabase(config.DATABASE_URL);
+  initModels(sequelize);
+  await migrate(sequelize);
+  const sessionPool = new pg.Pool({ connectionString: config.DATABASE_URL, max: 5, connectionTimeoutMillis: 3_000 });
+  sessionPool.on("error", (err) => log.warn({ err }, "session pool error"));
+  const app = createApp({ config, sessionPool });
+
+  const mailer = config.SMTP_URL ? createSmtpMailer(config.SMTP_URL) : undefined;
+  const sendMail = async () => {
+    if (!mailer) return;
+    try {
+      await deliverDueMail(mailer, config.MAIL_FROM);
+    } catch (err) {
+      log.warn({ err }, "outbox delivery round failed");
+    }
+  };
+  const outboxTimer = setInterval(sendMail, OUTBOX_INTERVAL_MS);
+  app.locals.kickOutbox = () => void sendMail();
+
+  const server = await new Promise<Server>((resolve, reject) => {
+    const s = app.listen(config.PORT, config.HOST, () => resolve(s));
+    s.once("error", reject);
+  });
+  const address = server.address();
+  const port = typeof address === "object" && address ? address.port : config.PORT;
+  log.info({ port }, "server listening");
+
+  return {
+    server,
+    port,
+    async close() {
+      clearInterval(outboxTimer);
+      await new Promise<void>((resolve) => server.close(() => resolve()));
+      mailer?.close();
+      await sessionPool.end();
+      await sequelize.close();
+    },
+  };
+}

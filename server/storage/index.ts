@@ -1,0 +1,16 @@
+import { mkdirSync } from "node:fs";
+import type { Request } from "express";
+import type { FileStorage } from "./file-storage.ts";
+import { createLocalFolderStorage } from "./local-folder-storage.ts";
+
+export type { FileStorage } from "./file-storage.ts";
+
+export function createStorage(uploadsDir: string): FileStorage {
+  const storage = createLocalFolderStorage(uploadsDir);
+  mkdirSync(storage.incomingDir, { recursive: true });
+  return storage;
+}
+
+export function appStorage(req: Request): FileStorage {
+  return req.app.locals.storage as FileStorage;
+}

@@ -1,0 +1,3 @@
+export { technicianRoutes } from "./routes.ts";
+export { Technician, initTechnicianModel } from "./model.ts";
+export { isTechnicianManagedBy } from "./policy.ts";

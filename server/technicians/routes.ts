@@ -1,0 +1,55 @@
+import { z } from "zod";
+import { technicianInputSchema, technicianParamsSchema } from "../../shared/technicians/schemas.ts";
+import { emailSchema } from "../../shared/accounts/schemas.ts";
+import { createRoutes } from "../http/route.ts";
+import { linkBase } from "../http/app-locals.ts";
+import { AppError } from "../http/app-error.ts";
+import { kickOutbox } from "../mail/outbox.ts";
+import { createInvitedUser } from "../accounts/index.ts";
+import { Company } from "../companies/model.ts";
+import { canEditTechnician, canListOwnTechnicians, canManageTechnicians, canViewTechnician } from "./policy.ts";
+import { addTechnician, editTechnician, findTechnician, listCompanyTechnicians, setTechnicianActive } from "./service.ts";
+
+export const technicianRoutes = createRoutes("/api/technicians");
+
+technicianRoutes.get("", { allow: canListOwnTechnicians }, (req) => listCompanyTechnicians(req.user!.companyId));
+
+technicianRoutes.post("", { allow: canManageTechnicians, body: technicianInputSchema }, async (req, res, { body }) => {
+  res.status(201).json(await addTechnician(req.user!, body));
+});
+
+technicianRoutes.get("/:technicianId", { allow: canViewTechnician, params: technicianParamsSchema }, (_req, _res, { params }) =>
+  findTechnician(params.technicianId),
+);
+
+technicianRoutes.put(
+  "/:technicianId",
+  { allow: canEditTechnician, params: technicianParamsSchema, body: technicianInputSchema },
+  (req, _res, { params, body }) => editTechnician(req.user!, params.technicianId, body),
+);
+
+technicianRoutes.post(
+  "/:technicianId/deactivate",
+  { allow: canEditTechnician, params: technicianParamsSchema },
+  (req, _res, { params }) => setTechnicianActive(req.user!, params.technicianId, false),
+);
+
+technicianRoutes.post(
+  "/:technicianId/reactivate",
+  { allow: canEditTechnician, params: technicianParamsSchema },
+  (req, _res, { params }) => setTechnicianActive(req.user!, params.technicianId, true),
+);
+
+// Gives the technician a sign-in of their own, linked to this record, by an e-mailed one-time link.
+technicianRoutes.post(
+  "/:technicianId/account",
+  { allow: canEditTechnician, params: technicianParamsSchema, body: z.object({ email: emailSchema }) },
+  async (req, res, { params, body }) => {
+    const technician = await findTechnician(params.technicianId);
+    if (technician.hasAccount) throw new AppError("conflict", "This technician already has a sign-in");
+    const company = await Company.findByPk(req.user!.companyId);
+    const user = await createInvitedUser(req.user!, company!, { email: body.email, name: technician.name, role: "technician", technicianId: technician.id }, linkBase(req));
+    kickOutbox(req.app.locals);
+    res.status(201).json(user);
+  },
+);

@@ -1,0 +1,89 @@
+import { z } from "zod";
+
+export const roles = ["provider_admin", "technician", "reviewer", "buyer", "admin"] as const;
+export type Role = (typeof roles)[number];
+export const roleSchema = z.enum(roles);
+
+export const companyKinds = ["service", "shop", "platform"] as const;
+export type CompanyKind = (typeof companyKinds)[number];
+
+// bcrypt reads only the first 72 bytes, so longer passwords are refused rather than silently cut.
+export const passwordSchema = z
+  .string()
+  .min(10, "Use at least 10 characters")
+  .max(72, "Use at most 72 characters")
+  .refine((p) => new TextEncoder().encode(p).length <= 72, "Use at most 72 bytes");
+
+export const emailSchema = z.email("Enter a valid e-mail address").max(254).transform((e) => e.toLowerCase());
+
+export const signInSchema = z.object({
+  email: emailSchema,
+  password: z.string().min(1, "Enter your password").max(200),
+});
+export type SignIn = z.infer<typeof signInSchema>;
+
+export const timeZoneSchema = z
+  .string()
+  .min(1)
+  .max(64)
+  .refine((tz) => {
+    try {
+      new Intl.DateTimeFormat("en-US", { timeZone: tz });
+      return true;
+    } catch {
+      return false;
+    }
+  }, "Unknown IANA time zone");
+
+export const postalCodeSchema = z.string().regex(/^\d{5}$/, "Enter a 5-digit ZIP code");
+
+export const signUpSchema = z.object({
+  kind: z.enum(["service", "shop"]),
+  companyName: z.string().trim().min(2, "Enter the company's legal name").max(160),
+  addressLine: z.string().trim().min(3, "Enter the mailing address").max(200),
+  postalCode: postalCodeSchema,
+  timeZone: timeZoneSchema,
+  name: z.string().trim().min(2, "Enter your name").max(120),
+  email: emailSchema,
+  password: passwordSchema,
+});
+export type SignUp = z.infer<typeof signUpSchema>;
+
+export const requestPasswordResetSchema = z.object({ email: emailSchema });
+export type RequestPasswordReset = z.infer<typeof requestPasswordResetSchema>;
+
+export const setPasswordSchema = z.object({
+  token: z.string().min(20).max(200),
+  password: passwordSchema,
+});
+export type SetPassword = z.infer<typeof setPasswordSchema>;
+
+export const inviteUserSchema = z.object({
+  email: emailSchema,
+  name: z.string().trim().min(2).max(120),
+  role: roleSchema,
+  companyId: z.coerce.number().int().positive(),
+});
+export type InviteUser = z.infer<typeof inviteUserSchema>;
+
+export const currentUserSchema = z.object({
+  id: z.number(),
+  email: z.string(),
+  name: z.string(),
+  role: roleSchema,
+  companyId: z.number(),
+  companyName: z.string(),
+  companyKind: z.enum(companyKinds),
+  technicianId: z.number().nullable(),
+});
+export type CurrentUser = z.infer<typeof currentUserSchema>;
+
+export const caughtMailSchema = z.object({
+  id: z.number(),
+  from: z.string(),
+  to: z.string(),
+  subject: z.string(),
+  text: z.string(),
+  receivedAt: z.string(),
+});
+export type CaughtMail = z.infer<typeof caughtMailSchema>;

@@ -1,0 +1,186 @@
+import type { FieldSet } from "./credential-fields.ts";
+
+export const credentialCategories = ["insurance", "safety", "oem", "license"] as const;
+export type CredentialCategory = (typeof credentialCategories)[number];
+
+export const credentialHolders = ["company", "technician"] as const;
+export type CredentialHolder = (typeof credentialHolders)[number];
+
+/**
+ * How long a credential counts:
+ * - `document_dates`: the dates printed on the document (policy period, or the card's expiry; no expiry printed = never lapses);
+ * - `months_from_issue`: N calendar months from the issue date, unless the card prints an earlier or later expiry;
+ * - `no_expiry`: never lapses by the calendar (a printed expiry still wins, see training-validity.ts).
+ */
+export type CredentialValidity =
+  { kind: "document_dates" } | { kind: "months_from_issue"; months: number } | { kind: "no_expiry" };
+
+export interface CredentialTypeDefinition {
+  code: string;
+  name: string;
+  category: CredentialCategory;
+  holder: CredentialHolder;
+  fieldSet: FieldSet;
+  validity: CredentialValidity;
+  description: string;
+}
+
+// NFPA 70E (2024) 110.6(A)(3): retraining at intervals not to exceed 3 years (TRADE-FACTS 4).
+export const ARC_FLASH_RETRAINING_MONTHS = 36;
+// 29 CFR 1910.178(l)(4)(iii): operator performance evaluated at least once every 3 years (OSHA letter 2005-08-01).
+export const POWERED_TRUCK_EVALUATION_MONTHS = 36;
+// Common practice: 29 CFR 1910.147 sets no calendar interval for retraining ((c)(7)(iii) retrains on changes or deviations);
+// employers align a yearly refresher with the at-least-annual periodic inspection of (c)(6).
+export const LOCKOUT_REFRESHER_MONTHS = 12;
+// Common practice: first aid / CPR / AED cards are usually valid 2 years (AHA course cards; TRADE-FACTS 4).
+export const FIRST_AID_CPR_MONTHS = 24;
+
+const documentDates = { kind: "document_dates" } as const;
+const noExpiry = { kind: "no_expiry" } as const;
+const monthsFromIssue = (months: number) => ({ kind: "months_from_issue", months }) as const;
+
+export const credentialTypes: readonly CredentialTypeDefinition[] = [
+  {
+    code: "general_liability",
+    name: "Commercial general liability",
+    category: "insurance",
+    holder: "company",
+    fieldSet: "insurance",
+    // Standard policy wording: 12:01 a.m. standard time on the effective date to 12:01 a.m. on the expiration date (TRADE-FACTS 1.1).
+    validity: documentDates,
+    description:
+      "Liability for bodily injury and property damage arising from the company's operations and completed work.",
+  },
+  {
+    code: "auto_liability",
+    name: "Automobile liability",
+    category: "insurance",
+    holder: "company",
+    fieldSet: "insurance",
+    validity: documentDates, // policy period as printed (TRADE-FACTS 1.1)
+    description:
+      "Liability for vehicles used to reach the customer's site, usually one combined single limit.",
+  },
+  {
+    code: "workers_comp",
+    name: "Workers' compensation and employer's liability",
+    category: "insurance",
+    holder: "company",
+    fieldSet: "insurance",
+    validity: documentDates, // policy period as printed (TRADE-FACTS 1.1)
+    description:
+      "Statutory benefits for injured employees (Part One) and employer's liability limits (Part Two).",
+  },
+  {
+    code: "umbrella_liability",
+    name: "Umbrella / excess liability",
+    category: "insurance",
+    holder: "company",
+    fieldSet: "insurance",
+    validity: documentDates, // policy period as printed (TRADE-FACTS 1.1)
+    description: "Limits above the general, auto and employer's liability policies.",
+  },
+  {
+    code: "workers_comp_exemption",
+    name: "Workers' compensation exemption",
+    category: "insurance",
+    holder: "company",
+    fieldSet: "exemption",
+    // Common practice: each state sets its own exemption term (e.g. Florida construction elections run 2 years), so the
+    // expiry printed on the state's document governs (TRADE-FACTS 3).
+    validity: documentDates,
+    description: "A state-issued exemption from carrying workers' compensation, where the state allows one.",
+  },
+  {
+    code: "osha_10",
+    name: "OSHA 10-hour outreach card",
+    category: "safety",
+    holder: "technician",
+    fieldSet: "training",
+    // Federal outreach cards carry no expiry (osha.gov Outreach FAQ); sites wanting a recent card set a maximum age.
+    validity: noExpiry,
+    description: "Ten-hour awareness course in workplace safety and health.",
+  },
+  {
+    code: "osha_30",
+    name: "OSHA 30-hour outreach card",
+    category: "safety",
+    holder: "technician",
+    fieldSet: "training",
+    validity: noExpiry, // no federal expiry (osha.gov Outreach FAQ)
+    description: "Thirty-hour course in workplace safety and health, for supervisors and lead technicians.",
+  },
+  {
+    code: "arc_flash",
+    name: "Electrical safety (arc flash) training",
+    category: "safety",
+    holder: "technician",
+    fieldSet: "training",
+    validity: monthsFromIssue(ARC_FLASH_RETRAINING_MONTHS), // NFPA 70E (2024) 110.6(A)(3)
+    description:
+      "Safety-related electrical work practices for qualified persons working near energised parts.",
+  },
+  {
+    code: "lockout_tagout",
+    name: "Lockout/tagout (hazardous energy control) training",
+    category: "safety",
+    holder: "technician",
+    fieldSet: "training",
+    validity: monthsFromIssue(LOCKOUT_REFRESHER_MONTHS), // common practice, see LOCKOUT_REFRESHER_MONTHS
+    description: "Control of hazardous energy while servicing machines (authorized employee).",
+  },
+  {
+    code: "powered_truck",
+    name: "Powered industrial truck operator",
+    category: "safety",
+    holder: "technician",
+    fieldSet: "training",
+    validity: monthsFromIssue(POWERED_TRUCK_EVALUATION_MONTHS), // 29 CFR 1910.178(l)(4)(iii)
+    description:
+      "Forklift operator training and performance evaluation, needed to move machines and parts on site.",
+  },
+  {
+    code: "first_aid_cpr",
+    name: "First aid / CPR / AED",
+    category: "safety",
+    holder: "technician",
+    fieldSet: "training",
+    validity: monthsFromIssue(FIRST_AID_CPR_MONTHS), // common practice, see FIRST_AID_CPR_MONTHS
+    description: "First aid, cardiopulmonary resuscitation and defibrillator use.",
+  },
+  {
+    code: "confined_space",
+    name: "Permit-required confined space entry",
+    category: "safety",
+    holder: "technician",
+    fieldSet: "training",
+    // 29 CFR 1910.146(g)(2) retrains on changes and deviations, with no calendar interval; a site wanting a yearly
+    // refresher sets a maximum age in its requirement set.
+    validity: noExpiry,
+    description:
+      "Entry into permit-required confined spaces such as coolant pits and chip conveyor trenches.",
+  },
+  {
+    code: "oem_training",
+    name: "Machine builder (OEM) training",
+    category: "oem",
+    holder: "technician",
+    fieldSet: "oem",
+    // Common practice: no regulatory expiry; the builder's printed expiry governs when there is one (TRADE-FACTS 4).
+    validity: documentDates,
+    description: "A machine builder's service training on a control family, at a stated level.",
+  },
+  {
+    code: "trade_license",
+    name: "Trade license",
+    category: "license",
+    holder: "technician",
+    fieldSet: "license",
+    validity: documentDates, // the issuing authority's printed expiry
+    description: "A state or local license, e.g. for electrical work on machine supply circuits.",
+  },
+];
+
+export const credentialTypeByCode: ReadonlyMap<string, CredentialTypeDefinition> = new Map(
+  credentialTypes.map((type) => [type.code, type]),
+);

@@ -1,0 +1,101 @@
+import { z } from "zod";
+
+/** Calendar date as printed on a document, kept as ISO text so no time zone can shift it. */
+export const isoDateSchema = z
+  .string()
+  .regex(/^\d{4}-\d{2}-\d{2}$/, "Use YYYY-MM-DD")
+  .refine((d) => !Number.isNaN(Date.parse(`${d}T00:00:00Z`)) && new Date(`${d}T00:00:00Z`).toISOString().startsWith(d), "Not a real date");
+
+/** Whole US dollars; limits on a certificate are printed without cents. */
+export const dollarsSchema = z.number().int().min(0).max(1_000_000_000);
+
+// NAIC company code: five digits (TRADE-FACTS 2.4, NAIC company code).
+export const naicSchema = z.string().regex(/^\d{5}$/, "NAIC company code has five digits");
+
+export const limitNames = [
+  "eachOccurrence",
+  "generalAggregate",
+  "productsCompletedOpsAggregate",
+  "personalAdvertisingInjury",
+  "damageToRentedPremises",
+  "medicalExpense",
+  "combinedSingleLimit",
+  "employersLiabilityEachAccident",
+  "employersLiabilityDiseaseEachEmployee",
+  "employersLiabilityDiseasePolicyLimit",
+  "umbrellaEachOccurrence",
+  "umbrellaAggregate",
+] as const;
+export type LimitName = (typeof limitNames)[number];
+
+export const limitsSchema = z.partialRecord(z.enum(limitNames), dollarsSchema);
+export type Limits = z.infer<typeof limitsSchema>;
+
+/** One coverage line of a certificate of insurance. */
+export const insuranceFieldsSchema = z.object({
+  insurerName: z.string().trim().min(1, "Enter the insurer").max(200),
+  // Stored as text; a wrong length is a reviewer warning, not a refusal (the certificate may be wrong).
+  naic: z.string().trim().max(9).optional(),
+  policyNumber: z.string().trim().min(1, "Enter the policy number").max(60),
+  namedInsured: z.string().trim().max(200).optional(),
+  certificateHolder: z.string().trim().max(300).optional(),
+  effectiveDate: isoDateSchema,
+  expirationDate: isoDateSchema,
+  limits: limitsSchema.default({}),
+  additionalInsured: z.boolean().default(false),
+  waiverOfSubrogation: z.boolean().default(false),
+  // Workers' compensation Part One pays statutory benefits, with no dollar limit.
+  statutory: z.boolean().optional(),
+});
+export type InsuranceFields = z.infer<typeof insuranceFieldsSchema>;
+
+/** A safety-training wallet card or certificate. */
+export const trainingFieldsSchema = z.object({
+  holderName: z.string().trim().min(1, "Enter the name on the card").max(160),
+  course: z.string().trim().max(200).optional(),
+  issueDate: isoDateSchema,
+  expiryDate: isoDateSchema.optional(),
+  cardNumber: z.string().trim().max(60).optional(),
+  trainer: z.string().trim().max(160).optional(),
+});
+export type TrainingFields = z.infer<typeof trainingFieldsSchema>;
+
+/** Machine-builder training on a control family, at a level (1 operator, 2 maintenance, 3 advanced service). */
+export const oemFieldsSchema = trainingFieldsSchema.extend({
+  builder: z.string().trim().min(1).max(120),
+  controlFamily: z.string().trim().min(1).max(120),
+  level: z.number().int().min(1).max(3),
+});
+export type OemFields = z.infer<typeof oemFieldsSchema>;
+
+export const licenseFieldsSchema = z.object({
+  holderName: z.string().trim().min(1).max(160),
+  licenseNumber: z.string().trim().min(1).max(60),
+  issuingAuthority: z.string().trim().min(1).max(160),
+  issueDate: isoDateSchema,
+  expiryDate: isoDateSchema.optional(),
+});
+export type LicenseFields = z.infer<typeof licenseFieldsSchema>;
+
+/** A state-issued exemption from carrying workers' compensation (sole proprietors, where the state allows it). */
+export const exemptionFieldsSchema = z.object({
+  holderName: z.string().trim().min(1).max(160),
+  state: z.string().regex(/^[A-Z]{2}$/, "Two-letter state code"),
+  certificateNumber: z.string().trim().min(1).max(60),
+  issueDate: isoDateSchema,
+  expiryDate: isoDateSchema.optional(),
+});
+export type ExemptionFields = z.infer<typeof exemptionFieldsSchema>;
+
+export const fieldSets = ["insurance", "training", "oem", "license", "exemption"] as const;
+export type FieldSet = (typeof fieldSets)[number];
+
+export const fieldSetSchemas = {
+  insurance: insuranceFieldsSchema,
+  training: trainingFieldsSchema,
+  oem: oemFieldsSchema,
+  license: licenseFieldsSchema,
+  exemption: exemptionFieldsSchema,
+} as const satisfies Record<FieldSet, z.ZodType>;
+
+export type CredentialFields = InsuranceFields | TrainingFields | OemFields | LicenseFields | ExemptionFields;

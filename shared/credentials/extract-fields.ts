@@ -1,0 +1,384 @@
+import type {
+  ExemptionFields,
+  FieldSet,
+  InsuranceFields,
+  LicenseFields,
+  LimitName,
+  Limits,
+  OemFields,
+  TrainingFields,
+} from "./credential-fields.ts";
+import { DATE_IN_TEXT, parseDocumentDate } from "./date-formats.ts";
+
+/**
+ * Reads proposed fields out of a document's text (a PDF text layer or OCR output). Everything here is a
+ * proposal the uploader corrects and a reviewer verifies, so a field we are unsure of is left out rather than guessed.
+ */
+
+export const insuranceCoverageCodes = [
+  "general_liability",
+  "auto_liability",
+  "umbrella_liability",
+  "workers_comp",
+] as const;
+export type InsuranceCoverageCode = (typeof insuranceCoverageCodes)[number];
+
+interface FieldsBySet {
+  insurance: InsuranceFields;
+  training: TrainingFields;
+  oem: OemFields;
+  license: LicenseFields;
+  exemption: ExemptionFields;
+}
+export interface FieldProposal<S extends FieldSet = FieldSet> {
+  fields: Partial<FieldsBySet[S]>;
+  /** Paths of the fields read from the document, e.g. "policyNumber", "limits.eachOccurrence". */
+  found: string[];
+}
+
+export interface CoverageReading {
+  insurerLetter?: string;
+  policyNumber?: string;
+  effectiveDate?: string;
+  expirationDate?: string;
+  limits: Limits;
+  additionalInsured?: boolean;
+  waiverOfSubrogation?: boolean;
+  statutory?: boolean;
+}
+export interface CertificateReading {
+  producer?: string;
+  namedInsured?: string;
+  certificateHolder?: string;
+  insurers: { letter: string; name: string; naic?: string }[];
+  coverages: Partial<Record<InsuranceCoverageCode, CoverageReading>>;
+}
+
+const COVERAGE_MARKERS: Record<InsuranceCoverageCode, RegExp> = {
+  general_liability: /(?:COMMERCIAL\s+)?GENERAL\s+LIAB|\bCGL\b/i,
+  auto_liability: /AUTO(?:MOBILE)?\s+LIAB/i,
+  umbrella_liability: /UMBRELLA\s+LIAB|EXCESS\s+LIAB/i,
+  workers_comp: /WORKERS\s*'?\s*COMP/i,
+};
+
+// "(each occ.)" after rented premises is part of another label, hence the look-behind.
+const EACH_OCCURRENCE = /(?<!\(\s*)\bEACH\s*OCC(?:URRENCE|\.)?/i;
+const LIMIT_LABELS: Record<InsuranceCoverageCode, [LimitName, RegExp][]> = {
+  general_liability: [
+    ["eachOccurrence", EACH_OCCURRENCE],
+    ["damageToRentedPremises", /(?:DAMAGE\s+TO\s+)?RENTED\s+PREMISES/i],
+    ["medicalExpense", /MED(?:ICAL)?\.?\s*EXP(?:ENSE)?/i],
+    ["personalAdvertisingInjury", /PERSONAL\s*(?:&|AND)?\s*ADV(?:ERTISING)?\.?\s*INJ(?:URY)?/i],
+    ["generalAggregate", /GEN(?:ERAL|'L)?\.?\s*AGG(?:REGATE)?(?!\s*LIMIT\s+APPLIES)/i],
+    [
+      "productsCompletedOpsAggregate",
+      /PRODUCTS?\s*[-–—]?\s*COMP(?:LETED)?\s*[/I|l1]?\s*OP(?:ERATION)?S?\.?\s*AGG(?:REGATE)?/i,
+    ],
+  ],
+  auto_liability: [["combinedSingleLimit", /COMBINED\s*SINGLE\s*LIMIT/i]],
+  umbrella_liability: [
+    ["umbrellaEachOccurrence", EACH_OCCURRENCE],
+    ["umbrellaAggregate", /(?<!GEN\S*\s*)\bAGG(?:REGATE)?\b/i],
+  ],
+  workers_comp: [
+    ["employersLiabilityEachAccident", /E\.?\s*L\.?\s*EACH\s*ACCIDENT/i],
+    ["employersLiabilityDiseaseEachEmployee", /DISEASE\s*[-–—]?\s*EA(?:CH)?\.?\s*EMPLOYEE/i],
+    ["employersLiabilityDiseasePolicyLimit", /DISEASE\s*[-–—]?\s*POLICY\s*LIMIT/i],
+  ],
+};
+
+// An amount may sit a little after its label ("$", dots, OCR debris), never further than this.
+const AMOUNT_SEARCH_CHARS = 40;
+
+function toLines(text: string): string[] {
+  return text
+    .replace(/\r\n?/g, "\n")
+    .split("\n")
+    .map((line) => line.replace(/\t/g, "   ").replace(/[’‘`]/g, "'").trimEnd())
+    .filter((line) => line.trim() !== "");
+}
+
+/** Reads "$ 1,000,000", "1.000.000", "1, 000,0O0" as whole dollars. */
+export function parseAmount(fragment: string): number | undefined {
+  const match = /\d[\dOo]{0,2}(?:[,.]?\s?[\dOo]{3})*/.exec(fragment.slice(0, AMOUNT_SEARCH_CHARS));
+  if (!match) return undefined;
+  const digits = match[0].replace(/[Oo]/g, "0").replace(/\D/g, "");
+  return digits === "" ? undefined : Number(digits);
+}
+
+/** The part of a line before the next wide gap or right-hand box, for a left-hand box's value. */
+function leftCell(line: string): string {
+  const cut =
+    line.split(
+      /\s{3,}|\b(?:INSURERS?\s+[A-F]\b|INSURERS\b|CONTACT\b|PHONE\b|E-?MAIL\b|FAX\b|NAIC\b|CANCELLATION\b)/i,
+    )[0] ?? "";
+  return cut.replace(/^[\s:|_-]+|[\s:|_-]+$/g, "").replace(/\s+/g, " ");
+}
+
+function valueUnderLabel(lines: string[], label: RegExp): string | undefined {
+  const index = lines.findIndex((line) => label.test(line));
+  if (index < 0) return undefined;
+  const sameLine = leftCell((lines[index] ?? "").replace(label, ""));
+  if (sameLine.length > 1) return sameLine;
+  const next = lines[index + 1];
+  const value = next === undefined ? "" : leftCell(next);
+  return value.length > 1 ? value : undefined;
+}
+
+function readInsurers(lines: string[]): CertificateReading["insurers"] {
+  const insurers: CertificateReading["insurers"] = [];
+  for (const line of lines) {
+    const match = /\bINSURER\s+([A-F])\s*[:;.,]?\s+(\S.*)$/i.exec(line);
+    if (!match || insurers.some((insurer) => insurer.letter === match[1]?.toUpperCase())) continue;
+    const rest = (match[2] ?? "").trim();
+    const naicMatch = /\s([\dOo]{4,6})$/.exec(rest);
+    const name = (naicMatch ? rest.slice(0, naicMatch.index) : rest).replace(/\s+/g, " ").trim();
+    if (name === "") continue;
+    const naic = naicMatch?.[1]?.replace(/[Oo]/g, "0");
+    insurers.push({ letter: (match[1] ?? "").toUpperCase(), name, ...(naic ? { naic } : {}) });
+  }
+  return insurers;
+}
+
+function coverageSections(lines: string[]): Partial<Record<InsuranceCoverageCode, string[]>> {
+  const start = Math.max(
+    0,
+    lines.findIndex((line) => /TYPE\s+OF\s+INSURANCE|\bCOVERAGES\b/i.test(line)),
+  );
+  const endIndex = lines.findIndex((line, i) => i > start && /DESCRIPTION\s+OF\s+OPERATIONS/i.test(line));
+  const table = lines.slice(start, endIndex < 0 ? lines.length : endIndex);
+  const starts: { code: InsuranceCoverageCode; at: number }[] = [];
+  table.forEach((line, at) => {
+    for (const code of insuranceCoverageCodes) {
+      if (COVERAGE_MARKERS[code].test(line) && !starts.some((s) => s.code === code))
+        starts.push({ code, at });
+    }
+  });
+  starts.sort((a, b) => a.at - b.at);
+  const sections: Partial<Record<InsuranceCoverageCode, string[]>> = {};
+  starts.forEach((section, i) => {
+    sections[section.code] = table.slice(section.at, starts[i + 1]?.at ?? table.length);
+  });
+  return sections;
+}
+
+function readLimits(code: InsuranceCoverageCode, section: string[]): Limits {
+  const limits: Limits = {};
+  for (const line of section) {
+    const hits = LIMIT_LABELS[code]
+      .map(([name, label]) => ({ name, match: label.exec(line) }))
+      .filter((hit): hit is { name: LimitName; match: RegExpExecArray } => hit.match !== null)
+      .sort((a, b) => a.match.index - b.match.index);
+    hits.forEach((hit, i) => {
+      const from = hit.match.index + hit.match[0].length;
+      const amount = parseAmount(line.slice(from, hits[i + 1]?.match.index ?? line.length));
+      if (amount !== undefined && limits[hit.name] === undefined) limits[hit.name] = amount;
+    });
+  }
+  return limits;
+}
+
+const isDateToken = (token: string): boolean => parseDocumentDate(token) !== null;
+const isJunkToken = (token: string): boolean => !/[A-Za-z0-9]/.test(token);
+const flagOf = (token: string): string | undefined => {
+  const letters = token.replace(/[^A-Za-z]/g, "").toUpperCase();
+  return /^(?:Y|N|X|XX)$/.test(letters) && token.length <= 3 ? letters.slice(0, 1) : undefined;
+};
+const looksLikePolicyNumber = (token: string): boolean =>
+  /\d/.test(token) && /^[A-Z0-9][A-Z0-9\-/.]{3,}$/i.test(token);
+
+function readRow(section: string[], code: InsuranceCoverageCode): CoverageReading {
+  const reading: CoverageReading = { limits: readLimits(code, section) };
+  const markerLine = section[0] ?? "";
+  const beforeMarker = markerLine
+    .slice(0, COVERAGE_MARKERS[code].exec(markerLine)?.index ?? 0)
+    .replace(/[^A-Za-z]/g, "");
+  if (/^[A-F]$/i.test(beforeMarker)) reading.insurerLetter = beforeMarker.toUpperCase();
+  const rowLine =
+    section.find((line) => (line.match(DATE_IN_TEXT) ?? []).length >= 2) ??
+    section.find((line) => DATE_IN_TEXT.test(line));
+  DATE_IN_TEXT.lastIndex = 0;
+  if (rowLine !== undefined) readRowLine(rowLine, reading);
+  const sectionText = section.join("\n");
+  if (code === "workers_comp" && /PER\s*STATUTE|STATUTORY/i.test(sectionText)) {
+    reading.statutory = /\b[xX]+\s*PER\s*STATUTE|STATUTORY\s*[:\s]\s*(?:X|YES|Y)\b/i.test(sectionText);
+  }
+  return reading;
+}
+
+function readRowLine(rowLine: string, reading: CoverageReading): void {
+  const dates = [...rowLine.matchAll(DATE_IN_TEXT)]
+    .map((m) => parseDocumentDate(m[0]))
+    .filter((d): d is string => d !== null);
+  if (dates[0]) reading.effectiveDate = dates[0];
+  if (dates[1]) reading.expirationDate = dates[1];
+  const tokens = rowLine
+    .replace(DATE_IN_TEXT, " @DATE@ ")
+    .split(/\s+/)
+    .filter((t) => t !== "");
+  const firstDate = tokens.findIndex((t) => t === "@DATE@" || isDateToken(t));
+  let i = firstDate - 1;
+  while (i >= 0 && isJunkToken(tokens[i] ?? "")) i -= 1;
+  const policy = tokens[i];
+  if (policy === undefined || !looksLikePolicyNumber(policy)) return;
+  reading.policyNumber = policy.replace(/[.,;:]+$/, "");
+  const flags: string[] = [];
+  for (let j = i - 1; j >= 0 && flags.length < 2; j -= 1) {
+    const token = tokens[j] ?? "";
+    if (isJunkToken(token)) continue;
+    const flag = flagOf(token);
+    if (flag === undefined) break;
+    flags.unshift(flag);
+  }
+  const first = tokens[0]?.replace(/[^A-Za-z]/g, "") ?? "";
+  if (reading.insurerLetter === undefined && /^[A-F]$/i.test(first))
+    reading.insurerLetter = first.toUpperCase();
+  // With both columns marked we know which is which; one lone mark could be either column, so it is left to the reviewer.
+  if (flags.length === 2) {
+    reading.additionalInsured = flags[0] !== "N";
+    reading.waiverOfSubrogation = flags[1] !== "N";
+  } else if (flags.length === 0) {
+    reading.additionalInsured = false;
+    reading.waiverOfSubrogation = false;
+  }
+}
+
+/** Everything a certificate of insurance says that we can read: parties, insurers and each coverage row. */
+export function readCertificate(text: string): CertificateReading {
+  const lines = toLines(text);
+  const sections = coverageSections(lines);
+  const coverages: CertificateReading["coverages"] = {};
+  for (const code of insuranceCoverageCodes) {
+    const section = sections[code];
+    if (section) coverages[code] = readRow(section, code);
+  }
+  const reading: CertificateReading = { insurers: readInsurers(lines), coverages };
+  const producer = valueUnderLabel(lines, /^\s*PRODUCER\b:?/i);
+  const namedInsured = valueUnderLabel(lines, /^\s*(?:NAMED\s+)?INSURED\b(?!\s*:?\s*$)?:?/i);
+  const certificateHolder = valueUnderLabel(lines, /^\s*CERTIFICATE\s+HOLDER\b:?/i);
+  if (producer) reading.producer = producer;
+  if (namedInsured) reading.namedInsured = namedInsured;
+  if (certificateHolder) reading.certificateHolder = certificateHolder;
+  return reading;
+}
+
+function proposeInsurance(typeCode: string, text: string): FieldProposal<"insurance"> {
+  const reading = readCertificate(text);
+  const fields: Partial<InsuranceFields> = {};
+  const found: string[] = [];
+  const put = <K extends keyof InsuranceFields>(key: K, value: InsuranceFields[K] | undefined): void => {
+    if (value === undefined) return;
+    fields[key] = value;
+    found.push(key);
+  };
+  put("namedInsured", reading.namedInsured);
+  put("certificateHolder", reading.certificateHolder);
+  const row = (insuranceCoverageCodes as readonly string[]).includes(typeCode)
+    ? reading.coverages[typeCode as InsuranceCoverageCode]
+    : undefined;
+  if (!row) return { fields, found };
+  const insurer = reading.insurers.find((candidate) => candidate.letter === row.insurerLetter);
+  put("insurerName", insurer?.name);
+  put("naic", insurer?.naic);
+  put("policyNumber", row.policyNumber);
+  put("effectiveDate", row.effectiveDate);
+  put("expirationDate", row.expirationDate);
+  put("additionalInsured", row.additionalInsured);
+  put("waiverOfSubrogation", row.waiverOfSubrogation);
+  put("statutory", row.statutory);
+  fields.limits = row.limits;
+  found.push(...Object.keys(row.limits).map((name) => `limits.${name}`));
+  return { fields, found };
+}
+
+const CARD_LABELS = {
+  holderName: /\b(?:NAME|HOLDER|STUDENT|PARTICIPANT|TRAINEE|LICENSEE|ISSUED\s+TO)\b/i,
+  course: /\b(?:COURSE|PROGRAM|TRAINING)\b(?!\s+(?:PROVIDER|BY))/i,
+  issueDate:
+    /\b(?:DATE\s+ISSUED|ISSUE\s+DATE|ISSUED(?!\s+(?:BY|TO))|COMPLETION\s+DATE|COMPLETED|DATE\s+OF\s+TRAINING)\b/i,
+  expiryDate: /\b(?:EXPIRATION(?:\s+DATE)?|EXPIRY(?:\s+DATE)?|EXPIRES|VALID\s+(?:UNTIL|THRU|THROUGH))\b/i,
+  cardNumber: /\b(?:CARD|CERTIFICATE)\s*(?:NO\.?|NUMBER|#)/i,
+  licenseNumber: /\bLICEN[CS]E\s*(?:NO\.?|NUMBER|#)/i,
+  trainer: /\b(?:TRAINER|INSTRUCTOR)\b/i,
+  issuingAuthority: /\b(?:ISSUED\s+BY|ISSUING\s+AUTHORITY|AUTHORITY)\b/i,
+  state: /\bSTATE\b/i,
+  builder: /\b(?:BUILDER|MANUFACTURER)\b/i,
+  controlFamily: /\bCONTROL(?:\s+FAMILY)?\b/i,
+  level: /\bLEVEL\b/i,
+} as const;
+type CardLabel = keyof typeof CARD_LABELS;
+
+/** The value after "Label:" on the same line, up to the next known label or wide gap. */
+function labelledValue(lines: string[], key: CardLabel): string | undefined {
+  const others = Object.entries(CARD_LABELS)
+    .filter(([other]) => other !== key)
+    .map(([, re]) => re);
+  for (const line of lines) {
+    const match = CARD_LABELS[key].exec(line);
+    if (!match) continue;
+    const after = line.slice(match.index + match[0].length);
+    if (!/^\s*[:#.]/.test(after) && !/^\s{2,}/.test(after)) continue;
+    let value = after.replace(/^[\s:#.]+/, "").split(/\s{3,}/)[0] ?? "";
+    for (const other of others) {
+      const cut = other.exec(value);
+      if (cut && cut.index > 0) value = value.slice(0, cut.index);
+    }
+    value = value.replace(/\s+/g, " ").trim();
+    if (value !== "") return value;
+  }
+  return undefined;
+}
+
+const ROMAN_LEVELS: Record<string, number> = { I: 1, II: 2, III: 3, "1": 1, "2": 2, "3": 3 };
+
+function proposeCard(fieldSet: Exclude<FieldSet, "insurance">, text: string): FieldProposal {
+  const lines = toLines(text);
+  const fields: Record<string, string | number> = {};
+  const found: string[] = [];
+  const put = (key: string, value: string | number | undefined): void => {
+    if (value === undefined || value === "") return;
+    fields[key] = value;
+    found.push(key);
+  };
+  const date = (key: CardLabel): string | undefined => {
+    const raw = labelledValue(lines, key);
+    const match = raw === undefined ? null : new RegExp(DATE_IN_TEXT.source).exec(raw);
+    return match ? (parseDocumentDate(match[0]) ?? undefined) : undefined;
+  };
+  put("holderName", labelledValue(lines, "holderName"));
+  put("issueDate", date("issueDate"));
+  put("expiryDate", date("expiryDate"));
+  if (fieldSet === "training" || fieldSet === "oem") {
+    put("course", labelledValue(lines, "course"));
+    put("cardNumber", labelledValue(lines, "cardNumber")?.split(" ")[0]);
+    put("trainer", labelledValue(lines, "trainer"));
+  }
+  if (fieldSet === "oem") {
+    put("builder", labelledValue(lines, "builder"));
+    put("controlFamily", labelledValue(lines, "controlFamily"));
+    put("level", ROMAN_LEVELS[(labelledValue(lines, "level") ?? "").split(" ")[0]?.toUpperCase() ?? ""]);
+  }
+  if (fieldSet === "license") {
+    put("licenseNumber", labelledValue(lines, "licenseNumber")?.split(" ")[0]);
+    put("issuingAuthority", labelledValue(lines, "issuingAuthority"));
+  }
+  if (fieldSet === "exemption") {
+    put("certificateNumber", labelledValue(lines, "cardNumber")?.split(" ")[0]);
+    const state = labelledValue(lines, "state")?.toUpperCase();
+    if (state && /^[A-Z]{2}$/.test(state)) put("state", state);
+  }
+  return { fields, found };
+}
+
+/**
+ * Proposes the fields of one credential from a document's text. For insurance, typeCode names the
+ * coverage row to read; for the other field sets, typeCode only names the credential.
+ */
+export function proposeFields<S extends FieldSet>(
+  typeCode: string,
+  fieldSet: S,
+  text: string,
+): FieldProposal<S> {
+  if (fieldSet === "insurance") return proposeInsurance(typeCode, text) as FieldProposal<S>;
+  return proposeCard(fieldSet as Exclude<FieldSet, "insurance">, text) as FieldProposal<S>;
+}

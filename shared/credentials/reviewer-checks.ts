@@ -1,0 +1,165 @@
+import type { FieldSet, Limits } from "./credential-fields.ts";
+
+/**
+ * Things a reviewer should look at twice. They are warnings shown beside the fields, never refusals:
+ * the document may be right and our reading wrong, or the reviewer may accept it with a note.
+ */
+export const reviewerWarningCodes = [
+  "named_insured_differs",
+  "expiration_not_after_effective",
+  "aggregate_below_each_occurrence",
+  "disease_policy_limit_below_each_employee",
+  "naic_not_five_digits",
+  "holder_name_differs",
+  "submitted_for_another_holder",
+] as const;
+export type ReviewerWarningCode = (typeof reviewerWarningCodes)[number];
+export interface ReviewerWarning {
+  code: ReviewerWarningCode;
+  message: string;
+}
+
+export interface ReviewerCheckInput {
+  fieldSet: FieldSet;
+  /** The fields as they stand (proposed or corrected); any may be missing. */
+  fields: {
+    namedInsured?: string;
+    naic?: string;
+    effectiveDate?: string;
+    expirationDate?: string;
+    limits?: Limits;
+    holderName?: string;
+    issueDate?: string;
+    expiryDate?: string;
+  };
+  companyLegalName: string;
+  technicianName?: string;
+  /** The same file (by content hash) is already on another holder's credential. */
+  duplicateOfOtherHolder?: boolean;
+}
+
+// NAIC company code: five digits (TRADE-FACTS 2.4).
+const NAIC_PATTERN = /^\d{5}$/;
+// Legal-form words that one document spells out and another abbreviates or drops.
+const LEGAL_SUFFIXES = new Set([
+  "llc",
+  "inc",
+  "incorporated",
+  "co",
+  "company",
+  "corp",
+  "corporation",
+  "ltd",
+  "limited",
+  "lp",
+  "llp",
+  "pllc",
+  "pc",
+]);
+
+function words(name: string): string[] {
+  return name
+    .toLowerCase()
+    .replace(/&/g, " and ")
+    .replace(/[^a-z0-9\s]/g, " ")
+    .split(/\s+/)
+    .filter((word) => word !== "");
+}
+
+/** A company name without case, punctuation, a leading "the" or trailing legal-form words. */
+export function normaliseCompanyName(name: string): string {
+  const list = words(name.replace(/\bl\.\s?l\.\s?c\.?/gi, "llc"));
+  if (list[0] === "the") list.shift();
+  while (list.length > 1 && LEGAL_SUFFIXES.has(list[list.length - 1] ?? "")) list.pop();
+  return list.join(" ");
+}
+
+/** A person's name as a set of words, so "Thorne, Desmond J." and "desmond thorne" match. */
+export function normalisePersonName(name: string): string {
+  return words(name)
+    .filter((word) => word.length > 1)
+    .sort()
+    .join(" ");
+}
+
+function insuranceWarnings(input: ReviewerCheckInput): ReviewerWarning[] {
+  const { fields } = input;
+  const warnings: ReviewerWarning[] = [];
+  if (
+    fields.namedInsured &&
+    normaliseCompanyName(fields.namedInsured) !== normaliseCompanyName(input.companyLegalName)
+  ) {
+    warnings.push({
+      code: "named_insured_differs",
+      message: `The named insured "${fields.namedInsured}" is not the company's legal name "${input.companyLegalName}".`,
+    });
+  }
+  if (fields.effectiveDate && fields.expirationDate && fields.expirationDate <= fields.effectiveDate) {
+    warnings.push({
+      code: "expiration_not_after_effective",
+      message: "The expiration date is not after the effective date.",
+    });
+  }
+  const limits = fields.limits ?? {};
+  // General aggregate >= each occurrence (TRADE-FACTS 2.5, common practice).
+  if (
+    limits.generalAggregate !== undefined &&
+    limits.eachOccurrence !== undefined &&
+    limits.generalAggregate < limits.eachOccurrence
+  ) {
+    warnings.push({
+      code: "aggregate_below_each_occurrence",
+      message: "The general aggregate is below the each-occurrence limit.",
+    });
+  }
+  // EL disease policy limit >= disease each employee (TRADE-FACTS 2.5, common practice).
+  const diseasePolicy = limits.employersLiabilityDiseasePolicyLimit;
+  const diseaseEmployee = limits.employersLiabilityDiseaseEachEmployee;
+  if (diseasePolicy !== undefined && diseaseEmployee !== undefined && diseasePolicy < diseaseEmployee) {
+    warnings.push({
+      code: "disease_policy_limit_below_each_employee",
+      message: "The employer's liability disease policy limit is below the disease each-employee limit.",
+    });
+  }
+  if (fields.naic !== undefined && fields.naic.trim() !== "" && !NAIC_PATTERN.test(fields.naic.trim())) {
+    warnings.push({
+      code: "naic_not_five_digits",
+      message: `The NAIC company code "${fields.naic}" does not have five digits.`,
+    });
+  }
+  return warnings;
+}
+
+function cardWarnings(input: ReviewerCheckInput): ReviewerWarning[] {
+  const { fields } = input;
+  const warnings: ReviewerWarning[] = [];
+  if (
+    fields.holderName &&
+    input.technicianName &&
+    normalisePersonName(fields.holderName) !== normalisePersonName(input.technicianName)
+  ) {
+    warnings.push({
+      code: "holder_name_differs",
+      message: `The name on the document "${fields.holderName}" is not the technician's name "${input.technicianName}".`,
+    });
+  }
+  if (fields.issueDate && fields.expiryDate && fields.expiryDate <= fields.issueDate) {
+    warnings.push({
+      code: "expiration_not_after_effective",
+      message: "The expiry date is not after the issue date.",
+    });
+  }
+  return warnings;
+}
+
+/** Warnings for a reviewer about one credential's fields. */
+export function reviewerWarnings(input: ReviewerCheckInput): ReviewerWarning[] {
+  const warnings = input.fieldSet === "insurance" ? insuranceWarnings(input) : cardWarnings(input);
+  if (input.duplicateOfOtherHolder) {
+    warnings.push({
+      code: "submitted_for_another_holder",
+      message: "The same file was already submitted for another holder.",
+    });
+  }
+  return warnings;
+}

@@ -1,0 +1,103 @@
+import { z } from "zod";
+
+export const credentialStates = ["submitted", "verified", "returned", "superseded", "lapsed"] as const;
+export type CredentialState = (typeof credentialStates)[number];
+
+export const idParam = z.coerce.number().int().positive().max(2_147_483_647);
+
+export const credentialParamsSchema = z.object({ credentialId: idParam });
+export const documentParamsSchema = z.object({ documentId: idParam });
+export const typeCodeSchema = z.string().regex(/^[a-z][a-z0-9_]{1,39}$/, "Unknown credential type");
+
+/** The multipart fields sent with an uploaded file. */
+export const uploadDocumentSchema = z.object({
+  typeCode: typeCodeSchema,
+  technicianId: idParam.optional(),
+});
+export type UploadDocument = z.infer<typeof uploadDocumentSchema>;
+
+/** Fields are checked against the type's own field schema by the service (it knows the type's field set). */
+export const submitCredentialSchema = z.object({
+  documentId: idParam,
+  typeCode: typeCodeSchema,
+  technicianId: idParam.optional(),
+  fields: z.record(z.string(), z.unknown()),
+});
+export type SubmitCredential = z.infer<typeof submitCredentialSchema>;
+
+export const returnCredentialSchema = z.object({
+  reason: z.string().trim().min(5, "Say what the uploader must fix (at least 5 characters)").max(1000),
+});
+export type ReturnCredential = z.infer<typeof returnCredentialSchema>;
+
+export const verifyCredentialSchema = z.object({
+  fields: z.record(z.string(), z.unknown()).optional(),
+});
+export type VerifyCredential = z.infer<typeof verifyCredentialSchema>;
+
+export const editCredentialFieldsSchema = z.object({
+  fields: z.record(z.string(), z.unknown()),
+});
+
+export const listCredentialsQuerySchema = z.object({
+  technicianId: idParam.optional(),
+  state: z.enum(credentialStates).optional(),
+  holder: z.enum(["company", "technician"]).optional(),
+});
+
+export const queueSortKeys = ["submittedAt", "typeCode", "companyName"] as const;
+export const queueQuerySchema = z.object({
+  typeCode: typeCodeSchema.optional(),
+  companyId: idParam.optional(),
+  minWaitingHours: z.coerce.number().min(0).max(24 * 365).optional(),
+  sort: z.enum(queueSortKeys).default("submittedAt"),
+  dir: z.enum(["asc", "desc"]).default("asc"),
+  page: z.coerce.number().int().min(1).max(10_000).default(1),
+  pageSize: z.coerce.number().int().min(1).max(100).default(25),
+});
+export type QueueQuery = z.infer<typeof queueQuerySchema>;
+
+export const editCredentialTypeSchema = z.object({
+  name: z.string().trim().min(3).max(160).optional(),
+  description: z.string().trim().min(3).max(2000).optional(),
+  active: z.boolean().optional(),
+  validityMonths: z.number().int().min(1).max(120).optional(),
+});
+export const credentialTypeParamsSchema = z.object({ code: typeCodeSchema });
+
+export interface ReviewerWarningDto {
+  code: string;
+  message: string;
+}
+
+export interface CredentialDto {
+  id: number;
+  typeCode: string;
+  typeName: string;
+  category: string;
+  holder: "company" | "technician";
+  companyId: number;
+  companyName: string;
+  technicianId: number | null;
+  technicianName: string | null;
+  documentId: number;
+  documentName: string;
+  documentMime: string;
+  state: CredentialState;
+  fields: Record<string, unknown>;
+  returnReason: string | null;
+  submittedAt: string;
+  decidedAt: string | null;
+  lapsesAt: string | null;
+}
+
+export interface QueueRowDto {
+  id: number;
+  typeCode: string;
+  typeName: string;
+  companyId: number;
+  companyName: string;
+  holderName: string;
+  submittedAt: string;
+  waitingHours: number;
+}

@@ -1,0 +1,53 @@
+/** IUGG mean radius R1 = (2a + b) / 3 of GRS80 = 6,371,008.7714 m (TRADE-FACTS 6; GRS80 parameters). */
+export const EARTH_MEAN_RADIUS_KM = 6371.0088;
+/** International statute mile, exactly 1,609.344 m (international yard and pound agreement, 1959). */
+export const KM_PER_STATUTE_MILE = 1.609344;
+
+export interface LatLon {
+  /** Degrees, north positive. */
+  lat: number;
+  /** Degrees, east positive. */
+  lon: number;
+}
+
+const toRadians = (degrees: number): number => (degrees * Math.PI) / 180;
+
+/**
+ * Central angle between two points, in radians, by the haversine formula, which stays accurate for short distances
+ * where the spherical law of cosines loses precision (Ed Williams, Aviation Formulary V1.46).
+ */
+export function centralAngleRadians(from: LatLon, to: LatLon): number {
+  const phi1 = toRadians(from.lat);
+  const phi2 = toRadians(to.lat);
+  const halfDeltaPhi = (phi2 - phi1) / 2;
+  const halfDeltaLambda = toRadians(to.lon - from.lon) / 2;
+  const a = Math.sin(halfDeltaPhi) ** 2 + Math.cos(phi1) * Math.cos(phi2) * Math.sin(halfDeltaLambda) ** 2;
+  // Rounding can push a a hair above 1 for antipodal points.
+  return 2 * Math.asin(Math.sqrt(Math.min(1, a)));
+}
+
+/** Straight-line (great-circle) distance on a sphere of the mean Earth radius; not a driving distance. */
+export function greatCircleDistanceKm(from: LatLon, to: LatLon): number {
+  return centralAngleRadians(from, to) * EARTH_MEAN_RADIUS_KM;
+}
+
+export function kmToMiles(km: number): number {
+  return km / KM_PER_STATUTE_MILE;
+}
+
+export function milesToKm(miles: number): number {
+  return miles * KM_PER_STATUTE_MILE;
+}
+
+export function greatCircleDistanceMiles(from: LatLon, to: LatLon): number {
+  return kmToMiles(greatCircleDistanceKm(from, to));
+}
+
+/** A technician is offered only inside their own service radius and the buyer's search radius (DESIGN.md "Distance"). */
+export function isWithinReach(
+  distanceMiles: number,
+  serviceRadiusMiles: number,
+  searchRadiusMiles: number,
+): boolean {
+  return distanceMiles <= Math.min(serviceRadiusMiles, searchRadiusMiles);
+}

@@ -1,0 +1,91 @@
+import { createBrowserRouter, RouterProvider } from "react-router-dom";
+import { paths } from "@/config/paths.ts";
+import { requireRole, requireUser } from "./require-role.ts";
+import { RootFallback } from "./root-fallback.tsx";
+import { RouteError } from "./route-error.tsx";
+
+// Every page is its own lazily loaded module; only the shell above is in the first chunk.
+const roleArea = () => import("./routes/app/role-area.tsx");
+
+export const router = createBrowserRouter([
+  {
+    id: "root",
+    HydrateFallback: RootFallback,
+    ErrorBoundary: RouteError,
+    children: [
+      { index: true, lazy: () => import("./routes/landing.tsx") },
+      {
+        lazy: () => import("./routes/auth/auth-layout.tsx"),
+        children: [
+          { path: paths.auth.signIn, lazy: () => import("./routes/auth/sign-in.tsx") },
+          { path: paths.auth.signUp, lazy: () => import("./routes/auth/sign-up.tsx") },
+          { path: paths.auth.forgotPassword, lazy: () => import("./routes/auth/forgot-password.tsx") },
+          { path: paths.auth.setPassword, lazy: () => import("./routes/auth/set-password.tsx") },
+        ],
+      },
+      {
+        id: "signed-in",
+        loader: requireUser,
+        lazy: () => import("./routes/app/app-layout.tsx"),
+        children: [
+          { path: paths.account, lazy: () => import("./routes/app/account.tsx") },
+          {
+            loader: requireRole("provider_admin"),
+            lazy: roleArea,
+            children: [
+              { path: paths.provider.dashboard, lazy: () => import("./routes/provider/dashboard.tsx") },
+              { path: paths.provider.technicians, lazy: () => import("./routes/provider/technicians.tsx") },
+              { path: paths.provider.technicianNew, lazy: () => import("./routes/provider/technician-new.tsx") },
+              { path: paths.provider.technician, lazy: () => import("./routes/provider/technician.tsx") },
+              { path: paths.provider.technicianEdit, lazy: () => import("./routes/provider/technician-edit.tsx") },
+              { path: paths.provider.documents, lazy: () => import("./routes/provider/documents.tsx") },
+              { path: paths.provider.documentNew, lazy: () => import("./routes/provider/document-new.tsx") },
+              { path: paths.provider.workOrders, lazy: () => import("./routes/provider/work-orders.tsx") },
+            ],
+          },
+          {
+            loader: requireRole("technician"),
+            lazy: roleArea,
+            children: [
+              { path: paths.technician.standing, lazy: () => import("./routes/technician/standing.tsx") },
+              { path: paths.technician.uploadCard, lazy: () => import("./routes/technician/upload-card.tsx") },
+            ],
+          },
+          {
+            loader: requireRole("reviewer"),
+            lazy: roleArea,
+            children: [
+              { path: paths.reviewer.queue, lazy: () => import("./routes/reviewer/queue.tsx") },
+              { path: paths.reviewer.review, lazy: () => import("./routes/reviewer/review.tsx") },
+            ],
+          },
+          {
+            loader: requireRole("buyer"),
+            lazy: roleArea,
+            children: [
+              { path: paths.buyer.directory, lazy: () => import("./routes/buyer/directory.tsx") },
+              { path: paths.buyer.roster, lazy: () => import("./routes/buyer/roster.tsx") },
+              { path: paths.buyer.sites, lazy: () => import("./routes/buyer/sites.tsx") },
+              { path: paths.buyer.requirementSets, lazy: () => import("./routes/buyer/requirement-sets.tsx") },
+              { path: paths.buyer.workOrders, lazy: () => import("./routes/buyer/work-orders.tsx") },
+            ],
+          },
+          {
+            loader: requireRole("admin"),
+            lazy: roleArea,
+            children: [
+              { path: paths.admin.users, lazy: () => import("./routes/admin/users.tsx") },
+              { path: paths.admin.catalogue, lazy: () => import("./routes/admin/catalogue.tsx") },
+              { path: paths.admin.outbox, lazy: () => import("./routes/admin/outbox.tsx") },
+            ],
+          },
+        ],
+      },
+      { path: "*", lazy: () => import("./routes/not-found.tsx") },
+    ],
+  },
+]);
+
+export function AppRouter() {
+  return <RouterProvider router={router} />;
+}

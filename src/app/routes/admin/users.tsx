@@ -1,0 +1,34 @@
+import { useSuspenseQuery } from "@tanstack/react-query";
+import { PageHeader } from "@/components/ui/page-header.tsx";
+import { companiesQuery } from "@/features/admin/api/get-companies.ts";
+import { usersQuery } from "@/features/admin/api/get-users.ts";
+import { InviteUserForm } from "@/features/admin/components/invite-user-form.tsx";
+import { UsersTable } from "@/features/admin/components/users-table.tsx";
+import { queryClient } from "@/lib/query-client.ts";
+
+export async function loader() {
+  await Promise.all([queryClient.ensureQueryData(usersQuery()), queryClient.ensureQueryData(companiesQuery())]);
+  return null;
+}
+
+export function Component() {
+  const { data: users } = useSuspenseQuery(usersQuery());
+  const { data: companies } = useSuspenseQuery(companiesQuery());
+
+  return (
+    <>
+      <PageHeader title="Users" description="Everyone who can sign in, by company. Invite people; they choose their own password." />
+      <div className="grid items-start gap-8 lg:grid-cols-[minmax(0,1fr)_22rem]">
+        <section aria-labelledby="users-heading">
+          <h2 id="users-heading" className="mb-3 text-lg font-semibold text-ink-900">
+            All users <span className="text-base font-normal text-ink-700">({users.length})</span>
+          </h2>
+          <UsersTable users={users} />
+        </section>
+        <section className="rounded-lg border border-ink-100 bg-white p-4 sm:p-5">
+          <InviteUserForm companies={companies} />
+        </section>
+      </div>
+    </>
+  );
+}

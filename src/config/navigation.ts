@@ -1,0 +1,48 @@
+import type { Role } from "@shared/accounts/schemas.ts";
+import { paths } from "./paths.ts";
+
+/** `end`: current only on exactly this path (a role's home), not on every page below it. */
+export type NavItem = { label: string; to: string; end?: boolean };
+
+/** What each role may use; the header shows exactly these links. */
+export const navigationByRole: Record<Role, readonly NavItem[]> = {
+  provider_admin: [
+    { label: "Dashboard", to: paths.provider.dashboard, end: true },
+    { label: "Technicians", to: paths.provider.technicians },
+    { label: "Documents", to: paths.provider.documents },
+    { label: "Work orders", to: paths.provider.workOrders },
+  ],
+  technician: [
+    { label: "My standing", to: paths.technician.standing, end: true },
+    { label: "Upload a card", to: paths.technician.uploadCard },
+  ],
+  reviewer: [{ label: "Queue", to: paths.reviewer.queue }],
+  buyer: [
+    { label: "Directory", to: paths.buyer.directory },
+    { label: "Roster", to: paths.buyer.roster },
+    { label: "Sites", to: paths.buyer.sites },
+    { label: "Requirement sets", to: paths.buyer.requirementSets },
+    { label: "Work orders", to: paths.buyer.workOrders },
+  ],
+  admin: [
+    { label: "Users", to: paths.admin.users },
+    { label: "Catalogue", to: paths.admin.catalogue },
+    { label: "Outbox", to: paths.admin.outbox },
+  ],
+};
+
+export const homePathByRole: Record<Role, string> = {
+  provider_admin: paths.provider.dashboard,
+  technician: paths.technician.standing,
+  reviewer: paths.reviewer.queue,
+  buyer: paths.buyer.directory,
+  admin: paths.admin.users,
+};
+
+export const roleLabels: Record<Role, string> = {
+  provider_admin: "Service company admin",
+  technician: "Technician",
+  reviewer: "Compliance reviewer",
+  buyer: "Buyer",
+  admin: "Platform admin",
+};

@@ -1,0 +1,68 @@
+/** Every URL the client links to or routes on. */
+export const paths = {
+  home: "/",
+  auth: {
+    signIn: "/sign-in",
+    signUp: "/sign-up",
+    forgotPassword: "/forgot-password",
+    setPassword: "/set-password",
+  },
+  account: "/account",
+  provider: {
+    dashboard: "/provider",
+    technicians: "/provider/technicians",
+    technicianNew: "/provider/technicians/new",
+    technician: "/provider/technicians/:technicianId",
+    technicianEdit: "/provider/technicians/:technicianId/edit",
+    documents: "/provider/documents",
+    documentNew: "/provider/documents/new",
+    workOrders: "/provider/work-orders",
+  },
+  technician: {
+    standing: "/technician",
+    uploadCard: "/technician/upload-card",
+  },
+  reviewer: {
+    queue: "/review",
+    review: "/review/:credentialId",
+  },
+  buyer: {
+    directory: "/directory",
+    roster: "/roster",
+    sites: "/sites",
+    requirementSets: "/requirement-sets",
+    workOrders: "/work-orders",
+  },
+  admin: {
+    users: "/admin/users",
+    catalogue: "/admin/catalogue",
+    outbox: "/admin/outbox",
+  },
+} as const;
+
+/** Links to pages with parameters; the patterns above are what the router matches. */
+export const hrefs = {
+  technician: (id: number) => `/provider/technicians/${id}`,
+  technicianEdit: (id: number) => `/provider/technicians/${id}/edit`,
+  review: (credentialId: number) => `/review/${credentialId}`,
+  /** The upload flow with the type and holder chosen already (a renewal, or a corrected returned document). */
+  documentNew: (preset: { typeCode?: string | undefined; technicianId?: number | null | undefined } = {}) => {
+    const query = new URLSearchParams();
+    if (preset.typeCode) query.set("type", preset.typeCode);
+    if (preset.technicianId) query.set("technicianId", String(preset.technicianId));
+    const search = query.toString();
+    return search ? `${paths.provider.documentNew}?${search}` : paths.provider.documentNew;
+  },
+  uploadCard: (typeCode?: string) =>
+    typeCode ? `${paths.technician.uploadCard}?type=${encodeURIComponent(typeCode)}` : paths.technician.uploadCard,
+};
+
+/** Sign-in URL that brings the user back to `redirectTo` afterwards. */
+export const signInHref = (redirectTo?: string): string =>
+  redirectTo && redirectTo !== paths.home
+    ? `${paths.auth.signIn}?redirectTo=${encodeURIComponent(redirectTo)}`
+    : paths.auth.signIn;
+
+/** Only same-origin paths are followed after sign-in, so the parameter cannot send a user elsewhere. */
+export const safeRedirectTarget = (value: string | null): string | null =>
+  value && value.startsWith("/") && !value.startsWith("//") && !value.startsWith("/\\") ? value : null;

@@ -1,0 +1,91 @@
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { randomUUID } from "node:crypto";
+import { agentFor, buildTestApp, type TestApp } from "../../support/test-app.ts";
+import { buildCompany, TEST_PASSWORD } from "../../support/build-company.ts";
+import { startTestMailCatcher } from "../../support/mail-catcher.ts";
+
+let t: TestApp;
+let mail: Awaited<ReturnType<typeof startTestMailCatcher>>;
+beforeAll(async () => {
+  t = buildTestApp();
+  mail = await startTestMailCatcher();
+});
+afterAll(async () => {
+  await t.close();
+  await mail.close();
+});
+
+const linkToken = (text: string) => /set-password\?token=([A-Za-z0-9_-]+)/.exec(text)?.[1];
+
+async function adminAgent() {
+  const { users } = await buildCompany("platform", ["admin"]);
+  const agent = agentFor(t.app);
+  await agent.post("/api/auth/sign-in").send({ email: users.admin!.email, password: TEST_PASSWORD }).expect(200);
+  return agent;
+}
+
+describe("admin invitation", () => {
+  it("e-mails a one-time set-password link over a real SMTP connection, and the link works once", async () => {
+    const admin = await adminAgent();
+    const { company } = await buildCompany("service", []);
+    const email = `new-tech-${randomUUID().slice(0, 8)}@example.test`;
+
+    const invited = await admin.post("/api/admin/invitations").send({ email, name: "Wendell Achebe-Lund", role: "technician", companyId: company.id });
+    await mail.deliver();
+    const received = mail.to(email);
+    const token = linkToken(received[0]?.text ?? "");
+    const first = await agentFor(t.app).post("/api/auth/set-password").send({ token, password: "a brand new password" });
+    const second = await agentFor(t.app).post("/api/auth/set-password").send({ token, password: "another new password" });
+    const signIn = await agentFor(t.app).post("/api/auth/sign-in").send({ email, password: "a brand new password" });
+
+    expect(invited.status).toBe(201);
+    expect(received).toHaveLength(1);
+    expect(received[0]!.subject).toContain("invited");
+    expect(token).toBeDefined();
+    expect(first.status).toBe(204);
+    expect(second.status).toBe(422);
+    expect(signIn.status).toBe(200);
+  });
+
+  it("refuses a role that does not fit the company, naming the field", async () => {
+    const admin = await adminAgent();
+    const { company } = await buildCompany("shop", []);
+
+    const res = await admin.post("/api/admin/invitations").send({ email: `x-${randomUUID().slice(0, 6)}@example.test`, name: "Ola Brightwater", role: "reviewer", companyId: company.id });
+
+    expect(res.status).toBe(422);
+    expect(res.body.error.fields[0].path).toBe("body.role");
+  });
+});
+
+describe("password reset", () => {
+  it("answers the same for known and unknown e-mails and mails only the known one", async () => {
+    const { users } = await buildCompany("shop", ["buyer"]);
+    const known = users.buyer!.email;
+
+    const a = await agentFor(t.app).post("/api/auth/password-reset").send({ email: known });
+    const b = await agentFor(t.app).post("/api/auth/password-reset").send({ email: "ghost-account@example.test" });
+    await mail.deliver();
+
+    expect(a.status).toBe(202);
+    expect(b.status).toBe(202);
+    expect(a.body).toEqual(b.body);
+    expect(mail.to(known)).toHaveLength(1);
+    expect(mail.to("ghost-account@example.test")).toHaveLength(0);
+  });
+
+  it("sets a new password from the e-mailed link", async () => {
+    const { users } = await buildCompany("shop", ["buyer"]);
+    const email = users.buyer!.email;
+    await agentFor(t.app).post("/api/auth/password-reset").send({ email });
+    await mail.deliver();
+    const token = linkToken(mail.to(email)[0]!.text);
+
+    await agentFor(t.app).post("/api/auth/set-password").send({ token, password: "reset password 2026" }).expect(204);
+    const oldPassword = await agentFor(t.app).post("/api/auth/sign-in").send({ email, password: TEST_PASSWORD });
+    const newPassword = await agentFor(t.app).post("/api/auth/sign-in").send({ email, password: "reset password 2026" });
+
+    expect(oldPassword.status).toBe(401);
+    expect(newPassword.status).toBe(200);
+  });
+});

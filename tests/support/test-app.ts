@@ -1,0 +1,47 @@
+import pg from "pg";
+import request from "supertest";
+import type { Express } from "express";
+import { loadConfig, type Config } from "../../server/config.ts";
+import { configureLog } from "../../server/log.ts";
+import { connectDatabase, db } from "../../server/db/sequelize.ts";
+import { initModels } from "../../server/db/associations.ts";
+import { createApp } from "../../server/app.ts";
+import { setPasswordCost } from "../../server/accounts/passwords.ts";
+import { CSRF_HEADER, CSRF_HEADER_VALUE } from "../../shared/api/error-body.ts";
+
+export interface TestApp {
+  app: Express;
+  config: Config;
+  close(): Promise<void>;
+}
+
+let connected = false;
+
+/** The real app on the suite's PostgreSQL, without listening (supertest drives it). */
+export function buildTestApp(overrides: Record<string, string> = {}): TestApp {
+  const config = loadConfig({ ...process.env, ...overrides });
+  configureLog(config.LOG_LEVEL);
+  setPasswordCost(config.BCRYPT_COST);
+  if (!connected) {
+    initModels(connectDatabase(config.DATABASE_URL!));
+    connected = true;
+  }
+  const sessionPool = new pg.Pool({ connectionString: config.DATABASE_URL, max: 3 });
+  const app = createApp({ config, sessionPool, clientDir: "/nonexistent" });
+  return {
+    app,
+    config,
+    close: async () => {
+      await sessionPool.end();
+    },
+  };
+}
+
+export const sequelize = () => db();
+
+/** A supertest agent that keeps cookies and sends the CSRF header on every request. */
+export function agentFor(app: Express) {
+  const agent = request.agent(app);
+  agent.set(CSRF_HEADER, CSRF_HEADER_VALUE);
+  return agent;
+}
