@@ -14,7 +14,11 @@ import { healthRoutes } from "./health/routes.ts";
 import { authRoutes, adminUserRoutes } from "./accounts/index.ts";
 import { outboxRoutes } from "./mail/index.ts";
 import { technicianRoutes } from "./technicians/index.ts";
+import { standingApiRoutes } from "./standing/index.ts";
 import { credentialRoutes } from "./credentials/index.ts";
+import { buyerRouters } from "./directory/buyer-routers.ts";
+import { workOrderRoutes } from "./work-orders/index.ts";
+import { reviewRoutes } from "./reviews/index.ts";
 import { createStorage } from "./storage/index.ts";
 import { createSignInLimiter } from "./accounts/sign-in-limit.ts";
 
@@ -25,7 +29,7 @@ export interface AppDeps {
   clientDir?: string;
 }
 
-const apiRouters = [healthRoutes, authRoutes, adminUserRoutes, outboxRoutes, technicianRoutes, credentialRoutes];
+const apiRouters = [healthRoutes, authRoutes, adminUserRoutes, outboxRoutes, technicianRoutes, credentialRoutes, standingApiRoutes, workOrderRoutes, reviewRoutes, ...buyerRouters];
 
 export function createApp({ config, sessionPool, clientDir }: AppDeps): Express {
   const app = express();

@@ -18,7 +18,7 @@ export interface RunningServer {
 const OUTBOX_INTERVAL_MS = 15_000;
 
 /** Connects, migrates, listens and starts the background senders; resolves once the port is open. */
-export async function startServer(config: Config): Promise<RunningServer> {
+export async function startServer(config: Config, options: { clientDir?: string } = {}): Promise<RunningServer> {
   if (!config.DATABASE_URL) throw new Error("DATABASE_URL is required to start the server");
   configureLog(config.LOG_LEVEL);
   setPasswordCost(config.BCRYPT_COST);
@@ -27,7 +27,7 @@ export async function startServer(config: Config): Promise<RunningServer> {
   await migrate(sequelize);
   const sessionPool = new pg.Pool({ connectionString: config.DATABASE_URL, max: 5, connectionTimeoutMillis: 3_000 });
   sessionPool.on("error", (err) => log.warn({ err }, "session pool error"));
-  const app = createApp({ config, sessionPool });
+  const app = createApp({ config, sessionPool, clientDir: options.clientDir });
 
   const mailer = config.SMTP_URL ? createSmtpMailer(config.SMTP_URL) : undefined;
   const sendMail = async () => {

@@ -48,7 +48,7 @@ if (!existsSync(path.join(root, "dist", "index.html"))) {
 
 const config = loadConfig(env);
 const running = await startServer(config);
-const loaded = await loadDemoScenarioOnce();
+const loaded = await loadDemoScenarioOnce({ uploadsDir: config.UPLOADS_DIR, today: new Date() });
 if (loaded) say("Demo scenario loaded.");
 
 say(`\nClearbench is running at ${publicUrl({ ...config, PORT: running.port })}`);

@@ -5,6 +5,10 @@ import { initMailModels } from "../mail/model.ts";
 import { initAuditModel } from "../audit/model.ts";
 import { initTechnicianModel } from "../technicians/model.ts";
 import { initCredentialModels } from "../credentials/model.ts";
+import { initSiteModels } from "../sites/model.ts";
+import { initWorkOrderModels } from "../work-orders/model.ts";
+import { initReviewModel } from "../reviews/model.ts";
+import { initStandingModels } from "../standing/index.ts";
 
 /** Registers every model with the connection; associations between domains live here only. */
 export function initModels(sequelize: Sequelize): void {
@@ -14,4 +18,8 @@ export function initModels(sequelize: Sequelize): void {
   initAuditModel(sequelize);
   initTechnicianModel(sequelize);
   initCredentialModels(sequelize);
+  initSiteModels(sequelize);
+  initWorkOrderModels(sequelize);
+  initReviewModel(sequelize);
+  initStandingModels(sequelize);
 }

@@ -18,6 +18,8 @@ export default async function setup() {
   // A low bcrypt cost keeps the suite fast; production's default of 12 is checked by a config test.
   process.env.BCRYPT_COST = "4";
   process.env.UPLOADS_DIR = path.join(root, "uploads");
+  // Browser tests build the production client here once per run, on first use (tests/support/browser-server.ts).
+  process.env.CLEARBENCH_TEST_DIST = path.join(root, "dist");
   const sequelize = connectDatabase(pg.url);
   await migrate(sequelize);
   await sequelize.close();

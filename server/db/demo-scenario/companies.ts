@@ -34,7 +34,12 @@ export const demoCompanies: DemoCompany[] = [
     timeZone: "America/Chicago",
     users: [
       { name: "Marisol Quennell", email: "office@kestrel-ridge.test", role: "provider_admin" },
-      { name: "Tobias Wren", email: "tobias@kestrel-ridge.test", role: "technician", technicianKey: "tobias" },
+      {
+        name: "Tobias Wren",
+        email: "tobias@kestrel-ridge.test",
+        role: "technician",
+        technicianKey: "tobias",
+      },
     ],
   },
   {
@@ -46,7 +51,12 @@ export const demoCompanies: DemoCompany[] = [
     timeZone: "America/Chicago",
     users: [
       { name: "Delphine Okafor-Strand", email: "office@bluewater-spindle.test", role: "provider_admin" },
-      { name: "Henrik Solberg-Paz", email: "henrik@bluewater-spindle.test", role: "technician", technicianKey: "henrik" },
+      {
+        name: "Henrik Solberg-Paz",
+        email: "henrik@bluewater-spindle.test",
+        role: "technician",
+        technicianKey: "henrik",
+      },
     ],
   },
   {
@@ -56,7 +66,15 @@ export const demoCompanies: DemoCompany[] = [
     addressLine: "905 Foundry Row",
     postalCode: "46204",
     timeZone: "America/Indiana/Indianapolis",
-    users: [{ name: "Augustin Behrle", email: "office@copperline-field.test", role: "provider_admin" }],
+    users: [
+      { name: "Augustin Behrle", email: "office@copperline-field.test", role: "provider_admin" },
+      {
+        name: "Saoirse Vandeleur",
+        email: "saoirse@copperline-field.test",
+        role: "technician",
+        technicianKey: "saoirse",
+      },
+    ],
   },
   {
     key: "marlow",

@@ -1,3 +1,4 @@
+import type { ReactNode } from "react";
 import { Link } from "react-router-dom";
 import type { NavItem } from "@/config/navigation.ts";
 import { MainNav } from "./main-nav.tsx";
@@ -11,9 +12,11 @@ type AppHeaderProps = {
   homeHref: string;
   onSignOut: () => void;
   signingOut: boolean;
+  /** Controls beside the user menu, e.g. the notifications bell (composed by the layout). */
+  tools?: ReactNode;
 };
 
-export function AppHeader({ items, user, homeHref, onSignOut, signingOut }: AppHeaderProps) {
+export function AppHeader({ items, user, homeHref, onSignOut, signingOut, tools }: AppHeaderProps) {
   return (
     <header className="relative bg-ink-900 text-white">
       <div className="mx-auto flex h-16 max-w-7xl items-center gap-6 px-4 sm:px-6">
@@ -26,11 +29,14 @@ export function AppHeader({ items, user, homeHref, onSignOut, signingOut }: AppH
         <nav aria-label="Main" className="hidden flex-1 md:block">
           <MainNav items={items} layout="bar" />
         </nav>
-        <div className="ml-auto hidden md:block">
-          <UserMenu user={user} onSignOut={onSignOut} signingOut={signingOut} />
-        </div>
-        <div className="ml-auto md:hidden">
-          <MobileMenu items={items} user={user} onSignOut={onSignOut} signingOut={signingOut} />
+        <div className="ml-auto flex items-center gap-2">
+          {tools}
+          <div className="hidden md:block">
+            <UserMenu user={user} onSignOut={onSignOut} signingOut={signingOut} />
+          </div>
+          <div className="md:hidden">
+            <MobileMenu items={items} user={user} onSignOut={onSignOut} signingOut={signingOut} />
+          </div>
         </div>
       </div>
     </header>

@@ -39,6 +39,11 @@ type DataTableProps<Row extends RowData> = {
   empty?: ReactNode;
   /** Marks a row as chosen (e.g. the mail being read). */
   isRowSelected?: (row: Row) => boolean;
+  /**
+   * Server-side sorting: the page owns the sort (e.g. in the URL) and fetches rows already in that order.
+   * Rows are then shown as given.
+   */
+  serverSorting?: { sorting: SortingState; onSortingChange: (sorting: SortingState) => void };
 };
 
 const ariaSort = (sorted: false | "asc" | "desc") =>
@@ -63,6 +68,7 @@ export function DataTable<Row extends RowData>({
   getRowId,
   empty,
   isRowSelected,
+  serverSorting,
 }: DataTableProps<Row>) {
   const table = useTable({
     features: dataTableFeatures,
@@ -70,6 +76,14 @@ export function DataTable<Row extends RowData>({
     data,
     initialState: { sorting: initialSorting },
     ...(getRowId ? { getRowId: (row: Row) => getRowId(row) } : {}),
+    ...(serverSorting
+      ? {
+          manualSorting: true,
+          state: { sorting: serverSorting.sorting },
+          onSortingChange: (updater: SortingState | ((old: SortingState) => SortingState)) =>
+            serverSorting.onSortingChange(typeof updater === "function" ? updater(serverSorting.sorting) : updater),
+        }
+      : {}),
   });
 
   if (data.length === 0 && empty) return <>{empty}</>;

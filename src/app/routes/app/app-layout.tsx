@@ -4,6 +4,7 @@ import { homePathByRole, navigationByRole } from "@/config/navigation.ts";
 import { paths, signInHref } from "@/config/paths.ts";
 import { useCurrentUser } from "@/features/accounts/api/get-current-user.ts";
 import { useSignOut } from "@/features/accounts/api/sign-out.ts";
+import { NotificationsBell } from "@/features/notices/components/notifications-bell.tsx";
 import { RouteError } from "../../route-error.tsx";
 import { useSessionExpiry } from "../../use-session-expiry.ts";
 
@@ -34,6 +35,7 @@ export function Component() {
         user={user}
         homeHref={homePathByRole[user.role]}
         signingOut={signOut.isPending}
+        tools={<NotificationsBell />}
         onSignOut={() => signOut.mutate(undefined, { onSuccess: () => navigate(paths.auth.signIn, { replace: true }) })}
       />
       <main id="main" tabIndex={-1} className="mx-auto w-full max-w-7xl flex-1 px-4 py-6 focus:outline-none sm:px-6 sm:py-8">

@@ -1,13 +1,65 @@
-import { PlaceholderPage } from "@/components/ui/placeholder-page.tsx";
-import { StatusKey } from "@/components/ui/status-key.tsx";
+import { useMemo, useState } from "react";
+import { useSuspenseQuery } from "@tanstack/react-query";
+import { Link } from "react-router-dom";
+import { hrefs } from "@/config/paths.ts";
+import { buttonStyles } from "@/components/ui/button-styles.ts";
+import { CautionNote } from "@/components/ui/caution-note.tsx";
+import { PageHeader } from "@/components/ui/page-header.tsx";
+import type { Credential } from "@/features/credentials/api/credential-shapes.ts";
+import { credentialsQuery } from "@/features/credentials/api/get-credentials.ts";
+import { LapseTimelineChart } from "@/features/credentials/components/lapse-timeline-chart.tsx";
+import { byWeek, lapsingWithin } from "@/features/credentials/components/lapse-window.ts";
+import { LapsingTable } from "@/features/credentials/components/lapsing-table.tsx";
+import { openReturns } from "@/features/credentials/components/open-returns.ts";
+import { ReturnedList } from "@/features/credentials/components/returned-list.tsx";
+import { queryClient } from "@/lib/query-client.ts";
+
+// The horizon of "what lapses next": the first warning goes out 60 days ahead (DESIGN.md), so 90 shows what comes after it too.
+const HORIZON_DAYS = 90;
+const HORIZON_WEEKS = Math.ceil(HORIZON_DAYS / 7);
+
+export async function loader() {
+  await queryClient.ensureQueryData(credentialsQuery());
+  return null;
+}
+
+const renewHref = (c: Credential) => hrefs.documentNew({ typeCode: c.typeCode, technicianId: c.technicianId });
 
 export function Component() {
+  const { data: credentials } = useSuspenseQuery(credentialsQuery());
+  const [now] = useState(() => new Date());
+  const lapsing = useMemo(() => lapsingWithin(credentials, now, HORIZON_DAYS), [credentials, now]);
+  const weeks = useMemo(() => byWeek(lapsing, now, HORIZON_WEEKS), [lapsing, now]);
+  const returned = useMemo(() => openReturns(credentials), [credentials]);
+  const showsInsurance = credentials.some((c) => c.category === "insurance");
+
   return (
-    <PlaceholderPage
-      title="Dashboard"
-      purpose="What lapses next and what was returned: every credential of your company and your technicians that needs you, soonest first."
-    >
-      <StatusKey />
-    </PlaceholderPage>
+    <>
+      <PageHeader
+        title="Dashboard"
+        description="What lapses next and what was returned to you, soonest first."
+        actions={
+          <Link to={hrefs.documentNew()} className={buttonStyles("primary")}>
+            Upload a document
+          </Link>
+        }
+      />
+      <div className="grid items-start gap-8 lg:grid-cols-[minmax(0,1fr)_22rem]">
+        <section aria-labelledby="lapsing-heading" className="space-y-4">
+          <h2 id="lapsing-heading" className="text-lg font-semibold text-ink-900">
+            What lapses next <span className="text-base font-normal text-ink-700">(next {HORIZON_DAYS} days)</span>
+          </h2>
+          <LapseTimelineChart weeks={weeks} />
+          <LapsingTable credentials={lapsing} now={now} renewHref={renewHref} />
+        </section>
+        <section aria-labelledby="returned-heading" className="space-y-3">
+          <h2 id="returned-heading" className="text-lg font-semibold text-ink-900">
+            Returned to you <span className="text-base font-normal text-ink-700">({returned.length})</span>
+          </h2>
+          <ReturnedList credentials={returned} correctionHref={renewHref} />
+        </section>
+      </div>
+      {showsInsurance && <CautionNote className="mt-8" />}
+    </>
   );
 }

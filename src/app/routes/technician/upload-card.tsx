@@ -1,10 +1,36 @@
-import { PlaceholderPage } from "@/components/ui/placeholder-page.tsx";
+import { useSuspenseQuery } from "@tanstack/react-query";
+import { useLoaderData, useNavigate, useSearchParams } from "react-router-dom";
+import { paths } from "@/config/paths.ts";
+import { PageHeader } from "@/components/ui/page-header.tsx";
+import { credentialTypesQuery } from "@/features/credentials/api/get-credential-types.ts";
+import { UploadFlow } from "@/features/credentials/components/upload-flow.tsx";
+import { queryClient } from "@/lib/query-client.ts";
+import { currentTechnicianId } from "./current-technician.ts";
+
+export async function loader() {
+  const technicianId = await currentTechnicianId();
+  await queryClient.ensureQueryData(credentialTypesQuery());
+  return { technicianId };
+}
+
+// A technician sends their own cards; insurance and exemptions are the company's and go through the office.
+const ownCardSets = new Set(["training", "oem", "license"]);
 
 export function Component() {
+  const { technicianId } = useLoaderData<typeof loader>();
+  const { data: types } = useSuspenseQuery(credentialTypesQuery());
+  const [search] = useSearchParams();
+  const navigate = useNavigate();
   return (
-    <PlaceholderPage
-      title="Upload a card"
-      purpose="Drop a photo or PDF of a training card, check the fields read from it, and send it for verification."
-    />
+    <>
+      <PageHeader title="Upload a card" description="Take a photo of the card or choose a PDF. Check what we read from it, then send it." />
+      <UploadFlow
+        types={types.filter((t) => t.active && t.holder === "technician" && ownCardSets.has(t.fieldSet))}
+        technicians={[]}
+        fixedTechnicianId={technicianId}
+        initialTypeCode={search.get("type") ?? undefined}
+        onSubmitted={(credential) => navigate(paths.technician.standing, { state: { submitted: credential.typeName } })}
+      />
+    </>
   );
 }

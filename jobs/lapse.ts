@@ -1,0 +1,129 @@
+import type { Sequelize, Transaction } from "sequelize";
+import { loadConfig, publicUrl } from "../server/config.ts";
+import { db } from "../server/db/sequelize.ts";
+import { createWarningNotices, findNoticeRecipients, queueNoticeMessages, type HolderCount } from "../server/notices/index.ts";
+import { countStatements, refreshStandings, selectRows, type ChangedStanding } from "../server/standing/index.ts";
+import { JOB_LOCK_KEYS, withAdvisoryLock } from "./advisory-lock.ts";
+import { finishJobRun, startJobRun } from "./job-run-record.ts";
+
+export interface LapseJobDeps {
+  /** Connection to run on (tests race two pools); defaults to the app's. */
+  sequelize?: Sequelize;
+  /** Days before a lapse at which to warn (config WARNING_DAYS); the lapse itself (0) is always noticed. */
+  warningDays?: readonly number[];
+  /** Base of the links in the e-mails (config PUBLIC_URL). */
+  publicUrl?: string;
+}
+
+export interface LapseJobReport {
+  skipped: false;
+  jobRunId: number;
+  lapsed: number;
+  noticesCreated: number;
+  emailsQueued: number;
+  changedStandings: ChangedStanding[];
+  /** SQL statements the run issued, BEGIN and COMMIT included. */
+  statements: number;
+  startedAt: Date;
+  finishedAt: Date;
+}
+
+export type LapseJobResult = LapseJobReport | { skipped: true };
+
+// BEGIN and COMMIT, issued by the transaction itself rather than through the counted helpers.
+const TRANSACTION_STATEMENTS = 2;
+
+/**
+ * Marks every verified credential whose lapse instant is at or before `asOf` as lapsed, with one audit event each, and
+ * a lapse notice (threshold 0) each, in one set-based statement.
+ */
+async function lapseCredentials(transaction: Transaction, asOf: Date, jobRunId: number) {
+  return selectRows<HolderCount & { noticed: number }>(
+    transaction,
+    `WITH lapsed AS (
+       UPDATE credentials SET state = 'lapsed', updated_at = CURRENT_TIMESTAMP
+        WHERE state = 'verified' AND lapses_at <= $1::timestamptz
+       RETURNING id, company_id, technician_id, lapses_at
+     ), audited AS (
+       INSERT INTO audit_events (actor_user_id, action, subject_type, subject_id, before, after)
+       SELECT NULL, 'credential.lapsed', 'credential', id, '{"state":"verified"}'::jsonb,
+              jsonb_build_object('state', 'lapsed', 'lapsesAt', lapses_at, 'asOf', $1::timestamptz, 'jobRunId', $2::int)
+         FROM lapsed
+     ), noticed AS (
+       INSERT INTO notices (credential_id, threshold_days, lapses_at, job_run_id)
+       SELECT id, 0, lapses_at, $2::int FROM lapsed
+       ON CONFLICT ON CONSTRAINT notices_once_per_threshold DO NOTHING
+       RETURNING id
+     )
+     SELECT company_id, technician_id, count(*)::int AS count, (SELECT count(*)::int FROM noticed) AS noticed
+       FROM lapsed GROUP BY company_id, technician_id`,
+    [asOf, jobRunId],
+  );
+}
+
+/** Technicians lacking a stored standing against the baseline or an active set (e.g. added since): the run fills them in. */
+async function techniciansWithoutStanding(transaction: Transaction): Promise<number[]> {
+  const rows = await selectRows<{ id: number }>(
+    transaction,
+    `SELECT DISTINCT t.id FROM technicians t
+       CROSS JOIN (SELECT 0 AS set_key UNION ALL SELECT id FROM requirement_sets WHERE active) s
+      WHERE NOT EXISTS (SELECT 1 FROM technician_standings ts
+                         WHERE ts.technician_id = t.id AND coalesce(ts.requirement_set_id, 0) = s.set_key)`,
+  );
+  return rows.map((r) => r.id);
+}
+
+function holdersOf(counts: HolderCount[], extraTechnicianIds: number[]) {
+  const companyIds = new Set<number>();
+  const technicianIds = new Set<number>(extraTechnicianIds);
+  for (const c of counts) {
+    if (c.technician_id === null) companyIds.add(c.company_id);
+    else technicianIds.add(c.technician_id);
+  }
+  return { companyIds: [...companyIds], technicianIds: [...technicianIds] };
+}
+
+const sum = (counts: HolderCount[]) => counts.reduce((n, c) => n + c.count, 0);
+
+/**
+ * The daily lapse job: lapses what ended, creates the due warnings once each, queues their e-mails and in-app
+ * notifications, and recomputes the standings of the holders concerned, all in one transaction behind an advisory lock
+ * (a second instance gets `{ skipped: true }`). Set-based: the statement count does not grow with the data.
+ */
+export async function runLapseJob({ asOf }: { asOf: Date }, deps: LapseJobDeps = {}): Promise<LapseJobResult> {
+  const startedAt = new Date();
+  const sequelize = deps.sequelize ?? db();
+  const config = deps.warningDays && deps.publicUrl ? undefined : loadConfig();
+  const warningDays = deps.warningDays ?? config!.WARNING_DAYS;
+  const base = deps.publicUrl ?? publicUrl(config!);
+  let counter = { count: 0 };
+
+  const outcome = await withAdvisoryLock(
+    sequelize,
+    JOB_LOCK_KEYS.lapse,
+    async (transaction) => {
+      const jobRunId = await startJobRun(transaction, "lapse", asOf, startedAt);
+      const lapsed = await lapseCredentials(transaction, asOf, jobRunId);
+      const warned = await createWarningNotices(transaction, { asOf, thresholds: warningDays, jobRunId });
+      const recipients = await findNoticeRecipients(transaction, jobRunId);
+      const queued = await queueNoticeMessages(transaction, recipients, { asOf, publicUrl: base });
+      const unstored = await techniciansWithoutStanding(transaction);
+      const changedStandings = await refreshStandings(holdersOf([...lapsed, ...warned], unstored), transaction, asOf);
+      const noticesCreated = (lapsed[0]?.noticed ?? 0) + sum(warned);
+      const counts = {
+        lapsed: sum(lapsed),
+        noticesCreated,
+        emailsQueued: queued.emails,
+        changedStandings: changedStandings.length,
+        statements: counter.count + 1 + TRANSACTION_STATEMENTS,
+      };
+      const finishedAt = await finishJobRun(transaction, jobRunId, counts);
+      return { jobRunId, lapsed: counts.lapsed, noticesCreated, emailsQueued: queued.emails, changedStandings, finishedAt };
+    },
+    (transaction) => {
+      counter = countStatements(transaction);
+    },
+  );
+  if (outcome.skipped) return { skipped: true };
+  return { skipped: false, ...outcome.value, statements: counter.count + TRANSACTION_STATEMENTS, startedAt };
+}

@@ -1,0 +1,59 @@
+import cron, { type ScheduledTask } from "node-cron";
+import type { Config } from "../server/config.ts";
+import { log } from "../server/log.ts";
+import { createSmtpMailer, type Mailer } from "../server/mail/index.ts";
+import { runLapseJob } from "./lapse.ts";
+import { runReviewerDigest } from "./reviewer-digest.ts";
+import { runSendOutbox } from "./send-outbox.ts";
+
+export interface RunningSchedule {
+  tasks: ScheduledTask[];
+  stop(): Promise<void>;
+}
+
+function guarded(name: string, work: () => Promise<unknown>) {
+  return async () => {
+    try {
+      const result = await work();
+      log.info({ job: name, result: summarize(result) }, "scheduled job finished");
+    } catch (err) {
+      log.error({ err, job: name }, "scheduled job failed");
+    }
+  };
+}
+
+function summarize(result: unknown): unknown {
+  if (result && typeof result === "object" && "changedStandings" in result) {
+    const { changedStandings, ...rest } = result as { changedStandings: unknown[] };
+    return { ...rest, changedStandings: changedStandings.length };
+  }
+  return result;
+}
+
+/**
+ * The server's timers: the lapse job and the reviewers' digest once a day at JOB_CRON in JOB_TIME_ZONE, and the outbox
+ * every minute. `noOverlap` skips a tick while the previous one still runs; the advisory locks keep other instances out.
+ */
+export function startSchedule(config: Config, deps: { mailer?: Mailer } = {}): RunningSchedule {
+  const mailer = deps.mailer ?? (config.SMTP_URL ? createSmtpMailer(config.SMTP_URL) : undefined);
+  const daily = { timezone: config.JOB_TIME_ZONE, noOverlap: true };
+  const tasks = [
+    cron.schedule(config.JOB_CRON, guarded("lapse", () => runLapseJob({ asOf: new Date() })), { ...daily, name: "lapse" }),
+    cron.schedule(config.JOB_CRON, guarded("reviewer_digest", () => runReviewerDigest({ asOf: new Date() })), { ...daily, name: "reviewer-digest" }),
+  ];
+  if (mailer) {
+    tasks.push(
+      cron.schedule("* * * * *", guarded("outbox", () => runSendOutbox({ asOf: new Date() }, { mailer, from: config.MAIL_FROM })), {
+        name: "outbox",
+        noOverlap: true,
+      }),
+    );
+  }
+  return {
+    tasks,
+    async stop() {
+      for (const task of tasks) await task.stop();
+      if (!deps.mailer) mailer?.close();
+    },
+  };
+}

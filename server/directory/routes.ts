@@ -1,0 +1,18 @@
+import { directoryQuerySchema, technicianProfileQuerySchema } from "../../shared/directory/schemas.ts";
+import { technicianParamsSchema } from "../../shared/technicians/schemas.ts";
+import { createRoutes } from "../http/route.ts";
+import { canSearchDirectory, canViewListedTechnician } from "./policy.ts";
+import { searchDirectory } from "./search.ts";
+import { findDirectoryTechnician } from "./technician-profile.ts";
+
+export const directoryRoutes = createRoutes("/api/directory");
+
+directoryRoutes.get("", { allow: canSearchDirectory, query: directoryQuerySchema }, (req, _res, { query }) =>
+  searchDirectory(req.user!, query),
+);
+
+directoryRoutes.get(
+  "/technicians/:technicianId",
+  { allow: canViewListedTechnician, params: technicianParamsSchema, query: technicianProfileQuerySchema },
+  (req, _res, { params, query }) => findDirectoryTechnician(req.user!, params.technicianId, query.onSiteHours),
+);

@@ -1,0 +1,186 @@
+import { QueryTypes } from "sequelize";
+import {
+  DEFAULT_RADIUS_KM,
+  type DirectoryFilterName,
+  type DirectoryPageDto,
+  type DirectoryQuery,
+  type DirectoryRowDto,
+  type DirectorySort,
+} from "../../shared/directory/schemas.ts";
+import { DEFAULT_PRIOR } from "../../shared/ranking/rating-score.ts";
+import { db } from "../db/sequelize.ts";
+import { AppError } from "../http/app-error.ts";
+import { findShopEquipment, Site } from "../sites/index.ts";
+import { decodeCursor, encodeCursor } from "./cursor.ts";
+import { assumptions, estimateTrip, ratingSummary, SCORE_SOURCE } from "./estimates.ts";
+import { buildFilters, DIRECTORY_FROM, distanceSql, type DirectoryCriteria } from "./search-filters.ts";
+import { SqlParams } from "./sql-params.ts";
+
+interface DirectoryRow {
+  id: number;
+  name: string;
+  company_id: number;
+  company_name: string;
+  technologies: string[];
+  control_families: string[];
+  service_radius_km: number;
+  hourly_rate_cents: number;
+  travel_rate_cents: number;
+  mileage_rate_cents: number;
+  standing: "cleared" | "lapsing";
+  earliest_lapse: Date | null;
+  review_count: number;
+  star_sum: number;
+  distance_km: number | null;
+  sort_key: number;
+}
+
+// "Never lapses" sorts after every real lapse instant (seconds since 1970; year 33658).
+const NEVER_LAPSES_EPOCH = 1e12;
+
+async function ownRequirementSet(companyId: number, id: number): Promise<void> {
+  const rows = await db().query<{ id: number }>("SELECT id FROM requirement_sets WHERE id = $1 AND company_id = $2", {
+    bind: [id, companyId],
+    type: QueryTypes.SELECT,
+  });
+  if (rows.length === 0) throw new AppError("not_found", "That requirement set was not found");
+}
+
+/** Resolves the shop's own site, set and machine (a foreign one answers 404 like a missing one). */
+async function resolveCriteria(buyer: Express.User, query: DirectoryQuery, asOf: Date) {
+  const criteria: DirectoryCriteria = {
+    asOf,
+    credentialTypes: query.credentialTypes,
+    technology: query.technology,
+    generalLiability: { eachOccurrence: query.minEachOccurrence, aggregate: query.minAggregate },
+    autoCombinedSingleLimit: query.minAutoCsl,
+    requirementSetId: query.requirementSetId,
+    minRating: query.minRating,
+    q: query.q,
+  };
+  let controlFamily = query.controlFamily;
+  let fromEquipment: DirectoryPageDto["fromEquipment"] = null;
+  if (query.equipmentId !== undefined) {
+    const machine = await findShopEquipment(buyer.companyId, query.equipmentId);
+    if (!machine) throw new AppError("not_found", "That machine was not found");
+    fromEquipment = { technology: machine.technology, controlFamily: machine.controlFamily };
+    criteria.technology ??= machine.technology;
+    controlFamily ??= machine.controlFamily;
+  }
+  criteria.oem = { builder: query.oemBuilder, controlFamily, minLevel: query.minOemLevel };
+  if (query.requirementSetId !== undefined) await ownRequirementSet(buyer.companyId, query.requirementSetId);
+  if (query.siteId !== undefined) {
+    const site = await Site.findByPk(query.siteId, { attributes: ["companyId", "latitude", "longitude"] });
+    if (!site || site.companyId !== buyer.companyId) throw new AppError("not_found", "That site was not found");
+    criteria.site = { latitude: site.latitude, longitude: site.longitude, radiusKm: query.radiusKm ?? DEFAULT_RADIUS_KM };
+  }
+  return { criteria, fromEquipment };
+}
+
+function sortKeySql(sort: DirectorySort, distance: string | null, p: SqlParams): string {
+  switch (sort) {
+    case "distance":
+      return distance ?? "0";
+    case "score": {
+      // Highest score first: the key is the negated Bayesian average, so every sort pages ascending on (key, id).
+      const weight = p.add(DEFAULT_PRIOR.weight);
+      const mean = p.add(DEFAULT_PRIOR.mean);
+      return `-((${weight}::float8 * ${mean}::float8 + coalesce(r.star_sum, 0)) / (${weight}::float8 + coalesce(r.review_count, 0)))`;
+    }
+    case "hourlyRate":
+      return "t.hourly_rate_cents::float8";
+    case "soonestLapse":
+      return `coalesce(extract(epoch FROM b.earliest_lapse)::float8, ${NEVER_LAPSES_EPOCH}::float8)`;
+  }
+}
+
+function toRowDto(row: DirectoryRow, onSiteHours: number): DirectoryRowDto {
+  const rates = { hourlyRateCents: row.hourly_rate_cents, travelRateCents: row.travel_rate_cents, mileageRateCents: row.mileage_rate_cents };
+  const trip = row.distance_km === null ? null : estimateTrip(Number(row.distance_km), rates, onSiteHours);
+  return {
+    technicianId: row.id,
+    name: row.name,
+    companyId: row.company_id,
+    companyName: row.company_name,
+    technologies: row.technologies,
+    controlFamilies: row.control_families,
+    serviceRadiusKm: row.service_radius_km,
+    distanceKm: trip?.distanceKm ?? null,
+    distanceMiles: trip?.distanceMiles ?? null,
+    roadMiles: trip?.roadMiles ?? null,
+    driveHours: trip?.driveHours ?? null,
+    callOut: trip?.callOut ?? null,
+    rating: ratingSummary(row.review_count, row.star_sum),
+    standing: row.standing,
+    earliestLapse: row.earliest_lapse ? new Date(row.earliest_lapse).toISOString() : null,
+    ...rates,
+  };
+}
+
+/**
+ * With an empty first page: counts, in one scan, the candidates left when each filter in turn is dropped; the filter
+ * whose removal brings back the most is the one to loosen. One statement whatever the number of filters.
+ */
+async function findEmptyReason(criteria: DirectoryCriteria): Promise<DirectoryPageDto["emptyReason"]> {
+  const p = new SqlParams();
+  const filters = buildFilters(p, criteria);
+  if (filters.length === 0) return null;
+  const columns = filters.map((_f, i) => {
+    const others = filters.filter((_g, j) => j !== i).map((g) => `(${g.sql})`);
+    return `count(*) FILTER (WHERE ${others.length ? others.join(" AND ") : "true"})::int AS f${i}`;
+  });
+  const [counts] = await db().query<Record<string, number>>(`SELECT ${columns.join(", ")} ${DIRECTORY_FROM}`, {
+    bind: p.values,
+    type: QueryTypes.SELECT,
+  });
+  let best: { filter: DirectoryFilterName; removed: number } | null = null;
+  filters.forEach((f, i) => {
+    const removed = counts?.[`f${i}`] ?? 0;
+    if (best === null || removed > best.removed) best = { filter: f.name, removed };
+  });
+  return best;
+}
+
+/** The directory: one keyset-paged SQL query over listable technicians, estimates computed by the shared code. */
+export async function searchDirectory(buyer: Express.User, query: DirectoryQuery, asOf = new Date()): Promise<DirectoryPageDto> {
+  const { criteria, fromEquipment } = await resolveCriteria(buyer, query, asOf);
+  const sort: DirectorySort = query.sort ?? (criteria.site ? "distance" : "score");
+  if (sort === "distance" && !criteria.site) {
+    throw new AppError("bad_request", "Sorting by distance needs a site", [{ path: "query.sort", message: "choose a site first" }]);
+  }
+  const cursor = query.cursor ? decodeCursor(query.cursor, sort) : null;
+
+  const p = new SqlParams();
+  const distance = criteria.site ? distanceSql(p, criteria.site) : null;
+  const sortKey = sortKeySql(sort, distance, p);
+  const filters = buildFilters(p, criteria);
+  const where = filters.map((f) => ` AND (${f.sql})`).join("");
+  const after = cursor ? `WHERE (x.sort_key, x.id) > (${p.add(cursor.key)}::float8, ${p.add(cursor.id)}::int)` : "";
+  const limit = p.add(query.limit + 1);
+  const rows = await db().query<DirectoryRow>(
+    `SELECT x.* FROM (
+       SELECT t.id, t.name, t.company_id, c.name AS company_name, t.technologies, t.control_families, t.service_radius_km,
+              t.hourly_rate_cents, t.travel_rate_cents, t.mileage_rate_cents, b.standing, b.earliest_lapse,
+              coalesce(r.review_count, 0)::int AS review_count, coalesce(r.star_sum, 0)::int AS star_sum,
+              ${distance ?? "NULL::float8"} AS distance_km, ${sortKey} AS sort_key
+       ${DIRECTORY_FROM}${where}
+     ) x ${after}
+     ORDER BY x.sort_key, x.id
+     LIMIT ${limit}`,
+    { bind: p.values, type: QueryTypes.SELECT },
+  );
+
+  const page = rows.slice(0, query.limit);
+  const last = page[page.length - 1];
+  const nextCursor = rows.length > query.limit && last ? encodeCursor({ sort, key: Number(last.sort_key), id: last.id }) : null;
+  const emptyReason = page.length === 0 && !cursor ? await findEmptyReason(criteria) : null;
+  return {
+    rows: page.map((r) => toRowDto(r, query.onSiteHours)),
+    nextCursor,
+    sort,
+    emptyReason,
+    fromEquipment,
+    scoreSource: SCORE_SOURCE,
+    assumptions: assumptions(query.onSiteHours),
+  };
+}

@@ -1,0 +1,66 @@
+import { DateTime } from "luxon";
+import { daysUntil } from "../../shared/standing/warning-windows.ts";
+
+/** One recipient of one notice, as the job's recipient query returns it. */
+export interface NoticeRecipient {
+  noticeId: number;
+  thresholdDays: number;
+  lapsesAt: Date;
+  credentialId: number;
+  typeCode: string;
+  typeName: string;
+  companyName: string;
+  timeZone: string;
+  technicianId: number | null;
+  technicianName: string | null;
+  userId: number;
+  role: "provider_admin" | "technician";
+  email: string;
+  userName: string;
+}
+
+export interface RenderedNotice {
+  subject: string;
+  text: string;
+  html: string;
+  title: string;
+  body: string;
+  link: string;
+  kind: "credential_lapsing" | "credential_lapsed";
+}
+
+const escapeHtml = (s: string) =>
+  s.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;").replace(/'/g, "&#39;");
+
+/** The client's upload flow with the type (and holder) chosen already: the office's documents page, or a technician's own card upload. */
+export function renewalPath(r: Pick<NoticeRecipient, "role" | "typeCode" | "technicianId">): string {
+  const type = encodeURIComponent(r.typeCode);
+  if (r.role === "technician") return `/technician/upload-card?type=${type}`;
+  return r.technicianId === null ? `/provider/documents/new?type=${type}` : `/provider/documents/new?type=${type}&technicianId=${r.technicianId}`;
+}
+
+/** The lapse instant on the recipient company's wall clock, e.g. "Thursday, July 15, 2027 at 1:01 AM CDT". */
+export function formatLapseInstant(lapsesAt: Date, timeZone: string): string {
+  return DateTime.fromJSDate(lapsesAt, { zone: timeZone }).toFormat("cccc, LLLL d, yyyy 'at' h:mm a ZZZZ");
+}
+
+/** Plain-text and HTML e-mail plus the in-app wording for one notice to one recipient. */
+export function renderLapseNotice(r: NoticeRecipient, asOf: Date, publicUrl: string): RenderedNotice {
+  const holder = r.technicianName ? `${r.technicianName} (${r.companyName})` : r.companyName;
+  const when = formatLapseInstant(r.lapsesAt, r.timeZone);
+  const link = `${publicUrl.replace(/\/$/, "")}${renewalPath(r)}`;
+  const lapsed = r.thresholdDays === 0;
+  const days = Math.max(daysUntil(r.lapsesAt, asOf), 0);
+  const title = lapsed ? `Lapsed: ${r.typeName} for ${holder}` : `${r.typeName} for ${holder} lapses in ${days} day${days === 1 ? "" : "s"}`;
+  const body = lapsed
+    ? `${r.typeName} held by ${holder} lapsed on ${when}. It no longer counts toward standing; upload and verify a renewal to restore it.`
+    : `${r.typeName} held by ${holder} lapses on ${when}. Upload the renewal before then so the standing stays cleared.`;
+  const text = [`Hello ${r.userName},`, "", body, "", `Upload the renewal: ${link}`, "", "Clearbench"].join("\n");
+  const html = [
+    `<p>Hello ${escapeHtml(r.userName)},</p>`,
+    `<p>${escapeHtml(body)}</p>`,
+    `<p><a href="${escapeHtml(link)}">Upload the renewal</a></p>`,
+    "<p>Clearbench</p>",
+  ].join("\n");
+  return { subject: title, text, html, title, body, link, kind: lapsed ? "credential_lapsed" : "credential_lapsing" };
+}

@@ -1,0 +1,125 @@
+import type { Transaction } from "sequelize";
+import { runStatement, selectRows } from "../standing/index.ts";
+import { renderLapseNotice, type NoticeRecipient } from "./lapse-email.ts";
+
+export interface HolderCount {
+  company_id: number;
+  technician_id: number | null;
+  count: number;
+}
+
+/**
+ * Warning notices for verified credentials whose lapse instant falls inside a warning window: one per credential per
+ * threshold, the smallest window we are inside (the same rule as shared dueThreshold: remaining time <= N days of 24 h),
+ * so a missed run still sends the one notice that matters. The unique constraint, not code, stops a second copy.
+ */
+export async function createWarningNotices(
+  transaction: Transaction,
+  options: { asOf: Date; thresholds: readonly number[]; jobRunId: number },
+): Promise<HolderCount[]> {
+  const widest = Math.max(...options.thresholds);
+  return selectRows<HolderCount>(
+    transaction,
+    `WITH due AS (
+       SELECT c.id, c.company_id, c.technician_id, c.lapses_at,
+              (SELECT min(d) FROM unnest($2::int[]) AS d WHERE c.lapses_at <= $1::timestamptz + d * interval '24 hours') AS threshold_days
+         FROM credentials c
+        WHERE c.state = 'verified' AND c.lapses_at > $1::timestamptz AND c.lapses_at <= $1::timestamptz + $3::int * interval '24 hours'
+     ), noticed AS (
+       INSERT INTO notices (credential_id, threshold_days, lapses_at, job_run_id)
+       SELECT id, threshold_days, lapses_at, $4 FROM due
+       ON CONFLICT ON CONSTRAINT notices_once_per_threshold DO NOTHING
+       RETURNING credential_id
+     )
+     SELECT d.company_id, d.technician_id, count(*)::int AS count
+       FROM due d JOIN noticed n ON n.credential_id = d.id
+      GROUP BY d.company_id, d.technician_id`,
+    [options.asOf, options.thresholds.filter((d) => d > 0), widest, options.jobRunId],
+  );
+}
+
+interface RecipientRow {
+  notice_id: number;
+  threshold_days: number;
+  lapses_at: Date;
+  credential_id: number;
+  type_code: string;
+  type_name: string;
+  company_name: string;
+  time_zone: string;
+  technician_id: number | null;
+  technician_name: string | null;
+  user_id: number;
+  role: "provider_admin" | "technician";
+  email: string;
+  user_name: string;
+}
+
+/** Who hears about the notices of one run: the company's provider admins and, for a technician's own card, that technician. */
+export async function findNoticeRecipients(transaction: Transaction, jobRunId: number): Promise<NoticeRecipient[]> {
+  const rows = await selectRows<RecipientRow>(
+    transaction,
+    `SELECT n.id AS notice_id, n.threshold_days, n.lapses_at, c.id AS credential_id, c.type_code, ct.name AS type_name,
+            co.name AS company_name, co.time_zone, c.technician_id, t.name AS technician_name,
+            u.id AS user_id, u.email, u.name AS user_name, u.role
+       FROM notices n
+       JOIN credentials c ON c.id = n.credential_id
+       JOIN credential_types ct ON ct.code = c.type_code
+       JOIN companies co ON co.id = c.company_id
+       LEFT JOIN technicians t ON t.id = c.technician_id
+       JOIN users u ON u.active AND (
+             (u.role = 'provider_admin' AND u.company_id = c.company_id)
+          OR (u.role = 'technician' AND c.technician_id IS NOT NULL AND u.technician_id = c.technician_id))
+      WHERE n.job_run_id = $1
+      ORDER BY n.id, u.id`,
+    [jobRunId],
+  );
+  return rows.map((r) => ({
+    noticeId: r.notice_id,
+    thresholdDays: r.threshold_days,
+    lapsesAt: new Date(r.lapses_at),
+    credentialId: r.credential_id,
+    typeCode: r.type_code,
+    typeName: r.type_name,
+    companyName: r.company_name,
+    timeZone: r.time_zone,
+    technicianId: r.technician_id,
+    technicianName: r.technician_name,
+    userId: r.user_id,
+    role: r.role,
+    email: r.email,
+    userName: r.user_name,
+  }));
+}
+
+// Rows per bulk insert: each statement binds one JSON array.
+const INSERT_CHUNK = 2_000;
+
+/**
+ * Each recipient of each new notice gets an outbox row (e-mail) and an in-app notification, written as two bulk
+ * INSERT ... SELECT statements per chunk, in the job's transaction: if the run rolls back, nothing is queued.
+ */
+export async function queueNoticeMessages(
+  transaction: Transaction,
+  recipients: readonly NoticeRecipient[],
+  options: { asOf: Date; publicUrl: string },
+): Promise<{ emails: number; notifications: number }> {
+  for (let i = 0; i < recipients.length; i += INSERT_CHUNK) {
+    const rendered = recipients.slice(i, i + INSERT_CHUNK).map((r) => ({ r, m: renderLapseNotice(r, options.asOf, options.publicUrl) }));
+    await runStatement(
+      transaction,
+      `INSERT INTO outbox_messages (to_address, subject, text_body, html_body)
+       SELECT to_address, subject, text_body, html_body
+         FROM jsonb_to_recordset($1::jsonb) AS m(to_address text, subject text, text_body text, html_body text)`,
+      [JSON.stringify(rendered.map(({ r, m }) => ({ to_address: r.email, subject: m.subject, text_body: m.text, html_body: m.html })))],
+    );
+    await runStatement(
+      transaction,
+      `INSERT INTO notifications (user_id, kind, title, body, link, notice_id)
+       SELECT user_id, kind, title, body, link, notice_id
+         FROM jsonb_to_recordset($1::jsonb) AS m(user_id int, kind text, title text, body text, link text, notice_id int)`,
+      [JSON.stringify(rendered.map(({ r, m }) => ({ user_id: r.userId, kind: m.kind, title: m.title, body: m.body, link: m.link, notice_id: r.noticeId })))],
+    );
+  }
+  return { emails: recipients.length, notifications: recipients.length };
+}

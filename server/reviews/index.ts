@@ -1,0 +1,2 @@
+export { reviewRoutes } from "./routes.ts";
+export { JobReview, initReviewModel } from "./model.ts";

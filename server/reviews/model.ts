@@ -1,0 +1,40 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
+
+export class JobReview extends Model<InferAttributes<JobReview>, InferCreationAttributes<JobReview>> {
+  declare id: CreationOptional<number>;
+  declare workOrderId: number;
+  declare technicianId: number;
+  declare shopCompanyId: number;
+  declare authorUserId: number;
+  declare stars: number;
+  declare body: string;
+  declare reply: CreationOptional<string | null>;
+  declare repliedBy: CreationOptional<number | null>;
+  declare repliedAt: CreationOptional<Date | null>;
+  declare reportedAt: CreationOptional<Date | null>;
+  declare reportReason: CreationOptional<string | null>;
+  declare reportedBy: CreationOptional<number | null>;
+  declare createdAt: CreationOptional<Date>;
+}
+
+export function initReviewModel(sequelize: Sequelize) {
+  JobReview.init(
+    {
+      id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
+      workOrderId: { type: DataTypes.INTEGER, allowNull: false },
+      technicianId: { type: DataTypes.INTEGER, allowNull: false },
+      shopCompanyId: { type: DataTypes.INTEGER, allowNull: false },
+      authorUserId: { type: DataTypes.INTEGER, allowNull: false },
+      stars: { type: DataTypes.SMALLINT, allowNull: false },
+      body: { type: DataTypes.TEXT, allowNull: false },
+      reply: { type: DataTypes.TEXT, allowNull: true },
+      repliedBy: { type: DataTypes.INTEGER, allowNull: true },
+      repliedAt: { type: DataTypes.DATE, allowNull: true },
+      reportedAt: { type: DataTypes.DATE, allowNull: true },
+      reportReason: { type: DataTypes.TEXT, allowNull: true },
+      reportedBy: { type: DataTypes.INTEGER, allowNull: true },
+      createdAt: DataTypes.DATE,
+    },
+    { sequelize, tableName: "job_reviews", underscored: true, updatedAt: false },
+  );
+}

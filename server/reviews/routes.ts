@@ -1,0 +1,51 @@
+import {
+  replyToReviewSchema,
+  reportReviewSchema,
+  reviewParamsSchema,
+  technicianReviewsParamsSchema,
+  technicianReviewsQuerySchema,
+  writeReviewSchema,
+} from "../../shared/reviews/schemas.ts";
+import { workOrderParamsSchema } from "../../shared/work-orders/schemas.ts";
+import { createRoutes } from "../http/route.ts";
+import {
+  canModerateReviews,
+  canReadTechnicianReviews,
+  canReadWorkOrderReview,
+  canReplyToReview,
+  canReportReview,
+  canWriteReview,
+} from "./policy.ts";
+import { writeReview } from "./write-review.ts";
+import { replyToReview, reportReview } from "./answer-review.ts";
+import { findWorkOrderReview, listReportedReviews, listTechnicianReviews } from "./find-reviews.ts";
+
+export const reviewRoutes = createRoutes("/api");
+
+reviewRoutes.post(
+  "/work-orders/:workOrderId/review",
+  { allow: canWriteReview, params: workOrderParamsSchema, body: writeReviewSchema },
+  async (req, res, { params, body }) => {
+    res.status(201).json(await writeReview(req.user!, params.workOrderId, body));
+  },
+);
+
+reviewRoutes.get("/work-orders/:workOrderId/review", { allow: canReadWorkOrderReview, params: workOrderParamsSchema }, (_req, _res, { params }) =>
+  findWorkOrderReview(params.workOrderId),
+);
+
+reviewRoutes.post("/reviews/:reviewId/reply", { allow: canReplyToReview, params: reviewParamsSchema, body: replyToReviewSchema }, (req, _res, { params, body }) =>
+  replyToReview(req.user!, params.reviewId, body.body),
+);
+
+reviewRoutes.post("/reviews/:reviewId/report", { allow: canReportReview, params: reviewParamsSchema, body: reportReviewSchema }, (req, _res, { params, body }) =>
+  reportReview(req.user!, params.reviewId, body.reason),
+);
+
+reviewRoutes.get("/admin/reviews/reported", { allow: canModerateReviews }, () => listReportedReviews());
+
+reviewRoutes.get(
+  "/technicians/:technicianId/reviews",
+  { allow: canReadTechnicianReviews, params: technicianReviewsParamsSchema, query: technicianReviewsQuerySchema },
+  (_req, _res, { params, query }) => listTechnicianReviews(params.technicianId, query),
+);

@@ -1,0 +1,61 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
+import type { MachineTechnology } from "../../shared/technicians/schemas.ts";
+
+export class Site extends Model<InferAttributes<Site>, InferCreationAttributes<Site>> {
+  declare id: CreationOptional<number>;
+  declare companyId: number;
+  declare name: string;
+  declare addressLine: string;
+  declare postalCode: string;
+  declare timeZone: string;
+  declare latitude: number;
+  declare longitude: number;
+  declare active: CreationOptional<boolean>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+}
+
+export class Equipment extends Model<InferAttributes<Equipment>, InferCreationAttributes<Equipment>> {
+  declare id: CreationOptional<number>;
+  declare siteId: number;
+  declare builder: string;
+  declare controlFamily: string;
+  declare technology: MachineTechnology;
+  declare model: string;
+  declare serialNumber: string | null;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+}
+
+export function initSiteModels(sequelize: Sequelize) {
+  Site.init(
+    {
+      id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
+      companyId: { type: DataTypes.INTEGER, allowNull: false },
+      name: { type: DataTypes.STRING(160), allowNull: false },
+      addressLine: { type: DataTypes.STRING(200), allowNull: false },
+      postalCode: { type: DataTypes.STRING(10), allowNull: false },
+      timeZone: { type: DataTypes.STRING(64), allowNull: false },
+      latitude: { type: DataTypes.DOUBLE, allowNull: false },
+      longitude: { type: DataTypes.DOUBLE, allowNull: false },
+      active: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
+      createdAt: DataTypes.DATE,
+      updatedAt: DataTypes.DATE,
+    },
+    { sequelize, tableName: "sites", underscored: true },
+  );
+  Equipment.init(
+    {
+      id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
+      siteId: { type: DataTypes.INTEGER, allowNull: false },
+      builder: { type: DataTypes.STRING(120), allowNull: false },
+      controlFamily: { type: DataTypes.STRING(120), allowNull: false },
+      technology: { type: DataTypes.STRING(40), allowNull: false },
+      model: { type: DataTypes.STRING(120), allowNull: false },
+      serialNumber: { type: DataTypes.STRING(80), allowNull: true },
+      createdAt: DataTypes.DATE,
+      updatedAt: DataTypes.DATE,
+    },
+    { sequelize, tableName: "equipment", underscored: true },
+  );
+}

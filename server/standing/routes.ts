@@ -1,0 +1,78 @@
+import {
+  baselineInputSchema,
+  listRequirementSetsQuerySchema,
+  requirementSetInputSchema,
+  requirementSetParamsSchema,
+  technicianStandingParamsSchema,
+} from "../../shared/standing/schemas.ts";
+import { createRoutes } from "../http/route.ts";
+import { readBaseline, reviseBaseline } from "./baseline.ts";
+import { listJobRuns } from "./job-runs.ts";
+import {
+  canEditBaseline,
+  canListRequirementSets,
+  canManageRequirementSet,
+  canReadBaseline,
+  canReadJobRuns,
+  canViewTechnicianStanding,
+} from "./policy.ts";
+import {
+  archiveRequirementSet,
+  defineRequirementSet,
+  findRequirementSet,
+  listRequirementSets,
+  previewRequirementSet,
+  previewUnsavedRequirementSet,
+  reviseRequirementSet,
+} from "./requirement-sets.ts";
+import { readTechnicianStanding } from "./technician-standing.ts";
+
+export const standingRoutes = createRoutes("/api");
+
+standingRoutes.get("/baseline", { allow: canReadBaseline }, () => readBaseline());
+
+standingRoutes.put("/admin/baseline", { allow: canEditBaseline, body: baselineInputSchema }, (req, _res, { body }) =>
+  reviseBaseline(req.user!, body),
+);
+
+standingRoutes.get("/admin/job-runs", { allow: canReadJobRuns }, () => listJobRuns());
+
+standingRoutes.get("/requirement-sets", { allow: canListRequirementSets, query: listRequirementSetsQuerySchema }, (req, _res, { query }) =>
+  listRequirementSets(req.user!, query.includeArchived),
+);
+
+standingRoutes.post("/requirement-sets", { allow: canListRequirementSets, body: requirementSetInputSchema }, async (req, res, { body }) => {
+  res.status(201).json(await defineRequirementSet(req.user!, body));
+});
+
+standingRoutes.post("/requirement-sets/preview", { allow: canListRequirementSets, body: requirementSetInputSchema }, (_req, _res, { body }) =>
+  previewUnsavedRequirementSet(body),
+);
+
+standingRoutes.get("/requirement-sets/:requirementSetId", { allow: canManageRequirementSet, params: requirementSetParamsSchema }, (req, _res, { params }) =>
+  findRequirementSet(req.user!, params.requirementSetId),
+);
+
+standingRoutes.put(
+  "/requirement-sets/:requirementSetId",
+  { allow: canManageRequirementSet, params: requirementSetParamsSchema, body: requirementSetInputSchema },
+  (req, _res, { params, body }) => reviseRequirementSet(req.user!, params.requirementSetId, body),
+);
+
+standingRoutes.delete(
+  "/requirement-sets/:requirementSetId",
+  { allow: canManageRequirementSet, params: requirementSetParamsSchema },
+  (req, _res, { params }) => archiveRequirementSet(req.user!, params.requirementSetId),
+);
+
+standingRoutes.get(
+  "/requirement-sets/:requirementSetId/preview",
+  { allow: canManageRequirementSet, params: requirementSetParamsSchema },
+  (req, _res, { params }) => previewRequirementSet(req.user!, params.requirementSetId),
+);
+
+standingRoutes.get(
+  "/technicians/:technicianId/standing",
+  { allow: canViewTechnicianStanding, params: technicianStandingParamsSchema },
+  (_req, _res, { params }) => readTechnicianStanding(params.technicianId),
+);

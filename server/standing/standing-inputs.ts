@@ -1,0 +1,162 @@
+import type { Transaction } from "sequelize";
+import type { CredentialTypeDefinition } from "../../shared/credentials/catalogue.ts";
+import { fieldSetSchemas } from "../../shared/credentials/credential-fields.ts";
+import type { Requirement } from "../../shared/standing/requirements.ts";
+import type { CredentialState, StandingCredential } from "../../shared/standing/standing-types.ts";
+import { log } from "../log.ts";
+import { selectRows } from "./sql.ts";
+
+export interface StandingTechnician {
+  id: number;
+  companyId: number;
+  active: boolean;
+  timeZone: string;
+}
+
+/** A requirement set as the engine needs it; `id` null = the platform baseline. */
+export interface StandingTarget {
+  id: number | null;
+  name: string;
+  requirements: Requirement[];
+}
+
+export interface StandingInputs {
+  technicians: StandingTechnician[];
+  companyCredentials: Map<number, StandingCredential[]>;
+  technicianCredentials: Map<number, StandingCredential[]>;
+  types: Map<string, CredentialTypeDefinition>;
+  targets: StandingTarget[];
+}
+
+/** Which technicians to load: everyone, or the technicians of some companies plus some named technicians. */
+export type HolderSelection = "all" | { companyIds: number[]; technicianIds: number[] };
+
+interface TechnicianRow {
+  id: number;
+  company_id: number;
+  active: boolean;
+  time_zone: string;
+}
+interface CredentialRow {
+  id: number;
+  type_code: string;
+  company_id: number;
+  technician_id: number | null;
+  state: CredentialState;
+  fields: unknown;
+}
+interface TypeRow {
+  code: string;
+  name: string;
+  category: CredentialTypeDefinition["category"];
+  holder: CredentialTypeDefinition["holder"];
+  field_set: CredentialTypeDefinition["fieldSet"];
+  validity: CredentialTypeDefinition["validity"];
+  description: string;
+}
+interface TargetRow {
+  id: number | null;
+  name: string;
+  requirements: Requirement[];
+}
+
+const TECHNICIANS_SQL = `SELECT t.id, t.company_id, t.active, co.time_zone
+  FROM technicians t JOIN companies co ON co.id = t.company_id`;
+
+async function loadTechnicians(selection: HolderSelection, transaction: Transaction): Promise<StandingTechnician[]> {
+  const rows =
+    selection === "all"
+      ? await selectRows<TechnicianRow>(transaction, `${TECHNICIANS_SQL} ORDER BY t.id`)
+      : await selectRows<TechnicianRow>(
+          transaction,
+          `${TECHNICIANS_SQL} WHERE t.company_id = ANY($1::int[]) OR t.id = ANY($2::int[]) ORDER BY t.id`,
+          [selection.companyIds, selection.technicianIds],
+        );
+  return rows.map((r) => ({ id: r.id, companyId: r.company_id, active: r.active, timeZone: r.time_zone }));
+}
+
+// Superseded credentials never count (a newer one of the same type was verified); lapsed and returned ones stay so the
+// engine can say why a requirement is unmet.
+const CREDENTIALS_SQL = `SELECT id, type_code, company_id, technician_id, state, fields FROM credentials WHERE state <> 'superseded'`;
+
+async function loadCredentials(technicians: StandingTechnician[], all: boolean, transaction: Transaction) {
+  if (all) return selectRows<CredentialRow>(transaction, CREDENTIALS_SQL);
+  const companyIds = [...new Set(technicians.map((t) => t.companyId))];
+  return selectRows<CredentialRow>(
+    transaction,
+    `${CREDENTIALS_SQL} AND ((technician_id IS NULL AND company_id = ANY($1::int[])) OR technician_id = ANY($2::int[]))`,
+    [companyIds, technicians.map((t) => t.id)],
+  );
+}
+
+export async function loadCredentialTypes(transaction: Transaction): Promise<Map<string, CredentialTypeDefinition>> {
+  const rows = await selectRows<TypeRow>(
+    transaction,
+    "SELECT code, name, category, holder, field_set, validity, description FROM credential_types",
+  );
+  return new Map(
+    rows.map((r) => [
+      r.code,
+      { code: r.code, name: r.name, category: r.category, holder: r.holder, fieldSet: r.field_set, validity: r.validity, description: r.description },
+    ]),
+  );
+}
+
+/** The baseline first, then every active requirement set (or only the named ones). */
+export async function loadTargets(transaction: Transaction, setIds?: number[]): Promise<StandingTarget[]> {
+  const onlySets = setIds !== undefined;
+  return selectRows<TargetRow>(
+    transaction,
+    `SELECT NULL::int AS id, 'Platform baseline' AS name, requirements FROM platform_baseline WHERE NOT $1::boolean
+     UNION ALL
+     SELECT id, name, requirements FROM requirement_sets WHERE active AND (NOT $1::boolean OR id = ANY($2::int[]))
+     ORDER BY id NULLS FIRST`,
+    [onlySets, setIds ?? []],
+  );
+}
+
+function toStandingCredential(row: CredentialRow, types: Map<string, CredentialTypeDefinition>): StandingCredential | null {
+  const type = types.get(row.type_code);
+  if (!type) return null;
+  const parsed = fieldSetSchemas[type.fieldSet].safeParse(row.fields);
+  if (!parsed.success) {
+    // A credential whose stored fields no longer parse cannot count; the standing then says the requirement is missing.
+    log.warn({ credentialId: row.id }, "credential fields do not parse; left out of standing");
+    return null;
+  }
+  return {
+    id: row.id,
+    typeCode: row.type_code,
+    state: row.state,
+    fields: parsed.data,
+    holder: row.technician_id === null ? "company" : "technician",
+  };
+}
+
+function push<K>(map: Map<K, StandingCredential[]>, key: K, value: StandingCredential) {
+  const list = map.get(key);
+  if (list) list.push(value);
+  else map.set(key, [value]);
+}
+
+export async function loadStandingInputs(
+  selection: HolderSelection,
+  transaction: Transaction,
+  options: { targets?: StandingTarget[] } = {},
+): Promise<StandingInputs> {
+  const technicians = await loadTechnicians(selection, transaction);
+  const [types, targets] = await Promise.all([
+    loadCredentialTypes(transaction),
+    options.targets ? Promise.resolve(options.targets) : loadTargets(transaction),
+  ]);
+  const rows = technicians.length ? await loadCredentials(technicians, selection === "all", transaction) : [];
+  const companyCredentials = new Map<number, StandingCredential[]>();
+  const technicianCredentials = new Map<number, StandingCredential[]>();
+  for (const row of rows) {
+    const credential = toStandingCredential(row, types);
+    if (!credential) continue;
+    if (row.technician_id === null) push(companyCredentials, row.company_id, credential);
+    else push(technicianCredentials, row.technician_id, credential);
+  }
+  return { technicians, companyCredentials, technicianCredentials, types, targets };
+}

@@ -1,0 +1,12 @@
+import { loadConfig } from "../config.ts";
+
+let windowDays: number | undefined;
+
+/**
+ * A requirement is "lapsing" inside the widest configured warning window (config WARNING_DAYS), so the first warning
+ * e-mail and the "Lapsing" badge appear together. Read once: the server, the job and the check must all agree.
+ */
+export function lapsingWindowDays(): number {
+  windowDays ??= Math.max(...loadConfig().WARNING_DAYS);
+  return windowDays;
+}

@@ -1,0 +1,3 @@
+export { workOrderRoutes } from "./routes.ts";
+export { WorkOrder, initWorkOrderModels } from "./model.ts";
+export { sideOf } from "./policy.ts";

@@ -1,0 +1,104 @@
+import {
+  completeWorkOrderSchema,
+  declineWorkOrderSchema,
+  listWorkOrdersQuerySchema,
+  messageFileParamsSchema,
+  postMessageSchema,
+  raiseWorkOrderSchema,
+  standingProofQuerySchema,
+  workOrderParamsSchema,
+} from "../../shared/work-orders/schemas.ts";
+import type { Request } from "express";
+import { createRoutes } from "../http/route.ts";
+import { singleFileUpload } from "../http/upload.ts";
+import { appConfig, linkBase } from "../http/app-locals.ts";
+import { appStorage } from "../storage/index.ts";
+import { kickOutbox } from "../mail/index.ts";
+import { canListWorkOrders, canRaiseWorkOrders, canSeeWorkOrder } from "./policy.ts";
+import { raiseWorkOrder } from "./raise-work-order.ts";
+import { acceptWorkOrder, completeWorkOrder, confirmWorkOrder, declineWorkOrder } from "./move-work-order.ts";
+import { findWorkOrder, listWorkOrders } from "./find-work-orders.ts";
+import { listMessages, postMessage, sendMessageFile } from "./work-order-messages.ts";
+import { removeUpload } from "./attachment-file.ts";
+import { sendStandingProof } from "./standing-proof.ts";
+
+export const workOrderRoutes = createRoutes("/api/work-orders");
+
+// "Lapsing" means inside the widest warning window, as in the stored standings and the daily job.
+const warningDays = (req: Request) => Math.max(...appConfig(req).WARNING_DAYS);
+const linkTo = (req: Request) => (id: number) => `${linkBase(req)}/work-orders/${id}`;
+
+workOrderRoutes.post("", { allow: canRaiseWorkOrders, body: raiseWorkOrderSchema }, async (req, res, { body }) => {
+  const dto = await raiseWorkOrder(req.user!, body, warningDays(req), linkTo(req));
+  kickOutbox(req.app.locals);
+  res.status(201).json(dto);
+});
+
+workOrderRoutes.get("", { allow: canListWorkOrders, query: listWorkOrdersQuerySchema }, (req, _res, { query }) => listWorkOrders(req.user!, query.status));
+
+workOrderRoutes.get("/:workOrderId", { allow: canSeeWorkOrder, params: workOrderParamsSchema }, (req, _res, { params }) =>
+  findWorkOrder(req.user!, params.workOrderId),
+);
+
+workOrderRoutes.post("/:workOrderId/accept", { allow: canSeeWorkOrder, params: workOrderParamsSchema }, async (req, _res, { params }) => {
+  const dto = await acceptWorkOrder(req.user!, params.workOrderId, warningDays(req), linkTo(req)(params.workOrderId));
+  kickOutbox(req.app.locals);
+  return dto;
+});
+
+workOrderRoutes.post(
+  "/:workOrderId/decline",
+  { allow: canSeeWorkOrder, params: workOrderParamsSchema, body: declineWorkOrderSchema },
+  async (req, _res, { params, body }) => {
+    const dto = await declineWorkOrder(req.user!, params.workOrderId, body.reason, linkTo(req)(params.workOrderId));
+    kickOutbox(req.app.locals);
+    return dto;
+  },
+);
+
+workOrderRoutes.post(
+  "/:workOrderId/complete",
+  { allow: canSeeWorkOrder, params: workOrderParamsSchema, body: completeWorkOrderSchema },
+  async (req, _res, { params, body }) => {
+    const dto = await completeWorkOrder(req.user!, params.workOrderId, body, warningDays(req), linkTo(req)(params.workOrderId));
+    kickOutbox(req.app.locals);
+    return dto;
+  },
+);
+
+workOrderRoutes.post("/:workOrderId/confirm", { allow: canSeeWorkOrder, params: workOrderParamsSchema }, async (req, _res, { params }) => {
+  const dto = await confirmWorkOrder(req.user!, params.workOrderId, linkTo(req)(params.workOrderId));
+  kickOutbox(req.app.locals);
+  return dto;
+});
+
+workOrderRoutes.get(
+  "/:workOrderId/standing-proof",
+  { allow: canSeeWorkOrder, params: workOrderParamsSchema, query: standingProofQuerySchema },
+  (req, res, { params, query }) => sendStandingProof(req.user!, params.workOrderId, query.at, res),
+);
+
+workOrderRoutes.get("/:workOrderId/messages", { allow: canSeeWorkOrder, params: workOrderParamsSchema }, (req, _res, { params }) =>
+  listMessages(req.user!, params.workOrderId),
+);
+
+// JSON or multipart (field `body`, optional part `file`). The body is checked inside the handler so that a refused
+// field still removes multer's temporary file before the answer goes out.
+workOrderRoutes.post(
+  "/:workOrderId/messages",
+  { allow: canSeeWorkOrder, params: workOrderParamsSchema, before: [singleFileUpload] },
+  async (req, res, { params }) => {
+    try {
+      const { body } = postMessageSchema.parse(req.body ?? {});
+      const dto = await postMessage(req.user!, params.workOrderId, body, req.file, appStorage(req), linkTo(req)(params.workOrderId));
+      kickOutbox(req.app.locals);
+      res.status(201).json(dto);
+    } finally {
+      await removeUpload(req.file);
+    }
+  },
+);
+
+workOrderRoutes.get("/:workOrderId/messages/:messageId/file", { allow: canSeeWorkOrder, params: messageFileParamsSchema }, (req, res, { params }) =>
+  sendMessageFile(req.user!, params.workOrderId, params.messageId, appStorage(req), res),
+);

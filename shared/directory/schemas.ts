@@ -1,0 +1,196 @@
+import { z } from "zod";
+import { idParam } from "../credentials/schemas.ts";
+import { machineTechnologies } from "../technicians/schemas.ts";
+import type { Standing, UnmetReason, RequirementResult } from "../standing/standing-types.ts";
+import type { CallOutEstimate } from "./call-out-estimate.ts";
+
+/** An empty query-string value ("?q=") means "no filter", not zero. */
+const optional = <T extends z.ZodType>(schema: T) => z.preprocess((v) => (v === "" ? undefined : v), schema.optional());
+
+const dollars = z.coerce.number().int().min(0).max(1_000_000_000);
+
+export const directorySorts = ["distance", "score", "hourlyRate", "soonestLapse"] as const;
+export type DirectorySort = (typeof directorySorts)[number];
+
+/** Buyer's search radius when a site is chosen and no radius is given (the issue's "within 150 km"). */
+export const DEFAULT_RADIUS_KM = 150;
+export const MAX_RADIUS_KM = 2000;
+export const MAX_PAGE_SIZE = 50;
+
+/**
+ * The directory's query string. Every parameter is optional; `radiusKm` applies only with a `siteId`. Lists are comma
+ * separated (`credentialTypes=arc_flash,lockout_tagout`), so a search fits in a bookmarkable URL.
+ */
+export const directoryQuerySchema = z.object({
+  credentialTypes: optional(
+    z
+      .string()
+      .transform((v) => [...new Set(v.split(",").map((s) => s.trim()).filter(Boolean))])
+      .pipe(z.array(z.string().regex(/^[a-z][a-z0-9_]{1,39}$/, "Unknown credential type")).max(12)),
+  ),
+  oemBuilder: optional(z.string().trim().min(1).max(120)),
+  controlFamily: optional(z.string().trim().min(1).max(120)),
+  minOemLevel: optional(z.coerce.number().int().min(1).max(3)),
+  technology: optional(z.enum(machineTechnologies)),
+  minEachOccurrence: optional(dollars),
+  minAggregate: optional(dollars),
+  minAutoCsl: optional(dollars),
+  requirementSetId: optional(idParam),
+  siteId: optional(idParam),
+  radiusKm: optional(z.coerce.number().positive().max(MAX_RADIUS_KM)),
+  minRating: optional(z.coerce.number().min(1).max(5)),
+  q: optional(z.string().trim().min(1).max(100)),
+  equipmentId: optional(idParam),
+  sort: optional(z.enum(directorySorts)),
+  cursor: optional(z.string().max(400)),
+  limit: z.preprocess((v) => (v === "" ? undefined : v), z.coerce.number().int().min(1).max(MAX_PAGE_SIZE).default(20)),
+  onSiteHours: z.preprocess((v) => (v === "" ? undefined : v), z.coerce.number().min(0).max(24).default(2)),
+});
+export type DirectoryQuery = z.infer<typeof directoryQuerySchema>;
+
+/**
+ * Filter groups as the empty state names them. `oemTraining` = oemBuilder + controlFamily + minOemLevel (one credential
+ * must match all three); `generalLiability` = minEachOccurrence + minAggregate (one policy); `autoLiability` = minAutoCsl;
+ * `distance` = siteId + radiusKm together with the technician's own service radius.
+ */
+export const directoryFilterNames = [
+  "credentialTypes",
+  "oemTraining",
+  "technology",
+  "generalLiability",
+  "autoLiability",
+  "requirementSetId",
+  "distance",
+  "minRating",
+  "q",
+] as const;
+export type DirectoryFilterName = (typeof directoryFilterNames)[number];
+
+export interface RatingSummaryDto {
+  count: number;
+  /** Mean stars, null without ratings. */
+  average: number | null;
+  /** The sort score (see `scoreSource`). */
+  score: number;
+}
+
+export interface DirectoryRowDto {
+  technicianId: number;
+  name: string;
+  companyId: number;
+  companyName: string;
+  technologies: string[];
+  controlFamilies: string[];
+  serviceRadiusKm: number;
+  /** Straight-line distance to the chosen site; null without a site. */
+  distanceKm: number | null;
+  distanceMiles: number | null;
+  /** Estimated one-way road miles and drive hours (see `assumptions`); null without a site. */
+  roadMiles: number | null;
+  driveHours: number | null;
+  callOut: CallOutEstimate | null;
+  rating: RatingSummaryDto;
+  standing: Extract<Standing, "cleared" | "lapsing">;
+  earliestLapse: string | null;
+  hourlyRateCents: number;
+  travelRateCents: number;
+  mileageRateCents: number;
+}
+
+export interface DirectoryAssumptionsDto {
+  earthRadiusKm: number;
+  roadFactor: number;
+  averageSpeedMph: number;
+  onSiteHours: number;
+}
+
+export interface DirectoryPageDto {
+  rows: DirectoryRowDto[];
+  /** Opaque; pass back as `cursor` for the next page. Null on the last page. */
+  nextCursor: string | null;
+  sort: DirectorySort;
+  /** On an empty first page: the filter that removed the most candidates and how many it removed. */
+  emptyReason: { filter: DirectoryFilterName; removed: number } | null;
+  /** Technology and control family filled from `equipmentId` (explicit parameters win). */
+  fromEquipment: { technology: string; controlFamily: string } | null;
+  scoreSource: string;
+  assumptions: DirectoryAssumptionsDto;
+}
+
+export interface ProfileCredentialDto {
+  id: number;
+  typeCode: string;
+  typeName: string;
+  category: string;
+  holder: "company" | "technician";
+  /** Dates, limits and training details only; no storage keys or extracted text. */
+  fields: Record<string, unknown>;
+  decidedAt: string | null;
+  lapsesAt: string | null;
+  /** GET /api/documents/:documentId/file; set only for verified insurance certificates. */
+  documentId: number | null;
+}
+
+export interface ProfileStandingDto {
+  requirementSetId: number;
+  name: string;
+  siteId: number | null;
+  standing: Standing;
+  earliestLapse: string | null;
+  computedAt: string;
+  /** `stored` = the last computed standing; `computed` = computed now because none was stored yet. */
+  source: "stored" | "computed";
+  unmet: { label: string; reason: UnmetReason | null; detail: string }[];
+  results: RequirementResult[];
+}
+
+export interface ProfileReviewDto {
+  id: number;
+  stars: number;
+  text: string | null;
+  reply: string | null;
+  createdAt: string | null;
+}
+
+export interface SiteEstimateDto {
+  siteId: number;
+  siteName: string;
+  distanceKm: number;
+  distanceMiles: number;
+  /** False when the site lies outside the technician's own service radius. */
+  withinServiceRadius: boolean;
+  roadMiles: number;
+  driveHours: number;
+  callOut: CallOutEstimate;
+}
+
+export interface DirectoryTechnicianDto {
+  technicianId: number;
+  name: string;
+  companyId: number;
+  companyName: string;
+  technologies: string[];
+  controlFamilies: string[];
+  serviceRadiusKm: number;
+  hourlyRateCents: number;
+  travelRateCents: number;
+  mileageRateCents: number;
+  baseline: { standing: Extract<Standing, "cleared" | "lapsing">; earliestLapse: string | null };
+  credentials: ProfileCredentialDto[];
+  requirementSets: ProfileStandingDto[];
+  rating: RatingSummaryDto;
+  scoreSource: string;
+  reviews: ProfileReviewDto[];
+  estimates: SiteEstimateDto[];
+  assumptions: DirectoryAssumptionsDto;
+  caution: string;
+}
+
+export const technicianProfileQuerySchema = z.object({
+  onSiteHours: z.preprocess((v) => (v === "" ? undefined : v), z.coerce.number().min(0).max(24).default(2)),
+});
+
+/** Shown beside every certificate and estimate (DESIGN.md "Everywhere"). */
+export const CERTIFICATE_CAUTION =
+  "A certificate of insurance is information only and confers no rights; confirm coverage with the insurer or broker. " +
+  "Follow local codes, site safety rules and licensed practice. Estimates are before tax.";

@@ -1,0 +1,57 @@
+import { z } from "zod";
+import { idParam } from "../credentials/schemas.ts";
+
+export const reviewParamsSchema = z.object({ reviewId: idParam });
+export const technicianReviewsParamsSchema = z.object({ technicianId: idParam });
+
+export const MIN_STARS = 1;
+export const MAX_STARS = 5;
+
+/** Only the stars and the words come from the client; the work order decides who is rated and by whom. */
+export const writeReviewSchema = z.object({
+  stars: z.number().int().min(MIN_STARS).max(MAX_STARS),
+  body: z.string().trim().min(10, "Say something about the job (at least 10 characters)").max(5000),
+});
+export type WriteReview = z.infer<typeof writeReviewSchema>;
+
+export const replyToReviewSchema = z.object({
+  body: z.string().trim().min(2, "Write a reply").max(5000),
+});
+
+export const reportReviewSchema = z.object({
+  reason: z.string().trim().min(5, "Say what is wrong with it (at least 5 characters)").max(1000),
+});
+
+export const technicianReviewsQuerySchema = z.object({
+  limit: z.coerce.number().int().min(1).max(100).default(20),
+  /** Keyset paging: reviews older than this id. */
+  before: idParam.optional(),
+});
+
+export interface ReviewDto {
+  id: number;
+  workOrderId: number;
+  technicianId: number;
+  shopName: string;
+  authorName: string;
+  stars: number;
+  body: string;
+  reply: string | null;
+  repliedAt: string | null;
+  reported: boolean;
+  createdAt: string;
+}
+
+export interface TechnicianReviewsDto {
+  /** Mean stars, null when there are none; always shown with its count. */
+  average: number | null;
+  count: number;
+  items: ReviewDto[];
+}
+
+export interface ReportedReviewDto extends ReviewDto {
+  reportedAt: string;
+  reportReason: string;
+  reportedBy: { id: number; name: string };
+  technicianName: string;
+}

@@ -1,0 +1,52 @@
+import { z } from "zod";
+import { idParam } from "../credentials/schemas.ts";
+import type { Standing } from "../standing/standing-types.ts";
+
+export const rosterEntryParamsSchema = z.object({ entryId: idParam });
+
+/** A technician, or a whole service company (all its technicians, present and future): exactly one of the two. */
+export const addRosterEntrySchema = z
+  .object({ technicianId: idParam.optional(), serviceCompanyId: idParam.optional() })
+  .refine((v) => (v.technicianId === undefined) !== (v.serviceCompanyId === undefined), {
+    message: "Give either a technician or a service company",
+    path: ["technicianId"],
+  });
+export type AddRosterEntry = z.infer<typeof addRosterEntrySchema>;
+
+/** Days before a lapse at which a rostered technician raises an alert to the shop (issue: "within 30 days of a lapse"). */
+export const ROSTER_LAPSE_ALERT_DAYS = 30;
+
+export const rosterAlertEvents = ["stopped_clearing", "lapse_within_30_days"] as const;
+export type RosterAlertEvent = (typeof rosterAlertEvents)[number];
+
+export interface RosterTechnicianDto {
+  technicianId: number;
+  name: string;
+  companyId: number;
+  companyName: string;
+  active: boolean;
+  /** Stored baseline standing; null until the standing job has computed one. */
+  standing: Standing | null;
+  nextLapse: string | null;
+}
+
+export interface RosterEntryDto {
+  id: number;
+  kind: "technician" | "company";
+  technicianId: number | null;
+  serviceCompanyId: number | null;
+  /** The technician's or the company's name. */
+  name: string;
+  companyName: string;
+  addedAt: string;
+  /** One for a technician entry; every technician of the company for a company entry. */
+  technicians: RosterTechnicianDto[];
+}
+
+export const rosterCsvColumns = ["technician", "company", "standing", "next lapse", "added at"] as const;
+
+export const standingWords: Record<Standing, string> = {
+  cleared: "Cleared",
+  lapsing: "Lapsing",
+  not_cleared: "Not cleared",
+};

@@ -1,0 +1,68 @@
+import { z } from "zod";
+import { postalCodeSchema, timeZoneSchema } from "../accounts/schemas.ts";
+import { idParam } from "../credentials/schemas.ts";
+import { machineTechnologies, type MachineTechnology } from "../technicians/schemas.ts";
+
+export const siteParamsSchema = z.object({ siteId: idParam });
+export const equipmentParamsSchema = z.object({ siteId: idParam, equipmentId: idParam });
+export const postalCodeParamsSchema = z.object({ code: postalCodeSchema });
+
+/** A shop's site as the buyer's form sends it; the time zone is suggested from the ZIP code when left out. */
+export const siteInputSchema = z.object({
+  name: z.string().trim().min(2, "Name the site").max(160),
+  addressLine: z.string().trim().min(3, "Enter the street address").max(200),
+  postalCode: postalCodeSchema,
+  timeZone: timeZoneSchema.optional(),
+});
+export type SiteInput = z.infer<typeof siteInputSchema>;
+
+export const listSitesQuerySchema = z.object({
+  includeArchived: z.enum(["true", "false"]).default("false").transform((v) => v === "true"),
+});
+
+/** One machine at a site; picking it in the directory fills the technology and control-family filters. */
+export const equipmentInputSchema = z.object({
+  builder: z.string().trim().min(1, "Enter the machine builder").max(120),
+  controlFamily: z.string().trim().min(1, "Enter the control family").max(120),
+  technology: z.enum(machineTechnologies),
+  model: z.string().trim().min(1, "Enter the model").max(120),
+  serialNumber: z.string().trim().max(80).optional(),
+});
+export type EquipmentInput = z.infer<typeof equipmentInputSchema>;
+
+export interface EquipmentDto {
+  id: number;
+  siteId: number;
+  builder: string;
+  controlFamily: string;
+  technology: MachineTechnology;
+  model: string;
+  serialNumber: string | null;
+}
+
+export interface SiteDto {
+  id: number;
+  companyId: number;
+  name: string;
+  addressLine: string;
+  postalCode: string;
+  city: string | null;
+  state: string | null;
+  timeZone: string;
+  latitude: number;
+  longitude: number;
+  active: boolean;
+  equipmentCount: number;
+  createdAt: string;
+  updatedAt: string;
+}
+
+/** What an offline ZIP lookup tells the site form: the place and a suggested time zone. */
+export interface PostalPlaceDto {
+  postalCode: string;
+  city: string;
+  state: string;
+  latitude: number;
+  longitude: number;
+  timeZone: string | null;
+}

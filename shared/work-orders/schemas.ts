@@ -1,0 +1,133 @@
+import { z } from "zod";
+import { idParam } from "../credentials/schemas.ts";
+import { isoDateSchema } from "../credentials/credential-fields.ts";
+import type { StandingSnapshot } from "./standing-snapshot.ts";
+
+export const workOrderStatuses = ["requested", "accepted", "declined", "completed", "confirmed"] as const;
+export type WorkOrderStatus = (typeof workOrderStatuses)[number];
+
+// "down" = the machine is down: production has stopped, the most urgent call-out.
+export const urgencies = ["low", "normal", "high", "down"] as const;
+export type Urgency = (typeof urgencies)[number];
+
+export const workOrderSides = ["shop", "service"] as const;
+export type WorkOrderSide = (typeof workOrderSides)[number];
+
+export const workOrderActions = ["accept", "decline", "complete", "confirm"] as const;
+export type WorkOrderAction = (typeof workOrderActions)[number];
+
+export const workOrderParamsSchema = z.object({ workOrderId: idParam });
+export const messageFileParamsSchema = z.object({ workOrderId: idParam, messageId: idParam });
+
+export const MAX_PREFERRED_DATES = 5;
+
+/** What a buyer sends to raise a work order; the shop, the service company and the author come from the session and the rows. */
+export const raiseWorkOrderSchema = z.object({
+  technicianId: idParam,
+  siteId: idParam,
+  equipmentId: idParam.optional(),
+  /** Null or absent = the platform baseline only. */
+  requirementSetId: idParam.nullable().optional(),
+  // Taken from the machine when one is chosen and this is left out.
+  technology: z.string().trim().min(1).max(40).optional(),
+  problem: z.string().trim().min(10, "Describe the problem (at least 10 characters)").max(5000),
+  urgency: z.enum(urgencies).default("normal"),
+  preferredDates: z.array(isoDateSchema).max(MAX_PREFERRED_DATES, `At most ${MAX_PREFERRED_DATES} dates`).default([]),
+});
+export type RaiseWorkOrder = z.infer<typeof raiseWorkOrderSchema>;
+
+export const declineWorkOrderSchema = z.object({
+  reason: z.string().trim().min(5, "Say why (at least 5 characters)").max(1000),
+});
+
+// Hours are recorded to the quarter hour or finer; 2 decimals is what the column keeps.
+const hoursSchema = z.number().min(0).max(999).multipleOf(0.01);
+
+export const completeWorkOrderSchema = z.object({
+  hoursWorked: hoursSchema.refine((h) => h > 0, "Hours worked must be more than 0"),
+  travelHours: hoursSchema,
+  note: z.string().trim().max(5000).optional(),
+});
+export type CompleteWorkOrder = z.infer<typeof completeWorkOrderSchema>;
+
+export const listWorkOrdersQuerySchema = z.object({
+  status: z.enum(workOrderStatuses).optional(),
+});
+
+/** The message text as a form field (multipart) or JSON; the file, when any, is the multipart part `file`. */
+export const postMessageSchema = z.object({
+  body: z.string().trim().min(1, "Write a message").max(5000),
+});
+
+export const standingProofQuerySchema = z.object({
+  at: z.enum(["accepted", "completed"]).optional(),
+});
+
+export interface WorkOrderSummaryDto {
+  id: number;
+  status: WorkOrderStatus;
+  urgency: Urgency;
+  technology: string;
+  problem: string;
+  shopName: string;
+  siteName: string;
+  technicianName: string;
+  serviceCompanyName: string;
+  createdAt: string;
+  updatedAt: string;
+}
+
+export interface WorkOrderEquipmentDto {
+  id: number;
+  builder: string;
+  controlFamily: string | null;
+  technology: string;
+  model: string | null;
+  serialNumber: string | null;
+}
+
+export interface WorkOrderDto {
+  id: number;
+  status: WorkOrderStatus;
+  /** Which side the caller is on, and what the caller may do next. */
+  yourSide: WorkOrderSide;
+  actions: WorkOrderAction[];
+  urgency: Urgency;
+  technology: string;
+  problem: string;
+  preferredDates: string[];
+  shop: { companyId: number; name: string };
+  site: { id: number; name: string; postalCode: string | null; timeZone: string | null };
+  equipment: WorkOrderEquipmentDto | null;
+  technician: { id: number; name: string; companyId: number; companyName: string };
+  requirementSet: { id: number; name: string } | null;
+  declineReason: string | null;
+  hoursWorked: number | null;
+  travelHours: number | null;
+  completionNote: string | null;
+  snapshotAccepted: StandingSnapshot | null;
+  snapshotCompleted: StandingSnapshot | null;
+  createdBy: { id: number; name: string };
+  createdAt: string;
+  acceptedAt: string | null;
+  declinedAt: string | null;
+  completedAt: string | null;
+  confirmedAt: string | null;
+  updatedAt: string;
+}
+
+export interface WorkOrderMessageDto {
+  id: number;
+  workOrderId: number;
+  author: { id: number; name: string };
+  side: WorkOrderSide;
+  body: string;
+  attachment: { documentId: number; name: string; mime: string; sizeBytes: number; url: string } | null;
+  createdAt: string;
+}
+
+/** The 409 body's `fields` name each unmet requirement when a technician is not cleared. */
+export interface NotClearedProblem {
+  path: string;
+  message: string;
+}

@@ -1,0 +1,120 @@
+import type { CredentialFields } from "../credentials/credential-fields.ts";
+import type { RequirementStatus, Standing, StandingResult, UnmetReason } from "../standing/standing-types.ts";
+
+/** A credential as the snapshot names it: enough to find the document again and to show what it said. */
+export interface SnapshotCredential {
+  id: number;
+  typeCode: string;
+  typeName: string;
+  /** Policy number, card number, license or certificate number: whatever the document is known by. */
+  reference: string | null;
+  /** First instant it no longer counts (ISO), null = never. */
+  lapsesAt: string | null;
+}
+
+export interface SnapshotRequirement {
+  label: string;
+  status: RequirementStatus;
+  reason: UnmetReason | null;
+  detail: string;
+  /** The credential that met it (or, when unmet, the closest one on file). */
+  credential: SnapshotCredential | null;
+}
+
+export interface SnapshotTarget {
+  /** Null = the platform baseline. */
+  requirementSetId: number | null;
+  name: string;
+  standing: Standing;
+  earliestLapse: string | null;
+  requirements: SnapshotRequirement[];
+}
+
+/** Proof of a technician's standing at one instant, kept on the work order whatever changes later. */
+export interface StandingSnapshot {
+  takenAt: string;
+  technicianId: number;
+  technicianName: string;
+  companyName: string;
+  /** The worst of the targets' standings. */
+  standing: Standing;
+  targets: SnapshotTarget[];
+}
+
+export interface SnapshotCredentialSource {
+  id: number;
+  typeCode: string;
+  fields: CredentialFields;
+}
+
+const STANDING_ORDER: Record<Standing, number> = { cleared: 0, lapsing: 1, not_cleared: 2 };
+
+export function worstStanding(standings: readonly Standing[]): Standing {
+  return standings.reduce<Standing>((worst, s) => (STANDING_ORDER[s] > STANDING_ORDER[worst] ? s : worst), "cleared");
+}
+
+/** Lapsing still counts as cleared: every required credential is in force today. */
+export function isClearedNow(standing: Standing): boolean {
+  return standing !== "not_cleared";
+}
+
+/** The number a document is known by, from whichever field its field set carries. */
+export function credentialReference(fields: CredentialFields): string | null {
+  if ("policyNumber" in fields) return fields.policyNumber;
+  if ("licenseNumber" in fields) return fields.licenseNumber;
+  if ("certificateNumber" in fields) return fields.certificateNumber;
+  if ("cardNumber" in fields) return fields.cardNumber ?? null;
+  return null;
+}
+
+export interface SnapshotInput {
+  takenAt: Date;
+  technician: { id: number; name: string; companyName: string };
+  targets: { requirementSetId: number | null; name: string; result: StandingResult }[];
+  credentials: ReadonlyMap<number, SnapshotCredentialSource>;
+  typeNames: ReadonlyMap<string, string>;
+}
+
+export function buildStandingSnapshot(input: SnapshotInput): StandingSnapshot {
+  const targets = input.targets.map(({ requirementSetId, name, result }) => ({
+    requirementSetId,
+    name,
+    standing: result.standing,
+    earliestLapse: result.earliestLapse,
+    requirements: result.results.map((r) => {
+      const source = r.credentialId === null ? undefined : input.credentials.get(r.credentialId);
+      return {
+        label: r.requirement.label,
+        status: r.status,
+        reason: r.reason,
+        detail: r.detail,
+        credential: source
+          ? {
+              id: source.id,
+              typeCode: source.typeCode,
+              typeName: input.typeNames.get(source.typeCode) ?? source.typeCode,
+              reference: credentialReference(source.fields),
+              lapsesAt: r.lapsesAt,
+            }
+          : null,
+      };
+    }),
+  }));
+  return {
+    takenAt: input.takenAt.toISOString(),
+    technicianId: input.technician.id,
+    technicianName: input.technician.name,
+    companyName: input.technician.companyName,
+    standing: worstStanding(targets.map((t) => t.standing)),
+    targets,
+  };
+}
+
+/** One line per unmet requirement, for the 409 that refuses a work order. */
+export function unmetRequirements(snapshot: StandingSnapshot): { path: string; message: string }[] {
+  return snapshot.targets.flatMap((t) =>
+    t.requirements
+      .filter((r) => r.status === "unmet")
+      .map((r) => ({ path: `standing.${t.requirementSetId ?? "baseline"}`, message: `${t.name}: ${r.label}: ${r.detail}` })),
+  );
+}

@@ -1,0 +1,60 @@
+import { useState } from "react";
+import { documentUrls } from "./document-urls.ts";
+
+// A guard against a document that claims endless pages; certificates and cards run to a few.
+const MAX_PAGES = 40;
+
+type DocumentViewerProps = { documentId: number; name: string; mime: string };
+
+/**
+ * The document as images: a photo scaled to fit, or each page of a PDF rendered by the server. The PDF
+ * itself is never embedded, so a hostile file cannot run in the reviewer's browser. Pages load one after
+ * another until the server answers 404 for the next one.
+ */
+export function DocumentViewer({ documentId, name, mime }: DocumentViewerProps) {
+  const [shown, setShown] = useState(1);
+  const [ended, setEnded] = useState<number | null>(null);
+  const isImage = mime.startsWith("image/");
+
+  return (
+    <section aria-label={`Document: ${name}`} className="space-y-3">
+      <div className="flex flex-wrap items-center justify-between gap-2 text-sm">
+        <p className="truncate font-medium text-ink-900">{name}</p>
+        <a
+          href={documentUrls.download(documentId)}
+          className="text-ink-700 underline underline-offset-2 focus-visible:outline-2 focus-visible:outline-ink-700"
+        >
+          Download the file
+        </a>
+      </div>
+      {isImage ? (
+        <img
+          src={documentUrls.inlineImage(documentId)}
+          alt={`The uploaded image: ${name}`}
+          className="h-auto w-full rounded-md border border-ink-100 bg-white object-contain"
+        />
+      ) : (
+        <ol className="space-y-3">
+          {Array.from({ length: ended === null ? shown : Math.min(shown, ended - 1) }, (_, i) => i + 1).map((page) => (
+            <li key={page}>
+              <img
+                src={documentUrls.page(documentId, page)}
+                alt={`Page ${page} of ${name}`}
+                className="h-auto w-full rounded-md border border-ink-100 bg-white"
+                onLoad={() => {
+                  if (page === shown && page < MAX_PAGES) setShown(page + 1);
+                }}
+                onError={() => setEnded((current) => (current === null || page < current ? page : current))}
+              />
+            </li>
+          ))}
+        </ol>
+      )}
+      {!isImage && ended === 1 && (
+        <p role="status" className="text-sm text-ink-700">
+          The pages of this document cannot be shown here. Download the file to read it.
+        </p>
+      )}
+    </section>
+  );
+}

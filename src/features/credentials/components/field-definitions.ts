@@ -1,0 +1,113 @@
+import type { FieldSet, LimitName } from "@shared/credentials/credential-fields.ts";
+
+export type FieldKind = "text" | "date" | "dollars" | "checkbox" | "level" | "state";
+
+export type FieldDefinition = {
+  /** Path inside the credential's fields, e.g. "limits.eachOccurrence". */
+  path: string;
+  label: string;
+  kind: FieldKind;
+  required?: boolean;
+  hint?: string;
+};
+
+export const limitLabels: Record<LimitName, string> = {
+  eachOccurrence: "Each occurrence",
+  generalAggregate: "General aggregate",
+  productsCompletedOpsAggregate: "Products-completed operations aggregate",
+  personalAdvertisingInjury: "Personal and advertising injury",
+  damageToRentedPremises: "Damage to rented premises",
+  medicalExpense: "Medical expense (any one person)",
+  combinedSingleLimit: "Combined single limit (each accident)",
+  employersLiabilityEachAccident: "Employer's liability, each accident",
+  employersLiabilityDiseaseEachEmployee: "Employer's liability, disease, each employee",
+  employersLiabilityDiseasePolicyLimit: "Employer's liability, disease, policy limit",
+  umbrellaEachOccurrence: "Umbrella, each occurrence",
+  umbrellaAggregate: "Umbrella, aggregate",
+};
+
+// The limit lines each coverage prints on a certificate (TRADE-FACTS 2.5); other lines would only invite wrong entries.
+const limitsByType: Record<string, readonly LimitName[]> = {
+  general_liability: [
+    "eachOccurrence",
+    "generalAggregate",
+    "productsCompletedOpsAggregate",
+    "personalAdvertisingInjury",
+    "damageToRentedPremises",
+    "medicalExpense",
+  ],
+  auto_liability: ["combinedSingleLimit"],
+  workers_comp: [
+    "employersLiabilityEachAccident",
+    "employersLiabilityDiseaseEachEmployee",
+    "employersLiabilityDiseasePolicyLimit",
+  ],
+  umbrella_liability: ["umbrellaEachOccurrence", "umbrellaAggregate"],
+};
+
+const allLimits = Object.keys(limitLabels) as LimitName[];
+
+export const limitsFor = (typeCode: string): readonly LimitName[] => limitsByType[typeCode] ?? allLimits;
+
+const dateHint = "Leave empty if the document shows none.";
+
+const cardFields: FieldDefinition[] = [
+  { path: "holderName", label: "Name on the card", kind: "text", required: true },
+  { path: "course", label: "Course", kind: "text" },
+  { path: "issueDate", label: "Issue date", kind: "date", required: true },
+  { path: "expiryDate", label: "Expiry date", kind: "date", hint: dateHint },
+  { path: "cardNumber", label: "Card number", kind: "text" },
+  { path: "trainer", label: "Trainer", kind: "text" },
+];
+
+/** The inputs for a type, in the order they appear on the document. */
+export function fieldDefinitionsFor(fieldSet: FieldSet, typeCode: string): FieldDefinition[] {
+  switch (fieldSet) {
+    case "insurance":
+      return [
+        { path: "insurerName", label: "Insurer", kind: "text", required: true },
+        { path: "naic", label: "NAIC company code", kind: "text", hint: "Five digits, printed beside the insurer." },
+        { path: "policyNumber", label: "Policy number", kind: "text", required: true },
+        { path: "namedInsured", label: "Named insured", kind: "text" },
+        { path: "certificateHolder", label: "Certificate holder", kind: "text" },
+        { path: "effectiveDate", label: "Effective date", kind: "date", required: true },
+        { path: "expirationDate", label: "Expiration date", kind: "date", required: true },
+        ...(typeCode === "workers_comp"
+          ? [{ path: "statutory", label: "Statutory limits (workers' compensation)", kind: "checkbox" as const }]
+          : []),
+        ...limitsFor(typeCode).map((name) => ({
+          path: `limits.${name}`,
+          label: limitLabels[name],
+          kind: "dollars" as const,
+          hint: "Whole dollars",
+        })),
+        { path: "additionalInsured", label: "Additional insured marked", kind: "checkbox" },
+        { path: "waiverOfSubrogation", label: "Waiver of subrogation marked", kind: "checkbox" },
+      ];
+    case "training":
+      return cardFields;
+    case "oem":
+      return [
+        { path: "builder", label: "Machine builder", kind: "text", required: true },
+        { path: "controlFamily", label: "Control family", kind: "text", required: true },
+        { path: "level", label: "Level", kind: "level", required: true },
+        ...cardFields,
+      ];
+    case "license":
+      return [
+        { path: "holderName", label: "Name on the license", kind: "text", required: true },
+        { path: "licenseNumber", label: "License number", kind: "text", required: true },
+        { path: "issuingAuthority", label: "Issuing authority", kind: "text", required: true },
+        { path: "issueDate", label: "Issue date", kind: "date", required: true },
+        { path: "expiryDate", label: "Expiry date", kind: "date", hint: dateHint },
+      ];
+    case "exemption":
+      return [
+        { path: "holderName", label: "Name on the exemption", kind: "text", required: true },
+        { path: "state", label: "State", kind: "state", required: true, hint: "Two letters, e.g. TX" },
+        { path: "certificateNumber", label: "Certificate number", kind: "text", required: true },
+        { path: "issueDate", label: "Issue date", kind: "date", required: true },
+        { path: "expiryDate", label: "Expiry date", kind: "date", hint: dateHint },
+      ];
+  }
+}

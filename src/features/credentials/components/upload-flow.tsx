@@ -1,0 +1,195 @@
+import { useMemo, useState, type FormEvent } from "react";
+import { isApiError } from "@/lib/api-client.ts";
+import { Button } from "@/components/ui/button.tsx";
+import { CautionNote } from "@/components/ui/caution-note.tsx";
+import { FormError } from "@/components/ui/form-error.tsx";
+import { SelectField } from "@/components/ui/select-field.tsx";
+import type { Credential, CredentialType, UploadedDocument } from "../api/credential-shapes.ts";
+import { useSubmitCredential } from "../api/submit-credential.ts";
+import { useUploadDocument } from "../api/upload-document.ts";
+import { CredentialFieldsForm } from "./credential-fields-form.tsx";
+import { CredentialTypeSelect } from "./credential-type-select.tsx";
+import { ExtractionNote } from "./extraction-note.tsx";
+import { fieldDefinitionsFor } from "./field-definitions.ts";
+import { credentialFieldErrorsOf, labelsOf, problemsAsError } from "./field-problems.ts";
+import { parseFieldValues, toFieldValues, type FieldValues } from "./field-values.ts";
+import { FileDrop } from "./file-drop.tsx";
+import { ReviewerWarnings } from "./reviewer-warnings.tsx";
+import { UploadProgress } from "./upload-progress.tsx";
+
+export type HolderOption = { id: number; name: string };
+
+type UploadFlowProps = {
+  /** The types this person may upload (active ones, and for a technician only their own card types). */
+  types: readonly CredentialType[];
+  /** Technicians to choose from for technician-held types. */
+  technicians: readonly HolderOption[];
+  /** A technician uploading their own card: the holder is fixed. */
+  fixedTechnicianId?: number | undefined;
+  initialTypeCode?: string | undefined;
+  initialTechnicianId?: number | undefined;
+  onSubmitted: (credential: Credential) => void;
+};
+
+const uploadProblem = (error: unknown): string => {
+  if (!isApiError(error)) return "The upload failed. Try again.";
+  if (error.status === 413) return error.message || "That file is larger than 10 MB.";
+  return error.message;
+};
+
+/** Choose the type and holder, send the file, check the fields read from it, then submit it for verification. */
+export function UploadFlow({ types, technicians, fixedTechnicianId, initialTypeCode, initialTechnicianId, onSubmitted }: UploadFlowProps) {
+  const [typeCode, setTypeCode] = useState(types.some((t) => t.code === initialTypeCode) ? (initialTypeCode ?? "") : "");
+  const [technicianId, setTechnicianId] = useState(initialTechnicianId ? String(initialTechnicianId) : "");
+  const [choiceProblems, setChoiceProblems] = useState<Record<string, string>>({});
+  const [progress, setProgress] = useState<{ name: string; fraction: number } | null>(null);
+  const [uploaded, setUploaded] = useState<UploadedDocument | null>(null);
+  const [values, setValues] = useState<FieldValues>({});
+  const [problems, setProblems] = useState<Record<string, string>>({});
+  const [summary, setSummary] = useState<unknown>(null);
+  const upload = useUploadDocument();
+  const submit = useSubmitCredential();
+
+  const type = types.find((t) => t.code === typeCode);
+  const heldByTechnician = type?.holder === "technician";
+  const holderId = fixedTechnicianId ?? (technicianId ? Number(technicianId) : undefined);
+  const definitions = useMemo(() => (type ? fieldDefinitionsFor(type.fieldSet, type.code) : []), [type]);
+  const found = useMemo(() => new Set(uploaded?.extraction.found ?? []), [uploaded]);
+
+  const sendFile = (file: File) => {
+    const missing: Record<string, string> = {};
+    if (!type) missing.typeCode = "Choose the type of document first";
+    if (heldByTechnician && !holderId) missing.technicianId = "Choose whose card this is";
+    setChoiceProblems(missing);
+    if (!type || Object.keys(missing).length > 0) return;
+    setProgress({ name: file.name, fraction: 0 });
+    upload.mutate(
+      {
+        file,
+        typeCode: type.code,
+        technicianId: heldByTechnician ? holderId : undefined,
+        onProgress: (fraction) => setProgress({ name: file.name, fraction }),
+      },
+      {
+        onSuccess: (result) => {
+          setUploaded(result);
+          setValues(toFieldValues(definitions, result.extraction.fields));
+          setProblems({});
+          setSummary(null);
+        },
+        onSettled: () => setProgress(null),
+      },
+    );
+  };
+
+  const startOver = () => {
+    setUploaded(null);
+    setValues({});
+    setProblems({});
+    setSummary(null);
+    upload.reset();
+    submit.reset();
+  };
+
+  const send = (event: FormEvent<HTMLFormElement>) => {
+    event.preventDefault();
+    if (!type || !uploaded) return;
+    const parsed = parseFieldValues(type.fieldSet, definitions, values);
+    if (!parsed.ok) {
+      setProblems(parsed.problems);
+      setSummary(problemsAsError("Check the fields marked below.", parsed.problems));
+      return;
+    }
+    setProblems({});
+    setSummary(null);
+    submit.mutate(
+      {
+        documentId: uploaded.document.id,
+        typeCode: type.code,
+        ...(heldByTechnician && holderId ? { technicianId: holderId } : {}),
+        fields: parsed.fields,
+      },
+      {
+        onSuccess: onSubmitted,
+        onError: (error) => {
+          const mapped = credentialFieldErrorsOf(error);
+          setProblems(mapped);
+          setSummary(Object.keys(mapped).length > 0 ? problemsAsError(isApiError(error) ? error.message : "Check the fields marked below.", mapped) : error);
+        },
+      },
+    );
+  };
+
+  if (!uploaded) {
+    return (
+      <div className="max-w-2xl space-y-5">
+        <CredentialTypeSelect
+          types={types}
+          value={typeCode}
+          onChange={(code) => {
+            setTypeCode(code);
+            setChoiceProblems({});
+          }}
+          error={choiceProblems.typeCode}
+          disabled={upload.isPending}
+        />
+        {type && !heldByTechnician && <p className="text-sm text-ink-900">Held by your company.</p>}
+        {heldByTechnician && fixedTechnicianId === undefined && (
+          <SelectField
+            label="Whose card is it?"
+            name="technicianId"
+            value={technicianId}
+            onChange={(event) => setTechnicianId(event.currentTarget.value)}
+            options={technicians.map((t) => ({ value: String(t.id), label: t.name }))}
+            placeholder="Choose a technician"
+            error={choiceProblems.technicianId}
+            disabled={upload.isPending}
+          />
+        )}
+        {type?.category === "insurance" && <CautionNote />}
+        {progress ? (
+          <UploadProgress fileName={progress.name} fraction={progress.fraction} />
+        ) : (
+          <FileDrop onFile={sendFile} disabled={!type} hint={type ? undefined : "Choose the type of document first."} />
+        )}
+        {upload.isError && (
+          <p role="alert" className="rounded-md border-l-4 border-red-700 bg-red-50 px-4 py-3 text-sm font-medium text-red-900">
+            {uploadProblem(upload.error)}
+          </p>
+        )}
+      </div>
+    );
+  }
+
+  return (
+    <form noValidate onSubmit={send} className="max-w-3xl space-y-5" aria-label="Check the fields">
+      <div className="flex flex-wrap items-center justify-between gap-3 rounded-lg border border-ink-100 bg-white px-4 py-3">
+        <div className="min-w-0 text-sm">
+          <p className="font-semibold text-ink-900">{type?.name}</p>
+          <p className="truncate text-ink-700">
+            File: {uploaded.document.name} ({Math.max(1, Math.round(uploaded.document.sizeBytes / 1024))} kB)
+          </p>
+        </div>
+        <Button variant="secondary" onClick={startOver} disabled={submit.isPending}>
+          Use another file
+        </Button>
+      </div>
+      <ExtractionNote extraction={uploaded.extraction} readCount={definitions.filter((d) => found.has(d.path)).length} />
+      <ReviewerWarnings warnings={uploaded.warnings} title="The reviewer will look at these" />
+      <FormError error={summary} labels={labelsOf(definitions)} />
+      <CredentialFieldsForm
+        definitions={definitions}
+        values={values}
+        onChange={(path, value) => setValues((current) => ({ ...current, [path]: value }))}
+        errors={problems}
+        found={found}
+        disabled={submit.isPending}
+      />
+      <div className="flex flex-wrap gap-3 border-t border-ink-100 pt-4">
+        <Button type="submit" pending={submit.isPending} pendingLabel="Sending…" className="min-h-12">
+          Send for verification
+        </Button>
+      </div>
+    </form>
+  );
+}

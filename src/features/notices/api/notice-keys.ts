@@ -1,0 +1,4 @@
+export const noticeKeys = {
+  all: ["notices"] as const,
+  list: () => [...noticeKeys.all, "list"] as const,
+};

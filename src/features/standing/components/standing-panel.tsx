@@ -1,0 +1,85 @@
+import { EmptyState } from "@/components/ui/empty-state.tsx";
+import { StatusBadge } from "@/components/ui/status-badge.tsx";
+import { daysUntil, formatInstantDate } from "@/lib/format-date.ts";
+import type { RequirementResultView, StandingResultView, TechnicianStanding } from "../api/get-technician-standing.ts";
+
+const reasonWords: Record<NonNullable<RequirementResultView["reason"]>, string> = {
+  missing: "Missing",
+  awaiting_verification: "Awaiting verification",
+  returned: "Returned",
+  lapsed: "Lapsed",
+  not_yet_in_force: "Not yet in force",
+  below_limit: "Below the limit",
+  flag_absent: "Mark missing",
+  wrong_control_family: "Wrong control family",
+  below_level: "Level too low",
+  too_old: "Too old",
+};
+
+function OverallBadge({ result, now }: { result: StandingResultView; now: Date }) {
+  if (result.standing === "lapsing" && result.earliestLapse)
+    return <StatusBadge status="lapsing" daysLeft={daysUntil(result.earliestLapse, now)} />;
+  return <StatusBadge status={result.standing === "lapsing" ? "cleared" : result.standing} />;
+}
+
+function RequirementRow({ result, now }: { result: RequirementResultView; now: Date }) {
+  const badge =
+    result.status === "met" ? (
+      <StatusBadge status="cleared" />
+    ) : result.status === "lapsing" && result.lapsesAt ? (
+      <StatusBadge status="lapsing" daysLeft={daysUntil(result.lapsesAt, now)} />
+    ) : (
+      <StatusBadge status="not_cleared" />
+    );
+  return (
+    <li className="grid gap-1 py-3 sm:grid-cols-[minmax(0,16rem)_auto_1fr] sm:items-start sm:gap-4">
+      <span className="font-medium text-ink-900">{result.requirement.label}</span>
+      <span>{badge}</span>
+      <span className="text-sm text-ink-800">
+        {result.status === "unmet" && result.reason && <span className="font-semibold">{reasonWords[result.reason]}: </span>}
+        {result.detail}
+        {result.lapsesAt && result.status !== "unmet" && (
+          <span className="block text-ink-700">Counts until {formatInstantDate(result.lapsesAt)}</span>
+        )}
+      </span>
+    </li>
+  );
+}
+
+function StandingBlock({ title, result, now }: { title: string; result: StandingResultView; now: Date }) {
+  return (
+    <section aria-label={title} className="rounded-lg border border-ink-100 bg-white px-4 py-3">
+      <div className="flex flex-wrap items-center gap-3 border-b border-ink-100 pb-2">
+        <h3 className="font-semibold text-ink-900">{title}</h3>
+        <OverallBadge result={result} now={now} />
+        {result.earliestLapse && (
+          <span className="text-sm text-ink-700">Earliest lapse {formatInstantDate(result.earliestLapse)}</span>
+        )}
+      </div>
+      <ul className="divide-y divide-ink-100">
+        {result.results.map((r, i) => (
+          <RequirementRow key={r.requirement.id ?? `${r.requirement.label}-${i}`} result={r} now={now} />
+        ))}
+      </ul>
+    </section>
+  );
+}
+
+/** Each requirement, whether it is met, and why not; the baseline first, then any site's requirement sets. */
+export function StandingPanel({ standing, now }: { standing: TechnicianStanding | null; now: Date }) {
+  if (!standing) {
+    return (
+      <EmptyState title="Standing is not available yet">
+        The standing of each requirement will show here once it has been computed.
+      </EmptyState>
+    );
+  }
+  return (
+    <div className="space-y-4">
+      <StandingBlock title="Platform baseline" result={standing.baseline} now={now} />
+      {standing.sets.map((set) => (
+        <StandingBlock key={set.requirementSet.id} title={set.requirementSet.name} result={set} now={now} />
+      ))}
+    </div>
+  );
+}

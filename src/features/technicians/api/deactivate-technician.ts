@@ -1,0 +1,14 @@
+import { useMutation, useQueryClient } from "@tanstack/react-query";
+import { api } from "@/lib/api-client.ts";
+import { technicianKeys } from "./technician-keys.ts";
+import { technicianSchema } from "./technician-shape.ts";
+
+export const deactivateTechnician = (id: number) => api.post(`/technicians/${id}/deactivate`, {}, technicianSchema);
+
+export function useDeactivateTechnician() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: deactivateTechnician,
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: technicianKeys.all }),
+  });
+}

@@ -1,0 +1,18 @@
+import { useMutation, useQueryClient } from "@tanstack/react-query";
+import type { TechnicianInput } from "@shared/technicians/schemas.ts";
+import { api } from "@/lib/api-client.ts";
+import { technicianKeys } from "./technician-keys.ts";
+import { technicianSchema } from "./technician-shape.ts";
+
+export type EditTechnicianInput = { id: number; input: TechnicianInput };
+
+export const editTechnician = ({ id, input }: EditTechnicianInput) =>
+  api.put(`/technicians/${id}`, input, technicianSchema);
+
+export function useEditTechnician() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: editTechnician,
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: technicianKeys.all }),
+  });
+}

@@ -1,0 +1,149 @@
+import { createHash, randomUUID } from "node:crypto";
+import { mkdtempSync, readdirSync, readFileSync, rmSync } from "node:fs";
+import { tmpdir } from "node:os";
+import path from "node:path";
+import pg from "pg";
+import { QueryTypes, type Sequelize } from "sequelize";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { setPasswordCost } from "../../server/accounts/passwords.ts";
+import { initModels } from "../../server/db/associations.ts";
+import { buildDemoWorld, loadDemoScenarioOnce } from "../../server/db/demo-scenario/index.ts";
+import { migrate } from "../../server/db/migrate.ts";
+import { connectDatabase } from "../../server/db/sequelize.ts";
+
+// The demo loads into an empty database only, so it gets a throw-away database of its own in the suite's cluster.
+const databaseName = `demo_check_${randomUUID().slice(0, 8)}`;
+const adminUrl = process.env.DATABASE_URL!;
+const today = new Date("2026-12-02T15:00:00Z");
+const world = buildDemoWorld(today);
+let sequelize: Sequelize;
+let uploadsDir: string;
+let loaded: boolean;
+let elapsedMs: number;
+
+async function admin(sql: string) {
+  const client = new pg.Client({ connectionString: adminUrl });
+  await client.connect();
+  try {
+    await client.query(sql);
+  } finally {
+    await client.end();
+  }
+}
+
+const rows = <T extends object>(sql: string) => sequelize.query<T>(sql, { type: QueryTypes.SELECT });
+const count = async (table: string) =>
+  (await rows<{ n: number }>(`SELECT count(*)::int AS n FROM ${table}`))[0]!.n;
+
+beforeAll(async () => {
+  await admin(`CREATE DATABASE ${databaseName}`);
+  const url = new URL(adminUrl);
+  url.pathname = `/${databaseName}`;
+  sequelize = connectDatabase(url.toString());
+  await migrate(sequelize);
+  initModels(sequelize);
+  setPasswordCost(4);
+  uploadsDir = mkdtempSync(path.join(tmpdir(), "clearbench-demo-uploads-"));
+  const started = performance.now();
+  loaded = await loadDemoScenarioOnce({ uploadsDir, today });
+  elapsedMs = performance.now() - started;
+});
+
+afterAll(async () => {
+  await sequelize?.close();
+  await admin(`DROP DATABASE IF EXISTS ${databaseName}`);
+  if (uploadsDir) rmSync(uploadsDir, { recursive: true, force: true });
+});
+
+describe("loading the demo scenario", () => {
+  it("loads into an empty database within five seconds", () => {
+    expect(loaded).toBe(true);
+    expect(elapsedMs).toBeLessThan(5_000);
+  });
+
+  it("writes every company, user, technician, document and credential of the world", async () => {
+    const users = world.companies.reduce((sum, c) => sum + c.users.length, 0);
+
+    const counts = await Promise.all(
+      ["companies", "users", "technicians", "documents", "credentials"].map(count),
+    );
+
+    expect(counts).toEqual([
+      world.companies.length,
+      users,
+      world.technicians.length,
+      world.credentials.length,
+      world.credentials.length,
+    ]);
+  });
+
+  it("stores credentials in the states the world gives them", async () => {
+    const expected: Record<string, number> = {};
+    for (const c of world.credentials) expected[c.state] = (expected[c.state] ?? 0) + 1;
+
+    const stored = await rows<{ state: string; n: number }>(
+      "SELECT state, count(*)::int AS n FROM credentials GROUP BY state",
+    );
+
+    expect(Object.fromEntries(stored.map((r) => [r.state, r.n]))).toEqual(expected);
+  });
+
+  it("stores each document's file under its hash, with nothing left in the incoming folder", async () => {
+    const documents = await rows<{ sha256: string; size_bytes: number }>(
+      "SELECT sha256, size_bytes FROM documents",
+    );
+
+    for (const d of documents) {
+      const bytes = readFileSync(path.join(uploadsDir, "store", d.sha256.slice(0, 2), d.sha256));
+      expect(createHash("sha256").update(bytes).digest("hex")).toBe(d.sha256);
+      expect(bytes.byteLength).toBe(d.size_bytes);
+      expect(bytes.subarray(0, 5).toString("latin1")).toBe("%PDF-");
+    }
+    expect(readdirSync(path.join(uploadsDir, "incoming"))).toEqual([]);
+  });
+
+  it("links each technician user to a technician of the same company", async () => {
+    const links = await rows<{ email: string; same_company: boolean | null }>(
+      `SELECT u.email, t.company_id = u.company_id AS same_company
+         FROM users u LEFT JOIN technicians t ON t.id = u.technician_id WHERE u.role = 'technician'`,
+    );
+
+    expect(links.length).toBeGreaterThan(0);
+    expect(links.filter((l) => l.same_company !== true)).toEqual([]);
+  });
+
+  it("records who submitted and who decided each credential in the audit trail", async () => {
+    const decided = world.credentials.filter((c) => c.state !== "submitted").length;
+
+    const actions = await rows<{ action: string; n: number }>(
+      "SELECT action, count(*)::int AS n FROM audit_events WHERE subject_type = 'credential' GROUP BY action",
+    );
+    const byAction = Object.fromEntries(actions.map((a) => [a.action, a.n]));
+
+    expect(byAction["credential.submitted"]).toBe(world.credentials.length);
+    expect((byAction["credential.verified"] ?? 0) + (byAction["credential.returned"] ?? 0)).toBe(decided);
+  });
+
+  it("computes baseline standings: Kestrel cleared, Bluewater lapsing, Copperline not cleared", async () => {
+    const standings = await rows<{ company: string; standing: string }>(
+      `SELECT DISTINCT c.name AS company, s.standing
+         FROM technician_standings s JOIN technicians t ON t.id = s.technician_id JOIN companies c ON c.id = t.company_id
+        WHERE s.requirement_set_id IS NULL ORDER BY 1`,
+    );
+
+    expect(standings).toEqual([
+      { company: "Bluewater Spindle Works Inc.", standing: "lapsing" },
+      { company: "Copperline Field Technicians Co.", standing: "not_cleared" },
+      { company: "Kestrel Ridge Machine Service LLC", standing: "cleared" },
+    ]);
+  });
+
+  it("does nothing when data is already there", async () => {
+    const before = await count("credentials");
+
+    const again = await loadDemoScenarioOnce({ uploadsDir, today });
+
+    expect(again).toBe(false);
+    expect(await count("credentials")).toBe(before);
+  });
+});

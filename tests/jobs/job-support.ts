@@ -1,0 +1,24 @@
+import { QueryTypes } from "sequelize";
+import { db } from "../../server/db/sequelize.ts";
+
+export const JOB_DEPS = { warningDays: [60, 30, 14, 7, 1], publicUrl: "https://clearbench.test" } as const;
+
+export const HOUR = 3_600_000;
+export const DAY = 24 * HOUR;
+
+export async function rows<T extends object>(sql: string, bind: unknown[] = []): Promise<T[]> {
+  return db().query<T>(sql, { bind, type: QueryTypes.SELECT });
+}
+
+export async function storedStanding(technicianId: number, requirementSetId: number | null = null) {
+  const [row] = await rows<{ standing: string; computed_at: Date }>(
+    "SELECT standing, computed_at FROM technician_standings WHERE technician_id = $1 AND coalesce(requirement_set_id, 0) = $2",
+    [technicianId, requirementSetId ?? 0],
+  );
+  return row?.standing ?? null;
+}
+
+export async function noticeThresholds(credentialId: number): Promise<number[]> {
+  const found = await rows<{ threshold_days: number }>("SELECT threshold_days FROM notices WHERE credential_id = $1 ORDER BY threshold_days DESC", [credentialId]);
+  return found.map((r) => r.threshold_days);
+}

@@ -1,0 +1,167 @@
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { Sequelize } from "sequelize";
+import { buildTestApp, type TestApp } from "../support/test-app.ts";
+import { startTestMailCatcher } from "../support/mail-catcher.ts";
+import { freePort } from "../support/free-port.ts";
+import { buildClearedProvider, buildCredentialRow, trainingFields } from "../fixtures/build-credential-row.ts";
+import { runLapseJob } from "../../jobs/lapse.ts";
+import { runSendOutbox } from "../../jobs/send-outbox.ts";
+import { createSmtpMailer } from "../../server/mail/index.ts";
+import { JOB_DEPS, rows } from "./job-support.ts";
+
+let t: TestApp;
+let catcher: Awaited<ReturnType<typeof startTestMailCatcher>>;
+beforeAll(async () => {
+  t = buildTestApp();
+  catcher = await startTestMailCatcher();
+});
+afterAll(async () => {
+  await catcher.close();
+  await t.close();
+});
+
+const FROM = "Clearbench <no-reply@clearbench.test>";
+
+async function providerWithCard(issueDate = "2024-05-15") {
+  const provider = await buildClearedProvider({ glExpires: "2028-06-01" });
+  const card = await buildCredentialRow({
+    companyId: provider.company.id,
+    technicianId: provider.technician.id,
+    typeCode: "arc_flash",
+    fields: trainingFields({ issueDate }),
+    submittedBy: provider.admin.id,
+  });
+  return { ...provider, card };
+}
+
+describe("lapse notices by e-mail", () => {
+  it("sends each notice once when the job runs twice", async () => {
+    const p = await providerWithCard();
+    const asOf = new Date("2027-05-09T11:00:00Z"); // 6 days 18 h before the card's lapse: the 7-day window
+
+    await runLapseJob({ asOf }, JOB_DEPS);
+    await catcher.deliver(new Date(Date.now() + 1_000));
+    await runLapseJob({ asOf }, JOB_DEPS);
+    await runLapseJob({ asOf: new Date(asOf.getTime() + 3_600_000) }, JOB_DEPS);
+    await catcher.deliver(new Date(Date.now() + 1_000));
+
+    expect(catcher.to(p.admin.email)).toHaveLength(1);
+    expect(catcher.to(p.technicianUser.email)).toHaveLength(1);
+  });
+
+  it("sends each notice once when two instances race on separate connections, and one of them is skipped or finds nothing", async () => {
+    const p = await providerWithCard();
+    const asOf = new Date("2027-05-15T12:00:00Z"); // inside the 1-day window
+    const pools = [0, 1].map(() => new Sequelize(t.config.DATABASE_URL!, { dialect: "postgres", logging: false }));
+
+    const results = await Promise.all(pools.map((sequelize) => runLapseJob({ asOf }, { ...JOB_DEPS, sequelize })));
+    await Promise.all(pools.map((s) => s.close()));
+    await catcher.deliver(new Date(Date.now() + 1_000));
+
+    const ran = results.filter((r) => !r.skipped);
+    expect(ran.length).toBeGreaterThanOrEqual(1);
+    expect(ran.reduce((n, r) => n + (r.skipped ? 0 : r.noticesCreated), 0)).toBeGreaterThanOrEqual(1);
+    expect(catcher.to(p.admin.email)).toHaveLength(1);
+    expect(catcher.to(p.technicianUser.email)).toHaveLength(1);
+  });
+
+  it("skips the run while another instance holds the advisory lock", async () => {
+    const holder = new Sequelize(t.config.DATABASE_URL!, { dialect: "postgres", logging: false });
+    let release!: () => void;
+    const released = new Promise<void>((resolve) => (release = resolve));
+    let locked!: () => void;
+    const lockTaken = new Promise<void>((resolve) => (locked = resolve));
+    const holding = holder.transaction(async (transaction) => {
+      await holder.query("SELECT pg_advisory_xact_lock(1668047361)", { transaction }); // 0x636c6201, the lapse job's key
+      locked();
+      await released;
+    });
+    await lockTaken;
+
+    const result = await runLapseJob({ asOf: new Date("2027-05-20T12:00:00Z") }, JOB_DEPS);
+    release();
+    await holding;
+    await holder.close();
+
+    expect(result).toEqual({ skipped: true });
+  });
+
+  it("loses nothing while SMTP is down and sends it once SMTP is back", async () => {
+    const p = await providerWithCard("2024-06-20");
+    await runLapseJob({ asOf: new Date("2027-06-19T12:00:00Z") }, JOB_DEPS);
+    const closedPort = await freePort();
+    const downMailer = createSmtpMailer(`smtp://127.0.0.1:${closedPort}`);
+
+    const down = await runSendOutbox({ asOf: new Date() }, { mailer: downMailer, from: FROM, maxRounds: 1 });
+    downMailer.close();
+    const pending = await rows<{ status: string; attempts: number }>("SELECT status, attempts FROM outbox_messages WHERE to_address = $1", [p.admin.email]);
+    const upMailer = createSmtpMailer(catcher.url);
+    const up = await runSendOutbox({ asOf: new Date(Date.now() + 10 * 60_000) }, { mailer: upMailer, from: FROM });
+    upMailer.close();
+
+    expect(down.sent).toBe(0);
+    expect(down.retried).toBeGreaterThan(0);
+    expect(pending).toEqual([{ status: "pending", attempts: 1 }]);
+    expect(up.sent).toBeGreaterThan(0);
+    expect(catcher.to(p.admin.email)).toHaveLength(1);
+    expect(catcher.to(p.technicianUser.email)).toHaveLength(1);
+  });
+
+  it("e-mails the credential, the holder, the lapse date in the company's zone and a link to upload the renewal, as text and HTML", async () => {
+    const p = await buildClearedProvider({ glExpires: "2027-08-01", timeZone: "America/New_York" });
+
+    await runLapseJob({ asOf: new Date("2027-07-31T12:00:00Z") }, JOB_DEPS);
+    await catcher.deliver(new Date(Date.now() + 1_000));
+
+    const [mail] = catcher.to(p.admin.email);
+    // 12:01 a.m. standard time on 2027-08-01 in New York is 05:01Z, 1:01 AM EDT on the wall clock (TRADE-FACTS 1.3).
+    expect(mail?.subject).toBe(`Commercial general liability for ${p.company.name} lapses in 1 day`);
+    expect(mail?.text).toContain("Sunday, August 1, 2027 at 1:01 AM EDT");
+    expect(mail?.text).toContain("https://clearbench.test/provider/documents/new?type=general_liability");
+    expect(mail?.html).toContain('<a href="https://clearbench.test/provider/documents/new?type=general_liability">');
+    expect(mail?.html).toContain("Commercial general liability held by");
+    // A company-held policy goes to the office only, not to each technician.
+    expect(catcher.to(p.technicianUser.email)).toHaveLength(0);
+  });
+
+  it("gives the technician a link to their own card upload and an in-app notification", async () => {
+    const p = await providerWithCard("2024-07-02");
+
+    await runLapseJob({ asOf: new Date("2027-07-01T12:00:00Z") }, JOB_DEPS);
+    await catcher.deliver(new Date(Date.now() + 1_000));
+
+    const [mail] = catcher.to(p.technicianUser.email);
+    expect(mail?.text).toContain("https://clearbench.test/technician/upload-card?type=arc_flash");
+    expect(mail?.text).toContain(p.technician.name);
+    const notes = await rows<{ user_id: number; kind: string; link: string }>(
+      "SELECT user_id, kind, link FROM notifications WHERE user_id = ANY($1::int[]) ORDER BY user_id",
+      [[p.admin.id, p.technicianUser.id]],
+    );
+    expect(notes).toEqual([
+      { user_id: p.admin.id, kind: "credential_lapsing", link: `https://clearbench.test/provider/documents/new?type=arc_flash&technicianId=${p.technician.id}` },
+      { user_id: p.technicianUser.id, kind: "credential_lapsing", link: "https://clearbench.test/technician/upload-card?type=arc_flash" },
+    ]);
+  });
+});
+
+describe("lapse job statements", () => {
+  it("issues the same small number of SQL statements whatever the number of credentials", async () => {
+    let issued = 0;
+    const counting = new Sequelize(t.config.DATABASE_URL!, { dialect: "postgres", logging: () => (issued += 1) });
+    for (let i = 0; i < 3; i += 1) await providerWithCard("2024-08-10");
+
+    const first = await runLapseJob({ asOf: new Date("2027-08-09T12:00:00Z") }, { ...JOB_DEPS, sequelize: counting });
+    const firstIssued = issued;
+    for (let i = 0; i < 12; i += 1) await providerWithCard("2024-08-12");
+    issued = 0;
+    const second = await runLapseJob({ asOf: new Date("2027-08-11T12:00:00Z") }, { ...JOB_DEPS, sequelize: counting });
+    await counting.close();
+
+    expect(first.skipped || second.skipped).toBe(false);
+    if (first.skipped || second.skipped) return;
+    expect(second.noticesCreated).toBeGreaterThan(first.noticesCreated);
+    expect(second.statements).toBe(first.statements);
+    expect(issued).toBe(firstIssued);
+    expect(second.statements).toBe(issued);
+  });
+});

@@ -1,0 +1,47 @@
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { buildTestApp, type TestApp } from "../support/test-app.ts";
+import { startTestMailCatcher } from "../support/mail-catcher.ts";
+import { buildCompany } from "../support/build-company.ts";
+import { buildProvider, buildCredentialRow, insuranceFields } from "../fixtures/build-credential-row.ts";
+import { runReviewerDigest } from "../../jobs/reviewer-digest.ts";
+import { Credential } from "../../server/credentials/model.ts";
+
+let t: TestApp;
+let catcher: Awaited<ReturnType<typeof startTestMailCatcher>>;
+beforeAll(async () => {
+  t = buildTestApp();
+  catcher = await startTestMailCatcher();
+});
+afterAll(async () => {
+  await catcher.close();
+  await t.close();
+});
+
+const deps = { timeZone: "America/Chicago", publicUrl: "https://clearbench.test" };
+
+describe("reviewers' daily digest", () => {
+  it("e-mails each reviewer once a day with the queue count and the oldest waiting time", async () => {
+    const { users } = await buildCompany("platform", ["reviewer"]);
+    const p = await buildProvider();
+    const waiting = await buildCredentialRow({
+      companyId: p.company.id,
+      typeCode: "general_liability",
+      fields: insuranceFields(),
+      state: "submitted",
+      submittedBy: p.admin.id,
+    });
+    await Credential.update({ submittedAt: new Date("2030-01-01T09:00:00Z") }, { where: { id: waiting.id } });
+    const asOf = new Date("2030-01-03T12:00:00Z");
+
+    const first = await runReviewerDigest({ asOf }, deps);
+    const again = await runReviewerDigest({ asOf: new Date(asOf.getTime() + 3_600_000) }, deps);
+    await catcher.deliver(new Date(Date.now() + 1_000));
+
+    const mails = catcher.to(users.reviewer!.email);
+    expect(first).toMatchObject({ skipped: false, digestDate: "2030-01-03" });
+    expect(again).toMatchObject({ skipped: false, sent: 0 });
+    expect(mails).toHaveLength(1);
+    expect(mails[0]?.subject).toMatch(/^Verification queue: \d+ waiting, oldest 2 days$/);
+    expect(mails[0]?.text).toContain("https://clearbench.test/review");
+  });
+});

@@ -1,0 +1,36 @@
+import { randomUUID } from "node:crypto";
+import { spawnSync } from "node:child_process";
+import { existsSync } from "node:fs";
+import path from "node:path";
+import pg from "pg";
+import { loadConfig } from "../../server/config.ts";
+import { startServer, type RunningServer } from "../../server/main.ts";
+import { loadDemoScenarioOnce } from "../../server/db/demo-scenario/index.ts";
+
+/** Builds the production client once per test run into the run's temporary folder. */
+export function ensureClientBuild(): string {
+  const dist = process.env.CLEARBENCH_TEST_DIST!;
+  if (!existsSync(path.join(dist, "index.html"))) {
+    const built = spawnSync(path.resolve("node_modules/.bin/vite"), ["build", "--outDir", dist, "--logLevel", "warn"], { stdio: "inherit" });
+    if (built.status !== 0) throw new Error("vite build failed");
+  }
+  return dist;
+}
+
+/**
+ * The real server, serving the production build, on a database of its own in the test cluster with
+ * the demo scenario loaded, so browser journeys sign in with the demo accounts.
+ */
+export async function startBrowserServer(env: Record<string, string> = {}): Promise<RunningServer & { url: string; databaseUrl: string }> {
+  const base = new URL(process.env.DATABASE_URL!);
+  const name = `browser_${randomUUID().slice(0, 8)}`;
+  const admin = new pg.Client({ connectionString: process.env.DATABASE_URL });
+  await admin.connect();
+  await admin.query(`CREATE DATABASE ${name}`);
+  await admin.end();
+  base.pathname = `/${name}`;
+  const config = loadConfig({ ...process.env, DATABASE_URL: base.toString(), PORT: "0", RUN_SCHEDULE: "false", ...env });
+  const running = await startServer(config, { clientDir: ensureClientBuild() });
+  await loadDemoScenarioOnce({ uploadsDir: config.UPLOADS_DIR, today: new Date() });
+  return { ...running, url: `http://127.0.0.1:${running.port}`, databaseUrl: base.toString() };
+}
