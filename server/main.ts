@@ -8,6 +8,8 @@ import { migrate } from "./db/migrate.ts";
 import { createApp } from "./app.ts";
 import { setPasswordCost } from "./accounts/index.ts";
 import { createSmtpMailer, deliverDueMail } from "./mail/index.ts";
+import { sweepOrphans } from "./storage/sweep-orphans.ts";
+import type { FileStorage } from "./storage/index.ts";
 
 export interface RunningServer {
   server: Server;
@@ -28,6 +30,8 @@ export async function startServer(config: Config, options: { clientDir?: string 
   const sessionPool = new pg.Pool({ connectionString: config.DATABASE_URL, max: 5, connectionTimeoutMillis: 3_000 });
   sessionPool.on("error", (err) => log.warn({ err }, "session pool error"));
   const app = createApp({ config, sessionPool, clientDir: options.clientDir });
+  const swept = await sweepOrphans(app.locals.storage as FileStorage);
+  if (Object.values(swept).some((n) => n > 0)) log.warn({ swept }, "start-up sweep repaired stored files");
 
   const mailer = config.SMTP_URL ? createSmtpMailer(config.SMTP_URL) : undefined;
   const sendMail = async () => {

@@ -1,5 +1,7 @@
 import { createHash } from "node:crypto";
-import { readFile, rm } from "node:fs/promises";
+import { READY_SUFFIX } from "../storage/index.ts";
+import { readFile, rename, rm } from "node:fs/promises";
+import { randomUUID } from "node:crypto";
 import path from "node:path";
 import { fileTypeFromBuffer } from "file-type";
 import type { UploadDocument } from "../../shared/credentials/schemas.ts";
@@ -41,7 +43,7 @@ export function safeFileName(name: string): string {
   return Array.from(base || "document").slice(0, 120).join("");
 }
 
-async function sniff(bytes: Buffer, originalName: string): Promise<ExtractableMime> {
+export async function sniffUpload(bytes: Buffer, originalName: string): Promise<ExtractableMime> {
   const detected = await fileTypeFromBuffer(bytes);
   const mime = detected?.mime as ExtractableMime | undefined;
   if (!mime || !(mime in EXTENSIONS)) {
@@ -59,6 +61,7 @@ async function sniff(bytes: Buffer, originalName: string): Promise<ExtractableMi
  * is the temporary file renamed into place, and any failure removes both, so nothing is half-saved.
  */
 export async function uploadDocument(user: Express.User, input: UploadDocument, file: UploadedFile | undefined, storage: FileStorage) {
+  let pending = file?.path;
   try {
     if (!file) throw new AppError("invalid_input", "Choose a file to upload", [{ path: "file", message: "required" }]);
     const type = await activeType(input.typeCode);
@@ -73,8 +76,12 @@ export async function uploadDocument(user: Express.User, input: UploadDocument, 
     if (file.size === 0) throw new AppError("invalid_input", "The file is empty", [{ path: "file", message: "0 bytes" }]);
 
     const bytes = await readFile(file.path);
-    const mime = await sniff(bytes, file.originalname);
+    const mime = await sniffUpload(bytes, file.originalname);
     const sha256 = createHash("sha256").update(bytes).digest("hex");
+    // Named by its hash before the row commits, so the start-up sweep can finish a move a crash interrupted.
+    const ready = path.join(storage.incomingDir, `${sha256}.${randomUUID()}${READY_SUFFIX}`);
+    await rename(file.path, ready);
+    pending = ready;
     const extraction = await extractDocument({ bytes: new Uint8Array(bytes), mime, credentialType: { code: type.code, fieldSet: type.fieldSet } }).catch((err: unknown) => {
       if (err instanceof DocumentUnreadableError) {
         throw new AppError("invalid_input", UNREADABLE[err.reason] ?? "The file cannot be read", [{ path: "file", message: err.reason }]);
@@ -91,7 +98,7 @@ export async function uploadDocument(user: Express.User, input: UploadDocument, 
       return row;
     });
     try {
-      await storage.commit(file.path, sha256);
+      await storage.commit(ready, sha256);
     } catch (err) {
       await document.destroy();
       throw err;
@@ -109,7 +116,7 @@ export async function uploadDocument(user: Express.User, input: UploadDocument, 
       warnings: reviewerWarnings({ fieldSet: type.fieldSet, fields: fields as never, companyLegalName: company?.name ?? "", technicianName: technician?.name, duplicateOfOtherHolder: otherHolder }),
     };
   } finally {
-    if (file) await rm(file.path, { force: true });
+    if (pending) await rm(pending, { force: true });
   }
 }
 

@@ -12,8 +12,18 @@ export async function replyToReview(actor: Express.User, reviewId: number, body:
       { reply: body, repliedBy: actor.id, repliedAt: new Date() },
       { where: { id: reviewId, reply: { [Op.is]: null } }, returning: true, transaction },
     );
-    if (count === 0 || !rows[0]) throw new AppError("conflict", "This review already has the company's reply");
-    await recordAudit({ actorUserId: actor.id, action: "review.replied", subjectType: "job_review", subjectId: reviewId, after: { reply: body } }, transaction);
+    if (count === 0 || !rows[0])
+      throw new AppError("conflict", "This review already has the company's reply");
+    await recordAudit(
+      {
+        actorUserId: actor.id,
+        action: "review.replied",
+        subjectType: "job_review",
+        subjectId: reviewId,
+        after: { reply: body },
+      },
+      transaction,
+    );
     return rows[0];
   });
   return (await toReviewDtos([review]))[0]!;
@@ -26,8 +36,18 @@ export async function reportReview(actor: Express.User, reviewId: number, reason
       { reportedAt: new Date(), reportReason: reason, reportedBy: actor.id },
       { where: { id: reviewId, reportedAt: { [Op.is]: null } }, returning: true, transaction },
     );
-    if (count === 0 || !rows[0]) throw new AppError("conflict", "This review has already been reported and awaits an admin");
-    await recordAudit({ actorUserId: actor.id, action: "review.reported", subjectType: "job_review", subjectId: reviewId, after: { reason } }, transaction);
+    if (count === 0 || !rows[0])
+      throw new AppError("conflict", "This review has already been reported and awaits an admin");
+    await recordAudit(
+      {
+        actorUserId: actor.id,
+        action: "review.reported",
+        subjectType: "job_review",
+        subjectId: reviewId,
+        after: { reason },
+      },
+      transaction,
+    );
     return rows[0];
   });
   return (await toReviewDtos([review]))[0]!;

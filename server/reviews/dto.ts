@@ -5,10 +5,15 @@ import { Technician } from "../technicians/index.ts";
 import type { JobReview } from "./model.ts";
 
 async function namesFor(rows: JobReview[]) {
-  const ids = (pick: (r: JobReview) => number | null) => [...new Set(rows.flatMap((r) => (pick(r) === null ? [] : [pick(r)!])))];
+  const ids = (pick: (r: JobReview) => number | null) => [
+    ...new Set(rows.flatMap((r) => (pick(r) === null ? [] : [pick(r)!]))),
+  ];
   const [shops, users, technicians] = await Promise.all([
     Company.findAll({ where: { id: ids((r) => r.shopCompanyId) }, attributes: ["id", "name"] }),
-    User.findAll({ where: { id: [...ids((r) => r.authorUserId), ...ids((r) => r.reportedBy)] }, attributes: ["id", "name"] }),
+    User.findAll({
+      where: { id: [...ids((r) => r.authorUserId), ...ids((r) => r.reportedBy)] },
+      attributes: ["id", "name"],
+    }),
     Technician.findAll({ where: { id: ids((r) => r.technicianId) }, attributes: ["id", "name"] }),
   ]);
   return {

@@ -7,7 +7,10 @@ import { toReportedReviewDtos, toReviewDtos } from "./dto.ts";
 const REPORTED_LIMIT = 200;
 
 /** Average with its count over every review, then one page of them, newest first. */
-export async function listTechnicianReviews(technicianId: number, page: { limit: number; before?: number | undefined }): Promise<TechnicianReviewsDto> {
+export async function listTechnicianReviews(
+  technicianId: number,
+  page: { limit: number; before?: number | undefined },
+): Promise<TechnicianReviewsDto> {
   const [totals] = await db().query<{ count: number; star_sum: number | null }>(
     "SELECT count(*)::int AS count, sum(stars)::int AS star_sum FROM job_reviews WHERE technician_id = $1",
     { bind: [technicianId], type: QueryTypes.SELECT },
@@ -18,7 +21,11 @@ export async function listTechnicianReviews(technicianId: number, page: { limit:
     limit: page.limit,
   });
   const count = totals?.count ?? 0;
-  return { average: count > 0 ? (totals!.star_sum ?? 0) / count : null, count, items: await toReviewDtos(rows) };
+  return {
+    average: count > 0 ? (totals!.star_sum ?? 0) / count : null,
+    count,
+    items: await toReviewDtos(rows),
+  };
 }
 
 export async function findWorkOrderReview(workOrderId: number) {
@@ -28,6 +35,10 @@ export async function findWorkOrderReview(workOrderId: number) {
 
 /** The admin's queue of flagged reviews, oldest report first. */
 export async function listReportedReviews() {
-  const rows = await JobReview.findAll({ where: { reportedAt: { [Op.ne]: null } }, order: [["reportedAt", "ASC"]], limit: REPORTED_LIMIT });
+  const rows = await JobReview.findAll({
+    where: { reportedAt: { [Op.ne]: null } },
+    order: [["reportedAt", "ASC"]],
+    limit: REPORTED_LIMIT,
+  });
   return toReportedReviewDtos(rows);
 }

@@ -4,16 +4,22 @@ import { WorkOrder, sideOf } from "../work-orders/index.ts";
 import { JobReview } from "./model.ts";
 
 /** A buyer of the shop that raised the work order; every other shop's buyer gets the 404 of a missing one. */
-export const canWriteReview = requireOwnership(requireRole("buyer"), "a buyer of the shop that raised it", async (user, params) => {
-  const workOrder = await WorkOrder.findByPk(Number(params.workOrderId), { attributes: ["shopCompanyId"] });
-  return workOrder?.shopCompanyId === user.companyId;
-});
+export const canWriteReview = requireOwnership(
+  requireRole("buyer"),
+  "a buyer of the shop that raised it",
+  async (user, params) => {
+    const workOrder = await WorkOrder.findByPk(Number(params.workOrderId), { attributes: ["shopCompanyId"] });
+    return workOrder?.shopCompanyId === user.companyId;
+  },
+);
 
 export const canReadWorkOrderReview = requireOwnership(
   requireRole("buyer", "provider_admin", "technician"),
   "either side of the work order",
   async (user, params) => {
-    const workOrder = await WorkOrder.findByPk(Number(params.workOrderId), { attributes: ["shopCompanyId", "serviceCompanyId", "technicianId"] });
+    const workOrder = await WorkOrder.findByPk(Number(params.workOrderId), {
+      attributes: ["shopCompanyId", "serviceCompanyId", "technicianId"],
+    });
     return workOrder ? sideOf(user, workOrder) !== null : false;
   },
 );
@@ -23,10 +29,14 @@ async function technicianCompanyOf(review: JobReview): Promise<number | undefine
 }
 
 /** The rated technician's company admin: the service company answers once, in its own name. */
-export const canReplyToReview = requireOwnership(requireRole("provider_admin"), "of the rated technician's company", async (user, params) => {
-  const review = await JobReview.findByPk(Number(params.reviewId));
-  return review ? (await technicianCompanyOf(review)) === user.companyId : false;
-});
+export const canReplyToReview = requireOwnership(
+  requireRole("provider_admin"),
+  "of the rated technician's company",
+  async (user, params) => {
+    const review = await JobReview.findByPk(Number(params.reviewId));
+    return review ? (await technicianCompanyOf(review)) === user.companyId : false;
+  },
+);
 
 export async function isPartyToReview(user: SignedInUser, review: JobReview): Promise<boolean> {
   if (user.role === "buyer") return review.shopCompanyId === user.companyId;
@@ -35,13 +45,19 @@ export async function isPartyToReview(user: SignedInUser, review: JobReview): Pr
   return false;
 }
 
-export const canReportReview = requireOwnership(requireRole("buyer", "provider_admin", "technician"), "either side of the job", async (user, params) => {
-  const review = await JobReview.findByPk(Number(params.reviewId));
-  return review ? isPartyToReview(user, review) : false;
-});
+export const canReportReview = requireOwnership(
+  requireRole("buyer", "provider_admin", "technician"),
+  "either side of the job",
+  async (user, params) => {
+    const review = await JobReview.findByPk(Number(params.reviewId));
+    return review ? isPartyToReview(user, review) : false;
+  },
+);
 
 export const canModerateReviews = requireRole("admin");
 
-export const canReadTechnicianReviews = requireOwnership(signedIn, "an existing technician", async (_user, params) =>
-  (await Technician.count({ where: { id: Number(params.technicianId) } })) > 0,
+export const canReadTechnicianReviews = requireOwnership(
+  signedIn,
+  "an existing technician",
+  async (_user, params) => (await Technician.count({ where: { id: Number(params.technicianId) } })) > 0,
 );

@@ -30,22 +30,32 @@ reviewRoutes.post(
   },
 );
 
-reviewRoutes.get("/work-orders/:workOrderId/review", { allow: canReadWorkOrderReview, params: workOrderParamsSchema }, (_req, _res, { params }) =>
-  findWorkOrderReview(params.workOrderId),
+reviewRoutes.get(
+  "/work-orders/:workOrderId/review",
+  { allow: canReadWorkOrderReview, params: workOrderParamsSchema },
+  (_req, _res, { params }) => findWorkOrderReview(params.workOrderId),
 );
 
-reviewRoutes.post("/reviews/:reviewId/reply", { allow: canReplyToReview, params: reviewParamsSchema, body: replyToReviewSchema }, (req, _res, { params, body }) =>
-  replyToReview(req.user!, params.reviewId, body.body),
+reviewRoutes.post(
+  "/reviews/:reviewId/reply",
+  { allow: canReplyToReview, params: reviewParamsSchema, body: replyToReviewSchema },
+  (req, _res, { params, body }) => replyToReview(req.user!, params.reviewId, body.body),
 );
 
-reviewRoutes.post("/reviews/:reviewId/report", { allow: canReportReview, params: reviewParamsSchema, body: reportReviewSchema }, (req, _res, { params, body }) =>
-  reportReview(req.user!, params.reviewId, body.reason),
+reviewRoutes.post(
+  "/reviews/:reviewId/report",
+  { allow: canReportReview, params: reviewParamsSchema, body: reportReviewSchema },
+  (req, _res, { params, body }) => reportReview(req.user!, params.reviewId, body.reason),
 );
 
 reviewRoutes.get("/admin/reviews/reported", { allow: canModerateReviews }, () => listReportedReviews());
 
 reviewRoutes.get(
   "/technicians/:technicianId/reviews",
-  { allow: canReadTechnicianReviews, params: technicianReviewsParamsSchema, query: technicianReviewsQuerySchema },
+  {
+    allow: canReadTechnicianReviews,
+    params: technicianReviewsParamsSchema,
+    query: technicianReviewsQuerySchema,
+  },
   (_req, _res, { params, query }) => listTechnicianReviews(params.technicianId, query),
 );

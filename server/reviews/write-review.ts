@@ -26,19 +26,38 @@ export async function writeReview(buyer: Express.User, workOrderId: number, inpu
   try {
     const review = await db().transaction(async (transaction) => {
       const workOrder = await WorkOrder.findByPk(workOrderId, { transaction, lock: transaction.LOCK.SHARE });
-      if (!workOrder || workOrder.shopCompanyId !== buyer.companyId) throw new AppError("not_found", "That work order was not found");
-      if (workOrder.status !== "confirmed") throw new AppError("forbidden", "Only a work order the shop has confirmed can be rated");
+      if (!workOrder || workOrder.shopCompanyId !== buyer.companyId)
+        throw new AppError("not_found", "That work order was not found");
+      if (workOrder.status !== "confirmed")
+        throw new AppError("forbidden", "Only a work order the shop has confirmed can be rated");
       const row = await JobReview.create(
-        { workOrderId, technicianId: workOrder.technicianId, shopCompanyId: workOrder.shopCompanyId, authorUserId: buyer.id, stars: input.stars, body: input.body },
+        {
+          workOrderId,
+          technicianId: workOrder.technicianId,
+          shopCompanyId: workOrder.shopCompanyId,
+          authorUserId: buyer.id,
+          stars: input.stars,
+          body: input.body,
+        },
         { transaction },
       );
       await addToRatings(workOrder.technicianId, input.stars, transaction);
-      await recordAudit({ actorUserId: buyer.id, action: "review.written", subjectType: "job_review", subjectId: row.id, after: { workOrderId, stars: input.stars } }, transaction);
+      await recordAudit(
+        {
+          actorUserId: buyer.id,
+          action: "review.written",
+          subjectType: "job_review",
+          subjectId: row.id,
+          after: { workOrderId, stars: input.stars },
+        },
+        transaction,
+      );
       return row;
     });
     return (await toReviewDtos([review]))[0]!;
   } catch (err) {
-    if (err instanceof UniqueConstraintError) throw new AppError("conflict", "This work order has already been rated");
+    if (err instanceof UniqueConstraintError)
+      throw new AppError("conflict", "This work order has already been rated");
     throw err;
   }
 }

@@ -1,18 +1,9 @@
 import { createHash } from "node:crypto";
 import { readFile, rm } from "node:fs/promises";
-import path from "node:path";
 import type { Response } from "express";
-import { fileTypeFromBuffer } from "file-type";
+import { safeFileName, sniffUpload } from "../credentials/index.ts";
 import { AppError } from "../http/app-error.ts";
 import type { FileStorage } from "../storage/index.ts";
-
-// The same three types and the same checks as credential documents: the type is read from the bytes, and the
-// file's name must agree with it.
-const EXTENSIONS: Record<string, string[]> = {
-  "application/pdf": [".pdf"],
-  "image/png": [".png"],
-  "image/jpeg": [".jpg", ".jpeg"],
-};
 
 export interface UploadedFile {
   path: string;
@@ -28,24 +19,20 @@ export interface CheckedAttachment {
   name: string;
 }
 
-/** A display name safe to store and to echo in a header: no folders, no control characters, bounded. */
-function safeFileName(name: string): string {
-  const base = path.basename(name.replace(/\\/g, "/")).replace(/[\u0000-\u001f\u007f"<>|:*?]/g, "_").trim();
-  return Array.from(base || "attachment").slice(0, 120).join("");
-}
-
 export async function checkAttachment(file: UploadedFile): Promise<CheckedAttachment> {
-  if (file.size === 0) throw new AppError("invalid_input", "The file is empty", [{ path: "file", message: "0 bytes" }]);
+  if (file.size === 0)
+    throw new AppError("invalid_input", "The file is empty", [{ path: "file", message: "0 bytes" }]);
   const bytes = await readFile(file.path);
-  const mime = (await fileTypeFromBuffer(bytes))?.mime;
-  if (!mime || !(mime in EXTENSIONS)) {
-    throw new AppError("unsupported_type", "Only PDF, PNG or JPEG files are accepted (checked from the file's content)", [{ path: "file", message: "not a PDF, PNG or JPEG" }]);
-  }
-  const ext = path.extname(file.originalname).toLowerCase();
-  if (!EXTENSIONS[mime]!.includes(ext)) {
-    throw new AppError("unsupported_type", `The file's name says ${ext || "no type"} but its content is ${mime}; rename or re-export it`, [{ path: "file", message: "extension does not match content" }]);
-  }
-  return { tempPath: file.path, sha256: createHash("sha256").update(bytes).digest("hex"), mime, sizeBytes: file.size, name: safeFileName(file.originalname) };
+  // The same three types and the same checks as credential documents: the type is read from the bytes, and the
+  // file's name must agree with it.
+  const mime = await sniffUpload(bytes, file.originalname);
+  return {
+    tempPath: file.path,
+    sha256: createHash("sha256").update(bytes).digest("hex"),
+    mime,
+    sizeBytes: file.size,
+    name: safeFileName(file.originalname),
+  };
 }
 
 /** Removes multer's temporary file (already moved into place when the upload was kept). */
@@ -54,14 +41,21 @@ export async function removeUpload(file: UploadedFile | undefined): Promise<void
 }
 
 /** Sends a stored attachment as data, never as a page: no sniffing, no scripts, a download unless it is an image. */
-export async function sendAttachment(res: Response, storage: FileStorage, file: { sha256: string; mime: string; originalName: string }) {
+export async function sendAttachment(
+  res: Response,
+  storage: FileStorage,
+  file: { sha256: string; mime: string; originalName: string },
+) {
   const ascii = file.originalName.replace(/[^\x20-\x7e]/g, "_").replace(/["\\]/g, "_");
   const disposition = file.mime.startsWith("image/") ? "inline" : "attachment";
   res.setHeader("Content-Type", file.mime);
   res.setHeader("X-Content-Type-Options", "nosniff");
   res.setHeader("Content-Security-Policy", "default-src 'none'; sandbox");
   res.setHeader("Cache-Control", "private, no-store");
-  res.setHeader("Content-Disposition", `${disposition}; filename="${ascii}"; filename*=UTF-8''${encodeURIComponent(file.originalName)}`);
+  res.setHeader(
+    "Content-Disposition",
+    `${disposition}; filename="${ascii}"; filename*=UTF-8''${encodeURIComponent(file.originalName)}`,
+  );
   const stream = await storage.open(file.sha256);
   await new Promise<void>((resolve, reject) => {
     stream.on("error", reject);

@@ -90,8 +90,14 @@ export async function toWorkOrderDto(r: WorkOrder, side: WorkOrderSide): Promise
             model: n.e_model,
             serialNumber: n.e_serial_number,
           },
-    technician: { id: r.technicianId, name: n.technician_name, companyId: r.serviceCompanyId, companyName: n.service_company_name },
-    requirementSet: r.requirementSetId === null ? null : { id: r.requirementSetId, name: n.requirement_set_name ?? "" },
+    technician: {
+      id: r.technicianId,
+      name: n.technician_name,
+      companyId: r.serviceCompanyId,
+      companyName: n.service_company_name,
+    },
+    requirementSet:
+      r.requirementSetId === null ? null : { id: r.requirementSetId, name: n.requirement_set_name ?? "" },
     declineReason: r.declineReason,
     hoursWorked: hours(r.hoursWorked),
     travelHours: hours(r.travelHours),

@@ -18,7 +18,10 @@ function scopeOf(user: Express.User): WhereOptions<WorkOrder> {
 export async function listWorkOrders(user: Express.User, status: WorkOrderStatus | undefined) {
   const rows = await WorkOrder.findAll({
     where: { ...scopeOf(user), ...(status ? { status } : {}) },
-    order: [["createdAt", "DESC"], ["id", "DESC"]],
+    order: [
+      ["createdAt", "DESC"],
+      ["id", "DESC"],
+    ],
     limit: LIST_LIMIT,
   });
   return toWorkOrderSummaries(rows);

@@ -1,4 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from "sequelize";
 import type { Urgency, WorkOrderSide, WorkOrderStatus } from "../../shared/work-orders/schemas.ts";
 import type { StandingSnapshot } from "../../shared/work-orders/standing-snapshot.ts";
 
@@ -31,7 +38,10 @@ export class WorkOrder extends Model<InferAttributes<WorkOrder>, InferCreationAt
   declare updatedAt: CreationOptional<Date>;
 }
 
-export class WorkOrderMessage extends Model<InferAttributes<WorkOrderMessage>, InferCreationAttributes<WorkOrderMessage>> {
+export class WorkOrderMessage extends Model<
+  InferAttributes<WorkOrderMessage>,
+  InferCreationAttributes<WorkOrderMessage>
+> {
   declare id: CreationOptional<number>;
   declare workOrderId: number;
   declare authorUserId: number;

@@ -11,28 +11,54 @@ import { standingSnapshotNow } from "./standing-now.ts";
 import { mailOtherSide, type WorkOrderNews } from "./work-order-emails.ts";
 import { toWorkOrderDto } from "./dto.ts";
 
-type Changes = Partial<Pick<WorkOrder, "declineReason" | "hoursWorked" | "travelHours" | "completionNote" | "snapshotAccepted" | "snapshotCompleted">>;
+type Changes = Partial<
+  Pick<
+    WorkOrder,
+    | "declineReason"
+    | "hoursWorked"
+    | "travelHours"
+    | "completionNote"
+    | "snapshotAccepted"
+    | "snapshotCompleted"
+  >
+>;
 
 interface Step {
   changes: (row: WorkOrder, now: Date, transaction: Transaction) => Promise<Changes> | Changes;
   news: (row: WorkOrder, actor: Express.User) => WorkOrderNews;
 }
 
-const STAMP = { accept: "acceptedAt", decline: "declinedAt", complete: "completedAt", confirm: "confirmedAt" } as const;
+const STAMP = {
+  accept: "acceptedAt",
+  decline: "declinedAt",
+  complete: "completedAt",
+  confirm: "confirmedAt",
+} as const;
 const SIDE_WORDS = { shop: "the shop that raised it", service: "the service company" } as const;
 
 /**
  * One status change: checked against the side and the expected status, then written by a conditional update on that
  * status, so of two people acting at once only one wins and the other gets a 409. Audit and e-mail share its transaction.
  */
-async function moveWorkOrder(actor: Express.User, id: number, action: WorkOrderAction, step: Step, link: string) {
+async function moveWorkOrder(
+  actor: Express.User,
+  id: number,
+  action: WorkOrderAction,
+  step: Step,
+  link: string,
+) {
   const { side, from, to } = TRANSITIONS[action];
   const row = await db().transaction(async (transaction) => {
     const current = await WorkOrder.findByPk(id, { transaction });
     const actorSide = current ? sideOf(actor, current) : null;
     if (!current || !actorSide) throw new AppError("not_found", "That work order was not found");
-    if (actorSide !== side) throw new AppError("forbidden", `Only ${SIDE_WORDS[side]} may ${action} this work order`);
-    if (current.status !== from) throw new AppError("conflict", `This work order is ${current.status}; only a ${from} one can be changed that way`);
+    if (actorSide !== side)
+      throw new AppError("forbidden", `Only ${SIDE_WORDS[side]} may ${action} this work order`);
+    if (current.status !== from)
+      throw new AppError(
+        "conflict",
+        `This work order is ${current.status}; only a ${from} one can be changed that way`,
+      );
     const now = new Date();
     const changes = await step.changes(current, now, transaction);
     const [count, rows] = await WorkOrder.update(
@@ -40,12 +66,26 @@ async function moveWorkOrder(actor: Express.User, id: number, action: WorkOrderA
       { where: { id, status: from }, returning: true, transaction },
     );
     const updated = rows[0];
-    if (count === 0 || !updated) throw new AppError("conflict", "Someone else changed this work order first; reload it");
+    if (count === 0 || !updated)
+      throw new AppError("conflict", "Someone else changed this work order first; reload it");
     await recordAudit(
-      { actorUserId: actor.id, action: `work_order.${to}`, subjectType: "work_order", subjectId: id, before: { status: from }, after: { status: to, ...changes } },
+      {
+        actorUserId: actor.id,
+        action: `work_order.${to}`,
+        subjectType: "work_order",
+        subjectId: id,
+        before: { status: from },
+        after: { status: to, ...changes },
+      },
       transaction,
     );
-    await mailOtherSide(updated, side === "shop" ? "service" : "shop", step.news(updated, actor), link, transaction);
+    await mailOtherSide(
+      updated,
+      side === "shop" ? "service" : "shop",
+      step.news(updated, actor),
+      link,
+      transaction,
+    );
     return updated;
   });
   return toWorkOrderDto(row, side);
@@ -59,9 +99,19 @@ export function acceptWorkOrder(actor: Express.User, id: number, warningDays: nu
     {
       // A technician who stopped being cleared since the request cannot take the job: the snapshot is the shop's proof.
       changes: async (row, now, transaction) => {
-        const snapshot = await standingSnapshotNow(row.technicianId, row.requirementSetId, now, warningDays, transaction);
+        const snapshot = await standingSnapshotNow(
+          row.technicianId,
+          row.requirementSetId,
+          now,
+          warningDays,
+          transaction,
+        );
         if (!isClearedNow(snapshot.standing)) {
-          throw new AppError("conflict", `${snapshot.technicianName} is not cleared right now; renew what lapsed before accepting`, unmetRequirements(snapshot));
+          throw new AppError(
+            "conflict",
+            `${snapshot.technicianName} is not cleared right now; renew what lapsed before accepting`,
+            unmetRequirements(snapshot),
+          );
         }
         return { snapshotAccepted: snapshot };
       },
@@ -78,13 +128,22 @@ export function declineWorkOrder(actor: Express.User, id: number, reason: string
     "decline",
     {
       changes: () => ({ declineReason: reason }),
-      news: (row, who) => ({ subject: "declined", lines: [`${who.name} declined work order #${row.id}.`, `Reason: ${reason}`] }),
+      news: (row, who) => ({
+        subject: "declined",
+        lines: [`${who.name} declined work order #${row.id}.`, `Reason: ${reason}`],
+      }),
     },
     link,
   );
 }
 
-export function completeWorkOrder(actor: Express.User, id: number, input: CompleteWorkOrder, warningDays: number, link: string) {
+export function completeWorkOrder(
+  actor: Express.User,
+  id: number,
+  input: CompleteWorkOrder,
+  warningDays: number,
+  link: string,
+) {
   return moveWorkOrder(
     actor,
     id,
@@ -95,11 +154,20 @@ export function completeWorkOrder(actor: Express.User, id: number, input: Comple
         hoursWorked: input.hoursWorked.toFixed(2),
         travelHours: input.travelHours.toFixed(2),
         completionNote: input.note ?? null,
-        snapshotCompleted: await standingSnapshotNow(row.technicianId, row.requirementSetId, now, warningDays, transaction),
+        snapshotCompleted: await standingSnapshotNow(
+          row.technicianId,
+          row.requirementSetId,
+          now,
+          warningDays,
+          transaction,
+        ),
       }),
       news: (row, who) => ({
         subject: "completed, please confirm",
-        lines: [`${who.name} marked work order #${row.id} completed: ${input.hoursWorked} hours on site, ${input.travelHours} hours travel.`, ...(input.note ? [`Note: ${input.note}`] : [])],
+        lines: [
+          `${who.name} marked work order #${row.id} completed: ${input.hoursWorked} hours on site, ${input.travelHours} hours travel.`,
+          ...(input.note ? [`Note: ${input.note}`] : []),
+        ],
       }),
     },
     link,
@@ -113,7 +181,10 @@ export function confirmWorkOrder(actor: Express.User, id: number, link: string) 
     "confirm",
     {
       changes: () => ({}),
-      news: (row, who) => ({ subject: "confirmed", lines: [`${who.name} confirmed that work order #${row.id} is complete.`] }),
+      news: (row, who) => ({
+        subject: "confirmed",
+        lines: [`${who.name} confirmed that work order #${row.id} is complete.`],
+      }),
     },
     link,
   );

@@ -9,7 +9,8 @@ import { standingSnapshotNow } from "./standing-now.ts";
 import { mailOtherSide } from "./work-order-emails.ts";
 import { toWorkOrderDto } from "./dto.ts";
 
-const unknown = (path: string, message: string) => new AppError("invalid_input", message, [{ path, message: "unknown or not yours" }]);
+const unknown = (path: string, message: string) =>
+  new AppError("invalid_input", message, [{ path, message: "unknown or not yours" }]);
 
 /** Checks that every id in the request names a record this shop may use, and settles the machine technology. */
 async function resolveTargets(buyer: Express.User, input: RaiseWorkOrder) {
@@ -19,15 +20,23 @@ async function resolveTargets(buyer: Express.User, input: RaiseWorkOrder) {
     input.equipmentId ? findEquipment(input.equipmentId) : undefined,
     input.requirementSetId ? findRequirementSet(input.requirementSetId) : undefined,
   ]);
-  if (!site || site.company_id !== buyer.companyId) throw unknown("body.siteId", "Choose one of your shop's sites");
-  if (!technician || !technician.active || technician.company_kind !== "service") throw unknown("body.technicianId", "That technician was not found");
-  if (input.equipmentId && (!equipment || equipment.site_id !== site.id)) throw unknown("body.equipmentId", "Choose a machine at that site");
-  if (input.requirementSetId && (!requirementSet || requirementSet.company_id !== buyer.companyId || !requirementSet.active)) {
+  if (!site || site.company_id !== buyer.companyId)
+    throw unknown("body.siteId", "Choose one of your shop's sites");
+  if (!technician || !technician.active || technician.company_kind !== "service")
+    throw unknown("body.technicianId", "That technician was not found");
+  if (input.equipmentId && (!equipment || equipment.site_id !== site.id))
+    throw unknown("body.equipmentId", "Choose a machine at that site");
+  if (
+    input.requirementSetId &&
+    (!requirementSet || requirementSet.company_id !== buyer.companyId || !requirementSet.active)
+  ) {
     throw unknown("body.requirementSetId", "Choose one of your shop's requirement sets");
   }
   const technology = input.technology ?? equipment?.technology;
   if (!technology) {
-    throw new AppError("invalid_input", "Say which machine technology the job is on", [{ path: "body.technology", message: "required without a machine" }]);
+    throw new AppError("invalid_input", "Say which machine technology the job is on", [
+      { path: "body.technology", message: "required without a machine" },
+    ]);
   }
   return { site, technician, equipment, technology };
 }
@@ -36,12 +45,27 @@ async function resolveTargets(buyer: Express.User, input: RaiseWorkOrder) {
  * A buyer raises a work order to a technician for one of the shop's sites. Refused with 409 when the technician is not
  * cleared against the baseline (and the chosen requirement set) at this very instant.
  */
-export async function raiseWorkOrder(buyer: Express.User, input: RaiseWorkOrder, warningDays: number, link: (id: number) => string) {
+export async function raiseWorkOrder(
+  buyer: Express.User,
+  input: RaiseWorkOrder,
+  warningDays: number,
+  link: (id: number) => string,
+) {
   const { site, technician, equipment, technology } = await resolveTargets(buyer, input);
   const workOrder = await db().transaction(async (transaction) => {
-    const snapshot = await standingSnapshotNow(technician.id, input.requirementSetId ?? null, new Date(), warningDays, transaction);
+    const snapshot = await standingSnapshotNow(
+      technician.id,
+      input.requirementSetId ?? null,
+      new Date(),
+      warningDays,
+      transaction,
+    );
     if (!isClearedNow(snapshot.standing)) {
-      throw new AppError("conflict", `${snapshot.technicianName} is not cleared right now, so no work order can be raised`, unmetRequirements(snapshot));
+      throw new AppError(
+        "conflict",
+        `${snapshot.technicianName} is not cleared right now, so no work order can be raised`,
+        unmetRequirements(snapshot),
+      );
     }
     const row = await WorkOrder.create(
       {
@@ -60,7 +84,13 @@ export async function raiseWorkOrder(buyer: Express.User, input: RaiseWorkOrder,
       { transaction },
     );
     await recordAudit(
-      { actorUserId: buyer.id, action: "work_order.raised", subjectType: "work_order", subjectId: row.id, after: { ...row.toJSON(), standing: snapshot.standing } },
+      {
+        actorUserId: buyer.id,
+        action: "work_order.raised",
+        subjectType: "work_order",
+        subjectId: row.id,
+        after: { ...row.toJSON(), standing: snapshot.standing },
+      },
       transaction,
     );
     const urgent = input.urgency === "down" ? " (machine down)" : "";
@@ -69,7 +99,10 @@ export async function raiseWorkOrder(buyer: Express.User, input: RaiseWorkOrder,
       "service",
       {
         subject: `new request${urgent} for ${snapshot.technicianName}`,
-        lines: [`${buyer.name} raised a work order for ${snapshot.technicianName} at ${site.name}${urgent}.`, `Problem: ${input.problem}`],
+        lines: [
+          `${buyer.name} raised a work order for ${snapshot.technicianName} at ${site.name}${urgent}.`,
+          `Problem: ${input.problem}`,
+        ],
       },
       link(row.id),
       transaction,

@@ -28,29 +28,53 @@ export const workOrderRoutes = createRoutes("/api/work-orders");
 const warningDays = (req: Request) => Math.max(...appConfig(req).WARNING_DAYS);
 const linkTo = (req: Request) => (id: number) => `${linkBase(req)}/work-orders/${id}`;
 
-workOrderRoutes.post("", { allow: canRaiseWorkOrders, body: raiseWorkOrderSchema }, async (req, res, { body }) => {
-  const dto = await raiseWorkOrder(req.user!, body, warningDays(req), linkTo(req));
-  kickOutbox(req.app.locals);
-  res.status(201).json(dto);
-});
-
-workOrderRoutes.get("", { allow: canListWorkOrders, query: listWorkOrdersQuerySchema }, (req, _res, { query }) => listWorkOrders(req.user!, query.status));
-
-workOrderRoutes.get("/:workOrderId", { allow: canSeeWorkOrder, params: workOrderParamsSchema }, (req, _res, { params }) =>
-  findWorkOrder(req.user!, params.workOrderId),
+workOrderRoutes.post(
+  "",
+  { allow: canRaiseWorkOrders, body: raiseWorkOrderSchema },
+  async (req, res, { body }) => {
+    const dto = await raiseWorkOrder(req.user!, body, warningDays(req), linkTo(req));
+    kickOutbox(req.app.locals);
+    res.status(201).json(dto);
+  },
 );
 
-workOrderRoutes.post("/:workOrderId/accept", { allow: canSeeWorkOrder, params: workOrderParamsSchema }, async (req, _res, { params }) => {
-  const dto = await acceptWorkOrder(req.user!, params.workOrderId, warningDays(req), linkTo(req)(params.workOrderId));
-  kickOutbox(req.app.locals);
-  return dto;
-});
+workOrderRoutes.get(
+  "",
+  { allow: canListWorkOrders, query: listWorkOrdersQuerySchema },
+  (req, _res, { query }) => listWorkOrders(req.user!, query.status),
+);
+
+workOrderRoutes.get(
+  "/:workOrderId",
+  { allow: canSeeWorkOrder, params: workOrderParamsSchema },
+  (req, _res, { params }) => findWorkOrder(req.user!, params.workOrderId),
+);
+
+workOrderRoutes.post(
+  "/:workOrderId/accept",
+  { allow: canSeeWorkOrder, params: workOrderParamsSchema },
+  async (req, _res, { params }) => {
+    const dto = await acceptWorkOrder(
+      req.user!,
+      params.workOrderId,
+      warningDays(req),
+      linkTo(req)(params.workOrderId),
+    );
+    kickOutbox(req.app.locals);
+    return dto;
+  },
+);
 
 workOrderRoutes.post(
   "/:workOrderId/decline",
   { allow: canSeeWorkOrder, params: workOrderParamsSchema, body: declineWorkOrderSchema },
   async (req, _res, { params, body }) => {
-    const dto = await declineWorkOrder(req.user!, params.workOrderId, body.reason, linkTo(req)(params.workOrderId));
+    const dto = await declineWorkOrder(
+      req.user!,
+      params.workOrderId,
+      body.reason,
+      linkTo(req)(params.workOrderId),
+    );
     kickOutbox(req.app.locals);
     return dto;
   },
@@ -60,17 +84,27 @@ workOrderRoutes.post(
   "/:workOrderId/complete",
   { allow: canSeeWorkOrder, params: workOrderParamsSchema, body: completeWorkOrderSchema },
   async (req, _res, { params, body }) => {
-    const dto = await completeWorkOrder(req.user!, params.workOrderId, body, warningDays(req), linkTo(req)(params.workOrderId));
+    const dto = await completeWorkOrder(
+      req.user!,
+      params.workOrderId,
+      body,
+      warningDays(req),
+      linkTo(req)(params.workOrderId),
+    );
     kickOutbox(req.app.locals);
     return dto;
   },
 );
 
-workOrderRoutes.post("/:workOrderId/confirm", { allow: canSeeWorkOrder, params: workOrderParamsSchema }, async (req, _res, { params }) => {
-  const dto = await confirmWorkOrder(req.user!, params.workOrderId, linkTo(req)(params.workOrderId));
-  kickOutbox(req.app.locals);
-  return dto;
-});
+workOrderRoutes.post(
+  "/:workOrderId/confirm",
+  { allow: canSeeWorkOrder, params: workOrderParamsSchema },
+  async (req, _res, { params }) => {
+    const dto = await confirmWorkOrder(req.user!, params.workOrderId, linkTo(req)(params.workOrderId));
+    kickOutbox(req.app.locals);
+    return dto;
+  },
+);
 
 workOrderRoutes.get(
   "/:workOrderId/standing-proof",
@@ -78,8 +112,10 @@ workOrderRoutes.get(
   (req, res, { params, query }) => sendStandingProof(req.user!, params.workOrderId, query.at, res),
 );
 
-workOrderRoutes.get("/:workOrderId/messages", { allow: canSeeWorkOrder, params: workOrderParamsSchema }, (req, _res, { params }) =>
-  listMessages(req.user!, params.workOrderId),
+workOrderRoutes.get(
+  "/:workOrderId/messages",
+  { allow: canSeeWorkOrder, params: workOrderParamsSchema },
+  (req, _res, { params }) => listMessages(req.user!, params.workOrderId),
 );
 
 // JSON or multipart (field `body`, optional part `file`). The body is checked inside the handler so that a refused
@@ -90,7 +126,14 @@ workOrderRoutes.post(
   async (req, res, { params }) => {
     try {
       const { body } = postMessageSchema.parse(req.body ?? {});
-      const dto = await postMessage(req.user!, params.workOrderId, body, req.file, appStorage(req), linkTo(req)(params.workOrderId));
+      const dto = await postMessage(
+        req.user!,
+        params.workOrderId,
+        body,
+        req.file,
+        appStorage(req),
+        linkTo(req)(params.workOrderId),
+      );
       kickOutbox(req.app.locals);
       res.status(201).json(dto);
     } finally {
@@ -99,6 +142,9 @@ workOrderRoutes.post(
   },
 );
 
-workOrderRoutes.get("/:workOrderId/messages/:messageId/file", { allow: canSeeWorkOrder, params: messageFileParamsSchema }, (req, res, { params }) =>
-  sendMessageFile(req.user!, params.workOrderId, params.messageId, appStorage(req), res),
+workOrderRoutes.get(
+  "/:workOrderId/messages/:messageId/file",
+  { allow: canSeeWorkOrder, params: messageFileParamsSchema },
+  (req, res, { params }) =>
+    sendMessageFile(req.user!, params.workOrderId, params.messageId, appStorage(req), res),
 );

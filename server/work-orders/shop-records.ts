@@ -24,12 +24,17 @@ export interface TechnicianRow {
   company_kind: string;
 }
 
-async function one<T extends object>(sql: string, id: number, transaction?: Transaction): Promise<T | undefined> {
+async function one<T extends object>(
+  sql: string,
+  id: number,
+  transaction?: Transaction,
+): Promise<T | undefined> {
   const rows = await db().query<T>(sql, { bind: [id], transaction, type: QueryTypes.SELECT });
   return rows[0];
 }
 
-export const findSite = (id: number, t?: Transaction) => one<SiteRow>("SELECT id, company_id, name FROM sites WHERE id = $1", id, t);
+export const findSite = (id: number, t?: Transaction) =>
+  one<SiteRow>("SELECT id, company_id, name FROM sites WHERE id = $1", id, t);
 export const findEquipment = (id: number, t?: Transaction) =>
   one<EquipmentRow>("SELECT id, site_id, technology FROM equipment WHERE id = $1", id, t);
 export const findRequirementSet = (id: number, t?: Transaction) =>

@@ -1,9 +1,18 @@
 import type { StandingSnapshot } from "../../shared/work-orders/standing-snapshot.ts";
 
 const escapeHtml = (s: string) =>
-  s.replace(/[&<>"']/g, (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" })[c] ?? c);
+  s.replace(
+    /[&<>"']/g,
+    (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" })[c] ?? c,
+  );
 
-const WORDS = { cleared: "Cleared", lapsing: "Lapsing", not_cleared: "Not cleared", met: "Met", unmet: "Not met" } as const;
+const WORDS = {
+  cleared: "Cleared",
+  lapsing: "Lapsing",
+  not_cleared: "Not cleared",
+  met: "Met",
+  unmet: "Not met",
+} as const;
 // A status is never colour alone: each word carries a shape too (DESIGN.md "Look").
 const SHAPES = { cleared: "●", met: "●", lapsing: "▲", not_cleared: "■", unmet: "■" } as const;
 
@@ -37,7 +46,10 @@ function section(title: string, snapshot: StandingSnapshot): string {
 }
 
 /** A printable page of the standing snapshots: every value is escaped, and the page loads nothing from anywhere. */
-export function renderStandingProof(subject: ProofSubject, snapshots: { title: string; snapshot: StandingSnapshot }[]): string {
+export function renderStandingProof(
+  subject: ProofSubject,
+  snapshots: { title: string; snapshot: StandingSnapshot }[],
+): string {
   const first = snapshots[0]?.snapshot;
   const body = snapshots.length
     ? snapshots.map((s) => section(s.title, s.snapshot)).join("")

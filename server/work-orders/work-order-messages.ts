@@ -13,8 +13,14 @@ import type { Response } from "express";
 
 async function toMessageDtos(rows: WorkOrderMessage[]): Promise<WorkOrderMessageDto[]> {
   const [authors, documents] = await Promise.all([
-    User.findAll({ where: { id: [...new Set(rows.map((r) => r.authorUserId))] }, attributes: ["id", "name"] }),
-    Document.findAll({ where: { id: rows.flatMap((r) => (r.documentId ? [r.documentId] : [])) }, attributes: ["id", "originalName", "mime", "sizeBytes"] }),
+    User.findAll({
+      where: { id: [...new Set(rows.map((r) => r.authorUserId))] },
+      attributes: ["id", "name"],
+    }),
+    Document.findAll({
+      where: { id: rows.flatMap((r) => (r.documentId ? [r.documentId] : [])) },
+      attributes: ["id", "originalName", "mime", "sizeBytes"],
+    }),
   ]);
   const author = new Map(authors.map((a) => [a.id, a.name]));
   const document = new Map(documents.map((d) => [d.id, d]));
@@ -27,7 +33,13 @@ async function toMessageDtos(rows: WorkOrderMessage[]): Promise<WorkOrderMessage
       side: r.side,
       body: r.body,
       attachment: d
-        ? { documentId: d.id, name: d.originalName, mime: d.mime, sizeBytes: d.sizeBytes, url: `/api/work-orders/${r.workOrderId}/messages/${r.id}/file` }
+        ? {
+            documentId: d.id,
+            name: d.originalName,
+            mime: d.mime,
+            sizeBytes: d.sizeBytes,
+            url: `/api/work-orders/${r.workOrderId}/messages/${r.id}/file`,
+          }
         : null,
       createdAt: r.createdAt.toISOString(),
     };
@@ -45,7 +57,14 @@ export async function listMessages(user: Express.User, workOrderId: number) {
  * cannot be removed if the file fails to store: the file is moved into place as the transaction's last step instead,
  * and taken out again if the commit itself fails.
  */
-export async function postMessage(user: Express.User, workOrderId: number, body: string, file: UploadedFile | undefined, storage: FileStorage, link: string) {
+export async function postMessage(
+  user: Express.User,
+  workOrderId: number,
+  body: string,
+  file: UploadedFile | undefined,
+  storage: FileStorage,
+  link: string,
+) {
   const { row: workOrder, side } = await loadForSide(user, workOrderId);
   const attachment = file ? await checkAttachment(file) : undefined;
   const hadFile = attachment ? await storage.exists(attachment.sha256) : true;
@@ -55,15 +74,51 @@ export async function postMessage(user: Express.User, workOrderId: number, body:
       let documentId: number | null = null;
       if (attachment) {
         const document = await Document.create(
-          { companyId: user.companyId, uploadedBy: user.id, sha256: attachment.sha256, sizeBytes: attachment.sizeBytes, mime: attachment.mime, originalName: attachment.name, extractedText: null, extractionMethod: "none" },
+          {
+            companyId: user.companyId,
+            uploadedBy: user.id,
+            sha256: attachment.sha256,
+            sizeBytes: attachment.sizeBytes,
+            mime: attachment.mime,
+            originalName: attachment.name,
+            extractedText: null,
+            extractionMethod: "none",
+          },
           { transaction },
         );
-        await recordAudit({ actorUserId: user.id, action: "document.uploaded", subjectType: "document", subjectId: document.id, after: { sha256: attachment.sha256, mime: attachment.mime, workOrderId } }, transaction);
+        await recordAudit(
+          {
+            actorUserId: user.id,
+            action: "document.uploaded",
+            subjectType: "document",
+            subjectId: document.id,
+            after: { sha256: attachment.sha256, mime: attachment.mime, workOrderId },
+          },
+          transaction,
+        );
         documentId = document.id;
       }
-      const row = await WorkOrderMessage.create({ workOrderId, authorUserId: user.id, side, body, documentId }, { transaction });
-      await recordAudit({ actorUserId: user.id, action: "work_order.message_posted", subjectType: "work_order", subjectId: workOrderId, after: { messageId: row.id, documentId } }, transaction);
-      await mailOtherSide(workOrder, side === "shop" ? "service" : "shop", { subject: `message from ${user.name}`, lines: [`${user.name} wrote:`, body] }, link, transaction);
+      const row = await WorkOrderMessage.create(
+        { workOrderId, authorUserId: user.id, side, body, documentId },
+        { transaction },
+      );
+      await recordAudit(
+        {
+          actorUserId: user.id,
+          action: "work_order.message_posted",
+          subjectType: "work_order",
+          subjectId: workOrderId,
+          after: { messageId: row.id, documentId },
+        },
+        transaction,
+      );
+      await mailOtherSide(
+        workOrder,
+        side === "shop" ? "service" : "shop",
+        { subject: `message from ${user.name}`, lines: [`${user.name} wrote:`, body] },
+        link,
+        transaction,
+      );
       if (attachment) {
         await storage.commit(attachment.tempPath, attachment.sha256);
         stored = true;
@@ -77,11 +132,22 @@ export async function postMessage(user: Express.User, workOrderId: number, body:
   }
 }
 
-export async function sendMessageFile(user: Express.User, workOrderId: number, messageId: number, storage: FileStorage, res: Response) {
+export async function sendMessageFile(
+  user: Express.User,
+  workOrderId: number,
+  messageId: number,
+  storage: FileStorage,
+  res: Response,
+) {
   await loadForSide(user, workOrderId);
   const message = await WorkOrderMessage.findOne({ where: { id: messageId, workOrderId } });
   const document = message?.documentId ? await Document.findByPk(message.documentId) : null;
   if (!document) throw new AppError("not_found", "That attachment was not found");
-  await recordAudit({ actorUserId: user.id, action: "document.downloaded", subjectType: "document", subjectId: document.id });
+  await recordAudit({
+    actorUserId: user.id,
+    action: "document.downloaded",
+    subjectType: "document",
+    subjectId: document.id,
+  });
   await sendAttachment(res, storage, document);
 }

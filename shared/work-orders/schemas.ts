@@ -32,7 +32,10 @@ export const raiseWorkOrderSchema = z.object({
   technology: z.string().trim().min(1).max(40).optional(),
   problem: z.string().trim().min(10, "Describe the problem (at least 10 characters)").max(5000),
   urgency: z.enum(urgencies).default("normal"),
-  preferredDates: z.array(isoDateSchema).max(MAX_PREFERRED_DATES, `At most ${MAX_PREFERRED_DATES} dates`).default([]),
+  preferredDates: z
+    .array(isoDateSchema)
+    .max(MAX_PREFERRED_DATES, `At most ${MAX_PREFERRED_DATES} dates`)
+    .default([]),
 });
 export type RaiseWorkOrder = z.infer<typeof raiseWorkOrderSchema>;
 

@@ -50,7 +50,10 @@ export interface SnapshotCredentialSource {
 const STANDING_ORDER: Record<Standing, number> = { cleared: 0, lapsing: 1, not_cleared: 2 };
 
 export function worstStanding(standings: readonly Standing[]): Standing {
-  return standings.reduce<Standing>((worst, s) => (STANDING_ORDER[s] > STANDING_ORDER[worst] ? s : worst), "cleared");
+  return standings.reduce<Standing>(
+    (worst, s) => (STANDING_ORDER[s] > STANDING_ORDER[worst] ? s : worst),
+    "cleared",
+  );
 }
 
 /** Lapsing still counts as cleared: every required credential is in force today. */
@@ -115,6 +118,9 @@ export function unmetRequirements(snapshot: StandingSnapshot): { path: string; m
   return snapshot.targets.flatMap((t) =>
     t.requirements
       .filter((r) => r.status === "unmet")
-      .map((r) => ({ path: `standing.${t.requirementSetId ?? "baseline"}`, message: `${t.name}: ${r.label}: ${r.detail}` })),
+      .map((r) => ({
+        path: `standing.${t.requirementSetId ?? "baseline"}`,
+        message: `${t.name}: ${r.label}: ${r.detail}`,
+      })),
   );
 }

@@ -1,7 +1,10 @@
 import type { WorkOrderAction, WorkOrderSide, WorkOrderStatus } from "./schemas.ts";
 
 /** Each action: the side that may take it, the status it needs, and the status it leaves (DESIGN.md "WorkOrder"). */
-export const TRANSITIONS: Record<WorkOrderAction, { side: WorkOrderSide; from: WorkOrderStatus; to: WorkOrderStatus }> = {
+export const TRANSITIONS: Record<
+  WorkOrderAction,
+  { side: WorkOrderSide; from: WorkOrderStatus; to: WorkOrderStatus }
+> = {
   accept: { side: "service", from: "requested", to: "accepted" },
   decline: { side: "service", from: "requested", to: "declined" },
   complete: { side: "service", from: "accepted", to: "completed" },
@@ -10,5 +13,7 @@ export const TRANSITIONS: Record<WorkOrderAction, { side: WorkOrderSide; from: W
 
 /** What a side may do next with a work order in a given status. */
 export function availableActions(status: WorkOrderStatus, side: WorkOrderSide): WorkOrderAction[] {
-  return (Object.keys(TRANSITIONS) as WorkOrderAction[]).filter((a) => TRANSITIONS[a].side === side && TRANSITIONS[a].from === status);
+  return (Object.keys(TRANSITIONS) as WorkOrderAction[]).filter(
+    (a) => TRANSITIONS[a].side === side && TRANSITIONS[a].from === status,
+  );
 }

@@ -35,9 +35,15 @@ export const router = createBrowserRouter([
             children: [
               { path: paths.provider.dashboard, lazy: () => import("./routes/provider/dashboard.tsx") },
               { path: paths.provider.technicians, lazy: () => import("./routes/provider/technicians.tsx") },
-              { path: paths.provider.technicianNew, lazy: () => import("./routes/provider/technician-new.tsx") },
+              {
+                path: paths.provider.technicianNew,
+                lazy: () => import("./routes/provider/technician-new.tsx"),
+              },
               { path: paths.provider.technician, lazy: () => import("./routes/provider/technician.tsx") },
-              { path: paths.provider.technicianEdit, lazy: () => import("./routes/provider/technician-edit.tsx") },
+              {
+                path: paths.provider.technicianEdit,
+                lazy: () => import("./routes/provider/technician-edit.tsx"),
+              },
               { path: paths.provider.documents, lazy: () => import("./routes/provider/documents.tsx") },
               { path: paths.provider.documentNew, lazy: () => import("./routes/provider/document-new.tsx") },
               { path: paths.provider.workOrders, lazy: () => import("./routes/provider/work-orders.tsx") },
@@ -48,7 +54,10 @@ export const router = createBrowserRouter([
             lazy: roleArea,
             children: [
               { path: paths.technician.standing, lazy: () => import("./routes/technician/standing.tsx") },
-              { path: paths.technician.uploadCard, lazy: () => import("./routes/technician/upload-card.tsx") },
+              {
+                path: paths.technician.uploadCard,
+                lazy: () => import("./routes/technician/upload-card.tsx"),
+              },
             ],
           },
           {
@@ -66,7 +75,10 @@ export const router = createBrowserRouter([
               { path: paths.buyer.directory, lazy: () => import("./routes/buyer/directory.tsx") },
               { path: paths.buyer.roster, lazy: () => import("./routes/buyer/roster.tsx") },
               { path: paths.buyer.sites, lazy: () => import("./routes/buyer/sites.tsx") },
-              { path: paths.buyer.requirementSets, lazy: () => import("./routes/buyer/requirement-sets.tsx") },
+              {
+                path: paths.buyer.requirementSets,
+                lazy: () => import("./routes/buyer/requirement-sets.tsx"),
+              },
               { path: paths.buyer.workOrders, lazy: () => import("./routes/buyer/work-orders.tsx") },
             ],
           },

@@ -54,7 +54,9 @@ export const hrefs = {
     return search ? `${paths.provider.documentNew}?${search}` : paths.provider.documentNew;
   },
   uploadCard: (typeCode?: string) =>
-    typeCode ? `${paths.technician.uploadCard}?type=${encodeURIComponent(typeCode)}` : paths.technician.uploadCard,
+    typeCode
+      ? `${paths.technician.uploadCard}?type=${encodeURIComponent(typeCode)}`
+      : paths.technician.uploadCard,
 };
 
 /** Sign-in URL that brings the user back to `redirectTo` afterwards. */

@@ -1,5 +1,11 @@
 import type { z } from "zod";
-import { CSRF_HEADER, CSRF_HEADER_VALUE, errorBodySchema, type ErrorCode, type FieldProblem } from "@shared/api/error-body.ts";
+import {
+  CSRF_HEADER,
+  CSRF_HEADER_VALUE,
+  errorBodySchema,
+  type ErrorCode,
+  type FieldProblem,
+} from "@shared/api/error-body.ts";
 import { env } from "@/config/env.ts";
 
 /** An API answer that was not a success, carrying the server's code and per-field problems. */
@@ -21,12 +27,17 @@ type Method = "GET" | "POST" | "PUT" | "PATCH" | "DELETE";
 
 // Codes for answers whose body is not our error shape (a proxy page, an empty 502).
 const fallbackCode = (status: number): ErrorCode =>
-  status === 401 ? "unauthenticated"
-  : status === 403 ? "forbidden"
-  : status === 404 ? "not_found"
-  : status === 429 ? "too_many_requests"
-  : status === 502 || status === 503 || status === 504 ? "unavailable"
-  : "internal";
+  status === 401
+    ? "unauthenticated"
+    : status === 403
+      ? "forbidden"
+      : status === 404
+        ? "not_found"
+        : status === 429
+          ? "too_many_requests"
+          : status === 502 || status === 503 || status === 504
+            ? "unavailable"
+            : "internal";
 
 export async function toApiError(response: Response): Promise<ApiError> {
   const body: unknown = await response.json().catch(() => null);
@@ -56,7 +67,11 @@ async function request(method: Method, path: string, body?: unknown): Promise<Re
       body: body === undefined ? undefined : JSON.stringify(body),
     });
   } catch {
-    throw new ApiError(0, "unavailable", "Clearbench cannot be reached. Check your connection and try again.");
+    throw new ApiError(
+      0,
+      "unavailable",
+      "Clearbench cannot be reached. Check your connection and try again.",
+    );
   }
   if (!response.ok) throw await toApiError(response);
   return response;
@@ -64,7 +79,8 @@ async function request(method: Method, path: string, body?: unknown): Promise<Re
 
 async function readJson<S extends z.ZodType>(response: Response, schema: S): Promise<z.output<S>> {
   const parsed = schema.safeParse(await response.json().catch(() => undefined));
-  if (!parsed.success) throw new ApiError(response.status, "internal", "The server sent an answer this page cannot read.");
+  if (!parsed.success)
+    throw new ApiError(response.status, "internal", "The server sent an answer this page cannot read.");
   return parsed.data;
 }
 

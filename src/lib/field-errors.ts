@@ -19,7 +19,8 @@ export function fieldErrorsOf(error: unknown, plainWords: FieldErrors = {}): Fie
   if (error instanceof ZodError) {
     for (const issue of error.issues) {
       const path = issue.path.map(String).join(".");
-      const missing = issue.code === "too_small" || issue.code === "invalid_value" || issue.code === "invalid_type";
+      const missing =
+        issue.code === "too_small" || issue.code === "invalid_value" || issue.code === "invalid_type";
       out[path] ??= (missing ? plainWords[path] : undefined) ?? issue.message;
     }
   } else if (isApiError(error)) {

@@ -1,5 +1,9 @@
 const dollars = new Intl.NumberFormat("en-US", { style: "currency", currency: "USD" });
-const wholeDollars = new Intl.NumberFormat("en-US", { style: "currency", currency: "USD", maximumFractionDigits: 0 });
+const wholeDollars = new Intl.NumberFormat("en-US", {
+  style: "currency",
+  currency: "USD",
+  maximumFractionDigits: 0,
+});
 
 /** Integer cents as dollars, e.g. 8550 → "$85.50". Money travels in cents so no float rounding creeps in. */
 export const formatCents = (cents: number): string => dollars.format(cents / 100);

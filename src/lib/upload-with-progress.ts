@@ -16,7 +16,13 @@ type UploadOptions<S extends z.ZodType> = {
  * A multipart POST over XMLHttpRequest: fetch() reports no upload progress, and people sending a
  * 10 MB scan from a phone need to see it move. Errors take the same ApiError shape as api-client.
  */
-export function uploadWithProgress<S extends z.ZodType>({ path, form, schema, onProgress, signal }: UploadOptions<S>) {
+export function uploadWithProgress<S extends z.ZodType>({
+  path,
+  form,
+  schema,
+  onProgress,
+  signal,
+}: UploadOptions<S>) {
   return new Promise<z.output<S>>((resolve, reject) => {
     const xhr = new XMLHttpRequest();
     xhr.open("POST", `${env.VITE_API_BASE}${path}`);
@@ -27,7 +33,13 @@ export function uploadWithProgress<S extends z.ZodType>({ path, form, schema, on
       if (event.lengthComputable && event.total > 0) onProgress?.(event.loaded / event.total);
     };
     xhr.onerror = () =>
-      reject(new ApiError(0, "unavailable", "The upload did not reach Clearbench. Check your connection and try again."));
+      reject(
+        new ApiError(
+          0,
+          "unavailable",
+          "The upload did not reach Clearbench. Check your connection and try again.",
+        ),
+      );
     xhr.onabort = () => reject(new ApiError(0, "unavailable", "The upload was cancelled."));
     xhr.onload = () => {
       const response = new Response(xhr.status === 204 ? null : xhr.responseText, {

@@ -46,7 +46,6 @@ describe("lapse job in two processes at once", () => {
       runJobProcess(["--as-of", "2027-09-02T12:00:00Z"]),
     ]);
 
-    process.stderr.write(a.out + b.out);
     expect([a.code, b.code]).toEqual([0, 0]);
     expect(a.out + b.out).toMatch(/lapse job as of 2027-09-02T12:00:00.000Z/);
     expect(catcher.to(p.admin.email)).toHaveLength(1);

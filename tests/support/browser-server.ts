@@ -29,7 +29,9 @@ export async function startBrowserServer(env: Record<string, string> = {}): Prom
   await admin.query(`CREATE DATABASE ${name}`);
   await admin.end();
   base.pathname = `/${name}`;
-  const config = loadConfig({ ...process.env, DATABASE_URL: base.toString(), PORT: "0", RUN_SCHEDULE: "false", ...env });
+  // A database and an uploads folder of its own: the start-up sweep must not see other tests' files.
+  const uploadsDir = path.join(path.dirname(process.env.UPLOADS_DIR!), `uploads-${name}`);
+  const config = loadConfig({ ...process.env, DATABASE_URL: base.toString(), UPLOADS_DIR: uploadsDir, PORT: "0", RUN_SCHEDULE: "false", ...env });
   const running = await startServer(config, { clientDir: ensureClientBuild() });
   await loadDemoScenarioOnce({ uploadsDir: config.UPLOADS_DIR, today: new Date() });
   return { ...running, url: `http://127.0.0.1:${running.port}`, databaseUrl: base.toString() };

@@ -18,7 +18,12 @@ import {
 export const dataTableFeatures = tableFeatures({
   rowSortingFeature,
   sortedRowModel: createSortedRowModel(),
-  sortFns: { alphanumeric: sortFn_alphanumeric, text: sortFn_text, datetime: sortFn_datetime, basic: sortFn_basic },
+  sortFns: {
+    alphanumeric: sortFn_alphanumeric,
+    text: sortFn_text,
+    datetime: sortFn_datetime,
+    basic: sortFn_basic,
+  },
 });
 export type DataTableFeatures = typeof dataTableFeatures;
 
@@ -81,7 +86,9 @@ export function DataTable<Row extends RowData>({
           manualSorting: true,
           state: { sorting: serverSorting.sorting },
           onSortingChange: (updater: SortingState | ((old: SortingState) => SortingState)) =>
-            serverSorting.onSortingChange(typeof updater === "function" ? updater(serverSorting.sorting) : updater),
+            serverSorting.onSortingChange(
+              typeof updater === "function" ? updater(serverSorting.sorting) : updater,
+            ),
         }
       : {}),
   });
@@ -93,7 +100,9 @@ export function DataTable<Row extends RowData>({
       <table className="w-full border-collapse text-left text-sm">
         <caption
           className={
-            hideCaption ? "sr-only" : "border-b border-ink-100 px-3 py-2 text-left text-sm font-semibold text-ink-900"
+            hideCaption
+              ? "sr-only"
+              : "border-b border-ink-100 px-3 py-2 text-left text-sm font-semibold text-ink-900"
           }
         >
           {caption}

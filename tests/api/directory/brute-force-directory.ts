@@ -3,7 +3,7 @@ import type { DirectoryWorld, WorldTechnician } from "../../fixtures/build-direc
 
 /** A directory search as the property test draws it; `requirementSet` and `radiusKm` use the world's set and site. */
 export interface DrawnFilters {
-  credentialTypes?: string[];
+  credentialTypes?: readonly string[];
   oemBuilder?: string;
   controlFamily?: string;
   minOemLevel?: number;

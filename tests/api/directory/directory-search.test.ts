@@ -42,7 +42,8 @@ describe("directory: who appears", () => {
 
     const site = { lat: world.site.latitude, lon: world.site.longitude };
     for (const row of rows) {
-      const tech = world.technicians.find((x) => x.id === row.technicianId)!;
+      const tech = world.technicians.find((x) => x.id === row.technicianId);
+      if (!tech) continue; // another test file's world near the same site
       expect(row.distanceKm!).toBeLessThanOrEqual(Math.min(tech.serviceRadiusKm, radiusKm) + 0.01);
     }
     const outsideOwnRadius = world.technicians.filter((x) => {
@@ -71,7 +72,7 @@ describe("directory: who appears", () => {
     ["minAutoCsl", { minAutoCsl: 1_000_000 }],
     ["requirementSetId", { requirementSet: true }],
     ["minRating", { minRating: 3.5 }],
-    ["q", { q: "field service" }],
+    ["q", { q: "AN" }],
   ] as const)("filters by %s exactly as the plain rule says", async (_name, filters) => {
     const { rows } = await readAllPages(buyer, toQuery(world, filters));
 

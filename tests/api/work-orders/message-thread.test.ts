@@ -21,8 +21,12 @@ describe("the message thread of a work order", () => {
     const world = await buildWorkOrderWorld(t.app);
     const id = await workOrderAt(world, "requested");
 
-    const first = await world.shop.agent.post(`/api/work-orders/${id}/messages`).send({ body: "Gate code is 4410; ask for Marta." });
-    const second = await world.provider.tech.post(`/api/work-orders/${id}/messages`).send({ body: "On my way, there by 9." });
+    const first = await world.shop.agent
+      .post(`/api/work-orders/${id}/messages`)
+      .send({ body: "Gate code is 4410; ask for Marta." });
+    const second = await world.provider.tech
+      .post(`/api/work-orders/${id}/messages`)
+      .send({ body: "On my way, there by 9." });
     const listed = await world.provider.admin.get(`/api/work-orders/${id}/messages`);
 
     expect(first.status).toBe(201);
@@ -38,13 +42,19 @@ describe("the message thread of a work order", () => {
   it("is append-only: the database refuses to change or delete a message", async () => {
     const world = await buildWorkOrderWorld(t.app);
     const id = await workOrderAt(world, "requested");
-    const posted = await world.shop.agent.post(`/api/work-orders/${id}/messages`).send({ body: "Original words" });
+    const posted = await world.shop.agent
+      .post(`/api/work-orders/${id}/messages`)
+      .send({ body: "Original words" });
 
-    const update = sequelize().query("UPDATE work_order_messages SET body = 'rewritten' WHERE id = $1", { bind: [posted.body.id] });
-    const remove = sequelize().query("DELETE FROM work_order_messages WHERE id = $1", { bind: [posted.body.id] });
+    const update = () =>
+      sequelize().query("UPDATE work_order_messages SET body = 'rewritten' WHERE id = $1", {
+        bind: [posted.body.id],
+      });
+    const remove = () =>
+      sequelize().query("DELETE FROM work_order_messages WHERE id = $1", { bind: [posted.body.id] });
 
-    await expect(update).rejects.toThrow(/append-only/);
-    await expect(remove).rejects.toThrow(/append-only/);
+    await expect(update()).rejects.toThrow(/append-only/);
+    await expect(remove()).rejects.toThrow(/append-only/);
     expect((await WorkOrderMessage.findByPk(posted.body.id))!.body).toBe("Original words");
   });
 
@@ -54,7 +64,10 @@ describe("the message thread of a work order", () => {
     const { bytes } = await buildCertificatePdf({ seed: 21 });
     const before = await storedNow();
 
-    const res = await world.shop.agent.post(`/api/work-orders/${id}/messages`).field("body", "  ").attach("file", Buffer.from(bytes), "photo.pdf");
+    const res = await world.shop.agent
+      .post(`/api/work-orders/${id}/messages`)
+      .field("body", "  ")
+      .attach("file", Buffer.from(bytes), "photo.pdf");
 
     expect(res.status).toBe(422);
     expect(res.body.error.fields[0].path).toBe("body.body");
@@ -69,15 +82,27 @@ describe("attachments on the thread", () => {
     const { bytes } = await buildCertificatePdf({ seed: 22 });
     const before = await storedNow();
 
-    const res = await world.provider.tech.post(`/api/work-orders/${id}/messages`).field("body", "Service report attached").attach("file", Buffer.from(bytes), "service-report.pdf");
+    const res = await world.provider.tech
+      .post(`/api/work-orders/${id}/messages`)
+      .field("body", "Service report attached")
+      .attach("file", Buffer.from(bytes), "service-report.pdf");
     const download = await world.shop.agent.get(res.body.attachment.url).buffer(true);
 
     expect(res.status).toBe(201);
-    expect(res.body.attachment).toMatchObject({ name: "service-report.pdf", mime: "application/pdf", sizeBytes: bytes.length });
+    expect(res.body.attachment).toMatchObject({
+      name: "service-report.pdf",
+      mime: "application/pdf",
+      sizeBytes: bytes.length,
+    });
     const document = await Document.findByPk(res.body.attachment.documentId);
     expect(document!.companyId).toBe(world.provider.company.id);
     const after = await storedNow();
-    expect(after).toMatchObject({ documents: before.documents + 1, messages: before.messages + 1, stored: before.stored + 1, incoming: before.incoming });
+    expect(after).toMatchObject({
+      documents: before.documents + 1,
+      messages: before.messages + 1,
+      stored: before.stored + 1,
+      incoming: before.incoming,
+    });
     expect(download.status).toBe(200);
     expect(download.headers["content-disposition"]).toMatch(/^attachment/);
     expect(Buffer.compare(download.body as Buffer, Buffer.from(bytes))).toBe(0);
@@ -85,13 +110,20 @@ describe("attachments on the thread", () => {
 
   it.each([
     ["an HTML page named .pdf", Buffer.from("<html><script>alert(1)</script></html>"), "notes.pdf"],
-    ["a PNG named .pdf", Buffer.from("89504e470d0a1a0a0000000d4948445200000001000000010806000000", "hex"), "photo.pdf"],
+    [
+      "a PNG named .pdf",
+      Buffer.from("89504e470d0a1a0a0000000d4948445200000001000000010806000000", "hex"),
+      "photo.pdf",
+    ],
   ])("answers 415 to %s and leaves no row and no file", async (_label, bytes, name) => {
     const world = await buildWorkOrderWorld(t.app);
     const id = await workOrderAt(world, "requested");
     const before = await storedNow();
 
-    const res = await world.shop.agent.post(`/api/work-orders/${id}/messages`).field("body", "See attached").attach("file", bytes, name);
+    const res = await world.shop.agent
+      .post(`/api/work-orders/${id}/messages`)
+      .field("body", "See attached")
+      .attach("file", bytes, name);
 
     expect(res.status).toBe(415);
     expect(await storedNow()).toEqual(before);
@@ -105,7 +137,11 @@ describe("attachments on the thread", () => {
     const res = await world.shop.agent
       .post(`/api/work-orders/${id}/messages`)
       .field("body", "Huge scan")
-      .attach("file", Buffer.concat([Buffer.from("%PDF-1.7\n"), Buffer.alloc(11 * 1024 * 1024, 32)]), "huge.pdf");
+      .attach(
+        "file",
+        Buffer.concat([Buffer.from("%PDF-1.7\n"), Buffer.alloc(11 * 1024 * 1024, 32)]),
+        "huge.pdf",
+      );
 
     expect(res.status).toBe(413);
     expect(await storedNow()).toEqual(before);
@@ -116,7 +152,10 @@ describe("attachments on the thread", () => {
     const other = await buildWorkOrderWorld(t.app);
     const id = await workOrderAt(world, "requested");
     const { bytes } = await buildCertificatePdf({ seed: 23 });
-    const res = await world.shop.agent.post(`/api/work-orders/${id}/messages`).field("body", "Drawing").attach("file", Buffer.from(bytes), "drawing.pdf");
+    const res = await world.shop.agent
+      .post(`/api/work-orders/${id}/messages`)
+      .field("body", "Drawing")
+      .attach("file", Buffer.from(bytes), "drawing.pdf");
 
     const download = await other.shop.agent.get(res.body.attachment.url);
 

@@ -1,7 +1,11 @@
 import { afterAll, afterEach, beforeAll, describe, expect, it, vi } from "vitest";
 import { QueryTypes } from "sequelize";
 import { buildTestApp, sequelize, type TestApp } from "../../support/test-app.ts";
-import { buildWorkOrderWorld, raiseBody, type WorkOrderWorld } from "../../fixtures/build-work-order-world.ts";
+import {
+  buildWorkOrderWorld,
+  raiseBody,
+  type WorkOrderWorld,
+} from "../../fixtures/build-work-order-world.ts";
 import { addCalendarDays } from "../../../shared/standing/iso-date.ts";
 import { policyEndInstant } from "../../../shared/standing/policy-period.ts";
 
@@ -48,7 +52,9 @@ describe("raising a work order at the moment a policy lapses", () => {
     const res = await raiseAt(world, new Date(lapse.getTime() + 1000));
 
     expect(res.status).toBe(409);
-    const general = res.body.error.fields.find((f: { message: string }) => f.message.includes("General liability in force"));
+    const general = res.body.error.fields.find((f: { message: string }) =>
+      f.message.includes("General liability in force"),
+    );
     expect(general.message).toContain("lapsed");
   });
 

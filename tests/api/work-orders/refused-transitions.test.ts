@@ -18,15 +18,18 @@ describe("transitions refused for the wrong status", () => {
     ["decline", "accepted", { reason: "Changed my mind" }],
     ["complete", "requested", { hoursWorked: 2, travelHours: 1 }],
     ["complete", "confirmed", { hoursWorked: 2, travelHours: 1 }],
-  ] as const)("answers 409 to %s on a %s work order and leaves it unchanged", async (action, status, body) => {
-    const world = await buildWorkOrderWorld(t.app);
-    const id = await workOrderAt(world, status);
+  ] as const)(
+    "answers 409 to %s on a %s work order and leaves it unchanged",
+    async (action, status, body) => {
+      const world = await buildWorkOrderWorld(t.app);
+      const id = await workOrderAt(world, status);
 
-    const res = await world.provider.admin.post(`/api/work-orders/${id}/${action}`).send(body);
+      const res = await world.provider.admin.post(`/api/work-orders/${id}/${action}`).send(body);
 
-    expect(res.status).toBe(409);
-    expect((await WorkOrder.findByPk(id))!.status).toBe(status);
-  });
+      expect(res.status).toBe(409);
+      expect((await WorkOrder.findByPk(id))!.status).toBe(status);
+    },
+  );
 
   it("answers 409 to confirming a work order that is not completed yet", async () => {
     const world = await buildWorkOrderWorld(t.app);
@@ -57,7 +60,9 @@ describe("transitions refused for the wrong side", () => {
     const accepted = await workOrderAt(world, "accepted");
 
     const accept = await world.shop.agent.post(`/api/work-orders/${requested}/accept`).send({});
-    const complete = await world.shop.agent.post(`/api/work-orders/${accepted}/complete`).send({ hoursWorked: 1, travelHours: 1 });
+    const complete = await world.shop.agent
+      .post(`/api/work-orders/${accepted}/complete`)
+      .send({ hoursWorked: 1, travelHours: 1 });
 
     expect(accept.status).toBe(403);
     expect(complete.status).toBe(403);
@@ -116,7 +121,9 @@ describe("raising a work order", () => {
   it("answers 422 naming each field that breaks its rule", async () => {
     const world = await buildWorkOrderWorld(t.app);
 
-    const res = await world.shop.agent.post("/api/work-orders").send(raiseBody(world, { problem: "hm", urgency: "asap", preferredDates: ["2026-02-30"] }));
+    const res = await world.shop.agent
+      .post("/api/work-orders")
+      .send(raiseBody(world, { problem: "hm", urgency: "asap", preferredDates: ["2026-02-30"] }));
 
     expect(res.status).toBe(422);
     const paths = res.body.error.fields.map((f: { path: string }) => f.path);
@@ -128,12 +135,24 @@ describe("raising a work order", () => {
     const other = await buildWorkOrderWorld(t.app);
     const [foreignSet] = await sequelize().query<{ id: number }>(
       "INSERT INTO requirement_sets (company_id, name, requirements) VALUES ($1, 'Spindle work', $2::jsonb) RETURNING id",
-      { bind: [other.shop.company.id, JSON.stringify([{ label: "General liability", typeCodes: ["general_liability"] }])], type: QueryTypes.SELECT },
+      {
+        bind: [
+          other.shop.company.id,
+          JSON.stringify([{ label: "General liability", typeCodes: ["general_liability"] }]),
+        ],
+        type: QueryTypes.SELECT,
+      },
     );
 
-    const foreignSite = await world.shop.agent.post("/api/work-orders").send(raiseBody(world, { siteId: other.siteId, equipmentId: undefined, technology: "mill" }));
-    const foreignMachine = await world.shop.agent.post("/api/work-orders").send(raiseBody(world, { equipmentId: other.equipmentId }));
-    const foreignSetRes = await world.shop.agent.post("/api/work-orders").send(raiseBody(world, { requirementSetId: foreignSet!.id }));
+    const foreignSite = await world.shop.agent
+      .post("/api/work-orders")
+      .send(raiseBody(world, { siteId: other.siteId, equipmentId: undefined, technology: "mill" }));
+    const foreignMachine = await world.shop.agent
+      .post("/api/work-orders")
+      .send(raiseBody(world, { equipmentId: other.equipmentId }));
+    const foreignSetRes = await world.shop.agent
+      .post("/api/work-orders")
+      .send(raiseBody(world, { requirementSetId: foreignSet!.id }));
 
     expect(foreignSite.status).toBe(422);
     expect(foreignSite.body.error.fields[0].path).toBe("body.siteId");
@@ -147,7 +166,9 @@ describe("raising a work order", () => {
     const world = await buildWorkOrderWorld(t.app);
     const bare = await buildProvider(t.app);
 
-    const res = await world.shop.agent.post("/api/work-orders").send(raiseBody(world, { technicianId: bare.technician.id }));
+    const res = await world.shop.agent
+      .post("/api/work-orders")
+      .send(raiseBody(world, { technicianId: bare.technician.id }));
 
     expect(res.status).toBe(409);
     const messages = res.body.error.fields.map((f: { message: string }) => f.message).join("\n");

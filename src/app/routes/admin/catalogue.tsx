@@ -28,7 +28,10 @@ export function Component() {
         description="The credential types companies and technicians can hold: who holds each, how long it counts, and whether uploaders can choose it."
       />
       {saved && (
-        <p role="status" className="mb-4 rounded-md border-l-4 border-emerald-700 bg-emerald-50 px-4 py-3 text-sm text-ink-900">
+        <p
+          role="status"
+          className="mb-4 rounded-md border-l-4 border-emerald-700 bg-emerald-50 px-4 py-3 text-sm text-ink-900"
+        >
           Saved {saved}.
         </p>
       )}
@@ -46,7 +49,9 @@ export function Component() {
             />
           </section>
         ) : (
-          <p className="text-sm text-ink-700">Choose Edit on a row to change its name, description, months or whether it is in use.</p>
+          <p className="text-sm text-ink-700">
+            Choose Edit on a row to change its name, description, months or whether it is in use.
+          </p>
         )}
       </div>
     </>

@@ -19,7 +19,9 @@ export function Component() {
   if (!user) {
     // After signing out, start fresh; after a lapsed session, come back to this page.
     const leaving = signOut.isPending || signOut.isSuccess;
-    return <Navigate to={leaving ? paths.auth.signIn : signInHref(location.pathname + location.search)} replace />;
+    return (
+      <Navigate to={leaving ? paths.auth.signIn : signInHref(location.pathname + location.search)} replace />
+    );
   }
 
   return (
@@ -36,9 +38,15 @@ export function Component() {
         homeHref={homePathByRole[user.role]}
         signingOut={signOut.isPending}
         tools={<NotificationsBell />}
-        onSignOut={() => signOut.mutate(undefined, { onSuccess: () => navigate(paths.auth.signIn, { replace: true }) })}
+        onSignOut={() =>
+          signOut.mutate(undefined, { onSuccess: () => navigate(paths.auth.signIn, { replace: true }) })
+        }
       />
-      <main id="main" tabIndex={-1} className="mx-auto w-full max-w-7xl flex-1 px-4 py-6 focus:outline-none sm:px-6 sm:py-8">
+      <main
+        id="main"
+        tabIndex={-1}
+        className="mx-auto w-full max-w-7xl flex-1 px-4 py-6 focus:outline-none sm:px-6 sm:py-8"
+      >
         <Outlet />
       </main>
     </div>

@@ -23,7 +23,8 @@ export async function loader() {
   return null;
 }
 
-const renewHref = (c: Credential) => hrefs.documentNew({ typeCode: c.typeCode, technicianId: c.technicianId });
+const renewHref = (c: Credential) =>
+  hrefs.documentNew({ typeCode: c.typeCode, technicianId: c.technicianId });
 
 export function Component() {
   const { data: credentials } = useSuspenseQuery(credentialsQuery());
@@ -47,7 +48,8 @@ export function Component() {
       <div className="grid items-start gap-8 lg:grid-cols-[minmax(0,1fr)_22rem]">
         <section aria-labelledby="lapsing-heading" className="space-y-4">
           <h2 id="lapsing-heading" className="text-lg font-semibold text-ink-900">
-            What lapses next <span className="text-base font-normal text-ink-700">(next {HORIZON_DAYS} days)</span>
+            What lapses next{" "}
+            <span className="text-base font-normal text-ink-700">(next {HORIZON_DAYS} days)</span>
           </h2>
           <LapseTimelineChart weeks={weeks} />
           <LapsingTable credentials={lapsing} now={now} renewHref={renewHref} />

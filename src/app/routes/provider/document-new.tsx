@@ -9,7 +9,10 @@ import { techniciansQuery } from "@/features/technicians/api/get-technicians.ts"
 import { queryClient } from "@/lib/query-client.ts";
 
 export async function loader() {
-  await Promise.all([queryClient.ensureQueryData(credentialTypesQuery()), queryClient.ensureQueryData(techniciansQuery())]);
+  await Promise.all([
+    queryClient.ensureQueryData(credentialTypesQuery()),
+    queryClient.ensureQueryData(techniciansQuery()),
+  ]);
   return null;
 }
 
@@ -30,7 +33,9 @@ export function Component() {
         technicians={technicians.filter((t) => t.active)}
         initialTypeCode={search.get("type") ?? undefined}
         initialTechnicianId={presetTechnician.success ? presetTechnician.data : undefined}
-        onSubmitted={(credential) => navigate(paths.provider.documents, { state: { submitted: credential.typeName } })}
+        onSubmitted={(credential) =>
+          navigate(paths.provider.documents, { state: { submitted: credential.typeName } })
+        }
       />
     </>
   );

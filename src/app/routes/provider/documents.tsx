@@ -23,8 +23,12 @@ export async function loader({ request }: { request: Request }) {
   return null;
 }
 
-const correctionHref = (c: Credential) => hrefs.documentNew({ typeCode: c.typeCode, technicianId: c.technicianId });
-const stateOptions = credentialStates.map((state) => ({ value: state, label: statusWord({ status: state }) }));
+const correctionHref = (c: Credential) =>
+  hrefs.documentNew({ typeCode: c.typeCode, technicianId: c.technicianId });
+const stateOptions = credentialStates.map((state) => ({
+  value: state,
+  label: statusWord({ status: state }),
+}));
 
 /** Navigation state the upload flow leaves behind, to say what was just sent. */
 type Arrival = { submitted?: string } | null;
@@ -47,7 +51,10 @@ export function Component() {
         actions={upload}
       />
       {arrival?.submitted && (
-        <p role="status" className="mb-4 rounded-md border-l-4 border-emerald-700 bg-emerald-50 px-4 py-3 text-sm text-ink-900">
+        <p
+          role="status"
+          className="mb-4 rounded-md border-l-4 border-emerald-700 bg-emerald-50 px-4 py-3 text-sm text-ink-900"
+        >
           {arrival.submitted} was sent for verification. A reviewer will check it against the document.
         </p>
       )}
@@ -71,7 +78,8 @@ export function Component() {
         correctionHref={correctionHref}
         empty={
           <EmptyState title={state ? "No documents in this state" : "No documents yet"} action={upload}>
-            Upload a certificate of insurance or a technician's card; the fields are read from it for you to check.
+            Upload a certificate of insurance or a technician's card; the fields are read from it for you to
+            check.
           </EmptyState>
         }
       />

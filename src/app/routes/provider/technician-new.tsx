@@ -9,12 +9,17 @@ export function Component() {
   const navigate = useNavigate();
   return (
     <>
-      <PageHeader title="Add technician" description="Rates are what you bill a shop; travel is billed portal to portal at its own rate." />
+      <PageHeader
+        title="Add technician"
+        description="Rates are what you bill a shop; travel is billed portal to portal at its own rate."
+      />
       <TechnicianForm
         submitLabel="Add technician"
         pending={add.isPending}
         serverError={add.error}
-        onSubmit={(input) => add.mutate(input, { onSuccess: (technician) => navigate(hrefs.technician(technician.id)) })}
+        onSubmit={(input) =>
+          add.mutate(input, { onSuccess: (technician) => navigate(hrefs.technician(technician.id)) })
+        }
       />
     </>
   );

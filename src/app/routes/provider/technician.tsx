@@ -30,7 +30,8 @@ export async function loader({ params }: LoaderFunctionArgs) {
   return null;
 }
 
-const correctionHref = (c: Credential) => hrefs.documentNew({ typeCode: c.typeCode, technicianId: c.technicianId });
+const correctionHref = (c: Credential) =>
+  hrefs.documentNew({ typeCode: c.typeCode, technicianId: c.technicianId });
 
 export function Component() {
   const id = technicianIdOf(useParams());
@@ -51,7 +52,10 @@ export function Component() {
     ["Technologies", technologyWords(technician.technologies)],
     ["Control families", technician.controlFamilies.join(", ") || "—"],
     ["Home base", `ZIP ${technician.postalCode}, serves ${technician.serviceRadiusKm} km around`],
-    ["Rates", `${formatCents(technician.hourlyRateCents)}/h on site, ${formatCents(technician.travelRateCents)}/h travel, ${formatCents(technician.mileageRateCents)}/mi`],
+    [
+      "Rates",
+      `${formatCents(technician.hourlyRateCents)}/h on site, ${formatCents(technician.travelRateCents)}/h travel, ${formatCents(technician.mileageRateCents)}/mi`,
+    ],
     ["Sign-in", technician.hasAccount ? "Has a sign-in" : "No sign-in yet"],
     ["Status", technician.active ? "Active" : "Deactivated: hidden from buyers, sign-in stopped"],
   ];
@@ -68,11 +72,21 @@ export function Component() {
               Edit
             </Link>
             {technician.active ? (
-              <Button variant="danger" pending={deactivate.isPending} pendingLabel="Deactivating…" onClick={() => deactivate.mutate(id)}>
+              <Button
+                variant="danger"
+                pending={deactivate.isPending}
+                pendingLabel="Deactivating…"
+                onClick={() => deactivate.mutate(id)}
+              >
                 Deactivate
               </Button>
             ) : (
-              <Button variant="secondary" pending={reactivate.isPending} pendingLabel="Reactivating…" onClick={() => reactivate.mutate(id)}>
+              <Button
+                variant="secondary"
+                pending={reactivate.isPending}
+                pendingLabel="Reactivating…"
+                onClick={() => reactivate.mutate(id)}
+              >
                 Reactivate
               </Button>
             )}
@@ -90,7 +104,11 @@ export function Component() {
             <h2 id="standing-heading" className="mb-3 text-lg font-semibold text-ink-900">
               Standing
             </h2>
-            {standing.isPending ? <Spinner label="Loading standing" /> : <StandingPanel standing={standing.data ?? null} now={now} />}
+            {standing.isPending ? (
+              <Spinner label="Loading standing" />
+            ) : (
+              <StandingPanel standing={standing.data ?? null} now={now} />
+            )}
           </section>
           <section aria-labelledby="cards-heading">
             <h2 id="cards-heading" className="mb-3 text-lg font-semibold text-ink-900">
@@ -101,7 +119,11 @@ export function Component() {
               credentials={credentials}
               correctionHref={correctionHref}
               showHolder={false}
-              empty={<EmptyState title="No cards on file" action={upload}>Upload their training cards to get them cleared.</EmptyState>}
+              empty={
+                <EmptyState title="No cards on file" action={upload}>
+                  Upload their training cards to get them cleared.
+                </EmptyState>
+              }
             />
           </section>
         </div>

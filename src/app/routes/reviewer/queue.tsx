@@ -26,7 +26,10 @@ function queueQueryOf(search: URLSearchParams): Partial<QueueQuery> {
 
 export async function loader({ request }: { request: Request }) {
   const query = queueQueryOf(new URL(request.url).searchParams);
-  await Promise.all([queryClient.ensureQueryData(reviewQueueQuery(query)), queryClient.ensureQueryData(credentialTypesQuery())]);
+  await Promise.all([
+    queryClient.ensureQueryData(reviewQueueQuery(query)),
+    queryClient.ensureQueryData(credentialTypesQuery()),
+  ]);
   return null;
 }
 
@@ -42,8 +45,11 @@ export function Component() {
 
   const companyOptions = useMemo(() => {
     const byId = new Map<number, string>();
-    for (const row of [...(probe.data?.rows ?? []), ...(data?.rows ?? [])]) byId.set(row.companyId, row.companyName);
-    return [...byId].map(([id, name]) => ({ value: String(id), label: name })).sort((a, b) => a.label.localeCompare(b.label));
+    for (const row of [...(probe.data?.rows ?? []), ...(data?.rows ?? [])])
+      byId.set(row.companyId, row.companyName);
+    return [...byId]
+      .map(([id, name]) => ({ value: String(id), label: name }))
+      .sort((a, b) => a.label.localeCompare(b.label));
   }, [probe.data, data]);
   const typeOptions = types.map((t) => ({ value: t.code, label: t.name }));
 
@@ -70,7 +76,10 @@ export function Component() {
         description="Documents waiting for a decision, oldest first. Open one to compare the document with its fields."
       />
       {arrival?.decided && (
-        <p role="status" className="mb-4 rounded-md border-l-4 border-emerald-700 bg-emerald-50 px-4 py-3 text-sm text-ink-900">
+        <p
+          role="status"
+          className="mb-4 rounded-md border-l-4 border-emerald-700 bg-emerald-50 px-4 py-3 text-sm text-ink-900"
+        >
           {arrival.decided} The queue is empty for now.
         </p>
       )}
@@ -90,7 +99,8 @@ export function Component() {
           sorting,
           onSortingChange: (next) => {
             const first = next[0];
-            const sort = first && (queueSortKeys as readonly string[]).includes(first.id) ? first.id : undefined;
+            const sort =
+              first && (queueSortKeys as readonly string[]).includes(first.id) ? first.id : undefined;
             update({ sort, dir: sort && first?.desc ? "desc" : undefined, page: undefined });
           },
         }}

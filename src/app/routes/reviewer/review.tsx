@@ -57,17 +57,30 @@ export function Component() {
         description={`${credential.companyName} · submitted ${formatDateTime(credential.submittedAt)}`}
       />
       {arrival?.decided && (
-        <p role="status" className="mb-4 rounded-md border-l-4 border-emerald-700 bg-emerald-50 px-4 py-3 text-sm text-ink-900">
+        <p
+          role="status"
+          className="mb-4 rounded-md border-l-4 border-emerald-700 bg-emerald-50 px-4 py-3 text-sm text-ink-900"
+        >
           {arrival.decided} This is the next document in the queue.
         </p>
       )}
       <div className="grid items-start gap-6 lg:grid-cols-2">
         <div className="lg:sticky lg:top-4">
-          <DocumentViewer key={credential.documentId} documentId={credential.documentId} name={credential.documentName} mime={credential.documentMime} />
+          <DocumentViewer
+            key={credential.documentId}
+            documentId={credential.documentId}
+            name={credential.documentName}
+            mime={credential.documentMime}
+          />
         </div>
         <div className="space-y-5">
           {credential.category === "insurance" && <CautionNote />}
-          <ReviewPanel key={credential.id} credential={credential} fieldSet={fieldSet} onDecided={(c) => void goToNext(c)} />
+          <ReviewPanel
+            key={credential.id}
+            credential={credential}
+            fieldSet={fieldSet}
+            onDecided={(c) => void goToNext(c)}
+          />
         </div>
       </div>
       <div className="mt-8">

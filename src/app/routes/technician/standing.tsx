@@ -35,9 +35,16 @@ export function Component() {
   );
   return (
     <>
-      <PageHeader title="My standing" description="Whether you are cleared today, and when each of your cards lapses." actions={upload} />
+      <PageHeader
+        title="My standing"
+        description="Whether you are cleared today, and when each of your cards lapses."
+        actions={upload}
+      />
       {arrival?.submitted && (
-        <p role="status" className="mb-4 rounded-md border-l-4 border-emerald-700 bg-emerald-50 px-4 py-3 text-ink-900">
+        <p
+          role="status"
+          className="mb-4 rounded-md border-l-4 border-emerald-700 bg-emerald-50 px-4 py-3 text-ink-900"
+        >
           {arrival.submitted} was sent for verification.
         </p>
       )}
@@ -46,7 +53,11 @@ export function Component() {
           <h2 id="standing-heading" className="mb-3 text-lg font-semibold text-ink-900">
             Standing
           </h2>
-          {standing.isPending ? <Spinner label="Loading your standing" /> : <StandingPanel standing={standing.data ?? null} now={now} />}
+          {standing.isPending ? (
+            <Spinner label="Loading your standing" />
+          ) : (
+            <StandingPanel standing={standing.data ?? null} now={now} />
+          )}
         </section>
         <section aria-labelledby="cards-heading">
           <h2 id="cards-heading" className="mb-3 text-lg font-semibold text-ink-900">
@@ -56,7 +67,11 @@ export function Component() {
             caption="My credentials"
             credentials={credentials}
             correctionHref={correctionHref}
-            empty={<EmptyState title="No cards yet" action={upload}>Photograph or scan a training card to send it in.</EmptyState>}
+            empty={
+              <EmptyState title="No cards yet" action={upload}>
+                Photograph or scan a training card to send it in.
+              </EmptyState>
+            }
           />
         </section>
       </div>

@@ -23,13 +23,18 @@ export function Component() {
   const navigate = useNavigate();
   return (
     <>
-      <PageHeader title="Upload a card" description="Take a photo of the card or choose a PDF. Check what we read from it, then send it." />
+      <PageHeader
+        title="Upload a card"
+        description="Take a photo of the card or choose a PDF. Check what we read from it, then send it."
+      />
       <UploadFlow
         types={types.filter((t) => t.active && t.holder === "technician" && ownCardSets.has(t.fieldSet))}
         technicians={[]}
         fixedTechnicianId={technicianId}
         initialTypeCode={search.get("type") ?? undefined}
-        onSubmitted={(credential) => navigate(paths.technician.standing, { state: { submitted: credential.typeName } })}
+        onSubmitted={(credential) =>
+          navigate(paths.technician.standing, { state: { submitted: credential.typeName } })
+        }
       />
     </>
   );

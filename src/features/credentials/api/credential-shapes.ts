@@ -83,7 +83,13 @@ export const queuePageSchema = z.object({
 export type QueuePage = z.infer<typeof queuePageSchema>;
 
 export const uploadedDocumentSchema = z.object({
-  document: z.object({ id: z.number(), name: z.string(), mime: z.string(), sizeBytes: z.number(), sha256: z.string() }),
+  document: z.object({
+    id: z.number(),
+    name: z.string(),
+    mime: z.string(),
+    sizeBytes: z.number(),
+    sha256: z.string(),
+  }),
   extraction: z.object({
     method: z.enum(["pdf_text", "ocr", "none"]),
     ocrAvailable: z.boolean(),

@@ -5,7 +5,8 @@ import { credentialKeys } from "./credential-keys.ts";
 import { credentialSchema } from "./credential-shapes.ts";
 
 /** Step 2 of the upload: the checked fields become a credential awaiting verification. */
-export const submitCredential = (input: SubmitCredential) => api.post("/credentials", input, credentialSchema);
+export const submitCredential = (input: SubmitCredential) =>
+  api.post("/credentials", input, credentialSchema);
 
 export function useSubmitCredential() {
   const queryClient = useQueryClient();

@@ -11,7 +11,8 @@ const actionWords: Record<string, string> = {
   "document.downloaded": "File downloaded",
 };
 
-const wordsFor = (action: string) => actionWords[action] ?? action.replace(/^[a-z_]+\./, "").replace(/_/g, " ");
+const wordsFor = (action: string) =>
+  actionWords[action] ?? action.replace(/^[a-z_]+\./, "").replace(/_/g, " ");
 
 const changesOf = (before: unknown, after: unknown): string[] => {
   if (!before || !after || typeof before !== "object" || typeof after !== "object") return [];
@@ -41,7 +42,8 @@ export function AuditTrail({ events }: { events: readonly AuditEvent[] }) {
                   <span className="font-semibold text-ink-900">{wordsFor(event.action)}</span>
                   <span className="text-ink-700">
                     {" "}
-                    by {event.actorName ?? "the system"} · <time dateTime={event.at}>{formatDateTime(event.at)}</time>
+                    by {event.actorName ?? "the system"} ·{" "}
+                    <time dateTime={event.at}>{formatDateTime(event.at)}</time>
                   </span>
                 </p>
                 {changes.length > 0 && (

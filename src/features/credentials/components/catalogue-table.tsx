@@ -11,16 +11,32 @@ export const validityWords = (validity: CredentialType["validity"]): string =>
       ? "No expiry"
       : "Dates on the document";
 
-type CatalogueTableProps = { types: CredentialType[]; editingCode: string | null; onEdit: (code: string) => void };
+type CatalogueTableProps = {
+  types: CredentialType[];
+  editingCode: string | null;
+  onEdit: (code: string) => void;
+};
 
 export function CatalogueTable({ types, editingCode, onEdit }: CatalogueTableProps) {
   const columns = useMemo(() => {
     const column = dataTableColumns<CredentialType>();
     return column.columns([
       column.accessor("name", { header: "Name", sortFn: "text" }),
-      column.accessor((t) => categoryLabels[t.category], { id: "category", header: "Category", sortFn: "text" }),
-      column.accessor((t) => (t.holder === "company" ? "Company" : "Technician"), { id: "holder", header: "Held by", sortFn: "text" }),
-      column.accessor((t) => validityWords(t.validity), { id: "validity", header: "Valid for", sortFn: "text" }),
+      column.accessor((t) => categoryLabels[t.category], {
+        id: "category",
+        header: "Category",
+        sortFn: "text",
+      }),
+      column.accessor((t) => (t.holder === "company" ? "Company" : "Technician"), {
+        id: "holder",
+        header: "Held by",
+        sortFn: "text",
+      }),
+      column.accessor((t) => validityWords(t.validity), {
+        id: "validity",
+        header: "Valid for",
+        sortFn: "text",
+      }),
       column.accessor((t) => (t.active ? "Active" : "Retired"), {
         id: "active",
         header: "In use",
@@ -36,7 +52,11 @@ export function CatalogueTable({ types, editingCode, onEdit }: CatalogueTablePro
         id: "edit",
         header: "Edit",
         cell: (info) => (
-          <Button variant="quiet" className="min-h-8 px-2 py-1" onClick={() => onEdit(info.row.original.code)}>
+          <Button
+            variant="quiet"
+            className="min-h-8 px-2 py-1"
+            onClick={() => onEdit(info.row.original.code)}
+          >
             Edit<span className="sr-only"> {info.row.original.name}</span>
           </Button>
         ),

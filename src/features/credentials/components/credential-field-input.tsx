@@ -13,7 +13,14 @@ type CredentialFieldInputProps = {
 };
 
 /** One labelled input of a credential's fields, with its marker, hint and error tied to it for screen readers. */
-export function CredentialFieldInput({ definition, value, onChange, error, wasRead, disabled }: CredentialFieldInputProps) {
+export function CredentialFieldInput({
+  definition,
+  value,
+  onChange,
+  error,
+  wasRead,
+  disabled,
+}: CredentialFieldInputProps) {
   const id = `credential-${definition.path.replace(/\W/g, "-")}-${useId()}`;
   const markerId = wasRead ? `${id}-read` : undefined;
   const hintId = definition.hint ? `${id}-hint` : undefined;

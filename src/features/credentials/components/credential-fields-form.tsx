@@ -14,7 +14,14 @@ type CredentialFieldsFormProps = {
 };
 
 /** Every input of a type's field set; limits and flags get their own group so the form reads like the certificate. */
-export function CredentialFieldsForm({ definitions, values, onChange, errors, found, disabled }: CredentialFieldsFormProps) {
+export function CredentialFieldsForm({
+  definitions,
+  values,
+  onChange,
+  errors,
+  found,
+  disabled,
+}: CredentialFieldsFormProps) {
   const limits = definitions.filter((d) => d.kind === "dollars" || d.path === "statutory");
   const flags = definitions.filter((d) => d.kind === "checkbox" && d.path !== "statutory");
   const main = definitions.filter((d) => !limits.includes(d) && !flags.includes(d));

@@ -8,8 +8,16 @@ import type { CredentialType } from "../api/credential-shapes.ts";
 import { useEditCredentialType } from "../api/edit-credential-type.ts";
 import { validityWords } from "./catalogue-table.tsx";
 
-const labels = { name: "Name", description: "Description", active: "In use", validityMonths: "Valid for (months from issue)" };
-const plainWords = { name: "Enter a name of at least 3 characters", description: "Enter a description of at least 3 characters" };
+const labels = {
+  name: "Name",
+  description: "Description",
+  active: "In use",
+  validityMonths: "Valid for (months from issue)",
+};
+const plainWords = {
+  name: "Enter a name of at least 3 characters",
+  description: "Enter a description of at least 3 characters",
+};
 
 type CredentialTypeFormProps = { type: CredentialType; onDone: () => void };
 
@@ -82,7 +90,13 @@ export function CredentialTypeForm({ type, onDone }: CredentialTypeFormProps) {
         />
       )}
       <label className="flex min-h-11 items-center gap-3 text-sm font-medium text-ink-900">
-        <input type="checkbox" name="active" defaultChecked={type.active} data-field="active" className="size-5 accent-ink-700" />
+        <input
+          type="checkbox"
+          name="active"
+          defaultChecked={type.active}
+          data-field="active"
+          className="size-5 accent-ink-700"
+        />
         In use (uploaders can choose it)
       </label>
       <div className="flex gap-3">

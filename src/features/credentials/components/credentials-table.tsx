@@ -21,7 +21,13 @@ type CredentialsTableProps = {
 const holderOf = (c: Credential) => c.technicianName ?? `${c.companyName} (company)`;
 
 /** Credentials with their state, the date each lapses, and for returned ones the reason and the way to answer it. */
-export function CredentialsTable({ credentials, caption, correctionHref, empty, showHolder = true }: CredentialsTableProps) {
+export function CredentialsTable({
+  credentials,
+  caption,
+  correctionHref,
+  empty,
+  showHolder = true,
+}: CredentialsTableProps) {
   const columns = useMemo(() => credentialColumns(correctionHref, showHolder), [correctionHref, showHolder]);
   return (
     <DataTable
@@ -50,7 +56,8 @@ function credentialColumns(correctionHref: (credential: Credential) => string, s
       id: "lapsesAt",
       header: "Lapses",
       sortFn: "text",
-      cell: (info) => (info.row.original.lapsesAt ? formatInstantDate(info.row.original.lapsesAt) : "No expiry"),
+      cell: (info) =>
+        info.row.original.lapsesAt ? formatInstantDate(info.row.original.lapsesAt) : "No expiry",
     }),
     column.display({
       id: "note",

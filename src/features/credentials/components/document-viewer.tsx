@@ -35,19 +35,21 @@ export function DocumentViewer({ documentId, name, mime }: DocumentViewerProps) 
         />
       ) : (
         <ol className="space-y-3">
-          {Array.from({ length: ended === null ? shown : Math.min(shown, ended - 1) }, (_, i) => i + 1).map((page) => (
-            <li key={page}>
-              <img
-                src={documentUrls.page(documentId, page)}
-                alt={`Page ${page} of ${name}`}
-                className="h-auto w-full rounded-md border border-ink-100 bg-white"
-                onLoad={() => {
-                  if (page === shown && page < MAX_PAGES) setShown(page + 1);
-                }}
-                onError={() => setEnded((current) => (current === null || page < current ? page : current))}
-              />
-            </li>
-          ))}
+          {Array.from({ length: ended === null ? shown : Math.min(shown, ended - 1) }, (_, i) => i + 1).map(
+            (page) => (
+              <li key={page}>
+                <img
+                  src={documentUrls.page(documentId, page)}
+                  alt={`Page ${page} of ${name}`}
+                  className="h-auto w-full rounded-md border border-ink-100 bg-white"
+                  onLoad={() => {
+                    if (page === shown && page < MAX_PAGES) setShown(page + 1);
+                  }}
+                  onError={() => setEnded((current) => (current === null || page < current ? page : current))}
+                />
+              </li>
+            ),
+          )}
         </ol>
       )}
       {!isImage && ended === 1 && (

@@ -66,14 +66,25 @@ export function fieldDefinitionsFor(fieldSet: FieldSet, typeCode: string): Field
     case "insurance":
       return [
         { path: "insurerName", label: "Insurer", kind: "text", required: true },
-        { path: "naic", label: "NAIC company code", kind: "text", hint: "Five digits, printed beside the insurer." },
+        {
+          path: "naic",
+          label: "NAIC company code",
+          kind: "text",
+          hint: "Five digits, printed beside the insurer.",
+        },
         { path: "policyNumber", label: "Policy number", kind: "text", required: true },
         { path: "namedInsured", label: "Named insured", kind: "text" },
         { path: "certificateHolder", label: "Certificate holder", kind: "text" },
         { path: "effectiveDate", label: "Effective date", kind: "date", required: true },
         { path: "expirationDate", label: "Expiration date", kind: "date", required: true },
         ...(typeCode === "workers_comp"
-          ? [{ path: "statutory", label: "Statutory limits (workers' compensation)", kind: "checkbox" as const }]
+          ? [
+              {
+                path: "statutory",
+                label: "Statutory limits (workers' compensation)",
+                kind: "checkbox" as const,
+              },
+            ]
           : []),
         ...limitsFor(typeCode).map((name) => ({
           path: `limits.${name}`,

@@ -6,15 +6,24 @@ import type { FieldDefinition } from "./field-definitions.ts";
 export type FieldValues = Record<string, string | boolean>;
 
 const valueAt = (fields: Record<string, unknown>, path: string): unknown =>
-  path.split(".").reduce<unknown>((at, key) => (at && typeof at === "object" ? (at as Record<string, unknown>)[key] : undefined), fields);
+  path
+    .split(".")
+    .reduce<unknown>(
+      (at, key) => (at && typeof at === "object" ? (at as Record<string, unknown>)[key] : undefined),
+      fields,
+    );
 
 /** The inputs' starting values from fields (proposed by the extractor, or stored on a credential). */
-export function toFieldValues(definitions: readonly FieldDefinition[], fields: Record<string, unknown>): FieldValues {
+export function toFieldValues(
+  definitions: readonly FieldDefinition[],
+  fields: Record<string, unknown>,
+): FieldValues {
   const values: FieldValues = {};
   for (const definition of definitions) {
     const value = valueAt(fields, definition.path);
     if (definition.kind === "checkbox") values[definition.path] = value === true;
-    else if (definition.kind === "dollars" && typeof value === "number") values[definition.path] = String(value);
+    else if (definition.kind === "dollars" && typeof value === "number")
+      values[definition.path] = value.toLocaleString("en-US");
     else if (value !== undefined && value !== null) values[definition.path] = String(value);
     else values[definition.path] = "";
   }
@@ -44,7 +53,11 @@ export type ParsedFields =
  * The fields object the API takes, checked with the same shared schema the server uses. Amounts that are
  * not whole dollars are caught here first, so the message says so instead of "expected number".
  */
-export function parseFieldValues(fieldSet: FieldSet, definitions: readonly FieldDefinition[], values: FieldValues): ParsedFields {
+export function parseFieldValues(
+  fieldSet: FieldSet,
+  definitions: readonly FieldDefinition[],
+  values: FieldValues,
+): ParsedFields {
   const fields: Record<string, unknown> = {};
   const problems: Record<string, string> = {};
   for (const definition of definitions) {
@@ -68,9 +81,13 @@ export function parseFieldValues(fieldSet: FieldSet, definitions: readonly Field
   if (!parsed.success) {
     for (const issue of parsed.error.issues) {
       const path = issue.path.map(String).join(".");
-      const missing = issue.code === "invalid_type" || issue.code === "invalid_format" || issue.code === "too_small";
+      const missing =
+        issue.code === "invalid_type" || issue.code === "invalid_format" || issue.code === "too_small";
       const definition = definitions.find((d) => d.path === path);
-      problems[path] ??= missing && definition && values[path] === "" ? `Enter the ${definition.label.toLowerCase()}` : issue.message;
+      problems[path] ??=
+        missing && definition && values[path] === ""
+          ? `Enter the ${definition.label.toLowerCase()}`
+          : issue.message;
     }
   }
   return { ok: false, problems, zodError: parsed.success ? null : parsed.error };

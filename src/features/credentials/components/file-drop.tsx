@@ -55,9 +55,15 @@ export function FileDrop({ onFile, disabled = false, hint }: FileDropProps) {
       >
         <input {...getInputProps()} />
         <svg viewBox="0 0 24 24" className="size-8 text-ink-500" aria-hidden="true" focusable="false">
-          <path d="M12 16V4m0 0-4.5 4.5M12 4l4.5 4.5M4 15v4h16v-4" className="fill-none stroke-current" strokeWidth="1.75" />
+          <path
+            d="M12 16V4m0 0-4.5 4.5M12 4l4.5 4.5M4 15v4h16v-4"
+            className="fill-none stroke-current"
+            strokeWidth="1.75"
+          />
         </svg>
-        <p className="font-medium text-ink-900">{isDragActive ? "Drop the file here" : "Drop a file here, or"}</p>
+        <p className="font-medium text-ink-900">
+          {isDragActive ? "Drop the file here" : "Drop a file here, or"}
+        </p>
         <label
           htmlFor={inputId}
           className={`inline-flex min-h-12 cursor-pointer items-center rounded-md bg-accent-500 px-5 text-base font-semibold text-ink-900 shadow-sm hover:bg-accent-400 has-[+input:focus-visible]:outline-2 has-[+input:focus-visible]:outline-offset-2 has-[+input:focus-visible]:outline-ink-700 ${
@@ -78,7 +84,9 @@ export function FileDrop({ onFile, disabled = false, hint }: FileDropProps) {
             event.currentTarget.value = "";
           }}
         />
-        <p className="text-sm text-ink-700">{hint ?? "PDF, PNG or JPEG, up to 10 MB. A phone photo of a card works."}</p>
+        <p className="text-sm text-ink-700">
+          {hint ?? "PDF, PNG or JPEG, up to 10 MB. A phone photo of a card works."}
+        </p>
       </div>
       {problem && (
         <p role="alert" className="text-sm font-medium text-red-800">

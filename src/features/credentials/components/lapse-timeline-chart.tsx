@@ -7,7 +7,10 @@ import type { WeekBucket } from "./lapse-window.ts";
  */
 export function LapseTimelineChart({ weeks }: { weeks: WeekBucket[] }) {
   const total = weeks.reduce((sum, w) => sum + w.count, 0);
-  const busiest = weeks.reduce<WeekBucket | null>((best, w) => (w.count > (best?.count ?? 0) ? w : best), null);
+  const busiest = weeks.reduce<WeekBucket | null>(
+    (best, w) => (w.count > (best?.count ?? 0) ? w : best),
+    null,
+  );
   const summary =
     total === 0
       ? "Nothing lapses in the coming weeks."
@@ -25,7 +28,13 @@ export function LapseTimelineChart({ weeks }: { weeks: WeekBucket[] }) {
               formatter={(value) => [value, "Lapsing"]}
               labelFormatter={(label) => `Week of ${String(label)}`}
             />
-            <Bar dataKey="count" name="Lapsing" fill="#213a66" isAnimationActive={false} radius={[3, 3, 0, 0]} />
+            <Bar
+              dataKey="count"
+              name="Lapsing"
+              fill="#213a66"
+              isAnimationActive={false}
+              radius={[3, 3, 0, 0]}
+            />
           </BarChart>
         </ResponsiveContainer>
       </div>

@@ -31,12 +31,19 @@ export function LapsingTable({ credentials, now, renewHref }: LapsingTableProps)
         cell: (info) => <StatusBadge status="lapsing" daysLeft={info.getValue()} />,
       }),
       column.accessor("typeName", { header: "Type", sortFn: "text" }),
-      column.accessor((c) => c.technicianName ?? `${c.companyName} (company)`, { id: "holder", header: "Holder", sortFn: "text" }),
+      column.accessor((c) => c.technicianName ?? `${c.companyName} (company)`, {
+        id: "holder",
+        header: "Holder",
+        sortFn: "text",
+      }),
       column.display({
         id: "renew",
         header: "Renewal",
         cell: (info) => (
-          <Link to={renewHref(info.row.original)} className="font-medium text-ink-700 underline underline-offset-2">
+          <Link
+            to={renewHref(info.row.original)}
+            className="font-medium text-ink-700 underline underline-offset-2"
+          >
             Upload the renewal<span className="sr-only"> of {info.row.original.typeName}</span>
           </Link>
         ),

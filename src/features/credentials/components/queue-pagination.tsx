@@ -7,7 +7,10 @@ export function QueuePagination({ page, pageSize, total, onPage }: QueuePaginati
   const first = total === 0 ? 0 : (page - 1) * pageSize + 1;
   const last = Math.min(total, page * pageSize);
   return (
-    <nav aria-label="Queue pages" className="mt-3 flex flex-wrap items-center justify-between gap-3 text-sm text-ink-700">
+    <nav
+      aria-label="Queue pages"
+      className="mt-3 flex flex-wrap items-center justify-between gap-3 text-sm text-ink-700"
+    >
       <p>
         {first}–{last} of {total} · page {page} of {pages}
       </p>

@@ -9,7 +9,11 @@ type ReturnedListProps = { credentials: Credential[]; correctionHref: (credentia
 /** Documents a reviewer sent back, each with the reason and the way to answer it. */
 export function ReturnedList({ credentials, correctionHref }: ReturnedListProps) {
   if (credentials.length === 0) {
-    return <p className="rounded-lg border border-ink-100 bg-white px-4 py-3 text-sm text-ink-700">Nothing was returned to you.</p>;
+    return (
+      <p className="rounded-lg border border-ink-100 bg-white px-4 py-3 text-sm text-ink-700">
+        Nothing was returned to you.
+      </p>
+    );
   }
   return (
     <ul className="space-y-3">

@@ -27,8 +27,14 @@ const noFound: ReadonlySet<string> = new Set();
 
 /** The right-hand side of the review page: the fields (editable), the checks beside them, and the two decisions. */
 export function ReviewPanel({ credential, fieldSet, onDecided }: ReviewPanelProps) {
-  const definitions = useMemo(() => fieldDefinitionsFor(fieldSet, credential.typeCode), [fieldSet, credential.typeCode]);
-  const initial = useMemo(() => toFieldValues(definitions, credential.fields), [definitions, credential.fields]);
+  const definitions = useMemo(
+    () => fieldDefinitionsFor(fieldSet, credential.typeCode),
+    [fieldSet, credential.typeCode],
+  );
+  const initial = useMemo(
+    () => toFieldValues(definitions, credential.fields),
+    [definitions, credential.fields],
+  );
   const [values, setValues] = useState<FieldValues>(initial);
   const [problems, setProblems] = useState<Record<string, string>>({});
   const [summary, setSummary] = useState<unknown>(null);
@@ -60,7 +66,9 @@ export function ReviewPanel({ credential, fieldSet, onDecided }: ReviewPanelProp
     }
     const mapped = credentialFieldErrorsOf(error);
     setProblems(mapped);
-    setSummary(Object.keys(mapped).length > 0 && isApiError(error) ? problemsAsError(error.message, mapped) : error);
+    setSummary(
+      Object.keys(mapped).length > 0 && isApiError(error) ? problemsAsError(error.message, mapped) : error,
+    );
   };
 
   const decideVerify = () => {
@@ -81,7 +89,10 @@ export function ReviewPanel({ credential, fieldSet, onDecided }: ReviewPanelProp
       return;
     }
     setReasonProblem(null);
-    giveBack.mutate({ id: credential.id, reason: parsed.data.reason }, { onSuccess: onDecided, onError: showError });
+    giveBack.mutate(
+      { id: credential.id, reason: parsed.data.reason },
+      { onSuccess: onDecided, onError: showError },
+    );
   };
 
   const saveFields = () => {
@@ -98,11 +109,18 @@ export function ReviewPanel({ credential, fieldSet, onDecided }: ReviewPanelProp
     <div className="space-y-5">
       <div className="flex flex-wrap items-center gap-2">
         <StatusBadge status={credential.state} />
-        {!open && <span className="text-sm text-ink-700">This document has been decided; nothing more to do here.</span>}
+        {!open && (
+          <span className="text-sm text-ink-700">
+            This document has been decided; nothing more to do here.
+          </span>
+        )}
       </div>
       <ReviewerWarnings warnings={credential.warnings} />
       {conflict ? (
-        <p role="alert" className="rounded-md border-l-4 border-red-700 bg-red-50 px-4 py-3 text-sm font-semibold text-red-900">
+        <p
+          role="alert"
+          className="rounded-md border-l-4 border-red-700 bg-red-50 px-4 py-3 text-sm font-semibold text-red-900"
+        >
           {conflictWords}
         </p>
       ) : (
@@ -122,25 +140,48 @@ export function ReviewPanel({ credential, fieldSet, onDecided }: ReviewPanelProp
         />
         {open && (
           <div className="mt-3 flex flex-wrap items-center gap-3">
-            <Button variant="secondary" onClick={saveFields} disabled={!dirty} pending={save.isPending} pendingLabel="Saving…">
+            <Button
+              variant="secondary"
+              onClick={saveFields}
+              disabled={!dirty}
+              pending={save.isPending}
+              pendingLabel="Saving…"
+            >
               Save corrections
             </Button>
-            {save.isSuccess && !dirty && <span role="status" className="text-sm text-ink-700">Corrections saved.</span>}
-            {dirty && <span className="text-sm text-ink-700">Unsaved corrections are saved with the verification.</span>}
+            {save.isSuccess && !dirty && (
+              <span role="status" className="text-sm text-ink-700">
+                Corrections saved.
+              </span>
+            )}
+            {dirty && (
+              <span className="text-sm text-ink-700">
+                Unsaved corrections are saved with the verification.
+              </span>
+            )}
           </div>
         )}
       </section>
       {open && (
-        <section aria-labelledby="decision-heading" className="space-y-4 rounded-lg border border-ink-100 bg-white p-4">
+        <section
+          aria-labelledby="decision-heading"
+          className="space-y-4 rounded-lg border border-ink-100 bg-white p-4"
+        >
           <h2 id="decision-heading" className="text-lg font-semibold text-ink-900">
             Decision
           </h2>
           <p className="text-sm text-ink-700">
-            Keyboard: press <kbd className="rounded border border-ink-300 bg-ink-50 px-1 font-mono">V</kbd> to verify,{" "}
-            <kbd className="rounded border border-ink-300 bg-ink-50 px-1 font-mono">R</kbd> to write a return reason. The keys do
-            nothing while you type in a field.
+            Keyboard: press <kbd className="rounded border border-ink-300 bg-ink-50 px-1 font-mono">V</kbd> to
+            verify, <kbd className="rounded border border-ink-300 bg-ink-50 px-1 font-mono">R</kbd> to write a
+            return reason. The keys do nothing while you type in a field.
           </p>
-          <Button onClick={decideVerify} pending={verify.isPending} pendingLabel="Verifying…" disabled={busy} className="min-h-11">
+          <Button
+            onClick={decideVerify}
+            pending={verify.isPending}
+            pendingLabel="Verifying…"
+            disabled={busy}
+            className="min-h-11"
+          >
             Verify
           </Button>
           <div className="space-y-1 border-t border-ink-100 pt-4">
@@ -158,7 +199,9 @@ export function ReviewPanel({ credential, fieldSet, onDecided }: ReviewPanelProp
               rows={3}
               required
               aria-invalid={reasonProblem ? true : undefined}
-              aria-describedby={["return-reason-hint", reasonProblem ? "return-reason-error" : ""].filter(Boolean).join(" ")}
+              aria-describedby={["return-reason-hint", reasonProblem ? "return-reason-error" : ""]
+                .filter(Boolean)
+                .join(" ")}
               className={`block w-full rounded-md border bg-white px-3 py-2 text-base text-ink-900 focus-visible:outline-2 focus-visible:outline-offset-1 focus-visible:outline-ink-700 ${
                 reasonProblem ? "border-red-700" : "border-ink-300"
               }`}
@@ -168,7 +211,14 @@ export function ReviewPanel({ credential, fieldSet, onDecided }: ReviewPanelProp
                 {reasonProblem}
               </p>
             )}
-            <Button variant="danger" onClick={decideReturn} pending={giveBack.isPending} pendingLabel="Returning…" disabled={busy} className="mt-2">
+            <Button
+              variant="danger"
+              onClick={decideReturn}
+              pending={giveBack.isPending}
+              pendingLabel="Returning…"
+              disabled={busy}
+              className="mt-2"
+            >
               Return to uploader
             </Button>
           </div>

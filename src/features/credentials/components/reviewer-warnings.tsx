@@ -1,10 +1,19 @@
 import type { ReviewerWarningView } from "../api/credential-shapes.ts";
 
 /** Checks that help a reviewer look twice; warnings, never refusals. */
-export function ReviewerWarnings({ warnings, title = "Points to check" }: { warnings: readonly ReviewerWarningView[]; title?: string }) {
+export function ReviewerWarnings({
+  warnings,
+  title = "Points to check",
+}: {
+  warnings: readonly ReviewerWarningView[];
+  title?: string;
+}) {
   if (warnings.length === 0) return null;
   return (
-    <section aria-label={title} className="rounded-md border border-amber-700/40 bg-amber-50 px-4 py-3 text-sm text-ink-900">
+    <section
+      aria-label={title}
+      className="rounded-md border border-amber-700/40 bg-amber-50 px-4 py-3 text-sm text-ink-900"
+    >
       <h3 className="flex items-center gap-2 font-semibold">
         <svg viewBox="0 0 16 16" className="size-4 shrink-0" aria-hidden="true" focusable="false">
           <path d="M8 1.5 15 14H1z" className="fill-none stroke-amber-800" strokeWidth="1.5" />

@@ -38,8 +38,17 @@ const uploadProblem = (error: unknown): string => {
 };
 
 /** Choose the type and holder, send the file, check the fields read from it, then submit it for verification. */
-export function UploadFlow({ types, technicians, fixedTechnicianId, initialTypeCode, initialTechnicianId, onSubmitted }: UploadFlowProps) {
-  const [typeCode, setTypeCode] = useState(types.some((t) => t.code === initialTypeCode) ? (initialTypeCode ?? "") : "");
+export function UploadFlow({
+  types,
+  technicians,
+  fixedTechnicianId,
+  initialTypeCode,
+  initialTechnicianId,
+  onSubmitted,
+}: UploadFlowProps) {
+  const [typeCode, setTypeCode] = useState(
+    types.some((t) => t.code === initialTypeCode) ? (initialTypeCode ?? "") : "",
+  );
   const [technicianId, setTechnicianId] = useState(initialTechnicianId ? String(initialTechnicianId) : "");
   const [choiceProblems, setChoiceProblems] = useState<Record<string, string>>({});
   const [progress, setProgress] = useState<{ name: string; fraction: number } | null>(null);
@@ -114,7 +123,11 @@ export function UploadFlow({ types, technicians, fixedTechnicianId, initialTypeC
         onError: (error) => {
           const mapped = credentialFieldErrorsOf(error);
           setProblems(mapped);
-          setSummary(Object.keys(mapped).length > 0 ? problemsAsError(isApiError(error) ? error.message : "Check the fields marked below.", mapped) : error);
+          setSummary(
+            Object.keys(mapped).length > 0
+              ? problemsAsError(isApiError(error) ? error.message : "Check the fields marked below.", mapped)
+              : error,
+          );
         },
       },
     );
@@ -150,10 +163,17 @@ export function UploadFlow({ types, technicians, fixedTechnicianId, initialTypeC
         {progress ? (
           <UploadProgress fileName={progress.name} fraction={progress.fraction} />
         ) : (
-          <FileDrop onFile={sendFile} disabled={!type} hint={type ? undefined : "Choose the type of document first."} />
+          <FileDrop
+            onFile={sendFile}
+            disabled={!type}
+            hint={type ? undefined : "Choose the type of document first."}
+          />
         )}
         {upload.isError && (
-          <p role="alert" className="rounded-md border-l-4 border-red-700 bg-red-50 px-4 py-3 text-sm font-medium text-red-900">
+          <p
+            role="alert"
+            className="rounded-md border-l-4 border-red-700 bg-red-50 px-4 py-3 text-sm font-medium text-red-900"
+          >
             {uploadProblem(upload.error)}
           </p>
         )}
@@ -174,7 +194,10 @@ export function UploadFlow({ types, technicians, fixedTechnicianId, initialTypeC
           Use another file
         </Button>
       </div>
-      <ExtractionNote extraction={uploaded.extraction} readCount={definitions.filter((d) => found.has(d.path)).length} />
+      <ExtractionNote
+        extraction={uploaded.extraction}
+        readCount={definitions.filter((d) => found.has(d.path)).length}
+      />
       <ReviewerWarnings warnings={uploaded.warnings} title="The reviewer will look at these" />
       <FormError error={summary} labels={labelsOf(definitions)} />
       <CredentialFieldsForm

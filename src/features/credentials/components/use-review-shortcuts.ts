@@ -1,13 +1,19 @@
-import { useEffect, useRef } from "react";
+import { useEffect, useLayoutEffect, useRef } from "react";
 
 const isTyping = (target: EventTarget | null): boolean =>
   target instanceof HTMLElement &&
   (target.isContentEditable || ["INPUT", "TEXTAREA", "SELECT"].includes(target.tagName));
 
 /** Single-key shortcuts for the review page; they stay quiet while someone types in a field or holds a modifier. */
-export function useReviewShortcuts(enabled: boolean, handlers: { verify: () => void; focusReturn: () => void }) {
+export function useReviewShortcuts(
+  enabled: boolean,
+  handlers: { verify: () => void; focusReturn: () => void },
+) {
   const latest = useRef(handlers);
-  latest.current = handlers;
+  // The listener is added once; it calls whatever handlers the last render gave (they close over the form's values).
+  useLayoutEffect(() => {
+    latest.current = handlers;
+  });
   useEffect(() => {
     if (!enabled) return;
     const onKey = (event: KeyboardEvent) => {

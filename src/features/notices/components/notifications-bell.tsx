@@ -30,10 +30,17 @@ export function NotificationsBell() {
         className="relative flex min-h-11 min-w-11 items-center justify-center rounded-md text-ink-50 hover:bg-ink-800 focus-visible:outline-2 focus-visible:outline-offset-2 focus-visible:outline-accent-400"
       >
         <svg viewBox="0 0 20 20" className="size-5" aria-hidden="true" focusable="false">
-          <path d="M10 2.5a5 5 0 0 0-5 5v3.5L3.5 14h13L15 11V7.5a5 5 0 0 0-5-5zM8 16a2 2 0 0 0 4 0" className="fill-none stroke-current" strokeWidth="1.5" />
+          <path
+            d="M10 2.5a5 5 0 0 0-5 5v3.5L3.5 14h13L15 11V7.5a5 5 0 0 0-5-5zM8 16a2 2 0 0 0 4 0"
+            className="fill-none stroke-current"
+            strokeWidth="1.5"
+          />
         </svg>
         {unread > 0 && (
-          <span aria-hidden="true" className="absolute -top-0.5 -right-0.5 min-w-5 rounded-full bg-accent-500 px-1 text-center text-xs font-semibold text-ink-900">
+          <span
+            aria-hidden="true"
+            className="absolute -top-0.5 -right-0.5 min-w-5 rounded-full bg-accent-500 px-1 text-center text-xs font-semibold text-ink-900"
+          >
             {unread > 99 ? "99+" : unread}
           </span>
         )}
@@ -41,7 +48,7 @@ export function NotificationsBell() {
       {open && (
         <div
           id={panelId}
-          className="absolute right-0 z-30 mt-2 w-[min(24rem,calc(100vw-2rem))] rounded-lg border border-ink-100 bg-white p-2 text-ink-900 shadow-lg"
+          className="fixed inset-x-4 top-16 z-30 rounded-lg md:absolute md:inset-x-auto md:top-auto md:right-0 md:mt-2 md:w-96 border border-ink-100 bg-white p-2 text-ink-900 shadow-lg"
         >
           <div className="flex items-center justify-between gap-2 border-b border-ink-100 px-2 pb-2">
             <h2 className="text-sm font-semibold">Notifications</h2>
@@ -63,11 +70,17 @@ export function NotificationsBell() {
               {items.map((item) => (
                 <li key={item.id} className="px-2 py-2 text-sm">
                   <p className="flex items-start gap-2">
-                    <span aria-hidden="true" className="mt-0.5">{item.readAt ? "○" : "●"}</span>
+                    <span aria-hidden="true" className="mt-0.5">
+                      {item.readAt ? "○" : "●"}
+                    </span>
                     <span>
                       <span className="font-semibold">{item.readAt ? "" : "Unread: "}</span>
                       {item.link ? (
-                        <Link to={item.link} onClick={close} className="font-semibold underline underline-offset-2">
+                        <Link
+                          to={item.link}
+                          onClick={close}
+                          className="font-semibold underline underline-offset-2"
+                        >
                           {item.title}
                         </Link>
                       ) : (

@@ -46,4 +46,5 @@ export const technicianStandingQuery = (technicianId: number) =>
     queryFn: () => getTechnicianStanding(technicianId),
   });
 
-export const useTechnicianStanding = (technicianId: number) => useQuery(technicianStandingQuery(technicianId));
+export const useTechnicianStanding = (technicianId: number) =>
+  useQuery(technicianStandingQuery(technicianId));

@@ -1,7 +1,11 @@
 import { EmptyState } from "@/components/ui/empty-state.tsx";
 import { StatusBadge } from "@/components/ui/status-badge.tsx";
 import { daysUntil, formatInstantDate } from "@/lib/format-date.ts";
-import type { RequirementResultView, StandingResultView, TechnicianStanding } from "../api/get-technician-standing.ts";
+import type {
+  RequirementResultView,
+  StandingResultView,
+  TechnicianStanding,
+} from "../api/get-technician-standing.ts";
 
 const reasonWords: Record<NonNullable<RequirementResultView["reason"]>, string> = {
   missing: "Missing",
@@ -36,7 +40,9 @@ function RequirementRow({ result, now }: { result: RequirementResultView; now: D
       <span className="font-medium text-ink-900">{result.requirement.label}</span>
       <span>{badge}</span>
       <span className="text-sm text-ink-800">
-        {result.status === "unmet" && result.reason && <span className="font-semibold">{reasonWords[result.reason]}: </span>}
+        {result.status === "unmet" && result.reason && (
+          <span className="font-semibold">{reasonWords[result.reason]}: </span>
+        )}
         {result.detail}
         {result.lapsesAt && result.status !== "unmet" && (
           <span className="block text-ink-700">Counts until {formatInstantDate(result.lapsesAt)}</span>
@@ -53,7 +59,9 @@ function StandingBlock({ title, result, now }: { title: string; result: Standing
         <h3 className="font-semibold text-ink-900">{title}</h3>
         <OverallBadge result={result} now={now} />
         {result.earliestLapse && (
-          <span className="text-sm text-ink-700">Earliest lapse {formatInstantDate(result.earliestLapse)}</span>
+          <span className="text-sm text-ink-700">
+            Earliest lapse {formatInstantDate(result.earliestLapse)}
+          </span>
         )}
       </div>
       <ul className="divide-y divide-ink-100">

@@ -3,7 +3,8 @@ import { api } from "@/lib/api-client.ts";
 import { technicianKeys } from "./technician-keys.ts";
 import { technicianSchema } from "./technician-shape.ts";
 
-export const deactivateTechnician = (id: number) => api.post(`/technicians/${id}/deactivate`, {}, technicianSchema);
+export const deactivateTechnician = (id: number) =>
+  api.post(`/technicians/${id}/deactivate`, {}, technicianSchema);
 
 export function useDeactivateTechnician() {
   const queryClient = useQueryClient();

@@ -6,6 +6,7 @@ import { technicianSchema } from "./technician-shape.ts";
 
 export const getTechnicians = () => api.get("/technicians", z.array(technicianSchema));
 
-export const techniciansQuery = () => queryOptions({ queryKey: technicianKeys.list(), queryFn: getTechnicians });
+export const techniciansQuery = () =>
+  queryOptions({ queryKey: technicianKeys.list(), queryFn: getTechnicians });
 
 export const useTechnicians = () => useQuery(techniciansQuery());

@@ -3,7 +3,8 @@ import { api } from "@/lib/api-client.ts";
 import { technicianKeys } from "./technician-keys.ts";
 import { technicianSchema } from "./technician-shape.ts";
 
-export const reactivateTechnician = (id: number) => api.post(`/technicians/${id}/reactivate`, {}, technicianSchema);
+export const reactivateTechnician = (id: number) =>
+  api.post(`/technicians/${id}/reactivate`, {}, technicianSchema);
 
 export function useReactivateTechnician() {
   const queryClient = useQueryClient();

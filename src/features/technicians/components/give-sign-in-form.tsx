@@ -30,7 +30,10 @@ export function GiveSignInForm({ technician }: { technician: Technician }) {
       return;
     }
     setInvalid(null);
-    give.mutate({ id: technician.id, email: parsed.data.email }, { onSuccess: () => setSentTo(parsed.data.email) });
+    give.mutate(
+      { id: technician.id, email: parsed.data.email },
+      { onSuccess: () => setSentTo(parsed.data.email) },
+    );
   };
 
   return (

@@ -1,5 +1,10 @@
 import { useState, type FormEvent } from "react";
-import { machineTechnologies, technicianInputSchema, technologyLabels, type TechnicianInput } from "@shared/technicians/schemas.ts";
+import {
+  machineTechnologies,
+  technicianInputSchema,
+  technologyLabels,
+  type TechnicianInput,
+} from "@shared/technicians/schemas.ts";
 import { Button } from "@/components/ui/button.tsx";
 import { FormError } from "@/components/ui/form-error.tsx";
 import { TextField } from "@/components/ui/text-field.tsx";
@@ -61,7 +66,13 @@ type TechnicianFormProps = {
 };
 
 /** Add or edit a technician; checked with the same schema the server uses. */
-export function TechnicianForm({ technician, submitLabel, pending, serverError, onSubmit }: TechnicianFormProps) {
+export function TechnicianForm({
+  technician,
+  submitLabel,
+  pending,
+  serverError,
+  onSubmit,
+}: TechnicianFormProps) {
   const [invalid, setInvalid] = useState<unknown>(null);
   const problem = invalid ?? serverError;
   const fields = fieldErrorsOf(problem, plainWords);
@@ -81,11 +92,50 @@ export function TechnicianForm({ technician, submitLabel, pending, serverError, 
     <form noValidate onSubmit={submit} className="max-w-3xl space-y-5">
       <FormError error={problem} labels={labels} plainWords={plainWords} />
       <div className="grid gap-4 sm:grid-cols-2">
-        <TextField label={labels.name} name="name" defaultValue={technician?.name} autoComplete="off" required error={fields.name} />
-        <TextField label={labels.email} name="email" type="email" defaultValue={technician?.email ?? ""} autoComplete="off" hint="Optional" error={fields.email} />
-        <TextField label={labels.phone} name="phone" type="tel" defaultValue={technician?.phone ?? ""} hint="Optional" error={fields.phone} />
-        <TextField label={labels.postalCode} name="postalCode" inputMode="numeric" maxLength={5} defaultValue={technician?.postalCode} required error={fields.postalCode} />
-        <TextField label={labels.serviceRadiusKm} name="serviceRadiusKm" type="number" min={1} max={2000} defaultValue={technician?.serviceRadiusKm} required error={fields.serviceRadiusKm} />
+        <TextField
+          label={labels.name}
+          name="name"
+          defaultValue={technician?.name}
+          autoComplete="off"
+          required
+          error={fields.name}
+        />
+        <TextField
+          label={labels.email}
+          name="email"
+          type="email"
+          defaultValue={technician?.email ?? ""}
+          autoComplete="off"
+          hint="Optional"
+          error={fields.email}
+        />
+        <TextField
+          label={labels.phone}
+          name="phone"
+          type="tel"
+          defaultValue={technician?.phone ?? ""}
+          hint="Optional"
+          error={fields.phone}
+        />
+        <TextField
+          label={labels.postalCode}
+          name="postalCode"
+          inputMode="numeric"
+          maxLength={5}
+          defaultValue={technician?.postalCode}
+          required
+          error={fields.postalCode}
+        />
+        <TextField
+          label={labels.serviceRadiusKm}
+          name="serviceRadiusKm"
+          type="number"
+          min={1}
+          max={2000}
+          defaultValue={technician?.serviceRadiusKm}
+          required
+          error={fields.serviceRadiusKm}
+        />
         <TextField
           label={labels.controlFamilies}
           name="controlFamilies"
@@ -98,7 +148,10 @@ export function TechnicianForm({ technician, submitLabel, pending, serverError, 
         <legend className="mb-2 text-sm font-medium text-ink-900">{labels.technologies}</legend>
         <div className="grid grid-cols-2 gap-2 sm:grid-cols-4">
           {machineTechnologies.map((tech, index) => (
-            <label key={tech} className="flex min-h-11 items-center gap-2 rounded-md border border-ink-200 bg-white px-3 has-checked:border-ink-700 has-focus-visible:outline-2 has-focus-visible:outline-ink-700">
+            <label
+              key={tech}
+              className="flex min-h-11 items-center gap-2 rounded-md border border-ink-200 bg-white px-3 has-checked:border-ink-700 has-focus-visible:outline-2 has-focus-visible:outline-ink-700"
+            >
               <input
                 type="checkbox"
                 name="technologies"
@@ -111,13 +164,36 @@ export function TechnicianForm({ technician, submitLabel, pending, serverError, 
             </label>
           ))}
         </div>
-        {fields.technologies && <p className="mt-1 text-sm font-medium text-red-800">{fields.technologies}</p>}
+        {fields.technologies && (
+          <p className="mt-1 text-sm font-medium text-red-800">{fields.technologies}</p>
+        )}
       </fieldset>
       <fieldset className="grid gap-4 sm:grid-cols-3">
         <legend className="mb-2 text-sm font-medium text-ink-900">Rates</legend>
-        <TextField label={labels.hourlyRateCents} name="hourlyRateCents" inputMode="decimal" defaultValue={centsToInput(technician?.hourlyRateCents)} required error={fields.hourlyRateCents} />
-        <TextField label={labels.travelRateCents} name="travelRateCents" inputMode="decimal" defaultValue={centsToInput(technician?.travelRateCents)} required error={fields.travelRateCents} />
-        <TextField label={labels.mileageRateCents} name="mileageRateCents" inputMode="decimal" defaultValue={centsToInput(technician?.mileageRateCents)} hint="Optional" error={fields.mileageRateCents} />
+        <TextField
+          label={labels.hourlyRateCents}
+          name="hourlyRateCents"
+          inputMode="decimal"
+          defaultValue={centsToInput(technician?.hourlyRateCents)}
+          required
+          error={fields.hourlyRateCents}
+        />
+        <TextField
+          label={labels.travelRateCents}
+          name="travelRateCents"
+          inputMode="decimal"
+          defaultValue={centsToInput(technician?.travelRateCents)}
+          required
+          error={fields.travelRateCents}
+        />
+        <TextField
+          label={labels.mileageRateCents}
+          name="mileageRateCents"
+          inputMode="decimal"
+          defaultValue={centsToInput(technician?.mileageRateCents)}
+          hint="Optional"
+          error={fields.mileageRateCents}
+        />
       </fieldset>
       <Button type="submit" pending={pending} pendingLabel="Saving…">
         {submitLabel}

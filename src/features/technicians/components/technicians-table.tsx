@@ -22,19 +22,32 @@ const columns = column.columns([
       </Link>
     ),
   }),
-  column.accessor((t) => technologyWords(t.technologies), { id: "technologies", header: "Technologies", sortFn: "text" }),
+  column.accessor((t) => technologyWords(t.technologies), {
+    id: "technologies",
+    header: "Technologies",
+    sortFn: "text",
+  }),
   column.accessor("postalCode", { header: "ZIP", sortFn: "text" }),
-  column.accessor("serviceRadiusKm", { header: "Radius", sortFn: "basic", cell: (info) => `${info.getValue()} km` }),
+  column.accessor("serviceRadiusKm", {
+    header: "Radius",
+    sortFn: "basic",
+    cell: (info) => `${info.getValue()} km`,
+  }),
   column.accessor("hourlyRateCents", {
     header: "Rates",
     sortFn: "basic",
     cell: (info) => (
       <span className="whitespace-nowrap">
-        {formatCents(info.row.original.hourlyRateCents)}/h on site · {formatCents(info.row.original.travelRateCents)}/h travel
+        {formatCents(info.row.original.hourlyRateCents)}/h on site ·{" "}
+        {formatCents(info.row.original.travelRateCents)}/h travel
       </span>
     ),
   }),
-  column.accessor((t) => (t.hasAccount ? "Has a sign-in" : "No sign-in"), { id: "account", header: "Account", sortFn: "text" }),
+  column.accessor((t) => (t.hasAccount ? "Has a sign-in" : "No sign-in"), {
+    id: "account",
+    header: "Account",
+    sortFn: "text",
+  }),
   column.accessor((t) => (t.active ? "Active" : "Deactivated"), {
     id: "active",
     header: "Active",

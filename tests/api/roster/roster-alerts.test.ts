@@ -1,0 +1,105 @@
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { QueryTypes } from "sequelize";
+import { agentFor, buildTestApp, sequelize, type TestApp } from "../../support/test-app.ts";
+import { buildCompany, TEST_PASSWORD } from "../../support/build-company.ts";
+import { emitStandingsChanged, type ChangedStanding } from "../../../server/standing/index.ts";
+import { Technician } from "../../../server/technicians/model.ts";
+import type { Standing } from "../../../shared/standing/standing-types.ts";
+
+let t: TestApp;
+beforeAll(() => {
+  t = buildTestApp();
+});
+afterAll(() => t.close());
+
+const DAY = 86_400_000;
+
+async function shopWithRoster() {
+  const { users, company } = await buildCompany("shop", ["buyer"]);
+  const agent = agentFor(t.app);
+  await agent.post("/api/auth/sign-in").send({ email: users.buyer!.email, password: TEST_PASSWORD }).expect(200);
+  const provider = await buildCompany("service", []);
+  const technician = await Technician.create({
+    companyId: provider.company.id, name: `Dagny Varga ${provider.tag}`, email: null, phone: null, technologies: ["grinder"], controlFamilies: [],
+    postalCode: "60601", latitude: 41.8858, longitude: -87.6181, serviceRadiusKm: 100, hourlyRateCents: 13000, travelRateCents: 9000,
+  });
+  await storeBaseline(technician.id, "cleared", null);
+  return { agent, buyer: users.buyer!, shop: company, provider: provider.company, technician };
+}
+
+async function storeBaseline(technicianId: number, standing: Standing, earliestLapse: Date | null, results: unknown[] = []) {
+  await sequelize().query(
+    `INSERT INTO technician_standings (technician_id, requirement_set_id, standing, earliest_lapse, results, computed_at)
+     VALUES ($1, NULL, $2, $3, $4, now())
+     ON CONFLICT (technician_id, (coalesce(requirement_set_id, 0))) DO UPDATE
+       SET standing = EXCLUDED.standing, earliest_lapse = EXCLUDED.earliest_lapse, results = EXCLUDED.results, computed_at = now()`,
+    { bind: [technicianId, standing, earliestLapse, JSON.stringify(results)] },
+  );
+}
+
+async function alertsFor(userId: number, email: string) {
+  const [notifications, mails] = await Promise.all([
+    sequelize().query<{ kind: string; title: string }>("SELECT kind, title FROM notifications WHERE user_id = $1", { bind: [userId], type: QueryTypes.SELECT }),
+    sequelize().query<{ subject: string }>("SELECT subject FROM outbox_messages WHERE to_address = $1", { bind: [email], type: QueryTypes.SELECT }),
+  ]);
+  return { notifications, mails };
+}
+
+const change = (technicianId: number, companyId: number, before: Standing, after: Standing, earliestLapse: string | null = null): ChangedStanding => ({
+  technicianId, companyId, requirementSetId: null, before, after, earliestLapse,
+});
+
+const lapsedGl = {
+  requirement: { id: "baseline_general_liability", label: "General liability in force", typeCodes: ["general_liability"] },
+  status: "unmet",
+  reason: "lapsed",
+  detail: "Commercial general liability lapsed on 2026-12-01.",
+  credentialId: 1,
+  lapsesAt: "2026-12-01T06:01:00.000Z",
+};
+
+describe("roster alerts", () => {
+  it("tells each buyer once, in the app and by e-mail, when a rostered technician stops being cleared", async () => {
+    const { agent, buyer, technician, provider } = await shopWithRoster();
+    await agent.post("/api/roster").send({ technicianId: technician.id }).expect(201);
+    await storeBaseline(technician.id, "not_cleared", null, [lapsedGl]);
+
+    await emitStandingsChanged([change(technician.id, provider.id, "cleared", "not_cleared")]);
+    await emitStandingsChanged([change(technician.id, provider.id, "cleared", "not_cleared")]);
+
+    const { notifications, mails } = await alertsFor(buyer.id, buyer.email);
+    expect(notifications).toEqual([{ kind: "roster_stopped_clearing", title: expect.stringContaining("no longer cleared") }]);
+    expect(mails).toHaveLength(1);
+  });
+
+  it("tells the shop once when a technician rostered through the company comes within 30 days of a lapse", async () => {
+    const { agent, buyer, technician, provider } = await shopWithRoster();
+    await agent.post("/api/roster").send({ serviceCompanyId: provider.id }).expect(201);
+    const lapse = new Date(Date.now() + 12 * DAY);
+    await storeBaseline(technician.id, "lapsing", lapse);
+
+    await emitStandingsChanged([change(technician.id, provider.id, "cleared", "lapsing", lapse.toISOString())]);
+    await emitStandingsChanged([change(technician.id, provider.id, "cleared", "lapsing", lapse.toISOString())]);
+
+    const { notifications, mails } = await alertsFor(buyer.id, buyer.email);
+    expect(notifications).toEqual([{ kind: "roster_lapse_within_30_days", title: expect.stringContaining("lapses in 12 days") }]);
+    expect(mails).toHaveLength(1);
+  });
+
+  it("stays quiet for a lapse more than 30 days away and for technicians on no roster", async () => {
+    const { agent, buyer, technician, provider } = await shopWithRoster();
+    await agent.post("/api/roster").send({ technicianId: technician.id }).expect(201);
+    const stranger = await shopWithRoster();
+    const farLapse = new Date(Date.now() + 45 * DAY);
+    await storeBaseline(technician.id, "lapsing", farLapse);
+    await storeBaseline(stranger.technician.id, "not_cleared", null, [lapsedGl]);
+
+    await emitStandingsChanged([
+      change(technician.id, provider.id, "cleared", "lapsing", farLapse.toISOString()),
+      change(stranger.technician.id, stranger.provider.id, "cleared", "not_cleared"),
+    ]);
+
+    expect((await alertsFor(buyer.id, buyer.email)).notifications).toEqual([]);
+    expect((await alertsFor(stranger.buyer.id, stranger.buyer.email)).notifications).toEqual([]);
+  });
+});

@@ -1,0 +1,154 @@
+import { randomUUID } from "node:crypto";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import request from "supertest";
+import { buildTestApp, type TestApp } from "../../support/test-app.ts";
+import { buildCompany } from "../../support/build-company.ts";
+import { buildClearedProvider, buildCredentialRow, oemFields, trainingFields } from "../../fixtures/build-credential-row.ts";
+import { Technician } from "../../../server/technicians/model.ts";
+import { signIn } from "./sign-in-as.ts";
+
+let t: TestApp;
+beforeAll(() => {
+  t = buildTestApp();
+});
+afterAll(() => t.close());
+
+async function buyer() {
+  const { company, users } = await buildCompany("shop", ["buyer", "provider_admin"]);
+  return { company, agent: await signIn(t.app, users.buyer!.email), users };
+}
+
+/** A set only this test's technicians can meet: training from a builder named for this test alone. */
+function spindleSet(builder: string) {
+  return {
+    name: "On-site spindle work",
+    requirements: [
+      { label: "General liability 1M / 2M", typeCodes: ["general_liability"], minLimits: { eachOccurrence: 1_000_000, generalAggregate: 2_000_000 } },
+      { label: "Arc-flash training", typeCodes: ["arc_flash"] },
+      { label: `${builder} training, level 2`, typeCodes: ["oem_training"], builder, controlFamily: "Tessaline 9", minLevel: 2 },
+    ],
+  };
+}
+
+async function qualifiedTechnician(builder: string) {
+  const p = await buildClearedProvider({ glExpires: "2099-07-15", wcExpires: "2099-07-15" });
+  const base = { companyId: p.company.id, technicianId: p.technician.id, submittedBy: p.admin.id };
+  await buildCredentialRow({ ...base, typeCode: "arc_flash", fields: trainingFields({ issueDate: new Date().toISOString().slice(0, 10) }) });
+  await buildCredentialRow({ ...base, typeCode: "oem_training", fields: oemFields({ builder, expiryDate: "2099-01-01" }) });
+  return p;
+}
+
+describe("requirement sets", () => {
+  it("lets a buyer define a set and stores every technician's standing against it", async () => {
+    const builder = `Orrin Works ${randomUUID().slice(0, 6)}`;
+    const meets = await qualifiedTechnician(builder);
+    const { agent, company } = await buyer();
+
+    const created = await agent.post("/api/requirement-sets").send(spindleSet(builder));
+    const listed = await agent.get("/api/requirement-sets");
+    const preview = await agent.get(`/api/requirement-sets/${created.body.id}/preview`);
+    const technicians = await Technician.count({ where: { active: true } });
+
+    expect(created.status).toBe(201);
+    expect(created.body).toMatchObject({ companyId: company.id, name: "On-site spindle work", active: true, siteId: null });
+    expect(listed.body.map((s: { id: number }) => s.id)).toEqual([created.body.id]);
+    expect(preview.body).toEqual({ technicians, cleared: 1, lapsing: 0, meeting: 1, notCleared: technicians - 1 });
+    const standing = await (await signIn(t.app, meets.admin.email)).get(`/api/technicians/${meets.technician.id}/standing`);
+    expect(standing.body.requirementSets).toEqual([
+      expect.objectContaining({ requirementSetId: created.body.id, name: "On-site spindle work", standing: "cleared" }),
+    ]);
+  });
+
+  it("previews an unsaved set: how many active technicians meet it today", async () => {
+    const builder = `Orrin Works ${randomUUID().slice(0, 6)}`;
+    await qualifiedTechnician(builder);
+    await qualifiedTechnician(builder);
+    const { agent } = await buyer();
+
+    const res = await agent.post("/api/requirement-sets/preview").send(spindleSet(builder));
+
+    expect(res.status).toBe(200);
+    expect(res.body.meeting).toBe(2);
+    expect(res.body.cleared + res.body.lapsing).toBe(2);
+    expect(res.body.technicians).toBe(res.body.meeting + res.body.notCleared);
+  });
+
+  it("revises a set and recomputes the standings against it", async () => {
+    const builder = `Orrin Works ${randomUUID().slice(0, 6)}`;
+    await qualifiedTechnician(builder);
+    const { agent } = await buyer();
+    const created = await agent.post("/api/requirement-sets").send(spindleSet(builder));
+    const stricter = spindleSet(builder);
+    stricter.requirements[2] = { ...stricter.requirements[2]!, minLevel: 3 };
+
+    const res = await agent.put(`/api/requirement-sets/${created.body.id}`).send(stricter);
+    const preview = await agent.get(`/api/requirement-sets/${created.body.id}/preview`);
+
+    expect(res.status).toBe(200);
+    expect(preview.body.meeting).toBe(0);
+  });
+
+  it("archives a set rather than deleting it, and drops it from the list", async () => {
+    const { agent } = await buyer();
+    const created = await agent.post("/api/requirement-sets").send(spindleSet("Orrin Machine Works"));
+
+    const archived = await agent.delete(`/api/requirement-sets/${created.body.id}`);
+    const listed = await agent.get("/api/requirement-sets");
+    const all = await agent.get("/api/requirement-sets?includeArchived=true");
+
+    expect(archived.status).toBe(200);
+    expect(archived.body.active).toBe(false);
+    expect(listed.body).toEqual([]);
+    expect(all.body.map((s: { id: number }) => s.id)).toEqual([created.body.id]);
+  });
+
+  it("answers 422 naming the field when a set has no requirements", async () => {
+    const { agent } = await buyer();
+
+    const res = await agent.post("/api/requirement-sets").send({ name: "Empty", requirements: [] });
+
+    expect(res.status).toBe(422);
+    expect(res.body.error.fields).toEqual([{ path: "body.requirements", message: "Add at least one requirement" }]);
+  });
+
+  it("answers 422 naming the exact type code the catalogue does not know", async () => {
+    const { agent } = await buyer();
+
+    const res = await agent.post("/api/requirement-sets").send({ name: "Odd", requirements: [{ label: "x", typeCodes: ["arc_flash", "moon_walking"] }] });
+
+    expect(res.status).toBe(422);
+    expect(res.body.error.fields).toEqual([{ path: "body.requirements.0.typeCodes.1", message: "Unknown credential type moon_walking" }]);
+  });
+
+  it("answers 401 when signed out", async () => {
+    const res = await request(t.app).get("/api/requirement-sets");
+
+    expect(res.status).toBe(401);
+  });
+
+  it("answers 403 to a provider admin", async () => {
+    const { users } = await buyer();
+    const provider = await signIn(t.app, users.provider_admin!.email);
+
+    const res = await provider.post("/api/requirement-sets").send(spindleSet("Orrin Machine Works"));
+
+    expect(res.status).toBe(403);
+  });
+
+  it("answers 404 for another shop's set, on read, edit, archive and preview", async () => {
+    const owner = await buyer();
+    const other = await buyer();
+    const created = await owner.agent.post("/api/requirement-sets").send(spindleSet("Orrin Machine Works"));
+    const path = `/api/requirement-sets/${created.body.id}`;
+
+    const answers = await Promise.all([
+      other.agent.get(path),
+      other.agent.put(path).send(spindleSet("Orrin Machine Works")),
+      other.agent.delete(path),
+      other.agent.get(`${path}/preview`),
+    ]);
+
+    expect(answers.map((r) => r.status)).toEqual([404, 404, 404, 404]);
+    expect((await owner.agent.get(path)).body.active).toBe(true);
+  });
+});
