@@ -26,6 +26,8 @@ export interface LapseJobReport {
   statements: number;
   startedAt: Date;
   finishedAt: Date;
+  /** Milliseconds per step, for the run record and the closing note. */
+  timings: Record<string, number>;
 }
 
 export type LapseJobResult = LapseJobReport | { skipped: true };
@@ -102,13 +104,22 @@ export async function runLapseJob({ asOf }: { asOf: Date }, deps: LapseJobDeps =
     sequelize,
     JOB_LOCK_KEYS.lapse,
     async (transaction) => {
+      const timings: Record<string, number> = {};
+      const timed = async <T>(step: string, work: () => Promise<T>): Promise<T> => {
+        const start = performance.now();
+        const value = await work();
+        timings[step] = Math.round(performance.now() - start);
+        return value;
+      };
       const jobRunId = await startJobRun(transaction, "lapse", asOf, startedAt);
-      const lapsed = await lapseCredentials(transaction, asOf, jobRunId);
-      const warned = await createWarningNotices(transaction, { asOf, thresholds: warningDays, jobRunId });
-      const recipients = await findNoticeRecipients(transaction, jobRunId);
-      const queued = await queueNoticeMessages(transaction, recipients, { asOf, publicUrl: base });
-      const unstored = await techniciansWithoutStanding(transaction);
-      const changedStandings = await refreshStandings(holdersOf([...lapsed, ...warned], unstored), transaction, asOf);
+      const lapsed = await timed("lapse", () => lapseCredentials(transaction, asOf, jobRunId));
+      const warned = await timed("warn", () => createWarningNotices(transaction, { asOf, thresholds: warningDays, jobRunId }));
+      const recipients = await timed("recipients", () => findNoticeRecipients(transaction, jobRunId));
+      const queued = await timed("queue", () => queueNoticeMessages(transaction, recipients, { asOf, publicUrl: base }));
+      const unstored = await timed("unstored", () => techniciansWithoutStanding(transaction));
+      const changedStandings = await timed("standings", () =>
+        refreshStandings(holdersOf([...lapsed, ...warned], unstored), transaction, asOf),
+      );
       const noticesCreated = (lapsed[0]?.noticed ?? 0) + sum(warned);
       const counts = {
         lapsed: sum(lapsed),
@@ -116,9 +127,10 @@ export async function runLapseJob({ asOf }: { asOf: Date }, deps: LapseJobDeps =
         emailsQueued: queued.emails,
         changedStandings: changedStandings.length,
         statements: counter.count + 1 + TRANSACTION_STATEMENTS,
+        timings,
       };
       const finishedAt = await finishJobRun(transaction, jobRunId, counts);
-      return { jobRunId, lapsed: counts.lapsed, noticesCreated, emailsQueued: queued.emails, changedStandings, finishedAt };
+      return { jobRunId, lapsed: counts.lapsed, noticesCreated, emailsQueued: queued.emails, changedStandings, finishedAt, timings };
     },
     (transaction) => {
       counter = countStatements(transaction);

@@ -16,7 +16,7 @@ export interface EmbeddedPostgres {
 
 const isRoot = () => process.getuid?.() === 0;
 
-function findBinDir(): string | undefined {
+export function findBinDir(): string | undefined {
   const base = "/usr/lib/postgresql";
   if (!existsSync(base)) return undefined;
   const versions = readdirSync(base)

@@ -9,14 +9,21 @@ export interface DirectoryCursor {
   id: number;
 }
 
-const cursorSchema = z.object({ s: z.enum(directorySorts), k: z.number().finite(), i: z.number().int().positive() });
+const cursorSchema = z.object({
+  s: z.enum(directorySorts),
+  k: z.number().finite(),
+  i: z.number().int().positive(),
+});
 
 export function encodeCursor(cursor: DirectoryCursor): string {
   return Buffer.from(JSON.stringify({ s: cursor.sort, k: cursor.key, i: cursor.id })).toString("base64url");
 }
 
 export function decodeCursor(text: string, sort: DirectorySort): DirectoryCursor {
-  const bad = () => new AppError("bad_request", "The page cursor is not valid", [{ path: "query.cursor", message: "start again from the first page" }]);
+  const bad = () =>
+    new AppError("bad_request", "The page cursor is not valid", [
+      { path: "query.cursor", message: "start again from the first page" },
+    ]);
   let parsed: unknown;
   try {
     parsed = JSON.parse(Buffer.from(text, "base64url").toString("utf8"));

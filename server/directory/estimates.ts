@@ -1,5 +1,10 @@
 import { estimateCallOut } from "../../shared/directory/call-out-estimate.ts";
-import { DEFAULT_AVERAGE_SPEED_MPH, DEFAULT_ROAD_FACTOR, estimateDriveHours, estimateRoadMiles } from "../../shared/directory/drive-time.ts";
+import {
+  DEFAULT_AVERAGE_SPEED_MPH,
+  DEFAULT_ROAD_FACTOR,
+  estimateDriveHours,
+  estimateRoadMiles,
+} from "../../shared/directory/drive-time.ts";
 import type { DirectoryAssumptionsDto } from "../../shared/directory/schemas.ts";
 import { EARTH_MEAN_RADIUS_KM, kmToMiles } from "../../shared/geo/great-circle-distance.ts";
 import { DEFAULT_PRIOR, rankingScore } from "../../shared/ranking/rating-score.ts";
@@ -11,7 +16,12 @@ export const SCORE_SOURCE =
 const round = (value: number, digits: number) => Number(value.toFixed(digits));
 
 export function assumptions(onSiteHours: number): DirectoryAssumptionsDto {
-  return { earthRadiusKm: EARTH_MEAN_RADIUS_KM, roadFactor: DEFAULT_ROAD_FACTOR, averageSpeedMph: DEFAULT_AVERAGE_SPEED_MPH, onSiteHours };
+  return {
+    earthRadiusKm: EARTH_MEAN_RADIUS_KM,
+    roadFactor: DEFAULT_ROAD_FACTOR,
+    averageSpeedMph: DEFAULT_AVERAGE_SPEED_MPH,
+    onSiteHours,
+  };
 }
 
 /** Distance, drive time and call-out estimate for one straight-line distance, all from the shared code. */

@@ -3,7 +3,11 @@ import { credentialTypeByCode } from "../../shared/credentials/catalogue.ts";
 import { fieldSetSchemas } from "../../shared/credentials/credential-fields.ts";
 import { computeTechnicianStanding } from "../../shared/standing/compute-standing.ts";
 import type { Requirement } from "../../shared/standing/requirements.ts";
-import type { CredentialState, StandingCredential, StandingResult } from "../../shared/standing/standing-types.ts";
+import type {
+  CredentialState,
+  StandingCredential,
+  StandingResult,
+} from "../../shared/standing/standing-types.ts";
 import { db } from "../db/sequelize.ts";
 
 interface CredentialRow {
@@ -20,7 +24,13 @@ function toStandingCredential(row: CredentialRow): StandingCredential | null {
   const parsed = fieldSetSchemas[type.fieldSet].safeParse(row.fields);
   // A row whose fields no longer parse cannot meet anything; the engine reports the requirement as missing.
   if (!parsed.success) return null;
-  return { id: row.id, typeCode: row.type_code, state: row.state, fields: parsed.data, holder: row.technician_id === null ? "company" : "technician" };
+  return {
+    id: row.id,
+    typeCode: row.type_code,
+    state: row.state,
+    fields: parsed.data,
+    holder: row.technician_id === null ? "company" : "technician",
+  };
 }
 
 /**

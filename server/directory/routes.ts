@@ -14,5 +14,6 @@ directoryRoutes.get("", { allow: canSearchDirectory, query: directoryQuerySchema
 directoryRoutes.get(
   "/technicians/:technicianId",
   { allow: canViewListedTechnician, params: technicianParamsSchema, query: technicianProfileQuerySchema },
-  (req, _res, { params, query }) => findDirectoryTechnician(req.user!, params.technicianId, query.onSiteHours),
+  (req, _res, { params, query }) =>
+    findDirectoryTechnician(req.user!, params.technicianId, query.onSiteHours),
 );

@@ -6,7 +6,9 @@ import { containsPattern, type SqlParams } from "./sql-params.ts";
 export interface DirectoryCriteria {
   asOf: Date;
   credentialTypes?: string[] | undefined;
-  oem?: { builder?: string | undefined; controlFamily?: string | undefined; minLevel?: number | undefined } | undefined;
+  oem?:
+    | { builder?: string | undefined; controlFamily?: string | undefined; minLevel?: number | undefined }
+    | undefined;
   technology?: string | undefined;
   generalLiability?: { eachOccurrence?: number | undefined; aggregate?: number | undefined } | undefined;
   autoCombinedSingleLimit?: number | undefined;
@@ -59,16 +61,23 @@ const DEGREES = 180 / Math.PI;
  * Within a Distance of a Latitude/Longitude Using Bounding Coordinates"): Δlat = r, Δlon = asin(sin r / cos lat).
  * The longitude bound is dropped near a pole or across the antimeridian, where the box would wrap.
  */
-function boundingBoxSql(p: SqlParams, site: { latitude: number; longitude: number; radiusKm: number }): string {
+function boundingBoxSql(
+  p: SqlParams,
+  site: { latitude: number; longitude: number; radiusKm: number },
+): string {
   const angular = site.radiusKm / EARTH_MEAN_RADIUS_KM;
   const margin = 1e-6; // degrees: the exact haversine test follows, so a hair of slack costs nothing
   const dLat = angular * DEGREES + margin;
-  const clauses = [`t.latitude BETWEEN ${p.add(site.latitude - dLat)}::float8 AND ${p.add(site.latitude + dLat)}::float8`];
+  const clauses = [
+    `t.latitude BETWEEN ${p.add(site.latitude - dLat)}::float8 AND ${p.add(site.latitude + dLat)}::float8`,
+  ];
   const latRad = site.latitude / DEGREES;
   if (Math.abs(site.latitude) + dLat < 89 && angular < Math.PI / 2) {
     const dLon = Math.asin(Math.min(1, Math.sin(angular) / Math.cos(latRad))) * DEGREES + margin;
     if (site.longitude - dLon >= -180 && site.longitude + dLon <= 180) {
-      clauses.push(`t.longitude BETWEEN ${p.add(site.longitude - dLon)}::float8 AND ${p.add(site.longitude + dLon)}::float8`);
+      clauses.push(
+        `t.longitude BETWEEN ${p.add(site.longitude - dLon)}::float8 AND ${p.add(site.longitude + dLon)}::float8`,
+      );
     }
   }
   return clauses.join(" AND ");
@@ -79,26 +88,36 @@ export function buildFilters(p: SqlParams, criteria: DirectoryCriteria): FilterC
   const filters: FilterClause[] = [];
   const { asOf } = criteria;
   if (criteria.credentialTypes?.length) {
-    filters.push({ name: "credentialTypes", sql: criteria.credentialTypes.map((code) => heldInForce(p, code, asOf)).join(" AND ") });
+    filters.push({
+      name: "credentialTypes",
+      sql: criteria.credentialTypes.map((code) => heldInForce(p, code, asOf)).join(" AND "),
+    });
   }
   const oem = criteria.oem;
   if (oem && (oem.builder !== undefined || oem.controlFamily !== undefined || oem.minLevel !== undefined)) {
     // One training certificate must show the builder, the control family and the level together (names compared
     // without regard to case, as the standing engine does).
     let extra = "";
-    if (oem.builder !== undefined) extra += ` AND lower(trim(cr.fields->>'builder')) = lower(${p.add(oem.builder)})`;
-    if (oem.controlFamily !== undefined) extra += ` AND lower(trim(cr.fields->>'controlFamily')) = lower(${p.add(oem.controlFamily)})`;
+    if (oem.builder !== undefined)
+      extra += ` AND lower(trim(cr.fields->>'builder')) = lower(${p.add(oem.builder)})`;
+    if (oem.controlFamily !== undefined)
+      extra += ` AND lower(trim(cr.fields->>'controlFamily')) = lower(${p.add(oem.controlFamily)})`;
     if (oem.minLevel !== undefined) extra += ` AND (cr.fields->>'level')::int >= ${p.add(oem.minLevel)}`;
     filters.push({ name: "oemTraining", sql: heldInForce(p, "oem_training", asOf, extra) });
   }
   if (criteria.technology !== undefined) {
-    filters.push({ name: "technology", sql: `t.technologies @> ARRAY[${p.add(criteria.technology)}::varchar]` });
+    filters.push({
+      name: "technology",
+      sql: `t.technologies @> ARRAY[${p.add(criteria.technology)}::varchar]`,
+    });
   }
   const gl = criteria.generalLiability;
   if (gl && (gl.eachOccurrence !== undefined || gl.aggregate !== undefined)) {
     let extra = "";
-    if (gl.eachOccurrence !== undefined) extra += ` AND (cr.fields->'limits'->>'eachOccurrence')::bigint >= ${p.add(gl.eachOccurrence)}`;
-    if (gl.aggregate !== undefined) extra += ` AND (cr.fields->'limits'->>'generalAggregate')::bigint >= ${p.add(gl.aggregate)}`;
+    if (gl.eachOccurrence !== undefined)
+      extra += ` AND (cr.fields->'limits'->>'eachOccurrence')::bigint >= ${p.add(gl.eachOccurrence)}`;
+    if (gl.aggregate !== undefined)
+      extra += ` AND (cr.fields->'limits'->>'generalAggregate')::bigint >= ${p.add(gl.aggregate)}`;
     filters.push({ name: "generalLiability", sql: heldInForce(p, "general_liability", asOf, extra) });
   }
   if (criteria.autoCombinedSingleLimit !== undefined) {
@@ -121,7 +140,10 @@ export function buildFilters(p: SqlParams, criteria: DirectoryCriteria): FilterC
     });
   }
   if (criteria.minRating !== undefined) {
-    filters.push({ name: "minRating", sql: `(r.review_count > 0 AND r.star_sum::float8 / r.review_count >= ${p.add(criteria.minRating)}::float8)` });
+    filters.push({
+      name: "minRating",
+      sql: `(r.review_count > 0 AND r.star_sum::float8 / r.review_count >= ${p.add(criteria.minRating)}::float8)`,
+    });
   }
   if (criteria.q !== undefined) {
     const pattern = p.add(containsPattern(criteria.q));

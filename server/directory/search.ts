@@ -39,10 +39,13 @@ interface DirectoryRow {
 const NEVER_LAPSES_EPOCH = 1e12;
 
 async function ownRequirementSet(companyId: number, id: number): Promise<void> {
-  const rows = await db().query<{ id: number }>("SELECT id FROM requirement_sets WHERE id = $1 AND company_id = $2", {
-    bind: [id, companyId],
-    type: QueryTypes.SELECT,
-  });
+  const rows = await db().query<{ id: number }>(
+    "SELECT id FROM requirement_sets WHERE id = $1 AND company_id = $2",
+    {
+      bind: [id, companyId],
+      type: QueryTypes.SELECT,
+    },
+  );
   if (rows.length === 0) throw new AppError("not_found", "That requirement set was not found");
 }
 
@@ -71,8 +74,13 @@ async function resolveCriteria(buyer: Express.User, query: DirectoryQuery, asOf:
   if (query.requirementSetId !== undefined) await ownRequirementSet(buyer.companyId, query.requirementSetId);
   if (query.siteId !== undefined) {
     const site = await Site.findByPk(query.siteId, { attributes: ["companyId", "latitude", "longitude"] });
-    if (!site || site.companyId !== buyer.companyId) throw new AppError("not_found", "That site was not found");
-    criteria.site = { latitude: site.latitude, longitude: site.longitude, radiusKm: query.radiusKm ?? DEFAULT_RADIUS_KM };
+    if (!site || site.companyId !== buyer.companyId)
+      throw new AppError("not_found", "That site was not found");
+    criteria.site = {
+      latitude: site.latitude,
+      longitude: site.longitude,
+      radiusKm: query.radiusKm ?? DEFAULT_RADIUS_KM,
+    };
   }
   return { criteria, fromEquipment };
 }
@@ -95,7 +103,11 @@ function sortKeySql(sort: DirectorySort, distance: string | null, p: SqlParams):
 }
 
 function toRowDto(row: DirectoryRow, onSiteHours: number): DirectoryRowDto {
-  const rates = { hourlyRateCents: row.hourly_rate_cents, travelRateCents: row.travel_rate_cents, mileageRateCents: row.mileage_rate_cents };
+  const rates = {
+    hourlyRateCents: row.hourly_rate_cents,
+    travelRateCents: row.travel_rate_cents,
+    mileageRateCents: row.mileage_rate_cents,
+  };
   const trip = row.distance_km === null ? null : estimateTrip(Number(row.distance_km), rates, onSiteHours);
   return {
     technicianId: row.id,
@@ -129,10 +141,15 @@ async function findEmptyReason(criteria: DirectoryCriteria): Promise<DirectoryPa
     const others = filters.filter((_g, j) => j !== i).map((g) => `(${g.sql})`);
     return `count(*) FILTER (WHERE ${others.length ? others.join(" AND ") : "true"})::int AS f${i}`;
   });
-  const [counts] = await db().query<Record<string, number>>(`SELECT ${columns.join(", ")} ${DIRECTORY_FROM}`, {
-    bind: p.values,
-    type: QueryTypes.SELECT,
-  });
+  // Every filter once more in a column of its own, so each bound parameter is referenced even with a single filter.
+  columns.push(`count(*) FILTER (WHERE ${filters.map((f) => `(${f.sql})`).join(" AND ")})::int AS matching`);
+  const [counts] = await db().query<Record<string, number>>(
+    `SELECT ${columns.join(", ")} ${DIRECTORY_FROM}`,
+    {
+      bind: p.values,
+      type: QueryTypes.SELECT,
+    },
+  );
   let best: { filter: DirectoryFilterName; removed: number } | null = null;
   filters.forEach((f, i) => {
     const removed = counts?.[`f${i}`] ?? 0;
@@ -142,11 +159,17 @@ async function findEmptyReason(criteria: DirectoryCriteria): Promise<DirectoryPa
 }
 
 /** The directory: one keyset-paged SQL query over listable technicians, estimates computed by the shared code. */
-export async function searchDirectory(buyer: Express.User, query: DirectoryQuery, asOf = new Date()): Promise<DirectoryPageDto> {
+export async function searchDirectory(
+  buyer: Express.User,
+  query: DirectoryQuery,
+  asOf = new Date(),
+): Promise<DirectoryPageDto> {
   const { criteria, fromEquipment } = await resolveCriteria(buyer, query, asOf);
   const sort: DirectorySort = query.sort ?? (criteria.site ? "distance" : "score");
   if (sort === "distance" && !criteria.site) {
-    throw new AppError("bad_request", "Sorting by distance needs a site", [{ path: "query.sort", message: "choose a site first" }]);
+    throw new AppError("bad_request", "Sorting by distance needs a site", [
+      { path: "query.sort", message: "choose a site first" },
+    ]);
   }
   const cursor = query.cursor ? decodeCursor(query.cursor, sort) : null;
 
@@ -155,7 +178,9 @@ export async function searchDirectory(buyer: Express.User, query: DirectoryQuery
   const sortKey = sortKeySql(sort, distance, p);
   const filters = buildFilters(p, criteria);
   const where = filters.map((f) => ` AND (${f.sql})`).join("");
-  const after = cursor ? `WHERE (x.sort_key, x.id) > (${p.add(cursor.key)}::float8, ${p.add(cursor.id)}::int)` : "";
+  const after = cursor
+    ? `WHERE (x.sort_key, x.id) > (${p.add(cursor.key)}::float8, ${p.add(cursor.id)}::int)`
+    : "";
   const limit = p.add(query.limit + 1);
   const rows = await db().query<DirectoryRow>(
     `SELECT x.* FROM (
@@ -172,7 +197,10 @@ export async function searchDirectory(buyer: Express.User, query: DirectoryQuery
 
   const page = rows.slice(0, query.limit);
   const last = page[page.length - 1];
-  const nextCursor = rows.length > query.limit && last ? encodeCursor({ sort, key: Number(last.sort_key), id: last.id }) : null;
+  const nextCursor =
+    rows.length > query.limit && last
+      ? encodeCursor({ sort, key: Number(last.sort_key), id: last.id })
+      : null;
   const emptyReason = page.length === 0 && !cursor ? await findEmptyReason(criteria) : null;
   return {
     rows: page.map((r) => toRowDto(r, query.onSiteHours)),

@@ -15,13 +15,30 @@ import { Site } from "../sites/index.ts";
 import { assumptions, estimateTrip, ratingSummary, SCORE_SOURCE } from "./estimates.ts";
 import { computeStandingNow } from "./live-standing.ts";
 
-const select = <T extends object>(sql: string, bind: unknown[]) => db().query<T>(sql, { bind, type: QueryTypes.SELECT });
+const select = <T extends object>(sql: string, bind: unknown[]) =>
+  db().query<T>(sql, { bind, type: QueryTypes.SELECT });
 
 // What a buyer may read of a credential's fields: dates, limits, flags and training details, never holder contact data.
 const FIELDS_FOR_BUYERS = new Set([
-  "insurerName", "naic", "policyNumber", "effectiveDate", "expirationDate", "limits", "additionalInsured",
-  "waiverOfSubrogation", "statutory", "course", "issueDate", "expiryDate", "builder", "controlFamily", "level", "trainer",
-  "licenseNumber", "issuingAuthority", "state",
+  "insurerName",
+  "naic",
+  "policyNumber",
+  "effectiveDate",
+  "expirationDate",
+  "limits",
+  "additionalInsured",
+  "waiverOfSubrogation",
+  "statutory",
+  "course",
+  "issueDate",
+  "expiryDate",
+  "builder",
+  "controlFamily",
+  "level",
+  "trainer",
+  "licenseNumber",
+  "issuingAuthority",
+  "state",
 ]);
 
 interface TechnicianRow {
@@ -56,8 +73,15 @@ export async function isListedTechnician(technicianId: number): Promise<boolean>
 
 async function loadCredentials(t: TechnicianRow, asOf: Date): Promise<ProfileCredentialDto[]> {
   const rows = await select<{
-    id: number; type_code: string; type_name: string; category: string; technician_id: number | null;
-    fields: Record<string, unknown>; decided_at: Date | null; lapses_at: Date | null; document_id: number;
+    id: number;
+    type_code: string;
+    type_name: string;
+    category: string;
+    technician_id: number | null;
+    fields: Record<string, unknown>;
+    decided_at: Date | null;
+    lapses_at: Date | null;
+    document_id: number;
   }>(
     `SELECT cr.id, cr.type_code, ct.name AS type_name, ct.category, cr.technician_id, cr.fields, cr.decided_at, cr.lapses_at, cr.document_id
        FROM credentials cr JOIN credential_types ct ON ct.code = cr.type_code
@@ -82,8 +106,14 @@ async function loadCredentials(t: TechnicianRow, asOf: Date): Promise<ProfileCre
 
 async function loadStandings(t: TechnicianRow, shopId: number, asOf: Date): Promise<ProfileStandingDto[]> {
   const rows = await select<{
-    id: number; name: string; site_id: number | null; requirements: Requirement[];
-    standing: Standing | null; earliest_lapse: Date | null; results: RequirementResult[] | null; computed_at: Date | null;
+    id: number;
+    name: string;
+    site_id: number | null;
+    requirements: Requirement[];
+    standing: Standing | null;
+    earliest_lapse: Date | null;
+    results: RequirementResult[] | null;
+    computed_at: Date | null;
   }>(
     `SELECT rs.id, rs.name, rs.site_id, rs.requirements, s.standing, s.earliest_lapse, s.results, s.computed_at
        FROM requirement_sets rs
@@ -93,7 +123,11 @@ async function loadStandings(t: TechnicianRow, shopId: number, asOf: Date): Prom
     [shopId, t.id],
   );
   const missing = rows.filter((r) => r.standing === null);
-  const live = await computeStandingNow({ id: t.id, companyId: t.company_id, timeZone: t.time_zone }, missing, asOf);
+  const live = await computeStandingNow(
+    { id: t.id, companyId: t.company_id, timeZone: t.time_zone },
+    missing,
+    asOf,
+  );
   return rows.map((r) => {
     const computed = live.get(r.id);
     const results = computed?.results ?? r.results ?? [];
@@ -102,10 +136,16 @@ async function loadStandings(t: TechnicianRow, shopId: number, asOf: Date): Prom
       name: r.name,
       siteId: r.site_id,
       standing: computed?.standing ?? r.standing ?? "not_cleared",
-      earliestLapse: computed ? computed.earliestLapse : r.earliest_lapse ? new Date(r.earliest_lapse).toISOString() : null,
+      earliestLapse: computed
+        ? computed.earliestLapse
+        : r.earliest_lapse
+          ? new Date(r.earliest_lapse).toISOString()
+          : null,
       computedAt: computed ? asOf.toISOString() : new Date(r.computed_at ?? asOf).toISOString(),
       source: computed ? "computed" : "stored",
-      unmet: results.filter((x) => x.status === "unmet").map((x) => ({ label: x.requirement.label, reason: x.reason, detail: x.detail })),
+      unmet: results
+        .filter((x) => x.status === "unmet")
+        .map((x) => ({ label: x.requirement.label, reason: x.reason, detail: x.detail })),
       results,
     };
   });
@@ -115,7 +155,10 @@ const textOf = (v: unknown): string | null => (typeof v === "string" && v.length
 
 /** Reviews from the work-order module's job_reviews table when it exists; read as JSON so a column added later is harmless. */
 async function loadReviews(technicianId: number): Promise<ProfileReviewDto[]> {
-  const [exists] = await select<{ present: boolean }>("SELECT to_regclass('public.job_reviews') IS NOT NULL AS present", []);
+  const [exists] = await select<{ present: boolean }>(
+    "SELECT to_regclass('public.job_reviews') IS NOT NULL AS present",
+    [],
+  );
   if (!exists?.present) return [];
   const rows = await select<{ review: Record<string, unknown> }>(
     "SELECT to_jsonb(jr) AS review FROM job_reviews jr WHERE jr.technician_id = $1 ORDER BY jr.id DESC LIMIT 100",
@@ -133,8 +176,18 @@ async function loadReviews(technicianId: number): Promise<ProfileReviewDto[]> {
 async function loadEstimates(t: TechnicianRow, shopId: number, onSiteHours: number) {
   if (t.latitude === null || t.longitude === null) return [];
   const base = { lat: t.latitude, lon: t.longitude };
-  const sites = await Site.findAll({ where: { companyId: shopId, active: true }, order: [["name", "ASC"], ["id", "ASC"]] });
-  const rates = { hourlyRateCents: t.hourly_rate_cents, travelRateCents: t.travel_rate_cents, mileageRateCents: t.mileage_rate_cents };
+  const sites = await Site.findAll({
+    where: { companyId: shopId, active: true },
+    order: [
+      ["name", "ASC"],
+      ["id", "ASC"],
+    ],
+  });
+  const rates = {
+    hourlyRateCents: t.hourly_rate_cents,
+    travelRateCents: t.travel_rate_cents,
+    mileageRateCents: t.mileage_rate_cents,
+  };
   return sites.map((site) => {
     const km = greatCircleDistanceKm({ lat: site.latitude, lon: site.longitude }, base);
     const trip = estimateTrip(km, rates, onSiteHours);
@@ -187,7 +240,10 @@ export async function findDirectoryTechnician(
     hourlyRateCents: t.hourly_rate_cents,
     travelRateCents: t.travel_rate_cents,
     mileageRateCents: t.mileage_rate_cents,
-    baseline: { standing: t.standing, earliestLapse: t.earliest_lapse ? new Date(t.earliest_lapse).toISOString() : null },
+    baseline: {
+      standing: t.standing,
+      earliestLapse: t.earliest_lapse ? new Date(t.earliest_lapse).toISOString() : null,
+    },
     credentials,
     requirementSets,
     rating: ratingSummary(t.review_count, t.star_sum),

@@ -59,19 +59,27 @@ interface RecipientRow {
 export async function findNoticeRecipients(transaction: Transaction, jobRunId: number): Promise<NoticeRecipient[]> {
   const rows = await selectRows<RecipientRow>(
     transaction,
-    `SELECT n.id AS notice_id, n.threshold_days, n.lapses_at, c.id AS credential_id, c.type_code, ct.name AS type_name,
-            co.name AS company_name, co.time_zone, c.technician_id, t.name AS technician_name,
+    `WITH run_notices AS (
+       SELECT n.id AS notice_id, n.threshold_days, n.lapses_at, c.id AS credential_id, c.type_code, c.company_id, c.technician_id
+         FROM notices n JOIN credentials c ON c.id = n.credential_id
+        WHERE n.job_run_id = $1
+     ), addressed AS (
+       -- Two equi-joins rather than one OR-join, so the planner can hash-join both against users.
+       SELECT r.*, u.id AS user_id FROM run_notices r
+         JOIN users u ON u.company_id = r.company_id AND u.role = 'provider_admin' AND u.active
+       UNION ALL
+       SELECT r.*, u.id AS user_id FROM run_notices r
+         JOIN users u ON u.technician_id = r.technician_id AND u.role = 'technician' AND u.active
+     )
+     SELECT a.notice_id, a.threshold_days, a.lapses_at, a.credential_id, a.type_code, ct.name AS type_name,
+            co.name AS company_name, co.time_zone, a.technician_id, t.name AS technician_name,
             u.id AS user_id, u.email, u.name AS user_name, u.role
-       FROM notices n
-       JOIN credentials c ON c.id = n.credential_id
-       JOIN credential_types ct ON ct.code = c.type_code
-       JOIN companies co ON co.id = c.company_id
-       LEFT JOIN technicians t ON t.id = c.technician_id
-       JOIN users u ON u.active AND (
-             (u.role = 'provider_admin' AND u.company_id = c.company_id)
-          OR (u.role = 'technician' AND c.technician_id IS NOT NULL AND u.technician_id = c.technician_id))
-      WHERE n.job_run_id = $1
-      ORDER BY n.id, u.id`,
+       FROM addressed a
+       JOIN users u ON u.id = a.user_id
+       JOIN credential_types ct ON ct.code = a.type_code
+       JOIN companies co ON co.id = a.company_id
+       LEFT JOIN technicians t ON t.id = a.technician_id
+      ORDER BY a.notice_id, u.id`,
     [jobRunId],
   );
   return rows.map((r) => ({

@@ -73,7 +73,11 @@ async function deliverAlert(alert: Alert): Promise<boolean> {
     const inserted = await db().query<{ id: number }>(
       `INSERT INTO roster_alerts (shop_company_id, technician_id, event, event_key) VALUES ($1, $2, $3, $4)
        ON CONFLICT DO NOTHING RETURNING id`,
-      { bind: [alert.shopId, alert.technicianId, alert.event, alert.key], type: QueryTypes.SELECT, transaction },
+      {
+        bind: [alert.shopId, alert.technicianId, alert.event, alert.key],
+        type: QueryTypes.SELECT,
+        transaction,
+      },
     );
     if (inserted.length === 0) return false;
     const buyers = await db().query<{ id: number; email: string }>(
@@ -81,11 +85,21 @@ async function deliverAlert(alert: Alert): Promise<boolean> {
       { bind: [alert.shopId], type: QueryTypes.SELECT, transaction },
     );
     for (const buyer of buyers) {
-      await db().query("INSERT INTO notifications (user_id, kind, title, body, link) VALUES ($1, $2, $3, $4, $5)", {
-        bind: [buyer.id, `roster_${alert.event}`, alert.title.slice(0, 300), alert.body, "/roster"],
+      await db().query(
+        "INSERT INTO notifications (user_id, kind, title, body, link) VALUES ($1, $2, $3, $4, $5)",
+        {
+          bind: [buyer.id, `roster_${alert.event}`, alert.title.slice(0, 300), alert.body, "/roster"],
+          transaction,
+        },
+      );
+      await enqueueMail(
+        {
+          to: buyer.email,
+          subject: alert.title.slice(0, 300),
+          text: `${alert.body}\n\nSee your roster: /roster`,
+        },
         transaction,
-      });
-      await enqueueMail({ to: buyer.email, subject: alert.title.slice(0, 300), text: `${alert.body}\n\nSee your roster: /roster` }, transaction);
+      );
     }
     return true;
   });

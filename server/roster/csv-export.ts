@@ -12,7 +12,13 @@ export function rosterToCsv(entries: RosterEntryDto[]): string {
     for (const t of entry.technicians) {
       if (seen.has(t.technicianId)) continue;
       seen.add(t.technicianId);
-      data.push([t.name, t.companyName, t.standing ? standingWords[t.standing] : "Not computed", t.nextLapse ?? "", entry.addedAt]);
+      data.push([
+        t.name,
+        t.companyName,
+        t.standing ? standingWords[t.standing] : "Not computed",
+        t.nextLapse ?? "",
+        entry.addedAt,
+      ]);
     }
   }
   // Cells starting with = + - @ are escaped so a spreadsheet never runs them as formulas (OWASP "CSV Injection").

@@ -1,7 +1,12 @@
 import { registerRosterAlerts } from "./alerts.ts";
 
 export { rosterRoutes } from "./routes.ts";
-export { alertRosteredShops, alertOnBaselineChanges, sweepRosterAlerts, registerRosterAlerts } from "./alerts.ts";
+export {
+  alertRosteredShops,
+  alertOnBaselineChanges,
+  sweepRosterAlerts,
+  registerRosterAlerts,
+} from "./alerts.ts";
 
 // Whoever loads the roster module (the app) hears standing changes; registering twice is a no-op.
 registerRosterAlerts();

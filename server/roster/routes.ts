@@ -17,6 +17,10 @@ rosterRoutes.post("", { allow: canKeepRoster, body: addRosterEntrySchema }, asyn
   res.status(201).json(await addToRoster(req.user!, body));
 });
 
-rosterRoutes.delete("/:entryId", { allow: canRemoveRosterEntry, params: rosterEntryParamsSchema }, async (req, _res, { params }) => {
-  await removeFromRoster(req.user!, params.entryId);
-});
+rosterRoutes.delete(
+  "/:entryId",
+  { allow: canRemoveRosterEntry, params: rosterEntryParamsSchema },
+  async (req, _res, { params }) => {
+    await removeFromRoster(req.user!, params.entryId);
+  },
+);

@@ -6,7 +6,8 @@ import { AppError } from "../http/app-error.ts";
 import { recordAudit } from "../audit/index.ts";
 import { isListedTechnician } from "../directory/index.ts";
 
-const select = <T extends object>(sql: string, bind: unknown[]) => db().query<T>(sql, { bind, type: QueryTypes.SELECT });
+const select = <T extends object>(sql: string, bind: unknown[]) =>
+  db().query<T>(sql, { bind, type: QueryTypes.SELECT });
 
 interface EntryRow {
   id: number;
@@ -83,10 +84,13 @@ export async function listRoster(shopId: number): Promise<RosterEntryDto[]> {
 async function checkSubject(input: AddRosterEntry): Promise<void> {
   if (input.technicianId !== undefined) {
     // Buyers add technicians they can see: listed ones (the directory's rule); anyone else answers 404.
-    if (!(await isListedTechnician(input.technicianId))) throw new AppError("not_found", "That technician was not found");
+    if (!(await isListedTechnician(input.technicianId)))
+      throw new AppError("not_found", "That technician was not found");
     return;
   }
-  const rows = await select<{ id: number }>("SELECT id FROM companies WHERE id = $1 AND kind = 'service'", [input.serviceCompanyId]);
+  const rows = await select<{ id: number }>("SELECT id FROM companies WHERE id = $1 AND kind = 'service'", [
+    input.serviceCompanyId,
+  ]);
   if (rows.length === 0) throw new AppError("not_found", "That service company was not found");
 }
 
@@ -96,10 +100,23 @@ export async function addToRoster(actor: Express.User, input: AddRosterEntry): P
     const [inserted] = await db().query<{ id: number }>(
       `INSERT INTO roster_entries (shop_company_id, technician_id, service_company_id, added_by)
        VALUES ($1, $2, $3, $4) ON CONFLICT DO NOTHING RETURNING id`,
-      { bind: [actor.companyId, input.technicianId ?? null, input.serviceCompanyId ?? null, actor.id], type: QueryTypes.SELECT, transaction },
+      {
+        bind: [actor.companyId, input.technicianId ?? null, input.serviceCompanyId ?? null, actor.id],
+        type: QueryTypes.SELECT,
+        transaction,
+      },
     );
     if (!inserted) throw new AppError("conflict", "Already on the roster");
-    await recordAudit({ actorUserId: actor.id, action: "roster.added", subjectType: "roster_entry", subjectId: inserted.id, after: input }, transaction);
+    await recordAudit(
+      {
+        actorUserId: actor.id,
+        action: "roster.added",
+        subjectType: "roster_entry",
+        subjectId: inserted.id,
+        after: input,
+      },
+      transaction,
+    );
     return inserted.id;
   });
   const entry = (await listRoster(actor.companyId)).find((e) => e.id === id);
@@ -108,11 +125,24 @@ export async function addToRoster(actor: Express.User, input: AddRosterEntry): P
 
 export async function removeFromRoster(actor: Express.User, entryId: number): Promise<void> {
   await db().transaction(async (transaction) => {
-    const removed = await db().query<{ id: number; technician_id: number | null; service_company_id: number | null }>(
+    const removed = await db().query<{
+      id: number;
+      technician_id: number | null;
+      service_company_id: number | null;
+    }>(
       "DELETE FROM roster_entries WHERE id = $1 AND shop_company_id = $2 RETURNING id, technician_id, service_company_id",
       { bind: [entryId, actor.companyId], type: QueryTypes.SELECT, transaction },
     );
     if (removed.length === 0) throw new AppError("not_found", "That roster entry was not found");
-    await recordAudit({ actorUserId: actor.id, action: "roster.removed", subjectType: "roster_entry", subjectId: entryId, before: removed[0] }, transaction);
+    await recordAudit(
+      {
+        actorUserId: actor.id,
+        action: "roster.removed",
+        subjectType: "roster_entry",
+        subjectId: entryId,
+        before: removed[0],
+      },
+      transaction,
+    );
   });
 }

@@ -1,4 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from "sequelize";
 import type { MachineTechnology } from "../../shared/technicians/schemas.ts";
 
 export class Site extends Model<InferAttributes<Site>, InferCreationAttributes<Site>> {

@@ -10,8 +10,10 @@ export async function isOwnSite(user: SignedInUser, siteId: unknown): Promise<bo
 export const canListSites = requireRole("buyer");
 export const canAddSite = requireRole("buyer");
 
-export const canManageSite = requireOwnership(requireRole("buyer"), "a site of the buyer's shop", (user, params) =>
-  isOwnSite(user, params.siteId),
+export const canManageSite = requireOwnership(
+  requireRole("buyer"),
+  "a site of the buyer's shop",
+  (user, params) => isOwnSite(user, params.siteId),
 );
 
 export const canManageEquipment = requireOwnership(
@@ -19,7 +21,11 @@ export const canManageEquipment = requireOwnership(
   "a machine at a site of the buyer's shop",
   async (user, params) => {
     const equipment = await Equipment.findByPk(Number(params.equipmentId), { attributes: ["siteId"] });
-    return equipment !== null && equipment.siteId === Number(params.siteId) && (await isOwnSite(user, params.siteId));
+    return (
+      equipment !== null &&
+      equipment.siteId === Number(params.siteId) &&
+      (await isOwnSite(user, params.siteId))
+    );
   },
 );
 

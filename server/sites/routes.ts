@@ -7,7 +7,13 @@ import {
   siteParamsSchema,
 } from "../../shared/sites/schemas.ts";
 import { createRoutes } from "../http/route.ts";
-import { canAddSite, canListSites, canLookUpPostalCode, canManageEquipment, canManageSite } from "./policy.ts";
+import {
+  canAddSite,
+  canListSites,
+  canLookUpPostalCode,
+  canManageEquipment,
+  canManageSite,
+} from "./policy.ts";
 import {
   addEquipment,
   addSite,
@@ -31,18 +37,28 @@ siteRoutes.post("", { allow: canAddSite, body: siteInputSchema }, async (req, re
   res.status(201).json(await addSite(req.user!, body));
 });
 
-siteRoutes.get("/:siteId", { allow: canManageSite, params: siteParamsSchema }, (_req, _res, { params }) => findSite(params.siteId));
-
-siteRoutes.put("/:siteId", { allow: canManageSite, params: siteParamsSchema, body: siteInputSchema }, (req, _res, { params, body }) =>
-  editSite(req.user!, params.siteId, body),
+siteRoutes.get("/:siteId", { allow: canManageSite, params: siteParamsSchema }, (_req, _res, { params }) =>
+  findSite(params.siteId),
 );
 
-siteRoutes.delete("/:siteId", { allow: canManageSite, params: siteParamsSchema }, async (req, _res, { params }) => {
-  await archiveSite(req.user!, params.siteId);
-});
+siteRoutes.put(
+  "/:siteId",
+  { allow: canManageSite, params: siteParamsSchema, body: siteInputSchema },
+  (req, _res, { params, body }) => editSite(req.user!, params.siteId, body),
+);
 
-siteRoutes.get("/:siteId/equipment", { allow: canManageSite, params: siteParamsSchema }, (_req, _res, { params }) =>
-  listSiteEquipment(params.siteId),
+siteRoutes.delete(
+  "/:siteId",
+  { allow: canManageSite, params: siteParamsSchema },
+  async (req, _res, { params }) => {
+    await archiveSite(req.user!, params.siteId);
+  },
+);
+
+siteRoutes.get(
+  "/:siteId/equipment",
+  { allow: canManageSite, params: siteParamsSchema },
+  (_req, _res, { params }) => listSiteEquipment(params.siteId),
 );
 
 siteRoutes.post(
@@ -59,12 +75,18 @@ siteRoutes.put(
   (req, _res, { params, body }) => editEquipment(req.user!, params.equipmentId, body),
 );
 
-siteRoutes.delete("/:siteId/equipment/:equipmentId", { allow: canManageEquipment, params: equipmentParamsSchema }, async (req, _res, { params }) => {
-  await removeEquipment(req.user!, params.equipmentId);
-});
+siteRoutes.delete(
+  "/:siteId/equipment/:equipmentId",
+  { allow: canManageEquipment, params: equipmentParamsSchema },
+  async (req, _res, { params }) => {
+    await removeEquipment(req.user!, params.equipmentId);
+  },
+);
 
 export const postalCodeRoutes = createRoutes("/api/postal-codes");
 
-postalCodeRoutes.get("/:code", { allow: canLookUpPostalCode, params: postalCodeParamsSchema }, (_req, _res, { params }) =>
-  findPostalPlace(params.code),
+postalCodeRoutes.get(
+  "/:code",
+  { allow: canLookUpPostalCode, params: postalCodeParamsSchema },
+  (_req, _res, { params }) => findPostalPlace(params.code),
 );

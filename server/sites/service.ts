@@ -9,7 +9,10 @@ import { toEquipmentDto, toSiteDto } from "./dto.ts";
 
 export function placeOfSite(postalCode: string): PostalPlace {
   const place = lookupPostalCode(postalCode);
-  if (!place) throw new AppError("invalid_input", "Unknown ZIP code", [{ path: "body.postalCode", message: "not a known US ZIP code" }]);
+  if (!place)
+    throw new AppError("invalid_input", "Unknown ZIP code", [
+      { path: "body.postalCode", message: "not a known US ZIP code" },
+    ]);
   return place;
 }
 
@@ -29,7 +32,10 @@ export function findPostalPlace(code: string) {
 
 function zoneFor(input: SiteInput, place: PostalPlace): string {
   const zone = input.timeZone ?? place.timeZone;
-  if (!zone) throw new AppError("invalid_input", "Pick the site's time zone", [{ path: "body.timeZone", message: "no zone is known for this ZIP code" }]);
+  if (!zone)
+    throw new AppError("invalid_input", "Pick the site's time zone", [
+      { path: "body.timeZone", message: "no zone is known for this ZIP code" },
+    ]);
   return zone;
 }
 
@@ -46,7 +52,13 @@ async function equipmentCounts(siteIds: number[]): Promise<Map<number, number>> 
 
 export async function listShopSites(companyId: number, includeArchived: boolean) {
   const where = includeArchived ? { companyId } : { companyId, active: true };
-  const sites = await Site.findAll({ where, order: [["name", "ASC"], ["id", "ASC"]] });
+  const sites = await Site.findAll({
+    where,
+    order: [
+      ["name", "ASC"],
+      ["id", "ASC"],
+    ],
+  });
   const counts = await equipmentCounts(sites.map((s) => s.id));
   return sites.map((s) => toSiteDto(s, counts.get(s.id) ?? 0));
 }
@@ -73,7 +85,16 @@ export async function addSite(actor: Express.User, input: SiteInput) {
       },
       { transaction },
     );
-    await recordAudit({ actorUserId: actor.id, action: "site.added", subjectType: "site", subjectId: s.id, after: s.toJSON() }, transaction);
+    await recordAudit(
+      {
+        actorUserId: actor.id,
+        action: "site.added",
+        subjectType: "site",
+        subjectId: s.id,
+        after: s.toJSON(),
+      },
+      transaction,
+    );
     return s;
   });
   return toSiteDto(site, 0);
@@ -96,7 +117,17 @@ export async function editSite(actor: Express.User, siteId: number, input: SiteI
       },
       { transaction },
     );
-    await recordAudit({ actorUserId: actor.id, action: "site.edited", subjectType: "site", subjectId: s.id, before, after: s.toJSON() }, transaction);
+    await recordAudit(
+      {
+        actorUserId: actor.id,
+        action: "site.edited",
+        subjectType: "site",
+        subjectId: s.id,
+        before,
+        after: s.toJSON(),
+      },
+      transaction,
+    );
   });
   return findSite(siteId);
 }
@@ -106,19 +137,41 @@ export async function archiveSite(actor: Express.User, siteId: number) {
   await db().transaction(async (transaction) => {
     const [count] = await Site.update({ active: false }, { where: { id: siteId }, transaction });
     if (count === 0) throw new AppError("not_found", "That site was not found");
-    await recordAudit({ actorUserId: actor.id, action: "site.archived", subjectType: "site", subjectId: siteId }, transaction);
+    await recordAudit(
+      { actorUserId: actor.id, action: "site.archived", subjectType: "site", subjectId: siteId },
+      transaction,
+    );
   });
 }
 
 export async function listSiteEquipment(siteId: number) {
-  const rows = await Equipment.findAll({ where: { siteId }, order: [["builder", "ASC"], ["model", "ASC"], ["id", "ASC"]] });
+  const rows = await Equipment.findAll({
+    where: { siteId },
+    order: [
+      ["builder", "ASC"],
+      ["model", "ASC"],
+      ["id", "ASC"],
+    ],
+  });
   return rows.map(toEquipmentDto);
 }
 
 export async function addEquipment(actor: Express.User, siteId: number, input: EquipmentInput) {
   const equipment = await db().transaction(async (transaction) => {
-    const e = await Equipment.create({ siteId, ...input, serialNumber: input.serialNumber || null }, { transaction });
-    await recordAudit({ actorUserId: actor.id, action: "equipment.added", subjectType: "equipment", subjectId: e.id, after: e.toJSON() }, transaction);
+    const e = await Equipment.create(
+      { siteId, ...input, serialNumber: input.serialNumber || null },
+      { transaction },
+    );
+    await recordAudit(
+      {
+        actorUserId: actor.id,
+        action: "equipment.added",
+        subjectType: "equipment",
+        subjectId: e.id,
+        after: e.toJSON(),
+      },
+      transaction,
+    );
     return e;
   });
   return toEquipmentDto(equipment);
@@ -130,7 +183,17 @@ export async function editEquipment(actor: Express.User, equipmentId: number, in
     if (!e) throw new AppError("not_found", "That machine was not found");
     const before = e.toJSON();
     await e.update({ ...input, serialNumber: input.serialNumber || null }, { transaction });
-    await recordAudit({ actorUserId: actor.id, action: "equipment.edited", subjectType: "equipment", subjectId: e.id, before, after: e.toJSON() }, transaction);
+    await recordAudit(
+      {
+        actorUserId: actor.id,
+        action: "equipment.edited",
+        subjectType: "equipment",
+        subjectId: e.id,
+        before,
+        after: e.toJSON(),
+      },
+      transaction,
+    );
     return e;
   });
   return toEquipmentDto(equipment);
@@ -141,7 +204,16 @@ export async function removeEquipment(actor: Express.User, equipmentId: number) 
   await db().transaction(async (transaction) => {
     const e = await Equipment.findByPk(equipmentId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!e) throw new AppError("not_found", "That machine was not found");
-    await recordAudit({ actorUserId: actor.id, action: "equipment.removed", subjectType: "equipment", subjectId: e.id, before: e.toJSON() }, transaction);
+    await recordAudit(
+      {
+        actorUserId: actor.id,
+        action: "equipment.removed",
+        subjectType: "equipment",
+        subjectId: e.id,
+        before: e.toJSON(),
+      },
+      transaction,
+    );
     await e.destroy({ transaction });
   });
 }

@@ -5,7 +5,8 @@ import type { Standing, UnmetReason, RequirementResult } from "../standing/stand
 import type { CallOutEstimate } from "./call-out-estimate.ts";
 
 /** An empty query-string value ("?q=") means "no filter", not zero. */
-const optional = <T extends z.ZodType>(schema: T) => z.preprocess((v) => (v === "" ? undefined : v), schema.optional());
+const optional = <T extends z.ZodType>(schema: T) =>
+  z.preprocess((v) => (v === "" ? undefined : v), schema.optional());
 
 const dollars = z.coerce.number().int().min(0).max(1_000_000_000);
 
@@ -25,7 +26,14 @@ export const directoryQuerySchema = z.object({
   credentialTypes: optional(
     z
       .string()
-      .transform((v) => [...new Set(v.split(",").map((s) => s.trim()).filter(Boolean))])
+      .transform((v) => [
+        ...new Set(
+          v
+            .split(",")
+            .map((s) => s.trim())
+            .filter(Boolean),
+        ),
+      ])
       .pipe(z.array(z.string().regex(/^[a-z][a-z0-9_]{1,39}$/, "Unknown credential type")).max(12)),
   ),
   oemBuilder: optional(z.string().trim().min(1).max(120)),
@@ -43,7 +51,10 @@ export const directoryQuerySchema = z.object({
   equipmentId: optional(idParam),
   sort: optional(z.enum(directorySorts)),
   cursor: optional(z.string().max(400)),
-  limit: z.preprocess((v) => (v === "" ? undefined : v), z.coerce.number().int().min(1).max(MAX_PAGE_SIZE).default(20)),
+  limit: z.preprocess(
+    (v) => (v === "" ? undefined : v),
+    z.coerce.number().int().min(1).max(MAX_PAGE_SIZE).default(20),
+  ),
   onSiteHours: z.preprocess((v) => (v === "" ? undefined : v), z.coerce.number().min(0).max(24).default(2)),
 });
 export type DirectoryQuery = z.infer<typeof directoryQuerySchema>;

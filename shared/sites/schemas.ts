@@ -17,7 +17,10 @@ export const siteInputSchema = z.object({
 export type SiteInput = z.infer<typeof siteInputSchema>;
 
 export const listSitesQuerySchema = z.object({
-  includeArchived: z.enum(["true", "false"]).default("false").transform((v) => v === "true"),
+  includeArchived: z
+    .enum(["true", "false"])
+    .default("false")
+    .transform((v) => v === "true"),
 });
 
 /** One machine at a site; picking it in the directory fills the technology and control-family filters. */

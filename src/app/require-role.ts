@@ -24,6 +24,7 @@ export const requireRole =
   (...allowed: Role[]) =>
   async (args: LoaderFunctionArgs) => {
     const user = await requireUser(args);
-    if (!allowed.includes(user.role)) throw data("This page is not part of your role's workspace.", { status: 403 });
+    if (!allowed.includes(user.role))
+      throw data("This page is not part of your role's workspace.", { status: 403 });
     return null;
   };

@@ -3,7 +3,10 @@ export function RootFallback() {
   return (
     <div role="status" className="grid min-h-dvh place-items-center text-ink-700">
       <span className="flex items-center gap-2">
-        <span aria-hidden="true" className="size-5 animate-spin rounded-full border-2 border-ink-300 border-r-transparent" />
+        <span
+          aria-hidden="true"
+          className="size-5 animate-spin rounded-full border-2 border-ink-300 border-r-transparent"
+        />
         Loading Clearbench…
       </span>
     </div>

@@ -29,6 +29,11 @@ export const router = createBrowserRouter([
         lazy: () => import("./routes/app/app-layout.tsx"),
         children: [
           { path: paths.account, lazy: () => import("./routes/app/account.tsx") },
+          { path: paths.mailLinks.documents, lazy: () => import("./routes/app/mail-link-documents.tsx") },
+          {
+            path: paths.mailLinks.documentNew,
+            lazy: () => import("./routes/app/mail-link-document-new.tsx"),
+          },
           {
             loader: requireRole("provider_admin"),
             lazy: roleArea,
@@ -46,8 +51,19 @@ export const router = createBrowserRouter([
               },
               { path: paths.provider.documents, lazy: () => import("./routes/provider/documents.tsx") },
               { path: paths.provider.documentNew, lazy: () => import("./routes/provider/document-new.tsx") },
-              { path: paths.provider.workOrders, lazy: () => import("./routes/provider/work-orders.tsx") },
             ],
+          },
+          {
+            loader: requireRole("provider_admin", "technician"),
+            lazy: roleArea,
+            children: [
+              { path: paths.provider.workOrders, lazy: () => import("./routes/work-orders/work-order-list.tsx") },
+            ],
+          },
+          {
+            loader: requireRole("buyer", "provider_admin", "technician"),
+            lazy: roleArea,
+            children: [{ path: paths.workOrder, lazy: () => import("./routes/work-orders/work-order.tsx") }],
           },
           {
             loader: requireRole("technician"),
@@ -79,7 +95,9 @@ export const router = createBrowserRouter([
                 path: paths.buyer.requirementSets,
                 lazy: () => import("./routes/buyer/requirement-sets.tsx"),
               },
-              { path: paths.buyer.workOrders, lazy: () => import("./routes/buyer/work-orders.tsx") },
+              { path: paths.buyer.workOrders, lazy: () => import("./routes/work-orders/work-order-list.tsx") },
+              { path: paths.buyer.workOrderNew, lazy: () => import("./routes/buyer/raise-work-order.tsx") },
+              { path: paths.buyer.technician, lazy: () => import("./routes/buyer/technician.tsx") },
             ],
           },
           {

@@ -11,7 +11,8 @@ export function useSessionExpiry() {
   const queryClient = useQueryClient();
   useEffect(() => {
     const forget = (error: unknown) => {
-      if (isApiError(error) && error.status === 401) queryClient.setQueryData(accountKeys.currentUser(), null);
+      if (isApiError(error) && error.status === 401)
+        queryClient.setQueryData(accountKeys.currentUser(), null);
     };
     const stopQueries = queryClient.getQueryCache().subscribe((event) => {
       if (event.type === "updated" && event.action.type === "error") forget(event.action.error);

@@ -15,6 +15,7 @@ export const navigationByRole: Record<Role, readonly NavItem[]> = {
   technician: [
     { label: "My standing", to: paths.technician.standing, end: true },
     { label: "Upload a card", to: paths.technician.uploadCard },
+    { label: "Work orders", to: paths.provider.workOrders },
   ],
   reviewer: [{ label: "Queue", to: paths.reviewer.queue }],
   buyer: [

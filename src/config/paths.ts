@@ -8,6 +8,11 @@ export const paths = {
     setPassword: "/set-password",
   },
   account: "/account",
+  /** Role-neutral links in e-mails; each role is sent on to its own page. */
+  mailLinks: {
+    documents: "/documents",
+    documentNew: "/documents/new",
+  },
   provider: {
     dashboard: "/provider",
     technicians: "/provider/technicians",
@@ -32,7 +37,11 @@ export const paths = {
     sites: "/sites",
     requirementSets: "/requirement-sets",
     workOrders: "/work-orders",
+    technician: "/directory/technicians/:technicianId",
+    workOrderNew: "/work-orders/new",
   },
+  /** One work order, for either side (the e-mails link here). */
+  workOrder: "/work-orders/:workOrderId",
   admin: {
     users: "/admin/users",
     catalogue: "/admin/catalogue",
@@ -45,6 +54,9 @@ export const hrefs = {
   technician: (id: number) => `/provider/technicians/${id}`,
   technicianEdit: (id: number) => `/provider/technicians/${id}/edit`,
   review: (credentialId: number) => `/review/${credentialId}`,
+  directoryTechnician: (id: number) => `/directory/technicians/${id}`,
+  workOrder: (id: number) => `/work-orders/${id}`,
+  workOrderNew: (technicianId: number) => `/work-orders/new?technicianId=${technicianId}`,
   /** The upload flow with the type and holder chosen already (a renewal, or a corrected returned document). */
   documentNew: (preset: { typeCode?: string | undefined; technicianId?: number | null | undefined } = {}) => {
     const query = new URLSearchParams();

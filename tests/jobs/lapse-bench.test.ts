@@ -112,7 +112,9 @@ describe.runIf(BENCH)("lapse job over 200,000 credentials", () => {
       [
         `bench: ${credentials} credentials, ${COMPANIES * TECHNICIANS_PER_COMPANY} technicians`,
         `  first run (catch-up): ${firstMs.toFixed(0)} ms, ${first.lapsed} lapsed, ${first.noticesCreated} notices, ${first.emailsQueued} e-mails, ${first.changedStandings.length} standings changed, ${first.statements} statements`,
+        `    steps (ms): ${JSON.stringify(first.timings)}`,
         `  next day's run:       ${secondMs.toFixed(0)} ms, ${second.lapsed} lapsed, ${second.noticesCreated} notices, ${second.emailsQueued} e-mails, ${second.changedStandings.length} standings changed, ${second.statements} statements`,
+        `    steps (ms): ${JSON.stringify(second.timings)}`,
         `  consistency check:    ${checkMs.toFixed(0)} ms over ${check.checked} stored standings, ${check.differences.length} differences`,
         "",
       ].join("\n"),

@@ -1,4 +1,4 @@
-import { useCallback, useEffect, useId, useRef, useState } from "react";
+import { useCallback, useId, useRef, useState } from "react";
 import { Link, useLocation } from "react-router-dom";
 import { paths } from "@/config/paths.ts";
 import { roleLabels, type NavItem } from "@/config/navigation.ts";
@@ -6,17 +6,24 @@ import { MainNav } from "./main-nav.tsx";
 import type { HeaderUser } from "./user-menu.tsx";
 import { useDismiss } from "./use-dismiss.ts";
 
-type MobileMenuProps = { items: readonly NavItem[]; user: HeaderUser; onSignOut: () => void; signingOut: boolean };
+type MobileMenuProps = {
+  items: readonly NavItem[];
+  user: HeaderUser;
+  onSignOut: () => void;
+  signingOut: boolean;
+};
 
 /** The phone-width menu: every link and the account actions as full-width, 48 px touch targets. */
 export function MobileMenu({ items, user, onSignOut, signingOut }: MobileMenuProps) {
-  const [open, setOpen] = useState(false);
-  const close = useCallback(() => setOpen(false), []);
+  const { pathname } = useLocation();
+  // The menu remembers the page it was opened on, so any navigation (a link, Back, a redirect) closes it
+  // without an effect that sets state after the render.
+  const [openOn, setOpenOn] = useState<string | null>(null);
+  const open = openOn === pathname;
+  const close = useCallback(() => setOpenOn(null), []);
   const root = useRef<HTMLDivElement>(null);
   const panelId = useId();
-  const { pathname } = useLocation();
   useDismiss(root, open, close);
-  useEffect(close, [pathname, close]);
 
   return (
     <div ref={root}>
@@ -24,7 +31,7 @@ export function MobileMenu({ items, user, onSignOut, signingOut }: MobileMenuPro
         type="button"
         aria-expanded={open}
         aria-controls={panelId}
-        onClick={() => setOpen((o) => !o)}
+        onClick={() => setOpenOn(open ? null : pathname)}
         className="flex min-h-12 min-w-12 items-center justify-center gap-2 rounded-md px-3 text-base font-medium text-ink-50 hover:bg-ink-800 focus-visible:outline-2 focus-visible:outline-offset-2 focus-visible:outline-accent-400"
       >
         <svg viewBox="0 0 20 16" className="size-5" aria-hidden="true" focusable="false">
@@ -37,7 +44,10 @@ export function MobileMenu({ items, user, onSignOut, signingOut }: MobileMenuPro
         Menu
       </button>
       {open && (
-        <div id={panelId} className="absolute inset-x-0 top-full z-20 border-t border-ink-800 bg-ink-900 px-3 pt-2 pb-4 shadow-lg">
+        <div
+          id={panelId}
+          className="absolute inset-x-0 top-full z-20 border-t border-ink-800 bg-ink-900 px-3 pt-2 pb-4 shadow-lg"
+        >
           <nav aria-label="Main">
             <MainNav items={items} layout="stack" onNavigate={close} />
           </nav>

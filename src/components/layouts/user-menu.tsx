@@ -34,7 +34,10 @@ export function UserMenu({ user, onSignOut, signingOut }: UserMenuProps) {
         onClick={() => setOpen((o) => !o)}
         className="flex items-center gap-2 rounded-md px-2 py-1.5 text-sm text-ink-50 hover:bg-ink-800 focus-visible:outline-2 focus-visible:outline-offset-2 focus-visible:outline-accent-400"
       >
-        <span aria-hidden="true" className="grid size-8 place-items-center rounded-full bg-ink-700 text-xs font-semibold">
+        <span
+          aria-hidden="true"
+          className="grid size-8 place-items-center rounded-full bg-ink-700 text-xs font-semibold"
+        >
           {initialsOf(user.name)}
         </span>
         <span className="sr-only">User menu for </span>

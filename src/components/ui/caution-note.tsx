@@ -10,9 +10,10 @@ export function CautionNote({ className = "" }: { className?: string }) {
         <path d="M8 6v3.75M8 11.25v1" className="stroke-amber-800" strokeWidth="1.5" />
       </svg>
       <p>
-        <span className="font-semibold">A certificate of insurance is information only.</span> It confers no rights on
-        the certificate holder and does not change the policy it describes. Confirm coverage with the insurer or broker
-        before relying on it, and follow local codes, site safety rules and licensed practice.
+        <span className="font-semibold">A certificate of insurance is information only.</span> It confers no
+        rights on the certificate holder and does not change the policy it describes. Confirm coverage with
+        the insurer or broker before relying on it, and follow local codes, site safety rules and licensed
+        practice.
       </p>
     </aside>
   );

@@ -18,7 +18,10 @@ export function FormError({ error, labels = {}, plainWords = {} }: FormErrorProp
   if (!message) return null;
   const fields = Object.entries(fieldErrorsOf(error, plainWords));
   return (
-    <div role="alert" className="rounded-md border-l-4 border-red-700 bg-red-50 px-4 py-3 text-sm text-red-900">
+    <div
+      role="alert"
+      className="rounded-md border-l-4 border-red-700 bg-red-50 px-4 py-3 text-sm text-red-900"
+    >
       <p className="font-semibold">{message}</p>
       {fields.length > 0 && (
         <ul className="mt-1 list-disc space-y-0.5 pl-5">

@@ -13,7 +13,16 @@ type SelectFieldProps = Omit<SelectHTMLAttributes<HTMLSelectElement>, "id"> & {
   hint?: string;
 };
 
-export function SelectField({ label, name, options, placeholder, error, hint, className = "", ...rest }: SelectFieldProps) {
+export function SelectField({
+  label,
+  name,
+  options,
+  placeholder,
+  error,
+  hint,
+  className = "",
+  ...rest
+}: SelectFieldProps) {
   const id = `field-${name}-${useId()}`;
   const hintId = hint ? `${id}-hint` : undefined;
   const errorId = error ? `${id}-error` : undefined;

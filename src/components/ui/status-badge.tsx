@@ -2,18 +2,10 @@ import type { ReactNode } from "react";
 
 /** Standing statuses (cleared, lapsing, not_cleared) and credential states (the rest). */
 export type BadgeStatus =
-  | "cleared"
-  | "lapsing"
-  | "not_cleared"
-  | "submitted"
-  | "returned"
-  | "verified"
-  | "superseded"
-  | "lapsed";
+  "cleared" | "lapsing" | "not_cleared" | "submitted" | "returned" | "verified" | "superseded" | "lapsed";
 
 type StatusBadgeProps =
-  | { status: "lapsing"; daysLeft: number }
-  | { status: Exclude<BadgeStatus, "lapsing">; daysLeft?: never };
+  { status: "lapsing"; daysLeft: number } | { status: Exclude<BadgeStatus, "lapsing">; daysLeft?: never };
 
 const lapsingWord = (daysLeft: number): string =>
   daysLeft <= 0 ? "Lapsing today" : daysLeft === 1 ? "Lapsing in 1 day" : `Lapsing in ${daysLeft} days`;
@@ -28,9 +20,18 @@ const shapes: Record<BadgeStatus, ReactNode> = {
       <path d="M8 2.75a5.25 5.25 0 0 1 0 10.5z" className="fill-amber-700" />
     </>
   ),
-  not_cleared: <rect x="2.75" y="2.75" width="10.5" height="10.5" className="fill-none stroke-red-700" strokeWidth="2" />,
+  not_cleared: (
+    <rect x="2.75" y="2.75" width="10.5" height="10.5" className="fill-none stroke-red-700" strokeWidth="2" />
+  ),
   submitted: (
-    <circle cx="8" cy="8" r="5.25" className="fill-none stroke-ink-500" strokeWidth="1.75" strokeDasharray="2.5 2" />
+    <circle
+      cx="8"
+      cy="8"
+      r="5.25"
+      className="fill-none stroke-ink-500"
+      strokeWidth="1.75"
+      strokeDasharray="2.5 2"
+    />
   ),
   returned: <path d="M8 2 14.5 13.5h-13z" className="fill-accent-700" />,
   verified: (
@@ -39,7 +40,9 @@ const shapes: Record<BadgeStatus, ReactNode> = {
       <path d="m5 8.25 2 2 4-4.25" className="fill-none stroke-white" strokeWidth="1.75" />
     </>
   ),
-  superseded: <path d="M8 2.25 13.75 8 8 13.75 2.25 8z" className="fill-none stroke-ink-500" strokeWidth="1.5" />,
+  superseded: (
+    <path d="M8 2.25 13.75 8 8 13.75 2.25 8z" className="fill-none stroke-ink-500" strokeWidth="1.5" />
+  ),
   lapsed: <path d="m3.5 3.5 9 9m0-9-9 9" className="fill-none stroke-red-700" strokeWidth="2.25" />,
 };
 

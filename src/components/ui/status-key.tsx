@@ -8,14 +8,30 @@ export function StatusKey() {
         How statuses look
       </h2>
       <ul className="mt-2 flex flex-wrap gap-2">
-        <li><StatusBadge status="cleared" /></li>
-        <li><StatusBadge status="lapsing" daysLeft={12} /></li>
-        <li><StatusBadge status="not_cleared" /></li>
-        <li><StatusBadge status="submitted" /></li>
-        <li><StatusBadge status="returned" /></li>
-        <li><StatusBadge status="verified" /></li>
-        <li><StatusBadge status="superseded" /></li>
-        <li><StatusBadge status="lapsed" /></li>
+        <li>
+          <StatusBadge status="cleared" />
+        </li>
+        <li>
+          <StatusBadge status="lapsing" daysLeft={12} />
+        </li>
+        <li>
+          <StatusBadge status="not_cleared" />
+        </li>
+        <li>
+          <StatusBadge status="submitted" />
+        </li>
+        <li>
+          <StatusBadge status="returned" />
+        </li>
+        <li>
+          <StatusBadge status="verified" />
+        </li>
+        <li>
+          <StatusBadge status="superseded" />
+        </li>
+        <li>
+          <StatusBadge status="lapsed" />
+        </li>
       </ul>
     </section>
   );

@@ -13,7 +13,15 @@ export const fieldInputStyles =
   "placeholder:text-ink-500 focus-visible:outline-2 focus-visible:outline-offset-1 focus-visible:outline-ink-700";
 
 /** A labelled input; the error and hint are tied to it with aria-describedby. */
-export function TextField({ label, name, error, hint, className = "", type = "text", ...rest }: TextFieldProps) {
+export function TextField({
+  label,
+  name,
+  error,
+  hint,
+  className = "",
+  type = "text",
+  ...rest
+}: TextFieldProps) {
   const id = `field-${name}-${useId()}`;
   const hintId = hint ? `${id}-hint` : undefined;
   const errorId = error ? `${id}-error` : undefined;

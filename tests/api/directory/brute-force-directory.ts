@@ -17,13 +17,23 @@ export interface DrawnFilters {
   q?: string;
 }
 
-function holds(t: WorldTechnician, typeCode: string, now: Date, test: (fields: Record<string, unknown>) => boolean = () => true): boolean {
+function holds(
+  t: WorldTechnician,
+  typeCode: string,
+  now: Date,
+  test: (fields: Record<string, unknown>) => boolean = () => true,
+): boolean {
   return t.credentials.some(
-    (c) => c.typeCode === typeCode && c.state === "verified" && (c.lapsesAt === null || c.lapsesAt > now) && test(c.fields),
+    (c) =>
+      c.typeCode === typeCode &&
+      c.state === "verified" &&
+      (c.lapsesAt === null || c.lapsesAt > now) &&
+      test(c.fields),
   );
 }
 
-const limit = (fields: Record<string, unknown>, name: string) => ((fields.limits as Record<string, number> | undefined) ?? {})[name] ?? -1;
+const limit = (fields: Record<string, unknown>, name: string) =>
+  ((fields.limits as Record<string, number> | undefined) ?? {})[name] ?? -1;
 const same = (a: unknown, b: string) => typeof a === "string" && a.trim().toLowerCase() === b.toLowerCase();
 
 /** The directory's rules written plainly over in-memory rows, independent of the SQL. */
@@ -34,28 +44,49 @@ export function bruteForceDirectory(world: DirectoryWorld, f: DrawnFilters, now:
     .filter((t) =>
       f.oemBuilder === undefined && f.controlFamily === undefined && f.minOemLevel === undefined
         ? true
-        : holds(t, "oem_training", now, (x) =>
-            (f.oemBuilder === undefined || same(x.builder, f.oemBuilder)) &&
-            (f.controlFamily === undefined || same(x.controlFamily, f.controlFamily)) &&
-            (f.minOemLevel === undefined || Number(x.level) >= f.minOemLevel)),
+        : holds(
+            t,
+            "oem_training",
+            now,
+            (x) =>
+              (f.oemBuilder === undefined || same(x.builder, f.oemBuilder)) &&
+              (f.controlFamily === undefined || same(x.controlFamily, f.controlFamily)) &&
+              (f.minOemLevel === undefined || Number(x.level) >= f.minOemLevel),
+          ),
     )
     .filter((t) => f.technology === undefined || t.technologies.includes(f.technology))
     .filter((t) =>
       f.minEachOccurrence === undefined && f.minAggregate === undefined
         ? true
-        : holds(t, "general_liability", now, (x) =>
-            (f.minEachOccurrence === undefined || limit(x, "eachOccurrence") >= f.minEachOccurrence) &&
-            (f.minAggregate === undefined || limit(x, "generalAggregate") >= f.minAggregate)),
+        : holds(
+            t,
+            "general_liability",
+            now,
+            (x) =>
+              (f.minEachOccurrence === undefined || limit(x, "eachOccurrence") >= f.minEachOccurrence) &&
+              (f.minAggregate === undefined || limit(x, "generalAggregate") >= f.minAggregate),
+          ),
     )
-    .filter((t) => f.minAutoCsl === undefined || holds(t, "auto_liability", now, (x) => limit(x, "combinedSingleLimit") >= f.minAutoCsl!))
+    .filter(
+      (t) =>
+        f.minAutoCsl === undefined ||
+        holds(t, "auto_liability", now, (x) => limit(x, "combinedSingleLimit") >= f.minAutoCsl!),
+    )
     .filter((t) => !f.requirementSet || t.setStanding === "cleared" || t.setStanding === "lapsing")
     .filter((t) => {
       if (f.radiusKm === undefined) return true;
-      const km = greatCircleDistanceKm({ lat: world.site.latitude, lon: world.site.longitude }, { lat: t.latitude, lon: t.longitude });
+      const km = greatCircleDistanceKm(
+        { lat: world.site.latitude, lon: world.site.longitude },
+        { lat: t.latitude, lon: t.longitude },
+      );
       return km <= Math.min(t.serviceRadiusKm, f.radiusKm);
     })
-    .filter((t) => f.minRating === undefined || (t.ratingCount > 0 && t.starSum / t.ratingCount >= f.minRating))
-    .filter((t) => f.q === undefined || `${t.name}\n${t.companyName}`.toLowerCase().includes(f.q.toLowerCase()))
+    .filter(
+      (t) => f.minRating === undefined || (t.ratingCount > 0 && t.starSum / t.ratingCount >= f.minRating),
+    )
+    .filter(
+      (t) => f.q === undefined || `${t.name}\n${t.companyName}`.toLowerCase().includes(f.q.toLowerCase()),
+    )
     .map((t) => t.id)
     .sort((a, b) => a - b);
 }

@@ -2,7 +2,13 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import fc from "fast-check";
 import { agentFor, buildTestApp, type TestApp } from "../../support/test-app.ts";
 import { TEST_PASSWORD } from "../../support/build-company.ts";
-import { buildDirectoryWorld, WORLD_BUILDERS, WORLD_CONTROL_FAMILIES, WORLD_TECHNOLOGIES, type DirectoryWorld } from "../../fixtures/build-directory-world.ts";
+import {
+  buildDirectoryWorld,
+  WORLD_BUILDERS,
+  WORLD_CONTROL_FAMILIES,
+  WORLD_TECHNOLOGIES,
+  type DirectoryWorld,
+} from "../../fixtures/build-directory-world.ts";
 import { bruteForceDirectory, toQuery, type DrawnFilters } from "./brute-force-directory.ts";
 import { readAllPages } from "./directory-pages.ts";
 
@@ -14,12 +20,18 @@ beforeAll(async () => {
   t = buildTestApp();
   world = await buildDirectoryWorld({ seed: 11, count: 30 });
   buyer = agentFor(t.app);
-  await buyer.post("/api/auth/sign-in").send({ email: world.buyerEmail, password: TEST_PASSWORD }).expect(200);
+  await buyer
+    .post("/api/auth/sign-in")
+    .send({ email: world.buyerEmail, password: TEST_PASSWORD })
+    .expect(200);
 });
 afterAll(() => t.close());
 
 const filterValues = {
-  credentialTypes: fc.subarray(["arc_flash", "lockout_tagout", "general_liability", "auto_liability"], { minLength: 1, maxLength: 2 }),
+  credentialTypes: fc.subarray(["arc_flash", "lockout_tagout", "general_liability", "auto_liability"], {
+    minLength: 1,
+    maxLength: 2,
+  }),
   oemBuilder: fc.constantFrom(...WORLD_BUILDERS),
   controlFamily: fc.constantFrom(...WORLD_CONTROL_FAMILIES),
   minOemLevel: fc.integer({ min: 1, max: 3 }),
@@ -37,7 +49,11 @@ type FilterKey = keyof typeof filterValues;
 // One to three filters at a time: with all twelve at once nearly every search would be empty and prove little.
 const drawnFilters: fc.Arbitrary<DrawnFilters> = fc
   .subarray(Object.keys(filterValues) as FilterKey[], { minLength: 1, maxLength: 3 })
-  .chain((keys) => fc.record(Object.fromEntries(keys.map((k) => [k, filterValues[k]])) as Record<string, fc.Arbitrary<unknown>>))
+  .chain((keys) =>
+    fc.record(
+      Object.fromEntries(keys.map((k) => [k, filterValues[k]])) as Record<string, fc.Arbitrary<unknown>>,
+    ),
+  )
   .map((f) => f as DrawnFilters);
 
 describe("directory search (property)", () => {
@@ -45,16 +61,25 @@ describe("directory search (property)", () => {
     let nonEmpty = 0;
 
     await fc.assert(
-      fc.asyncProperty(drawnFilters, fc.constantFrom("score", "hourlyRate", "soonestLapse"), fc.integer({ min: 1, max: 6 }), async (filters, sort, limit) => {
-        const { rows } = await readAllPages(buyer, { ...toQuery(world, filters), sort, limit: String(limit) });
+      fc.asyncProperty(
+        drawnFilters,
+        fc.constantFrom("score", "hourlyRate", "soonestLapse"),
+        fc.integer({ min: 1, max: 6 }),
+        async (filters, sort, limit) => {
+          const { rows } = await readAllPages(buyer, {
+            ...toQuery(world, filters),
+            sort,
+            limit: String(limit),
+          });
 
-        const ids = rows.map((r) => r.technicianId);
-        const inWorld = new Set(world.technicians.map((x) => x.id));
-        expect(new Set(ids).size).toBe(ids.length);
-        const expected = bruteForceDirectory(world, filters, new Date());
-        if (expected.length > 0) nonEmpty += 1;
-        expect(ids.filter((id) => inWorld.has(id)).sort((a, b) => a - b)).toEqual(expected);
-      }),
+          const ids = rows.map((r) => r.technicianId);
+          const inWorld = new Set(world.technicians.map((x) => x.id));
+          expect(new Set(ids).size).toBe(ids.length);
+          const expected = bruteForceDirectory(world, filters, new Date());
+          if (expected.length > 0) nonEmpty += 1;
+          expect(ids.filter((id) => inWorld.has(id)).sort((a, b) => a - b)).toEqual(expected);
+        },
+      ),
       { numRuns: 25, seed: 20261202 },
     );
 

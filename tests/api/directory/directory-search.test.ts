@@ -17,7 +17,10 @@ beforeAll(async () => {
   t = buildTestApp();
   world = await buildDirectoryWorld({ seed: 7 });
   buyer = agentFor(t.app);
-  await buyer.post("/api/auth/sign-in").send({ email: world.buyerEmail, password: TEST_PASSWORD }).expect(200);
+  await buyer
+    .post("/api/auth/sign-in")
+    .send({ email: world.buyerEmail, password: TEST_PASSWORD })
+    .expect(200);
 });
 afterAll(() => t.close());
 
@@ -30,7 +33,9 @@ describe("directory: who appears", () => {
   it("lists only active technicians whose stored baseline standing is cleared or lapsing", async () => {
     const { rows } = await readAllPages(buyer, { limit: "50" });
 
-    const expected = world.technicians.filter((x) => x.active && (x.baseline === "cleared" || x.baseline === "lapsing")).map((x) => x.id);
+    const expected = world.technicians
+      .filter((x) => x.active && (x.baseline === "cleared" || x.baseline === "lapsing"))
+      .map((x) => x.id);
     expect(ours(rows.map((r) => r.technicianId))).toEqual(expected.sort((a, b) => a - b));
     expect(rows.every((r) => r.standing === "cleared" || r.standing === "lapsing")).toBe(true);
   });
@@ -52,13 +57,17 @@ describe("directory: who appears", () => {
     });
     expect(outsideOwnRadius.length).toBeGreaterThan(0);
     expect(rows.some((r) => outsideOwnRadius.some((x) => x.id === r.technicianId))).toBe(false);
-    expect(ours(rows.map((r) => r.technicianId))).toEqual(bruteForceDirectory(world, { radiusKm }, new Date()));
+    expect(ours(rows.map((r) => r.technicianId))).toEqual(
+      bruteForceDirectory(world, { radiusKm }, new Date()),
+    );
   });
 
   it("applies the default 150 km radius when a site is chosen without one", async () => {
     const { rows } = await readAllPages(buyer, { siteId: String(world.site.id) });
 
-    expect(ours(rows.map((r) => r.technicianId))).toEqual(bruteForceDirectory(world, { radiusKm: 150 }, new Date()));
+    expect(ours(rows.map((r) => r.technicianId))).toEqual(
+      bruteForceDirectory(world, { radiusKm: 150 }, new Date()),
+    );
   });
 
   it.each([
@@ -84,7 +93,14 @@ describe("directory: who appears", () => {
   });
 
   it("fills technology and control family from a machine at the shop's site", async () => {
-    const machine = await Equipment.create({ siteId: world.site.id, builder: "Brisca", controlFamily: "QX", technology: "mill", model: "B-20", serialNumber: null });
+    const machine = await Equipment.create({
+      siteId: world.site.id,
+      builder: "Brisca",
+      controlFamily: "QX",
+      technology: "mill",
+      model: "B-20",
+      serialNumber: null,
+    });
 
     const res = await buyer.get("/api/directory").query({ equipmentId: machine.id, limit: 50 });
 
@@ -97,19 +113,31 @@ describe("directory: who appears", () => {
 
 describe("directory: rows", () => {
   it("carries distance in km and miles, drive time, the call-out estimate and the rating with its score", async () => {
-    const res = await buyer.get("/api/directory").query({ siteId: world.site.id, radiusKm: 400, onSiteHours: 3, limit: 50 });
+    const res = await buyer
+      .get("/api/directory")
+      .query({ siteId: world.site.id, radiusKm: 400, onSiteHours: 3, limit: 50 });
 
     expect(res.status).toBe(200);
-    const row = res.body.rows.find((r: { technicianId: number }) => world.technicians.some((x) => x.id === r.technicianId));
+    const row = res.body.rows.find((r: { technicianId: number }) =>
+      world.technicians.some((x) => x.id === r.technicianId),
+    );
     const tech = world.technicians.find((x) => x.id === row.technicianId)!;
-    const km = greatCircleDistanceKm({ lat: world.site.latitude, lon: world.site.longitude }, { lat: tech.latitude, lon: tech.longitude });
+    const km = greatCircleDistanceKm(
+      { lat: world.site.latitude, lon: world.site.longitude },
+      { lat: tech.latitude, lon: tech.longitude },
+    );
     expect(row.distanceKm).toBeCloseTo(km, 1);
     expect(row.distanceMiles).toBeCloseTo(km / 1.609344, 1);
     expect(row.driveHours).toBeGreaterThan(0);
     expect(row.callOut.labourCents).toBe(3 * tech.hourlyRateCents);
-    expect(row.callOut.totalCents).toBe(row.callOut.travelCents + row.callOut.labourCents + row.callOut.mileageCents);
+    expect(row.callOut.totalCents).toBe(
+      row.callOut.travelCents + row.callOut.labourCents + row.callOut.mileageCents,
+    );
     expect(row.rating.count).toBe(tech.ratingCount);
-    expect(row.rating.score).toBeCloseTo(bayesianAverage({ count: tech.ratingCount, sumStars: tech.starSum }), 4);
+    expect(row.rating.score).toBeCloseTo(
+      bayesianAverage({ count: tech.ratingCount, sumStars: tech.starSum }),
+      4,
+    );
     expect(res.body.scoreSource).toMatch(/Bayesian average/);
   });
 
@@ -121,6 +149,13 @@ describe("directory: rows", () => {
     expect(res.body.emptyReason.filter).toBe("q");
     expect(res.body.emptyReason.removed).toBeGreaterThan(0);
   });
+
+  it("names the only filter when a single filter empties the list", async () => {
+    const res = await buyer.get("/api/directory").query({ q: `nobody-${world.tag}` });
+
+    expect(res.status).toBe(200);
+    expect(res.body.emptyReason).toEqual({ filter: "q", removed: expect.any(Number) });
+  });
 });
 
 describe("directory: sorting and pages", () => {
@@ -128,9 +163,19 @@ describe("directory: sorting and pages", () => {
     ["distance", (r: { distanceKm: number }) => r.distanceKm, 1],
     ["score", (r: { rating: { score: number } }) => r.rating.score, -1],
     ["hourlyRate", (r: { hourlyRateCents: number }) => r.hourlyRateCents, 1],
-    ["soonestLapse", (r: { earliestLapse: string | null }) => (r.earliestLapse ? Date.parse(r.earliestLapse) : Number.MAX_SAFE_INTEGER), 1],
+    [
+      "soonestLapse",
+      (r: { earliestLapse: string | null }) =>
+        r.earliestLapse ? Date.parse(r.earliestLapse) : Number.MAX_SAFE_INTEGER,
+      1,
+    ],
   ] as const)("sorts by %s across pages", async (sort, key, direction) => {
-    const { rows } = await readAllPages(buyer, { siteId: String(world.site.id), radiusKm: "400", sort, limit: "4" });
+    const { rows } = await readAllPages(buyer, {
+      siteId: String(world.site.id),
+      radiusKm: "400",
+      sort,
+      limit: "4",
+    });
 
     const values = rows.map((r) => key(r as never) * direction);
     expect(values).toEqual([...values].sort((a, b) => a - b));
@@ -179,7 +224,10 @@ describe("directory: access", () => {
   it("answers 403 to a service company's admin", async () => {
     const { users } = await buildCompany("service", ["provider_admin"]);
     const agent = agentFor(t.app);
-    await agent.post("/api/auth/sign-in").send({ email: users.provider_admin!.email, password: TEST_PASSWORD }).expect(200);
+    await agent
+      .post("/api/auth/sign-in")
+      .send({ email: users.provider_admin!.email, password: TEST_PASSWORD })
+      .expect(200);
 
     const res = await agent.get("/api/directory");
 
@@ -189,7 +237,10 @@ describe("directory: access", () => {
   it("answers 404 for another shop's site or requirement set", async () => {
     const { users } = await buildCompany("shop", ["buyer"]);
     const other = agentFor(t.app);
-    await other.post("/api/auth/sign-in").send({ email: users.buyer!.email, password: TEST_PASSWORD }).expect(200);
+    await other
+      .post("/api/auth/sign-in")
+      .send({ email: users.buyer!.email, password: TEST_PASSWORD })
+      .expect(200);
 
     const site = await other.get("/api/directory").query({ siteId: world.site.id });
     const set = await other.get("/api/directory").query({ requirementSetId: world.requirementSetId });

@@ -13,21 +13,31 @@ beforeAll(async () => {
   t = buildTestApp();
   world = await buildDirectoryWorld({ seed: 5, count: 12, companies: 3 });
   buyer = agentFor(t.app);
-  await buyer.post("/api/auth/sign-in").send({ email: world.buyerEmail, password: TEST_PASSWORD }).expect(200);
+  await buyer
+    .post("/api/auth/sign-in")
+    .send({ email: world.buyerEmail, password: TEST_PASSWORD })
+    .expect(200);
 });
 afterAll(() => t.close());
 
-const listed = () => world.technicians.filter((x) => x.active && (x.baseline === "cleared" || x.baseline === "lapsing"));
+const listed = () =>
+  world.technicians.filter((x) => x.active && (x.baseline === "cleared" || x.baseline === "lapsing"));
 
 describe("technician page for buyers", () => {
   it("shows verified credentials in force, with download ids for insurance certificates only", async () => {
-    const tech = listed().find((x) => x.credentials.some((c) => c.state === "verified" && (c.lapsesAt === null || c.lapsesAt > new Date())))!;
+    const tech = listed().find((x) =>
+      x.credentials.some((c) => c.state === "verified" && (c.lapsesAt === null || c.lapsesAt > new Date())),
+    )!;
 
     const res = await buyer.get(`/api/directory/technicians/${tech.id}`);
 
     expect(res.status).toBe(200);
-    const expected = tech.credentials.filter((c) => c.state === "verified" && (c.lapsesAt === null || c.lapsesAt > new Date()));
-    expect(res.body.credentials.map((c: { typeCode: string }) => c.typeCode).sort()).toEqual(expected.map((c) => c.typeCode).sort());
+    const expected = tech.credentials.filter(
+      (c) => c.state === "verified" && (c.lapsesAt === null || c.lapsesAt > new Date()),
+    );
+    expect(res.body.credentials.map((c: { typeCode: string }) => c.typeCode).sort()).toEqual(
+      expected.map((c) => c.typeCode).sort(),
+    );
     for (const c of res.body.credentials) {
       expect(c.documentId === null).toBe(c.category !== "insurance");
     }
@@ -38,15 +48,27 @@ describe("technician page for buyers", () => {
     const tech = listed()[0]!;
     const [set] = await sequelize().query<{ id: number }>(
       `INSERT INTO requirement_sets (company_id, name, requirements) VALUES ($1, 'Needs confined space', $2) RETURNING id`,
-      { bind: [world.shopId, JSON.stringify([{ id: "cs", label: "Confined space entry", typeCodes: ["confined_space"] }])], type: QueryTypes.SELECT },
+      {
+        bind: [
+          world.shopId,
+          JSON.stringify([{ id: "cs", label: "Confined space entry", typeCodes: ["confined_space"] }]),
+        ],
+        type: QueryTypes.SELECT,
+      },
     );
 
     const res = await buyer.get(`/api/directory/technicians/${tech.id}`);
 
-    const computed = res.body.requirementSets.find((s: { requirementSetId: number }) => s.requirementSetId === set!.id);
+    const computed = res.body.requirementSets.find(
+      (s: { requirementSetId: number }) => s.requirementSetId === set!.id,
+    );
     expect(computed).toMatchObject({ standing: "not_cleared", source: "computed" });
-    expect(computed.unmet).toEqual([{ label: "Confined space entry", reason: "missing", detail: expect.stringMatching(/No .* on file/) }]);
-    const stored = res.body.requirementSets.find((s: { requirementSetId: number }) => s.requirementSetId === world.requirementSetId);
+    expect(computed.unmet).toEqual([
+      { label: "Confined space entry", reason: "missing", detail: expect.stringMatching(/No .* on file/) },
+    ]);
+    const stored = res.body.requirementSets.find(
+      (s: { requirementSetId: number }) => s.requirementSetId === world.requirementSetId,
+    );
     if (tech.setStanding) expect(stored).toMatchObject({ standing: tech.setStanding, source: "stored" });
   });
 
@@ -58,14 +80,20 @@ describe("technician page for buyers", () => {
     const estimate = res.body.estimates.find((e: { siteId: number }) => e.siteId === world.site.id);
     // Travel is billed portal to portal, both ways, at the travel rate (common practice, TRADE-FACTS 8); driveHours is
     // shown rounded to 0.01 h, hence the tolerance of one rounding step each way.
-    expect(Math.abs(estimate.callOut.travelCents - 2 * estimate.driveHours * res.body.travelRateCents)).toBeLessThanOrEqual(0.01 * res.body.travelRateCents + 1);
-    expect(estimate.callOut.totalCents).toBe(estimate.callOut.travelCents + estimate.callOut.labourCents + estimate.callOut.mileageCents);
+    expect(
+      Math.abs(estimate.callOut.travelCents - 2 * estimate.driveHours * res.body.travelRateCents),
+    ).toBeLessThanOrEqual(0.01 * res.body.travelRateCents + 1);
+    expect(estimate.callOut.totalCents).toBe(
+      estimate.callOut.travelCents + estimate.callOut.labourCents + estimate.callOut.mileageCents,
+    );
     expect(estimate.callOut.labourCents).toBe(4 * tech.hourlyRateCents);
     expect(res.body.rating.count).toBe(tech.ratingCount);
   });
 
   it("answers 404 for a technician whose baseline standing is not cleared", async () => {
-    const hidden = world.technicians.find((x) => x.baseline === "not_cleared" || x.baseline === null || !x.active)!;
+    const hidden = world.technicians.find(
+      (x) => x.baseline === "not_cleared" || x.baseline === null || !x.active,
+    )!;
 
     const res = await buyer.get(`/api/directory/technicians/${hidden.id}`);
 
@@ -75,7 +103,10 @@ describe("technician page for buyers", () => {
   it("answers 401 signed out and 403 to a provider", async () => {
     const { users } = await buildCompany("service", ["provider_admin"]);
     const provider = agentFor(t.app);
-    await provider.post("/api/auth/sign-in").send({ email: users.provider_admin!.email, password: TEST_PASSWORD }).expect(200);
+    await provider
+      .post("/api/auth/sign-in")
+      .send({ email: users.provider_admin!.email, password: TEST_PASSWORD })
+      .expect(200);
     const id = listed()[0]!.id;
 
     const anonymous = await request(t.app).get(`/api/directory/technicians/${id}`);

@@ -17,17 +17,35 @@ const DAY = 86_400_000;
 async function shopWithRoster() {
   const { users, company } = await buildCompany("shop", ["buyer"]);
   const agent = agentFor(t.app);
-  await agent.post("/api/auth/sign-in").send({ email: users.buyer!.email, password: TEST_PASSWORD }).expect(200);
+  await agent
+    .post("/api/auth/sign-in")
+    .send({ email: users.buyer!.email, password: TEST_PASSWORD })
+    .expect(200);
   const provider = await buildCompany("service", []);
   const technician = await Technician.create({
-    companyId: provider.company.id, name: `Dagny Varga ${provider.tag}`, email: null, phone: null, technologies: ["grinder"], controlFamilies: [],
-    postalCode: "60601", latitude: 41.8858, longitude: -87.6181, serviceRadiusKm: 100, hourlyRateCents: 13000, travelRateCents: 9000,
+    companyId: provider.company.id,
+    name: `Dagny Varga ${provider.tag}`,
+    email: null,
+    phone: null,
+    technologies: ["grinder"],
+    controlFamilies: [],
+    postalCode: "60601",
+    latitude: 41.8858,
+    longitude: -87.6181,
+    serviceRadiusKm: 100,
+    hourlyRateCents: 13000,
+    travelRateCents: 9000,
   });
   await storeBaseline(technician.id, "cleared", null);
   return { agent, buyer: users.buyer!, shop: company, provider: provider.company, technician };
 }
 
-async function storeBaseline(technicianId: number, standing: Standing, earliestLapse: Date | null, results: unknown[] = []) {
+async function storeBaseline(
+  technicianId: number,
+  standing: Standing,
+  earliestLapse: Date | null,
+  results: unknown[] = [],
+) {
   await sequelize().query(
     `INSERT INTO technician_standings (technician_id, requirement_set_id, standing, earliest_lapse, results, computed_at)
      VALUES ($1, NULL, $2, $3, $4, now())
@@ -39,18 +57,39 @@ async function storeBaseline(technicianId: number, standing: Standing, earliestL
 
 async function alertsFor(userId: number, email: string) {
   const [notifications, mails] = await Promise.all([
-    sequelize().query<{ kind: string; title: string }>("SELECT kind, title FROM notifications WHERE user_id = $1", { bind: [userId], type: QueryTypes.SELECT }),
-    sequelize().query<{ subject: string }>("SELECT subject FROM outbox_messages WHERE to_address = $1", { bind: [email], type: QueryTypes.SELECT }),
+    sequelize().query<{ kind: string; title: string }>(
+      "SELECT kind, title FROM notifications WHERE user_id = $1",
+      { bind: [userId], type: QueryTypes.SELECT },
+    ),
+    sequelize().query<{ subject: string }>("SELECT subject FROM outbox_messages WHERE to_address = $1", {
+      bind: [email],
+      type: QueryTypes.SELECT,
+    }),
   ]);
   return { notifications, mails };
 }
 
-const change = (technicianId: number, companyId: number, before: Standing, after: Standing, earliestLapse: string | null = null): ChangedStanding => ({
-  technicianId, companyId, requirementSetId: null, before, after, earliestLapse,
+const change = (
+  technicianId: number,
+  companyId: number,
+  before: Standing,
+  after: Standing,
+  earliestLapse: string | null = null,
+): ChangedStanding => ({
+  technicianId,
+  companyId,
+  requirementSetId: null,
+  before,
+  after,
+  earliestLapse,
 });
 
 const lapsedGl = {
-  requirement: { id: "baseline_general_liability", label: "General liability in force", typeCodes: ["general_liability"] },
+  requirement: {
+    id: "baseline_general_liability",
+    label: "General liability in force",
+    typeCodes: ["general_liability"],
+  },
   status: "unmet",
   reason: "lapsed",
   detail: "Commercial general liability lapsed on 2026-12-01.",
@@ -68,7 +107,9 @@ describe("roster alerts", () => {
     await emitStandingsChanged([change(technician.id, provider.id, "cleared", "not_cleared")]);
 
     const { notifications, mails } = await alertsFor(buyer.id, buyer.email);
-    expect(notifications).toEqual([{ kind: "roster_stopped_clearing", title: expect.stringContaining("no longer cleared") }]);
+    expect(notifications).toEqual([
+      { kind: "roster_stopped_clearing", title: expect.stringContaining("no longer cleared") },
+    ]);
     expect(mails).toHaveLength(1);
   });
 
@@ -78,11 +119,17 @@ describe("roster alerts", () => {
     const lapse = new Date(Date.now() + 12 * DAY);
     await storeBaseline(technician.id, "lapsing", lapse);
 
-    await emitStandingsChanged([change(technician.id, provider.id, "cleared", "lapsing", lapse.toISOString())]);
-    await emitStandingsChanged([change(technician.id, provider.id, "cleared", "lapsing", lapse.toISOString())]);
+    await emitStandingsChanged([
+      change(technician.id, provider.id, "cleared", "lapsing", lapse.toISOString()),
+    ]);
+    await emitStandingsChanged([
+      change(technician.id, provider.id, "cleared", "lapsing", lapse.toISOString()),
+    ]);
 
     const { notifications, mails } = await alertsFor(buyer.id, buyer.email);
-    expect(notifications).toEqual([{ kind: "roster_lapse_within_30_days", title: expect.stringContaining("lapses in 12 days") }]);
+    expect(notifications).toEqual([
+      { kind: "roster_lapse_within_30_days", title: expect.stringContaining("lapses in 12 days") },
+    ]);
     expect(mails).toHaveLength(1);
   });
 

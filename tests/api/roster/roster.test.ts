@@ -15,15 +15,32 @@ afterAll(() => t.close());
 async function signedInBuyer() {
   const { users, company } = await buildCompany("shop", ["buyer"]);
   const agent = agentFor(t.app);
-  await agent.post("/api/auth/sign-in").send({ email: users.buyer!.email, password: TEST_PASSWORD }).expect(200);
+  await agent
+    .post("/api/auth/sign-in")
+    .send({ email: users.buyer!.email, password: TEST_PASSWORD })
+    .expect(200);
   return { agent, company, user: users.buyer! };
 }
 
-async function buildRosterableTechnician(standing: Standing, earliestLapse: Date | null = null, name = "Orla Penhallow") {
+async function buildRosterableTechnician(
+  standing: Standing,
+  earliestLapse: Date | null = null,
+  name = "Orla Penhallow",
+) {
   const { company } = await buildCompany("service", []);
   const technician = await Technician.create({
-    companyId: company.id, name, email: null, phone: null, technologies: ["lathe"], controlFamilies: ["S30"], postalCode: "60601",
-    latitude: 41.8858, longitude: -87.6181, serviceRadiusKm: 200, hourlyRateCents: 15000, travelRateCents: 9000,
+    companyId: company.id,
+    name,
+    email: null,
+    phone: null,
+    technologies: ["lathe"],
+    controlFamilies: ["S30"],
+    postalCode: "60601",
+    latitude: 41.8858,
+    longitude: -87.6181,
+    serviceRadiusKm: 200,
+    hourlyRateCents: 15000,
+    travelRateCents: 9000,
   });
   await sequelize().query(
     `INSERT INTO technician_standings (technician_id, requirement_set_id, standing, earliest_lapse, results, computed_at)
@@ -50,8 +67,18 @@ describe("roster", () => {
     expect(addedTech.body).toMatchObject({ kind: "technician", technicianId: one.technician.id });
     expect(addedCompany.body).toMatchObject({ kind: "company", serviceCompanyId: whole.company.id });
     const techEntry = listed.body.find((e: { id: number }) => e.id === addedTech.body.id);
-    expect(techEntry.technicians).toEqual([expect.objectContaining({ technicianId: one.technician.id, standing: "lapsing", nextLapse: lapse.toISOString() })]);
-    expect(listed.body.find((e: { id: number }) => e.id === addedCompany.body.id).technicians.map((x: { technicianId: number }) => x.technicianId)).toEqual([whole.technician.id]);
+    expect(techEntry.technicians).toEqual([
+      expect.objectContaining({
+        technicianId: one.technician.id,
+        standing: "lapsing",
+        nextLapse: lapse.toISOString(),
+      }),
+    ]);
+    expect(
+      listed.body
+        .find((e: { id: number }) => e.id === addedCompany.body.id)
+        .technicians.map((x: { technicianId: number }) => x.technicianId),
+    ).toEqual([whole.technician.id]);
     expect(removed.status).toBe(204);
     expect(afterRemoval.body.map((e: { id: number }) => e.id)).toEqual([addedCompany.body.id]);
   });
@@ -100,7 +127,12 @@ describe("roster", () => {
     const parsed = Papa.parse<string[]>(res.text.trim());
     expect(parsed.data[0]).toEqual(["technician", "company", "standing", "next lapse", "added at"]);
     // A leading "=" is escaped with a quote so spreadsheets never evaluate it (OWASP "CSV Injection").
-    expect(parsed.data[1]?.slice(0, 4)).toEqual(["'=Formula Quist", company.name, "Lapsing", lapse.toISOString()]);
+    expect(parsed.data[1]?.slice(0, 4)).toEqual([
+      "'=Formula Quist",
+      company.name,
+      "Lapsing",
+      lapse.toISOString(),
+    ]);
     expect(parsed.data).toHaveLength(2);
   });
 
@@ -108,10 +140,14 @@ describe("roster", () => {
     const owner = await signedInBuyer();
     const other = await signedInBuyer();
     const { technician } = await buildRosterableTechnician("cleared");
-    const entry = (await owner.agent.post("/api/roster").send({ technicianId: technician.id }).expect(201)).body;
+    const entry = (await owner.agent.post("/api/roster").send({ technicianId: technician.id }).expect(201))
+      .body;
     const { users } = await buildCompany("service", ["provider_admin"]);
     const provider = agentFor(t.app);
-    await provider.post("/api/auth/sign-in").send({ email: users.provider_admin!.email, password: TEST_PASSWORD }).expect(200);
+    await provider
+      .post("/api/auth/sign-in")
+      .send({ email: users.provider_admin!.email, password: TEST_PASSWORD })
+      .expect(200);
 
     const anonymous = await request(t.app).get("/api/roster");
     const forbidden = await provider.get("/api/roster/export.csv");

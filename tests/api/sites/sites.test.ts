@@ -13,12 +13,21 @@ afterAll(() => t.close());
 async function signedIn(kind: CompanyKind, role: Role) {
   const { users, company } = await buildCompany(kind, [role]);
   const agent = agentFor(t.app);
-  await agent.post("/api/auth/sign-in").send({ email: users[role]!.email, password: TEST_PASSWORD }).expect(200);
+  await agent
+    .post("/api/auth/sign-in")
+    .send({ email: users[role]!.email, password: TEST_PASSWORD })
+    .expect(200);
   return { agent, company };
 }
 
 const plant = { name: "North Plant", addressLine: "400 Lathe Street", postalCode: "60601" };
-const mill = { builder: "Aldenmark", controlFamily: "K7", technology: "mill", model: "VX-500", serialNumber: "AM-1001" };
+const mill = {
+  builder: "Aldenmark",
+  controlFamily: "K7",
+  technology: "mill",
+  model: "VX-500",
+  serialNumber: "AM-1001",
+};
 
 describe("shop sites", () => {
   it("places a new site at its ZIP code and suggests the ZIP's time zone", async () => {
@@ -28,7 +37,14 @@ describe("shop sites", () => {
 
     expect(res.status).toBe(201);
     // zipcodes 8.0.0 centroid of 60601 (TRADE-FACTS 9 check value)
-    expect(res.body).toMatchObject({ name: "North Plant", postalCode: "60601", city: "Chicago", state: "IL", latitude: 41.8858, longitude: -87.6181 });
+    expect(res.body).toMatchObject({
+      name: "North Plant",
+      postalCode: "60601",
+      city: "Chicago",
+      state: "IL",
+      latitude: 41.8858,
+      longitude: -87.6181,
+    });
     expect(res.body.timeZone).toBe("America/Chicago");
   });
 
@@ -64,7 +80,9 @@ describe("shop sites", () => {
     const { agent } = await signedIn("shop", "buyer");
     const created = (await agent.post("/api/sites").send(plant).expect(201)).body;
 
-    const edited = await agent.put(`/api/sites/${created.id}`).send({ ...plant, name: "North Plant 2", postalCode: "53202" });
+    const edited = await agent
+      .put(`/api/sites/${created.id}`)
+      .send({ ...plant, name: "North Plant 2", postalCode: "53202" });
     const listed = await agent.get("/api/sites");
     const archived = await agent.delete(`/api/sites/${created.id}`);
     const afterArchive = await agent.get("/api/sites");
@@ -116,13 +134,20 @@ describe("site equipment", () => {
     const site = (await agent.post("/api/sites").send(plant).expect(201)).body;
 
     const added = await agent.post(`/api/sites/${site.id}/equipment`).send(mill);
-    const edited = await agent.put(`/api/sites/${site.id}/equipment/${added.body.id}`).send({ ...mill, model: "VX-700" });
+    const edited = await agent
+      .put(`/api/sites/${site.id}/equipment/${added.body.id}`)
+      .send({ ...mill, model: "VX-700" });
     const listed = await agent.get(`/api/sites/${site.id}/equipment`);
     const removed = await agent.delete(`/api/sites/${site.id}/equipment/${added.body.id}`);
     const afterRemoval = await agent.get(`/api/sites/${site.id}/equipment`);
 
     expect(added.status).toBe(201);
-    expect(added.body).toMatchObject({ siteId: site.id, builder: "Aldenmark", controlFamily: "K7", technology: "mill" });
+    expect(added.body).toMatchObject({
+      siteId: site.id,
+      builder: "Aldenmark",
+      controlFamily: "K7",
+      technology: "mill",
+    });
     expect(edited.body.model).toBe("VX-700");
     expect(listed.body).toHaveLength(1);
     expect(removed.status).toBe(204);
@@ -162,7 +187,14 @@ describe("postal-code lookup", () => {
 
     expect(res.status).toBe(200);
     // zipcodes 8.0.0 and zipcode-to-timezone 0.0.9 data
-    expect(res.body).toEqual({ postalCode: "59101", city: "Billings", state: "MT", latitude: 45.7745, longitude: -108.5005, timeZone: "America/Denver" });
+    expect(res.body).toEqual({
+      postalCode: "59101",
+      city: "Billings",
+      state: "MT",
+      latitude: 45.7745,
+      longitude: -108.5005,
+      timeZone: "America/Denver",
+    });
   });
 
   it("answers 404 Unknown ZIP code for a well-formed code that does not exist", async () => {

@@ -24,7 +24,12 @@ export function Component() {
         title="Outbox"
         description="Mail the app sent, as caught by the development mail catcher. Nothing here left the machine."
         actions={
-          <Button variant="secondary" pending={isFetching} pendingLabel="Refreshing…" onClick={() => void refetch()}>
+          <Button
+            variant="secondary"
+            pending={isFetching}
+            pendingLabel="Refreshing…"
+            onClick={() => void refetch()}
+          >
             Refresh
           </Button>
         }

@@ -7,7 +7,10 @@ import { UsersTable } from "@/features/admin/components/users-table.tsx";
 import { queryClient } from "@/lib/query-client.ts";
 
 export async function loader() {
-  await Promise.all([queryClient.ensureQueryData(usersQuery()), queryClient.ensureQueryData(companiesQuery())]);
+  await Promise.all([
+    queryClient.ensureQueryData(usersQuery()),
+    queryClient.ensureQueryData(companiesQuery()),
+  ]);
   return null;
 }
 
@@ -17,7 +20,10 @@ export function Component() {
 
   return (
     <>
-      <PageHeader title="Users" description="Everyone who can sign in, by company. Invite people; they choose their own password." />
+      <PageHeader
+        title="Users"
+        description="Everyone who can sign in, by company. Invite people; they choose their own password."
+      />
       <div className="grid items-start gap-8 lg:grid-cols-[minmax(0,1fr)_22rem]">
         <section aria-labelledby="users-heading">
           <h2 id="users-heading" className="mb-3 text-lg font-semibold text-ink-900">

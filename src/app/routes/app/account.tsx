@@ -7,7 +7,11 @@ import { Spinner } from "@/components/ui/spinner.tsx";
 import { useCurrentUser } from "@/features/accounts/api/get-current-user.ts";
 import { useSignOut } from "@/features/accounts/api/sign-out.ts";
 
-const companyKindWords = { service: "Field-service company", shop: "Machine shop", platform: "Platform" } as const;
+const companyKindWords = {
+  service: "Field-service company",
+  shop: "Machine shop",
+  platform: "Platform",
+} as const;
 
 export function Component() {
   const { data: user } = useCurrentUser();
@@ -26,7 +30,10 @@ export function Component() {
   return (
     <>
       <PageHeader title="Account" description="Who you are signed in as." />
-      <section aria-labelledby="account-details" className="max-w-2xl rounded-lg border border-ink-100 bg-white">
+      <section
+        aria-labelledby="account-details"
+        className="max-w-2xl rounded-lg border border-ink-100 bg-white"
+      >
         <h2 id="account-details" className="sr-only">
           Your details
         </h2>
@@ -44,7 +51,9 @@ export function Component() {
           variant="secondary"
           pending={signOut.isPending}
           pendingLabel="Signing out…"
-          onClick={() => signOut.mutate(undefined, { onSuccess: () => navigate(paths.auth.signIn, { replace: true }) })}
+          onClick={() =>
+            signOut.mutate(undefined, { onSuccess: () => navigate(paths.auth.signIn, { replace: true }) })
+          }
         >
           Sign out
         </Button>

@@ -1,6 +1,12 @@
 import type { ReactNode } from "react";
 
-type AuthCardProps = { title: string; intro?: ReactNode; children: ReactNode; footer?: ReactNode; wide?: boolean };
+type AuthCardProps = {
+  title: string;
+  intro?: ReactNode;
+  children: ReactNode;
+  footer?: ReactNode;
+  wide?: boolean;
+};
 
 /** The card every public page sits in; its title is the page's h1 and the document title. */
 export function AuthCard({ title, intro, children, footer, wide = false }: AuthCardProps) {

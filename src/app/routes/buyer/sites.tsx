@@ -1,10 +1,104 @@
-import { PlaceholderPage } from "@/components/ui/placeholder-page.tsx";
+import { useState } from "react";
+import { useSuspenseQuery } from "@tanstack/react-query";
+import { Button } from "@/components/ui/button.tsx";
+import { EmptyState } from "@/components/ui/empty-state.tsx";
+import { PageHeader } from "@/components/ui/page-header.tsx";
+import { usTimeZoneOptions } from "@/features/accounts/components/us-time-zones.ts";
+import { useArchiveSite } from "@/features/sites/api/archive-site.ts";
+import { sitesQuery } from "@/features/sites/api/get-sites.ts";
+import { useSaveSite } from "@/features/sites/api/save-site.ts";
+import type { Site } from "@/features/sites/api/site-shapes.ts";
+import { SiteEquipment } from "@/features/sites/components/site-equipment.tsx";
+import { SiteForm } from "@/features/sites/components/site-form.tsx";
+import { queryClient } from "@/lib/query-client.ts";
+
+export async function loader() {
+  await queryClient.ensureQueryData(sitesQuery());
+  return null;
+}
+
+function SiteCard({ site }: { site: Site }) {
+  const [editing, setEditing] = useState(false);
+  const save = useSaveSite();
+  const archive = useArchiveSite();
+  return (
+    <li className="space-y-4 rounded-lg border border-ink-100 bg-white p-4">
+      {editing ? (
+        <SiteForm
+          site={site}
+          timeZoneOptions={usTimeZoneOptions}
+          pending={save.isPending}
+          serverError={save.error}
+          onSubmit={(input) => save.mutate({ siteId: site.id, input }, { onSuccess: () => setEditing(false) })}
+          onCancel={() => setEditing(false)}
+        />
+      ) : (
+        <div className="flex flex-wrap items-start justify-between gap-3">
+          <div>
+            <h2 className="text-lg font-semibold text-ink-900">{site.name}</h2>
+            <p className="text-sm text-ink-700">
+              {site.addressLine}, {site.city ? `${site.city}, ${site.state ?? ""} ` : ""}
+              {site.postalCode} · {site.timeZone}
+            </p>
+          </div>
+          <div className="flex gap-2">
+            <Button variant="secondary" onClick={() => setEditing(true)} aria-label={`Edit ${site.name}`}>
+              Edit
+            </Button>
+            <Button
+              variant="danger"
+              pending={archive.isPending}
+              onClick={() => archive.mutate(site.id)}
+              aria-label={`Archive ${site.name}`}
+            >
+              Archive
+            </Button>
+          </div>
+        </div>
+      )}
+      <SiteEquipment siteId={site.id} siteName={site.name} />
+    </li>
+  );
+}
 
 export function Component() {
+  const { data: sites } = useSuspenseQuery(sitesQuery());
+  const [adding, setAdding] = useState(false);
+  const save = useSaveSite();
+  const add = (
+    <Button onClick={() => setAdding(true)} disabled={adding}>
+      Add a site
+    </Button>
+  );
   return (
-    <PlaceholderPage
-      title="Sites"
-      purpose="Your shop's sites and the machines at each; picking a machine fills the directory's filters."
-    />
+    <>
+      <PageHeader
+        title="Sites"
+        description="Your shop's sites and the machines at each; picking a machine fills the directory's filters."
+        actions={add}
+      />
+      {adding && (
+        <section aria-label="New site" className="mb-6 rounded-lg border border-ink-100 bg-white p-4">
+          <SiteForm
+            timeZoneOptions={usTimeZoneOptions}
+            pending={save.isPending}
+            serverError={save.error}
+            onSubmit={(input) => save.mutate({ input }, { onSuccess: () => setAdding(false) })}
+            onCancel={() => setAdding(false)}
+          />
+        </section>
+      )}
+      {sites.length === 0 && !adding ? (
+        <EmptyState title="No sites yet" action={add}>
+          Add the sites where technicians will work; the directory measures distances from them.
+        </EmptyState>
+      ) : (
+        <ul className="space-y-4">
+          {sites.map((site) => (
+            <SiteCard key={site.id} site={site} />
+          ))}
+        </ul>
+      )}
+    </>
   );
 }

@@ -3,6 +3,7 @@ import type { RequestPasswordReset } from "@shared/accounts/schemas.ts";
 import { api } from "@/lib/api-client.ts";
 
 /** The server answers 202 whether or not the address is known, so nobody can probe for accounts. */
-export const requestPasswordReset = (input: RequestPasswordReset) => api.send("POST", "/auth/password-reset", input);
+export const requestPasswordReset = (input: RequestPasswordReset) =>
+  api.send("POST", "/auth/password-reset", input);
 
 export const useRequestPasswordReset = () => useMutation({ mutationFn: requestPasswordReset });

@@ -28,7 +28,10 @@ export function ForgotPasswordForm() {
   if (sentTo) {
     // The same words whether or not the address has an account, as the server's answer is the same.
     return (
-      <div role="status" className="space-y-2 rounded-md border border-ink-100 bg-ink-50 px-4 py-3 text-ink-900">
+      <div
+        role="status"
+        className="space-y-2 rounded-md border border-ink-100 bg-ink-50 px-4 py-3 text-ink-900"
+      >
         <p className="font-semibold">Check your e-mail</p>
         <p className="text-sm">
           If an account uses {sentTo}, we have sent it a link to choose a new password. The link works once.
@@ -40,7 +43,14 @@ export function ForgotPasswordForm() {
   return (
     <form noValidate onSubmit={submit} className="space-y-4">
       <FormError error={problem} labels={{ email: "E-mail" }} />
-      <TextField label="E-mail" name="email" type="email" autoComplete="email" required error={fields.email} />
+      <TextField
+        label="E-mail"
+        name="email"
+        type="email"
+        autoComplete="email"
+        required
+        error={fields.email}
+      />
       <Button type="submit" pending={request.isPending} pendingLabel="Sending…" className="w-full">
         Send reset link
       </Button>

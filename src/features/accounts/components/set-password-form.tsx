@@ -41,7 +41,12 @@ export function SetPasswordForm({ token, onDone }: { token: string; onDone: () =
         error={fields.password}
       />
       <label className="flex min-h-10 items-center gap-2 text-sm text-ink-900">
-        <input type="checkbox" checked={shown} onChange={(e) => setShown(e.target.checked)} className="size-4 accent-ink-700" />
+        <input
+          type="checkbox"
+          checked={shown}
+          onChange={(e) => setShown(e.target.checked)}
+          className="size-4 accent-ink-700"
+        />
         Show the password as I type
       </label>
       <Button type="submit" pending={setPassword.isPending} pendingLabel="Saving…" className="w-full">

@@ -29,7 +29,14 @@ export function SignInForm({ onSignedIn }: { onSignedIn: (user: CurrentUser) => 
   return (
     <form noValidate onSubmit={submit} className="space-y-4">
       <FormError error={problem} labels={labels} />
-      <TextField label={labels.email} name="email" type="email" autoComplete="username" required error={fields.email} />
+      <TextField
+        label={labels.email}
+        name="email"
+        type="email"
+        autoComplete="username"
+        required
+        error={fields.email}
+      />
       <TextField
         label={labels.password}
         name="password"

@@ -49,11 +49,29 @@ export function SignUpForm({ onSignedUp }: { onSignedUp: (user: CurrentUser) => 
   return (
     <form noValidate onSubmit={submit} className="space-y-5">
       <FormError error={problem} labels={labels} plainWords={plainWords} />
-      <ChoiceGroup legend={labels.kind} name="kind" options={kindOptions} defaultValue="service" error={fields.kind} />
+      <ChoiceGroup
+        legend={labels.kind}
+        name="kind"
+        options={kindOptions}
+        defaultValue="service"
+        error={fields.kind}
+      />
       <fieldset className="space-y-4">
         <legend className="text-base font-semibold text-ink-900">Company</legend>
-        <TextField label={labels.companyName} name="companyName" autoComplete="organization" required error={fields.companyName} />
-        <TextField label={labels.addressLine} name="addressLine" autoComplete="street-address" required error={fields.addressLine} />
+        <TextField
+          label={labels.companyName}
+          name="companyName"
+          autoComplete="organization"
+          required
+          error={fields.companyName}
+        />
+        <TextField
+          label={labels.addressLine}
+          name="addressLine"
+          autoComplete="street-address"
+          required
+          error={fields.addressLine}
+        />
         <div className="grid gap-4 sm:grid-cols-[10rem_1fr]">
           <TextField
             label={labels.postalCode}
@@ -78,7 +96,14 @@ export function SignUpForm({ onSignedUp }: { onSignedUp: (user: CurrentUser) => 
       <fieldset className="space-y-4">
         <legend className="text-base font-semibold text-ink-900">You</legend>
         <TextField label={labels.name} name="name" autoComplete="name" required error={fields.name} />
-        <TextField label={labels.email} name="email" type="email" autoComplete="email" required error={fields.email} />
+        <TextField
+          label={labels.email}
+          name="email"
+          type="email"
+          autoComplete="email"
+          required
+          error={fields.email}
+        />
         <TextField
           label={labels.password}
           name="password"
@@ -89,7 +114,12 @@ export function SignUpForm({ onSignedUp }: { onSignedUp: (user: CurrentUser) => 
           error={fields.password}
         />
       </fieldset>
-      <Button type="submit" pending={signUp.isPending} pendingLabel="Creating your account…" className="w-full">
+      <Button
+        type="submit"
+        pending={signUp.isPending}
+        pendingLabel="Creating your account…"
+        className="w-full"
+      >
         Create account
       </Button>
     </form>

@@ -6,6 +6,7 @@ import { adminKeys } from "./admin-keys.ts";
 
 export const getOutbox = () => api.get("/admin/outbox", z.array(caughtMailSchema));
 
-export const outboxQuery = () => queryOptions({ queryKey: adminKeys.outbox(), queryFn: getOutbox, staleTime: 0 });
+export const outboxQuery = () =>
+  queryOptions({ queryKey: adminKeys.outbox(), queryFn: getOutbox, staleTime: 0 });
 
 export const useOutbox = () => useQuery(outboxQuery());

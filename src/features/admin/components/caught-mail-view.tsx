@@ -23,7 +23,10 @@ function TextWithLinks({ text }: { text: string }) {
 
 export function CaughtMailView({ mail }: { mail: CaughtMail }) {
   return (
-    <article aria-labelledby={`mail-${mail.id}-subject`} className="rounded-lg border border-ink-100 bg-white">
+    <article
+      aria-labelledby={`mail-${mail.id}-subject`}
+      className="rounded-lg border border-ink-100 bg-white"
+    >
       <header className="border-b border-ink-100 px-4 py-3">
         <h2 id={`mail-${mail.id}-subject`} className="text-lg font-semibold text-ink-900">
           {mail.subject}

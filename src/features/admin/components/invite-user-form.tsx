@@ -29,7 +29,10 @@ export function InviteUserForm({ companies }: { companies: AdminCompany[] }) {
   const invite = useInviteUser();
   const problem = invalid ?? invite.error;
   const fields = fieldErrorsOf(problem, plainWords);
-  const companyOptions = companies.map((c) => ({ value: String(c.id), label: `${c.name} (${kindWords[c.kind]})` }));
+  const companyOptions = companies.map((c) => ({
+    value: String(c.id),
+    label: `${c.name} (${kindWords[c.kind]})`,
+  }));
 
   const submit = (event: FormEvent<HTMLFormElement>) => {
     event.preventDefault();
@@ -55,12 +58,22 @@ export function InviteUserForm({ companies }: { companies: AdminCompany[] }) {
         Invite a user
       </h2>
       {invited && (
-        <p role="status" className="rounded-md border-l-4 border-emerald-700 bg-emerald-50 px-4 py-3 text-sm text-ink-900">
+        <p
+          role="status"
+          className="rounded-md border-l-4 border-emerald-700 bg-emerald-50 px-4 py-3 text-sm text-ink-900"
+        >
           Invitation sent to {invited}. The e-mail holds a link to choose a password.
         </p>
       )}
       <FormError error={problem} labels={labels} plainWords={plainWords} />
-      <TextField label={labels.email} name="email" type="email" autoComplete="off" required error={fields.email} />
+      <TextField
+        label={labels.email}
+        name="email"
+        type="email"
+        autoComplete="off"
+        required
+        error={fields.email}
+      />
       <TextField label={labels.name} name="name" autoComplete="off" required error={fields.name} />
       <SelectField
         label={labels.companyId}

@@ -46,7 +46,9 @@ export function OutboxTable({ mail, openId, onOpen }: OutboxTableProps) {
       // ISO 8601 instants sort correctly as text; newest first.
       initialSorting={[{ id: "receivedAt", desc: true }]}
       isRowSelected={(m) => m.id === openId}
-      empty={<EmptyState title="No mail caught yet">Mail the app sends in development lands here.</EmptyState>}
+      empty={
+        <EmptyState title="No mail caught yet">Mail the app sends in development lands here.</EmptyState>
+      }
     />
   );
 }

@@ -1,0 +1,7 @@
+import { mailLinkLoader } from "./mail-link-loader.ts";
+
+export const loader = mailLinkLoader("documents");
+
+export function Component() {
+  return null;
+}

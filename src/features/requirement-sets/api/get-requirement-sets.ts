@@ -1,0 +1,12 @@
+import { queryOptions, useQuery } from "@tanstack/react-query";
+import { z } from "zod";
+import { api } from "@/lib/api-client.ts";
+import { requirementSetKeys } from "./requirement-set-keys.ts";
+import { requirementSetSchema } from "./requirement-set-shapes.ts";
+
+export const getRequirementSets = () => api.get("/requirement-sets", z.array(requirementSetSchema));
+
+export const requirementSetsQuery = () =>
+  queryOptions({ queryKey: requirementSetKeys.list(), queryFn: getRequirementSets });
+
+export const useRequirementSets = () => useQuery(requirementSetsQuery());

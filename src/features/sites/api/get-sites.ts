@@ -1,0 +1,11 @@
+import { queryOptions, useQuery } from "@tanstack/react-query";
+import { z } from "zod";
+import { api } from "@/lib/api-client.ts";
+import { siteKeys } from "./site-keys.ts";
+import { siteSchema } from "./site-shapes.ts";
+
+export const getSites = () => api.get("/sites", z.array(siteSchema));
+
+export const sitesQuery = () => queryOptions({ queryKey: siteKeys.list(), queryFn: getSites });
+
+export const useSites = () => useQuery(sitesQuery());

@@ -1,0 +1,90 @@
+import { useState, type FormEvent } from "react";
+import { equipmentInputSchema, type EquipmentInput } from "@shared/sites/schemas.ts";
+import { machineTechnologies, technologyLabels } from "@shared/technicians/schemas.ts";
+import { Button } from "@/components/ui/button.tsx";
+import { FormError } from "@/components/ui/form-error.tsx";
+import { SelectField } from "@/components/ui/select-field.tsx";
+import { TextField } from "@/components/ui/text-field.tsx";
+import { fieldErrorsOf } from "@/lib/field-errors.ts";
+import { readForm } from "@/lib/read-form.ts";
+import type { Equipment } from "../api/site-shapes.ts";
+
+const labels = {
+  builder: "Machine builder",
+  controlFamily: "Control family",
+  technology: "Technology",
+  model: "Model",
+  serialNumber: "Serial number",
+};
+
+export const technologyOptions = machineTechnologies.map((t) => ({ value: t, label: technologyLabels[t] }));
+
+type EquipmentFormProps = {
+  equipment?: Equipment | undefined;
+  pending: boolean;
+  serverError: unknown;
+  onSubmit: (input: EquipmentInput) => void;
+  onCancel?: () => void;
+};
+
+/** One machine at a site; what it says fills the directory's technology and control-family filters. */
+export function EquipmentForm({ equipment, pending, serverError, onSubmit, onCancel }: EquipmentFormProps) {
+  const [invalid, setInvalid] = useState<unknown>(null);
+  const problem = invalid ?? serverError;
+  const fields = fieldErrorsOf(problem);
+
+  const submit = (event: FormEvent<HTMLFormElement>) => {
+    event.preventDefault();
+    const form = event.currentTarget;
+    const values = readForm(form);
+    const parsed = equipmentInputSchema.safeParse({ ...values, serialNumber: values.serialNumber || undefined });
+    if (!parsed.success) {
+      setInvalid(parsed.error);
+      return;
+    }
+    setInvalid(null);
+    onSubmit(parsed.data);
+    if (!equipment) form.reset();
+  };
+
+  return (
+    <form noValidate onSubmit={submit} className="space-y-3" aria-label={equipment ? "Edit machine" : "Add a machine"}>
+      <FormError error={problem} labels={labels} />
+      <div className="grid gap-3 sm:grid-cols-3">
+        <TextField label={labels.builder} name="builder" defaultValue={equipment?.builder} error={fields.builder} />
+        <TextField
+          label={labels.controlFamily}
+          name="controlFamily"
+          defaultValue={equipment?.controlFamily}
+          error={fields.controlFamily}
+        />
+        <SelectField
+          label={labels.technology}
+          name="technology"
+          options={technologyOptions}
+          placeholder="Choose"
+          defaultValue={equipment?.technology ?? ""}
+          error={fields.technology}
+        />
+        <TextField label={labels.model} name="model" defaultValue={equipment?.model} error={fields.model} />
+        <TextField
+          label={labels.serialNumber}
+          name="serialNumber"
+          defaultValue={equipment?.serialNumber ?? ""}
+          hint="Optional"
+          error={fields.serialNumber}
+        />
+      </div>
+      <div className="flex flex-wrap gap-2">
+        <Button type="submit" variant="secondary" pending={pending} pendingLabel="Saving">
+          {equipment ? "Save machine" : "Add machine"}
+        </Button>
+        {onCancel && (
+          <Button variant="quiet" onClick={onCancel}>
+            Cancel
+          </Button>
+        )}
+      </div>
+    </form>
+  );
+}
