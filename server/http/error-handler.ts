@@ -19,6 +19,16 @@ const CONNECTION_ERRORS = new Set([
 // Connection-level failures from pg itself (the session store): the database is down or restarting.
 const PG_DOWN_CODES = new Set(["ECONNREFUSED", "ECONNRESET", "57P01", "57P02", "57P03", "08006", "08001"]);
 
+/** The database refused or dropped the connection (also when wrapped by Sequelize as `parent`). */
+export function isDatabaseDown(err: unknown): boolean {
+  const e = err as { name?: string; code?: string; message?: string; parent?: unknown; original?: unknown } | undefined;
+  if (!e || typeof e !== "object") return false;
+  if (e.name && CONNECTION_ERRORS.has(e.name)) return true;
+  if (e.code && PG_DOWN_CODES.has(e.code)) return true;
+  if (typeof e.message === "string" && /Connection terminated|terminating connection|the database system is (starting up|shutting down)/i.test(e.message)) return true;
+  return isDatabaseDown(e.parent) || isDatabaseDown(e.original);
+}
+
 /** Turns anything thrown into a known error, or undefined when it is a bug. */
 export function toAppError(err: unknown): AppError | undefined {
   if (err instanceof AppError) return err;
@@ -30,8 +40,7 @@ export function toAppError(err: unknown): AppError | undefined {
   const e = err as { type?: string; status?: number; name?: string };
   if (e?.type === "entity.parse.failed") return new AppError("bad_request", "The request body is not valid JSON");
   if (e?.type === "entity.too.large") return new AppError("too_large", "The request body is too large");
-  const code = (err as { code?: string })?.code;
-  if ((e?.name && CONNECTION_ERRORS.has(e.name)) || (code && PG_DOWN_CODES.has(code))) return new AppError("unavailable", "The database is unavailable; try again shortly");
+  if (isDatabaseDown(err)) return new AppError("unavailable", "The database is unavailable; try again shortly");
   return undefined;
 }
 

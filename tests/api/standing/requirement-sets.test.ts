@@ -19,13 +19,13 @@ async function buyer() {
 }
 
 /** A set only this test's technicians can meet: training from a builder named for this test alone. */
-function spindleSet(builder: string) {
+function spindleSet(builder: string, minLevel = 2) {
   return {
     name: "On-site spindle work",
     requirements: [
       { label: "General liability 1M / 2M", typeCodes: ["general_liability"], minLimits: { eachOccurrence: 1_000_000, generalAggregate: 2_000_000 } },
       { label: "Arc-flash training", typeCodes: ["arc_flash"] },
-      { label: `${builder} training, level 2`, typeCodes: ["oem_training"], builder, controlFamily: "Tessaline 9", minLevel: 2 },
+      { label: `${builder} training, level ${minLevel}`, typeCodes: ["oem_training"], builder, controlFamily: "Tessaline 9", minLevel },
     ],
   };
 }
@@ -78,8 +78,7 @@ describe("requirement sets", () => {
     await qualifiedTechnician(builder);
     const { agent } = await buyer();
     const created = await agent.post("/api/requirement-sets").send(spindleSet(builder));
-    const stricter = spindleSet(builder);
-    stricter.requirements[2] = { ...stricter.requirements[2]!, minLevel: 3 };
+    const stricter = spindleSet(builder, 3);
 
     const res = await agent.put(`/api/requirement-sets/${created.body.id}`).send(stricter);
     const preview = await agent.get(`/api/requirement-sets/${created.body.id}/preview`);

@@ -1,4 +1,5 @@
 import { Bar, BarChart, CartesianGrid, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
+import { LapseTooltip } from "./lapse-tooltip.tsx";
 import type { WeekBucket } from "./lapse-window.ts";
 
 /**
@@ -24,10 +25,9 @@ export function LapseTimelineChart({ weeks }: { weeks: WeekBucket[] }) {
             <CartesianGrid strokeDasharray="3 3" stroke="#d9e1ee" vertical={false} />
             <XAxis dataKey="label" tick={{ fill: "#213a66", fontSize: 12 }} interval="preserveStartEnd" />
             <YAxis allowDecimals={false} width={28} tick={{ fill: "#213a66", fontSize: 12 }} />
-            <Tooltip
-              formatter={(value) => [value, "Lapsing"]}
-              labelFormatter={(label) => `Week of ${String(label)}`}
-            />
+            {/* Only a bar with lapses opens the card, and there is no grey band: resting the pointer on an
+                empty week used to leave "Lapsing: 0" standing open. */}
+            <Tooltip shared={false} cursor={false} content={LapseTooltip} />
             <Bar
               dataKey="count"
               name="Lapsing"

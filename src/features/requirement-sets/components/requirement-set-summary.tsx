@@ -1,4 +1,7 @@
 import type { RequirementSetView } from "../api/requirement-set-shapes.ts";
+import { offeredLimits } from "./requirement-draft.ts";
+
+const limitWords = new Map<string, string>(offeredLimits.map(([name, label]) => [name, label.replace(/ \(\$\)$/, "")]));
 
 type RequirementSetSummaryProps = {
   set: RequirementSetView;
@@ -20,7 +23,7 @@ export function RequirementSetSummary({ set, siteName, typeNames }: RequirementS
             {r.minLimits &&
               Object.entries(r.minLimits).map(([name, value]) => (
                 <span key={name}>
-                  , {name} ≥ ${value?.toLocaleString("en-US")}
+                  , {limitWords.get(name) ?? name} at least ${value?.toLocaleString("en-US")}
                 </span>
               ))}
             {r.additionalInsured && ", additional insured"}
