@@ -22,7 +22,11 @@ export async function withAdvisoryLock<T>(
 ): Promise<Locked<T>> {
   return sequelize.transaction(async (transaction) => {
     onTransaction?.(transaction);
-    const [row] = await selectRows<{ locked: boolean }>(transaction, "SELECT pg_try_advisory_xact_lock($1) AS locked", [key]);
+    const [row] = await selectRows<{ locked: boolean }>(
+      transaction,
+      "SELECT pg_try_advisory_xact_lock($1) AS locked",
+      [key],
+    );
     if (!row?.locked) return { skipped: true } as const;
     return { skipped: false, value: await work(transaction) } as const;
   });

@@ -29,7 +29,9 @@ configureLog(config.LOG_LEVEL === "info" ? "warn" : config.LOG_LEVEL);
 
 if (!config.DATABASE_URL) {
   say("DATABASE_URL is not set. Run this while `npm start` is running, pointing at its database:");
-  say(`  DATABASE_URL=${DEV_DATABASE_URL} npm run job:${command} -- ${process.argv.slice(3).join(" ")}`.trimEnd());
+  say(
+    `  DATABASE_URL=${DEV_DATABASE_URL} npm run job:${command} -- ${process.argv.slice(3).join(" ")}`.trimEnd(),
+  );
   process.exit(2);
 }
 
@@ -48,7 +50,9 @@ async function sendOutbox(): Promise<void> {
   const started = performance.now();
   try {
     const report = await runSendOutbox({ asOf: new Date() }, { mailer, from: config.MAIL_FROM });
-    say(`outbox: sent ${report.sent}, will retry ${report.retried}, failed ${report.failed} (${ms(started)})`);
+    say(
+      `outbox: sent ${report.sent}, will retry ${report.retried}, failed ${report.failed} (${ms(started)})`,
+    );
   } finally {
     mailer.close();
   }
@@ -60,7 +64,9 @@ async function main(): Promise<number> {
     const { checked, differences } = await sequelize.transaction((t) => checkStandingConsistency(t));
     say(`consistency check: ${checked} stored standings, ${differences.length} differences (${ms(started)})`);
     for (const d of differences.slice(0, 50)) {
-      say(`  technician ${d.technicianId}, set ${d.requirementSetId ?? "baseline"}: ${d.problem} (stored ${d.stored}, computed ${d.computed})`);
+      say(
+        `  technician ${d.technicianId}, set ${d.requirementSetId ?? "baseline"}: ${d.problem} (stored ${d.stored}, computed ${d.computed})`,
+      );
     }
     return differences.length === 0 ? 0 : 1;
   }
@@ -71,14 +77,22 @@ async function main(): Promise<number> {
       say("lapse job: skipped, another instance holds the lock");
       return 0;
     }
-    say(`lapse job as of ${asOf.toISOString()}: ${result.lapsed} lapsed, ${result.noticesCreated} notices, ${result.emailsQueued} e-mails queued,`);
-    say(`  ${result.changedStandings.length} standings changed, ${result.statements} SQL statements, ${ms(started)}`);
+    say(
+      `lapse job as of ${asOf.toISOString()}: ${result.lapsed} lapsed, ${result.noticesCreated} notices, ${result.emailsQueued} e-mails queued,`,
+    );
+    say(
+      `  ${result.changedStandings.length} standings changed, ${result.statements} SQL statements, ${ms(started)}`,
+    );
     if (!values["no-send"]) await sendOutbox();
     return 0;
   }
   if (command === "digest") {
     const result = await runReviewerDigest({ asOf });
-    say(result.skipped ? "reviewer digest: skipped" : `reviewer digest ${result.digestDate}: ${result.sent} sent, queue ${result.queueCount}`);
+    say(
+      result.skipped
+        ? "reviewer digest: skipped"
+        : `reviewer digest ${result.digestDate}: ${result.sent} sent, queue ${result.queueCount}`,
+    );
     if (!values["no-send"]) await sendOutbox();
     return 0;
   }

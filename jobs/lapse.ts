@@ -1,8 +1,18 @@
 import type { Sequelize, Transaction } from "sequelize";
 import { loadConfig, publicUrl } from "../server/config.ts";
 import { db } from "../server/db/sequelize.ts";
-import { createWarningNotices, findNoticeRecipients, queueNoticeMessages, type HolderCount } from "../server/notices/index.ts";
-import { countStatements, refreshStandings, selectRows, type ChangedStanding } from "../server/standing/index.ts";
+import {
+  createWarningNotices,
+  findNoticeRecipients,
+  queueNoticeMessages,
+  type HolderCount,
+} from "../server/notices/index.ts";
+import {
+  countStatements,
+  refreshStandings,
+  selectRows,
+  type ChangedStanding,
+} from "../server/standing/index.ts";
 import { JOB_LOCK_KEYS, withAdvisoryLock } from "./advisory-lock.ts";
 import { finishJobRun, startJobRun } from "./job-run-record.ts";
 
@@ -92,7 +102,10 @@ const sum = (counts: HolderCount[]) => counts.reduce((n, c) => n + c.count, 0);
  * notifications, and recomputes the standings of the holders concerned, all in one transaction behind an advisory lock
  * (a second instance gets `{ skipped: true }`). Set-based: the statement count does not grow with the data.
  */
-export async function runLapseJob({ asOf }: { asOf: Date }, deps: LapseJobDeps = {}): Promise<LapseJobResult> {
+export async function runLapseJob(
+  { asOf }: { asOf: Date },
+  deps: LapseJobDeps = {},
+): Promise<LapseJobResult> {
   const startedAt = new Date();
   const sequelize = deps.sequelize ?? db();
   const config = deps.warningDays && deps.publicUrl ? undefined : loadConfig();
@@ -113,9 +126,13 @@ export async function runLapseJob({ asOf }: { asOf: Date }, deps: LapseJobDeps =
       };
       const jobRunId = await startJobRun(transaction, "lapse", asOf, startedAt);
       const lapsed = await timed("lapse", () => lapseCredentials(transaction, asOf, jobRunId));
-      const warned = await timed("warn", () => createWarningNotices(transaction, { asOf, thresholds: warningDays, jobRunId }));
+      const warned = await timed("warn", () =>
+        createWarningNotices(transaction, { asOf, thresholds: warningDays, jobRunId }),
+      );
       const recipients = await timed("recipients", () => findNoticeRecipients(transaction, jobRunId));
-      const queued = await timed("queue", () => queueNoticeMessages(transaction, recipients, { asOf, publicUrl: base }));
+      const queued = await timed("queue", () =>
+        queueNoticeMessages(transaction, recipients, { asOf, publicUrl: base }),
+      );
       const unstored = await timed("unstored", () => techniciansWithoutStanding(transaction));
       const changedStandings = await timed("standings", () =>
         refreshStandings(holdersOf([...lapsed, ...warned], unstored), transaction, asOf),
@@ -130,7 +147,15 @@ export async function runLapseJob({ asOf }: { asOf: Date }, deps: LapseJobDeps =
         timings,
       };
       const finishedAt = await finishJobRun(transaction, jobRunId, counts);
-      return { jobRunId, lapsed: counts.lapsed, noticesCreated, emailsQueued: queued.emails, changedStandings, finishedAt, timings };
+      return {
+        jobRunId,
+        lapsed: counts.lapsed,
+        noticesCreated,
+        emailsQueued: queued.emails,
+        changedStandings,
+        finishedAt,
+        timings,
+      };
     },
     (transaction) => {
       counter = countStatements(transaction);

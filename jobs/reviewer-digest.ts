@@ -13,7 +13,9 @@ export interface ReviewerDigestDeps {
   publicUrl?: string;
 }
 
-export type ReviewerDigestResult = { skipped: true } | { skipped: false; digestDate: string; queueCount: number; sent: number; statements: number };
+export type ReviewerDigestResult =
+  | { skipped: true }
+  | { skipped: false; digestDate: string; queueCount: number; sent: number; statements: number };
 
 interface DigestRow {
   user_id: number;
@@ -32,7 +34,10 @@ function waitingWords(oldest: Date, asOf: Date): string {
  * One e-mail a day to each reviewer while the verification queue is not empty: how many wait and for how long the
  * oldest has waited. The unique (user, date) row makes a second run on the same day send nothing.
  */
-export async function runReviewerDigest({ asOf }: { asOf: Date }, deps: ReviewerDigestDeps = {}): Promise<ReviewerDigestResult> {
+export async function runReviewerDigest(
+  { asOf }: { asOf: Date },
+  deps: ReviewerDigestDeps = {},
+): Promise<ReviewerDigestResult> {
   const config = deps.timeZone && deps.publicUrl ? undefined : loadConfig();
   const timeZone = deps.timeZone ?? config!.JOB_TIME_ZONE;
   const queueLink = `${(deps.publicUrl ?? publicUrl(config!)).replace(/\/$/, "")}/review`;

@@ -38,15 +38,27 @@ export function startSchedule(config: Config, deps: { mailer?: Mailer } = {}): R
   const mailer = deps.mailer ?? (config.SMTP_URL ? createSmtpMailer(config.SMTP_URL) : undefined);
   const daily = { timezone: config.JOB_TIME_ZONE, noOverlap: true };
   const tasks = [
-    cron.schedule(config.JOB_CRON, guarded("lapse", () => runLapseJob({ asOf: new Date() })), { ...daily, name: "lapse" }),
-    cron.schedule(config.JOB_CRON, guarded("reviewer_digest", () => runReviewerDigest({ asOf: new Date() })), { ...daily, name: "reviewer-digest" }),
+    cron.schedule(
+      config.JOB_CRON,
+      guarded("lapse", () => runLapseJob({ asOf: new Date() })),
+      { ...daily, name: "lapse" },
+    ),
+    cron.schedule(
+      config.JOB_CRON,
+      guarded("reviewer_digest", () => runReviewerDigest({ asOf: new Date() })),
+      { ...daily, name: "reviewer-digest" },
+    ),
   ];
   if (mailer) {
     tasks.push(
-      cron.schedule("* * * * *", guarded("outbox", () => runSendOutbox({ asOf: new Date() }, { mailer, from: config.MAIL_FROM })), {
-        name: "outbox",
-        noOverlap: true,
-      }),
+      cron.schedule(
+        "* * * * *",
+        guarded("outbox", () => runSendOutbox({ asOf: new Date() }, { mailer, from: config.MAIL_FROM })),
+        {
+          name: "outbox",
+          noOverlap: true,
+        },
+      ),
     );
   }
   return {

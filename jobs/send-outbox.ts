@@ -17,7 +17,10 @@ export interface SendOutboxReport {
  * Delivers every outbox message due at `asOf`. Each round claims rows with SKIP LOCKED, so parallel senders never send
  * one row twice; a failed send keeps its row for a later attempt with backoff, so nothing is lost while SMTP is down.
  */
-export async function runSendOutbox({ asOf }: { asOf: Date }, deps: SendOutboxDeps): Promise<SendOutboxReport> {
+export async function runSendOutbox(
+  { asOf }: { asOf: Date },
+  deps: SendOutboxDeps,
+): Promise<SendOutboxReport> {
   const total: SendOutboxReport = { sent: 0, retried: 0, failed: 0 };
   for (let round = 0; round < (deps.maxRounds ?? 200); round += 1) {
     const report = await deliverDueMail(deps.mailer, deps.from, asOf);

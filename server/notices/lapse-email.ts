@@ -30,13 +30,20 @@ export interface RenderedNotice {
 }
 
 const escapeHtml = (s: string) =>
-  s.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;").replace(/'/g, "&#39;");
+  s
+    .replace(/&/g, "&amp;")
+    .replace(/</g, "&lt;")
+    .replace(/>/g, "&gt;")
+    .replace(/"/g, "&quot;")
+    .replace(/'/g, "&#39;");
 
 /** The client's upload flow with the type (and holder) chosen already: the office's documents page, or a technician's own card upload. */
 export function renewalPath(r: Pick<NoticeRecipient, "role" | "typeCode" | "technicianId">): string {
   const type = encodeURIComponent(r.typeCode);
   if (r.role === "technician") return `/technician/upload-card?type=${type}`;
-  return r.technicianId === null ? `/provider/documents/new?type=${type}` : `/provider/documents/new?type=${type}&technicianId=${r.technicianId}`;
+  return r.technicianId === null
+    ? `/provider/documents/new?type=${type}`
+    : `/provider/documents/new?type=${type}&technicianId=${r.technicianId}`;
 }
 
 /** The lapse instant on the recipient company's wall clock, e.g. "Thursday, July 15, 2027 at 1:01 AM CDT". */
@@ -51,16 +58,28 @@ export function renderLapseNotice(r: NoticeRecipient, asOf: Date, publicUrl: str
   const link = `${publicUrl.replace(/\/$/, "")}${renewalPath(r)}`;
   const lapsed = r.thresholdDays === 0;
   const days = Math.max(daysUntil(r.lapsesAt, asOf), 0);
-  const title = lapsed ? `Lapsed: ${r.typeName} for ${holder}` : `${r.typeName} for ${holder} lapses in ${days} day${days === 1 ? "" : "s"}`;
+  const title = lapsed
+    ? `Lapsed: ${r.typeName} for ${holder}`
+    : `${r.typeName} for ${holder} lapses in ${days} day${days === 1 ? "" : "s"}`;
   const body = lapsed
     ? `${r.typeName} held by ${holder} lapsed on ${when}. It no longer counts toward standing; upload and verify a renewal to restore it.`
     : `${r.typeName} held by ${holder} lapses on ${when}. Upload the renewal before then so the standing stays cleared.`;
-  const text = [`Hello ${r.userName},`, "", body, "", `Upload the renewal: ${link}`, "", "Clearbench"].join("\n");
+  const text = [`Hello ${r.userName},`, "", body, "", `Upload the renewal: ${link}`, "", "Clearbench"].join(
+    "\n",
+  );
   const html = [
     `<p>Hello ${escapeHtml(r.userName)},</p>`,
     `<p>${escapeHtml(body)}</p>`,
     `<p><a href="${escapeHtml(link)}">Upload the renewal</a></p>`,
     "<p>Clearbench</p>",
   ].join("\n");
-  return { subject: title, text, html, title, body, link, kind: lapsed ? "credential_lapsed" : "credential_lapsing" };
+  return {
+    subject: title,
+    text,
+    html,
+    title,
+    body,
+    link,
+    kind: lapsed ? "credential_lapsed" : "credential_lapsing",
+  };
 }

@@ -56,7 +56,10 @@ interface RecipientRow {
 }
 
 /** Who hears about the notices of one run: the company's provider admins and, for a technician's own card, that technician. */
-export async function findNoticeRecipients(transaction: Transaction, jobRunId: number): Promise<NoticeRecipient[]> {
+export async function findNoticeRecipients(
+  transaction: Transaction,
+  jobRunId: number,
+): Promise<NoticeRecipient[]> {
   const rows = await selectRows<RecipientRow>(
     transaction,
     `WITH run_notices AS (
@@ -113,20 +116,42 @@ export async function queueNoticeMessages(
   options: { asOf: Date; publicUrl: string },
 ): Promise<{ emails: number; notifications: number }> {
   for (let i = 0; i < recipients.length; i += INSERT_CHUNK) {
-    const rendered = recipients.slice(i, i + INSERT_CHUNK).map((r) => ({ r, m: renderLapseNotice(r, options.asOf, options.publicUrl) }));
+    const rendered = recipients
+      .slice(i, i + INSERT_CHUNK)
+      .map((r) => ({ r, m: renderLapseNotice(r, options.asOf, options.publicUrl) }));
     await runStatement(
       transaction,
       `INSERT INTO outbox_messages (to_address, subject, text_body, html_body)
        SELECT to_address, subject, text_body, html_body
          FROM jsonb_to_recordset($1::jsonb) AS m(to_address text, subject text, text_body text, html_body text)`,
-      [JSON.stringify(rendered.map(({ r, m }) => ({ to_address: r.email, subject: m.subject, text_body: m.text, html_body: m.html })))],
+      [
+        JSON.stringify(
+          rendered.map(({ r, m }) => ({
+            to_address: r.email,
+            subject: m.subject,
+            text_body: m.text,
+            html_body: m.html,
+          })),
+        ),
+      ],
     );
     await runStatement(
       transaction,
       `INSERT INTO notifications (user_id, kind, title, body, link, notice_id)
        SELECT user_id, kind, title, body, link, notice_id
          FROM jsonb_to_recordset($1::jsonb) AS m(user_id int, kind text, title text, body text, link text, notice_id int)`,
-      [JSON.stringify(rendered.map(({ r, m }) => ({ user_id: r.userId, kind: m.kind, title: m.title, body: m.body, link: m.link, notice_id: r.noticeId })))],
+      [
+        JSON.stringify(
+          rendered.map(({ r, m }) => ({
+            user_id: r.userId,
+            kind: m.kind,
+            title: m.title,
+            body: m.body,
+            link: m.link,
+            notice_id: r.noticeId,
+          })),
+        ),
+      ],
     );
   }
   return { emails: recipients.length, notifications: recipients.length };

@@ -18,7 +18,14 @@ function toNotificationDto(n: Notification): NotificationDto {
 
 export async function listOwnNotifications(user: SignedInUser, limit: number): Promise<NotificationListDto> {
   const [notifications, unreadCount] = await Promise.all([
-    Notification.findAll({ where: { userId: user.id }, order: [["createdAt", "DESC"], ["id", "DESC"]], limit }),
+    Notification.findAll({
+      where: { userId: user.id },
+      order: [
+        ["createdAt", "DESC"],
+        ["id", "DESC"],
+      ],
+      limit,
+    }),
     Notification.count({ where: { userId: user.id, readAt: null } }),
   ]);
   return { unreadCount, notifications: notifications.map(toNotificationDto) };
@@ -33,6 +40,9 @@ export async function markNotificationRead(user: SignedInUser, id: number): Prom
 }
 
 export async function markAllNotificationsRead(user: SignedInUser): Promise<{ marked: number }> {
-  const [marked] = await Notification.update({ readAt: new Date() }, { where: { userId: user.id, readAt: { [Op.is]: null } } });
+  const [marked] = await Notification.update(
+    { readAt: new Date() },
+    { where: { userId: user.id, readAt: { [Op.is]: null } } },
+  );
   return { marked };
 }

@@ -8,12 +8,18 @@ export const noticeRoutes = createRoutes("/api/notifications");
 // Every signed-in user reads only their own notifications: the service scopes each query by the reader.
 const canReadOwnNotifications = signedIn;
 
-noticeRoutes.get("", { allow: canReadOwnNotifications, query: listNotificationsQuerySchema }, (req, _res, { query }) =>
-  listOwnNotifications(req.user!, query.limit),
+noticeRoutes.get(
+  "",
+  { allow: canReadOwnNotifications, query: listNotificationsQuerySchema },
+  (req, _res, { query }) => listOwnNotifications(req.user!, query.limit),
 );
 
-noticeRoutes.post("/read-all", { allow: canReadOwnNotifications }, (req) => markAllNotificationsRead(req.user!));
+noticeRoutes.post("/read-all", { allow: canReadOwnNotifications }, (req) =>
+  markAllNotificationsRead(req.user!),
+);
 
-noticeRoutes.post("/:notificationId/read", { allow: canReadOwnNotifications, params: notificationParamsSchema }, (req, _res, { params }) =>
-  markNotificationRead(req.user!, params.notificationId),
+noticeRoutes.post(
+  "/:notificationId/read",
+  { allow: canReadOwnNotifications, params: notificationParamsSchema },
+  (req, _res, { params }) => markNotificationRead(req.user!, params.notificationId),
 );

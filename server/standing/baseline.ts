@@ -18,9 +18,22 @@ export async function reviseBaseline(user: SignedInUser, input: BaselineInput): 
     await assertKnownTypeCodes(input.requirements, transaction);
     const row = await PlatformBaseline.findByPk(1, { transaction, lock: transaction.LOCK.UPDATE });
     const before = row?.requirements ?? null;
-    await PlatformBaseline.upsert({ id: 1, requirements: input.requirements, updatedBy: user.id }, { transaction });
+    await PlatformBaseline.upsert(
+      { id: 1, requirements: input.requirements, updatedBy: user.id },
+      { transaction },
+    );
     await refreshAllStandings(new Date(), transaction);
-    await recordAudit({ actorUserId: user.id, action: "baseline.revised", subjectType: "platform_baseline", subjectId: 1, before, after: input.requirements }, transaction);
+    await recordAudit(
+      {
+        actorUserId: user.id,
+        action: "baseline.revised",
+        subjectType: "platform_baseline",
+        subjectId: 1,
+        before,
+        after: input.requirements,
+      },
+      transaction,
+    );
   });
   return readBaseline();
 }

@@ -10,7 +10,11 @@ export interface ComputedStanding extends StandingResult {
 }
 
 /** Every (technician, target) standing at `asOf`, with the shared engine: the company's insurance plus the technician's cards. */
-export function computeStandings(inputs: StandingInputs, asOf: Date, technicians: StandingTechnician[] = inputs.technicians): ComputedStanding[] {
+export function computeStandings(
+  inputs: StandingInputs,
+  asOf: Date,
+  technicians: StandingTechnician[] = inputs.technicians,
+): ComputedStanding[] {
   const out: ComputedStanding[] = [];
   const warningDays = lapsingWindowDays();
   for (const technician of technicians) {
@@ -26,7 +30,12 @@ export function computeStandings(inputs: StandingInputs, asOf: Date, technicians
         warningDays,
         types: inputs.types,
       });
-      out.push({ ...result, technicianId: technician.id, companyId: technician.companyId, requirementSetId: target.id });
+      out.push({
+        ...result,
+        technicianId: technician.id,
+        companyId: technician.companyId,
+        requirementSetId: target.id,
+      });
     }
   }
   return out;

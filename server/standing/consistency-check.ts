@@ -27,7 +27,15 @@ const iso = (d: Date | null) => (d ? new Date(d).toISOString() : null);
 
 /** The parts of a requirement result that decide the standing; detail sentences are for people and may be reworded. */
 function resultsFingerprint(results: readonly RequirementResult[]): string {
-  return JSON.stringify(results.map((r) => [r.requirement.id ?? r.requirement.label, r.status, r.reason, r.credentialId, r.lapsesAt]));
+  return JSON.stringify(
+    results.map((r) => [
+      r.requirement.id ?? r.requirement.label,
+      r.status,
+      r.reason,
+      r.credentialId,
+      r.lapsesAt,
+    ]),
+  );
 }
 
 function compare(stored: StoredRow, computed: ComputedStanding): StandingDifference | null {
@@ -36,7 +44,12 @@ function compare(stored: StoredRow, computed: ComputedStanding): StandingDiffere
     return { ...base, problem: "standing", stored: stored.standing, computed: computed.standing };
   }
   if (iso(stored.earliest_lapse) !== computed.earliestLapse) {
-    return { ...base, problem: "earliest_lapse", stored: iso(stored.earliest_lapse), computed: computed.earliestLapse };
+    return {
+      ...base,
+      problem: "earliest_lapse",
+      stored: iso(stored.earliest_lapse),
+      computed: computed.earliestLapse,
+    };
   }
   const a = resultsFingerprint(stored.results);
   const b = resultsFingerprint(computed.results);
@@ -53,7 +66,10 @@ export async function checkStandingConsistency(
   options: { technicianIds?: number[] } = {},
 ): Promise<{ checked: number; differences: StandingDifference[] }> {
   const only = options.technicianIds;
-  const inputs = await loadStandingInputs(only ? { companyIds: [], technicianIds: only } : "all", transaction);
+  const inputs = await loadStandingInputs(
+    only ? { companyIds: [], technicianIds: only } : "all",
+    transaction,
+  );
   const stored = await selectRows<StoredRow>(
     transaction,
     `SELECT technician_id, requirement_set_id, standing, earliest_lapse, results, computed_at FROM technician_standings
@@ -69,7 +85,13 @@ export async function checkStandingConsistency(
   const groups = new Map<string, StoredRow[]>();
   for (const row of stored) {
     if (!technicians.has(row.technician_id) || !targetIds.has(row.requirement_set_id ?? 0)) {
-      differences.push({ technicianId: row.technician_id, requirementSetId: row.requirement_set_id, problem: "extra", stored: row.standing, computed: null });
+      differences.push({
+        technicianId: row.technician_id,
+        requirementSetId: row.requirement_set_id,
+        problem: "extra",
+        stored: row.standing,
+        computed: null,
+      });
       continue;
     }
     const groupKey = `${row.technician_id}@${new Date(row.computed_at).getTime()}`;
@@ -77,7 +99,9 @@ export async function checkStandingConsistency(
   }
   for (const rows of groups.values()) {
     const first = rows[0]!;
-    const computed = computeStandings(inputs, new Date(first.computed_at), [technicians.get(first.technician_id)!]);
+    const computed = computeStandings(inputs, new Date(first.computed_at), [
+      technicians.get(first.technician_id)!,
+    ]);
     for (const row of rows) {
       const match = computed.find((c) => (c.requirementSetId ?? 0) === (row.requirement_set_id ?? 0));
       const difference = match ? compare(row, match) : null;
@@ -87,7 +111,13 @@ export async function checkStandingConsistency(
   for (const technician of inputs.technicians) {
     for (const target of inputs.targets) {
       if (!storedByKey.has(key(technician.id, target.id))) {
-        differences.push({ technicianId: technician.id, requirementSetId: target.id, problem: "missing", stored: null, computed: null });
+        differences.push({
+          technicianId: technician.id,
+          requirementSetId: target.id,
+          problem: "missing",
+          stored: null,
+          computed: null,
+        });
       }
     }
   }

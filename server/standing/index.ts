@@ -11,7 +11,12 @@ export {
   refreshStandingsForRequirementSet,
   type Holder,
 } from "./refresh-standing.ts";
-export { onStandingsChanged, emitStandingsChanged, type ChangedStanding, type StandingsChangedListener } from "./standing-hooks.ts";
+export {
+  onStandingsChanged,
+  emitStandingsChanged,
+  type ChangedStanding,
+  type StandingsChangedListener,
+} from "./standing-hooks.ts";
 export { checkStandingConsistency, type StandingDifference } from "./consistency-check.ts";
 export { countStatements, selectRows, runStatement } from "./sql.ts";
 export { lapsingWindowDays } from "./standing-window.ts";

@@ -1,7 +1,17 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from "sequelize";
 import type { Requirement } from "../../shared/standing/requirements.ts";
 
-export class RequirementSet extends Model<InferAttributes<RequirementSet>, InferCreationAttributes<RequirementSet>> {
+export class RequirementSet extends Model<
+  InferAttributes<RequirementSet>,
+  InferCreationAttributes<RequirementSet>
+> {
   declare id: CreationOptional<number>;
   declare companyId: number;
   declare siteId: number | null;
@@ -12,7 +22,10 @@ export class RequirementSet extends Model<InferAttributes<RequirementSet>, Infer
   declare updatedAt: CreationOptional<Date>;
 }
 
-export class PlatformBaseline extends Model<InferAttributes<PlatformBaseline>, InferCreationAttributes<PlatformBaseline>> {
+export class PlatformBaseline extends Model<
+  InferAttributes<PlatformBaseline>,
+  InferCreationAttributes<PlatformBaseline>
+> {
   declare id: CreationOptional<number>;
   declare requirements: Requirement[];
   declare updatedBy: number | null;

@@ -9,10 +9,14 @@ export const canReadJobRuns = requireRole("admin");
 export const canListRequirementSets = requireRole("buyer");
 
 /** A buyer of the shop that owns the set; another shop's set answers 404, like a missing one. */
-export const canManageRequirementSet = requireOwnership(requireRole("buyer"), "of the same shop", async (user, params) => {
-  const set = await RequirementSet.findByPk(Number(params.requirementSetId), { attributes: ["companyId"] });
-  return set?.companyId === user.companyId;
-});
+export const canManageRequirementSet = requireOwnership(
+  requireRole("buyer"),
+  "of the same shop",
+  async (user, params) => {
+    const set = await RequirementSet.findByPk(Number(params.requirementSetId), { attributes: ["companyId"] });
+    return set?.companyId === user.companyId;
+  },
+);
 
 /** The technician, their company's admin, or a reviewer or admin (buyers read standings through the directory). */
 export const canViewTechnicianStanding = requireOwnership(

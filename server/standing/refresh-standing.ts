@@ -28,7 +28,11 @@ interface ChangedRow {
  * Upserts the computed standings and returns the pairs whose standing changed. The CTE reads the old rows from the
  * statement's snapshot, so one statement per chunk both writes and reports the change.
  */
-async function storeStandings(rows: ComputedStanding[], asOf: Date, transaction: Transaction): Promise<ChangedStanding[]> {
+async function storeStandings(
+  rows: ComputedStanding[],
+  asOf: Date,
+  transaction: Transaction,
+): Promise<ChangedStanding[]> {
   const companyOf = new Map(rows.map((r) => [r.technicianId, r.companyId]));
   const changes: ChangedStanding[] = [];
   for (let i = 0; i < rows.length; i += UPSERT_CHUNK) {
@@ -87,7 +91,8 @@ export async function refreshStandings(
   transaction: Transaction,
   asOf: Date = new Date(),
 ): Promise<ChangedStanding[]> {
-  if (selection !== "all" && selection.companyIds.length === 0 && selection.technicianIds.length === 0) return [];
+  if (selection !== "all" && selection.companyIds.length === 0 && selection.technicianIds.length === 0)
+    return [];
   const inputs = await loadStandingInputs(selection, transaction);
   const changes = await storeStandings(computeStandings(inputs, asOf), asOf, transaction);
   announceAfterCommit(changes, transaction);
@@ -134,8 +139,13 @@ export async function refreshStandingsForRequirementSet(
 }
 
 /** Forgets the stored standings against an archived set, so the directory never filters on a stale one. */
-export async function dropStandingsForRequirementSet(requirementSetId: number, transaction: Transaction): Promise<void> {
-  await runStatement(transaction, "DELETE FROM technician_standings WHERE requirement_set_id = $1", [requirementSetId]);
+export async function dropStandingsForRequirementSet(
+  requirementSetId: number,
+  transaction: Transaction,
+): Promise<void> {
+  await runStatement(transaction, "DELETE FROM technician_standings WHERE requirement_set_id = $1", [
+    requirementSetId,
+  ]);
 }
 
 export type { HolderSelection };

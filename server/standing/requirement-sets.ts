@@ -15,7 +15,10 @@ import { selectRows } from "./sql.ts";
 export async function listRequirementSets(user: SignedInUser, includeArchived: boolean) {
   const sets = await RequirementSet.findAll({
     where: includeArchived ? { companyId: user.companyId } : { companyId: user.companyId, active: true },
-    order: [["name", "ASC"], ["id", "ASC"]],
+    order: [
+      ["name", "ASC"],
+      ["id", "ASC"],
+    ],
   });
   return sets.map(toRequirementSetDto);
 }
@@ -36,11 +39,25 @@ export async function defineRequirementSet(user: SignedInUser, input: Requiremen
   const set = await db().transaction(async (transaction) => {
     await assertKnownTypeCodes(input.requirements, transaction);
     const created = await RequirementSet.create(
-      { companyId: user.companyId, siteId: input.siteId ?? null, name: input.name, requirements: input.requirements },
+      {
+        companyId: user.companyId,
+        siteId: input.siteId ?? null,
+        name: input.name,
+        requirements: input.requirements,
+      },
       { transaction },
     );
     await refreshStandingsForRequirementSet(created.id, transaction);
-    await recordAudit({ actorUserId: user.id, action: "requirement_set.defined", subjectType: "requirement_set", subjectId: created.id, after: input }, transaction);
+    await recordAudit(
+      {
+        actorUserId: user.id,
+        action: "requirement_set.defined",
+        subjectType: "requirement_set",
+        subjectId: created.id,
+        after: input,
+      },
+      transaction,
+    );
     return created;
   });
   return toRequirementSetDto(set);
@@ -49,12 +66,29 @@ export async function defineRequirementSet(user: SignedInUser, input: Requiremen
 export async function reviseRequirementSet(user: SignedInUser, id: number, input: RequirementSetInput) {
   const set = await db().transaction(async (transaction) => {
     await assertKnownTypeCodes(input.requirements, transaction);
-    const existing = await RequirementSet.findOne({ where: { id, companyId: user.companyId, active: true }, transaction, lock: transaction.LOCK.UPDATE });
+    const existing = await RequirementSet.findOne({
+      where: { id, companyId: user.companyId, active: true },
+      transaction,
+      lock: transaction.LOCK.UPDATE,
+    });
     if (!existing) throw notFound("That requirement set");
     const before = existing.toJSON();
-    await existing.update({ siteId: input.siteId ?? null, name: input.name, requirements: input.requirements }, { transaction });
+    await existing.update(
+      { siteId: input.siteId ?? null, name: input.name, requirements: input.requirements },
+      { transaction },
+    );
     await refreshStandingsForRequirementSet(existing.id, transaction);
-    await recordAudit({ actorUserId: user.id, action: "requirement_set.revised", subjectType: "requirement_set", subjectId: id, before, after: input }, transaction);
+    await recordAudit(
+      {
+        actorUserId: user.id,
+        action: "requirement_set.revised",
+        subjectType: "requirement_set",
+        subjectId: id,
+        before,
+        after: input,
+      },
+      transaction,
+    );
     return existing;
   });
   return toRequirementSetDto(set);
@@ -63,11 +97,23 @@ export async function reviseRequirementSet(user: SignedInUser, id: number, input
 /** Archives (never deletes) a set; its stored standings go, so nothing filters on a set no longer in use. */
 export async function archiveRequirementSet(user: SignedInUser, id: number) {
   const set = await db().transaction(async (transaction) => {
-    const existing = await RequirementSet.findOne({ where: { id, companyId: user.companyId }, transaction, lock: transaction.LOCK.UPDATE });
+    const existing = await RequirementSet.findOne({
+      where: { id, companyId: user.companyId },
+      transaction,
+      lock: transaction.LOCK.UPDATE,
+    });
     if (!existing) throw notFound("That requirement set");
     await existing.update({ active: false }, { transaction });
     await dropStandingsForRequirementSet(id, transaction);
-    await recordAudit({ actorUserId: user.id, action: "requirement_set.archived", subjectType: "requirement_set", subjectId: id }, transaction);
+    await recordAudit(
+      {
+        actorUserId: user.id,
+        action: "requirement_set.archived",
+        subjectType: "requirement_set",
+        subjectId: id,
+      },
+      transaction,
+    );
     return existing;
   });
   return toRequirementSetDto(set);
@@ -76,11 +122,20 @@ export async function archiveRequirementSet(user: SignedInUser, id: number) {
 function tally(standings: Standing[]): RequirementSetPreviewDto {
   const cleared = standings.filter((s) => s === "cleared").length;
   const lapsing = standings.filter((s) => s === "lapsing").length;
-  return { technicians: standings.length, cleared, lapsing, notCleared: standings.length - cleared - lapsing, meeting: cleared + lapsing };
+  return {
+    technicians: standings.length,
+    cleared,
+    lapsing,
+    notCleared: standings.length - cleared - lapsing,
+    meeting: cleared + lapsing,
+  };
 }
 
 /** A saved set: read from the stored standings (the indexed column the directory uses). */
-export async function previewRequirementSet(user: SignedInUser, id: number): Promise<RequirementSetPreviewDto> {
+export async function previewRequirementSet(
+  user: SignedInUser,
+  id: number,
+): Promise<RequirementSetPreviewDto> {
   const set = await findOwnSet(user, id);
   return db().transaction(async (transaction) => {
     const rows = await selectRows<{ standing: Standing }>(
@@ -94,10 +149,15 @@ export async function previewRequirementSet(user: SignedInUser, id: number): Pro
 }
 
 /** An unsaved set from the form: every active technician evaluated in memory, now. */
-export async function previewUnsavedRequirementSet(input: RequirementSetInput, asOf = new Date()): Promise<RequirementSetPreviewDto> {
+export async function previewUnsavedRequirementSet(
+  input: RequirementSetInput,
+  asOf = new Date(),
+): Promise<RequirementSetPreviewDto> {
   return db().transaction(async (transaction) => {
     await assertKnownTypeCodes(input.requirements, transaction);
-    const inputs = await loadStandingInputs("all", transaction, { targets: [{ id: -1, name: input.name, requirements: input.requirements }] });
+    const inputs = await loadStandingInputs("all", transaction, {
+      targets: [{ id: -1, name: input.name, requirements: input.requirements }],
+    });
     const active = inputs.technicians.filter((t) => t.active);
     return tally(computeStandings(inputs, asOf, active).map((s) => s.standing));
   });

@@ -31,26 +31,38 @@ export const standingRoutes = createRoutes("/api");
 
 standingRoutes.get("/baseline", { allow: canReadBaseline }, () => readBaseline());
 
-standingRoutes.put("/admin/baseline", { allow: canEditBaseline, body: baselineInputSchema }, (req, _res, { body }) =>
-  reviseBaseline(req.user!, body),
+standingRoutes.put(
+  "/admin/baseline",
+  { allow: canEditBaseline, body: baselineInputSchema },
+  (req, _res, { body }) => reviseBaseline(req.user!, body),
 );
 
 standingRoutes.get("/admin/job-runs", { allow: canReadJobRuns }, () => listJobRuns());
 
-standingRoutes.get("/requirement-sets", { allow: canListRequirementSets, query: listRequirementSetsQuerySchema }, (req, _res, { query }) =>
-  listRequirementSets(req.user!, query.includeArchived),
+standingRoutes.get(
+  "/requirement-sets",
+  { allow: canListRequirementSets, query: listRequirementSetsQuerySchema },
+  (req, _res, { query }) => listRequirementSets(req.user!, query.includeArchived),
 );
 
-standingRoutes.post("/requirement-sets", { allow: canListRequirementSets, body: requirementSetInputSchema }, async (req, res, { body }) => {
-  res.status(201).json(await defineRequirementSet(req.user!, body));
-});
-
-standingRoutes.post("/requirement-sets/preview", { allow: canListRequirementSets, body: requirementSetInputSchema }, (_req, _res, { body }) =>
-  previewUnsavedRequirementSet(body),
+standingRoutes.post(
+  "/requirement-sets",
+  { allow: canListRequirementSets, body: requirementSetInputSchema },
+  async (req, res, { body }) => {
+    res.status(201).json(await defineRequirementSet(req.user!, body));
+  },
 );
 
-standingRoutes.get("/requirement-sets/:requirementSetId", { allow: canManageRequirementSet, params: requirementSetParamsSchema }, (req, _res, { params }) =>
-  findRequirementSet(req.user!, params.requirementSetId),
+standingRoutes.post(
+  "/requirement-sets/preview",
+  { allow: canListRequirementSets, body: requirementSetInputSchema },
+  (_req, _res, { body }) => previewUnsavedRequirementSet(body),
+);
+
+standingRoutes.get(
+  "/requirement-sets/:requirementSetId",
+  { allow: canManageRequirementSet, params: requirementSetParamsSchema },
+  (req, _res, { params }) => findRequirementSet(req.user!, params.requirementSetId),
 );
 
 standingRoutes.put(

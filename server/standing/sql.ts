@@ -15,14 +15,22 @@ function connectionOf(transaction: Transaction): Sequelize {
 }
 
 /** One parameterised SELECT (or statement with RETURNING) inside the caller's transaction. */
-export async function selectRows<T extends object>(transaction: Transaction, sql: string, bind: unknown[] = []): Promise<T[]> {
+export async function selectRows<T extends object>(
+  transaction: Transaction,
+  sql: string,
+  bind: unknown[] = [],
+): Promise<T[]> {
   const counter = statementCounts.get(transaction);
   if (counter) counter.count += 1;
   return connectionOf(transaction).query<T>(sql, { bind, transaction, type: QueryTypes.SELECT });
 }
 
 /** One parameterised statement without a result set. */
-export async function runStatement(transaction: Transaction, sql: string, bind: unknown[] = []): Promise<void> {
+export async function runStatement(
+  transaction: Transaction,
+  sql: string,
+  bind: unknown[] = [],
+): Promise<void> {
   const counter = statementCounts.get(transaction);
   if (counter) counter.count += 1;
   await connectionOf(transaction).query(sql, { bind, transaction });

@@ -63,7 +63,10 @@ interface TargetRow {
 const TECHNICIANS_SQL = `SELECT t.id, t.company_id, t.active, co.time_zone
   FROM technicians t JOIN companies co ON co.id = t.company_id`;
 
-async function loadTechnicians(selection: HolderSelection, transaction: Transaction): Promise<StandingTechnician[]> {
+async function loadTechnicians(
+  selection: HolderSelection,
+  transaction: Transaction,
+): Promise<StandingTechnician[]> {
   const rows =
     selection === "all"
       ? await selectRows<TechnicianRow>(transaction, `${TECHNICIANS_SQL} ORDER BY t.id`)
@@ -89,7 +92,9 @@ async function loadCredentials(technicians: StandingTechnician[], all: boolean, 
   );
 }
 
-export async function loadCredentialTypes(transaction: Transaction): Promise<Map<string, CredentialTypeDefinition>> {
+export async function loadCredentialTypes(
+  transaction: Transaction,
+): Promise<Map<string, CredentialTypeDefinition>> {
   const rows = await selectRows<TypeRow>(
     transaction,
     "SELECT code, name, category, holder, field_set, validity, description FROM credential_types",
@@ -97,7 +102,15 @@ export async function loadCredentialTypes(transaction: Transaction): Promise<Map
   return new Map(
     rows.map((r) => [
       r.code,
-      { code: r.code, name: r.name, category: r.category, holder: r.holder, fieldSet: r.field_set, validity: r.validity, description: r.description },
+      {
+        code: r.code,
+        name: r.name,
+        category: r.category,
+        holder: r.holder,
+        fieldSet: r.field_set,
+        validity: r.validity,
+        description: r.description,
+      },
     ]),
   );
 }
@@ -115,7 +128,10 @@ export async function loadTargets(transaction: Transaction, setIds?: number[]): 
   );
 }
 
-function toStandingCredential(row: CredentialRow, types: Map<string, CredentialTypeDefinition>): StandingCredential | null {
+function toStandingCredential(
+  row: CredentialRow,
+  types: Map<string, CredentialTypeDefinition>,
+): StandingCredential | null {
   const type = types.get(row.type_code);
   if (!type) return null;
   const parsed = fieldSetSchemas[type.fieldSet].safeParse(row.fields);

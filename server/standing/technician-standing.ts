@@ -57,7 +57,9 @@ export async function readTechnicianStanding(technicianId: number): Promise<Tech
     return {
       technicianId,
       baseline: against.find((a) => a.requirementSetId === null) ?? null,
-      requirementSets: against.filter((a) => a.requirementSetId !== null).sort((a, b) => a.name.localeCompare(b.name)),
+      requirementSets: against
+        .filter((a) => a.requirementSetId !== null)
+        .sort((a, b) => a.name.localeCompare(b.name)),
     };
   });
 }

@@ -13,7 +13,10 @@ export const requirementSetInputSchema = requirementSetSchema.extend({
 export type RequirementSetInput = z.infer<typeof requirementSetInputSchema>;
 
 export const listRequirementSetsQuerySchema = z.object({
-  includeArchived: z.enum(["true", "false"]).default("false").transform((v) => v === "true"),
+  includeArchived: z
+    .enum(["true", "false"])
+    .default("false")
+    .transform((v) => v === "true"),
 });
 
 export const baselineInputSchema = z.object({

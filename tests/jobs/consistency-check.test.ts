@@ -12,7 +12,8 @@ beforeAll(() => {
 });
 afterAll(() => t.close());
 
-const check = (technicianIds?: number[]) => db().transaction((tx) => checkStandingConsistency(tx, { technicianIds }));
+const check = (technicianIds?: number[]) =>
+  db().transaction((tx) => checkStandingConsistency(tx, { technicianIds }));
 
 describe("standing consistency check", () => {
   it("finds no difference between the stored standings and the engine after the job", async () => {
@@ -32,14 +33,23 @@ describe("standing consistency check", () => {
   it("finds the one stored row that was corrupted", async () => {
     const a = await buildClearedProvider({ glExpires: "2027-11-01" });
     await runLapseJob({ asOf: new Date("2027-11-01T12:00:00Z") }, JOB_DEPS);
-    await db().query("UPDATE technician_standings SET standing = 'cleared' WHERE technician_id = $1 AND requirement_set_id IS NULL", {
-      bind: [a.technician.id],
-    });
+    await db().query(
+      "UPDATE technician_standings SET standing = 'cleared' WHERE technician_id = $1 AND requirement_set_id IS NULL",
+      {
+        bind: [a.technician.id],
+      },
+    );
 
     const result = await check([a.technician.id]);
 
     expect(result.differences).toEqual([
-      { technicianId: a.technician.id, requirementSetId: null, problem: "standing", stored: "cleared", computed: "not_cleared" },
+      {
+        technicianId: a.technician.id,
+        requirementSetId: null,
+        problem: "standing",
+        stored: "cleared",
+        computed: "not_cleared",
+      },
     ]);
   });
 

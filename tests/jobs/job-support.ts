@@ -19,6 +19,9 @@ export async function storedStanding(technicianId: number, requirementSetId: num
 }
 
 export async function noticeThresholds(credentialId: number): Promise<number[]> {
-  const found = await rows<{ threshold_days: number }>("SELECT threshold_days FROM notices WHERE credential_id = $1 ORDER BY threshold_days DESC", [credentialId]);
+  const found = await rows<{ threshold_days: number }>(
+    "SELECT threshold_days FROM notices WHERE credential_id = $1 ORDER BY threshold_days DESC",
+    [credentialId],
+  );
   return found.map((r) => r.threshold_days);
 }

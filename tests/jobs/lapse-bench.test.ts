@@ -41,7 +41,8 @@ afterAll(async () => {
 
 /** Companies, users, technicians, documents and credentials, each with one INSERT ... SELECT generate_series. */
 async function generate(s: Sequelize) {
-  const zones = "ARRAY['America/Chicago','America/New_York','America/Denver','America/Los_Angeles','America/Phoenix']";
+  const zones =
+    "ARRAY['America/Chicago','America/New_York','America/Denver','America/Los_Angeles','America/Phoenix']";
   await s.query(`
     INSERT INTO companies (name, kind, address_line, postal_code, time_zone)
     SELECT 'Bench Service ' || g, 'service', g || ' Bench Road', '60601', (${zones})[1 + g % 5] FROM generate_series(1, ${COMPANIES}) g;
@@ -99,7 +100,10 @@ describe.runIf(BENCH)("lapse job over 200,000 credentials", () => {
     const first = await runLapseJob({ asOf: AS_OF }, { ...JOB_DEPS, sequelize: bench });
     const firstMs = performance.now() - firstStart;
     const secondStart = performance.now();
-    const second = await runLapseJob({ asOf: new Date(AS_OF.getTime() + 86_400_000) }, { ...JOB_DEPS, sequelize: bench });
+    const second = await runLapseJob(
+      { asOf: new Date(AS_OF.getTime() + 86_400_000) },
+      { ...JOB_DEPS, sequelize: bench },
+    );
     const secondMs = performance.now() - secondStart;
     const checkStart = performance.now();
     const check = await bench.transaction((tx) => checkStandingConsistency(tx));

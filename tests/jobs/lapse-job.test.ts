@@ -1,6 +1,10 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { buildTestApp, type TestApp } from "../support/test-app.ts";
-import { buildClearedProvider, buildCredentialRow, trainingFields } from "../fixtures/build-credential-row.ts";
+import {
+  buildClearedProvider,
+  buildCredentialRow,
+  trainingFields,
+} from "../fixtures/build-credential-row.ts";
 import { runLapseJob, type LapseJobReport } from "../../jobs/lapse.ts";
 import { onStandingsChanged, type ChangedStanding } from "../../server/standing/index.ts";
 import { Credential } from "../../server/credentials/model.ts";
@@ -58,9 +62,13 @@ describe("daily lapse job: the policy period", () => {
 
     expect(lapsingBefore).toBe("lapsing");
     expect(await storedStanding(provider.technician.id)).toBe("not_cleared");
-    const change = report.changedStandings.find((c) => c.technicianId === provider.technician.id && c.requirementSetId === null);
+    const change = report.changedStandings.find(
+      (c) => c.technicianId === provider.technician.id && c.requirementSetId === null,
+    );
     expect(change).toMatchObject({ companyId: provider.company.id, before: "lapsing", after: "not_cleared" });
-    expect(heard.some((c) => c.technicianId === provider.technician.id && c.after === "not_cleared")).toBe(true);
+    expect(heard.some((c) => c.technicianId === provider.technician.id && c.after === "not_cleared")).toBe(
+      true,
+    );
   });
 
   it("writes one audit event per lapsed credential", async () => {
@@ -123,13 +131,19 @@ describe("daily lapse job: warning windows", () => {
   it("records each run with its counts", async () => {
     const report = await run("2027-02-01T12:00:00Z");
 
-    const [record] = await rows<{ job: string; as_of: Date; finished_at: Date | null; counts: Record<string, number> }>(
-      "SELECT job, as_of, finished_at, counts FROM job_runs WHERE id = $1",
-      [report.jobRunId],
-    );
+    const [record] = await rows<{
+      job: string;
+      as_of: Date;
+      finished_at: Date | null;
+      counts: Record<string, number>;
+    }>("SELECT job, as_of, finished_at, counts FROM job_runs WHERE id = $1", [report.jobRunId]);
     expect(record?.job).toBe("lapse");
     expect(new Date(record!.as_of).toISOString()).toBe("2027-02-01T12:00:00.000Z");
     expect(record?.finished_at).not.toBeNull();
-    expect(record?.counts).toMatchObject({ lapsed: report.lapsed, noticesCreated: report.noticesCreated, statements: report.statements });
+    expect(record?.counts).toMatchObject({
+      lapsed: report.lapsed,
+      noticesCreated: report.noticesCreated,
+      statements: report.statements,
+    });
   });
 });

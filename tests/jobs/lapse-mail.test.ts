@@ -3,7 +3,11 @@ import { Sequelize } from "sequelize";
 import { buildTestApp, type TestApp } from "../support/test-app.ts";
 import { startTestMailCatcher } from "../support/mail-catcher.ts";
 import { freePort } from "../support/free-port.ts";
-import { buildClearedProvider, buildCredentialRow, trainingFields } from "../fixtures/build-credential-row.ts";
+import {
+  buildClearedProvider,
+  buildCredentialRow,
+  trainingFields,
+} from "../fixtures/build-credential-row.ts";
 import { runLapseJob } from "../../jobs/lapse.ts";
 import { runSendOutbox } from "../../jobs/send-outbox.ts";
 import { createSmtpMailer } from "../../server/mail/index.ts";
@@ -52,9 +56,13 @@ describe("lapse notices by e-mail", () => {
   it("sends each notice once when two instances race on separate connections, and one of them is skipped or finds nothing", async () => {
     const p = await providerWithCard();
     const asOf = new Date("2027-05-15T12:00:00Z"); // inside the 1-day window
-    const pools = [0, 1].map(() => new Sequelize(t.config.DATABASE_URL!, { dialect: "postgres", logging: false }));
+    const pools = [0, 1].map(
+      () => new Sequelize(t.config.DATABASE_URL!, { dialect: "postgres", logging: false }),
+    );
 
-    const results = await Promise.all(pools.map((sequelize) => runLapseJob({ asOf }, { ...JOB_DEPS, sequelize })));
+    const results = await Promise.all(
+      pools.map((sequelize) => runLapseJob({ asOf }, { ...JOB_DEPS, sequelize })),
+    );
     await Promise.all(pools.map((s) => s.close()));
     await catcher.deliver(new Date(Date.now() + 1_000));
 
@@ -94,9 +102,15 @@ describe("lapse notices by e-mail", () => {
 
     const down = await runSendOutbox({ asOf: new Date() }, { mailer: downMailer, from: FROM, maxRounds: 1 });
     downMailer.close();
-    const pending = await rows<{ status: string; attempts: number }>("SELECT status, attempts FROM outbox_messages WHERE to_address = $1", [p.admin.email]);
+    const pending = await rows<{ status: string; attempts: number }>(
+      "SELECT status, attempts FROM outbox_messages WHERE to_address = $1",
+      [p.admin.email],
+    );
     const upMailer = createSmtpMailer(catcher.url);
-    const up = await runSendOutbox({ asOf: new Date(Date.now() + 10 * 60_000) }, { mailer: upMailer, from: FROM });
+    const up = await runSendOutbox(
+      { asOf: new Date(Date.now() + 10 * 60_000) },
+      { mailer: upMailer, from: FROM },
+    );
     upMailer.close();
 
     expect(down.sent).toBe(0);
@@ -118,7 +132,9 @@ describe("lapse notices by e-mail", () => {
     expect(mail?.subject).toBe(`Commercial general liability for ${p.company.name} lapses in 1 day`);
     expect(mail?.text).toContain("Sunday, August 1, 2027 at 1:01 AM EDT");
     expect(mail?.text).toContain("https://clearbench.test/provider/documents/new?type=general_liability");
-    expect(mail?.html).toContain('<a href="https://clearbench.test/provider/documents/new?type=general_liability">');
+    expect(mail?.html).toContain(
+      '<a href="https://clearbench.test/provider/documents/new?type=general_liability">',
+    );
     expect(mail?.html).toContain("Commercial general liability held by");
     // A company-held policy goes to the office only, not to each technician.
     expect(catcher.to(p.technicianUser.email)).toHaveLength(0);
@@ -138,8 +154,16 @@ describe("lapse notices by e-mail", () => {
       [[p.admin.id, p.technicianUser.id]],
     );
     expect(notes).toEqual([
-      { user_id: p.admin.id, kind: "credential_lapsing", link: `https://clearbench.test/provider/documents/new?type=arc_flash&technicianId=${p.technician.id}` },
-      { user_id: p.technicianUser.id, kind: "credential_lapsing", link: "https://clearbench.test/technician/upload-card?type=arc_flash" },
+      {
+        user_id: p.admin.id,
+        kind: "credential_lapsing",
+        link: `https://clearbench.test/provider/documents/new?type=arc_flash&technicianId=${p.technician.id}`,
+      },
+      {
+        user_id: p.technicianUser.id,
+        kind: "credential_lapsing",
+        link: "https://clearbench.test/technician/upload-card?type=arc_flash",
+      },
     ]);
   });
 });
@@ -147,14 +171,23 @@ describe("lapse notices by e-mail", () => {
 describe("lapse job statements", () => {
   it("issues the same small number of SQL statements whatever the number of credentials", async () => {
     let issued = 0;
-    const counting = new Sequelize(t.config.DATABASE_URL!, { dialect: "postgres", logging: () => (issued += 1) });
+    const counting = new Sequelize(t.config.DATABASE_URL!, {
+      dialect: "postgres",
+      logging: () => (issued += 1),
+    });
     for (let i = 0; i < 3; i += 1) await providerWithCard("2024-08-10");
 
-    const first = await runLapseJob({ asOf: new Date("2027-08-09T12:00:00Z") }, { ...JOB_DEPS, sequelize: counting });
+    const first = await runLapseJob(
+      { asOf: new Date("2027-08-09T12:00:00Z") },
+      { ...JOB_DEPS, sequelize: counting },
+    );
     const firstIssued = issued;
     for (let i = 0; i < 12; i += 1) await providerWithCard("2024-08-12");
     issued = 0;
-    const second = await runLapseJob({ asOf: new Date("2027-08-11T12:00:00Z") }, { ...JOB_DEPS, sequelize: counting });
+    const second = await runLapseJob(
+      { asOf: new Date("2027-08-11T12:00:00Z") },
+      { ...JOB_DEPS, sequelize: counting },
+    );
     await counting.close();
 
     expect(first.skipped || second.skipped).toBe(false);

@@ -2,7 +2,11 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { spawn } from "node:child_process";
 import { buildTestApp, type TestApp } from "../support/test-app.ts";
 import { startTestMailCatcher } from "../support/mail-catcher.ts";
-import { buildClearedProvider, buildCredentialRow, trainingFields } from "../fixtures/build-credential-row.ts";
+import {
+  buildClearedProvider,
+  buildCredentialRow,
+  trainingFields,
+} from "../fixtures/build-credential-row.ts";
 
 let t: TestApp;
 let catcher: Awaited<ReturnType<typeof startTestMailCatcher>>;
@@ -19,7 +23,12 @@ afterAll(async () => {
 function runJobProcess(args: string[]): Promise<{ code: number | null; out: string }> {
   return new Promise((resolve, reject) => {
     const child = spawn(process.execPath, ["--import", "tsx", "jobs/cli.ts", "lapse", ...args], {
-      env: { ...process.env, DATABASE_URL: t.config.DATABASE_URL, SMTP_URL: catcher.url, LOG_LEVEL: "silent" },
+      env: {
+        ...process.env,
+        DATABASE_URL: t.config.DATABASE_URL,
+        SMTP_URL: catcher.url,
+        LOG_LEVEL: "silent",
+      },
       stdio: ["ignore", "pipe", "pipe"],
     });
     let out = "";

@@ -96,7 +96,9 @@ export function DataTable<Row extends RowData>({
   if (data.length === 0 && empty) return <>{empty}</>;
 
   return (
-    <div className="overflow-x-auto rounded-lg border border-ink-100 bg-white">
+    // `relative`: screen-reader-only text in cells is positioned absolutely and would otherwise escape the
+    // scrolling box and widen the whole page on phones.
+    <div className="relative overflow-x-auto rounded-lg border border-ink-100 bg-white">
       <table className="w-full border-collapse text-left text-sm">
         <caption
           className={

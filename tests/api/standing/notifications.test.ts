@@ -12,7 +12,15 @@ beforeAll(() => {
 afterAll(() => t.close());
 
 async function notify(userId: number, title: string, createdAt: Date) {
-  return Notification.create({ userId, kind: "credential_lapsing", title, body: `${title}.`, link: null, noticeId: null, createdAt });
+  return Notification.create({
+    userId,
+    kind: "credential_lapsing",
+    title,
+    body: `${title}.`,
+    link: null,
+    noticeId: null,
+    createdAt,
+  });
 }
 
 describe("notifications", () => {

@@ -3,7 +3,12 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import request from "supertest";
 import { buildTestApp, type TestApp } from "../../support/test-app.ts";
 import { buildCompany } from "../../support/build-company.ts";
-import { buildClearedProvider, buildCredentialRow, oemFields, trainingFields } from "../../fixtures/build-credential-row.ts";
+import {
+  buildClearedProvider,
+  buildCredentialRow,
+  oemFields,
+  trainingFields,
+} from "../../fixtures/build-credential-row.ts";
 import { Technician } from "../../../server/technicians/model.ts";
 import { signIn } from "./sign-in-as.ts";
 
@@ -23,9 +28,19 @@ function spindleSet(builder: string, minLevel = 2) {
   return {
     name: "On-site spindle work",
     requirements: [
-      { label: "General liability 1M / 2M", typeCodes: ["general_liability"], minLimits: { eachOccurrence: 1_000_000, generalAggregate: 2_000_000 } },
+      {
+        label: "General liability 1M / 2M",
+        typeCodes: ["general_liability"],
+        minLimits: { eachOccurrence: 1_000_000, generalAggregate: 2_000_000 },
+      },
       { label: "Arc-flash training", typeCodes: ["arc_flash"] },
-      { label: `${builder} training, level ${minLevel}`, typeCodes: ["oem_training"], builder, controlFamily: "Tessaline 9", minLevel },
+      {
+        label: `${builder} training, level ${minLevel}`,
+        typeCodes: ["oem_training"],
+        builder,
+        controlFamily: "Tessaline 9",
+        minLevel,
+      },
     ],
   };
 }
@@ -33,8 +48,16 @@ function spindleSet(builder: string, minLevel = 2) {
 async function qualifiedTechnician(builder: string) {
   const p = await buildClearedProvider({ glExpires: "2099-07-15", wcExpires: "2099-07-15" });
   const base = { companyId: p.company.id, technicianId: p.technician.id, submittedBy: p.admin.id };
-  await buildCredentialRow({ ...base, typeCode: "arc_flash", fields: trainingFields({ issueDate: new Date().toISOString().slice(0, 10) }) });
-  await buildCredentialRow({ ...base, typeCode: "oem_training", fields: oemFields({ builder, expiryDate: "2099-01-01" }) });
+  await buildCredentialRow({
+    ...base,
+    typeCode: "arc_flash",
+    fields: trainingFields({ issueDate: new Date().toISOString().slice(0, 10) }),
+  });
+  await buildCredentialRow({
+    ...base,
+    typeCode: "oem_training",
+    fields: oemFields({ builder, expiryDate: "2099-01-01" }),
+  });
   return p;
 }
 
@@ -50,12 +73,29 @@ describe("requirement sets", () => {
     const technicians = await Technician.count({ where: { active: true } });
 
     expect(created.status).toBe(201);
-    expect(created.body).toMatchObject({ companyId: company.id, name: "On-site spindle work", active: true, siteId: null });
+    expect(created.body).toMatchObject({
+      companyId: company.id,
+      name: "On-site spindle work",
+      active: true,
+      siteId: null,
+    });
     expect(listed.body.map((s: { id: number }) => s.id)).toEqual([created.body.id]);
-    expect(preview.body).toEqual({ technicians, cleared: 1, lapsing: 0, meeting: 1, notCleared: technicians - 1 });
-    const standing = await (await signIn(t.app, meets.admin.email)).get(`/api/technicians/${meets.technician.id}/standing`);
+    expect(preview.body).toEqual({
+      technicians,
+      cleared: 1,
+      lapsing: 0,
+      meeting: 1,
+      notCleared: technicians - 1,
+    });
+    const standing = await (
+      await signIn(t.app, meets.admin.email)
+    ).get(`/api/technicians/${meets.technician.id}/standing`);
     expect(standing.body.requirementSets).toEqual([
-      expect.objectContaining({ requirementSetId: created.body.id, name: "On-site spindle work", standing: "cleared" }),
+      expect.objectContaining({
+        requirementSetId: created.body.id,
+        name: "On-site spindle work",
+        standing: "cleared",
+      }),
     ]);
   });
 
@@ -107,16 +147,22 @@ describe("requirement sets", () => {
     const res = await agent.post("/api/requirement-sets").send({ name: "Empty", requirements: [] });
 
     expect(res.status).toBe(422);
-    expect(res.body.error.fields).toEqual([{ path: "body.requirements", message: "Add at least one requirement" }]);
+    expect(res.body.error.fields).toEqual([
+      { path: "body.requirements", message: "Add at least one requirement" },
+    ]);
   });
 
   it("answers 422 naming the exact type code the catalogue does not know", async () => {
     const { agent } = await buyer();
 
-    const res = await agent.post("/api/requirement-sets").send({ name: "Odd", requirements: [{ label: "x", typeCodes: ["arc_flash", "moon_walking"] }] });
+    const res = await agent
+      .post("/api/requirement-sets")
+      .send({ name: "Odd", requirements: [{ label: "x", typeCodes: ["arc_flash", "moon_walking"] }] });
 
     expect(res.status).toBe(422);
-    expect(res.body.error.fields).toEqual([{ path: "body.requirements.0.typeCodes.1", message: "Unknown credential type moon_walking" }]);
+    expect(res.body.error.fields).toEqual([
+      { path: "body.requirements.0.typeCodes.1", message: "Unknown credential type moon_walking" },
+    ]);
   });
 
   it("answers 401 when signed out", async () => {

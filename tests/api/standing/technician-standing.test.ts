@@ -23,7 +23,14 @@ describe("technician standing", () => {
     expect(res.status).toBe(200);
     expect(res.body.baseline.standing).toBe("cleared");
     expect(res.body.baseline.results).toEqual(
-      defaultBaseline.requirements.map((r) => expect.objectContaining({ requirement: r, status: "met", reason: null, lapsesAt: expect.any(String) })),
+      defaultBaseline.requirements.map((r) =>
+        expect.objectContaining({
+          requirement: r,
+          status: "met",
+          reason: null,
+          lapsesAt: expect.any(String),
+        }),
+      ),
     );
   });
 
@@ -55,8 +62,12 @@ describe("technician standing", () => {
     const other = await buildProvider();
     const { users } = await buildCompany("shop", ["buyer"]);
 
-    const foreign = await (await signIn(t.app, other.admin.email)).get(`/api/technicians/${p.technician.id}/standing`);
-    const buyer = await (await signIn(t.app, users.buyer!.email)).get(`/api/technicians/${p.technician.id}/standing`);
+    const foreign = await (
+      await signIn(t.app, other.admin.email)
+    ).get(`/api/technicians/${p.technician.id}/standing`);
+    const buyer = await (
+      await signIn(t.app, users.buyer!.email)
+    ).get(`/api/technicians/${p.technician.id}/standing`);
     const anonymous = await request(t.app).get(`/api/technicians/${p.technician.id}/standing`);
 
     expect([foreign.status, buyer.status, anonymous.status]).toEqual([404, 403, 401]);
@@ -69,12 +80,17 @@ describe("platform baseline", () => {
     const { users } = await buildCompany("platform", ["admin"]);
     const admin = await signIn(t.app, users.admin!.email);
     const office = await signIn(t.app, p.admin.email);
-    const stricter = [...defaultBaseline.requirements, { id: "baseline_auto", label: "Auto liability in force", typeCodes: ["auto_liability"] }];
+    const stricter = [
+      ...defaultBaseline.requirements,
+      { id: "baseline_auto", label: "Auto liability in force", typeCodes: ["auto_liability"] },
+    ];
 
     const before = await office.get("/api/baseline");
     const put = await admin.put("/api/admin/baseline").send({ requirements: stricter });
     const standing = await office.get(`/api/technicians/${p.technician.id}/standing`);
-    const restored = await admin.put("/api/admin/baseline").send({ requirements: defaultBaseline.requirements });
+    const restored = await admin
+      .put("/api/admin/baseline")
+      .send({ requirements: defaultBaseline.requirements });
 
     expect(before.status).toBe(200);
     expect(put.status).toBe(200);
@@ -89,8 +105,14 @@ describe("platform baseline", () => {
     const { users } = await buildCompany("platform", ["admin"]);
     const admin = await signIn(t.app, users.admin!.email);
 
-    const office = await (await signIn(t.app, p.admin.email)).put("/api/admin/baseline").send({ requirements: defaultBaseline.requirements });
-    const invalid = await admin.put("/api/admin/baseline").send({ requirements: [{ label: "", typeCodes: ["general_liability"] }] });
+    const office = await (
+      await signIn(t.app, p.admin.email)
+    )
+      .put("/api/admin/baseline")
+      .send({ requirements: defaultBaseline.requirements });
+    const invalid = await admin
+      .put("/api/admin/baseline")
+      .send({ requirements: [{ label: "", typeCodes: ["general_liability"] }] });
     const anonymous = await request(t.app).get("/api/baseline");
 
     expect(office.status).toBe(403);
@@ -102,7 +124,10 @@ describe("platform baseline", () => {
 
 describe("job runs", () => {
   it("lists the lapse job's runs with their counts to an admin only", async () => {
-    const report = await runLapseJob({ asOf: new Date("2027-03-01T06:00:00Z") }, { warningDays: [60, 30, 14, 7, 1], publicUrl: "https://clearbench.test" });
+    const report = await runLapseJob(
+      { asOf: new Date("2027-03-01T06:00:00Z") },
+      { warningDays: [60, 30, 14, 7, 1], publicUrl: "https://clearbench.test" },
+    );
     const { users } = await buildCompany("platform", ["admin", "reviewer"]);
 
     const res = await (await signIn(t.app, users.admin!.email)).get("/api/admin/job-runs");
@@ -110,7 +135,11 @@ describe("job runs", () => {
 
     expect(report.skipped).toBe(false);
     expect(res.status).toBe(200);
-    expect(res.body[0]).toMatchObject({ job: "lapse", asOf: "2027-03-01T06:00:00.000Z", counts: expect.objectContaining({ lapsed: expect.any(Number) }) });
+    expect(res.body[0]).toMatchObject({
+      job: "lapse",
+      asOf: "2027-03-01T06:00:00.000Z",
+      counts: expect.objectContaining({ lapsed: expect.any(Number) }),
+    });
     expect(reviewer.status).toBe(403);
   });
 });

@@ -1,13 +1,176 @@
+import { useState } from "react";
+import { useSuspenseQuery } from "@tanstack/react-query";
+import { Link, useSearchParams, type LoaderFunctionArgs } from "react-router-dom";
+import { directoryQuerySchema, directorySorts, type DirectorySort } from "@shared/directory/schemas.ts";
+import { technologyLabels, type MachineTechnology } from "@shared/technicians/schemas.ts";
+import { paths } from "@/config/paths.ts";
+import { Button } from "@/components/ui/button.tsx";
 import { CautionNote } from "@/components/ui/caution-note.tsx";
-import { PlaceholderPage } from "@/components/ui/placeholder-page.tsx";
+import { EmptyState } from "@/components/ui/empty-state.tsx";
+import { FormError } from "@/components/ui/form-error.tsx";
+import { PageHeader } from "@/components/ui/page-header.tsx";
+import { SelectField } from "@/components/ui/select-field.tsx";
+import { Spinner } from "@/components/ui/spinner.tsx";
+import { credentialTypesQuery } from "@/features/credentials/api/get-credential-types.ts";
+import { directorySearchQuery, useDirectorySearch } from "@/features/directory/api/search-directory.ts";
+import { filterWords } from "@/features/directory/components/directory-format.ts";
+import {
+  draftFromSearch,
+  onSiteHoursOf,
+  searchFromDraft,
+  type DirectoryDraft,
+} from "@/features/directory/components/directory-draft.ts";
+import { DirectoryFilters } from "@/features/directory/components/directory-filters.tsx";
+import { DirectoryResultCards } from "@/features/directory/components/directory-result-cards.tsx";
+import { DirectoryResultsTable } from "@/features/directory/components/directory-results-table.tsx";
+import { requirementSetsQuery } from "@/features/requirement-sets/api/get-requirement-sets.ts";
+import { useSiteEquipment } from "@/features/sites/api/get-site-equipment.ts";
+import { sitesQuery } from "@/features/sites/api/get-sites.ts";
+import { queryClient } from "@/lib/query-client.ts";
+
+const sortLabels: Record<DirectorySort, string> = {
+  score: "Rating (ranked)",
+  distance: "Distance",
+  hourlyRate: "Hourly rate",
+  soonestLapse: "Soonest lapse",
+};
+
+/** The URL's filters in their one normal form (no cursor): the cache key and the API's query string. */
+const normalSearch = (params: URLSearchParams) =>
+  searchFromDraft(draftFromSearch(params), params.get("sort") ?? "").toString();
+
+export async function loader({ request }: LoaderFunctionArgs) {
+  const search = normalSearch(new URL(request.url).searchParams);
+  await Promise.all([
+    queryClient.ensureQueryData(sitesQuery()),
+    queryClient.ensureQueryData(requirementSetsQuery()),
+    queryClient.ensureQueryData(credentialTypesQuery()),
+    // A bad bookmark should still open the page, with the problem shown beside the filters.
+    queryClient.prefetchInfiniteQuery(directorySearchQuery(search)),
+  ]);
+  return null;
+}
+
+function Results({ search, onSiteHours }: { search: string; onSiteHours: number }) {
+  const results = useDirectorySearch(search);
+  if (results.isPending) return <Spinner label="Searching" />;
+  if (results.isError) return <FormError error={results.error} />;
+  const rows = results.data.pages.flatMap((p) => p.rows);
+  const first = results.data.pages[0]!;
+  if (rows.length === 0)
+    return (
+      <EmptyState title="No cleared technician matches these filters">
+        {first.emptyReason
+          ? `Most candidates were removed by ${filterWords[first.emptyReason.filter]} (${first.emptyReason.removed} ${
+              first.emptyReason.removed === 1 ? "technician" : "technicians"
+            }). Loosen that filter first.`
+          : "Only technicians who are cleared today are listed. Try fewer filters."}
+      </EmptyState>
+    );
+  return (
+    <div className="space-y-3" aria-busy={results.isFetching || undefined}>
+      <p className="text-sm text-ink-700" role="status">
+        Showing {rows.length} cleared {rows.length === 1 ? "technician" : "technicians"}
+        {results.hasNextPage ? "; more below" : ""}. Distances are straight lines; drive times assume{" "}
+        {first.assumptions.averageSpeedMph} mph on roads {Math.round((first.assumptions.roadFactor - 1) * 100)}% longer
+        than the straight line.
+      </p>
+      <div className="hidden md:block">
+        <DirectoryResultsTable rows={rows} onSiteHours={onSiteHours} />
+      </div>
+      <div className="md:hidden">
+        <DirectoryResultCards rows={rows} onSiteHours={onSiteHours} />
+      </div>
+      {results.hasNextPage && (
+        <Button
+          variant="secondary"
+          className="w-full sm:w-auto"
+          pending={results.isFetchingNextPage}
+          pendingLabel="Loading more"
+          onClick={() => void results.fetchNextPage()}
+        >
+          Load more
+        </Button>
+      )}
+    </div>
+  );
+}
+
+function Search({ params }: { params: URLSearchParams }) {
+  const [, setSearchParams] = useSearchParams();
+  const { data: sites } = useSuspenseQuery(sitesQuery());
+  const { data: sets } = useSuspenseQuery(requirementSetsQuery());
+  const { data: types } = useSuspenseQuery(credentialTypesQuery());
+  const [draft, setDraft] = useState<DirectoryDraft>(() => draftFromSearch(params));
+  const [invalid, setInvalid] = useState<unknown>(null);
+  const equipment = useSiteEquipment(draft.siteId ? Number(draft.siteId) : null);
+  const sort = params.get("sort") ?? "";
+  const search = normalSearch(params);
+
+  const apply = (next: DirectoryDraft, nextSort: string) => {
+    const query = searchFromDraft(next, nextSort);
+    const parsed = directoryQuerySchema.safeParse(Object.fromEntries(query));
+    if (!parsed.success) {
+      setInvalid(parsed.error);
+      return;
+    }
+    setInvalid(null);
+    setSearchParams(query);
+  };
+
+  return (
+    <div className="space-y-5">
+      <DirectoryFilters
+        draft={draft}
+        onChange={setDraft}
+        onSubmit={() => apply(draft, sort)}
+        onClear={() => setSearchParams(new URLSearchParams())}
+        sites={sites.map((s) => ({ value: String(s.id), label: s.name }))}
+        machines={(equipment.data ?? []).map((m) => ({
+          id: m.id,
+          label: `${m.builder} ${m.model} (${technologyLabels[m.technology as MachineTechnology] ?? m.technology}, ${m.controlFamily})`,
+          technology: m.technology,
+          controlFamily: m.controlFamily,
+        }))}
+        requirementSets={sets.map((s) => ({ value: String(s.id), label: s.name }))}
+        credentialTypes={types.filter((t) => t.active).map((t) => ({ code: t.code, name: t.name }))}
+        error={invalid}
+      />
+      {sites.length === 0 && (
+        <p className="text-sm text-ink-700">
+          Add a site on the <Link to={paths.buyer.sites} className="underline underline-offset-2">Sites</Link> page to see
+          distances, drive times and call-out estimates.
+        </p>
+      )}
+      <div className="flex flex-wrap items-end justify-between gap-3">
+        <h2 className="text-lg font-semibold text-ink-900">Results</h2>
+        <SelectField
+          label="Sort by"
+          name="sort"
+          className="w-56"
+          options={directorySorts
+            .filter((s) => s !== "distance" || params.get("siteId"))
+            .map((s) => ({ value: s, label: sortLabels[s] }))}
+          value={sort || (params.get("siteId") ? "distance" : "score")}
+          onChange={(e) => apply(draftFromSearch(params), e.target.value)}
+        />
+      </div>
+      <Results search={search} onSiteHours={onSiteHoursOf(draftFromSearch(params))} />
+      <CautionNote />
+    </div>
+  );
+}
 
 export function Component() {
+  const [params] = useSearchParams();
   return (
-    <PlaceholderPage
-      title="Directory"
-      purpose="Cleared technicians near your sites: filter by credential, OEM training, technology, insurance limits, distance and rating. Only technicians cleared today appear."
-    >
-      <CautionNote />
-    </PlaceholderPage>
+    <>
+      <PageHeader
+        title="Directory"
+        description="Technicians who are cleared today, near your sites. Filter by credential, OEM training, technology, insurance limits, distance and rating; the filters stay in the address, so a search can be bookmarked."
+      />
+      {/* A new URL (back, a bookmark) starts a fresh draft from it. */}
+      <Search key={normalSearch(params)} params={params} />
+    </>
   );
 }

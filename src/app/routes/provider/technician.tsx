@@ -10,6 +10,7 @@ import { Spinner } from "@/components/ui/spinner.tsx";
 import type { Credential } from "@/features/credentials/api/credential-shapes.ts";
 import { credentialsQuery } from "@/features/credentials/api/get-credentials.ts";
 import { CredentialsTable } from "@/features/credentials/components/credentials-table.tsx";
+import { FormError } from "@/components/ui/form-error.tsx";
 import { technicianStandingQuery } from "@/features/standing/api/get-technician-standing.ts";
 import { StandingPanel } from "@/features/standing/components/standing-panel.tsx";
 import { useDeactivateTechnician } from "@/features/technicians/api/deactivate-technician.ts";
@@ -106,6 +107,8 @@ export function Component() {
             </h2>
             {standing.isPending ? (
               <Spinner label="Loading standing" />
+            ) : standing.isError ? (
+              <FormError error={standing.error} />
             ) : (
               <StandingPanel standing={standing.data ?? null} now={now} />
             )}

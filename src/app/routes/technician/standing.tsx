@@ -4,6 +4,7 @@ import { Link, useLoaderData, useLocation } from "react-router-dom";
 import { hrefs, paths } from "@/config/paths.ts";
 import { buttonStyles } from "@/components/ui/button-styles.ts";
 import { EmptyState } from "@/components/ui/empty-state.tsx";
+import { FormError } from "@/components/ui/form-error.tsx";
 import { PageHeader } from "@/components/ui/page-header.tsx";
 import { Spinner } from "@/components/ui/spinner.tsx";
 import type { Credential } from "@/features/credentials/api/credential-shapes.ts";
@@ -55,6 +56,8 @@ export function Component() {
           </h2>
           {standing.isPending ? (
             <Spinner label="Loading your standing" />
+          ) : standing.isError ? (
+            <FormError error={standing.error} />
           ) : (
             <StandingPanel standing={standing.data ?? null} now={now} />
           )}
@@ -66,6 +69,7 @@ export function Component() {
           <CredentialsTable
             caption="My credentials"
             credentials={credentials}
+            showHolder={false}
             correctionHref={correctionHref}
             empty={
               <EmptyState title="No cards yet" action={upload}>

@@ -14,10 +14,11 @@ const notificationSchema = z.object({
 });
 export type Notification = z.infer<typeof notificationSchema>;
 
-const notificationsSchema = z.object({ items: z.array(notificationSchema), unreadCount: z.number() });
+// shared/notices/schemas.ts NotificationListDto
+const notificationsSchema = z.object({ notifications: z.array(notificationSchema), unreadCount: z.number() });
 export type Notifications = z.infer<typeof notificationsSchema>;
 
-const none: Notifications = { items: [], unreadCount: 0 };
+const none: Notifications = { notifications: [], unreadCount: 0 };
 
 /** The signed-in user's notifications; an empty list while the notices service is not there yet (404). */
 export async function getNotifications(): Promise<Notifications> {

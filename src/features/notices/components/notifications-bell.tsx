@@ -5,6 +5,7 @@ import { formatDateTime } from "@/lib/format-date-time.ts";
 import { useNotifications } from "../api/get-notifications.ts";
 import { useMarkAllNotificationsRead } from "../api/mark-all-notifications-read.ts";
 import { useMarkNotificationRead } from "../api/mark-notification-read.ts";
+import { inAppPath } from "./in-app-path.ts";
 
 /** The header's bell: unread count in its name, a list of notices, and marking them read. */
 export function NotificationsBell() {
@@ -17,7 +18,7 @@ export function NotificationsBell() {
   const markAll = useMarkAllNotificationsRead();
   useDismiss(root, open, close);
   const unread = data?.unreadCount ?? 0;
-  const items = data?.items ?? [];
+  const items = data?.notifications ?? [];
 
   return (
     <div ref={root} className="relative">
@@ -77,7 +78,7 @@ export function NotificationsBell() {
                       <span className="font-semibold">{item.readAt ? "" : "Unread: "}</span>
                       {item.link ? (
                         <Link
-                          to={item.link}
+                          to={inAppPath(item.link)}
                           onClick={close}
                           className="font-semibold underline underline-offset-2"
                         >

@@ -15,18 +15,21 @@ const requirementResultSchema = z.object({
 });
 export type RequirementResultView = z.infer<typeof requirementResultSchema>;
 
-const standingResultSchema = z.object({
+// shared/standing/schemas.ts StandingAgainstDto: the baseline (requirementSetId null) or one active requirement set.
+const standingAgainstSchema = z.object({
+  requirementSetId: z.number().nullable(),
+  name: z.string(),
   standing: z.enum(standings),
   earliestLapse: z.string().nullable(),
+  computedAt: z.string(),
   results: z.array(requirementResultSchema),
 });
-export type StandingResultView = z.infer<typeof standingResultSchema>;
+export type StandingAgainstView = z.infer<typeof standingAgainstSchema>;
 
 const technicianStandingSchema = z.object({
-  baseline: standingResultSchema,
-  sets: z
-    .array(standingResultSchema.extend({ requirementSet: z.object({ id: z.number(), name: z.string() }) }))
-    .default([]),
+  technicianId: z.number(),
+  baseline: standingAgainstSchema.nullable(),
+  requirementSets: z.array(standingAgainstSchema),
 });
 export type TechnicianStanding = z.infer<typeof technicianStandingSchema>;
 

@@ -3,7 +3,7 @@ import { StatusBadge } from "@/components/ui/status-badge.tsx";
 import { daysUntil, formatInstantDate } from "@/lib/format-date.ts";
 import type {
   RequirementResultView,
-  StandingResultView,
+  StandingAgainstView,
   TechnicianStanding,
 } from "../api/get-technician-standing.ts";
 
@@ -20,7 +20,7 @@ const reasonWords: Record<NonNullable<RequirementResultView["reason"]>, string> 
   too_old: "Too old",
 };
 
-function OverallBadge({ result, now }: { result: StandingResultView; now: Date }) {
+function OverallBadge({ result, now }: { result: StandingAgainstView; now: Date }) {
   if (result.standing === "lapsing" && result.earliestLapse)
     return <StatusBadge status="lapsing" daysLeft={daysUntil(result.earliestLapse, now)} />;
   return <StatusBadge status={result.standing === "lapsing" ? "cleared" : result.standing} />;
@@ -40,19 +40,23 @@ function RequirementRow({ result, now }: { result: RequirementResultView; now: D
       <span className="font-medium text-ink-900">{result.requirement.label}</span>
       <span>{badge}</span>
       <span className="text-sm text-ink-800">
-        {result.status === "unmet" && result.reason && (
-          <span className="font-semibold">{reasonWords[result.reason]}: </span>
-        )}
-        {result.detail}
-        {result.lapsesAt && result.status !== "unmet" && (
-          <span className="block text-ink-700">Counts until {formatInstantDate(result.lapsesAt)}</span>
+        {result.status === "unmet" ? (
+          <>
+            {result.reason && <span className="font-semibold">{reasonWords[result.reason]}: </span>}
+            {result.detail}
+          </>
+        ) : result.lapsesAt ? (
+          // The engine's sentence names credential ids and ISO dates; people get the date in words.
+          <span className="text-ink-700">Counts until {formatInstantDate(result.lapsesAt)}</span>
+        ) : (
+          <span className="text-ink-700">Met; it does not expire</span>
         )}
       </span>
     </li>
   );
 }
 
-function StandingBlock({ title, result, now }: { title: string; result: StandingResultView; now: Date }) {
+function StandingBlock({ title, result, now }: { title: string; result: StandingAgainstView; now: Date }) {
   return (
     <section aria-label={title} className="rounded-lg border border-ink-100 bg-white px-4 py-3">
       <div className="flex flex-wrap items-center gap-3 border-b border-ink-100 pb-2">
@@ -75,7 +79,7 @@ function StandingBlock({ title, result, now }: { title: string; result: Standing
 
 /** Each requirement, whether it is met, and why not; the baseline first, then any site's requirement sets. */
 export function StandingPanel({ standing, now }: { standing: TechnicianStanding | null; now: Date }) {
-  if (!standing) {
+  if (!standing || (!standing.baseline && standing.requirementSets.length === 0)) {
     return (
       <EmptyState title="Standing is not available yet">
         The standing of each requirement will show here once it has been computed.
@@ -84,9 +88,9 @@ export function StandingPanel({ standing, now }: { standing: TechnicianStanding 
   }
   return (
     <div className="space-y-4">
-      <StandingBlock title="Platform baseline" result={standing.baseline} now={now} />
-      {standing.sets.map((set) => (
-        <StandingBlock key={set.requirementSet.id} title={set.requirementSet.name} result={set} now={now} />
+      {standing.baseline && <StandingBlock title="Platform baseline" result={standing.baseline} now={now} />}
+      {standing.requirementSets.map((set) => (
+        <StandingBlock key={set.requirementSetId} title={set.name} result={set} now={now} />
       ))}
     </div>
   );

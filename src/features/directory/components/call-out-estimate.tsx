@@ -1,0 +1,36 @@
+import { formatCents } from "@/lib/format-money.ts";
+import type { CallOut } from "../api/directory-shapes.ts";
+
+type CallOutEstimateProps = {
+  callOut: CallOut;
+  onSiteHours: number;
+  /** Names the estimate for assistive technology when several are on one page. */
+  forWhom: string;
+};
+
+/** The total, with its three parts one tap away; always says it is an estimate before tax. */
+export function CallOutEstimate({ callOut, onSiteHours, forWhom }: CallOutEstimateProps) {
+  return (
+    <details className="group text-sm">
+      <summary
+        className="min-h-11 cursor-pointer list-none py-1 marker:hidden"
+        aria-label={`Call-out estimate for ${forWhom}: ${formatCents(callOut.totalCents)} before tax. Show its parts`}
+      >
+        <span className="font-semibold text-ink-900 underline decoration-dotted underline-offset-4">
+          {formatCents(callOut.totalCents)}
+        </span>
+        <span className="block text-xs text-ink-700">estimate before tax</span>
+      </summary>
+      <dl className="mt-1 grid grid-cols-[auto_auto] gap-x-3 gap-y-0.5 rounded-md border border-ink-100 bg-ink-50 px-3 py-2 text-xs text-ink-900">
+        <dt>Travel, both ways</dt>
+        <dd className="text-right">{formatCents(callOut.travelCents)}</dd>
+        <dt>{onSiteHours} h on site</dt>
+        <dd className="text-right">{formatCents(callOut.labourCents)}</dd>
+        <dt>Mileage, both ways</dt>
+        <dd className="text-right">{formatCents(callOut.mileageCents)}</dd>
+        <dt className="font-semibold">Estimate before tax</dt>
+        <dd className="text-right font-semibold">{formatCents(callOut.totalCents)}</dd>
+      </dl>
+    </details>
+  );
+}

@@ -1,0 +1,40 @@
+import { Link } from "react-router-dom";
+import { hrefs } from "@/config/paths.ts";
+import { formatCents } from "@/lib/format-money.ts";
+import type { DirectoryRow } from "../api/directory-shapes.ts";
+import { formatDriveTime, formatKm } from "./directory-format.ts";
+
+/** The technician's name as the link to their page. */
+export function TechnicianLink({ row }: { row: Pick<DirectoryRow, "technicianId" | "name"> }) {
+  return (
+    <Link
+      to={hrefs.directoryTechnician(row.technicianId)}
+      className="inline-flex min-h-11 items-center font-semibold text-ink-900 underline underline-offset-2 focus-visible:outline-2 focus-visible:outline-ink-700 md:min-h-0"
+    >
+      {row.name}
+    </Link>
+  );
+}
+
+/** Straight-line distance, said so, and the estimated drive. */
+export function DistanceText({ row }: { row: DirectoryRow }) {
+  if (row.distanceKm === null) return <span className="text-sm text-ink-700">Choose a site</span>;
+  return (
+    <span className="text-sm">
+      <span className="whitespace-nowrap text-ink-900">{formatKm(row.distanceKm)}</span>{" "}
+      <span className="whitespace-nowrap text-xs text-ink-700">straight line</span>
+      {row.driveHours !== null && (
+        <span className="block whitespace-nowrap text-ink-800">about {formatDriveTime(row.driveHours)} drive</span>
+      )}
+    </span>
+  );
+}
+
+export function RatesText({ row }: { row: DirectoryRow }) {
+  return (
+    <span className="text-sm text-ink-900">
+      <span className="whitespace-nowrap">{formatCents(row.hourlyRateCents)}/h on site</span>{" "}
+      <span className="whitespace-nowrap text-ink-700">{formatCents(row.travelRateCents)}/h travel</span>
+    </span>
+  );
+}
