@@ -27,42 +27,52 @@ const widths = [
 ] as const;
 
 describe("a service company's office uploads a general-liability certificate", () => {
-  it.each(widths)("pre-fills what the PDF says and sends it for verification ($name)", async ({ name, seed, viewport }) => {
-    const certificate = await writeCertificateFile(seed, office.company);
-    const context = await browser.newContext({ viewport });
-    const page = await context.newPage();
-    await signIn(page, server.url, office.email, DEMO_PASSWORD);
-    await page.getByRole("heading", { name: "Dashboard" }).waitFor();
-    await screenshot(page, `provider-upload-${name}-1-dashboard`);
-    expect(await seriousAccessibilityProblems(page)).toEqual([]);
+  it.each(widths)(
+    "pre-fills what the PDF says and sends it for verification ($name)",
+    async ({ name, seed, viewport }) => {
+      const certificate = await writeCertificateFile(seed, office.company);
+      const context = await browser.newContext({ viewport });
+      const page = await context.newPage();
+      await signIn(page, server.url, office.email, DEMO_PASSWORD);
+      await page.getByRole("heading", { name: "Dashboard" }).waitFor();
+      await screenshot(page, `provider-upload-${name}-1-dashboard`);
+      expect(await seriousAccessibilityProblems(page)).toEqual([]);
 
-    await page.goto(`${server.url}/provider/documents/new`);
-    await page.getByLabel("Type of document").selectOption({ label: "Commercial general liability" });
-    await screenshot(page, `provider-upload-${name}-2-choose`);
-    expect(await seriousAccessibilityProblems(page)).toEqual([]);
-    await page.getByLabel("Choose a file").setInputFiles(certificate.file);
-    const form = page.getByRole("form", { name: "Check the fields" });
-    await form.waitFor();
-    await screenshot(page, `provider-upload-${name}-3-fields`);
+      await page.goto(`${server.url}/provider/documents/new`);
+      await page.getByLabel("Type of document").selectOption({ label: "Commercial general liability" });
+      await screenshot(page, `provider-upload-${name}-2-choose`);
+      expect(await seriousAccessibilityProblems(page)).toEqual([]);
+      await page.getByLabel("Choose a file").setInputFiles(certificate.file);
+      const form = page.getByRole("form", { name: "Check the fields" });
+      await form.waitFor();
+      await screenshot(page, `provider-upload-${name}-3-fields`);
 
-    const written = certificate.generalLiability;
-    await expect(form.getByLabel("Policy number").inputValue()).resolves.toBe(written.policyNumber);
-    await expect(form.getByLabel("Effective date").inputValue()).resolves.toBe(written.effectiveDate);
-    await expect(form.getByLabel("Expiration date").inputValue()).resolves.toBe(written.expirationDate);
-    await expect(form.getByLabel("Each occurrence").inputValue()).resolves.toBe(dollars(written.limits.eachOccurrence));
-    await expect(form.getByLabel("General aggregate").inputValue()).resolves.toBe(dollars(written.limits.generalAggregate));
-    expect(await seriousAccessibilityProblems(page)).toEqual([]);
+      const written = certificate.generalLiability;
+      await expect(form.getByLabel("Policy number").inputValue()).resolves.toBe(written.policyNumber);
+      await expect(form.getByLabel("Effective date").inputValue()).resolves.toBe(written.effectiveDate);
+      await expect(form.getByLabel("Expiration date").inputValue()).resolves.toBe(written.expirationDate);
+      await expect(form.getByLabel("Each occurrence").inputValue()).resolves.toBe(
+        dollars(written.limits.eachOccurrence),
+      );
+      await expect(form.getByLabel("General aggregate").inputValue()).resolves.toBe(
+        dollars(written.limits.generalAggregate),
+      );
+      expect(await seriousAccessibilityProblems(page)).toEqual([]);
 
-    await form.getByRole("button", { name: "Send for verification" }).click();
-    await page.waitForURL((url) => url.pathname === "/provider/documents");
-    const sent = page.getByRole("status").filter({ hasText: "was sent for verification" });
-    await sent.waitFor();
-    await screenshot(page, `provider-upload-${name}-4-documents`);
+      await form.getByRole("button", { name: "Send for verification" }).click();
+      await page.waitForURL((url) => url.pathname === "/provider/documents");
+      const sent = page.getByRole("status").filter({ hasText: "was sent for verification" });
+      await sent.waitFor();
+      await screenshot(page, `provider-upload-${name}-4-documents`);
 
-    await expect(sent.innerText()).resolves.toContain("Commercial general liability");
-    const waiting = page.getByRole("row").filter({ hasText: "Commercial general liability" }).filter({ hasText: "Awaiting verification" });
-    await expect(waiting.count()).resolves.toBeGreaterThanOrEqual(1);
-    expect(await seriousAccessibilityProblems(page)).toEqual([]);
-    await context.close();
-  });
+      await expect(sent.innerText()).resolves.toContain("Commercial general liability");
+      const waiting = page
+        .getByRole("row")
+        .filter({ hasText: "Commercial general liability" })
+        .filter({ hasText: "Awaiting verification" });
+      await expect(waiting.count()).resolves.toBeGreaterThanOrEqual(1);
+      expect(await seriousAccessibilityProblems(page)).toEqual([]);
+      await context.close();
+    },
+  );
 });

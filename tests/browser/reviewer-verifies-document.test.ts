@@ -22,6 +22,7 @@ afterAll(async () => {
 
 const office = demoSignIns.find((s) => s.email === "office@kestrel-ridge.test")!;
 const reviewer = demoSignIns.find((s) => s.role === "reviewer")!;
+const technician = demoSignIns.find((s) => s.email === "tobias@kestrel-ridge.test")!;
 
 /** The office's own upload, through the API with the office's session: this journey starts at the queue. */
 async function submitCertificate(context: BrowserContext, seed: number) {
@@ -31,23 +32,38 @@ async function submitCertificate(context: BrowserContext, seed: number) {
     headers,
     multipart: {
       typeCode: "general_liability",
-      file: { name: "general-liability.pdf", mimeType: "application/pdf", buffer: readFileSync(certificate.file) },
+      file: {
+        name: "general-liability.pdf",
+        mimeType: "application/pdf",
+        buffer: readFileSync(certificate.file),
+      },
     },
   });
   expect(uploaded.status()).toBe(201);
-  const { document, extraction } = (await uploaded.json()) as { document: { id: number }; extraction: { fields: Record<string, unknown> } };
+  const { document, extraction } = (await uploaded.json()) as {
+    document: { id: number };
+    extraction: { fields: Record<string, unknown> };
+  };
   const submitted = await context.request.post(`${server.url}/api/credentials`, {
     headers,
     data: { documentId: document.id, typeCode: "general_liability", fields: extraction.fields },
   });
   expect(submitted.status()).toBe(201);
-  return { id: ((await submitted.json()) as { id: number }).id, expirationDate: certificate.generalLiability.expirationDate };
+  return {
+    id: ((await submitted.json()) as { id: number }).id,
+    expirationDate: certificate.generalLiability.expirationDate,
+  };
 }
 
 // The policy ends at 12:01 a.m. on its expiration date in the insured's zone (standard policy wording), which is
 // still that calendar date in UTC, the headless browser's zone.
 const shownDate = (isoDate: string) =>
-  new Intl.DateTimeFormat("en-US", { month: "short", day: "numeric", year: "numeric", timeZone: "UTC" }).format(new Date(`${isoDate}T12:00:00Z`));
+  new Intl.DateTimeFormat("en-US", {
+    month: "short",
+    day: "numeric",
+    year: "numeric",
+    timeZone: "UTC",
+  }).format(new Date(`${isoDate}T12:00:00Z`));
 
 async function mailsTo(address: string, subjectStart: string): Promise<number> {
   const client = new pg.Client({ connectionString: server.databaseUrl });
@@ -65,7 +81,7 @@ async function mailsTo(address: string, subjectStart: string): Promise<number> {
 }
 
 describe("a compliance reviewer verifies a submitted certificate", () => {
-  it("shows the page beside its fields, and the office then sees it verified and is told by e-mail", async () => {
+  it("shows the page beside its fields; the office then sees it verified and is told by e-mail, and the technician's standing counts it", async () => {
     const officeContext = await browser.newContext({ viewport: { width: 1280, height: 800 } });
     const officePage = await officeContext.newPage();
     await signIn(officePage, server.url, office.email, DEMO_PASSWORD);
@@ -74,7 +90,7 @@ describe("a compliance reviewer verifies a submitted certificate", () => {
     const page = await reviewerContext.newPage();
 
     await signIn(page, server.url, reviewer.email, DEMO_PASSWORD);
-    await page.getByRole("heading", { name: /queue/i }).first().waitFor();
+    await page.getByRole("heading", { name: "Verification queue" }).waitFor();
     const row = page.getByRole("row").filter({ has: page.locator(`a[href="/review/${credentialId}"]`) });
     await row.waitFor();
     await screenshot(page, "reviewer-verify-1-queue");
@@ -83,7 +99,9 @@ describe("a compliance reviewer verifies a submitted certificate", () => {
     await page.waitForURL((url) => url.pathname === `/review/${credentialId}`);
     const pageImage = page.getByRole("img", { name: /^Page 1 of / });
     await pageImage.waitFor();
-    await page.waitForFunction(() => Array.from(document.images).some((img) => img.alt.startsWith("Page 1") && img.naturalWidth > 0));
+    await page.waitForFunction(() =>
+      Array.from(document.images).some((img) => img.alt.startsWith("Page 1") && img.naturalWidth > 0),
+    );
     await screenshot(page, "reviewer-verify-2-side-by-side");
 
     await expect(page.getByLabel("Policy number").inputValue()).resolves.not.toBe("");
@@ -99,10 +117,26 @@ describe("a compliance reviewer verifies a submitted certificate", () => {
     await screenshot(officePage, "reviewer-verify-4-office-documents");
     const verifiedState = await officeContext.request.get(`${server.url}/api/credentials/${credentialId}`);
     expect(((await verifiedState.json()) as { state: string }).state).toBe("verified");
-    const newPolicy = officePage.getByRole("row").filter({ hasText: "Commercial general liability" }).filter({ hasText: shownDate(expirationDate) });
+    const newPolicy = officePage
+      .getByRole("row")
+      .filter({ hasText: "Commercial general liability" })
+      .filter({ hasText: shownDate(expirationDate) });
     await expect(newPolicy.getByText("Verified", { exact: true }).count()).resolves.toBe(1);
     expect(await mailsTo(office.email, "Verified: Commercial general liability")).toBeGreaterThanOrEqual(1);
     await officeContext.close();
     await reviewerContext.close();
+
+    const phone = await browser.newContext({ viewport: { width: 390, height: 844 } });
+    const technicianPage = await phone.newPage();
+    await signIn(technicianPage, server.url, technician.email, DEMO_PASSWORD);
+    const liability = technicianPage.getByRole("listitem").filter({ hasText: "General liability in force" });
+    await liability.waitFor();
+    await screenshot(technicianPage, "reviewer-verify-5-technician-standing-390");
+    await expect(liability.innerText()).resolves.toContain(shownDate(expirationDate));
+    await expect(
+      technicianPage.evaluate(() => document.documentElement.scrollWidth),
+    ).resolves.toBeLessThanOrEqual(390);
+    expect(await seriousAccessibilityProblems(technicianPage)).toEqual([]);
+    await phone.close();
   });
 });

@@ -1,3 +1,4 @@
+import { DateTime } from "luxon";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { buildTestApp, type TestApp } from "../support/test-app.ts";
 import { startTestMailCatcher } from "../support/mail-catcher.ts";
@@ -30,18 +31,25 @@ describe("reviewers' daily digest", () => {
       state: "submitted",
       submittedBy: p.admin.id,
     });
-    await Credential.update({ submittedAt: new Date("2030-01-01T09:00:00Z") }, { where: { id: waiting.id } });
-    const asOf = new Date("2030-01-03T12:00:00Z");
+    const asOf = new Date();
+    // Older than anything other tests leave in the queue, so it is the oldest waiting document.
+    await Credential.update(
+      { submittedAt: new Date(asOf.getTime() - 400 * 86_400_000) },
+      { where: { id: waiting.id } },
+    );
 
     const first = await runReviewerDigest({ asOf }, deps);
     const again = await runReviewerDigest({ asOf: new Date(asOf.getTime() + 3_600_000) }, deps);
     await catcher.deliver(new Date(Date.now() + 1_000));
 
     const mails = catcher.to(users.reviewer!.email);
-    expect(first).toMatchObject({ skipped: false, digestDate: "2030-01-03" });
+    expect(first).toMatchObject({
+      skipped: false,
+      digestDate: DateTime.fromJSDate(asOf, { zone: "America/Chicago" }).toISODate(),
+    });
     expect(again).toMatchObject({ skipped: false, sent: 0 });
     expect(mails).toHaveLength(1);
-    expect(mails[0]?.subject).toMatch(/^Verification queue: \d+ waiting, oldest 2 days$/);
+    expect(mails[0]?.subject).toMatch(/^Verification queue: \d+ waiting, oldest 400 days$/);
     expect(mails[0]?.text).toContain("https://clearbench.test/review");
   });
 });

@@ -1,4 +1,4 @@
-import AxeBuilder from "@axe-core/playwright";
+import { AxeBuilder } from "@axe-core/playwright";
 import type { Page } from "playwright-core";
 
 /** WCAG 2 A and AA problems that axe rates serious or critical, as "rule: target" lines (empty when clean). */

@@ -1,7 +1,10 @@
 import { mkdtempSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
-import { buildCertificatePdf, randomCertificateValues } from "../../server/db/demo-scenario/documents/build-certificate-pdf.ts";
+import {
+  buildCertificatePdf,
+  randomCertificateValues,
+} from "../../server/db/demo-scenario/documents/build-certificate-pdf.ts";
 
 const DAY_MS = 24 * 60 * 60 * 1000;
 const isoDate = (at: Date) => at.toISOString().slice(0, 10);
@@ -22,7 +25,10 @@ export async function writeCertificateFile(seed: number, insuredName: string, to
     insured: { ...values.insured, name: insuredName },
     coverages: { ...values.coverages, general_liability: generalLiability },
   });
-  const file = path.join(mkdtempSync(path.join(tmpdir(), "clearbench-certificate-")), `certificate-${seed}.pdf`);
+  const file = path.join(
+    mkdtempSync(path.join(tmpdir(), "clearbench-certificate-")),
+    `certificate-${seed}.pdf`,
+  );
   writeFileSync(file, bytes);
   return { file, bytes, generalLiability };
 }

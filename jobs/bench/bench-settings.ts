@@ -1,0 +1,28 @@
+import { tmpdir } from "node:os";
+import path from "node:path";
+
+// The bench's own settings; like server/config.ts for the product, the only bench file that reads process.env.
+const root = path.resolve(import.meta.dirname, "..", "..");
+
+function positive(name: string, fallback: number): number {
+  const value = Number(process.env[name] ?? fallback);
+  if (!Number.isFinite(value) || value <= 0) throw new Error(`${name} must be a positive number`);
+  return value;
+}
+
+export const benchSettings = {
+  root,
+  /** Seconds of load per HTTP scenario (issue 7: 15 s); BENCH_SECONDS=3 for a quick run. */
+  seconds: positive("BENCH_SECONDS", 15),
+  /** Seconds of warm-up before each measured HTTP scenario. */
+  warmupSeconds: positive("BENCH_WARMUP_SECONDS", 3),
+  connections: positive("BENCH_CONNECTIONS", 20),
+  /** Port of the bench's own PostgreSQL cluster (never the demo's 54329). */
+  pgPort: positive("BENCH_PG_PORT", 54339),
+  pgRoot: process.env.BENCH_PG_ROOT ?? path.join(tmpdir(), "clearbench-bench-pg"),
+  /** A cluster to seed into instead of starting one (seed:large only); the database is always clearbench_large. */
+  databaseUrl: process.env.DATABASE_URL,
+  database: "clearbench_large",
+  resultsDir: path.join(root, "bench", "results"),
+  uploads: positive("BENCH_UPLOADS", 30),
+};

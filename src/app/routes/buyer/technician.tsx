@@ -1,0 +1,99 @@
+import type { ReactNode } from "react";
+import { useSuspenseQuery } from "@tanstack/react-query";
+import { Link, useParams, type LoaderFunctionArgs } from "react-router-dom";
+import { technologyLabels, type MachineTechnology } from "@shared/technicians/schemas.ts";
+import { hrefs } from "@/config/paths.ts";
+import { Button } from "@/components/ui/button.tsx";
+import { buttonStyles } from "@/components/ui/button-styles.ts";
+import { CautionNote } from "@/components/ui/caution-note.tsx";
+import { PageHeader } from "@/components/ui/page-header.tsx";
+import { directoryTechnicianQuery } from "@/features/directory/api/get-directory-technician.ts";
+import { DirectoryStandingBadge } from "@/features/directory/components/directory-standing-badge.tsx";
+import { ProfileCredentials } from "@/features/directory/components/profile-credentials.tsx";
+import { ProfileReviews } from "@/features/directory/components/profile-reviews.tsx";
+import { ProfileStandings } from "@/features/directory/components/profile-standings.tsx";
+import { SiteEstimates } from "@/features/directory/components/site-estimates.tsx";
+import { useAddToRoster } from "@/features/roster/api/add-to-roster.ts";
+import { isApiError } from "@/lib/api-client.ts";
+import { formatCents } from "@/lib/format-money.ts";
+import { queryClient } from "@/lib/query-client.ts";
+import { technicianIdOf } from "./technician-id.ts";
+
+export async function loader({ params }: LoaderFunctionArgs) {
+  await queryClient.ensureQueryData(directoryTechnicianQuery(technicianIdOf(params.technicianId)));
+  return null;
+}
+
+function AddToRoster({ technicianId }: { technicianId: number }) {
+  const add = useAddToRoster();
+  const already = isApiError(add.error) && add.error.status === 409;
+  return (
+    <div className="flex flex-col items-start gap-1">
+      <Button variant="secondary" pending={add.isPending} disabled={add.isSuccess || already} onClick={() => add.mutate({ technicianId })}>
+        {add.isSuccess ? "On your roster" : "Add to roster"}
+      </Button>
+      <p role="status" className="text-sm text-ink-700">
+        {add.isSuccess ? "Added to your roster." : already ? "Already on your roster." : add.error ? add.error.message : ""}
+      </p>
+    </div>
+  );
+}
+
+function Section({ title, children }: { title: string; children: ReactNode }) {
+  const id = `section-${title.toLowerCase().replace(/[^a-z]+/g, "-")}`;
+  return (
+    <section aria-labelledby={id} className="space-y-3">
+      <h2 id={id} className="text-lg font-semibold text-ink-900">
+        {title}
+      </h2>
+      {children}
+    </section>
+  );
+}
+
+export function Component() {
+  const id = technicianIdOf(useParams().technicianId);
+  const { data: t } = useSuspenseQuery(directoryTechnicianQuery(id));
+  return (
+    <>
+      <PageHeader
+        title={t.name}
+        description={t.companyName}
+        actions={
+          <>
+            <AddToRoster technicianId={t.technicianId} />
+            <Link to={hrefs.workOrderNew(t.technicianId)} className={buttonStyles("primary")}>
+              Raise a work order
+            </Link>
+          </>
+        }
+      />
+      <div className="space-y-8">
+        <div className="flex flex-wrap items-center gap-3">
+          <DirectoryStandingBadge standing={t.baseline.standing} earliestLapse={t.baseline.earliestLapse} />
+          <span className="text-sm text-ink-800">
+            {t.technologies.map((x) => technologyLabels[x as MachineTechnology] ?? x).join(", ") || "No technologies listed"}
+            {t.controlFamilies.length > 0 && ` · controls: ${t.controlFamilies.join(", ")}`}
+          </span>
+          <span className="text-sm text-ink-800">
+            {formatCents(t.hourlyRateCents)}/h on site · {formatCents(t.travelRateCents)}/h travel ·{" "}
+            {formatCents(t.mileageRateCents)}/mile · serves {t.serviceRadiusKm} km around base
+          </span>
+        </div>
+        <CautionNote />
+        <Section title="Standing against your requirement sets">
+          <ProfileStandings standings={t.requirementSets} />
+        </Section>
+        <Section title="Estimate for each of your sites">
+          <SiteEstimates estimates={t.estimates} onSiteHours={t.assumptions.onSiteHours} />
+        </Section>
+        <Section title="Verified credentials">
+          <ProfileCredentials credentials={t.credentials} />
+        </Section>
+        <Section title="Ratings">
+          <ProfileReviews technician={t} />
+        </Section>
+      </div>
+    </>
+  );
+}

@@ -1,0 +1,138 @@
+import { useSuspenseQuery } from "@tanstack/react-query";
+import { Link, useParams, type LoaderFunctionArgs } from "react-router-dom";
+import { technologyLabels, type MachineTechnology } from "@shared/technicians/schemas.ts";
+import { paths } from "@/config/paths.ts";
+import { PageHeader } from "@/components/ui/page-header.tsx";
+import { Spinner } from "@/components/ui/spinner.tsx";
+import { currentUserQuery } from "@/features/accounts/api/get-current-user.ts";
+import { useWorkOrderReview } from "@/features/reviews/api/get-work-order-review.ts";
+import { useWriteReview } from "@/features/reviews/api/write-review.ts";
+import { ReviewForm } from "@/features/reviews/components/review-form.tsx";
+import { ReviewView } from "@/features/reviews/components/review-view.tsx";
+import { workOrderMessagesQuery } from "@/features/work-orders/api/get-work-order-messages.ts";
+import { workOrderQuery } from "@/features/work-orders/api/get-work-order.ts";
+import type { WorkOrder } from "@/features/work-orders/api/work-order-shapes.ts";
+import { MessageThread } from "@/features/work-orders/components/message-thread.tsx";
+import { StandingSnapshotView } from "@/features/work-orders/components/standing-snapshot-view.tsx";
+import { WorkOrderActions } from "@/features/work-orders/components/work-order-actions.tsx";
+import { WorkOrderStatusBadge } from "@/features/work-orders/components/work-order-status-badge.tsx";
+import { urgencyWords } from "@/features/work-orders/components/work-order-words.ts";
+import { formatDateTime } from "@/lib/format-date-time.ts";
+import { formatIsoDate } from "@/lib/format-date.ts";
+import { queryClient } from "@/lib/query-client.ts";
+import { workOrderIdOf } from "./work-order-id.ts";
+
+export async function loader({ params }: LoaderFunctionArgs) {
+  const id = workOrderIdOf(params);
+  await Promise.all([
+    queryClient.ensureQueryData(workOrderQuery(id)),
+    queryClient.ensureQueryData(workOrderMessagesQuery(id)),
+    queryClient.ensureQueryData(currentUserQuery()),
+  ]);
+  return null;
+}
+
+const technologyWord = (t: string) => technologyLabels[t as MachineTechnology] ?? t;
+
+function Facts({ workOrder }: { workOrder: WorkOrder }) {
+  const m = workOrder.equipment;
+  const rows: [string, string][] = [
+    ["Shop and site", `${workOrder.shop.name}, ${workOrder.site.name}`],
+    ["Technician", `${workOrder.technician.name} (${workOrder.technician.companyName})`],
+    ["Machine", m ? [m.builder, m.model, m.controlFamily, m.serialNumber && `serial ${m.serialNumber}`].filter(Boolean).join(" · ") : "Not named"],
+    ["Technology", technologyWord(workOrder.technology)],
+    ["Urgency", urgencyWords[workOrder.urgency]],
+    ["Preferred dates", workOrder.preferredDates.map(formatIsoDate).join(", ") || "None given"],
+    ["Checked against", workOrder.requirementSet ? `${workOrder.requirementSet.name} and the platform baseline` : "The platform baseline"],
+    ["Raised", `${formatDateTime(workOrder.createdAt)} by ${workOrder.createdBy.name}`],
+  ];
+  if (workOrder.declineReason) rows.push(["Reason for declining", workOrder.declineReason]);
+  if (workOrder.hoursWorked !== null)
+    rows.push(["Hours", `${workOrder.hoursWorked} h on site, ${workOrder.travelHours ?? 0} h travel`]);
+  if (workOrder.completionNote) rows.push(["Completion note", workOrder.completionNote]);
+  return (
+    <section aria-label="Details" className="rounded-lg border border-ink-100 bg-white p-4">
+      <p className="mb-3 whitespace-pre-line text-ink-900">{workOrder.problem}</p>
+      <dl className="grid gap-x-6 gap-y-2 text-sm sm:grid-cols-[max-content_1fr]">
+        {rows.map(([term, value]) => (
+          <div key={term} className="contents">
+            <dt className="font-medium text-ink-700">{term}</dt>
+            <dd className="text-ink-900">{value}</dd>
+          </div>
+        ))}
+      </dl>
+    </section>
+  );
+}
+
+function ReviewSection({ workOrder, role }: { workOrder: WorkOrder; role: string }) {
+  const review = useWorkOrderReview(workOrder.id);
+  const write = useWriteReview(workOrder.id);
+  if (review.isPending) return <Spinner label="Loading the rating" />;
+  const existing = review.data ?? null;
+  return (
+    <section aria-labelledby="rating" className="space-y-3 rounded-lg border border-ink-100 bg-white p-4">
+      <h2 id="rating" className="text-lg font-semibold text-ink-900">
+        Rating
+      </h2>
+      {existing ? (
+        <ReviewView review={existing} canReply={role === "provider_admin"} />
+      ) : workOrder.yourSide === "shop" ? (
+        <ReviewForm pending={write.isPending} serverError={write.error} onSubmit={(input) => write.mutate(input)} />
+      ) : (
+        <p className="text-sm text-ink-700">The shop has not rated this job yet.</p>
+      )}
+    </section>
+  );
+}
+
+export function Component() {
+  const id = workOrderIdOf(useParams());
+  const { data: workOrder } = useSuspenseQuery(workOrderQuery(id));
+  const { data: messages } = useSuspenseQuery(workOrderMessagesQuery(id));
+  const { data: user } = useSuspenseQuery(currentUserQuery());
+  const back = workOrder.yourSide === "shop" ? paths.buyer.workOrders : paths.provider.workOrders;
+  return (
+    <>
+      <Link to={back} className="mb-2 inline-flex min-h-11 items-center text-sm text-ink-700 underline underline-offset-2">
+        All work orders
+      </Link>
+      <PageHeader
+        title={`Work order No. ${workOrder.id}`}
+        description={
+          <span className="flex flex-wrap items-center gap-2">
+            <WorkOrderStatusBadge status={workOrder.status} />
+            <span>
+              {technologyWord(workOrder.technology)} at {workOrder.site.name}
+            </span>
+          </span>
+        }
+      />
+      <div className="grid gap-6 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
+        <div className="space-y-6">
+          <Facts workOrder={workOrder} />
+          <WorkOrderActions workOrder={workOrder} />
+          {(workOrder.snapshotAccepted || workOrder.snapshotCompleted) && (
+            <section aria-labelledby="proof" className="space-y-3">
+              <h2 id="proof" className="text-lg font-semibold text-ink-900">
+                Proof of standing
+              </h2>
+              {workOrder.snapshotAccepted && (
+                <StandingSnapshotView workOrderId={workOrder.id} at="accepted" snapshot={workOrder.snapshotAccepted} />
+              )}
+              {workOrder.snapshotCompleted && (
+                <StandingSnapshotView workOrderId={workOrder.id} at="completed" snapshot={workOrder.snapshotCompleted} />
+              )}
+            </section>
+          )}
+          {workOrder.status === "confirmed" && <ReviewSection workOrder={workOrder} role={user?.role ?? ""} />}
+        </div>
+        <MessageThread
+          workOrderId={workOrder.id}
+          messages={messages}
+          sideNames={{ shop: workOrder.shop.name, service: workOrder.technician.companyName }}
+        />
+      </div>
+    </>
+  );
+}

@@ -1,0 +1,77 @@
+import { formatInstantDate, formatIsoDate } from "@/lib/format-date.ts";
+import { formatDollars } from "@/lib/format-money.ts";
+import type { ProfileCredential } from "../api/directory-shapes.ts";
+
+const limitWords: Record<string, string> = {
+  eachOccurrence: "Each occurrence",
+  generalAggregate: "General aggregate",
+  productsCompletedOpsAggregate: "Products-completed operations aggregate",
+  personalAdvertisingInjury: "Personal and advertising injury",
+  damageToRentedPremises: "Damage to rented premises",
+  medicalExpense: "Medical expense",
+  combinedSingleLimit: "Combined single limit",
+  employersLiabilityEachAccident: "Employer's liability, each accident",
+  employersLiabilityDiseaseEachEmployee: "Employer's liability, disease, each employee",
+  employersLiabilityDiseasePolicyLimit: "Employer's liability, disease, policy limit",
+  umbrellaEachOccurrence: "Umbrella, each occurrence",
+  umbrellaAggregate: "Umbrella, aggregate",
+};
+
+const text = (v: unknown): string | null => (typeof v === "string" && v.trim() ? v : null);
+
+/** The facts a buyer checks, in words: who insures, the dates, the limits and the endorsements, or the training details. */
+function factsOf(fields: Record<string, unknown>): [string, string][] {
+  const facts: [string, string][] = [];
+  const add = (label: string, value: string | null) => value && facts.push([label, value]);
+  add("Insurer", text(fields.insurerName));
+  add("Policy", text(fields.policyNumber));
+  add("Course", text(fields.course));
+  add("Builder", text(fields.builder));
+  add("Control family", text(fields.controlFamily));
+  if (typeof fields.level === "number") add("Level", String(fields.level));
+  add("Effective", text(fields.effectiveDate) && formatIsoDate(text(fields.effectiveDate)));
+  add("Expires", text(fields.expirationDate) && formatIsoDate(text(fields.expirationDate)));
+  add("Issued", text(fields.issueDate) && formatIsoDate(text(fields.issueDate)));
+  add("Card expiry", text(fields.expiryDate) && formatIsoDate(text(fields.expiryDate)));
+  if (fields.statutory === true) add("Workers' compensation", "Statutory");
+  const limits = fields.limits && typeof fields.limits === "object" ? (fields.limits as Record<string, unknown>) : {};
+  for (const [name, value] of Object.entries(limits))
+    if (typeof value === "number") add(limitWords[name] ?? name, formatDollars(value));
+  if (typeof fields.additionalInsured === "boolean") add("Additional insured", fields.additionalInsured ? "Yes" : "No");
+  if (typeof fields.waiverOfSubrogation === "boolean") add("Waiver of subrogation", fields.waiverOfSubrogation ? "Yes" : "No");
+  return facts;
+}
+
+/** Every verified credential with its dates and limits; insurance certificates can be downloaded. */
+export function ProfileCredentials({ credentials }: { credentials: readonly ProfileCredential[] }) {
+  if (credentials.length === 0) return <p className="text-sm text-ink-700">No verified credentials on file.</p>;
+  return (
+    <ul className="grid gap-3 md:grid-cols-2">
+      {credentials.map((c) => (
+        <li key={c.id} className="rounded-lg border border-ink-100 bg-white p-4">
+          <p className="font-semibold text-ink-900">{c.typeName}</p>
+          <p className="text-sm text-ink-700">
+            {c.holder === "company" ? "Held by the company" : "Held by the technician"} · counts until{" "}
+            {c.lapsesAt ? formatInstantDate(c.lapsesAt) : "no expiry"}
+          </p>
+          <dl className="mt-2 grid grid-cols-[max-content_1fr] gap-x-3 gap-y-0.5 text-sm">
+            {factsOf(c.fields).map(([term, value]) => (
+              <div key={term} className="contents">
+                <dt className="text-ink-700">{term}</dt>
+                <dd className="text-ink-900">{value}</dd>
+              </div>
+            ))}
+          </dl>
+          {c.documentId !== null && (
+            <a
+              href={`/api/documents/${c.documentId}/file`}
+              className="mt-2 inline-flex min-h-11 items-center text-sm font-medium text-ink-900 underline underline-offset-2"
+            >
+              Download the certificate of insurance ({c.typeName})
+            </a>
+          )}
+        </li>
+      ))}
+    </ul>
+  );
+}

@@ -1,0 +1,24 @@
+import type { SiteEstimate } from "../api/directory-shapes.ts";
+import { CallOutEstimate } from "./call-out-estimate.tsx";
+import { formatDriveTime, formatKm } from "./directory-format.ts";
+
+/** Distance, drive and call-out estimate from the technician's base to each of the buyer's sites. */
+export function SiteEstimates({ estimates, onSiteHours }: { estimates: readonly SiteEstimate[]; onSiteHours: number }) {
+  if (estimates.length === 0) return <p className="text-sm text-ink-700">Add a site to see distances and estimates.</p>;
+  return (
+    <ul className="grid gap-3 md:grid-cols-2">
+      {estimates.map((e) => (
+        <li key={e.siteId} className="rounded-lg border border-ink-100 bg-white p-4">
+          <p className="font-semibold text-ink-900">{e.siteName}</p>
+          <p className="text-sm text-ink-800">
+            {formatKm(e.distanceKm)} straight line · about {formatDriveTime(e.driveHours)} drive
+          </p>
+          {!e.withinServiceRadius && (
+            <p className="text-sm font-medium text-red-800">Outside this technician's service radius.</p>
+          )}
+          <CallOutEstimate callOut={e.callOut} onSiteHours={onSiteHours} forWhom={e.siteName} />
+        </li>
+      ))}
+    </ul>
+  );
+}

@@ -1,0 +1,178 @@
+import { useState, type FormEvent } from "react";
+import { raiseWorkOrderSchema, urgencies, type RaiseWorkOrder } from "@shared/work-orders/schemas.ts";
+import { machineTechnologies, technologyLabels } from "@shared/technicians/schemas.ts";
+import { Button } from "@/components/ui/button.tsx";
+import { ChoiceGroup } from "@/components/ui/choice-group.tsx";
+import { FormError } from "@/components/ui/form-error.tsx";
+import { SelectField, type SelectOption } from "@/components/ui/select-field.tsx";
+import { TextField } from "@/components/ui/text-field.tsx";
+import { isApiError } from "@/lib/api-client.ts";
+import { fieldErrorsOf } from "@/lib/field-errors.ts";
+import { urgencyWords } from "./work-order-words.ts";
+
+export type MachineChoice = { id: number; label: string; technology: string };
+
+type RaiseWorkOrderFormProps = {
+  technicianId: number;
+  technicianName: string;
+  sites: readonly SelectOption[];
+  siteId: string;
+  onSiteChange: (siteId: string) => void;
+  machines: readonly MachineChoice[];
+  requirementSets: readonly SelectOption[];
+  pending: boolean;
+  serverError: unknown;
+  onSubmit: (input: RaiseWorkOrder) => void;
+};
+
+const labels = {
+  siteId: "Site",
+  equipmentId: "Machine",
+  technology: "Technology",
+  problem: "What is wrong",
+  urgency: "Urgency",
+  preferredDates: "Preferred dates",
+  requirementSetId: "Requirement set to check",
+};
+const plainWords = { siteId: "Choose the site", technology: "Choose the technology or a machine" };
+const DATE_INPUTS = 3;
+const technologyOptions = machineTechnologies.map((t) => ({ value: t, label: technologyLabels[t] }));
+
+/** A 409 names every requirement the technician does not meet now; each one is listed, not only the first. */
+function NotClearedReasons({ error }: { error: unknown }) {
+  if (!isApiError(error) || error.status !== 409) return null;
+  return (
+    <div role="alert" className="rounded-md border-l-4 border-red-700 bg-red-50 px-4 py-3 text-sm text-red-900">
+      <p className="font-semibold">{error.message}</p>
+      {error.fields.length > 0 && (
+        <ul className="mt-1 list-disc space-y-0.5 pl-5">
+          {error.fields.map((f, i) => (
+            <li key={i}>{f.message}</li>
+          ))}
+        </ul>
+      )}
+    </div>
+  );
+}
+
+export function RaiseWorkOrderForm(props: RaiseWorkOrderFormProps) {
+  const { technicianId, technicianName, sites, siteId, onSiteChange, machines, requirementSets, pending, serverError, onSubmit } = props;
+  const [invalid, setInvalid] = useState<unknown>(null);
+  const [technology, setTechnology] = useState("");
+  const [equipmentId, setEquipmentId] = useState("");
+  const conflict = isApiError(serverError) && serverError.status === 409;
+  const problem = invalid ?? (conflict ? null : serverError);
+  const errors = fieldErrorsOf(problem, plainWords);
+
+  const submit = (event: FormEvent<HTMLFormElement>) => {
+    event.preventDefault();
+    const data = new FormData(event.currentTarget);
+    const text = (name: string) => String(data.get(name) ?? "").trim();
+    const parsed = raiseWorkOrderSchema.safeParse({
+      technicianId,
+      siteId: text("siteId") || undefined,
+      equipmentId: text("equipmentId") || undefined,
+      requirementSetId: text("requirementSetId") || null,
+      technology: text("technology") || undefined,
+      problem: text("problem"),
+      urgency: text("urgency") || undefined,
+      preferredDates: data.getAll("preferredDates").map(String).filter(Boolean),
+    });
+    if (!parsed.success) {
+      setInvalid(parsed.error);
+      return;
+    }
+    setInvalid(null);
+    onSubmit(parsed.data);
+  };
+
+  return (
+    <form noValidate onSubmit={submit} className="max-w-3xl space-y-5" aria-label={`Work order for ${technicianName}`}>
+      <NotClearedReasons error={serverError} />
+      <FormError error={problem} labels={labels} plainWords={plainWords} />
+      <div className="grid gap-4 sm:grid-cols-2">
+        <SelectField
+          label={labels.siteId}
+          name="siteId"
+          options={sites}
+          placeholder="Choose a site"
+          value={siteId}
+          onChange={(e) => {
+            onSiteChange(e.target.value);
+            setEquipmentId("");
+          }}
+          error={errors.siteId}
+        />
+        <SelectField
+          label={labels.equipmentId}
+          name="equipmentId"
+          options={machines.map((m) => ({ value: String(m.id), label: m.label }))}
+          placeholder={machines.length === 0 ? "No machines recorded at this site" : "Not one machine in particular"}
+          disabled={machines.length === 0}
+          value={equipmentId}
+          onChange={(e) => {
+            setEquipmentId(e.target.value);
+            const machine = machines.find((m) => String(m.id) === e.target.value);
+            if (machine) setTechnology(machine.technology);
+          }}
+          error={errors.equipmentId}
+        />
+        <SelectField
+          label={labels.technology}
+          name="technology"
+          options={technologyOptions}
+          placeholder="Choose"
+          value={technology}
+          onChange={(e) => setTechnology(e.target.value)}
+          hint="Filled from the machine"
+          error={errors.technology}
+        />
+        <SelectField
+          label={labels.requirementSetId}
+          name="requirementSetId"
+          options={requirementSets}
+          placeholder="Platform baseline only"
+          defaultValue=""
+          error={errors.requirementSetId}
+        />
+      </div>
+      <div className="space-y-1">
+        <label htmlFor="work-order-problem" className="block text-sm font-medium text-ink-900">
+          {labels.problem}
+        </label>
+        <textarea
+          id="work-order-problem"
+          name="problem"
+          rows={5}
+          data-field="problem"
+          aria-invalid={errors.problem ? true : undefined}
+          aria-describedby={errors.problem ? "work-order-problem-error" : undefined}
+          className="block w-full rounded-md border border-ink-300 bg-white px-3 py-2 text-base text-ink-900"
+        />
+        {errors.problem && (
+          <p id="work-order-problem-error" className="text-sm font-medium text-red-800">
+            {errors.problem}
+          </p>
+        )}
+      </div>
+      <ChoiceGroup
+        legend={labels.urgency}
+        name="urgency"
+        options={urgencies.map((u) => ({ value: u, label: urgencyWords[u] }))}
+        defaultValue="normal"
+        error={errors.urgency}
+      />
+      <fieldset>
+        <legend className="mb-1 text-sm font-medium text-ink-900">{labels.preferredDates} (optional)</legend>
+        <div className="grid gap-3 sm:grid-cols-3">
+          {Array.from({ length: DATE_INPUTS }, (_, i) => (
+            <TextField key={i} label={`Preferred date ${i + 1}`} name="preferredDates" type="date" error={i === 0 ? errors.preferredDates : undefined} />
+          ))}
+        </div>
+      </fieldset>
+      <Button type="submit" pending={pending} pendingLabel="Sending">
+        Send work order
+      </Button>
+    </form>
+  );
+}
