@@ -1,3 +1,4 @@
+import type { EventEmitter } from "node:events";
 import autocannon from "autocannon";
 import { benchSettings } from "./bench-settings.ts";
 
@@ -28,6 +29,7 @@ function percentile(sorted: number[], p: number): number {
 
 function run(target: LoadTarget, seconds: number, record?: (ms: number, status: number) => void) {
   let i = 0;
+  // Without a callback autocannon returns its instance (an EventEmitter for per-response events) that is also a promise.
   const instance = autocannon({
     url: target.url,
     method: target.method ?? "GET",
@@ -44,8 +46,8 @@ function run(target: LoadTarget, seconds: number, record?: (ms: number, status: 
         },
       },
     ],
-  });
-  if (record) instance.on("response", (_client, status, _bytes, responseTime) => record(responseTime, status));
+  }) as unknown as EventEmitter & Promise<autocannon.Result>;
+  if (record) instance.on("response", (_client: unknown, status: number, _bytes: number, responseTime: number) => record(responseTime, status));
   return instance;
 }
 

@@ -8,6 +8,17 @@ import type { FileStorage } from "./file-storage.ts";
 // Another instance may be mid-upload: only files older than this are treated as abandoned.
 const ABANDONED_AFTER_MS = 10 * 60_000;
 
+/** Deletes a document row nothing refers to; a foreign key from any other table (a message attachment) keeps it. */
+async function deleteUnusedDocument(id: number): Promise<boolean> {
+  try {
+    await db().query("DELETE FROM documents d WHERE d.id = :id AND NOT EXISTS (SELECT 1 FROM credentials c WHERE c.document_id = d.id)", { replacements: { id } });
+    return true;
+  } catch (err) {
+    if ((err as { parent?: { code?: string } }).parent?.code === "23503") return false;
+    throw err;
+  }
+}
+
 export interface SweepReport {
   finishedMoves: number;
   removedIncoming: number;
@@ -35,8 +46,7 @@ export async function sweepOrphans(storage: FileStorage, now = Date.now()): Prom
       await storage.commit(path.join(storage.incomingDir, ready), row.sha256);
       incoming.splice(incoming.indexOf(ready), 1);
       report.finishedMoves += 1;
-    } else if (!row.referenced) {
-      await db().query("DELETE FROM documents d WHERE d.id = :id AND NOT EXISTS (SELECT 1 FROM credentials c WHERE c.document_id = d.id)", { replacements: { id: row.id } });
+    } else if (!row.referenced && (await deleteUnusedDocument(row.id))) {
       report.removedRows += 1;
     } else {
       log.error({ documentId: row.id }, "stored file missing for a document in use");

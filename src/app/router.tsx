@@ -57,7 +57,10 @@ export const router = createBrowserRouter([
             loader: requireRole("provider_admin", "technician"),
             lazy: roleArea,
             children: [
-              { path: paths.provider.workOrders, lazy: () => import("./routes/work-orders/work-order-list.tsx") },
+              {
+                path: paths.provider.workOrders,
+                lazy: () => import("./routes/work-orders/work-order-list.tsx"),
+              },
             ],
           },
           {
@@ -95,7 +98,10 @@ export const router = createBrowserRouter([
                 path: paths.buyer.requirementSets,
                 lazy: () => import("./routes/buyer/requirement-sets.tsx"),
               },
-              { path: paths.buyer.workOrders, lazy: () => import("./routes/work-orders/work-order-list.tsx") },
+              {
+                path: paths.buyer.workOrders,
+                lazy: () => import("./routes/work-orders/work-order-list.tsx"),
+              },
               { path: paths.buyer.workOrderNew, lazy: () => import("./routes/buyer/raise-work-order.tsx") },
               { path: paths.buyer.technician, lazy: () => import("./routes/buyer/technician.tsx") },
             ],

@@ -25,7 +25,15 @@ beforeAll(async () => {
   root = mkdtempSync(path.join(tmpdir(), "clearbench-outage-"));
   port = await freePort();
   postgres = await startEmbeddedPostgres({ root, port, database: "outage", throwAway: true });
-  server = await startServer(loadConfig({ ...process.env, DATABASE_URL: postgres.url, PORT: "0", UPLOADS_DIR: path.join(root, "uploads"), RUN_SCHEDULE: "false" }));
+  server = await startServer(
+    loadConfig({
+      ...process.env,
+      DATABASE_URL: postgres.url,
+      PORT: "0",
+      UPLOADS_DIR: path.join(root, "uploads"),
+      RUN_SCHEDULE: "false",
+    }),
+  );
   base = `http://127.0.0.1:${server.port}`;
 }, 60_000);
 afterAll(async () => {
@@ -45,17 +53,49 @@ describe("PostgreSQL stopped and restarted under a running server", () => {
   it("answers 503 quickly during the outage, recovers by itself, and half-writes nothing", async () => {
     const password = "outage password 1";
     const hash = await hashPassword(password);
-    const service = await Company.create({ name: "Fernhollow Spindle Repair LLC", kind: "service", addressLine: "3 Gantry Row", postalCode: "60601", timeZone: "America/Chicago", latitude: null, longitude: null });
-    const platform = await Company.create({ name: "Outage Platform", kind: "platform", addressLine: "1 Main", postalCode: "60601", timeZone: "America/Chicago", latitude: null, longitude: null });
-    await User.create({ companyId: service.id, email: "office@fernhollow.test", name: "Ines Marwood", role: "provider_admin", passwordHash: hash });
-    await User.create({ companyId: platform.id, email: "reviewer@outage.test", name: "Olek Brandvold", role: "reviewer", passwordHash: hash });
+    const service = await Company.create({
+      name: "Fernhollow Spindle Repair LLC",
+      kind: "service",
+      addressLine: "3 Gantry Row",
+      postalCode: "60601",
+      timeZone: "America/Chicago",
+      latitude: null,
+      longitude: null,
+    });
+    const platform = await Company.create({
+      name: "Outage Platform",
+      kind: "platform",
+      addressLine: "1 Main",
+      postalCode: "60601",
+      timeZone: "America/Chicago",
+      latitude: null,
+      longitude: null,
+    });
+    await User.create({
+      companyId: service.id,
+      email: "office@fernhollow.test",
+      name: "Ines Marwood",
+      role: "provider_admin",
+      passwordHash: hash,
+    });
+    await User.create({
+      companyId: platform.id,
+      email: "reviewer@outage.test",
+      name: "Olek Brandvold",
+      role: "reviewer",
+      passwordHash: hash,
+    });
     const provider = await signedIn("office@fernhollow.test", password);
     const reviewer = await signedIn("reviewer@outage.test", password);
     const credential = await submitLiabilityCertificate(provider, 81);
 
     postgres.stop();
     const started = Date.now();
-    const during = await Promise.all([reviewer.post(`/api/credentials/${credential.id}/verify`).send({}), reviewer.get("/api/review/queue"), request(base).get("/api/health")]);
+    const during = await Promise.all([
+      reviewer.post(`/api/credentials/${credential.id}/verify`).send({}),
+      reviewer.get("/api/review/queue"),
+      request(base).get("/api/health"),
+    ]);
     const outageAnswerMs = Date.now() - started;
     postgres = await startEmbeddedPostgres({ root, port, database: "outage", throwAway: true });
     let recovered = 0;
@@ -64,7 +104,9 @@ describe("PostgreSQL stopped and restarted under a running server", () => {
       if (recovered !== 200) await new Promise((r) => setTimeout(r, 250));
     }
     const stateAfter = await Credential.findByPk(credential.id);
-    const decisions = await AuditEvent.count({ where: { subjectType: "credential", subjectId: credential.id, action: "credential.verified" } });
+    const decisions = await AuditEvent.count({
+      where: { subjectType: "credential", subjectId: credential.id, action: "credential.verified" },
+    });
     const verifyAgain = await reviewer.post(`/api/credentials/${credential.id}/verify`).send({});
 
     expect(during.map((r) => r.status)).toEqual([503, 503, 503]);

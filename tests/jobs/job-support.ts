@@ -25,3 +25,13 @@ export async function noticeThresholds(credentialId: number): Promise<number[]> 
   );
   return found.map((r) => r.threshold_days);
 }
+
+/** Delivers every due outbox row (the sender works in batches of 50; other tests may have left mail queued). */
+export async function deliverAll(catcher: {
+  deliver(now?: Date): Promise<{ sent: number; retried: number; failed: number }>;
+}) {
+  for (let round = 0; round < 200; round += 1) {
+    const report = await catcher.deliver(new Date(Date.now() + 1_000));
+    if (report.sent + report.retried + report.failed === 0) return;
+  }
+}

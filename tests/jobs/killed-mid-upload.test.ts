@@ -35,11 +35,20 @@ function halfUpload(base: string, cookie: string): Promise<void> {
     const boundary = "----clearbench-crash";
     const req = http.request(`${base}/api/documents`, {
       method: "POST",
-      headers: { "content-type": `multipart/form-data; boundary=${boundary}`, cookie, [CSRF_HEADER]: CSRF_HEADER_VALUE, "content-length": String(6 * 1024 * 1024) },
+      headers: {
+        "content-type": `multipart/form-data; boundary=${boundary}`,
+        cookie,
+        [CSRF_HEADER]: CSRF_HEADER_VALUE,
+        "content-length": String(6 * 1024 * 1024),
+      },
     });
     req.on("error", () => resolve());
-    req.write(`--${boundary}\r\nContent-Disposition: form-data; name="typeCode"\r\n\r\ngeneral_liability\r\n`);
-    req.write(`--${boundary}\r\nContent-Disposition: form-data; name="file"; filename="big.pdf"\r\nContent-Type: application/pdf\r\n\r\n%PDF-1.7\n`);
+    req.write(
+      `--${boundary}\r\nContent-Disposition: form-data; name="typeCode"\r\n\r\ngeneral_liability\r\n`,
+    );
+    req.write(
+      `--${boundary}\r\nContent-Disposition: form-data; name="file"; filename="big.pdf"\r\nContent-Type: application/pdf\r\n\r\n%PDF-1.7\n`,
+    );
     req.write(Buffer.alloc(2 * 1024 * 1024, 32), () => setTimeout(resolve, 300));
   });
 }
@@ -47,17 +56,41 @@ function halfUpload(base: string, cookie: string): Promise<void> {
 describe("the server killed with SIGKILL in the middle of an upload", () => {
   it("leaves no row without a file and no file without a row after a restart", async () => {
     const uploadsDir = mkdtempSync(path.join(tmpdir(), "clearbench-crash-"));
-    const env = { DATABASE_URL: databaseUrl, UPLOADS_DIR: uploadsDir, PORT: "0", RUN_SCHEDULE: "false", NODE_ENV: "test", BCRYPT_COST: "4" };
+    const env = {
+      DATABASE_URL: databaseUrl,
+      UPLOADS_DIR: uploadsDir,
+      PORT: "0",
+      RUN_SCHEDULE: "false",
+      NODE_ENV: "test",
+      BCRYPT_COST: "4",
+    };
     const first = await startServerProcess(env);
     const admin = new pg.Client({ connectionString: databaseUrl });
     await admin.connect();
-    const signUp = await request(first.url).post("/api/auth/sign-up").set(CSRF_HEADER, CSRF_HEADER_VALUE).send({
-      kind: "service", companyName: "Marrowfield Machine Service LLC", addressLine: "9 Crane Way", postalCode: "60601", timeZone: "America/Chicago",
-      name: "Teodora Vance", email: `crash-${randomUUID().slice(0, 8)}@example.test`, password: TEST_PASSWORD,
-    });
-    const cookie = ([] as string[]).concat(signUp.headers["set-cookie"] ?? []).map((c) => c.split(";")[0]).join("; ");
+    const signUp = await request(first.url)
+      .post("/api/auth/sign-up")
+      .set(CSRF_HEADER, CSRF_HEADER_VALUE)
+      .send({
+        kind: "service",
+        companyName: "Marrowfield Machine Service LLC",
+        addressLine: "9 Crane Way",
+        postalCode: "60601",
+        timeZone: "America/Chicago",
+        name: "Teodora Vance",
+        email: `crash-${randomUUID().slice(0, 8)}@example.test`,
+        password: TEST_PASSWORD,
+      });
+    const cookie = ([] as string[])
+      .concat(signUp.headers["set-cookie"] ?? [])
+      .map((c) => c.split(";")[0])
+      .join("; ");
     const { bytes } = await buildCertificatePdf({ seed: 91 });
-    const done = await request(first.url).post("/api/documents").set(CSRF_HEADER, CSRF_HEADER_VALUE).set("Cookie", cookie).field("typeCode", "general_liability").attach("file", Buffer.from(bytes), "ok.pdf");
+    const done = await request(first.url)
+      .post("/api/documents")
+      .set(CSRF_HEADER, CSRF_HEADER_VALUE)
+      .set("Cookie", cookie)
+      .field("typeCode", "general_liability")
+      .attach("file", Buffer.from(bytes), "ok.pdf");
 
     await halfUpload(first.url, cookie);
     await stopProcess(first.child, "SIGKILL");

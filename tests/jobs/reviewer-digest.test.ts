@@ -6,6 +6,7 @@ import { buildCompany } from "../support/build-company.ts";
 import { buildProvider, buildCredentialRow, insuranceFields } from "../fixtures/build-credential-row.ts";
 import { runReviewerDigest } from "../../jobs/reviewer-digest.ts";
 import { Credential } from "../../server/credentials/model.ts";
+import { deliverAll } from "./job-support.ts";
 
 let t: TestApp;
 let catcher: Awaited<ReturnType<typeof startTestMailCatcher>>;
@@ -40,7 +41,7 @@ describe("reviewers' daily digest", () => {
 
     const first = await runReviewerDigest({ asOf }, deps);
     const again = await runReviewerDigest({ asOf: new Date(asOf.getTime() + 3_600_000) }, deps);
-    await catcher.deliver(new Date(Date.now() + 1_000));
+    await deliverAll(catcher);
 
     const mails = catcher.to(users.reviewer!.email);
     expect(first).toMatchObject({

@@ -3,22 +3,45 @@ import { createHash, randomUUID } from "node:crypto";
 import { mkdtempSync, readdirSync, utimesSync, writeFileSync, existsSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
-import { buildTestApp, type TestApp } from "../support/test-app.ts";
+import pg from "pg";
 import { buildCompany } from "../support/build-company.ts";
+import { connectDatabase } from "../../server/db/sequelize.ts";
+import { initModels } from "../../server/db/associations.ts";
+import { migrate } from "../../server/db/migrate.ts";
 import { createStorage } from "../../server/storage/index.ts";
 import { sweepOrphans } from "../../server/storage/sweep-orphans.ts";
 import { Document } from "../../server/credentials/model.ts";
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
+// A database of its own: the sweep looks at every document row, and other tests' files live elsewhere.
+let close: () => Promise<void>;
+beforeAll(async () => {
+  const name = `sweep_${randomUUID().slice(0, 8)}`;
+  const admin = new pg.Client({ connectionString: process.env.DATABASE_URL });
+  await admin.connect();
+  await admin.query(`CREATE DATABASE ${name}`);
+  await admin.end();
+  const url = new URL(process.env.DATABASE_URL!);
+  url.pathname = `/${name}`;
+  const sequelize = connectDatabase(url.toString());
+  initModels(sequelize);
+  await migrate(sequelize);
+  close = () => sequelize.close();
 });
-afterAll(() => t.close());
+afterAll(() => close());
 
 const sha = (text: string) => createHash("sha256").update(text).digest("hex");
 
 async function documentRow(companyId: number, userId: number, content: string) {
-  return Document.create({ companyId, uploadedBy: userId, sha256: sha(content), sizeBytes: content.length, mime: "application/pdf", originalName: "x.pdf", extractedText: null, extractionMethod: "pdf_text" });
+  return Document.create({
+    companyId,
+    uploadedBy: userId,
+    sha256: sha(content),
+    sizeBytes: content.length,
+    mime: "application/pdf",
+    originalName: "x.pdf",
+    extractedText: null,
+    extractionMethod: "pdf_text",
+  });
 }
 
 describe("start-up sweep after a crash", () => {

@@ -72,8 +72,8 @@ function Results({ search, onSiteHours }: { search: string; onSiteHours: number 
       <p className="text-sm text-ink-700" role="status">
         Showing {rows.length} cleared {rows.length === 1 ? "technician" : "technicians"}
         {results.hasNextPage ? "; more below" : ""}. Distances are straight lines; drive times assume{" "}
-        {first.assumptions.averageSpeedMph} mph on roads {Math.round((first.assumptions.roadFactor - 1) * 100)}% longer
-        than the straight line.
+        {first.assumptions.averageSpeedMph} mph on roads{" "}
+        {Math.round((first.assumptions.roadFactor - 1) * 100)}% longer than the straight line.
       </p>
       <div className="hidden md:block">
         <DirectoryResultsTable rows={rows} onSiteHours={onSiteHours} />
@@ -138,8 +138,11 @@ function Search({ params }: { params: URLSearchParams }) {
       />
       {sites.length === 0 && (
         <p className="text-sm text-ink-700">
-          Add a site on the <Link to={paths.buyer.sites} className="underline underline-offset-2">Sites</Link> page to see
-          distances, drive times and call-out estimates.
+          Add a site on the{" "}
+          <Link to={paths.buyer.sites} className="underline underline-offset-2">
+            Sites
+          </Link>{" "}
+          page to see distances, drive times and call-out estimates.
         </p>
       )}
       <div className="flex flex-wrap items-end justify-between gap-3">

@@ -43,7 +43,10 @@ export function Component() {
         description={
           <>
             For{" "}
-            <Link to={hrefs.directoryTechnician(technician.technicianId)} className="underline underline-offset-2">
+            <Link
+              to={hrefs.directoryTechnician(technician.technicianId)}
+              className="underline underline-offset-2"
+            >
               {technician.name}
             </Link>{" "}
             of {technician.companyName}. It is sent only if the technician is cleared at this moment.

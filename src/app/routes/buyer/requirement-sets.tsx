@@ -39,7 +39,9 @@ export function Component() {
       credentialTypes={activeTypes}
       pending={save.isPending}
       serverError={save.error}
-      onSubmit={(input) => save.mutate({ requirementSetId: setId, input }, { onSuccess: () => setEditing(null) })}
+      onSubmit={(input) =>
+        save.mutate({ requirementSetId: setId, input }, { onSuccess: () => setEditing(null) })
+      }
       onCancel={() => {
         save.reset();
         setEditing(null);
@@ -61,7 +63,8 @@ export function Component() {
       {editing === "new" && <section className="mb-6">{editorFor()}</section>}
       {sets.length === 0 && editing !== "new" ? (
         <EmptyState title="No requirement sets yet" action={add}>
-          Every listed technician already meets the platform baseline. Add a set for what your sites ask on top.
+          Every listed technician already meets the platform baseline. Add a set for what your sites ask on
+          top.
         </EmptyState>
       ) : (
         <ul className="space-y-4">

@@ -29,7 +29,9 @@ function SiteCard({ site }: { site: Site }) {
           timeZoneOptions={usTimeZoneOptions}
           pending={save.isPending}
           serverError={save.error}
-          onSubmit={(input) => save.mutate({ siteId: site.id, input }, { onSuccess: () => setEditing(false) })}
+          onSubmit={(input) =>
+            save.mutate({ siteId: site.id, input }, { onSuccess: () => setEditing(false) })
+          }
           onCancel={() => setEditing(false)}
         />
       ) : (

@@ -29,11 +29,22 @@ function AddToRoster({ technicianId }: { technicianId: number }) {
   const already = isApiError(add.error) && add.error.status === 409;
   return (
     <div className="flex flex-col items-start gap-1">
-      <Button variant="secondary" pending={add.isPending} disabled={add.isSuccess || already} onClick={() => add.mutate({ technicianId })}>
+      <Button
+        variant="secondary"
+        pending={add.isPending}
+        disabled={add.isSuccess || already}
+        onClick={() => add.mutate({ technicianId })}
+      >
         {add.isSuccess ? "On your roster" : "Add to roster"}
       </Button>
       <p role="status" className="text-sm text-ink-700">
-        {add.isSuccess ? "Added to your roster." : already ? "Already on your roster." : add.error ? add.error.message : ""}
+        {add.isSuccess
+          ? "Added to your roster."
+          : already
+            ? "Already on your roster."
+            : add.error
+              ? add.error.message
+              : ""}
       </p>
     </div>
   );
@@ -72,7 +83,8 @@ export function Component() {
         <div className="flex flex-wrap items-center gap-3">
           <DirectoryStandingBadge standing={t.baseline.standing} earliestLapse={t.baseline.earliestLapse} />
           <span className="text-sm text-ink-800">
-            {t.technologies.map((x) => technologyLabels[x as MachineTechnology] ?? x).join(", ") || "No technologies listed"}
+            {t.technologies.map((x) => technologyLabels[x as MachineTechnology] ?? x).join(", ") ||
+              "No technologies listed"}
             {t.controlFamilies.length > 0 && ` · controls: ${t.controlFamilies.join(", ")}`}
           </span>
           <span className="text-sm text-ink-800">

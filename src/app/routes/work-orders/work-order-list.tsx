@@ -54,7 +54,9 @@ export function Component() {
       </div>
       {workOrders.length === 0 ? (
         <EmptyState
-          title={status ? `No work orders are ${workOrderStatusWords[status].toLowerCase()}` : "No work orders yet"}
+          title={
+            status ? `No work orders are ${workOrderStatusWords[status].toLowerCase()}` : "No work orders yet"
+          }
           action={
             isBuyer && (
               <Link to={paths.buyer.directory} className={buttonStyles("primary")}>

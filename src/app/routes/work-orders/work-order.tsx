@@ -39,11 +39,23 @@ function Facts({ workOrder }: { workOrder: WorkOrder }) {
   const rows: [string, string][] = [
     ["Shop and site", `${workOrder.shop.name}, ${workOrder.site.name}`],
     ["Technician", `${workOrder.technician.name} (${workOrder.technician.companyName})`],
-    ["Machine", m ? [m.builder, m.model, m.controlFamily, m.serialNumber && `serial ${m.serialNumber}`].filter(Boolean).join(" · ") : "Not named"],
+    [
+      "Machine",
+      m
+        ? [m.builder, m.model, m.controlFamily, m.serialNumber && `serial ${m.serialNumber}`]
+            .filter(Boolean)
+            .join(" · ")
+        : "Not named",
+    ],
     ["Technology", technologyWord(workOrder.technology)],
     ["Urgency", urgencyWords[workOrder.urgency]],
     ["Preferred dates", workOrder.preferredDates.map(formatIsoDate).join(", ") || "None given"],
-    ["Checked against", workOrder.requirementSet ? `${workOrder.requirementSet.name} and the platform baseline` : "The platform baseline"],
+    [
+      "Checked against",
+      workOrder.requirementSet
+        ? `${workOrder.requirementSet.name} and the platform baseline`
+        : "The platform baseline",
+    ],
     ["Raised", `${formatDateTime(workOrder.createdAt)} by ${workOrder.createdBy.name}`],
   ];
   if (workOrder.declineReason) rows.push(["Reason for declining", workOrder.declineReason]);
@@ -78,7 +90,11 @@ function ReviewSection({ workOrder, role }: { workOrder: WorkOrder; role: string
       {existing ? (
         <ReviewView review={existing} canReply={role === "provider_admin"} />
       ) : workOrder.yourSide === "shop" ? (
-        <ReviewForm pending={write.isPending} serverError={write.error} onSubmit={(input) => write.mutate(input)} />
+        <ReviewForm
+          pending={write.isPending}
+          serverError={write.error}
+          onSubmit={(input) => write.mutate(input)}
+        />
       ) : (
         <p className="text-sm text-ink-700">The shop has not rated this job yet.</p>
       )}
@@ -94,7 +110,10 @@ export function Component() {
   const back = workOrder.yourSide === "shop" ? paths.buyer.workOrders : paths.provider.workOrders;
   return (
     <>
-      <Link to={back} className="mb-2 inline-flex min-h-11 items-center text-sm text-ink-700 underline underline-offset-2">
+      <Link
+        to={back}
+        className="mb-2 inline-flex min-h-11 items-center text-sm text-ink-700 underline underline-offset-2"
+      >
         All work orders
       </Link>
       <PageHeader
@@ -118,14 +137,24 @@ export function Component() {
                 Proof of standing
               </h2>
               {workOrder.snapshotAccepted && (
-                <StandingSnapshotView workOrderId={workOrder.id} at="accepted" snapshot={workOrder.snapshotAccepted} />
+                <StandingSnapshotView
+                  workOrderId={workOrder.id}
+                  at="accepted"
+                  snapshot={workOrder.snapshotAccepted}
+                />
               )}
               {workOrder.snapshotCompleted && (
-                <StandingSnapshotView workOrderId={workOrder.id} at="completed" snapshot={workOrder.snapshotCompleted} />
+                <StandingSnapshotView
+                  workOrderId={workOrder.id}
+                  at="completed"
+                  snapshot={workOrder.snapshotCompleted}
+                />
               )}
             </section>
           )}
-          {workOrder.status === "confirmed" && <ReviewSection workOrder={workOrder} role={user?.role ?? ""} />}
+          {workOrder.status === "confirmed" && (
+            <ReviewSection workOrder={workOrder} role={user?.role ?? ""} />
+          )}
         </div>
         <MessageThread
           workOrderId={workOrder.id}

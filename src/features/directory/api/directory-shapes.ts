@@ -77,7 +77,9 @@ const profileStandingSchema = z.object({
   standing: z.enum(standings),
   earliestLapse: z.string().nullable(),
   computedAt: z.string(),
-  unmet: z.array(z.object({ label: z.string(), reason: z.enum(unmetReasons).nullable(), detail: z.string() })),
+  unmet: z.array(
+    z.object({ label: z.string(), reason: z.enum(unmetReasons).nullable(), detail: z.string() }),
+  ),
   results: z.array(
     z
       .object({

@@ -37,7 +37,9 @@ const textKeys = [
 const moneyKeys = new Set<string>(["minEachOccurrence", "minAggregate", "minAutoCsl"]);
 
 export function draftFromSearch(search: URLSearchParams): DirectoryDraft {
-  const draft = { credentialTypes: (search.get("credentialTypes") ?? "").split(",").filter(Boolean) } as DirectoryDraft;
+  const draft = {
+    credentialTypes: (search.get("credentialTypes") ?? "").split(",").filter(Boolean),
+  } as DirectoryDraft;
   for (const key of textKeys) draft[key] = search.get(key) ?? "";
   return draft;
 }
@@ -50,7 +52,8 @@ export function searchFromDraft(draft: DirectoryDraft, sort: string): URLSearchP
     const value = (moneyKeys.has(key) ? draft[key].replace(/[$,\s]/g, "") : draft[key]).trim();
     if (value) search.set(key, value);
   }
-  if (draft.credentialTypes.length > 0) search.set("credentialTypes", [...draft.credentialTypes].sort().join(","));
+  if (draft.credentialTypes.length > 0)
+    search.set("credentialTypes", [...draft.credentialTypes].sort().join(","));
   if (sort) search.set("sort", sort);
   return search;
 }

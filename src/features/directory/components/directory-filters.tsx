@@ -51,10 +51,14 @@ const labels = {
 
 /** The directory's filters. The page keeps them in the URL; this form edits a draft and applies it on submit. */
 export function DirectoryFilters(props: DirectoryFiltersProps) {
-  const { draft, onChange, onSubmit, onClear, sites, machines, requirementSets, credentialTypes, error } = props;
+  const { draft, onChange, onSubmit, onClear, sites, machines, requirementSets, credentialTypes, error } =
+    props;
   const errors = fieldErrorsOf(error);
   const set = (patch: Partial<DirectoryDraft>) => onChange({ ...draft, ...patch });
-  const text = (name: keyof typeof labels & keyof DirectoryDraft, extra: { inputMode?: "numeric" | "decimal"; hint?: string } = {}) => (
+  const text = (
+    name: keyof typeof labels & keyof DirectoryDraft,
+    extra: { inputMode?: "numeric" | "decimal"; hint?: string } = {},
+  ) => (
     <TextField
       label={labels[name]}
       name={name}
@@ -67,7 +71,11 @@ export function DirectoryFilters(props: DirectoryFiltersProps) {
   const pickMachine = (equipmentId: string) => {
     const machine = machines.find((m) => String(m.id) === equipmentId);
     // Picking a machine fills the technology and control family (DESIGN.md "Site and Equipment").
-    set(machine ? { equipmentId, technology: machine.technology, controlFamily: machine.controlFamily } : { equipmentId });
+    set(
+      machine
+        ? { equipmentId, technology: machine.technology, controlFamily: machine.controlFamily }
+        : { equipmentId },
+    );
   };
   const submit = (event: FormEvent<HTMLFormElement>) => {
     event.preventDefault();
@@ -75,7 +83,13 @@ export function DirectoryFilters(props: DirectoryFiltersProps) {
   };
 
   return (
-    <form noValidate onSubmit={submit} role="search" aria-label="Directory filters" className="space-y-4 rounded-lg border border-ink-100 bg-white p-4">
+    <form
+      noValidate
+      onSubmit={submit}
+      role="search"
+      aria-label="Directory filters"
+      className="space-y-4 rounded-lg border border-ink-100 bg-white p-4"
+    >
       <FormError error={error} labels={labels} />
       <div className="grid gap-4 sm:grid-cols-2 lg:grid-cols-4">
         <SelectField
@@ -87,7 +101,10 @@ export function DirectoryFilters(props: DirectoryFiltersProps) {
           onChange={(e) => set({ siteId: e.target.value, equipmentId: "" })}
           error={errors.siteId}
         />
-        {text("radiusKm", { inputMode: "numeric", hint: `With a site; ${DEFAULT_RADIUS_KM} km if left empty` })}
+        {text("radiusKm", {
+          inputMode: "numeric",
+          hint: `With a site; ${DEFAULT_RADIUS_KM} km if left empty`,
+        })}
         <SelectField
           label={labels.equipmentId}
           name="equipmentId"
@@ -130,7 +147,9 @@ export function DirectoryFilters(props: DirectoryFiltersProps) {
         {text("q")}
       </div>
       <fieldset>
-        <legend className="mb-1 text-sm font-medium text-ink-900">{labels.credentialTypes} (holds all that are ticked)</legend>
+        <legend className="mb-1 text-sm font-medium text-ink-900">
+          {labels.credentialTypes} (holds all that are ticked)
+        </legend>
         <div className="grid gap-x-3 sm:grid-cols-2 lg:grid-cols-4">
           {credentialTypes.map((type, i) => (
             <label key={type.code} className="flex min-h-11 items-center gap-2 text-sm text-ink-900">
@@ -154,7 +173,17 @@ export function DirectoryFilters(props: DirectoryFiltersProps) {
           ))}
         </div>
       </fieldset>
-      <details open={Boolean(draft.oemBuilder || draft.minOemLevel || draft.minEachOccurrence || draft.minAggregate || draft.minAutoCsl) || undefined}>
+      <details
+        open={
+          Boolean(
+            draft.oemBuilder ||
+            draft.minOemLevel ||
+            draft.minEachOccurrence ||
+            draft.minAggregate ||
+            draft.minAutoCsl,
+          ) || undefined
+        }
+      >
         <summary className="min-h-11 cursor-pointer py-2 text-sm font-semibold text-ink-900">
           OEM training, insurance limits and estimate
         </summary>

@@ -12,7 +12,9 @@ export const formatKm = (km: number): string => `${km < 10 ? km.toFixed(1) : Mat
 
 /** "4.7 (12)" or "No ratings yet": an average is never shown without its count. */
 export const ratingWords = (rating: { average: number | null; count: number }): string =>
-  rating.average === null || rating.count === 0 ? "No ratings yet" : `${rating.average.toFixed(1)} (${rating.count})`;
+  rating.average === null || rating.count === 0
+    ? "No ratings yet"
+    : `${rating.average.toFixed(1)} (${rating.count})`;
 
 /** How the empty state names the filter that removed the most candidates. */
 export const filterWords: Record<DirectoryFilterName, string> = {

@@ -20,7 +20,9 @@ export function DirectoryResultCards({ rows, onSiteHours }: { rows: DirectoryRow
           <div className="grid grid-cols-2 gap-3">
             <DistanceText row={row} />
             <RatingSummary rating={row.rating} />
-            {row.callOut && <CallOutEstimate callOut={row.callOut} onSiteHours={onSiteHours} forWhom={row.name} />}
+            {row.callOut && (
+              <CallOutEstimate callOut={row.callOut} onSiteHours={onSiteHours} forWhom={row.name} />
+            )}
             <RatesText row={row} />
           </div>
         </li>

@@ -27,7 +27,10 @@ export function DirectoryResultsTable({ rows, onSiteHours }: { rows: DirectoryRo
           header: "Standing",
           enableSorting: false,
           cell: (info) => (
-            <DirectoryStandingBadge standing={info.getValue()} earliestLapse={info.row.original.earliestLapse} />
+            <DirectoryStandingBadge
+              standing={info.getValue()}
+              earliestLapse={info.row.original.earliestLapse}
+            />
           ),
         }),
         column.accessor("distanceKm", {
@@ -41,7 +44,11 @@ export function DirectoryResultsTable({ rows, onSiteHours }: { rows: DirectoryRo
           enableSorting: false,
           cell: (info) =>
             info.row.original.callOut ? (
-              <CallOutEstimate callOut={info.row.original.callOut} onSiteHours={onSiteHours} forWhom={info.row.original.name} />
+              <CallOutEstimate
+                callOut={info.row.original.callOut}
+                onSiteHours={onSiteHours}
+                forWhom={info.row.original.name}
+              />
             ) : (
               <span className="text-sm text-ink-700">Choose a site</span>
             ),

@@ -24,7 +24,9 @@ export function DistanceText({ row }: { row: DirectoryRow }) {
       <span className="whitespace-nowrap text-ink-900">{formatKm(row.distanceKm)}</span>{" "}
       <span className="whitespace-nowrap text-xs text-ink-700">straight line</span>
       {row.driveHours !== null && (
-        <span className="block whitespace-nowrap text-ink-800">about {formatDriveTime(row.driveHours)} drive</span>
+        <span className="block whitespace-nowrap text-ink-800">
+          about {formatDriveTime(row.driveHours)} drive
+        </span>
       )}
     </span>
   );

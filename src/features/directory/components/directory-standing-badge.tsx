@@ -8,7 +8,11 @@ type DirectoryStandingBadgeProps = {
 };
 
 /** Shape and word: "Cleared", "Lapsing in N days" or "Not cleared". */
-export function DirectoryStandingBadge({ standing, earliestLapse, now = new Date() }: DirectoryStandingBadgeProps) {
+export function DirectoryStandingBadge({
+  standing,
+  earliestLapse,
+  now = new Date(),
+}: DirectoryStandingBadgeProps) {
   if (standing === "lapsing" && earliestLapse)
     return <StatusBadge status="lapsing" daysLeft={daysUntil(earliestLapse, now)} />;
   return <StatusBadge status={standing === "lapsing" ? "cleared" : standing} />;

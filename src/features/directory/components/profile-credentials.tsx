@@ -34,17 +34,21 @@ function factsOf(fields: Record<string, unknown>): [string, string][] {
   add("Issued", text(fields.issueDate) && formatIsoDate(text(fields.issueDate)));
   add("Card expiry", text(fields.expiryDate) && formatIsoDate(text(fields.expiryDate)));
   if (fields.statutory === true) add("Workers' compensation", "Statutory");
-  const limits = fields.limits && typeof fields.limits === "object" ? (fields.limits as Record<string, unknown>) : {};
+  const limits =
+    fields.limits && typeof fields.limits === "object" ? (fields.limits as Record<string, unknown>) : {};
   for (const [name, value] of Object.entries(limits))
     if (typeof value === "number") add(limitWords[name] ?? name, formatDollars(value));
-  if (typeof fields.additionalInsured === "boolean") add("Additional insured", fields.additionalInsured ? "Yes" : "No");
-  if (typeof fields.waiverOfSubrogation === "boolean") add("Waiver of subrogation", fields.waiverOfSubrogation ? "Yes" : "No");
+  if (typeof fields.additionalInsured === "boolean")
+    add("Additional insured", fields.additionalInsured ? "Yes" : "No");
+  if (typeof fields.waiverOfSubrogation === "boolean")
+    add("Waiver of subrogation", fields.waiverOfSubrogation ? "Yes" : "No");
   return facts;
 }
 
 /** Every verified credential with its dates and limits; insurance certificates can be downloaded. */
 export function ProfileCredentials({ credentials }: { credentials: readonly ProfileCredential[] }) {
-  if (credentials.length === 0) return <p className="text-sm text-ink-700">No verified credentials on file.</p>;
+  if (credentials.length === 0)
+    return <p className="text-sm text-ink-700">No verified credentials on file.</p>;
   return (
     <ul className="grid gap-3 md:grid-cols-2">
       {credentials.map((c) => (

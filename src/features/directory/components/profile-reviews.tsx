@@ -8,7 +8,9 @@ export function ProfileReviews({ technician }: { technician: DirectoryTechnician
     <div className="space-y-3">
       <p className="flex flex-wrap items-center gap-2">
         <RatingSummary rating={technician.rating} />
-        <span className="text-xs text-ink-700">Only from work orders completed and confirmed through Clearbench.</span>
+        <span className="text-xs text-ink-700">
+          Only from work orders completed and confirmed through Clearbench.
+        </span>
       </p>
       {technician.reviews.length > 0 && (
         <ul className="space-y-3">

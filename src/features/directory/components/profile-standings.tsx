@@ -4,7 +4,11 @@ import { DirectoryStandingBadge } from "./directory-standing-badge.tsx";
 /** The technician against each of the buyer's requirement sets, with the reason for every unmet requirement. */
 export function ProfileStandings({ standings }: { standings: readonly ProfileStanding[] }) {
   if (standings.length === 0)
-    return <p className="text-sm text-ink-700">You have no requirement sets yet; only the platform baseline applies.</p>;
+    return (
+      <p className="text-sm text-ink-700">
+        You have no requirement sets yet; only the platform baseline applies.
+      </p>
+    );
   return (
     <ul className="space-y-3">
       {standings.map((s) => (

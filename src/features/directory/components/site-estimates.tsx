@@ -3,8 +3,15 @@ import { CallOutEstimate } from "./call-out-estimate.tsx";
 import { formatDriveTime, formatKm } from "./directory-format.ts";
 
 /** Distance, drive and call-out estimate from the technician's base to each of the buyer's sites. */
-export function SiteEstimates({ estimates, onSiteHours }: { estimates: readonly SiteEstimate[]; onSiteHours: number }) {
-  if (estimates.length === 0) return <p className="text-sm text-ink-700">Add a site to see distances and estimates.</p>;
+export function SiteEstimates({
+  estimates,
+  onSiteHours,
+}: {
+  estimates: readonly SiteEstimate[];
+  onSiteHours: number;
+}) {
+  if (estimates.length === 0)
+    return <p className="text-sm text-ink-700">Add a site to see distances and estimates.</p>;
   return (
     <ul className="grid gap-3 md:grid-cols-2">
       {estimates.map((e) => (

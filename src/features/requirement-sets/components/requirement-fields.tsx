@@ -21,7 +21,14 @@ const levelOptions = [
 ];
 
 /** One requirement line; inputs are named by their path in the set ("requirements.0.label") so errors link to them. */
-export function RequirementFields({ index, draft, credentialTypes, errors, onChange, onRemove }: RequirementFieldsProps) {
+export function RequirementFields({
+  index,
+  draft,
+  credentialTypes,
+  errors,
+  onChange,
+  onRemove,
+}: RequirementFieldsProps) {
   const path = (field: string) => `requirements.${index}.${field}`;
   const set = (patch: Partial<RequirementDraft>) => onChange({ ...draft, ...patch });
   const typesError = errors[path("typeCodes")];
@@ -36,10 +43,15 @@ export function RequirementFields({ index, draft, credentialTypes, errors, onCha
         error={errors[path("label")]}
       />
       <fieldset aria-describedby={typesError ? `${path("typeCodes")}-error` : undefined}>
-        <legend className="mb-1 text-sm font-medium text-ink-900">Credential types (any one of them meets it)</legend>
+        <legend className="mb-1 text-sm font-medium text-ink-900">
+          Credential types (any one of them meets it)
+        </legend>
         <div className="grid gap-1 sm:grid-cols-2 lg:grid-cols-3">
           {credentialTypes.map((type, i) => (
-            <label key={type.code} className="flex min-h-11 items-center gap-2 rounded px-1 text-sm text-ink-900 hover:bg-ink-50">
+            <label
+              key={type.code}
+              className="flex min-h-11 items-center gap-2 rounded px-1 text-sm text-ink-900 hover:bg-ink-50"
+            >
               <input
                 type="checkbox"
                 className="size-4 accent-ink-700"
@@ -63,7 +75,15 @@ export function RequirementFields({ index, draft, credentialTypes, errors, onCha
           </p>
         )}
       </fieldset>
-      <details className="group" open={Object.values(draft.limits).some(Boolean) || draft.additionalInsured || draft.waiverOfSubrogation || undefined}>
+      <details
+        className="group"
+        open={
+          Object.values(draft.limits).some(Boolean) ||
+          draft.additionalInsured ||
+          draft.waiverOfSubrogation ||
+          undefined
+        }
+      >
         <summary className="min-h-11 cursor-pointer py-2 text-sm font-semibold text-ink-900">
           Insurance: minimum limits and endorsements
         </summary>
@@ -101,7 +121,11 @@ export function RequirementFields({ index, draft, credentialTypes, errors, onCha
           </label>
         </div>
       </details>
-      <details open={Boolean(draft.maxAgeMonths || draft.builder || draft.controlFamily || draft.minLevel) || undefined}>
+      <details
+        open={
+          Boolean(draft.maxAgeMonths || draft.builder || draft.controlFamily || draft.minLevel) || undefined
+        }
+      >
         <summary className="min-h-11 cursor-pointer py-2 text-sm font-semibold text-ink-900">
           Training: age and machine-builder (OEM) details
         </summary>

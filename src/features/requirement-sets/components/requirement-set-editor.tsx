@@ -60,7 +60,10 @@ export function RequirementSetEditor(props: RequirementSetEditorProps) {
     set ? set.requirements.map(toDraft) : [emptyDraft()],
   );
   const [showErrors, setShowErrors] = useState(false);
-  const parsed = useMemo(() => requirementSetInputSchema.safeParse(toInput(name, siteId, drafts)), [name, siteId, drafts]);
+  const parsed = useMemo(
+    () => requirementSetInputSchema.safeParse(toInput(name, siteId, drafts)),
+    [name, siteId, drafts],
+  );
   const problem = showErrors && !parsed.success ? parsed.error : serverError;
   const errors = fieldErrorsOf(problem);
 
@@ -75,10 +78,21 @@ export function RequirementSetEditor(props: RequirementSetEditorProps) {
   };
 
   return (
-    <form noValidate onSubmit={submit} className="space-y-5" aria-label={set ? `Edit ${set.name}` : "New requirement set"}>
+    <form
+      noValidate
+      onSubmit={submit}
+      className="space-y-5"
+      aria-label={set ? `Edit ${set.name}` : "New requirement set"}
+    >
       <FormError error={problem} />
       <div className="grid gap-4 sm:grid-cols-2">
-        <TextField label="Name" name="name" value={name} onChange={(e) => setName(e.target.value)} error={errors.name} />
+        <TextField
+          label="Name"
+          name="name"
+          value={name}
+          onChange={(e) => setName(e.target.value)}
+          error={errors.name}
+        />
         <SelectField
           label="Site"
           name="siteId"
@@ -98,7 +112,9 @@ export function RequirementSetEditor(props: RequirementSetEditorProps) {
           credentialTypes={credentialTypes}
           errors={errors}
           onChange={(next) => setDrafts(drafts.map((d) => (d.key === draft.key ? next : d)))}
-          onRemove={drafts.length > 1 ? () => setDrafts(drafts.filter((d) => d.key !== draft.key)) : undefined}
+          onRemove={
+            drafts.length > 1 ? () => setDrafts(drafts.filter((d) => d.key !== draft.key)) : undefined
+          }
         />
       ))}
       <div className="flex flex-wrap gap-2">

@@ -1,7 +1,9 @@
 import type { RequirementSetView } from "../api/requirement-set-shapes.ts";
 import { offeredLimits } from "./requirement-draft.ts";
 
-const limitWords = new Map<string, string>(offeredLimits.map(([name, label]) => [name, label.replace(/ \(\$\)$/, "")]));
+const limitWords = new Map<string, string>(
+  offeredLimits.map(([name, label]) => [name, label.replace(/ \(\$\)$/, "")]),
+);
 
 type RequirementSetSummaryProps = {
   set: RequirementSetView;

@@ -9,7 +9,10 @@ export const getWorkOrderReview = async (workOrderId: number) =>
   (await api.get(`/work-orders/${workOrderId}/review`, z.object({ review: reviewSchema.nullable() }))).review;
 
 export const workOrderReviewQuery = (workOrderId: number) =>
-  queryOptions({ queryKey: reviewKeys.workOrder(workOrderId), queryFn: () => getWorkOrderReview(workOrderId) });
+  queryOptions({
+    queryKey: reviewKeys.workOrder(workOrderId),
+    queryFn: () => getWorkOrderReview(workOrderId),
+  });
 
 export const useWorkOrderReview = (workOrderId: number, enabled = true) =>
   useQuery({ ...workOrderReviewQuery(workOrderId), enabled });

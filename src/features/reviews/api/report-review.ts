@@ -10,7 +10,8 @@ export const reportReview = (reviewId: number, reason: string) =>
 export function useReportReview() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: ({ reviewId, reason }: { reviewId: number; reason: string }) => reportReview(reviewId, reason),
+    mutationFn: ({ reviewId, reason }: { reviewId: number; reason: string }) =>
+      reportReview(reviewId, reason),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: reviewKeys.all }),
   });
 }

@@ -44,7 +44,13 @@ export function ReviewForm({ pending, serverError, onSubmit }: ReviewFormProps) 
               key={n}
               className="flex min-h-11 cursor-pointer items-center gap-2 rounded-md border border-ink-300 bg-white px-3 has-checked:border-ink-700 has-checked:bg-ink-50 has-focus-visible:outline-2 has-focus-visible:outline-ink-700"
             >
-              <input type="radio" name="stars" value={n} data-field={n === MIN_STARS ? "stars" : undefined} className="size-4 accent-ink-700" />
+              <input
+                type="radio"
+                name="stars"
+                value={n}
+                data-field={n === MIN_STARS ? "stars" : undefined}
+                className="size-4 accent-ink-700"
+              />
               <span className="text-sm text-ink-900">
                 <span aria-hidden="true" className="text-accent-700">
                   {"★".repeat(n)}

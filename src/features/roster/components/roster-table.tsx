@@ -36,62 +36,66 @@ type RosterTableProps = {
 };
 
 export function RosterTable({ rows, removingEntryId, onRemove }: RosterTableProps) {
-  const columns = useMemo(() => column.columns([
-    column.accessor("name", {
-      header: "Technician",
-      sortFn: "text",
-      cell: (info) => (
-        <Link
-          to={hrefs.directoryTechnician(info.row.original.technicianId)}
-          className="font-medium text-ink-900 underline underline-offset-2"
-        >
-          {info.getValue()}
-        </Link>
-      ),
-    }),
-    column.accessor("companyName", {
-      header: "Company",
-      sortFn: "text",
-      cell: (info) => (
-        <>
-          {info.getValue()}
-          {info.row.original.entryKind === "company" && (
-            <span className="block text-xs text-ink-700">Whole company on the roster</span>
-          )}
-        </>
-      ),
-    }),
-    column.accessor((r) => r.standing ?? "", {
-      id: "standing",
-      header: "Standing",
-      sortFn: "text",
-      cell: (info) => <RosterStanding row={info.row.original} />,
-    }),
-    column.accessor((r) => r.nextLapse ?? "", {
-      id: "nextLapse",
-      header: "Next lapse",
-      sortFn: "text",
-      cell: (info) => formatInstantDate(info.row.original.nextLapse),
-    }),
-    column.display({
-      id: "remove",
-      header: () => <span className="sr-only">Remove</span>,
-      cell: (info) => {
-        const row = info.row.original;
-        const what = row.entryKind === "company" ? row.entryName : row.name;
-        return (
-          <Button
-            variant="danger"
-            pending={removingEntryId === row.entryId}
-            onClick={() => onRemove(row.entryId)}
-            aria-label={`Remove ${what} from the roster`}
-          >
-            Remove
-          </Button>
-        );
-      },
-    }),
-  ]), [removingEntryId, onRemove]);
+  const columns = useMemo(
+    () =>
+      column.columns([
+        column.accessor("name", {
+          header: "Technician",
+          sortFn: "text",
+          cell: (info) => (
+            <Link
+              to={hrefs.directoryTechnician(info.row.original.technicianId)}
+              className="font-medium text-ink-900 underline underline-offset-2"
+            >
+              {info.getValue()}
+            </Link>
+          ),
+        }),
+        column.accessor("companyName", {
+          header: "Company",
+          sortFn: "text",
+          cell: (info) => (
+            <>
+              {info.getValue()}
+              {info.row.original.entryKind === "company" && (
+                <span className="block text-xs text-ink-700">Whole company on the roster</span>
+              )}
+            </>
+          ),
+        }),
+        column.accessor((r) => r.standing ?? "", {
+          id: "standing",
+          header: "Standing",
+          sortFn: "text",
+          cell: (info) => <RosterStanding row={info.row.original} />,
+        }),
+        column.accessor((r) => r.nextLapse ?? "", {
+          id: "nextLapse",
+          header: "Next lapse",
+          sortFn: "text",
+          cell: (info) => formatInstantDate(info.row.original.nextLapse),
+        }),
+        column.display({
+          id: "remove",
+          header: () => <span className="sr-only">Remove</span>,
+          cell: (info) => {
+            const row = info.row.original;
+            const what = row.entryKind === "company" ? row.entryName : row.name;
+            return (
+              <Button
+                variant="danger"
+                pending={removingEntryId === row.entryId}
+                onClick={() => onRemove(row.entryId)}
+                aria-label={`Remove ${what} from the roster`}
+              >
+                Remove
+              </Button>
+            );
+          },
+        }),
+      ]),
+    [removingEntryId, onRemove],
+  );
   return (
     <DataTable
       caption="Roster"

@@ -37,7 +37,10 @@ export function EquipmentForm({ equipment, pending, serverError, onSubmit, onCan
     event.preventDefault();
     const form = event.currentTarget;
     const values = readForm(form);
-    const parsed = equipmentInputSchema.safeParse({ ...values, serialNumber: values.serialNumber || undefined });
+    const parsed = equipmentInputSchema.safeParse({
+      ...values,
+      serialNumber: values.serialNumber || undefined,
+    });
     if (!parsed.success) {
       setInvalid(parsed.error);
       return;
@@ -48,10 +51,20 @@ export function EquipmentForm({ equipment, pending, serverError, onSubmit, onCan
   };
 
   return (
-    <form noValidate onSubmit={submit} className="space-y-3" aria-label={equipment ? "Edit machine" : "Add a machine"}>
+    <form
+      noValidate
+      onSubmit={submit}
+      className="space-y-3"
+      aria-label={equipment ? "Edit machine" : "Add a machine"}
+    >
       <FormError error={problem} labels={labels} />
       <div className="grid gap-3 sm:grid-cols-3">
-        <TextField label={labels.builder} name="builder" defaultValue={equipment?.builder} error={fields.builder} />
+        <TextField
+          label={labels.builder}
+          name="builder"
+          defaultValue={equipment?.builder}
+          error={fields.builder}
+        />
         <TextField
           label={labels.controlFamily}
           name="controlFamily"

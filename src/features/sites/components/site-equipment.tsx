@@ -20,7 +20,9 @@ export function SiteEquipment({ siteId, siteName }: { siteId: number; siteName: 
     <section aria-label={`Machines at ${siteName}`} className="space-y-3">
       <h3 className="font-semibold text-ink-900">Machines</h3>
       {machines.length === 0 ? (
-        <p className="text-sm text-ink-700">No machines yet. Add one so the directory can match technicians to it.</p>
+        <p className="text-sm text-ink-700">
+          No machines yet. Add one so the directory can match technicians to it.
+        </p>
       ) : (
         <ul className="divide-y divide-ink-100 rounded-md border border-ink-100">
           {machines.map((m) => (
@@ -45,7 +47,11 @@ export function SiteEquipment({ siteId, siteName }: { siteId: number; siteName: 
                     {m.serialNumber && <span className="text-ink-700"> · serial {m.serialNumber}</span>}
                   </span>
                   <span className="flex gap-2">
-                    <Button variant="quiet" onClick={() => setEditing(m.id)} aria-label={`Edit ${m.builder} ${m.model}`}>
+                    <Button
+                      variant="quiet"
+                      onClick={() => setEditing(m.id)}
+                      aria-label={`Edit ${m.builder} ${m.model}`}
+                    >
                       Edit
                     </Button>
                     <Button

@@ -9,7 +9,12 @@ import { readForm } from "@/lib/read-form.ts";
 import { usePostalPlace } from "../api/look-up-postal-code.ts";
 import type { Site } from "../api/site-shapes.ts";
 
-const labels = { name: "Site name", addressLine: "Street address", postalCode: "ZIP code", timeZone: "Time zone" };
+const labels = {
+  name: "Site name",
+  addressLine: "Street address",
+  postalCode: "ZIP code",
+  timeZone: "Time zone",
+};
 
 type SiteFormProps = {
   site?: Site | undefined;
@@ -31,9 +36,10 @@ export function SiteForm({ site, timeZoneOptions, pending, serverError, onSubmit
   const shownZone = zoneTouched ? timeZone : suggested || timeZone;
   const problem = invalid ?? serverError;
   const fields = fieldErrorsOf(problem);
-  const options = timeZoneOptions.some((o) => o.value === shownZone) || !shownZone
-    ? timeZoneOptions
-    : [...timeZoneOptions, { value: shownZone, label: shownZone }];
+  const options =
+    timeZoneOptions.some((o) => o.value === shownZone) || !shownZone
+      ? timeZoneOptions
+      : [...timeZoneOptions, { value: shownZone, label: shownZone }];
 
   const submit = (event: FormEvent<HTMLFormElement>) => {
     event.preventDefault();
@@ -48,7 +54,12 @@ export function SiteForm({ site, timeZoneOptions, pending, serverError, onSubmit
   };
 
   return (
-    <form noValidate onSubmit={submit} className="space-y-4" aria-label={site ? `Edit ${site.name}` : "Add a site"}>
+    <form
+      noValidate
+      onSubmit={submit}
+      className="space-y-4"
+      aria-label={site ? `Edit ${site.name}` : "Add a site"}
+    >
       <FormError error={problem} labels={labels} />
       <div className="grid gap-4 sm:grid-cols-2">
         <TextField label={labels.name} name="name" defaultValue={site?.name} required error={fields.name} />

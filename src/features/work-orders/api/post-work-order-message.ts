@@ -3,14 +3,23 @@ import { uploadWithProgress } from "@/lib/upload-with-progress.ts";
 import { workOrderKeys } from "./work-order-keys.ts";
 import { workOrderMessageSchema } from "./work-order-shapes.ts";
 
-export type PostMessageInput = { body: string; file?: File | undefined; onProgress?: (fraction: number) => void };
+export type PostMessageInput = {
+  body: string;
+  file?: File | undefined;
+  onProgress?: (fraction: number) => void;
+};
 
 /** Multipart, so a file can go with the words; the file takes the same checks as any other upload. */
 export function postWorkOrderMessage(id: number, { body, file, onProgress }: PostMessageInput) {
   const form = new FormData();
   form.set("body", body);
   if (file) form.set("file", file);
-  return uploadWithProgress({ path: `/work-orders/${id}/messages`, form, schema: workOrderMessageSchema, onProgress });
+  return uploadWithProgress({
+    path: `/work-orders/${id}/messages`,
+    form,
+    schema: workOrderMessageSchema,
+    onProgress,
+  });
 }
 
 export function usePostWorkOrderMessage(id: number) {

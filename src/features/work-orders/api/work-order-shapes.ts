@@ -99,7 +99,13 @@ export const workOrderMessageSchema = z.object({
   side: z.enum(workOrderSides),
   body: z.string(),
   attachment: z
-    .object({ documentId: z.number(), name: z.string(), mime: z.string(), sizeBytes: z.number(), url: z.string() })
+    .object({
+      documentId: z.number(),
+      name: z.string(),
+      mime: z.string(),
+      sizeBytes: z.number(),
+      url: z.string(),
+    })
     .nullable(),
   createdAt: z.string(),
 });

@@ -14,7 +14,8 @@ type MessageThreadProps = {
   sideNames: { shop: string; service: string };
 };
 
-const sizeWords = (bytes: number) => (bytes < 1024 * 1024 ? `${Math.ceil(bytes / 1024)} KB` : `${(bytes / 1024 / 1024).toFixed(1)} MB`);
+const sizeWords = (bytes: number) =>
+  bytes < 1024 * 1024 ? `${Math.ceil(bytes / 1024)} KB` : `${(bytes / 1024 / 1024).toFixed(1)} MB`;
 
 /** Append-only: messages are never edited or removed, each stamped with who and when. */
 export function MessageThread({ workOrderId, messages, sideNames }: MessageThreadProps) {
@@ -33,7 +34,11 @@ export function MessageThread({ workOrderId, messages, sideNames }: MessageThrea
     setInvalid(null);
     const file = data.get("file");
     post.mutate(
-      { body: parsed.data.body, file: file instanceof File && file.size > 0 ? file : undefined, onProgress: setProgress },
+      {
+        body: parsed.data.body,
+        file: file instanceof File && file.size > 0 ? file : undefined,
+        onProgress: setProgress,
+      },
       {
         onSuccess: () => formRef.current?.reset(),
         onSettled: () => setProgress(null),
@@ -51,14 +56,20 @@ export function MessageThread({ workOrderId, messages, sideNames }: MessageThrea
       ) : (
         <ol className="space-y-3">
           {messages.map((m) => (
-            <li key={m.id} className={`rounded-lg border border-ink-100 p-3 ${m.side === "shop" ? "bg-white" : "bg-ink-50"}`}>
+            <li
+              key={m.id}
+              className={`rounded-lg border border-ink-100 p-3 ${m.side === "shop" ? "bg-white" : "bg-ink-50"}`}
+            >
               <p className="text-sm text-ink-700">
                 <span className="font-semibold text-ink-900">{m.author.name}</span> ({sideNames[m.side]}) ·{" "}
                 <time dateTime={m.createdAt}>{formatDateTime(m.createdAt)}</time>
               </p>
               <p className="mt-1 whitespace-pre-line text-ink-900">{m.body}</p>
               {m.attachment && (
-                <a href={m.attachment.url} className="mt-1 inline-flex min-h-11 items-center text-sm text-ink-900 underline underline-offset-2">
+                <a
+                  href={m.attachment.url}
+                  className="mt-1 inline-flex min-h-11 items-center text-sm text-ink-900 underline underline-offset-2"
+                >
                   {m.attachment.name} ({sizeWords(m.attachment.sizeBytes)})
                 </a>
               )}
@@ -66,7 +77,13 @@ export function MessageThread({ workOrderId, messages, sideNames }: MessageThrea
           ))}
         </ol>
       )}
-      <form ref={formRef} noValidate onSubmit={submit} className="space-y-3 rounded-lg border border-ink-100 bg-white p-4" aria-label="Write a message">
+      <form
+        ref={formRef}
+        noValidate
+        onSubmit={submit}
+        className="space-y-3 rounded-lg border border-ink-100 bg-white p-4"
+        aria-label="Write a message"
+      >
         <FormError error={problem} labels={{ body: "Message", file: "Attach a file" }} />
         <div className="space-y-1">
           <label htmlFor="message-body" className="block text-sm font-medium text-ink-900">

@@ -42,7 +42,10 @@ const technologyOptions = machineTechnologies.map((t) => ({ value: t, label: tec
 function NotClearedReasons({ error }: { error: unknown }) {
   if (!isApiError(error) || error.status !== 409) return null;
   return (
-    <div role="alert" className="rounded-md border-l-4 border-red-700 bg-red-50 px-4 py-3 text-sm text-red-900">
+    <div
+      role="alert"
+      className="rounded-md border-l-4 border-red-700 bg-red-50 px-4 py-3 text-sm text-red-900"
+    >
       <p className="font-semibold">{error.message}</p>
       {error.fields.length > 0 && (
         <ul className="mt-1 list-disc space-y-0.5 pl-5">
@@ -56,7 +59,18 @@ function NotClearedReasons({ error }: { error: unknown }) {
 }
 
 export function RaiseWorkOrderForm(props: RaiseWorkOrderFormProps) {
-  const { technicianId, technicianName, sites, siteId, onSiteChange, machines, requirementSets, pending, serverError, onSubmit } = props;
+  const {
+    technicianId,
+    technicianName,
+    sites,
+    siteId,
+    onSiteChange,
+    machines,
+    requirementSets,
+    pending,
+    serverError,
+    onSubmit,
+  } = props;
   const [invalid, setInvalid] = useState<unknown>(null);
   const [technology, setTechnology] = useState("");
   const [equipmentId, setEquipmentId] = useState("");
@@ -87,7 +101,12 @@ export function RaiseWorkOrderForm(props: RaiseWorkOrderFormProps) {
   };
 
   return (
-    <form noValidate onSubmit={submit} className="max-w-3xl space-y-5" aria-label={`Work order for ${technicianName}`}>
+    <form
+      noValidate
+      onSubmit={submit}
+      className="max-w-3xl space-y-5"
+      aria-label={`Work order for ${technicianName}`}
+    >
       <NotClearedReasons error={serverError} />
       <FormError error={problem} labels={labels} plainWords={plainWords} />
       <div className="grid gap-4 sm:grid-cols-2">
@@ -107,7 +126,9 @@ export function RaiseWorkOrderForm(props: RaiseWorkOrderFormProps) {
           label={labels.equipmentId}
           name="equipmentId"
           options={machines.map((m) => ({ value: String(m.id), label: m.label }))}
-          placeholder={machines.length === 0 ? "No machines recorded at this site" : "Not one machine in particular"}
+          placeholder={
+            machines.length === 0 ? "No machines recorded at this site" : "Not one machine in particular"
+          }
           disabled={machines.length === 0}
           value={equipmentId}
           onChange={(e) => {
@@ -166,7 +187,13 @@ export function RaiseWorkOrderForm(props: RaiseWorkOrderFormProps) {
         <legend className="mb-1 text-sm font-medium text-ink-900">{labels.preferredDates} (optional)</legend>
         <div className="grid gap-3 sm:grid-cols-3">
           {Array.from({ length: DATE_INPUTS }, (_, i) => (
-            <TextField key={i} label={`Preferred date ${i + 1}`} name="preferredDates" type="date" error={i === 0 ? errors.preferredDates : undefined} />
+            <TextField
+              key={i}
+              label={`Preferred date ${i + 1}`}
+              name="preferredDates"
+              type="date"
+              error={i === 0 ? errors.preferredDates : undefined}
+            />
           ))}
         </div>
       </fieldset>

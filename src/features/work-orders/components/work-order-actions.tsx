@@ -7,8 +7,16 @@ import { fieldErrorsOf } from "@/lib/field-errors.ts";
 import { useMoveWorkOrder } from "../api/move-work-order.ts";
 import type { WorkOrder } from "../api/work-order-shapes.ts";
 
-const completeLabels = { hoursWorked: "Hours worked on site", travelHours: "Travel hours, both ways", note: "Note for the shop" };
-const plainWords = { hoursWorked: "Enter the hours, e.g. 3.5", travelHours: "Enter the hours, e.g. 1.25", reason: "Say why (at least 5 characters)" };
+const completeLabels = {
+  hoursWorked: "Hours worked on site",
+  travelHours: "Travel hours, both ways",
+  note: "Note for the shop",
+};
+const plainWords = {
+  hoursWorked: "Enter the hours, e.g. 3.5",
+  travelHours: "Enter the hours, e.g. 1.25",
+  reason: "Say why (at least 5 characters)",
+};
 
 const hoursOf = (text: string) => (text.trim() === "" ? Number.NaN : Number(text.replace(",", ".")));
 
@@ -24,7 +32,9 @@ export function WorkOrderActions({ workOrder }: { workOrder: WorkOrder }) {
 
   const decline = (event: FormEvent<HTMLFormElement>) => {
     event.preventDefault();
-    const parsed = declineWorkOrderSchema.safeParse({ reason: String(new FormData(event.currentTarget).get("reason") ?? "") });
+    const parsed = declineWorkOrderSchema.safeParse({
+      reason: String(new FormData(event.currentTarget).get("reason") ?? ""),
+    });
     if (!parsed.success) return setInvalid(parsed.error);
     setInvalid(null);
     move.mutate({ action: "decline", reason: parsed.data.reason }, { onSuccess: () => setOpen(null) });
@@ -51,7 +61,10 @@ export function WorkOrderActions({ workOrder }: { workOrder: WorkOrder }) {
       <FormError error={problem} labels={{ ...completeLabels, reason: "Reason" }} plainWords={plainWords} />
       <div className="flex flex-wrap gap-2">
         {actions.includes("accept") && (
-          <Button pending={move.isPending && move.variables?.action === "accept"} onClick={() => move.mutate({ action: "accept" })}>
+          <Button
+            pending={move.isPending && move.variables?.action === "accept"}
+            onClick={() => move.mutate({ action: "accept" })}
+          >
             Accept
           </Button>
         )}
@@ -64,7 +77,10 @@ export function WorkOrderActions({ workOrder }: { workOrder: WorkOrder }) {
           <Button onClick={() => setOpen("complete")}>Mark completed…</Button>
         )}
         {actions.includes("confirm") && (
-          <Button pending={move.isPending && move.variables?.action === "confirm"} onClick={() => move.mutate({ action: "confirm" })}>
+          <Button
+            pending={move.isPending && move.variables?.action === "confirm"}
+            onClick={() => move.mutate({ action: "confirm" })}
+          >
             Confirm the work is done
           </Button>
         )}
@@ -85,8 +101,18 @@ export function WorkOrderActions({ workOrder }: { workOrder: WorkOrder }) {
       {open === "complete" && (
         <form noValidate onSubmit={complete} className="space-y-3" aria-label="Record completion">
           <div className="grid gap-3 sm:grid-cols-2">
-            <TextField label={completeLabels.hoursWorked} name="hoursWorked" inputMode="decimal" error={errors.hoursWorked} />
-            <TextField label={completeLabels.travelHours} name="travelHours" inputMode="decimal" error={errors.travelHours} />
+            <TextField
+              label={completeLabels.hoursWorked}
+              name="hoursWorked"
+              inputMode="decimal"
+              error={errors.hoursWorked}
+            />
+            <TextField
+              label={completeLabels.travelHours}
+              name="travelHours"
+              inputMode="decimal"
+              error={errors.travelHours}
+            />
           </div>
           <TextField label={completeLabels.note} name="note" hint="Optional" error={errors.note} />
           <div className="flex gap-2">

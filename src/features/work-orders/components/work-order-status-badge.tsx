@@ -4,7 +4,14 @@ import type { WorkOrderStatus } from "@shared/work-orders/schemas.ts";
 // Each status has a shape and a word, never colour alone (DESIGN.md "Look"); shapes keep 3:1 against white.
 const shapes: Record<WorkOrderStatus, ReactNode> = {
   requested: (
-    <circle cx="8" cy="8" r="5.25" className="fill-none stroke-ink-500" strokeWidth="1.75" strokeDasharray="2.5 2" />
+    <circle
+      cx="8"
+      cy="8"
+      r="5.25"
+      className="fill-none stroke-ink-500"
+      strokeWidth="1.75"
+      strokeDasharray="2.5 2"
+    />
   ),
   accepted: (
     <>

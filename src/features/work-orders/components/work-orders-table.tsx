@@ -35,8 +35,16 @@ const columns = column.columns([
     header: "Technician",
     sortFn: "text",
   }),
-  column.accessor((w) => `${w.shopName}, ${w.siteName}`, { id: "site", header: "Shop and site", sortFn: "text" }),
-  column.accessor("urgency", { header: "Urgency", sortFn: "text", cell: (info) => urgencyWords[info.getValue()] }),
+  column.accessor((w) => `${w.shopName}, ${w.siteName}`, {
+    id: "site",
+    header: "Shop and site",
+    sortFn: "text",
+  }),
+  column.accessor("urgency", {
+    header: "Urgency",
+    sortFn: "text",
+    cell: (info) => urgencyWords[info.getValue()],
+  }),
   column.accessor("updatedAt", {
     header: "Last change",
     sortFn: "text",

@@ -1,0 +1,126 @@
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import type { Browser, BrowserContext, Page } from "playwright-core";
+import { seriousAccessibilityProblems } from "../support/axe.ts";
+import { startBrowserServer } from "../support/browser-server.ts";
+import { launchChromium, screenshot, signIn } from "../support/browser.ts";
+import { DEMO_PASSWORD } from "../../server/db/demo-scenario/index.ts";
+
+const BUYER = "buyer@marlow-precision.test";
+const PROVIDER = "office@kestrel-ridge.test";
+// The demo's Chicago-area technician with verified arc-flash training, about 125 km from the shop's Rockford ZIP code.
+const TECHNICIAN = "Tobias Wren";
+const SITE_ZIP = "61101";
+
+let server: Awaited<ReturnType<typeof startBrowserServer>>;
+let browser: Browser;
+const contexts: BrowserContext[] = [];
+
+beforeAll(async () => {
+  server = await startBrowserServer();
+  browser = await launchChromium();
+}, 180_000);
+afterAll(async () => {
+  for (const context of contexts) await context.close();
+  await browser?.close();
+  await server?.close();
+});
+
+async function signedInPage(email: string): Promise<Page> {
+  // AxeBuilder needs a page from browser.newContext(), not browser.newPage() (STACK.md gotcha 11).
+  const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+  contexts.push(context);
+  const page = await context.newPage();
+  await signIn(page, server.url, email, DEMO_PASSWORD);
+  return page;
+}
+
+describe("a buyer finds a cleared technician and books the job", () => {
+  it("goes from a site and a credential filter to a confirmed, rated work order", async () => {
+    const buyer = await signedInPage(BUYER);
+
+    // The shop's site, found by its ZIP code, and one machine at it.
+    await buyer.goto(`${server.url}/sites`);
+    await buyer.getByRole("button", { name: "Add a site" }).first().click();
+    await buyer.getByLabel("Site name").fill("Rockford main plant");
+    await buyer.getByLabel("Street address").fill("400 Millrace Avenue");
+    await buyer.getByLabel("ZIP code").fill(SITE_ZIP);
+    await buyer.getByText(/Rockford, IL/).waitFor();
+    await buyer.getByRole("button", { name: "Add site", exact: true }).click();
+    await buyer.getByRole("heading", { name: "Rockford main plant" }).waitFor();
+    await buyer.getByLabel("Machine builder").fill("Vantor Machine Works");
+    await buyer.getByLabel("Control family").fill("VMX-40");
+    await buyer.getByLabel("Technology").selectOption("mill");
+    await buyer.getByLabel("Model").fill("VM-40 vertical mill");
+    await buyer.getByRole("button", { name: "Add machine" }).click();
+    await buyer.getByText("Vantor Machine Works VM-40 vertical mill").waitFor();
+    await screenshot(buyer, "buyer-books-1-site");
+
+    await buyer.goto(`${server.url}/directory`);
+    await buyer.getByLabel("Site", { exact: true }).selectOption({ label: "Rockford main plant" });
+    await buyer.getByLabel("Electrical safety (arc flash) training").check();
+    await buyer.getByRole("button", { name: "Search" }).click();
+    await buyer.waitForURL(/credentialTypes=arc_flash/);
+    const row = buyer.getByRole("row", { name: new RegExp(TECHNICIAN) });
+    await row.waitFor();
+    await screenshot(buyer, "buyer-books-2-directory");
+
+    expect(new URL(buyer.url()).searchParams.get("siteId")).not.toBeNull();
+    await expect(row.getByText("Cleared").count()).resolves.toBe(1);
+    await expect(row.getByText("straight line").count()).resolves.toBe(1);
+    await expect(row.getByText("estimate before tax", { exact: true }).count()).resolves.toBe(1);
+    await expect(seriousAccessibilityProblems(buyer)).resolves.toEqual([]);
+
+    await row.getByRole("link", { name: TECHNICIAN }).click();
+    await buyer.getByRole("heading", { level: 1, name: TECHNICIAN }).waitFor();
+    await screenshot(buyer, "buyer-books-3-technician");
+
+    await expect(buyer.getByText("Rockford main plant").count()).resolves.toBeGreaterThan(0);
+    await expect(
+      buyer.getByRole("complementary", { name: "About certificates of insurance" }).count(),
+    ).resolves.toBe(1);
+    await expect(seriousAccessibilityProblems(buyer)).resolves.toEqual([]);
+
+    await buyer.getByRole("link", { name: "Raise a work order" }).click();
+    await buyer.getByRole("heading", { level: 1, name: "Raise a work order" }).waitFor();
+    await buyer.getByLabel("Machine", { exact: true }).selectOption({ index: 1 });
+    await buyer
+      .getByLabel("What is wrong")
+      .fill("Spindle drive faults with an overload alarm after ten minutes of heavy cutting.");
+    await buyer.getByRole("button", { name: "Send work order" }).click();
+    await buyer.waitForURL(/\/work-orders\/\d+$/);
+    const workOrderUrl = buyer.url();
+    await buyer.getByText("Requested").first().waitFor();
+    await screenshot(buyer, "buyer-books-4-requested");
+
+    await expect(seriousAccessibilityProblems(buyer)).resolves.toEqual([]);
+
+    const provider = await signedInPage(PROVIDER);
+    await provider.goto(workOrderUrl);
+    await provider.getByRole("button", { name: "Accept", exact: true }).click();
+    await provider.getByRole("button", { name: "Mark completed…" }).click();
+    await provider.getByLabel("Hours worked on site").fill("3.5");
+    await provider.getByLabel("Travel hours, both ways").fill("3");
+    await provider.getByRole("button", { name: "Record completion" }).click();
+    await provider.getByRole("link", { name: /Print proof of standing \(when completed\)/ }).waitFor();
+    await screenshot(provider, "buyer-books-5-completed");
+
+    await expect(provider.getByText("Completed", { exact: true }).count()).resolves.toBeGreaterThan(0);
+    await expect(
+      provider.getByRole("link", { name: /Print proof of standing \(when accepted\)/ }).count(),
+    ).resolves.toBe(1);
+
+    await buyer.reload();
+    await buyer.getByRole("button", { name: "Confirm the work is done" }).click();
+    await buyer.getByRole("heading", { name: "Rating" }).waitFor();
+    await buyer.getByLabel(/5 stars, Excellent/).check();
+    await buyer
+      .getByLabel("What went well, and what did not")
+      .fill("Found the worn drive belt quickly and left the machine cutting again.");
+    await buyer.getByRole("button", { name: "Send rating" }).click();
+    await buyer.getByText("5 out of 5").waitFor();
+    await screenshot(buyer, "buyer-books-6-rated");
+
+    await expect(buyer.getByText("Confirmed", { exact: true }).count()).resolves.toBeGreaterThan(0);
+    await expect(seriousAccessibilityProblems(buyer)).resolves.toEqual([]);
+  }, 120_000);
+});
