@@ -45,7 +45,7 @@ export async function startChildServer(entry: string, env: Record<string, string
   }
   const stop = () =>
     new Promise<void>((resolve) => {
-      if (child.exitCode !== null) return resolve();
+      if (child.exitCode !== null || child.signalCode !== null) return resolve();
       child.once("exit", () => resolve());
       child.kill("SIGTERM");
     });
