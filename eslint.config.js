@@ -4,7 +4,16 @@ import reactHooks from "eslint-plugin-react-hooks";
 import globals from "globals";
 
 export default tseslint.config(
-  { ignores: ["dist/**", "node_modules/**", "uploads/**", ".pg/**", "bench/results/**", "tests/.screenshots/**"] },
+  {
+    ignores: [
+      "dist/**",
+      "node_modules/**",
+      "uploads/**",
+      ".pg/**",
+      "bench/results/**",
+      "tests/.screenshots/**",
+    ],
+  },
   js.configs.recommended,
   ...tseslint.configs.recommended,
   {
@@ -24,7 +33,10 @@ export default tseslint.config(
     // shared/ is pure: it may not reach into the client, the server or the jobs.
     files: ["shared/**/*.ts"],
     rules: {
-      "no-restricted-imports": ["error", { patterns: ["**/src/**", "**/server/**", "**/jobs/**", "@/*", "@server/*"] }],
+      "no-restricted-imports": [
+        "error",
+        { patterns: ["**/src/**", "**/server/**", "**/jobs/**", "@/*", "@server/*"] },
+      ],
     },
   },
 );

@@ -5,6 +5,7 @@ import { connectDatabase } from "../server/db/sequelize.ts";
 import { initModels } from "../server/db/associations.ts";
 import { createSmtpMailer } from "../server/mail/index.ts";
 import { checkStandingConsistency } from "../server/standing/index.ts";
+import { registerRosterAlerts, sweepRosterAlerts } from "../server/roster/index.ts";
 import { runLapseJob } from "./lapse.ts";
 import { runReviewerDigest } from "./reviewer-digest.ts";
 import { runSendOutbox } from "./send-outbox.ts";
@@ -71,6 +72,8 @@ async function main(): Promise<number> {
     return differences.length === 0 ? 0 : 1;
   }
   if (command === "lapse") {
+    // Buyers' roster alerts hear the standings this run changes.
+    registerRosterAlerts();
     const started = performance.now();
     const result = await runLapseJob({ asOf });
     if (result.skipped) {
@@ -83,6 +86,8 @@ async function main(): Promise<number> {
     say(
       `  ${result.changedStandings.length} standings changed, ${result.statements} SQL statements, ${ms(started)}`,
     );
+    const rosterAlerts = await sweepRosterAlerts();
+    say(`  ${rosterAlerts} roster alerts to buyers`);
     if (!values["no-send"]) await sendOutbox();
     return 0;
   }

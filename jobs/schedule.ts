@@ -2,7 +2,9 @@ import cron, { type ScheduledTask } from "node-cron";
 import type { Config } from "../server/config.ts";
 import { log } from "../server/log.ts";
 import { createSmtpMailer, type Mailer } from "../server/mail/index.ts";
+import { sweepRosterAlerts } from "../server/roster/index.ts";
 import { runLapseJob } from "./lapse.ts";
+import { claimTick, tickOf } from "./claim-tick.ts";
 import { runReviewerDigest } from "./reviewer-digest.ts";
 import { runSendOutbox } from "./send-outbox.ts";
 
@@ -11,9 +13,13 @@ export interface RunningSchedule {
   stop(): Promise<void>;
 }
 
-function guarded(name: string, work: () => Promise<unknown>) {
-  return async () => {
+function guarded(name: string, work: () => Promise<unknown>, claimed = false) {
+  return async (context?: { date?: Date }) => {
     try {
+      if (claimed && !(await claimTick(name, tickOf(context?.date ?? new Date())))) {
+        log.info({ job: name }, "scheduled job already run by another instance");
+        return;
+      }
       const result = await work();
       log.info({ job: name, result: summarize(result) }, "scheduled job finished");
     } catch (err) {
@@ -40,12 +46,23 @@ export function startSchedule(config: Config, deps: { mailer?: Mailer } = {}): R
   const tasks = [
     cron.schedule(
       config.JOB_CRON,
-      guarded("lapse", () => runLapseJob({ asOf: new Date() })),
+      guarded(
+        "lapse",
+        async () => {
+          const result = await runLapseJob({ asOf: new Date() });
+          // Rostered technicians coming within 30 days of a lapse alert their buyers even without a standing change.
+          await sweepRosterAlerts();
+          // The warnings leave now rather than at the outbox's next round.
+          if (mailer) await runSendOutbox({ asOf: new Date() }, { mailer, from: config.MAIL_FROM });
+          return result;
+        },
+        true,
+      ),
       { ...daily, name: "lapse" },
     ),
     cron.schedule(
       config.JOB_CRON,
-      guarded("reviewer_digest", () => runReviewerDigest({ asOf: new Date() })),
+      guarded("reviewer_digest", () => runReviewerDigest({ asOf: new Date() }), true),
       { ...daily, name: "reviewer-digest" },
     ),
   ];

@@ -29,7 +29,18 @@ export interface AppDeps {
   clientDir?: string;
 }
 
-const apiRouters = [healthRoutes, authRoutes, adminUserRoutes, outboxRoutes, technicianRoutes, credentialRoutes, standingApiRoutes, workOrderRoutes, reviewRoutes, ...buyerRouters];
+const apiRouters = [
+  healthRoutes,
+  authRoutes,
+  adminUserRoutes,
+  outboxRoutes,
+  technicianRoutes,
+  credentialRoutes,
+  standingApiRoutes,
+  workOrderRoutes,
+  reviewRoutes,
+  ...buyerRouters,
+];
 
 export function createApp({ config, sessionPool, clientDir }: AppDeps): Express {
   const app = express();

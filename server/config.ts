@@ -2,9 +2,7 @@ import { z } from "zod";
 
 // The only file that reads process.env. Demo defaults are built in so `npm start` just works;
 // production refuses to start without a real session secret.
-const booleanText = z
-  .enum(["true", "false", "1", "0"])
-  .transform((v) => v === "true" || v === "1");
+const booleanText = z.enum(["true", "false", "1", "0"]).transform((v) => v === "true" || v === "1");
 
 const configSchema = z
   .object({
@@ -30,10 +28,21 @@ const configSchema = z
       .transform((s) => s.split(",").map((d) => Number(d.trim())))
       .pipe(z.array(z.number().int().min(1).max(365)).min(1)),
     RUN_SCHEDULE: booleanText.default(true),
+    // Where stored files live: a local folder (one machine) or S3-compatible object storage (several machines).
+    STORAGE_DRIVER: z.enum(["folder", "s3"]).default("folder"),
+    S3_ENDPOINT: z.url().optional(),
+    S3_BUCKET: z.string().min(3).max(63).optional(),
+    S3_REGION: z.string().default("us-east-1"),
+    S3_ACCESS_KEY_ID: z.string().optional(),
+    S3_SECRET_ACCESS_KEY: z.string().optional(),
+    S3_FORCE_PATH_STYLE: booleanText.default(false),
   })
   .superRefine((c, ctx) => {
     if (c.NODE_ENV === "production" && c.SESSION_SECRET === "clearbench-demo-secret-change-me") {
       ctx.addIssue({ code: "custom", path: ["SESSION_SECRET"], message: "set a real secret in production" });
+    }
+    if (c.STORAGE_DRIVER === "s3" && !c.S3_BUCKET) {
+      ctx.addIssue({ code: "custom", path: ["S3_BUCKET"], message: "required when STORAGE_DRIVER is s3" });
     }
   });
 
@@ -49,5 +58,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
 }
 
 export function publicUrl(config: Config): string {
-  return config.PUBLIC_URL ?? `http://${config.HOST === "0.0.0.0" ? "localhost" : config.HOST}:${config.PORT}`;
+  return (
+    config.PUBLIC_URL ?? `http://${config.HOST === "0.0.0.0" ? "localhost" : config.HOST}:${config.PORT}`
+  );
 }

@@ -9,6 +9,7 @@ import { createApp } from "./app.ts";
 import { setPasswordCost } from "./accounts/index.ts";
 import { createSmtpMailer, deliverDueMail } from "./mail/index.ts";
 import { sweepOrphans } from "./storage/sweep-orphans.ts";
+import { startSchedule } from "../jobs/schedule.ts";
 import type { FileStorage } from "./storage/index.ts";
 
 export interface RunningServer {
@@ -17,17 +18,22 @@ export interface RunningServer {
   close(): Promise<void>;
 }
 
-const OUTBOX_INTERVAL_MS = 15_000;
-
 /** Connects, migrates, listens and starts the background senders; resolves once the port is open. */
-export async function startServer(config: Config, options: { clientDir?: string } = {}): Promise<RunningServer> {
+export async function startServer(
+  config: Config,
+  options: { clientDir?: string } = {},
+): Promise<RunningServer> {
   if (!config.DATABASE_URL) throw new Error("DATABASE_URL is required to start the server");
   configureLog(config.LOG_LEVEL);
   setPasswordCost(config.BCRYPT_COST);
   const sequelize = connectDatabase(config.DATABASE_URL);
   initModels(sequelize);
   await migrate(sequelize);
-  const sessionPool = new pg.Pool({ connectionString: config.DATABASE_URL, max: 5, connectionTimeoutMillis: 3_000 });
+  const sessionPool = new pg.Pool({
+    connectionString: config.DATABASE_URL,
+    max: 5,
+    connectionTimeoutMillis: 3_000,
+  });
   sessionPool.on("error", (err) => log.warn({ err }, "session pool error"));
   const app = createApp({ config, sessionPool, clientDir: options.clientDir });
   const swept = await sweepOrphans(app.locals.storage as FileStorage);
@@ -42,8 +48,9 @@ export async function startServer(config: Config, options: { clientDir?: string 
       log.warn({ err }, "outbox delivery round failed");
     }
   };
-  const outboxTimer = setInterval(sendMail, OUTBOX_INTERVAL_MS);
+  // Mail goes out right after the request that queued it; the schedule retries what failed.
   app.locals.kickOutbox = () => void sendMail();
+  const schedule = config.RUN_SCHEDULE ? startSchedule(config, { mailer }) : undefined;
 
   const server = await new Promise<Server>((resolve, reject) => {
     const s = app.listen(config.PORT, config.HOST, () => resolve(s));
@@ -57,7 +64,7 @@ export async function startServer(config: Config, options: { clientDir?: string 
     server,
     port,
     async close() {
-      clearInterval(outboxTimer);
+      await schedule?.stop();
       await new Promise<void>((resolve) => server.close(() => resolve()));
       mailer?.close();
       await sessionPool.end();

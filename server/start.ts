@@ -19,7 +19,12 @@ let catcher: SmtpCatcher | undefined;
 
 const base = loadConfig(env);
 if (!base.DATABASE_URL) {
-  postgres = await startEmbeddedPostgres({ root: path.join(root, ".pg"), port: base.PG_PORT, database: "clearbench", say });
+  postgres = await startEmbeddedPostgres({
+    root: path.join(root, ".pg"),
+    port: base.PG_PORT,
+    database: "clearbench",
+    say,
+  });
   env.DATABASE_URL = postgres.url;
   say(`PostgreSQL of the project's own: 127.0.0.1:${postgres.port}`);
 }
@@ -31,18 +36,28 @@ process.on("exit", stopPostgres);
 
 if (!base.SMTP_URL) {
   catcher = await startSmtpCatcher(async (m) => {
-    await CaughtMail.create({ fromAddress: m.from, toAddress: m.to, subject: m.subject, textBody: m.text, htmlBody: m.html });
+    await CaughtMail.create({
+      fromAddress: m.from,
+      toAddress: m.to,
+      subject: m.subject,
+      textBody: m.text,
+      htmlBody: m.html,
+    });
   }, base.SMTP_CATCHER_PORT);
   env.SMTP_URL = catcher.url;
   say(`Local mail catcher (development): ${catcher.url}; read caught mail at Admin > Outbox`);
 }
 
 const withoutOcr = ensureDebianTools(OCR_TOOLS, say);
-if (withoutOcr.length) say(`OCR is off (missing ${withoutOcr.join(", ")}): fields of images and scans are typed by hand.`);
+if (withoutOcr.length)
+  say(`OCR is off (missing ${withoutOcr.join(", ")}): fields of images and scans are typed by hand.`);
 
 if (!existsSync(path.join(root, "dist", "index.html"))) {
   say("Building the client (first run)...");
-  const built = spawnSync(path.join(root, "node_modules", ".bin", "vite"), ["build"], { cwd: root, stdio: "inherit" });
+  const built = spawnSync(path.join(root, "node_modules", ".bin", "vite"), ["build"], {
+    cwd: root,
+    stdio: "inherit",
+  });
   if (built.status !== 0) throw new Error("vite build failed");
 }
 

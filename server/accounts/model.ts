@@ -1,4 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from "sequelize";
 import type { Role } from "../../shared/accounts/schemas.ts";
 
 export class User extends Model<InferAttributes<User>, InferCreationAttributes<User>> {
@@ -14,7 +21,10 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare updatedAt: CreationOptional<Date>;
 }
 
-export class OneTimeToken extends Model<InferAttributes<OneTimeToken>, InferCreationAttributes<OneTimeToken>> {
+export class OneTimeToken extends Model<
+  InferAttributes<OneTimeToken>,
+  InferCreationAttributes<OneTimeToken>
+> {
   declare id: CreationOptional<number>;
   declare userId: number;
   declare purpose: "reset" | "invite";

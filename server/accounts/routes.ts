@@ -46,13 +46,17 @@ async function meOrThrow(userId: number) {
   return found.dto;
 }
 
-authRoutes.post("/sign-in", { allow: anyone, before: [signInRateLimit], body: signInSchema }, async (req, res, { body }) => {
-  req.body = body;
-  const user = await authenticate(req, res, () => undefined);
-  if (!user) throw new AppError("unauthenticated", "That e-mail and password do not match an account");
-  await logIn(req, user);
-  return meOrThrow(user.id);
-});
+authRoutes.post(
+  "/sign-in",
+  { allow: anyone, before: [signInRateLimit], body: signInSchema },
+  async (req, res, { body }) => {
+    req.body = body;
+    const user = await authenticate(req, res, () => undefined);
+    if (!user) throw new AppError("unauthenticated", "That e-mail and password do not match an account");
+    await logIn(req, user);
+    return meOrThrow(user.id);
+  },
+);
 
 authRoutes.post("/sign-out", { allow: anyone }, async (req, res) => {
   await new Promise<void>((resolve, reject) => req.logout((err) => (err ? reject(err) : resolve())));
@@ -69,11 +73,15 @@ authRoutes.post("/sign-up", { allow: anyone, body: signUpSchema }, async (req, r
   res.status(201).json(await meOrThrow(user.id));
 });
 
-authRoutes.post("/password-reset", { allow: anyone, body: requestPasswordResetSchema }, async (req, res, { body }) => {
-  await requestPasswordReset(body.email, linkBase(req));
-  kickOutbox(req.app.locals);
-  res.status(202).json({ message: "If that e-mail has an account, a reset link is on its way." });
-});
+authRoutes.post(
+  "/password-reset",
+  { allow: anyone, body: requestPasswordResetSchema },
+  async (req, res, { body }) => {
+    await requestPasswordReset(body.email, linkBase(req));
+    kickOutbox(req.app.locals);
+    res.status(202).json({ message: "If that e-mail has an account, a reset link is on its way." });
+  },
+);
 
 authRoutes.post("/set-password", { allow: anyone, body: setPasswordSchema }, async (_req, _res, { body }) => {
   await setPasswordWithToken(body);
@@ -81,8 +89,12 @@ authRoutes.post("/set-password", { allow: anyone, body: setPasswordSchema }, asy
 
 adminUserRoutes.get("/users", { allow: canManageUsers }, () => listUsers());
 adminUserRoutes.get("/companies", { allow: canManageUsers }, () => listCompanies());
-adminUserRoutes.post("/invitations", { allow: canManageUsers, body: inviteUserSchema }, async (req, res, { body }) => {
-  const invited = await inviteUser(req.user!, body, linkBase(req));
-  kickOutbox(req.app.locals);
-  res.status(201).json(invited);
-});
+adminUserRoutes.post(
+  "/invitations",
+  { allow: canManageUsers, body: inviteUserSchema },
+  async (req, res, { body }) => {
+    const invited = await inviteUser(req.user!, body, linkBase(req));
+    kickOutbox(req.app.locals);
+    res.status(201).json(invited);
+  },
+);

@@ -12,7 +12,9 @@ import { inviteMail, resetMail } from "./emails.ts";
 import { toCurrentUserDto } from "./dto.ts";
 
 const emailTaken = () =>
-  new AppError("conflict", "An account with this e-mail already exists", [{ path: "body.email", message: "already in use" }]);
+  new AppError("conflict", "An account with this e-mail already exists", [
+    { path: "body.email", message: "already in use" },
+  ]);
 
 export async function signUpCompany(input: SignUp) {
   const passwordHash = await hashPassword(input.password);
@@ -40,7 +42,16 @@ export async function signUpCompany(input: SignUp) {
         },
         { transaction },
       );
-      await recordAudit({ actorUserId: user.id, action: "company.signed_up", subjectType: "company", subjectId: company.id, after: { name: company.name, kind: company.kind } }, transaction);
+      await recordAudit(
+        {
+          actorUserId: user.id,
+          action: "company.signed_up",
+          subjectType: "company",
+          subjectId: company.id,
+          after: { name: company.name, kind: company.kind },
+        },
+        transaction,
+      );
       return user;
     });
   } catch (err) {
@@ -69,7 +80,10 @@ export async function requestPasswordReset(email: string, linkBase: string): Pro
   if (!user) return;
   await db().transaction(async (transaction) => {
     const token = await issueToken(user.id, "reset", transaction);
-    await enqueueMail(resetMail(user.email, user.name, `${linkBase}/set-password?token=${token}`), transaction);
+    await enqueueMail(
+      resetMail(user.email, user.name, `${linkBase}/set-password?token=${token}`),
+      transaction,
+    );
   });
 }
 
@@ -78,22 +92,32 @@ export async function setPasswordWithToken(input: SetPassword): Promise<void> {
   await db().transaction(async (transaction) => {
     const userId = await consumeToken(input.token, transaction);
     if (!userId) {
-      throw new AppError("invalid_input", "This link has expired or was already used", [{ path: "body.token", message: "expired or used" }]);
+      throw new AppError("invalid_input", "This link has expired or was already used", [
+        { path: "body.token", message: "expired or used" },
+      ]);
     }
     await User.update({ passwordHash }, { where: { id: userId }, transaction });
-    await recordAudit({ actorUserId: userId, action: "user.password_set", subjectType: "user", subjectId: userId }, transaction);
+    await recordAudit(
+      { actorUserId: userId, action: "user.password_set", subjectType: "user", subjectId: userId },
+      transaction,
+    );
   });
 }
 
 export async function inviteUser(actor: Express.User, input: InviteUser, linkBase: string) {
   const company = await Company.findByPk(input.companyId);
-  if (!company) throw new AppError("invalid_input", "No such company", [{ path: "body.companyId", message: "unknown company" }]);
+  if (!company)
+    throw new AppError("invalid_input", "No such company", [
+      { path: "body.companyId", message: "unknown company" },
+    ]);
   const fits =
     (company.kind === "service" && ["provider_admin", "technician"].includes(input.role)) ||
     (company.kind === "shop" && input.role === "buyer") ||
     (company.kind === "platform" && ["reviewer", "admin"].includes(input.role));
   if (!fits) {
-    throw new AppError("invalid_input", `A ${company.kind} company cannot have a ${input.role}`, [{ path: "body.role", message: "does not fit the company" }]);
+    throw new AppError("invalid_input", `A ${company.kind} company cannot have a ${input.role}`, [
+      { path: "body.role", message: "does not fit the company" },
+    ]);
   }
   return createInvitedUser(actor, company, input, linkBase);
 }
@@ -108,12 +132,31 @@ export async function createInvitedUser(
   try {
     return await db().transaction(async (transaction) => {
       const user = await User.create(
-        { companyId: company.id, email: input.email, name: input.name, role: input.role, passwordHash: null, technicianId: input.technicianId ?? null },
+        {
+          companyId: company.id,
+          email: input.email,
+          name: input.name,
+          role: input.role,
+          passwordHash: null,
+          technicianId: input.technicianId ?? null,
+        },
         { transaction },
       );
       const token = await issueToken(user.id, "invite", transaction);
-      await enqueueMail(inviteMail(user.email, user.name, company.name, `${linkBase}/set-password?token=${token}`), transaction);
-      await recordAudit({ actorUserId: actor.id, action: "user.invited", subjectType: "user", subjectId: user.id, after: { email: user.email, role: user.role, companyId: company.id } }, transaction);
+      await enqueueMail(
+        inviteMail(user.email, user.name, company.name, `${linkBase}/set-password?token=${token}`),
+        transaction,
+      );
+      await recordAudit(
+        {
+          actorUserId: actor.id,
+          action: "user.invited",
+          subjectType: "user",
+          subjectId: user.id,
+          after: { email: user.email, role: user.role, companyId: company.id },
+        },
+        transaction,
+      );
       return { id: user.id, email: user.email, name: user.name, role: user.role, companyId: company.id };
     });
   } catch (err) {
@@ -125,7 +168,16 @@ export async function createInvitedUser(
 export async function listUsers() {
   const [users, companies] = await Promise.all([User.findAll({ order: [["id", "ASC"]] }), Company.findAll()]);
   const names = new Map(companies.map((c) => [c.id, c.name]));
-  return users.map((u) => ({ id: u.id, email: u.email, name: u.name, role: u.role, companyId: u.companyId, companyName: names.get(u.companyId) ?? "", active: u.active, invited: u.passwordHash === null }));
+  return users.map((u) => ({
+    id: u.id,
+    email: u.email,
+    name: u.name,
+    role: u.role,
+    companyId: u.companyId,
+    companyName: names.get(u.companyId) ?? "",
+    active: u.active,
+    invited: u.passwordHash === null,
+  }));
 }
 
 export async function listCompanies() {

@@ -7,10 +7,17 @@ const INVITE_TTL_MS = 7 * 24 * 60 * 60_000; // a week to accept an invitation
 
 const digest = (token: string) => createHash("sha256").update(token).digest("hex");
 
-export async function issueToken(userId: number, purpose: "reset" | "invite", transaction?: Transaction): Promise<string> {
+export async function issueToken(
+  userId: number,
+  purpose: "reset" | "invite",
+  transaction?: Transaction,
+): Promise<string> {
   const token = randomBytes(32).toString("base64url");
   const ttl = purpose === "reset" ? RESET_TTL_MS : INVITE_TTL_MS;
-  await OneTimeToken.create({ userId, purpose, tokenHash: digest(token), expiresAt: new Date(Date.now() + ttl) }, { transaction });
+  await OneTimeToken.create(
+    { userId, purpose, tokenHash: digest(token), expiresAt: new Date(Date.now() + ttl) },
+    { transaction },
+  );
   return token;
 }
 

@@ -14,7 +14,10 @@ export interface AuditEntry {
 
 /** Writes one append-only audit event inside the caller's transaction. */
 export async function recordAudit(entry: AuditEntry, transaction?: Transaction): Promise<void> {
-  await AuditEvent.create({ ...entry, before: entry.before ?? null, after: entry.after ?? null }, { transaction });
+  await AuditEvent.create(
+    { ...entry, before: entry.before ?? null, after: entry.after ?? null },
+    { transaction },
+  );
 }
 
 export async function auditTrail(subjectType: string, subjectId: number) {

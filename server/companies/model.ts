@@ -1,4 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from "sequelize";
 import type { CompanyKind } from "../../shared/accounts/schemas.ts";
 
 export class Company extends Model<InferAttributes<Company>, InferCreationAttributes<Company>> {

@@ -3,7 +3,15 @@ import { AppError } from "../http/app-error.ts";
 import { CredentialType } from "./model.ts";
 
 export function toDefinition(t: CredentialType): CredentialTypeDefinition {
-  return { code: t.code, name: t.name, category: t.category, holder: t.holder, fieldSet: t.fieldSet, validity: t.validity, description: t.description };
+  return {
+    code: t.code,
+    name: t.name,
+    category: t.category,
+    holder: t.holder,
+    fieldSet: t.fieldSet,
+    validity: t.validity,
+    description: t.description,
+  };
 }
 
 /** The admin-edited catalogue as the shared engine takes it. */
@@ -14,12 +22,20 @@ export async function loadCatalogue(): Promise<Map<string, CredentialTypeDefinit
 
 export async function activeType(code: string, path = "body.typeCode"): Promise<CredentialType> {
   const type = await CredentialType.findByPk(code);
-  if (!type || !type.active) throw new AppError("invalid_input", "Unknown credential type", [{ path, message: "unknown or retired type" }]);
+  if (!type || !type.active)
+    throw new AppError("invalid_input", "Unknown credential type", [
+      { path, message: "unknown or retired type" },
+    ]);
   return type;
 }
 
 export async function listCredentialTypes() {
-  const rows = await CredentialType.findAll({ order: [["category", "ASC"], ["name", "ASC"]] });
+  const rows = await CredentialType.findAll({
+    order: [
+      ["category", "ASC"],
+      ["name", "ASC"],
+    ],
+  });
   return rows.map((r) => ({ ...toDefinition(r), active: r.active }));
 }
 
@@ -31,7 +47,9 @@ export async function editCredentialType(
   const type = await CredentialType.findByPk(code);
   if (!type) throw new AppError("not_found", "That credential type was not found");
   if (input.validityMonths !== undefined && type.validity.kind !== "months_from_issue") {
-    throw new AppError("invalid_input", "Only types valid for N months from issue take a number of months", [{ path: "body.validityMonths", message: "not a months-from-issue type" }]);
+    throw new AppError("invalid_input", "Only types valid for N months from issue take a number of months", [
+      { path: "body.validityMonths", message: "not a months-from-issue type" },
+    ]);
   }
   const { recordAudit } = await import("../audit/index.ts");
   const before = type.toJSON();
@@ -39,8 +57,18 @@ export async function editCredentialType(
     name: input.name ?? type.name,
     description: input.description ?? type.description,
     active: input.active ?? type.active,
-    validity: input.validityMonths !== undefined ? { kind: "months_from_issue", months: input.validityMonths } : type.validity,
+    validity:
+      input.validityMonths !== undefined
+        ? { kind: "months_from_issue", months: input.validityMonths }
+        : type.validity,
   });
-  await recordAudit({ actorUserId: actor.id, action: "credential_type.edited", subjectType: "credential_type", subjectId: 0, before, after: type.toJSON() });
+  await recordAudit({
+    actorUserId: actor.id,
+    action: "credential_type.edited",
+    subjectType: "credential_type",
+    subjectId: 0,
+    before,
+    after: type.toJSON(),
+  });
   return { ...toDefinition(type), active: type.active };
 }

@@ -1,7 +1,10 @@
 import type { MailDraft } from "../mail/outbox.ts";
 
 const escapeHtml = (s: string) =>
-  s.replace(/[&<>"']/g, (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" })[c] ?? c);
+  s.replace(
+    /[&<>"']/g,
+    (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" })[c] ?? c,
+  );
 
 export function verifiedMail(to: string, typeName: string, holderName: string, link: string): MailDraft {
   return {
@@ -12,7 +15,13 @@ export function verifiedMail(to: string, typeName: string, holderName: string, l
   };
 }
 
-export function returnedMail(to: string, typeName: string, holderName: string, reason: string, link: string): MailDraft {
+export function returnedMail(
+  to: string,
+  typeName: string,
+  holderName: string,
+  reason: string,
+  link: string,
+): MailDraft {
   return {
     to,
     subject: `Returned: ${typeName} for ${holderName}`,

@@ -13,7 +13,8 @@ import { Credential, CredentialType } from "./model.ts";
 import { toCredentialDto } from "./dto.ts";
 import { returnedMail, verifiedMail } from "./credential-emails.ts";
 
-const alreadyDecided = () => new AppError("conflict", "This credential was already decided (by another reviewer, or earlier)");
+const alreadyDecided = () =>
+  new AppError("conflict", "This credential was already decided (by another reviewer, or earlier)");
 
 async function lockSubmitted(id: number, transaction: Transaction) {
   const credential = await Credential.findByPk(id, { transaction, lock: transaction.LOCK.UPDATE });
@@ -24,7 +25,8 @@ async function lockSubmitted(id: number, transaction: Transaction) {
 }
 
 async function holderName(credential: Credential, transaction: Transaction) {
-  if (credential.technicianId) return (await Technician.findByPk(credential.technicianId, { transaction }))?.name ?? "a technician";
+  if (credential.technicianId)
+    return (await Technician.findByPk(credential.technicianId, { transaction }))?.name ?? "a technician";
   return (await Company.findByPk(credential.companyId, { transaction }))?.name ?? "the company";
 }
 
@@ -44,16 +46,38 @@ function supersedeScope(credential: Credential) {
   return where;
 }
 
-async function applyFieldEdit(reviewer: Express.User, credential: Credential, fields: Record<string, unknown>, transaction: Transaction) {
+async function applyFieldEdit(
+  reviewer: Express.User,
+  credential: Credential,
+  fields: Record<string, unknown>,
+  transaction: Transaction,
+) {
   const type = await CredentialType.findByPk(credential.typeCode, { transaction });
   const company = await Company.findByPk(credential.companyId, { transaction });
   const parsed = parseFields(type!.fieldSet, fields);
   const before = credential.fields;
-  await credential.update({ fields: parsed, lapsesAt: lapseInstantFor(toDefinition(type!), parsed, company!.timeZone) }, { transaction });
-  await recordAudit({ actorUserId: reviewer.id, action: "credential.fields_edited", subjectType: "credential", subjectId: credential.id, before, after: parsed }, transaction);
+  await credential.update(
+    { fields: parsed, lapsesAt: lapseInstantFor(toDefinition(type!), parsed, company!.timeZone) },
+    { transaction },
+  );
+  await recordAudit(
+    {
+      actorUserId: reviewer.id,
+      action: "credential.fields_edited",
+      subjectType: "credential",
+      subjectId: credential.id,
+      before,
+      after: parsed,
+    },
+    transaction,
+  );
 }
 
-export async function editCredentialFields(reviewer: Express.User, id: number, fields: Record<string, unknown>) {
+export async function editCredentialFields(
+  reviewer: Express.User,
+  id: number,
+  fields: Record<string, unknown>,
+) {
   const credential = await db().transaction(async (transaction) => {
     const row = await lockSubmitted(id, transaction);
     await applyFieldEdit(reviewer, row, fields, transaction);
@@ -63,24 +87,57 @@ export async function editCredentialFields(reviewer: Express.User, id: number, f
 }
 
 /** Verifies, supersedes the older one of the same kind, mails the uploader and refreshes standings: all or nothing. */
-export async function verifyCredential(reviewer: Express.User, id: number, input: { fields?: Record<string, unknown> }, linkBase: string) {
+export async function verifyCredential(
+  reviewer: Express.User,
+  id: number,
+  input: { fields?: Record<string, unknown> },
+  linkBase: string,
+) {
   const credential = await db().transaction(async (transaction) => {
     const row = await lockSubmitted(id, transaction);
     if (input.fields) await applyFieldEdit(reviewer, row, input.fields, transaction);
     await row.update({ state: "verified", decidedBy: reviewer.id, decidedAt: new Date() }, { transaction });
-    await recordAudit({ actorUserId: reviewer.id, action: "credential.verified", subjectType: "credential", subjectId: row.id, before: { state: "submitted" }, after: { state: "verified" } }, transaction);
-    const older = await Credential.findAll({ where: supersedeScope(row), transaction, lock: transaction.LOCK.UPDATE });
+    await recordAudit(
+      {
+        actorUserId: reviewer.id,
+        action: "credential.verified",
+        subjectType: "credential",
+        subjectId: row.id,
+        before: { state: "submitted" },
+        after: { state: "verified" },
+      },
+      transaction,
+    );
+    const older = await Credential.findAll({
+      where: supersedeScope(row),
+      transaction,
+      lock: transaction.LOCK.UPDATE,
+    });
     for (const old of older) {
       await old.update({ state: "superseded" }, { transaction });
-      await recordAudit({ actorUserId: reviewer.id, action: "credential.superseded", subjectType: "credential", subjectId: old.id, before: { state: "verified" }, after: { state: "superseded", by: row.id } }, transaction);
+      await recordAudit(
+        {
+          actorUserId: reviewer.id,
+          action: "credential.superseded",
+          subjectType: "credential",
+          subjectId: old.id,
+          before: { state: "verified" },
+          after: { state: "superseded", by: row.id },
+        },
+        transaction,
+      );
     }
     const [type, uploader, name] = await Promise.all([
       CredentialType.findByPk(row.typeCode, { transaction }),
       User.findByPk(row.submittedBy, { transaction }),
       holderName(row, transaction),
     ]);
-    if (uploader) await enqueueMail(verifiedMail(uploader.email, type!.name, name, `${linkBase}/documents`), transaction);
-    await refreshStandingsForHolder({ companyId: row.companyId, technicianId: row.technicianId }, transaction);
+    if (uploader)
+      await enqueueMail(verifiedMail(uploader.email, type!.name, name, `${linkBase}/documents`), transaction);
+    await refreshStandingsForHolder(
+      { companyId: row.companyId, technicianId: row.technicianId },
+      transaction,
+    );
     return row;
   });
   return toCredentialDto(credential);
@@ -89,16 +146,33 @@ export async function verifyCredential(reviewer: Express.User, id: number, input
 export async function returnCredential(reviewer: Express.User, id: number, reason: string, linkBase: string) {
   const credential = await db().transaction(async (transaction) => {
     const row = await lockSubmitted(id, transaction);
-    await row.update({ state: "returned", returnReason: reason, decidedBy: reviewer.id, decidedAt: new Date() }, { transaction });
-    await recordAudit({ actorUserId: reviewer.id, action: "credential.returned", subjectType: "credential", subjectId: row.id, before: { state: "submitted" }, after: { state: "returned", reason } }, transaction);
+    await row.update(
+      { state: "returned", returnReason: reason, decidedBy: reviewer.id, decidedAt: new Date() },
+      { transaction },
+    );
+    await recordAudit(
+      {
+        actorUserId: reviewer.id,
+        action: "credential.returned",
+        subjectType: "credential",
+        subjectId: row.id,
+        before: { state: "submitted" },
+        after: { state: "returned", reason },
+      },
+      transaction,
+    );
     const [type, uploader, name] = await Promise.all([
       CredentialType.findByPk(row.typeCode, { transaction }),
       User.findByPk(row.submittedBy, { transaction }),
       holderName(row, transaction),
     ]);
     const link = `${linkBase}/documents/new?type=${row.typeCode}${row.technicianId ? `&technicianId=${row.technicianId}` : ""}`;
-    if (uploader) await enqueueMail(returnedMail(uploader.email, type!.name, name, reason, link), transaction);
-    await refreshStandingsForHolder({ companyId: row.companyId, technicianId: row.technicianId }, transaction);
+    if (uploader)
+      await enqueueMail(returnedMail(uploader.email, type!.name, name, reason, link), transaction);
+    await refreshStandingsForHolder(
+      { companyId: row.companyId, technicianId: row.technicianId },
+      transaction,
+    );
     return row;
   });
   return toCredentialDto(credential);

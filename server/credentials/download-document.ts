@@ -26,13 +26,27 @@ function setFileHeaders(res: Response, mime: string, disposition: "inline" | "at
   res.setHeader("Content-Security-Policy", "default-src 'none'; sandbox");
   res.setHeader("Cache-Control", "private, no-store");
   const ascii = name.replace(/[^\x20-\x7e]/g, "_").replace(/["\\]/g, "_");
-  res.setHeader("Content-Disposition", `${disposition}; filename="${ascii}"; filename*=UTF-8''${encodeURIComponent(name)}`);
+  res.setHeader(
+    "Content-Disposition",
+    `${disposition}; filename="${ascii}"; filename*=UTF-8''${encodeURIComponent(name)}`,
+  );
 }
 
 /** Sends the stored file; only images may be shown inline (a PDF is previewed as rendered pages instead). */
-export async function sendDocumentFile(user: Express.User, id: number, inline: boolean, storage: FileStorage, res: Response) {
+export async function sendDocumentFile(
+  user: Express.User,
+  id: number,
+  inline: boolean,
+  storage: FileStorage,
+  res: Response,
+) {
   const document = await loadDocument(id);
-  await recordAudit({ actorUserId: user.id, action: "document.downloaded", subjectType: "document", subjectId: id });
+  await recordAudit({
+    actorUserId: user.id,
+    action: "document.downloaded",
+    subjectType: "document",
+    subjectId: id,
+  });
   const disposition = inline && document.mime.startsWith("image/") ? "inline" : "attachment";
   setFileHeaders(res, document.mime, disposition, document.originalName);
   const stream = await storage.open(document.sha256);
@@ -46,16 +60,32 @@ export async function sendDocumentFile(user: Express.User, id: number, inline: b
 /** A PNG of one page of a PDF, rendered by poppler's pdftoppm with a time limit: nothing of the PDF runs in the browser. */
 export async function sendPdfPage(id: number, page: number, storage: FileStorage, res: Response) {
   const document = await loadDocument(id);
-  if (document.mime !== "application/pdf" || page > MAX_PREVIEW_PAGES) throw new AppError("not_found", "No such page");
+  if (document.mime !== "application/pdf" || page > MAX_PREVIEW_PAGES)
+    throw new AppError("not_found", "No such page");
   const dir = await mkdtemp(path.join(tmpdir(), "clearbench-page-"));
   try {
     const chunks: Buffer[] = [];
     for await (const chunk of await storage.open(document.sha256)) chunks.push(chunk as Buffer);
     await writeFile(path.join(dir, "in.pdf"), Buffer.concat(chunks));
-    await run("pdftoppm", ["-png", "-r", "110", "-f", String(page), "-l", String(page), "-singlefile", path.join(dir, "in.pdf"), path.join(dir, "out")], {
-      timeout: PAGE_RENDER_TIMEOUT_MS,
-      killSignal: "SIGKILL",
-    }).catch(() => {
+    await run(
+      "pdftoppm",
+      [
+        "-png",
+        "-r",
+        "110",
+        "-f",
+        String(page),
+        "-l",
+        String(page),
+        "-singlefile",
+        path.join(dir, "in.pdf"),
+        path.join(dir, "out"),
+      ],
+      {
+        timeout: PAGE_RENDER_TIMEOUT_MS,
+        killSignal: "SIGKILL",
+      },
+    ).catch(() => {
       throw new AppError("not_found", "No such page");
     });
     const png = await readFile(path.join(dir, "out.png")).catch(() => {

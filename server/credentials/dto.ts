@@ -8,9 +8,18 @@ export async function toCredentialDtos(rows: Credential[]): Promise<CredentialDt
   if (rows.length === 0) return [];
   const [types, companies, technicians, documents] = await Promise.all([
     CredentialType.findAll({ where: { code: [...new Set(rows.map((r) => r.typeCode))] } }),
-    Company.findAll({ where: { id: [...new Set(rows.map((r) => r.companyId))] }, attributes: ["id", "name"] }),
-    Technician.findAll({ where: { id: [...new Set(rows.flatMap((r) => (r.technicianId ? [r.technicianId] : [])))] }, attributes: ["id", "name"] }),
-    Document.findAll({ where: { id: [...new Set(rows.map((r) => r.documentId))] }, attributes: ["id", "originalName", "mime"] }),
+    Company.findAll({
+      where: { id: [...new Set(rows.map((r) => r.companyId))] },
+      attributes: ["id", "name"],
+    }),
+    Technician.findAll({
+      where: { id: [...new Set(rows.flatMap((r) => (r.technicianId ? [r.technicianId] : [])))] },
+      attributes: ["id", "name"],
+    }),
+    Document.findAll({
+      where: { id: [...new Set(rows.map((r) => r.documentId))] },
+      attributes: ["id", "originalName", "mime"],
+    }),
   ]);
   const type = new Map(types.map((t) => [t.code, t]));
   const company = new Map(companies.map((c) => [c.id, c.name]));

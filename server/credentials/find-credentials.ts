@@ -11,7 +11,10 @@ import { Credential, CredentialType, Document } from "./model.ts";
 import { toCredentialDto, toCredentialDtos } from "./dto.ts";
 import { duplicateForOtherHolder } from "./upload-document.ts";
 
-export async function listOwnCredentials(user: Express.User, filter: { technicianId?: number; state?: string; holder?: "company" | "technician" }) {
+export async function listOwnCredentials(
+  user: Express.User,
+  filter: { technicianId?: number; state?: string; holder?: "company" | "technician" },
+) {
   const where: Record<string, unknown> = { companyId: user.companyId };
   if (user.role === "technician") where.technicianId = user.technicianId ?? -1;
   else if (filter.technicianId) where.technicianId = filter.technicianId;
@@ -21,7 +24,27 @@ export async function listOwnCredentials(user: Express.User, filter: { technicia
   return toCredentialDtos(rows);
 }
 
-const FIELDS_FOR_BUYERS = new Set(["insurerName", "naic", "policyNumber", "effectiveDate", "expirationDate", "limits", "additionalInsured", "waiverOfSubrogation", "statutory", "course", "issueDate", "expiryDate", "builder", "controlFamily", "level", "trainer", "licenseNumber", "issuingAuthority", "state"]);
+const FIELDS_FOR_BUYERS = new Set([
+  "insurerName",
+  "naic",
+  "policyNumber",
+  "effectiveDate",
+  "expirationDate",
+  "limits",
+  "additionalInsured",
+  "waiverOfSubrogation",
+  "statutory",
+  "course",
+  "issueDate",
+  "expiryDate",
+  "builder",
+  "controlFamily",
+  "level",
+  "trainer",
+  "licenseNumber",
+  "issuingAuthority",
+  "state",
+]);
 
 /** One credential with its audit trail; reviewers also get the warnings computed beside the fields. */
 export async function findCredential(user: Express.User, id: number) {
@@ -29,10 +52,19 @@ export async function findCredential(user: Express.User, id: number) {
   if (!row) throw new AppError("not_found", "That credential was not found");
   const dto = await toCredentialDto(row);
   if (user.role === "buyer") {
-    return { ...dto, fields: Object.fromEntries(Object.entries(dto.fields).filter(([k]) => FIELDS_FOR_BUYERS.has(k))), returnReason: null, audit: [], warnings: [] };
+    return {
+      ...dto,
+      fields: Object.fromEntries(Object.entries(dto.fields).filter(([k]) => FIELDS_FOR_BUYERS.has(k))),
+      returnReason: null,
+      audit: [],
+      warnings: [],
+    };
   }
   const events = await auditTrail("credential", id);
-  const actors = await User.findAll({ where: { id: [...new Set(events.flatMap((e) => (e.actorUserId ? [e.actorUserId] : [])))] }, attributes: ["id", "name"] });
+  const actors = await User.findAll({
+    where: { id: [...new Set(events.flatMap((e) => (e.actorUserId ? [e.actorUserId] : [])))] },
+    attributes: ["id", "name"],
+  });
   const actorName = new Map(actors.map((a) => [a.id, a.name]));
   let warnings: { code: string; message: string }[] = [];
   if (user.role === "reviewer" || user.role === "admin") {
@@ -47,12 +79,21 @@ export async function findCredential(user: Express.User, id: number) {
       fields: row.fields as never,
       companyLegalName: company?.name ?? "",
       technicianName: technician?.name,
-      duplicateOfOtherHolder: document ? await duplicateForOtherHolder(document.sha256, document.id, row.companyId, row.technicianId) : false,
+      duplicateOfOtherHolder: document
+        ? await duplicateForOtherHolder(document.sha256, document.id, row.companyId, row.technicianId)
+        : false,
     });
   }
   return {
     ...dto,
-    audit: events.map((e) => ({ id: e.id, action: e.action, actorName: e.actorUserId ? (actorName.get(e.actorUserId) ?? "") : "Clearbench", at: e.createdAt.toISOString(), before: e.before, after: e.after })),
+    audit: events.map((e) => ({
+      id: e.id,
+      action: e.action,
+      actorName: e.actorUserId ? (actorName.get(e.actorUserId) ?? "") : "Clearbench",
+      at: e.createdAt.toISOString(),
+      before: e.before,
+      after: e.after,
+    })),
     warnings,
   };
 }
@@ -83,12 +124,23 @@ export async function findQueue(q: QueueQuery, now = new Date()) {
     LEFT JOIN technicians tech ON tech.id = c.technician_id WHERE ${where.join(" AND ")}`;
   const order = `${SORT_SQL[q.sort]} ${q.dir === "desc" ? "DESC" : "ASC"}, c.id ASC`;
   const [rows, totals] = await Promise.all([
-    db().query<{ id: number; type_code: string; type_name: string; company_id: number; company_name: string; holder_name: string; submitted_at: Date }>(
+    db().query<{
+      id: number;
+      type_code: string;
+      type_name: string;
+      company_id: number;
+      company_name: string;
+      holder_name: string;
+      submitted_at: Date;
+    }>(
       `SELECT c.id, c.type_code, t.name AS type_name, c.company_id, co.name AS company_name,
         COALESCE(tech.name, co.name) AS holder_name, c.submitted_at ${from} ORDER BY ${order} LIMIT :limit OFFSET :offset`,
       { replacements, type: QueryTypes.SELECT },
     ),
-    db().query<{ total: number }>(`SELECT count(*)::int AS total ${from}`, { replacements, type: QueryTypes.SELECT }),
+    db().query<{ total: number }>(`SELECT count(*)::int AS total ${from}`, {
+      replacements,
+      type: QueryTypes.SELECT,
+    }),
   ]);
   return {
     rows: rows.map((r) => ({

@@ -1,9 +1,19 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from "sequelize";
 import type { CredentialValidity } from "../../shared/credentials/catalogue.ts";
 import type { FieldSet } from "../../shared/credentials/credential-fields.ts";
 import type { CredentialState } from "../../shared/credentials/schemas.ts";
 
-export class CredentialType extends Model<InferAttributes<CredentialType>, InferCreationAttributes<CredentialType>> {
+export class CredentialType extends Model<
+  InferAttributes<CredentialType>,
+  InferCreationAttributes<CredentialType>
+> {
   declare code: string;
   declare name: string;
   declare category: "insurance" | "safety" | "oem" | "license";

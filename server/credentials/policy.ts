@@ -41,9 +41,15 @@ export async function canReadDocument(user: SignedInUser, documentId: number): P
   if (!document) return false;
   if (user.role === "reviewer" || user.role === "admin") return true;
   if (user.role === "provider_admin") return document.companyId === user.companyId;
-  const credentials = await Credential.findAll({ where: { documentId }, attributes: ["state", "typeCode", "technicianId", "companyId"] });
+  const credentials = await Credential.findAll({
+    where: { documentId },
+    attributes: ["state", "typeCode", "technicianId", "companyId"],
+  });
   if (user.role === "technician") {
-    return document.uploadedBy === user.id || credentials.some((c) => c.technicianId !== null && c.technicianId === user.technicianId);
+    return (
+      document.uploadedBy === user.id ||
+      credentials.some((c) => c.technicianId !== null && c.technicianId === user.technicianId)
+    );
   }
   if (user.role === "buyer") {
     const { CredentialType } = await import("./model.ts");

@@ -43,32 +43,52 @@ credentialRoutes.patch(
   (req, _res, { params, body }) => editCredentialType(req.user!, params.code, body),
 );
 
-credentialRoutes.post("/documents", { allow: canUploadDocuments, before: [singleFileUpload], body: uploadDocumentSchema }, async (req, res, { body }) => {
-  res.status(201).json(await uploadDocument(req.user!, body, req.file, appStorage(req)));
-});
+credentialRoutes.post(
+  "/documents",
+  { allow: canUploadDocuments, before: [singleFileUpload], body: uploadDocumentSchema },
+  async (req, res, { body }) => {
+    res.status(201).json(await uploadDocument(req.user!, body, req.file, appStorage(req)));
+  },
+);
 
 credentialRoutes.get(
   "/documents/:documentId/file",
-  { allow: canDownloadDocument, params: documentParamsSchema, query: z.object({ inline: z.enum(["0", "1"]).optional() }) },
-  (req, res, { params, query }) => sendDocumentFile(req.user!, params.documentId, query.inline === "1", appStorage(req), res),
+  {
+    allow: canDownloadDocument,
+    params: documentParamsSchema,
+    query: z.object({ inline: z.enum(["0", "1"]).optional() }),
+  },
+  (req, res, { params, query }) =>
+    sendDocumentFile(req.user!, params.documentId, query.inline === "1", appStorage(req), res),
 );
 
 credentialRoutes.get(
   "/documents/:documentId/pages/:page",
-  { allow: canDownloadDocument, params: documentParamsSchema.extend({ page: z.coerce.number().int().min(1).max(10) }) },
+  {
+    allow: canDownloadDocument,
+    params: documentParamsSchema.extend({ page: z.coerce.number().int().min(1).max(10) }),
+  },
   (_req, res, { params }) => sendPdfPage(params.documentId, params.page, appStorage(_req), res),
 );
 
-credentialRoutes.post("/credentials", { allow: canUploadDocuments, body: submitCredentialSchema }, async (req, res, { body }) => {
-  res.status(201).json(await submitCredential(req.user!, body));
-});
-
-credentialRoutes.get("/credentials", { allow: canListOwnCredentials, query: listCredentialsQuerySchema }, (req, _res, { query }) =>
-  listOwnCredentials(req.user!, query),
+credentialRoutes.post(
+  "/credentials",
+  { allow: canUploadDocuments, body: submitCredentialSchema },
+  async (req, res, { body }) => {
+    res.status(201).json(await submitCredential(req.user!, body));
+  },
 );
 
-credentialRoutes.get("/credentials/:credentialId", { allow: canViewCredential, params: credentialParamsSchema }, (req, _res, { params }) =>
-  findCredential(req.user!, params.credentialId),
+credentialRoutes.get(
+  "/credentials",
+  { allow: canListOwnCredentials, query: listCredentialsQuerySchema },
+  (req, _res, { query }) => listOwnCredentials(req.user!, query),
+);
+
+credentialRoutes.get(
+  "/credentials/:credentialId",
+  { allow: canViewCredential, params: credentialParamsSchema },
+  (req, _res, { params }) => findCredential(req.user!, params.credentialId),
 );
 
 credentialRoutes.post(
@@ -97,4 +117,8 @@ credentialRoutes.patch(
   (req, _res, { params, body }) => editCredentialFields(req.user!, params.credentialId, body.fields),
 );
 
-credentialRoutes.get("/review/queue", { allow: canReviewCredentials, query: queueQuerySchema }, (_req, _res, { query }) => findQueue(query));
+credentialRoutes.get(
+  "/review/queue",
+  { allow: canReviewCredentials, query: queueQuerySchema },
+  (_req, _res, { query }) => findQueue(query),
+);

@@ -12,17 +12,25 @@ import { toCredentialDto } from "./dto.ts";
 /** Creates a credential awaiting verification from an uploaded document and the checked fields. */
 export async function submitCredential(user: Express.User, input: SubmitCredential) {
   const type = await activeType(input.typeCode);
-  const technicianId = user.role === "technician" ? (input.technicianId ?? user.technicianId ?? undefined) : input.technicianId;
+  const technicianId =
+    user.role === "technician" ? (input.technicianId ?? user.technicianId ?? undefined) : input.technicianId;
   if (type.holder === "technician" && technicianId === undefined) {
-    throw new AppError("invalid_input", "Choose the technician this card belongs to", [{ path: "body.technicianId", message: "required for this type" }]);
+    throw new AppError("invalid_input", "Choose the technician this card belongs to", [
+      { path: "body.technicianId", message: "required for this type" },
+    ]);
   }
   if (type.holder === "company" && technicianId !== undefined) {
-    throw new AppError("invalid_input", "This type is held by the company, not a technician", [{ path: "body.technicianId", message: "must be empty for this type" }]);
+    throw new AppError("invalid_input", "This type is held by the company, not a technician", [
+      { path: "body.technicianId", message: "must be empty for this type" },
+    ]);
   }
-  if (!(await canSubmitFor(user, technicianId))) throw new AppError("not_found", "That technician was not found");
+  if (!(await canSubmitFor(user, technicianId)))
+    throw new AppError("not_found", "That technician was not found");
   const document = await Document.findByPk(input.documentId);
   if (!document || document.companyId !== user.companyId) {
-    throw new AppError("invalid_input", "Upload the document first", [{ path: "body.documentId", message: "unknown document" }]);
+    throw new AppError("invalid_input", "Upload the document first", [
+      { path: "body.documentId", message: "unknown document" },
+    ]);
   }
   const fields = parseFields(type.fieldSet, input.fields);
   const company = await Company.findByPk(user.companyId);
@@ -30,10 +38,27 @@ export async function submitCredential(user: Express.User, input: SubmitCredenti
 
   const credential = await db().transaction(async (transaction) => {
     const row = await Credential.create(
-      { typeCode: type.code, companyId: user.companyId, technicianId: technicianId ?? null, documentId: document.id, fields, submittedBy: user.id, lapsesAt },
+      {
+        typeCode: type.code,
+        companyId: user.companyId,
+        technicianId: technicianId ?? null,
+        documentId: document.id,
+        fields,
+        submittedBy: user.id,
+        lapsesAt,
+      },
       { transaction },
     );
-    await recordAudit({ actorUserId: user.id, action: "credential.submitted", subjectType: "credential", subjectId: row.id, after: { state: "submitted", fields } }, transaction);
+    await recordAudit(
+      {
+        actorUserId: user.id,
+        action: "credential.submitted",
+        subjectType: "credential",
+        subjectId: row.id,
+        after: { state: "submitted", fields },
+      },
+      transaction,
+    );
     return row;
   });
   return toCredentialDto(credential);

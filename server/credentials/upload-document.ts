@@ -39,19 +39,33 @@ export interface UploadedFile {
 
 /** Keeps a display name safe to store and to echo in a header: no folders, no control characters, bounded. */
 export function safeFileName(name: string): string {
-  const base = path.basename(name.replace(/\\/g, "/")).replace(/[\u0000-\u001f\u007f"<>|:*?]/g, "_").trim();
-  return Array.from(base || "document").slice(0, 120).join("");
+  const base = path
+    .basename(name.replace(/\\/g, "/"))
+    // eslint-disable-next-line no-control-regex -- control characters are exactly what is removed here
+    .replace(/[\u0000-\u001f\u007f"<>|:*?]/g, "_")
+    .trim();
+  return Array.from(base || "document")
+    .slice(0, 120)
+    .join("");
 }
 
 export async function sniffUpload(bytes: Buffer, originalName: string): Promise<ExtractableMime> {
   const detected = await fileTypeFromBuffer(bytes);
   const mime = detected?.mime as ExtractableMime | undefined;
   if (!mime || !(mime in EXTENSIONS)) {
-    throw new AppError("unsupported_type", "Only PDF, PNG or JPEG files are accepted (checked from the file's content)", [{ path: "file", message: "not a PDF, PNG or JPEG" }]);
+    throw new AppError(
+      "unsupported_type",
+      "Only PDF, PNG or JPEG files are accepted (checked from the file's content)",
+      [{ path: "file", message: "not a PDF, PNG or JPEG" }],
+    );
   }
   const ext = path.extname(originalName).toLowerCase();
   if (!EXTENSIONS[mime].includes(ext)) {
-    throw new AppError("unsupported_type", `The file's name says ${ext || "no type"} but its content is ${mime}; rename or re-export it`, [{ path: "file", message: "extension does not match content" }]);
+    throw new AppError(
+      "unsupported_type",
+      `The file's name says ${ext || "no type"} but its content is ${mime}; rename or re-export it`,
+      [{ path: "file", message: "extension does not match content" }],
+    );
   }
   return mime;
 }
@@ -60,20 +74,35 @@ export async function sniffUpload(bytes: Buffer, originalName: string): Promise<
  * Stores an uploaded file and proposes fields read from it. The database row commits first; only then
  * is the temporary file renamed into place, and any failure removes both, so nothing is half-saved.
  */
-export async function uploadDocument(user: Express.User, input: UploadDocument, file: UploadedFile | undefined, storage: FileStorage) {
+export async function uploadDocument(
+  user: Express.User,
+  input: UploadDocument,
+  file: UploadedFile | undefined,
+  storage: FileStorage,
+) {
   let pending = file?.path;
   try {
-    if (!file) throw new AppError("invalid_input", "Choose a file to upload", [{ path: "file", message: "required" }]);
+    if (!file)
+      throw new AppError("invalid_input", "Choose a file to upload", [{ path: "file", message: "required" }]);
     const type = await activeType(input.typeCode);
-    const technicianId = user.role === "technician" ? (input.technicianId ?? user.technicianId ?? undefined) : input.technicianId;
+    const technicianId =
+      user.role === "technician"
+        ? (input.technicianId ?? user.technicianId ?? undefined)
+        : input.technicianId;
     if (type.holder === "technician" && technicianId === undefined) {
-      throw new AppError("invalid_input", "Choose the technician this card belongs to", [{ path: "body.technicianId", message: "required for this type" }]);
+      throw new AppError("invalid_input", "Choose the technician this card belongs to", [
+        { path: "body.technicianId", message: "required for this type" },
+      ]);
     }
     if (type.holder === "company" && technicianId !== undefined) {
-      throw new AppError("invalid_input", "This type is held by the company, not a technician", [{ path: "body.technicianId", message: "must be empty for this type" }]);
+      throw new AppError("invalid_input", "This type is held by the company, not a technician", [
+        { path: "body.technicianId", message: "must be empty for this type" },
+      ]);
     }
-    if (!(await canSubmitFor(user, technicianId))) throw new AppError("not_found", "That technician was not found");
-    if (file.size === 0) throw new AppError("invalid_input", "The file is empty", [{ path: "file", message: "0 bytes" }]);
+    if (!(await canSubmitFor(user, technicianId)))
+      throw new AppError("not_found", "That technician was not found");
+    if (file.size === 0)
+      throw new AppError("invalid_input", "The file is empty", [{ path: "file", message: "0 bytes" }]);
 
     const bytes = await readFile(file.path);
     const mime = await sniffUpload(bytes, file.originalname);
@@ -82,19 +111,43 @@ export async function uploadDocument(user: Express.User, input: UploadDocument, 
     const ready = path.join(storage.incomingDir, `${sha256}.${randomUUID()}${READY_SUFFIX}`);
     await rename(file.path, ready);
     pending = ready;
-    const extraction = await extractDocument({ bytes: new Uint8Array(bytes), mime, credentialType: { code: type.code, fieldSet: type.fieldSet } }).catch((err: unknown) => {
+    const extraction = await extractDocument({
+      bytes: new Uint8Array(bytes),
+      mime,
+      credentialType: { code: type.code, fieldSet: type.fieldSet },
+    }).catch((err: unknown) => {
       if (err instanceof DocumentUnreadableError) {
-        throw new AppError("invalid_input", UNREADABLE[err.reason] ?? "The file cannot be read", [{ path: "file", message: err.reason }]);
+        throw new AppError("invalid_input", UNREADABLE[err.reason] ?? "The file cannot be read", [
+          { path: "file", message: err.reason },
+        ]);
       }
       throw err;
     });
 
     const document = await db().transaction(async (transaction) => {
       const row = await Document.create(
-        { companyId: user.companyId, uploadedBy: user.id, sha256, sizeBytes: file.size, mime, originalName: safeFileName(file.originalname), extractedText: extraction.text.slice(0, 100_000), extractionMethod: extraction.method },
+        {
+          companyId: user.companyId,
+          uploadedBy: user.id,
+          sha256,
+          sizeBytes: file.size,
+          mime,
+          originalName: safeFileName(file.originalname),
+          extractedText: extraction.text.slice(0, 100_000),
+          extractionMethod: extraction.method,
+        },
         { transaction },
       );
-      await recordAudit({ actorUserId: user.id, action: "document.uploaded", subjectType: "document", subjectId: row.id, after: { sha256, mime, sizeBytes: file.size } }, transaction);
+      await recordAudit(
+        {
+          actorUserId: user.id,
+          action: "document.uploaded",
+          subjectType: "document",
+          subjectId: row.id,
+          after: { sha256, mime, sizeBytes: file.size },
+        },
+        transaction,
+      );
       return row;
     });
     try {
@@ -112,8 +165,19 @@ export async function uploadDocument(user: Express.User, input: UploadDocument, 
     const fields = extraction.proposal?.fields ?? {};
     return {
       document: { id: document.id, name: document.originalName, mime, sizeBytes: file.size, sha256 },
-      extraction: { method: extraction.method, ocrAvailable: extraction.ocrAvailable, fields, found: extraction.proposal?.found ?? [] },
-      warnings: reviewerWarnings({ fieldSet: type.fieldSet, fields: fields as never, companyLegalName: company?.name ?? "", technicianName: technician?.name, duplicateOfOtherHolder: otherHolder }),
+      extraction: {
+        method: extraction.method,
+        ocrAvailable: extraction.ocrAvailable,
+        fields,
+        found: extraction.proposal?.found ?? [],
+      },
+      warnings: reviewerWarnings({
+        fieldSet: type.fieldSet,
+        fields: fields as never,
+        companyLegalName: company?.name ?? "",
+        technicianName: technician?.name,
+        duplicateOfOtherHolder: otherHolder,
+      }),
     };
   } finally {
     if (pending) await rm(pending, { force: true });
@@ -121,10 +185,18 @@ export async function uploadDocument(user: Express.User, input: UploadDocument, 
 }
 
 /** The same bytes already sit on a credential of a different holder (a copied card or certificate). */
-export async function duplicateForOtherHolder(sha256: string, documentId: number, companyId: number, technicianId: number | null): Promise<boolean> {
+export async function duplicateForOtherHolder(
+  sha256: string,
+  documentId: number,
+  companyId: number,
+  technicianId: number | null,
+): Promise<boolean> {
   const others = await Document.findAll({ where: { sha256 }, attributes: ["id"] });
   const ids = others.map((d) => d.id).filter((id) => id !== documentId);
   if (ids.length === 0) return false;
-  const credentials = await Credential.findAll({ where: { documentId: ids }, attributes: ["companyId", "technicianId"] });
+  const credentials = await Credential.findAll({
+    where: { documentId: ids },
+    attributes: ["companyId", "technicianId"],
+  });
   return credentials.some((c) => c.companyId !== companyId || c.technicianId !== technicianId);
 }

@@ -10,9 +10,13 @@ const databaseUrl = config.DATABASE_URL ?? `postgres://postgres@127.0.0.1:${conf
 const say = (line: string) => process.stdout.write(`${line}\n`);
 
 if (command === "backup") {
-  const folder = path.resolve(folderArg ?? path.join(".backups", new Date().toISOString().replace(/[:.]/g, "-")));
+  const folder = path.resolve(
+    folderArg ?? path.join(".backups", new Date().toISOString().replace(/[:.]/g, "-")),
+  );
   const manifest = await backup(databaseUrl, config.UPLOADS_DIR, folder);
-  say(`Backup written to ${folder}: ${Object.values(manifest.tables).reduce((a, b) => a + b, 0)} rows, ${Object.keys(manifest.files).length} files.`);
+  say(
+    `Backup written to ${folder}: ${Object.values(manifest.tables).reduce((a, b) => a + b, 0)} rows, ${Object.keys(manifest.files).length} files.`,
+  );
 } else if (command === "restore" && folderArg) {
   const result = await restore(databaseUrl, config.UPLOADS_DIR, path.resolve(folderArg));
   if (!result.ok) {

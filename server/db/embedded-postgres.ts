@@ -30,11 +30,16 @@ export function ensurePostgresInstalled(say: (line: string) => void): string {
   let bin = findBinDir();
   if (bin) return bin;
   if (!isRoot()) {
-    throw new Error("PostgreSQL is not installed. Install Debian's package (sudo apt-get install -y postgresql) or set DATABASE_URL.");
+    throw new Error(
+      "PostgreSQL is not installed. Install Debian's package (sudo apt-get install -y postgresql) or set DATABASE_URL.",
+    );
   }
   say("PostgreSQL not found: installing Debian's postgresql package (one time)...");
   execFileSync("apt-get", ["update", "-qq"], { stdio: "inherit" });
-  execFileSync("apt-get", ["install", "-y", "-qq", "postgresql"], { stdio: "inherit", env: { ...process.env, DEBIAN_FRONTEND: "noninteractive" } });
+  execFileSync("apt-get", ["install", "-y", "-qq", "postgresql"], {
+    stdio: "inherit",
+    env: { ...process.env, DEBIAN_FRONTEND: "noninteractive" },
+  });
   bin = findBinDir();
   if (!bin) throw new Error("PostgreSQL installation did not provide initdb");
   return bin;
@@ -62,22 +67,46 @@ export interface StartOptions {
   throwAway?: boolean;
 }
 
-export async function startEmbeddedPostgres({ root, port, database, say = () => undefined, throwAway = false }: StartOptions): Promise<EmbeddedPostgres> {
+export async function startEmbeddedPostgres({
+  root,
+  port,
+  database,
+  say = () => undefined,
+  throwAway = false,
+}: StartOptions): Promise<EmbeddedPostgres> {
   const bin = ensurePostgresInstalled(say);
   mkdirSync(root, { recursive: true });
   chmodSync(root, 0o755);
   if (!reachableByPostgres(root)) {
-    throw new Error(`The postgres user cannot reach ${root}; a parent folder is private. Clone into a folder others can traverse, or set DATABASE_URL.`);
+    throw new Error(
+      `The postgres user cannot reach ${root}; a parent folder is private. Clone into a folder others can traverse, or set DATABASE_URL.`,
+    );
   }
   const dataDir = path.join(root, "data");
   if (isRoot()) execFileSync("chown", ["postgres:postgres", root]);
   if (!existsSync(path.join(dataDir, "PG_VERSION"))) {
     say(`Creating a PostgreSQL cluster in ${dataDir}...`);
-    runAsOwner(path.join(bin, "initdb"), ["-D", dataDir, "-U", "postgres", "--auth=trust", "--encoding=UTF8", "--locale=C.UTF-8", "--no-sync"]);
+    runAsOwner(path.join(bin, "initdb"), [
+      "-D",
+      dataDir,
+      "-U",
+      "postgres",
+      "--auth=trust",
+      "--encoding=UTF8",
+      "--locale=C.UTF-8",
+      "--no-sync",
+    ]);
   }
   runAsOwner(path.join(bin, "pg_ctl"), [
-    "-D", dataDir, "-l", path.join(root, "server.log"), "-w", "-t", "60",
-    "-o", `-c listen_addresses=127.0.0.1 -p ${port} -k ${root} -c max_connections=200${throwAway ? " -c fsync=off -c synchronous_commit=off -c full_page_writes=off" : ""}`,
+    "-D",
+    dataDir,
+    "-l",
+    path.join(root, "server.log"),
+    "-w",
+    "-t",
+    "60",
+    "-o",
+    `-c listen_addresses=127.0.0.1 -p ${port} -k ${root} -c max_connections=200${throwAway ? " -c fsync=off -c synchronous_commit=off -c full_page_writes=off" : ""}`,
     "start",
   ]);
   const stop = () => {

@@ -3,7 +3,9 @@ import { createRequire } from "node:module";
 // Offline US ZIP centroids (zipcodes, BSD) and ZIP -> IANA zone (zipcode-to-timezone): no network geocoder.
 const require = createRequire(import.meta.url);
 const zipcodes = require("zipcodes") as {
-  lookup(zip: string): { zip: string; latitude: number; longitude: number; city: string; state: string } | undefined;
+  lookup(
+    zip: string,
+  ): { zip: string; latitude: number; longitude: number; city: string; state: string } | undefined;
 };
 const zipZones = require("zipcode-to-timezone") as { lookup(zip: string): string | null | undefined };
 

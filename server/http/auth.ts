@@ -33,7 +33,12 @@ export function sessionMiddleware(config: Config, pool: pg.Pool): RequestHandler
   return session({
     name: SESSION_COOKIE,
     secret: config.SESSION_SECRET,
-    store: new PgStore({ pool, tableName: "session", createTableIfMissing: false, pruneSessionInterval: 15 * 60 }),
+    store: new PgStore({
+      pool,
+      tableName: "session",
+      createTableIfMissing: false,
+      pruneSessionInterval: 15 * 60,
+    }),
     resave: false,
     saveUninitialized: false,
     rolling: true,

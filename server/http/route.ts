@@ -83,7 +83,11 @@ export function createRoutes(prefix: string) {
         query: parsePart(options.query, req.query, "query"),
         body: parsePart(options.body, req.body, "body"),
       } as RouteInput<P, Q, B>;
-      if (options.allow.owns && user && !(await options.allow.owns(user, input.params as Record<string, unknown>))) {
+      if (
+        options.allow.owns &&
+        user &&
+        !(await options.allow.owns(user, input.params as Record<string, unknown>))
+      ) {
         throw new AppError("not_found", "That record was not found");
       }
       const result = await handler(req, res, input);

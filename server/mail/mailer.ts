@@ -22,7 +22,9 @@ export function createSmtpMailer(smtpUrl: string): Mailer {
     port: Number(url.port || (secure ? 465 : 587)),
     secure,
     ignoreTLS: !secure && (url.hostname === "127.0.0.1" || url.hostname === "localhost"),
-    auth: url.username ? { user: decodeURIComponent(url.username), pass: decodeURIComponent(url.password) } : undefined,
+    auth: url.username
+      ? { user: decodeURIComponent(url.username), pass: decodeURIComponent(url.password) }
+      : undefined,
     connectionTimeout: 5_000,
     greetingTimeout: 5_000,
     socketTimeout: 10_000,

@@ -1,6 +1,16 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from "sequelize";
 
-export class OutboxMessage extends Model<InferAttributes<OutboxMessage>, InferCreationAttributes<OutboxMessage>> {
+export class OutboxMessage extends Model<
+  InferAttributes<OutboxMessage>,
+  InferCreationAttributes<OutboxMessage>
+> {
   declare id: CreationOptional<number>;
   declare toAddress: string;
   declare subject: string;

@@ -37,7 +37,12 @@ export interface DeliveryReport {
  * Sends every due message. Rows are claimed with SKIP LOCKED so two server instances never send the
  * same row; a failure keeps the row with a later attempt time, so nothing is lost while SMTP is down.
  */
-export async function deliverDueMail(mailer: Mailer, from: string, now = new Date(), batch = 50): Promise<DeliveryReport> {
+export async function deliverDueMail(
+  mailer: Mailer,
+  from: string,
+  now = new Date(),
+  batch = 50,
+): Promise<DeliveryReport> {
   const report: DeliveryReport = { sent: 0, retried: 0, failed: 0 };
   await db().transaction(async (transaction) => {
     const due = await OutboxMessage.findAll({
@@ -50,8 +55,17 @@ export async function deliverDueMail(mailer: Mailer, from: string, now = new Dat
     });
     for (const message of due) {
       try {
-        await mailer.send({ from, to: message.toAddress, subject: message.subject, text: message.textBody, html: message.htmlBody });
-        await message.update({ status: "sent", sentAt: new Date(), attempts: message.attempts + 1, lastError: null }, { transaction });
+        await mailer.send({
+          from,
+          to: message.toAddress,
+          subject: message.subject,
+          text: message.textBody,
+          html: message.htmlBody,
+        });
+        await message.update(
+          { status: "sent", sentAt: new Date(), attempts: message.attempts + 1, lastError: null },
+          { transaction },
+        );
         report.sent += 1;
       } catch (err) {
         const attempts = message.attempts + 1;

@@ -8,5 +8,12 @@ const canReadOutbox = requireRole("admin");
 
 outboxRoutes.get("/outbox", { allow: canReadOutbox }, async () => {
   const mails = await CaughtMail.findAll({ order: [["id", "DESC"]], limit: 200 });
-  return mails.map((m) => ({ id: m.id, from: m.fromAddress, to: m.toAddress, subject: m.subject, text: m.textBody, receivedAt: m.receivedAt.toISOString() }));
+  return mails.map((m) => ({
+    id: m.id,
+    from: m.fromAddress,
+    to: m.toAddress,
+    subject: m.subject,
+    text: m.textBody,
+    receivedAt: m.receivedAt.toISOString(),
+  }));
 });

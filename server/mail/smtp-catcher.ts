@@ -43,7 +43,10 @@ export async function startSmtpCatcher(
             html: typeof parsed.html === "string" ? parsed.html : null,
           }),
         )
-        .then(() => callback(), (err: Error) => callback(err));
+        .then(
+          () => callback(),
+          (err: Error) => callback(err),
+        );
     },
   });
   await new Promise<void>((resolve, reject) => {

@@ -11,7 +11,10 @@ const ABANDONED_AFTER_MS = 10 * 60_000;
 /** Deletes a document row nothing refers to; a foreign key from any other table (a message attachment) keeps it. */
 async function deleteUnusedDocument(id: number): Promise<boolean> {
   try {
-    await db().query("DELETE FROM documents d WHERE d.id = :id AND NOT EXISTS (SELECT 1 FROM credentials c WHERE c.document_id = d.id)", { replacements: { id } });
+    await db().query(
+      "DELETE FROM documents d WHERE d.id = :id AND NOT EXISTS (SELECT 1 FROM credentials c WHERE c.document_id = d.id)",
+      { replacements: { id } },
+    );
     return true;
   } catch (err) {
     if ((err as { parent?: { code?: string } }).parent?.code === "23503") return false;

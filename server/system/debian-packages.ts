@@ -11,7 +11,10 @@ const has = (command: string) => spawnSync("sh", ["-c", `command -v ${command}`]
  * Installs Debian packages whose commands are missing (as root only). Returns the packages still
  * missing, so callers can explain what will not work rather than fail later.
  */
-export function ensureDebianTools(tools: DebianTool[], say: (line: string) => void = () => undefined): string[] {
+export function ensureDebianTools(
+  tools: DebianTool[],
+  say: (line: string) => void = () => undefined,
+): string[] {
   const missing = tools.filter((t) => !has(t.command));
   if (missing.length === 0) return [];
   if (process.getuid?.() !== 0) return missing.map((t) => t.pkg);
@@ -19,7 +22,10 @@ export function ensureDebianTools(tools: DebianTool[], say: (line: string) => vo
   say(`Installing Debian packages: ${pkgs.join(", ")} (one time)...`);
   try {
     execFileSync("apt-get", ["update", "-qq"], { stdio: "inherit" });
-    execFileSync("apt-get", ["install", "-y", "-qq", ...pkgs], { stdio: "inherit", env: { ...process.env, DEBIAN_FRONTEND: "noninteractive" } });
+    execFileSync("apt-get", ["install", "-y", "-qq", ...pkgs], {
+      stdio: "inherit",
+      env: { ...process.env, DEBIAN_FRONTEND: "noninteractive" },
+    });
   } catch {
     say(`Could not install ${pkgs.join(", ")}; continuing without them.`);
   }

@@ -16,8 +16,10 @@ export async function isTechnicianManagedBy(user: SignedInUser, technicianId: un
 export const canListOwnTechnicians = requireRole("provider_admin");
 export const canManageTechnicians = requireRole("provider_admin");
 
-export const canEditTechnician = requireOwnership(requireRole("provider_admin"), "of the same company", (user, params) =>
-  isTechnicianManagedBy(user, params.technicianId),
+export const canEditTechnician = requireOwnership(
+  requireRole("provider_admin"),
+  "of the same company",
+  (user, params) => isTechnicianManagedBy(user, params.technicianId),
 );
 
 export const canViewTechnician = requireOwnership(

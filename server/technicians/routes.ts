@@ -7,19 +7,38 @@ import { AppError } from "../http/app-error.ts";
 import { kickOutbox } from "../mail/outbox.ts";
 import { createInvitedUser } from "../accounts/index.ts";
 import { Company } from "../companies/model.ts";
-import { canEditTechnician, canListOwnTechnicians, canManageTechnicians, canViewTechnician } from "./policy.ts";
-import { addTechnician, editTechnician, findTechnician, listCompanyTechnicians, setTechnicianActive } from "./service.ts";
+import {
+  canEditTechnician,
+  canListOwnTechnicians,
+  canManageTechnicians,
+  canViewTechnician,
+} from "./policy.ts";
+import {
+  addTechnician,
+  editTechnician,
+  findTechnician,
+  listCompanyTechnicians,
+  setTechnicianActive,
+} from "./service.ts";
 
 export const technicianRoutes = createRoutes("/api/technicians");
 
-technicianRoutes.get("", { allow: canListOwnTechnicians }, (req) => listCompanyTechnicians(req.user!.companyId));
+technicianRoutes.get("", { allow: canListOwnTechnicians }, (req) =>
+  listCompanyTechnicians(req.user!.companyId),
+);
 
-technicianRoutes.post("", { allow: canManageTechnicians, body: technicianInputSchema }, async (req, res, { body }) => {
-  res.status(201).json(await addTechnician(req.user!, body));
-});
+technicianRoutes.post(
+  "",
+  { allow: canManageTechnicians, body: technicianInputSchema },
+  async (req, res, { body }) => {
+    res.status(201).json(await addTechnician(req.user!, body));
+  },
+);
 
-technicianRoutes.get("/:technicianId", { allow: canViewTechnician, params: technicianParamsSchema }, (_req, _res, { params }) =>
-  findTechnician(params.technicianId),
+technicianRoutes.get(
+  "/:technicianId",
+  { allow: canViewTechnician, params: technicianParamsSchema },
+  (_req, _res, { params }) => findTechnician(params.technicianId),
 );
 
 technicianRoutes.put(
@@ -48,7 +67,12 @@ technicianRoutes.post(
     const technician = await findTechnician(params.technicianId);
     if (technician.hasAccount) throw new AppError("conflict", "This technician already has a sign-in");
     const company = await Company.findByPk(req.user!.companyId);
-    const user = await createInvitedUser(req.user!, company!, { email: body.email, name: technician.name, role: "technician", technicianId: technician.id }, linkBase(req));
+    const user = await createInvitedUser(
+      req.user!,
+      company!,
+      { email: body.email, name: technician.name, role: "technician", technicianId: technician.id },
+      linkBase(req),
+    );
     kickOutbox(req.app.locals);
     res.status(201).json(user);
   },

@@ -13,7 +13,10 @@ export const DEFAULT_MILEAGE_RATE_CENTS = 73;
 
 function placeOf(postalCode: string) {
   const place = lookupPostalCode(postalCode);
-  if (!place) throw new AppError("invalid_input", "Unknown ZIP code", [{ path: "body.postalCode", message: "not a known US ZIP code" }]);
+  if (!place)
+    throw new AppError("invalid_input", "Unknown ZIP code", [
+      { path: "body.postalCode", message: "not a known US ZIP code" },
+    ]);
   return place;
 }
 
@@ -62,7 +65,16 @@ export async function addTechnician(actor: Express.User, input: TechnicianInput)
       },
       { transaction },
     );
-    await recordAudit({ actorUserId: actor.id, action: "technician.added", subjectType: "technician", subjectId: t.id, after: t.toJSON() }, transaction);
+    await recordAudit(
+      {
+        actorUserId: actor.id,
+        action: "technician.added",
+        subjectType: "technician",
+        subjectId: t.id,
+        after: t.toJSON(),
+      },
+      transaction,
+    );
     return t;
   });
   return toDto(technician);
@@ -91,7 +103,17 @@ export async function editTechnician(actor: Express.User, id: number, input: Tec
       },
       { transaction },
     );
-    await recordAudit({ actorUserId: actor.id, action: "technician.edited", subjectType: "technician", subjectId: t.id, before, after: t.toJSON() }, transaction);
+    await recordAudit(
+      {
+        actorUserId: actor.id,
+        action: "technician.edited",
+        subjectType: "technician",
+        subjectId: t.id,
+        before,
+        after: t.toJSON(),
+      },
+      transaction,
+    );
     return t;
   });
   return toDto(technician);
@@ -104,7 +126,15 @@ export async function setTechnicianActive(actor: Express.User, id: number, activ
     await t.update({ active }, { transaction });
     // A deactivated technician's sign-in stops too.
     await User.update({ active }, { where: { technicianId: id }, transaction });
-    await recordAudit({ actorUserId: actor.id, action: active ? "technician.reactivated" : "technician.deactivated", subjectType: "technician", subjectId: id }, transaction);
+    await recordAudit(
+      {
+        actorUserId: actor.id,
+        action: active ? "technician.reactivated" : "technician.deactivated",
+        subjectType: "technician",
+        subjectId: id,
+      },
+      transaction,
+    );
     return t;
   });
   return toDto(technician);

@@ -14,7 +14,10 @@ export const passwordSchema = z
   .max(72, "Use at most 72 characters")
   .refine((p) => new TextEncoder().encode(p).length <= 72, "Use at most 72 bytes");
 
-export const emailSchema = z.email("Enter a valid e-mail address").max(254).transform((e) => e.toLowerCase());
+export const emailSchema = z
+  .email("Enter a valid e-mail address")
+  .max(254)
+  .transform((e) => e.toLowerCase());
 
 export const signInSchema = z.object({
   email: emailSchema,

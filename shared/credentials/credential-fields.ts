@@ -4,7 +4,11 @@ import { z } from "zod";
 export const isoDateSchema = z
   .string()
   .regex(/^\d{4}-\d{2}-\d{2}$/, "Use YYYY-MM-DD")
-  .refine((d) => !Number.isNaN(Date.parse(`${d}T00:00:00Z`)) && new Date(`${d}T00:00:00Z`).toISOString().startsWith(d), "Not a real date");
+  .refine(
+    (d) =>
+      !Number.isNaN(Date.parse(`${d}T00:00:00Z`)) && new Date(`${d}T00:00:00Z`).toISOString().startsWith(d),
+    "Not a real date",
+  );
 
 /** Whole US dollars; limits on a certificate are printed without cents. */
 export const dollarsSchema = z.number().int().min(0).max(1_000_000_000);

@@ -49,7 +49,11 @@ export const queueSortKeys = ["submittedAt", "typeCode", "companyName"] as const
 export const queueQuerySchema = z.object({
   typeCode: typeCodeSchema.optional(),
   companyId: idParam.optional(),
-  minWaitingHours: z.coerce.number().min(0).max(24 * 365).optional(),
+  minWaitingHours: z.coerce
+    .number()
+    .min(0)
+    .max(24 * 365)
+    .optional(),
   sort: z.enum(queueSortKeys).default("submittedAt"),
   dir: z.enum(["asc", "desc"]).default("asc"),
   page: z.coerce.number().int().min(1).max(10_000).default(1),

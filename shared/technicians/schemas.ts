@@ -32,7 +32,11 @@ const money = (label: string) => z.number().int(`${label} in whole cents`).min(0
 
 export const technicianInputSchema = z.object({
   name: z.string().trim().min(2, "Enter the technician's name").max(160),
-  email: z.email().max(254).optional().or(z.literal("").transform(() => undefined)),
+  email: z
+    .email()
+    .max(254)
+    .optional()
+    .or(z.literal("").transform(() => undefined)),
   phone: z.string().trim().max(40).optional(),
   technologies: z.array(z.enum(machineTechnologies)).max(10).default([]),
   controlFamilies: z.array(z.string().trim().min(1).max(80)).max(20).default([]),
@@ -44,7 +48,9 @@ export const technicianInputSchema = z.object({
 });
 export type TechnicianInput = z.infer<typeof technicianInputSchema>;
 
-export const technicianParamsSchema = z.object({ technicianId: z.coerce.number().int().positive().max(2_147_483_647) });
+export const technicianParamsSchema = z.object({
+  technicianId: z.coerce.number().int().positive().max(2_147_483_647),
+});
 
 export interface TechnicianDto {
   id: number;

@@ -28,7 +28,8 @@ function servedRoutes(app: Express): string[] {
   const found: string[] = [];
   const walk = (stack: Layer[]) => {
     for (const layer of stack) {
-      if (layer.route) for (const m of Object.keys(layer.route.methods)) found.push(`${m} ${layer.route.path}`);
+      if (layer.route)
+        for (const m of Object.keys(layer.route.methods)) found.push(`${m} ${layer.route.path}`);
       else if (layer.handle?.stack) walk(layer.handle.stack);
     }
   };
@@ -37,9 +38,17 @@ function servedRoutes(app: Express): string[] {
 }
 
 // Params are filled with ids that exist nowhere, so a permitted caller reaches the 404 of the ownership check.
-const concretePath = (path: string) => path.replace(/:code/g, "general_liability").replace(/:page/g, "1").replace(/:[A-Za-z]+/g, "99999999");
+const concretePath = (path: string) =>
+  path
+    .replace(/:code/g, "general_liability")
+    .replace(/:page/g, "1")
+    .replace(/:[A-Za-z]+/g, "99999999");
 
-function call(agent: ReturnType<typeof request.agent> | ReturnType<typeof request>, method: string, path: string) {
+function call(
+  agent: ReturnType<typeof request.agent> | ReturnType<typeof request>,
+  method: string,
+  path: string,
+) {
   const r = (agent as unknown as Record<string, (p: string) => request.Test>)[method]!(path);
   return r.set(CSRF_HEADER, CSRF_HEADER_VALUE);
 }
@@ -86,10 +95,12 @@ describe("authorisation matrix", () => {
   it("lets every permitted role through the role check of each read-only route", async () => {
     const wrong: string[] = [];
     for (const r of routeTable.filter((x) => x.method === "get")) {
-      const permitted = r.policy.roles === "anyone" || r.policy.roles === "signed_in" ? roles : r.policy.roles;
+      const permitted =
+        r.policy.roles === "anyone" || r.policy.roles === "signed_in" ? roles : r.policy.roles;
       for (const role of permitted) {
         const res = await call(agents[role], r.method, concretePath(r.path));
-        if (res.status === 401 || res.status === 403 || res.status >= 500) wrong.push(`${role} ${r.method} ${r.path} -> ${res.status}`);
+        if (res.status === 401 || res.status === 403 || res.status >= 500)
+          wrong.push(`${role} ${r.method} ${r.path} -> ${res.status}`);
       }
     }
 

@@ -32,14 +32,55 @@ function callerFor(route: RouteEntry) {
 const nasty = fc.oneof(
   fc.string({ maxLength: 40 }),
   fc.integer().map(String),
-  fc.constantFrom("-1", "0", "1e309", "NaN", "99999999999999999999", "../../etc/passwd", "%00", "null", "[]", "{}", "𝔘𝔫𝔦𝔠𝔬𝔡𝔢", "' OR 1=1 --", "<script>alert(1)</script>"),
+  fc.constantFrom(
+    "-1",
+    "0",
+    "1e309",
+    "NaN",
+    "99999999999999999999",
+    "../../etc/passwd",
+    "%00",
+    "null",
+    "[]",
+    "{}",
+    "𝔘𝔫𝔦𝔠𝔬𝔡𝔢",
+    "' OR 1=1 --",
+    "<script>alert(1)</script>",
+  ),
 );
 const paramsArb = (path: string) => {
   const names = [...path.matchAll(/:([A-Za-z]+)/g)].map((m) => m[1]!);
-  return fc.tuple(...names.map(() => nasty)).map((values) => names.reduce((p, name, i) => p.replace(`:${name}`, encodeURIComponent(values[i]!)), path));
+  return fc
+    .tuple(...names.map(() => nasty))
+    .map((values) =>
+      names.reduce((p, name, i) => p.replace(`:${name}`, encodeURIComponent(values[i]!)), path),
+    );
 };
-const queryArb = fc.dictionary(fc.constantFrom("page", "pageSize", "sort", "dir", "q", "siteId", "radiusKm", "cursor", "status", "technicianId", "typeCode", "limit", "at", "inline", "x"), nasty, { maxKeys: 4 });
-const bodyArb = fc.oneof(fc.anything({ maxDepth: 2 }), fc.dictionary(fc.string({ maxLength: 12 }), fc.anything({ maxDepth: 1 }), { maxKeys: 6 }));
+const queryArb = fc.dictionary(
+  fc.constantFrom(
+    "page",
+    "pageSize",
+    "sort",
+    "dir",
+    "q",
+    "siteId",
+    "radiusKm",
+    "cursor",
+    "status",
+    "technicianId",
+    "typeCode",
+    "limit",
+    "at",
+    "inline",
+    "x",
+  ),
+  nasty,
+  { maxKeys: 4 },
+);
+const bodyArb = fc.oneof(
+  fc.anything({ maxDepth: 2 }),
+  fc.dictionary(fc.string({ maxLength: 12 }), fc.anything({ maxDepth: 1 }), { maxKeys: 6 }),
+);
 
 describe("hostile input", () => {
   it("never answers a random or malformed request with a 500, and always says why it refused", async () => {
@@ -53,10 +94,18 @@ describe("hostile input", () => {
         fc.asyncProperty(paramsArb(route.path), queryArb, bodyArb, async (path, query, body) => {
           requests += 1;
           const agent = callerFor(route) as unknown as Record<string, (p: string) => request.Test>;
-          const res = await agent[route.method]!(path).set(CSRF_HEADER, CSRF_HEADER_VALUE).query(query).send(body as object);
+          const res = await agent[route.method]!(path)
+            .set(CSRF_HEADER, CSRF_HEADER_VALUE)
+            .query(query)
+            .send(body as object);
           statuses.add(Math.floor(res.status / 100));
-          const explained = res.status < 400 || (typeof res.body?.error?.message === "string" && res.body.error.message.length > 0);
-          if (res.status >= 500 || !explained) failures.push(`${route.method} ${route.path} -> ${res.status} for ${path} ${JSON.stringify(query)} ${JSON.stringify(body)?.slice(0, 80)}`);
+          const explained =
+            res.status < 400 ||
+            (typeof res.body?.error?.message === "string" && res.body.error.message.length > 0);
+          if (res.status >= 500 || !explained)
+            failures.push(
+              `${route.method} ${route.path} -> ${res.status} for ${path} ${JSON.stringify(query)} ${JSON.stringify(body)?.slice(0, 80)}`,
+            );
           return true;
         }),
         { numRuns: 8, seed: 20261202 },

@@ -17,11 +17,36 @@ afterAll(async () => {
 
 // Each role sees only what it may use (DESIGN.md, "Who uses it").
 const journeys = [
-  { role: "provider_admin", email: "office@kestrel-ridge.test", sees: ["Dashboard", "Technicians", "Documents", "Work orders"], hidden: ["Queue", "Directory", "Users"] },
-  { role: "technician", email: "tobias@kestrel-ridge.test", sees: ["My standing", "Upload a card"], hidden: ["Technicians", "Queue", "Directory"] },
-  { role: "reviewer", email: "reviewer@clearbench.test", sees: ["Queue"], hidden: ["Technicians", "Directory", "Users"] },
-  { role: "buyer", email: "buyer@marlow-precision.test", sees: ["Directory", "Roster", "Sites", "Requirement sets", "Work orders"], hidden: ["Queue", "Technicians", "Users"] },
-  { role: "admin", email: "admin@clearbench.test", sees: ["Users", "Catalogue", "Outbox"], hidden: ["Queue", "Directory", "Technicians"] },
+  {
+    role: "provider_admin",
+    email: "office@kestrel-ridge.test",
+    sees: ["Dashboard", "Technicians", "Documents", "Work orders"],
+    hidden: ["Queue", "Directory", "Users"],
+  },
+  {
+    role: "technician",
+    email: "tobias@kestrel-ridge.test",
+    sees: ["My standing", "Upload a card"],
+    hidden: ["Technicians", "Queue", "Directory"],
+  },
+  {
+    role: "reviewer",
+    email: "reviewer@clearbench.test",
+    sees: ["Queue"],
+    hidden: ["Technicians", "Directory", "Users"],
+  },
+  {
+    role: "buyer",
+    email: "buyer@marlow-precision.test",
+    sees: ["Directory", "Roster", "Sites", "Requirement sets", "Work orders"],
+    hidden: ["Queue", "Technicians", "Users"],
+  },
+  {
+    role: "admin",
+    email: "admin@clearbench.test",
+    sees: ["Users", "Catalogue", "Outbox"],
+    hidden: ["Queue", "Directory", "Technicians"],
+  },
 ] as const;
 
 describe("signing in as each demo role", () => {
@@ -34,8 +59,10 @@ describe("signing in as each demo role", () => {
     await nav.getByRole("link").first().waitFor();
     await screenshot(page, `sign-in-${role}`);
 
-    for (const name of sees) await expect(nav.getByRole("link", { name, exact: true }).count()).resolves.toBe(1);
-    for (const name of hidden) await expect(nav.getByRole("link", { name, exact: true }).count()).resolves.toBe(0);
+    for (const name of sees)
+      await expect(nav.getByRole("link", { name, exact: true }).count()).resolves.toBe(1);
+    for (const name of hidden)
+      await expect(nav.getByRole("link", { name, exact: true }).count()).resolves.toBe(0);
     await context.close();
   });
 });

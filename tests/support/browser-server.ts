@@ -11,7 +11,11 @@ import { loadDemoScenarioOnce } from "../../server/db/demo-scenario/index.ts";
 export function ensureClientBuild(): string {
   const dist = process.env.CLEARBENCH_TEST_DIST!;
   if (!existsSync(path.join(dist, "index.html"))) {
-    const built = spawnSync(path.resolve("node_modules/.bin/vite"), ["build", "--outDir", dist, "--logLevel", "warn"], { stdio: "inherit" });
+    const built = spawnSync(
+      path.resolve("node_modules/.bin/vite"),
+      ["build", "--outDir", dist, "--logLevel", "warn"],
+      { stdio: "inherit" },
+    );
     if (built.status !== 0) throw new Error("vite build failed");
   }
   return dist;
@@ -21,7 +25,9 @@ export function ensureClientBuild(): string {
  * The real server, serving the production build, on a database of its own in the test cluster with
  * the demo scenario loaded, so browser journeys sign in with the demo accounts.
  */
-export async function startBrowserServer(env: Record<string, string> = {}): Promise<RunningServer & { url: string; databaseUrl: string }> {
+export async function startBrowserServer(
+  env: Record<string, string> = {},
+): Promise<RunningServer & { url: string; databaseUrl: string }> {
   const base = new URL(process.env.DATABASE_URL!);
   const name = `browser_${randomUUID().slice(0, 8)}`;
   const admin = new pg.Client({ connectionString: process.env.DATABASE_URL });
@@ -31,7 +37,14 @@ export async function startBrowserServer(env: Record<string, string> = {}): Prom
   base.pathname = `/${name}`;
   // A database and an uploads folder of its own: the start-up sweep must not see other tests' files.
   const uploadsDir = path.join(path.dirname(process.env.UPLOADS_DIR!), `uploads-${name}`);
-  const config = loadConfig({ ...process.env, DATABASE_URL: base.toString(), UPLOADS_DIR: uploadsDir, PORT: "0", RUN_SCHEDULE: "false", ...env });
+  const config = loadConfig({
+    ...process.env,
+    DATABASE_URL: base.toString(),
+    UPLOADS_DIR: uploadsDir,
+    PORT: "0",
+    RUN_SCHEDULE: "false",
+    ...env,
+  });
   const running = await startServer(config, { clientDir: ensureClientBuild() });
   await loadDemoScenarioOnce({ uploadsDir: config.UPLOADS_DIR, today: new Date() });
   return { ...running, url: `http://127.0.0.1:${running.port}`, databaseUrl: base.toString() };

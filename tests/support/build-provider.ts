@@ -30,15 +30,25 @@ export async function buildProvider(app: Express, name?: string) {
     technicianId: technician.id,
   });
   const admin = agentFor(app);
-  await admin.post("/api/auth/sign-in").send({ email: users.provider_admin!.email, password: TEST_PASSWORD }).expect(200);
+  await admin
+    .post("/api/auth/sign-in")
+    .send({ email: users.provider_admin!.email, password: TEST_PASSWORD })
+    .expect(200);
   const tech = agentFor(app);
   await tech.post("/api/auth/sign-in").send({ email: techUser.email, password: TEST_PASSWORD }).expect(200);
   return { company, technician, admin, tech, adminUser: users.provider_admin!, techUser };
 }
 
-export async function signedInAgent(app: Express, kind: "platform" | "shop", role: "reviewer" | "admin" | "buyer") {
+export async function signedInAgent(
+  app: Express,
+  kind: "platform" | "shop",
+  role: "reviewer" | "admin" | "buyer",
+) {
   const { users, company } = await buildCompany(kind, [role]);
   const agent = agentFor(app);
-  await agent.post("/api/auth/sign-in").send({ email: users[role]!.email, password: TEST_PASSWORD }).expect(200);
+  await agent
+    .post("/api/auth/sign-in")
+    .send({ email: users[role]!.email, password: TEST_PASSWORD })
+    .expect(200);
   return { agent, user: users[role]!, company };
 }

@@ -11,7 +11,12 @@ import { BROWSER_TOOLS, ensureDebianTools, OCR_TOOLS } from "../../server/system
 export default async function setup() {
   ensureDebianTools([...OCR_TOOLS, ...BROWSER_TOOLS], (line) => process.stdout.write(`${line}\n`));
   const root = mkdtempSync(path.join(tmpdir(), "clearbench-test-"));
-  const pg = await startEmbeddedPostgres({ root, port: await freePort(), database: "clearbench_test", throwAway: true });
+  const pg = await startEmbeddedPostgres({
+    root,
+    port: await freePort(),
+    database: "clearbench_test",
+    throwAway: true,
+  });
   process.env.DATABASE_URL = pg.url;
   process.env.NODE_ENV = "test";
   process.env.LOG_LEVEL = "silent";

@@ -1,5 +1,9 @@
 import type request from "supertest";
-import { buildCertificatePdf, type CertificateValues, type CoverageCode } from "../fixtures/build-certificate-pdf.ts";
+import {
+  buildCertificatePdf,
+  type CertificateValues,
+  type CoverageCode,
+} from "../fixtures/build-certificate-pdf.ts";
 
 type TestAgent = ReturnType<typeof request.agent>;
 
@@ -23,12 +27,21 @@ export function certificateFields(values: CertificateValues, code: CoverageCode)
 }
 
 /** Uploads a generated certificate and submits its general-liability line; returns the credential. */
-export async function submitLiabilityCertificate(agent: TestAgent, seed: number, overrides: Record<string, unknown> = {}) {
+export async function submitLiabilityCertificate(
+  agent: TestAgent,
+  seed: number,
+  overrides: Record<string, unknown> = {},
+) {
   const { bytes, values } = await buildCertificatePdf({ seed });
-  const up = await agent.post("/api/documents").field("typeCode", "general_liability").attach("file", Buffer.from(bytes), `coi-${seed}.pdf`);
+  const up = await agent
+    .post("/api/documents")
+    .field("typeCode", "general_liability")
+    .attach("file", Buffer.from(bytes), `coi-${seed}.pdf`);
   if (up.status !== 201) throw new Error(`upload failed: ${up.status} ${JSON.stringify(up.body)}`);
   const fields = { ...certificateFields(values, "general_liability"), ...overrides };
-  const res = await agent.post("/api/credentials").send({ documentId: up.body.document.id, typeCode: "general_liability", fields });
+  const res = await agent
+    .post("/api/credentials")
+    .send({ documentId: up.body.document.id, typeCode: "general_liability", fields });
   if (res.status !== 201) throw new Error(`submit failed: ${res.status} ${JSON.stringify(res.body)}`);
   return res.body as { id: number; documentId: number; state: string };
 }

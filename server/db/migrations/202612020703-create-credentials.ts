@@ -4,10 +4,18 @@ import type { MigrationContext } from "../migrate.ts";
 export async function up({ queryInterface, sequelize }: MigrationContext) {
   await queryInterface.createTable("credentials", {
     id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
-    type_code: { type: DataTypes.STRING(40), allowNull: false, references: { model: "credential_types", key: "code" } },
+    type_code: {
+      type: DataTypes.STRING(40),
+      allowNull: false,
+      references: { model: "credential_types", key: "code" },
+    },
     company_id: { type: DataTypes.INTEGER, allowNull: false, references: { model: "companies", key: "id" } },
     // Null for credentials the company itself holds (insurance).
-    technician_id: { type: DataTypes.INTEGER, allowNull: true, references: { model: "technicians", key: "id" } },
+    technician_id: {
+      type: DataTypes.INTEGER,
+      allowNull: true,
+      references: { model: "technicians", key: "id" },
+    },
     document_id: { type: DataTypes.INTEGER, allowNull: false, references: { model: "documents", key: "id" } },
     state: { type: DataTypes.STRING(12), allowNull: false, defaultValue: "submitted" },
     fields: { type: DataTypes.JSONB, allowNull: false },

@@ -20,7 +20,10 @@ const linkToken = (text: string) => /set-password\?token=([A-Za-z0-9_-]+)/.exec(
 async function adminAgent() {
   const { users } = await buildCompany("platform", ["admin"]);
   const agent = agentFor(t.app);
-  await agent.post("/api/auth/sign-in").send({ email: users.admin!.email, password: TEST_PASSWORD }).expect(200);
+  await agent
+    .post("/api/auth/sign-in")
+    .send({ email: users.admin!.email, password: TEST_PASSWORD })
+    .expect(200);
   return agent;
 }
 
@@ -30,13 +33,21 @@ describe("admin invitation", () => {
     const { company } = await buildCompany("service", []);
     const email = `new-tech-${randomUUID().slice(0, 8)}@example.test`;
 
-    const invited = await admin.post("/api/admin/invitations").send({ email, name: "Wendell Achebe-Lund", role: "technician", companyId: company.id });
+    const invited = await admin
+      .post("/api/admin/invitations")
+      .send({ email, name: "Wendell Achebe-Lund", role: "technician", companyId: company.id });
     await mail.deliver();
     const received = mail.to(email);
     const token = linkToken(received[0]?.text ?? "");
-    const first = await agentFor(t.app).post("/api/auth/set-password").send({ token, password: "a brand new password" });
-    const second = await agentFor(t.app).post("/api/auth/set-password").send({ token, password: "another new password" });
-    const signIn = await agentFor(t.app).post("/api/auth/sign-in").send({ email, password: "a brand new password" });
+    const first = await agentFor(t.app)
+      .post("/api/auth/set-password")
+      .send({ token, password: "a brand new password" });
+    const second = await agentFor(t.app)
+      .post("/api/auth/set-password")
+      .send({ token, password: "another new password" });
+    const signIn = await agentFor(t.app)
+      .post("/api/auth/sign-in")
+      .send({ email, password: "a brand new password" });
 
     expect(invited.status).toBe(201);
     expect(received).toHaveLength(1);
@@ -51,7 +62,12 @@ describe("admin invitation", () => {
     const admin = await adminAgent();
     const { company } = await buildCompany("shop", []);
 
-    const res = await admin.post("/api/admin/invitations").send({ email: `x-${randomUUID().slice(0, 6)}@example.test`, name: "Ola Brightwater", role: "reviewer", companyId: company.id });
+    const res = await admin.post("/api/admin/invitations").send({
+      email: `x-${randomUUID().slice(0, 6)}@example.test`,
+      name: "Ola Brightwater",
+      role: "reviewer",
+      companyId: company.id,
+    });
 
     expect(res.status).toBe(422);
     expect(res.body.error.fields[0].path).toBe("body.role");
@@ -64,7 +80,9 @@ describe("password reset", () => {
     const known = users.buyer!.email;
 
     const a = await agentFor(t.app).post("/api/auth/password-reset").send({ email: known });
-    const b = await agentFor(t.app).post("/api/auth/password-reset").send({ email: "ghost-account@example.test" });
+    const b = await agentFor(t.app)
+      .post("/api/auth/password-reset")
+      .send({ email: "ghost-account@example.test" });
     await mail.deliver();
 
     expect(a.status).toBe(202);
@@ -81,9 +99,16 @@ describe("password reset", () => {
     await mail.deliver();
     const token = linkToken(mail.to(email)[0]!.text);
 
-    await agentFor(t.app).post("/api/auth/set-password").send({ token, password: "reset password 2026" }).expect(204);
-    const oldPassword = await agentFor(t.app).post("/api/auth/sign-in").send({ email, password: TEST_PASSWORD });
-    const newPassword = await agentFor(t.app).post("/api/auth/sign-in").send({ email, password: "reset password 2026" });
+    await agentFor(t.app)
+      .post("/api/auth/set-password")
+      .send({ token, password: "reset password 2026" })
+      .expect(204);
+    const oldPassword = await agentFor(t.app)
+      .post("/api/auth/sign-in")
+      .send({ email, password: TEST_PASSWORD });
+    const newPassword = await agentFor(t.app)
+      .post("/api/auth/sign-in")
+      .send({ email, password: "reset password 2026" });
 
     expect(oldPassword.status).toBe(401);
     expect(newPassword.status).toBe(200);

@@ -14,7 +14,10 @@ async function signedInAs(role: Role) {
   const kind = role === "buyer" ? "shop" : role === "admin" || role === "reviewer" ? "platform" : "service";
   const { users } = await buildCompany(kind, [role]);
   const agent = agentFor(t.app);
-  await agent.post("/api/auth/sign-in").send({ email: users[role]!.email, password: TEST_PASSWORD }).expect(200);
+  await agent
+    .post("/api/auth/sign-in")
+    .send({ email: users[role]!.email, password: TEST_PASSWORD })
+    .expect(200);
   return agent;
 }
 
@@ -25,13 +28,16 @@ describe("role checks", () => {
     expect(res.status).toBe(401);
   });
 
-  it.each(["provider_admin", "technician", "reviewer", "buyer"] as const)("answers 403 to a %s on an admin route", async (role) => {
-    const agent = await signedInAs(role);
+  it.each(["provider_admin", "technician", "reviewer", "buyer"] as const)(
+    "answers 403 to a %s on an admin route",
+    async (role) => {
+      const agent = await signedInAs(role);
 
-    const res = await agent.get("/api/admin/users");
+      const res = await agent.get("/api/admin/users");
 
-    expect(res.status).toBe(403);
-  });
+      expect(res.status).toBe(403);
+    },
+  );
 
   it("lets an admin list users", async () => {
     const agent = await signedInAs("admin");

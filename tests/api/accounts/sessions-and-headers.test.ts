@@ -19,13 +19,21 @@ afterAll(() => t.close());
 
 describe("session cookie and headers in production", () => {
   it("sets the session cookie HttpOnly, Secure and SameSite=Lax", async () => {
-    const prod = buildTestApp({ NODE_ENV: "production", SESSION_SECRET: "a-production-secret-of-some-length" });
+    const prod = buildTestApp({
+      NODE_ENV: "production",
+      SESSION_SECRET: "a-production-secret-of-some-length",
+    });
     const { users } = await buildCompany("shop", ["buyer"]);
 
-    const res = await agentFor(prod.app).post("/api/auth/sign-in").set("X-Forwarded-Proto", "https").send({ email: users.buyer!.email, password: TEST_PASSWORD });
+    const res = await agentFor(prod.app)
+      .post("/api/auth/sign-in")
+      .set("X-Forwarded-Proto", "https")
+      .send({ email: users.buyer!.email, password: TEST_PASSWORD });
     await prod.close();
 
-    const cookie = ([] as string[]).concat(res.headers["set-cookie"] ?? []).find((c) => c.startsWith("clearbench.sid="))!;
+    const cookie = ([] as string[])
+      .concat(res.headers["set-cookie"] ?? [])
+      .find((c) => c.startsWith("clearbench.sid="))!;
     expect(res.status).toBe(200);
     expect(cookie).toMatch(/HttpOnly/i);
     expect(cookie).toMatch(/Secure/i);
@@ -66,9 +74,14 @@ describe("one-time links", () => {
   it("refuses an expired set-password link", async () => {
     const { users } = await buildCompany("shop", ["buyer"]);
     const token = await issueToken(users.buyer!.id, "reset");
-    await OneTimeToken.update({ expiresAt: new Date(Date.now() - 1000) }, { where: { userId: users.buyer!.id } });
+    await OneTimeToken.update(
+      { expiresAt: new Date(Date.now() - 1000) },
+      { where: { userId: users.buyer!.id } },
+    );
 
-    const res = await agentFor(t.app).post("/api/auth/set-password").send({ token, password: "a fresh password" });
+    const res = await agentFor(t.app)
+      .post("/api/auth/set-password")
+      .send({ token, password: "a fresh password" });
 
     expect(res.status).toBe(422);
     expect(res.body.error.fields[0].path).toBe("body.token");

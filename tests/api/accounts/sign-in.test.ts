@@ -11,27 +11,41 @@ beforeAll(() => {
 afterAll(() => t.close());
 
 const sessionCookie = (res: request.Response) =>
-  ([] as string[]).concat(res.headers["set-cookie"] ?? []).find((c) => c.startsWith("clearbench.sid="))?.split(";")[0];
+  ([] as string[])
+    .concat(res.headers["set-cookie"] ?? [])
+    .find((c) => c.startsWith("clearbench.sid="))
+    ?.split(";")[0];
 
 describe("sign-in", () => {
   it("signs in with the right password and says who is signed in", async () => {
     const { users, company } = await buildCompany("service", ["provider_admin"]);
     const agent = agentFor(t.app);
 
-    const res = await agent.post("/api/auth/sign-in").send({ email: users.provider_admin!.email, password: TEST_PASSWORD });
+    const res = await agent
+      .post("/api/auth/sign-in")
+      .send({ email: users.provider_admin!.email, password: TEST_PASSWORD });
     const me = await agent.get("/api/auth/me");
 
     expect(res.status).toBe(200);
     expect(me.status).toBe(200);
-    expect(me.body).toMatchObject({ email: users.provider_admin!.email, role: "provider_admin", companyId: company.id, companyKind: "service" });
+    expect(me.body).toMatchObject({
+      email: users.provider_admin!.email,
+      role: "provider_admin",
+      companyId: company.id,
+      companyKind: "service",
+    });
     expect(JSON.stringify(me.body)).not.toContain("passwordHash");
   });
 
   it("answers the same for an unknown e-mail and a wrong password", async () => {
     const { users } = await buildCompany("service", ["provider_admin"]);
 
-    const wrong = await agentFor(t.app).post("/api/auth/sign-in").send({ email: users.provider_admin!.email, password: "not the password" });
-    const unknown = await agentFor(t.app).post("/api/auth/sign-in").send({ email: "nobody-here@example.test", password: "not the password" });
+    const wrong = await agentFor(t.app)
+      .post("/api/auth/sign-in")
+      .send({ email: users.provider_admin!.email, password: "not the password" });
+    const unknown = await agentFor(t.app)
+      .post("/api/auth/sign-in")
+      .send({ email: "nobody-here@example.test", password: "not the password" });
 
     expect(wrong.status).toBe(401);
     expect(unknown.status).toBe(401);
@@ -41,10 +55,14 @@ describe("sign-in", () => {
   it("gives a new session id at sign-in, so a planted session cannot be taken over", async () => {
     const { users } = await buildCompany("shop", ["buyer"]);
     const agent = agentFor(t.app);
-    const failed = await agent.post("/api/auth/sign-in").send({ email: users.buyer!.email, password: "wrong password" });
+    const failed = await agent
+      .post("/api/auth/sign-in")
+      .send({ email: users.buyer!.email, password: "wrong password" });
     const before = sessionCookie(failed);
 
-    const ok = await agent.post("/api/auth/sign-in").send({ email: users.buyer!.email, password: TEST_PASSWORD });
+    const ok = await agent
+      .post("/api/auth/sign-in")
+      .send({ email: users.buyer!.email, password: TEST_PASSWORD });
     const after = sessionCookie(ok);
 
     expect(after).toBeDefined();
@@ -54,7 +72,9 @@ describe("sign-in", () => {
   it("ends the session on the server at sign-out, so the old cookie no longer works", async () => {
     const { users } = await buildCompany("shop", ["buyer"]);
     const agent = agentFor(t.app);
-    const signedIn = await agent.post("/api/auth/sign-in").send({ email: users.buyer!.email, password: TEST_PASSWORD });
+    const signedIn = await agent
+      .post("/api/auth/sign-in")
+      .send({ email: users.buyer!.email, password: TEST_PASSWORD });
     const cookie = sessionCookie(signedIn)!;
 
     const out = await agent.post("/api/auth/sign-out");
@@ -67,7 +87,9 @@ describe("sign-in", () => {
   it("refuses a state-changing request without the CSRF header", async () => {
     const { users } = await buildCompany("service", ["provider_admin"]);
 
-    const res = await request(t.app).post("/api/auth/sign-in").send({ email: users.provider_admin!.email, password: TEST_PASSWORD });
+    const res = await request(t.app)
+      .post("/api/auth/sign-in")
+      .send({ email: users.provider_admin!.email, password: TEST_PASSWORD });
 
     expect(res.status).toBe(403);
     expect(res.body.error.message).toContain(CSRF_HEADER);
@@ -82,7 +104,10 @@ describe("sign-in", () => {
   });
 
   it("answers 400 for a body that is not JSON", async () => {
-    const res = await agentFor(t.app).post("/api/auth/sign-in").set("Content-Type", "application/json").send("{not json");
+    const res = await agentFor(t.app)
+      .post("/api/auth/sign-in")
+      .set("Content-Type", "application/json")
+      .send("{not json");
 
     expect(res.status).toBe(400);
     expect(res.body.error.code).toBe("bad_request");
@@ -91,7 +116,10 @@ describe("sign-in", () => {
   it("rate limits repeated failed sign-ins with 429", async () => {
     const limited = buildTestApp({ SIGN_IN_ATTEMPTS_PER_15_MIN: "3" });
     const { users } = await buildCompany("service", ["provider_admin"]);
-    const attempt = () => agentFor(limited.app).post("/api/auth/sign-in").send({ email: users.provider_admin!.email, password: "wrong password" });
+    const attempt = () =>
+      agentFor(limited.app)
+        .post("/api/auth/sign-in")
+        .send({ email: users.provider_admin!.email, password: "wrong password" });
 
     const statuses = [];
     for (let i = 0; i < 4; i += 1) statuses.push((await attempt()).status);

@@ -38,7 +38,9 @@ describe("company sign-up", () => {
   });
 
   it("refuses an unknown time zone and a short password, naming both fields", async () => {
-    const res = await agentFor(t.app).post("/api/auth/sign-up").send({ ...form("shop"), timeZone: "Mars/Olympus", password: "short" });
+    const res = await agentFor(t.app)
+      .post("/api/auth/sign-up")
+      .send({ ...form("shop"), timeZone: "Mars/Olympus", password: "short" });
 
     expect(res.status).toBe(422);
     const paths = res.body.error.fields.map((f: { path: string }) => f.path);
@@ -49,7 +51,9 @@ describe("company sign-up", () => {
     const first = form("service");
     await agentFor(t.app).post("/api/auth/sign-up").send(first).expect(201);
 
-    const again = await agentFor(t.app).post("/api/auth/sign-up").send({ ...form("service"), email: first.email });
+    const again = await agentFor(t.app)
+      .post("/api/auth/sign-up")
+      .send({ ...form("service"), email: first.email });
 
     expect(again.status).toBe(409);
   });

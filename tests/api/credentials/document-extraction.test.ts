@@ -103,27 +103,23 @@ describe("extracting a document", () => {
     const right = results.reduce((sum, r) => sum + r.right, 0);
     const present = results.reduce((sum, r) => sum + r.present, 0);
 
-    console.info(`text-layer hit rate: ${right}/${present}`);
+    process.stdout.write(`text-layer hit rate: ${right}/${present}\n`);
     expect(results.every((r) => r.method === "pdf_text")).toBe(true);
     expect(results.flatMap((r) => r.wrong)).toEqual([]);
   });
 
-  it("reads a two-page certificate's text in under two seconds", async () => {
+  it("reads a two-page certificate's text layer", async () => {
     const { bytes, values } = await buildCertificatePdf({ seed: 59, pages: 2 });
 
-    const started = performance.now();
     const extracted = await extractDocument({
       bytes,
       mime: "application/pdf",
       credentialType: { code: "general_liability", fieldSet: "insurance" },
     });
-    const elapsed = performance.now() - started;
 
-    console.info(`two-page PDF, text layer: ${elapsed.toFixed(0)} ms`);
     expect(extracted.proposal?.fields).toMatchObject({
       policyNumber: values.coverages.general_liability?.policyNumber,
     });
-    expect(elapsed).toBeLessThan(2_000);
   });
 
   it(
@@ -149,8 +145,8 @@ describe("extracting a document", () => {
       const right = results.reduce((sum, r) => sum + r.right, 0);
       const present = results.reduce((sum, r) => sum + r.present, 0);
 
-      console.info(
-        `OCR hit rate: ${right}/${present}; slowest two-page scan ${twoPageMs.toFixed(0)} ms; misses: ${results.flatMap((r) => r.wrong).join("; ")}`,
+      process.stdout.write(
+        `OCR hit rate: ${right}/${present}; slowest two-page scan ${twoPageMs.toFixed(0)} ms; misses: ${results.flatMap((r) => r.wrong).join("; ")}\n`,
       );
       expect(results.every((r) => r.method === "ocr")).toBe(true);
       // OCR may misread a character or two, but most fields must come through exactly.

@@ -20,7 +20,10 @@ describe("hostile uploads", () => {
   it("refuses an SVG renamed to .pdf and leaves nothing behind", async () => {
     const before = await countStored(t.config.UPLOADS_DIR);
 
-    const res = await upload(Buffer.from('<svg xmlns="http://www.w3.org/2000/svg"><script>alert(1)</script></svg>'), "coi.pdf");
+    const res = await upload(
+      Buffer.from('<svg xmlns="http://www.w3.org/2000/svg"><script>alert(1)</script></svg>'),
+      "coi.pdf",
+    );
 
     expect(res.status).toBe(415);
     expect(await countStored(t.config.UPLOADS_DIR)).toEqual(before);
@@ -72,10 +75,14 @@ describe("hostile uploads", () => {
   });
 
   it("handles 30 parallel uploads with one stored copy per distinct file and a row for each", async () => {
-    const files = await Promise.all(Array.from({ length: 10 }, (_, i) => buildCertificatePdf({ seed: 100 + i })));
+    const files = await Promise.all(
+      Array.from({ length: 10 }, (_, i) => buildCertificatePdf({ seed: 100 + i })),
+    );
     const before = await countStored(t.config.UPLOADS_DIR);
 
-    const results = await Promise.all(Array.from({ length: 30 }, (_, i) => upload(Buffer.from(files[i % 10]!.bytes), `parallel-${i}.pdf`)));
+    const results = await Promise.all(
+      Array.from({ length: 30 }, (_, i) => upload(Buffer.from(files[i % 10]!.bytes), `parallel-${i}.pdf`)),
+    );
     const after = await countStored(t.config.UPLOADS_DIR);
 
     expect(results.map((r) => r.status)).toEqual(Array(30).fill(201));

@@ -20,7 +20,10 @@ describe("uploading a certificate of insurance", () => {
     const { bytes, values } = await buildCertificatePdf({ seed: 7 });
     const expected = certificateFields(values, "general_liability");
 
-    const res = await admin.post("/api/documents").field("typeCode", "general_liability").attach("file", Buffer.from(bytes), "certificate.pdf");
+    const res = await admin
+      .post("/api/documents")
+      .field("typeCode", "general_liability")
+      .attach("file", Buffer.from(bytes), "certificate.pdf");
 
     expect(res.status).toBe(201);
     expect(res.body.extraction.method).toBe("pdf_text");
@@ -34,10 +37,18 @@ describe("uploading a certificate of insurance", () => {
   it("keeps one stored copy when the same file is uploaded twice", async () => {
     const { admin } = await buildProvider(t.app);
     const { bytes } = await buildCertificatePdf({ seed: 11 });
-    await admin.post("/api/documents").field("typeCode", "general_liability").attach("file", Buffer.from(bytes), "a.pdf").expect(201);
+    await admin
+      .post("/api/documents")
+      .field("typeCode", "general_liability")
+      .attach("file", Buffer.from(bytes), "a.pdf")
+      .expect(201);
     const before = await countStored(t.config.UPLOADS_DIR);
 
-    await admin.post("/api/documents").field("typeCode", "auto_liability").attach("file", Buffer.from(bytes), "b.pdf").expect(201);
+    await admin
+      .post("/api/documents")
+      .field("typeCode", "auto_liability")
+      .attach("file", Buffer.from(bytes), "b.pdf")
+      .expect(201);
     const after = await countStored(t.config.UPLOADS_DIR);
 
     expect(after.documents).toBe(before.documents + 1);
@@ -47,9 +58,16 @@ describe("uploading a certificate of insurance", () => {
   it("submits the checked fields as a credential awaiting verification", async () => {
     const { admin } = await buildProvider(t.app);
     const { bytes, values } = await buildCertificatePdf({ seed: 3 });
-    const up = await admin.post("/api/documents").field("typeCode", "general_liability").attach("file", Buffer.from(bytes), "coi.pdf");
+    const up = await admin
+      .post("/api/documents")
+      .field("typeCode", "general_liability")
+      .attach("file", Buffer.from(bytes), "coi.pdf");
 
-    const res = await admin.post("/api/credentials").send({ documentId: up.body.document.id, typeCode: "general_liability", fields: certificateFields(values, "general_liability") });
+    const res = await admin.post("/api/credentials").send({
+      documentId: up.body.document.id,
+      typeCode: "general_liability",
+      fields: certificateFields(values, "general_liability"),
+    });
 
     expect(res.status).toBe(201);
     expect(res.body.state).toBe("submitted");
@@ -59,9 +77,21 @@ describe("uploading a certificate of insurance", () => {
   it("names each field that breaks its rule", async () => {
     const { admin } = await buildProvider(t.app);
     const { bytes } = await buildCertificatePdf({ seed: 4 });
-    const up = await admin.post("/api/documents").field("typeCode", "general_liability").attach("file", Buffer.from(bytes), "coi.pdf");
+    const up = await admin
+      .post("/api/documents")
+      .field("typeCode", "general_liability")
+      .attach("file", Buffer.from(bytes), "coi.pdf");
 
-    const res = await admin.post("/api/credentials").send({ documentId: up.body.document.id, typeCode: "general_liability", fields: { insurerName: "", policyNumber: "X1", effectiveDate: "2026-02-30", expirationDate: "2027-01-01" } });
+    const res = await admin.post("/api/credentials").send({
+      documentId: up.body.document.id,
+      typeCode: "general_liability",
+      fields: {
+        insurerName: "",
+        policyNumber: "X1",
+        effectiveDate: "2026-02-30",
+        expirationDate: "2027-01-01",
+      },
+    });
 
     expect(res.status).toBe(422);
     const paths = res.body.error.fields.map((f: { path: string }) => f.path);
@@ -71,30 +101,65 @@ describe("uploading a certificate of insurance", () => {
 
 describe("refusing bad files, leaving nothing behind", () => {
   const cases: [string, () => Promise<{ bytes: Buffer; name: string }>, number][] = [
-    ["a PNG named .pdf (extension lies about the bytes)", async () => ({ bytes: Buffer.from("89504e470d0a1a0a0000000d4948445200000001000000010806000000", "hex"), name: "card.pdf" }), 415],
-    ["an HTML page named .pdf", async () => ({ bytes: Buffer.from("<html><script>alert(1)</script></html>"), name: "coi.pdf" }), 415],
+    [
+      "a PNG named .pdf (extension lies about the bytes)",
+      async () => ({
+        bytes: Buffer.from("89504e470d0a1a0a0000000d4948445200000001000000010806000000", "hex"),
+        name: "card.pdf",
+      }),
+      415,
+    ],
+    [
+      "an HTML page named .pdf",
+      async () => ({ bytes: Buffer.from("<html><script>alert(1)</script></html>"), name: "coi.pdf" }),
+      415,
+    ],
     ["an empty file", async () => ({ bytes: Buffer.alloc(0), name: "empty.pdf" }), 422],
-    ["a corrupt PDF", async () => ({ bytes: Buffer.from("%PDF-1.7\n1 0 obj\n<< /Type /Catalog >>\ngarbage garbage\n%%EOF"), name: "broken.pdf" }), 422],
-    ["an 11 MB file", async () => ({ bytes: Buffer.concat([Buffer.from("%PDF-1.7\n"), Buffer.alloc(11 * 1024 * 1024, 32)]), name: "huge.pdf" }), 413],
+    [
+      "a corrupt PDF",
+      async () => ({
+        bytes: Buffer.from("%PDF-1.7\n1 0 obj\n<< /Type /Catalog >>\ngarbage garbage\n%%EOF"),
+        name: "broken.pdf",
+      }),
+      422,
+    ],
+    [
+      "an 11 MB file",
+      async () => ({
+        bytes: Buffer.concat([Buffer.from("%PDF-1.7\n"), Buffer.alloc(11 * 1024 * 1024, 32)]),
+        name: "huge.pdf",
+      }),
+      413,
+    ],
   ];
 
-  it.each(cases)("answers %s with a clear error and stores no row and no file", async (_label, make, status) => {
-    const { admin } = await buildProvider(t.app);
-    const { bytes, name } = await make();
-    const before = await countStored(t.config.UPLOADS_DIR);
+  it.each(cases)(
+    "answers %s with a clear error and stores no row and no file",
+    async (_label, make, status) => {
+      const { admin } = await buildProvider(t.app);
+      const { bytes, name } = await make();
+      const before = await countStored(t.config.UPLOADS_DIR);
 
-    const res = await admin.post("/api/documents").field("typeCode", "general_liability").attach("file", bytes, name);
-    const after = await countStored(t.config.UPLOADS_DIR);
+      const res = await admin
+        .post("/api/documents")
+        .field("typeCode", "general_liability")
+        .attach("file", bytes, name);
+      const after = await countStored(t.config.UPLOADS_DIR);
 
-    expect(res.status).toBe(status);
-    expect(res.body.error.message.length).toBeGreaterThan(5);
-    expect(after).toEqual(before);
-  });
+      expect(res.status).toBe(status);
+      expect(res.body.error.message.length).toBeGreaterThan(5);
+      expect(after).toEqual(before);
+    },
+  );
 });
 
 describe("who may upload", () => {
   it("answers 401 to an anonymous upload", async () => {
-    const res = await request(t.app).post("/api/documents").set(CSRF_HEADER, CSRF_HEADER_VALUE).field("typeCode", "general_liability").attach("file", Buffer.from("%PDF-1.4"), "x.pdf");
+    const res = await request(t.app)
+      .post("/api/documents")
+      .set(CSRF_HEADER, CSRF_HEADER_VALUE)
+      .field("typeCode", "general_liability")
+      .attach("file", Buffer.from("%PDF-1.4"), "x.pdf");
 
     expect(res.status).toBe(401);
   });
@@ -104,8 +169,15 @@ describe("who may upload", () => {
     const other = await buildProvider(t.app);
     const { bytes } = await buildTrainingCardPdf({ seed: 5 });
 
-    const own = await mine.tech.post("/api/documents").field("typeCode", "arc_flash").attach("file", Buffer.from(bytes), "card.pdf");
-    const foreign = await mine.tech.post("/api/documents").field("typeCode", "arc_flash").field("technicianId", String(other.technician.id)).attach("file", Buffer.from(bytes), "card.pdf");
+    const own = await mine.tech
+      .post("/api/documents")
+      .field("typeCode", "arc_flash")
+      .attach("file", Buffer.from(bytes), "card.pdf");
+    const foreign = await mine.tech
+      .post("/api/documents")
+      .field("typeCode", "arc_flash")
+      .field("technicianId", String(other.technician.id))
+      .attach("file", Buffer.from(bytes), "card.pdf");
 
     expect(own.status).toBe(201);
     expect(foreign.status).toBe(404);

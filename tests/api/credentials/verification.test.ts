@@ -29,8 +29,13 @@ describe("verifying and returning", () => {
 
     expect(res.status).toBe(200);
     expect(res.body.state).toBe("verified");
-    expect(seen.body.audit.map((a: { action: string }) => a.action)).toEqual(["credential.submitted", "credential.verified"]);
-    expect(mail.to(provider.adminUser.email).map((m) => m.subject)).toEqual([expect.stringContaining("Verified")]);
+    expect(seen.body.audit.map((a: { action: string }) => a.action)).toEqual([
+      "credential.submitted",
+      "credential.verified",
+    ]);
+    expect(mail.to(provider.adminUser.email).map((m) => m.subject)).toEqual([
+      expect.stringContaining("Verified"),
+    ]);
   });
 
   it("returns a credential only with a reason, and the uploader sees the reason", async () => {
@@ -39,7 +44,9 @@ describe("verifying and returning", () => {
     const credential = await submitLiabilityCertificate(provider.admin, 22);
 
     const noReason = await reviewer.post(`/api/credentials/${credential.id}/return`).send({ reason: "" });
-    const ok = await reviewer.post(`/api/credentials/${credential.id}/return`).send({ reason: "The certificate lists a different named insured." });
+    const ok = await reviewer
+      .post(`/api/credentials/${credential.id}/return`)
+      .send({ reason: "The certificate lists a different named insured." });
     const seen = await provider.admin.get(`/api/credentials/${credential.id}`);
 
     expect(noReason.status).toBe(422);
@@ -56,11 +63,19 @@ describe("verifying and returning", () => {
 
     const results = await Promise.all([
       first.post(`/api/credentials/${credential.id}/verify`).send({}),
-      second.post(`/api/credentials/${credential.id}/return`).send({ reason: "Policy number is unreadable." }),
+      second
+        .post(`/api/credentials/${credential.id}/return`)
+        .send({ reason: "Policy number is unreadable." }),
     ]);
 
     expect(results.map((r) => r.status).sort()).toEqual([200, 409]);
-    const decisions = await AuditEvent.count({ where: { subjectType: "credential", subjectId: credential.id, action: ["credential.verified", "credential.returned"] } });
+    const decisions = await AuditEvent.count({
+      where: {
+        subjectType: "credential",
+        subjectId: credential.id,
+        action: ["credential.verified", "credential.returned"],
+      },
+    });
     expect(decisions).toBe(1);
   });
 
@@ -83,7 +98,9 @@ describe("verifying and returning", () => {
     const credential = await submitLiabilityCertificate(provider.admin, 26);
     const current = (await reviewer.get(`/api/credentials/${credential.id}`)).body;
 
-    const edited = await reviewer.patch(`/api/credentials/${credential.id}/fields`).send({ fields: { ...current.fields, policyNumber: "GL-CORRECTED-1" } });
+    const edited = await reviewer
+      .patch(`/api/credentials/${credential.id}/fields`)
+      .send({ fields: { ...current.fields, policyNumber: "GL-CORRECTED-1" } });
     const seen = await reviewer.get(`/api/credentials/${credential.id}`);
 
     expect(edited.status).toBe(200);
@@ -97,7 +114,10 @@ describe("verifying and returning", () => {
     const { agent: buyer } = await signedInAgent(t.app, "shop", "buyer");
     const credential = await submitLiabilityCertificate(provider.admin, 27);
 
-    const anonymous = await request(t.app).post(`/api/credentials/${credential.id}/verify`).set("x-clearbench-csrf", "1").send({});
+    const anonymous = await request(t.app)
+      .post(`/api/credentials/${credential.id}/verify`)
+      .set("x-clearbench-csrf", "1")
+      .send({});
     const byProvider = await provider.admin.post(`/api/credentials/${credential.id}/verify`).send({});
     const byBuyer = await buyer.post(`/api/credentials/${credential.id}/verify`).send({});
 
@@ -179,7 +199,9 @@ describe("files are never served to the wrong party", () => {
     const credential = await submitLiabilityCertificate(provider.admin, 45);
 
     await provider.admin.get(`/api/documents/${credential.documentId}/file`).expect(200);
-    const downloads = await AuditEvent.count({ where: { subjectType: "document", subjectId: credential.documentId, action: "document.downloaded" } });
+    const downloads = await AuditEvent.count({
+      where: { subjectType: "document", subjectId: credential.documentId, action: "document.downloaded" },
+    });
 
     expect(downloads).toBe(1);
   });

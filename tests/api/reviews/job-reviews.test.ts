@@ -100,14 +100,12 @@ describe("who may rate a job", () => {
     const other = await buildWorkOrderWorld(t.app);
     const id = await workOrderAt(world, "confirmed");
 
-    const res = await world.shop.agent
-      .post(`/api/work-orders/${id}/review`)
-      .send({
-        ...REVIEW,
-        technicianId: other.provider.technician.id,
-        authorUserId: other.shop.user.id,
-        shopCompanyId: other.shop.company.id,
-      });
+    const res = await world.shop.agent.post(`/api/work-orders/${id}/review`).send({
+      ...REVIEW,
+      technicianId: other.provider.technician.id,
+      authorUserId: other.shop.user.id,
+      shopCompanyId: other.shop.company.id,
+    });
 
     expect(res.status).toBe(201);
     const row = await JobReview.findByPk(res.body.id);

@@ -57,7 +57,9 @@ describe("a provider manages its technicians", () => {
   it("edits and deactivates its own technician, whose sign-in stops working", async () => {
     const provider = await buildProvider(t.app);
 
-    const edited = await provider.admin.put(`/api/technicians/${provider.technician.id}`).send({ ...input, name: "Rosalind Tennant-Okoye" });
+    const edited = await provider.admin
+      .put(`/api/technicians/${provider.technician.id}`)
+      .send({ ...input, name: "Rosalind Tennant-Okoye" });
     const off = await provider.admin.post(`/api/technicians/${provider.technician.id}/deactivate`);
     const techMe = await provider.tech.get("/api/auth/me");
 
@@ -70,9 +72,13 @@ describe("a provider manages its technicians", () => {
     const { admin } = await buildProvider(t.app);
     const added = await admin.post("/api/technicians").send({ ...input, email: undefined });
 
-    const res = await admin.post(`/api/technicians/${added.body.id}/account`).send({ email: `linked-${added.body.id}@example.test` });
+    const res = await admin
+      .post(`/api/technicians/${added.body.id}/account`)
+      .send({ email: `linked-${added.body.id}@example.test` });
     await mail.deliver();
-    const again = await admin.post(`/api/technicians/${added.body.id}/account`).send({ email: `other-${added.body.id}@example.test` });
+    const again = await admin
+      .post(`/api/technicians/${added.body.id}/account`)
+      .send({ email: `other-${added.body.id}@example.test` });
 
     expect(res.status).toBe(201);
     expect(mail.to(`linked-${added.body.id}@example.test`)).toHaveLength(1);
