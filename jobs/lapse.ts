@@ -85,6 +85,31 @@ async function techniciansWithoutStanding(transaction: Transaction): Promise<num
   return rows.map((r) => r.id);
 }
 
+/**
+ * Holders of a verified credential that came into force since the previous run: a renewal verified before its start
+ * date leaves the holder not cleared until then, and nothing else would recompute it on that day. Dates are compared
+ * with a day of slack either side so the holder's zone never matters; recomputing one holder too many is harmless.
+ */
+async function holdersComingIntoForce(
+  transaction: Transaction,
+  asOf: Date,
+  jobRunId: number,
+): Promise<HolderCount[]> {
+  return selectRows<HolderCount>(
+    transaction,
+    `WITH previous AS (
+       SELECT coalesce(max(as_of), $1::timestamptz - interval '2 days') AS as_of FROM job_runs
+        WHERE job = 'lapse' AND id <> $2 AND as_of < $1::timestamptz)
+     SELECT c.company_id, c.technician_id, count(*)::int AS count
+       FROM credentials c, previous p
+      WHERE c.state = 'verified'
+        AND coalesce(c.fields->>'effectiveDate', c.fields->>'issueDate')::date
+            BETWEEN (p.as_of AT TIME ZONE 'UTC')::date - 1 AND ($1::timestamptz AT TIME ZONE 'UTC')::date + 1
+      GROUP BY c.company_id, c.technician_id`,
+    [asOf.toISOString(), jobRunId],
+  );
+}
+
 function holdersOf(counts: HolderCount[], extraTechnicianIds: number[]) {
   const companyIds = new Set<number>();
   const technicianIds = new Set<number>(extraTechnicianIds);
@@ -134,8 +159,9 @@ export async function runLapseJob(
         queueNoticeMessages(transaction, recipients, { asOf, publicUrl: base }),
       );
       const unstored = await timed("unstored", () => techniciansWithoutStanding(transaction));
+      const starting = await timed("starting", () => holdersComingIntoForce(transaction, asOf, jobRunId));
       const changedStandings = await timed("standings", () =>
-        refreshStandings(holdersOf([...lapsed, ...warned], unstored), transaction, asOf),
+        refreshStandings(holdersOf([...lapsed, ...warned, ...starting], unstored), transaction, asOf),
       );
       const noticesCreated = (lapsed[0]?.noticed ?? 0) + sum(warned);
       const counts = {

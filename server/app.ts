@@ -45,7 +45,7 @@ const apiRouters = [
 export function createApp({ config, sessionPool, clientDir }: AppDeps): Express {
   const app = express();
   app.locals.config = config;
-  app.locals.storage = createStorage(config.UPLOADS_DIR);
+  app.locals.storage = createStorage(config.UPLOADS_DIR, config);
   app.locals.signInLimiter = createSignInLimiter(config.SIGN_IN_ATTEMPTS_PER_15_MIN);
   app.disable("x-powered-by");
   if (config.NODE_ENV === "production") app.set("trust proxy", 1);

@@ -127,11 +127,10 @@ export async function verifyCredential(
         transaction,
       );
     }
-    const [type, uploader, name] = await Promise.all([
-      CredentialType.findByPk(row.typeCode, { transaction }),
-      User.findByPk(row.submittedBy, { transaction }),
-      holderName(row, transaction),
-    ]);
+    // One connection per transaction: these run one after another.
+    const type = await CredentialType.findByPk(row.typeCode, { transaction });
+    const uploader = await User.findByPk(row.submittedBy, { transaction });
+    const name = await holderName(row, transaction);
     if (uploader)
       await enqueueMail(verifiedMail(uploader.email, type!.name, name, `${linkBase}/documents`), transaction);
     await refreshStandingsForHolder(
@@ -161,11 +160,10 @@ export async function returnCredential(reviewer: Express.User, id: number, reaso
       },
       transaction,
     );
-    const [type, uploader, name] = await Promise.all([
-      CredentialType.findByPk(row.typeCode, { transaction }),
-      User.findByPk(row.submittedBy, { transaction }),
-      holderName(row, transaction),
-    ]);
+    // One connection per transaction: these run one after another.
+    const type = await CredentialType.findByPk(row.typeCode, { transaction });
+    const uploader = await User.findByPk(row.submittedBy, { transaction });
+    const name = await holderName(row, transaction);
     const link = `${linkBase}/documents/new?type=${row.typeCode}${row.technicianId ? `&technicianId=${row.technicianId}` : ""}`;
     if (uploader)
       await enqueueMail(returnedMail(uploader.email, type!.name, name, reason, link), transaction);

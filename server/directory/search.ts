@@ -155,7 +155,9 @@ async function findEmptyReason(criteria: DirectoryCriteria): Promise<DirectoryPa
     const removed = counts?.[`f${i}`] ?? 0;
     if (best === null || removed > best.removed) best = { filter: f.name, removed };
   });
-  return best;
+  // No filter to blame when loosening any one of them still lists nobody (e.g. every nearby technician lapsed).
+  const blamed = best as { filter: DirectoryFilterName; removed: number } | null;
+  return blamed && blamed.removed > 0 ? blamed : null;
 }
 
 /** The directory: one keyset-paged SQL query over listable technicians, estimates computed by the shared code. */

@@ -86,5 +86,5 @@ standingRoutes.get(
 standingRoutes.get(
   "/technicians/:technicianId/standing",
   { allow: canViewTechnicianStanding, params: technicianStandingParamsSchema },
-  (_req, _res, { params }) => readTechnicianStanding(params.technicianId),
+  (req, _res, { params }) => readTechnicianStanding(params.technicianId, req.user),
 );

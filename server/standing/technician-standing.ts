@@ -1,3 +1,4 @@
+import type { Transaction } from "sequelize";
 import type { StandingAgainstDto, TechnicianStandingDto } from "../../shared/standing/schemas.ts";
 import type { RequirementResult, Standing } from "../../shared/standing/standing-types.ts";
 import { db } from "../db/sequelize.ts";
@@ -19,7 +20,10 @@ interface StoredRow {
  * The technician's standing against the baseline and every active set: the stored rows, and for any pair not stored yet
  * (a technician added since the last decision) the engine's answer now.
  */
-export async function readTechnicianStanding(technicianId: number): Promise<TechnicianStandingDto> {
+export async function readTechnicianStanding(
+  technicianId: number,
+  viewer?: Express.User,
+): Promise<TechnicianStandingDto> {
   return db().transaction(async (transaction) => {
     const stored = await selectRows<StoredRow>(
       transaction,
@@ -54,12 +58,35 @@ export async function readTechnicianStanding(technicianId: number): Promise<Tech
         });
       }
     }
+    const visible = await visibleSetIds(technicianId, viewer, transaction);
     return {
       technicianId,
       baseline: against.find((a) => a.requirementSetId === null) ?? null,
       requirementSets: against
-        .filter((a) => a.requirementSetId !== null)
+        .filter((a) => a.requirementSetId !== null && (visible === "all" || visible.has(a.requirementSetId)))
         .sort((a, b) => a.name.localeCompare(b.name)),
     };
   });
+}
+
+/**
+ * A shop's requirement sets are its own business: the service side sees only the sets of shops that work with this
+ * technician (on their roster, directly or through the company, or through a work order); reviewers and admins see all.
+ */
+async function visibleSetIds(
+  technicianId: number,
+  viewer: Express.User | undefined,
+  transaction: Transaction,
+): Promise<"all" | Set<number>> {
+  if (!viewer || viewer.role === "reviewer" || viewer.role === "admin") return "all";
+  const rows = await selectRows<{ id: number }>(
+    transaction,
+    `SELECT rs.id FROM requirement_sets rs
+      WHERE rs.active AND rs.company_id IN (
+        SELECT re.shop_company_id FROM roster_entries re
+         WHERE re.technician_id = $1 OR re.service_company_id = (SELECT company_id FROM technicians WHERE id = $1)
+        UNION SELECT wo.shop_company_id FROM work_orders wo WHERE wo.technician_id = $1)`,
+    [technicianId],
+  );
+  return new Set(rows.map((r) => r.id));
 }

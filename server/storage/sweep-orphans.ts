@@ -22,6 +22,14 @@ async function deleteUnusedDocument(id: number): Promise<boolean> {
   }
 }
 
+async function isKnownHash(sha256: string): Promise<boolean> {
+  const rows = await db().query("SELECT 1 FROM documents WHERE sha256 = :sha256 LIMIT 1", {
+    replacements: { sha256 },
+    type: QueryTypes.SELECT,
+  });
+  return rows.length > 0;
+}
+
 export interface SweepReport {
   finishedMoves: number;
   removedIncoming: number;
@@ -64,7 +72,8 @@ export async function sweepOrphans(storage: FileStorage, now = Date.now()): Prom
     }
   }
   for await (const key of storage.keys()) {
-    if (!known.has(key)) {
+    // Another instance may have committed a row and its file since the rows were read: look again before removing.
+    if (!known.has(key) && !(await isKnownHash(key))) {
       await storage.remove(key);
       report.removedFiles += 1;
     }

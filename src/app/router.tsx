@@ -113,6 +113,12 @@ export const router = createBrowserRouter([
               { path: paths.admin.users, lazy: () => import("./routes/admin/users.tsx") },
               { path: paths.admin.catalogue, lazy: () => import("./routes/admin/catalogue.tsx") },
               { path: paths.admin.outbox, lazy: () => import("./routes/admin/outbox.tsx") },
+              { path: paths.admin.baseline, lazy: () => import("./routes/admin/baseline.tsx") },
+              { path: paths.admin.jobRuns, lazy: () => import("./routes/admin/job-runs.tsx") },
+              {
+                path: paths.admin.reportedReviews,
+                lazy: () => import("./routes/admin/reported-reviews.tsx"),
+              },
             ],
           },
         ],

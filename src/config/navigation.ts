@@ -29,6 +29,9 @@ export const navigationByRole: Record<Role, readonly NavItem[]> = {
     { label: "Users", to: paths.admin.users },
     { label: "Catalogue", to: paths.admin.catalogue },
     { label: "Outbox", to: paths.admin.outbox },
+    { label: "Baseline", to: paths.admin.baseline },
+    { label: "Job runs", to: paths.admin.jobRuns },
+    { label: "Reported reviews", to: paths.admin.reportedReviews },
   ],
 };
 

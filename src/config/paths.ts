@@ -46,6 +46,9 @@ export const paths = {
     users: "/admin/users",
     catalogue: "/admin/catalogue",
     outbox: "/admin/outbox",
+    baseline: "/admin/baseline",
+    jobRuns: "/admin/job-runs",
+    reportedReviews: "/admin/reviews",
   },
 } as const;
 

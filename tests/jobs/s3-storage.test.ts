@@ -1,5 +1,5 @@
 import { createHash } from "node:crypto";
-import { mkdtempSync, readdirSync, rmSync, writeFileSync, existsSync } from "node:fs";
+import { existsSync, mkdirSync, mkdtempSync, readdirSync, rmSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
 import { text } from "node:stream/consumers";
@@ -59,9 +59,9 @@ afterAll(async () => {
 
 describe("S3 storage driver", () => {
   let storage: FileStorage;
-  beforeAll(async () => {
+  beforeAll(() => {
     storage = storageIn(mkdtempSync(path.join(root, "driver-")));
-    (await import("node:fs")).mkdirSync(storage.incomingDir, { recursive: true });
+    mkdirSync(storage.incomingDir, { recursive: true });
   });
   afterEach(() => emptyBucket(storage));
 
@@ -128,8 +128,9 @@ describe("uploading through the API with the S3 driver", () => {
   beforeAll(() => {
     storage = storageIn(mkdtempSync(path.join(root, "api-")));
     (t.app.locals as { storage: FileStorage }).storage = storage;
+    // multer is built on the first upload from the storage's incoming folder; start from a fresh one.
     (t.app.locals as { uploader?: unknown }).uploader = undefined;
-    return import("node:fs").then((fs) => fs.mkdirSync(storage.incomingDir, { recursive: true }));
+    mkdirSync(storage.incomingDir, { recursive: true });
   });
   afterEach(async () => {
     vi.restoreAllMocks();

@@ -87,9 +87,15 @@ describe("requirement sets", () => {
       meeting: 1,
       notCleared: technicians - 1,
     });
+    // The service side sees a shop's sets once that shop works with the technician (here: its roster).
+    const hidden = await (
+      await signIn(t.app, meets.admin.email)
+    ).get(`/api/technicians/${meets.technician.id}/standing`);
+    await agent.post("/api/roster").send({ serviceCompanyId: meets.company.id }).expect(201);
     const standing = await (
       await signIn(t.app, meets.admin.email)
     ).get(`/api/technicians/${meets.technician.id}/standing`);
+    expect(hidden.body.requirementSets).toEqual([]);
     expect(standing.body.requirementSets).toEqual([
       expect.objectContaining({
         requirementSetId: created.body.id,

@@ -11,6 +11,8 @@ import { LapseTimelineChart } from "@/features/credentials/components/lapse-time
 import { byWeek, lapsingWithin } from "@/features/credentials/components/lapse-window.ts";
 import { LapsingTable } from "@/features/credentials/components/lapsing-table.tsx";
 import { openReturns } from "@/features/credentials/components/open-returns.ts";
+import { openLapses } from "@/features/credentials/components/open-lapses.ts";
+import { LapsedList } from "@/features/credentials/components/lapsed-list.tsx";
 import { ReturnedList } from "@/features/credentials/components/returned-list.tsx";
 import { queryClient } from "@/lib/query-client.ts";
 
@@ -32,13 +34,14 @@ export function Component() {
   const lapsing = useMemo(() => lapsingWithin(credentials, now, HORIZON_DAYS), [credentials, now]);
   const weeks = useMemo(() => byWeek(lapsing, now, HORIZON_WEEKS), [lapsing, now]);
   const returned = useMemo(() => openReturns(credentials), [credentials]);
+  const lapsed = useMemo(() => openLapses(credentials), [credentials]);
   const showsInsurance = credentials.some((c) => c.category === "insurance");
 
   return (
     <>
       <PageHeader
         title="Dashboard"
-        description="What lapses next and what was returned to you, soonest first."
+        description="What has lapsed, what lapses next and what was returned to you, soonest first."
         actions={
           <Link to={hrefs.documentNew()} className={buttonStyles("primary")}>
             Upload a document
@@ -54,12 +57,20 @@ export function Component() {
           <LapseTimelineChart weeks={weeks} />
           <LapsingTable credentials={lapsing} now={now} renewHref={renewHref} />
         </section>
-        <section aria-labelledby="returned-heading" className="space-y-3">
-          <h2 id="returned-heading" className="text-lg font-semibold text-ink-900">
-            Returned to you <span className="text-base font-normal text-ink-700">({returned.length})</span>
-          </h2>
-          <ReturnedList credentials={returned} correctionHref={renewHref} />
-        </section>
+        <div className="space-y-8">
+          <section aria-labelledby="lapsed-heading" className="space-y-3">
+            <h2 id="lapsed-heading" className="text-lg font-semibold text-ink-900">
+              Lapsed <span className="text-base font-normal text-ink-700">({lapsed.length})</span>
+            </h2>
+            <LapsedList credentials={lapsed} renewHref={renewHref} />
+          </section>
+          <section aria-labelledby="returned-heading" className="space-y-3">
+            <h2 id="returned-heading" className="text-lg font-semibold text-ink-900">
+              Returned to you <span className="text-base font-normal text-ink-700">({returned.length})</span>
+            </h2>
+            <ReturnedList credentials={returned} correctionHref={renewHref} />
+          </section>
+        </div>
       </div>
       {showsInsurance && <CautionNote className="mt-8" />}
     </>

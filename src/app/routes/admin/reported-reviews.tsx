@@ -1,0 +1,39 @@
+import { useSuspenseQuery } from "@tanstack/react-query";
+import { EmptyState } from "@/components/ui/empty-state.tsx";
+import { PageHeader } from "@/components/ui/page-header.tsx";
+import { reportedReviewsQuery } from "@/features/admin-reviews/api/get-reported-reviews.ts";
+import { ReportedReviewCard } from "@/features/admin-reviews/components/reported-review-card.tsx";
+import { queryClient } from "@/lib/query-client.ts";
+
+export async function loader() {
+  await queryClient.ensureQueryData(reportedReviewsQuery());
+  return null;
+}
+
+export function Component() {
+  const { data: reviews } = useSuspenseQuery(reportedReviewsQuery());
+  return (
+    <>
+      <PageHeader
+        title="Reported reviews"
+        description="Ratings a shop or a service company has reported to the platform, oldest report first."
+      />
+      <p className="mb-4 rounded-md border border-ink-100 bg-ink-50 px-4 py-3 text-sm text-ink-900">
+        <span className="font-semibold">Reviews are never deleted,</span> so there is no delete button here. A
+        rating is part of a technician&apos;s record of confirmed work; read the report and take it up with
+        the shop or the service company directly.
+      </p>
+      {reviews.length === 0 ? (
+        <EmptyState title="No reported reviews">Reviews that someone reports appear here.</EmptyState>
+      ) : (
+        <ul className="space-y-4">
+          {reviews.map((review) => (
+            <li key={review.id}>
+              <ReportedReviewCard review={review} />
+            </li>
+          ))}
+        </ul>
+      )}
+    </>
+  );
+}

@@ -1,0 +1,58 @@
+import { formatDateTime } from "@/lib/format-date-time.ts";
+import type { ReportedReview } from "../api/get-reported-reviews.ts";
+
+const MAX_STARS = 5;
+
+/** One reported review: the rating, the reply, and who reported it and why. */
+export function ReportedReviewCard({ review }: { review: ReportedReview }) {
+  const headingId = `reported-review-${review.id}`;
+  return (
+    <article aria-labelledby={headingId} className="space-y-3 rounded-lg border border-ink-100 bg-white p-4">
+      <header className="flex flex-wrap items-baseline justify-between gap-2">
+        <h2 id={headingId} className="font-semibold text-ink-900">
+          {review.technicianName || `Technician ${review.technicianId}`}{" "}
+          <span className="font-normal text-ink-700">· work order {review.workOrderId}</span>
+        </h2>
+        <p className="text-ink-900">
+          <span aria-hidden="true" className="text-accent-700">
+            {"★".repeat(review.stars)}
+            {"☆".repeat(MAX_STARS - review.stars)}
+          </span>{" "}
+          <span className="font-semibold">
+            {review.stars} out of {MAX_STARS}
+          </span>
+        </p>
+      </header>
+      <div>
+        <p className="text-sm text-ink-700">
+          By {review.authorName}, {review.shopName} ·{" "}
+          <time dateTime={review.createdAt}>{formatDateTime(review.createdAt)}</time>
+        </p>
+        <p className="mt-1 whitespace-pre-line text-ink-900">{review.body}</p>
+      </div>
+      {review.reply ? (
+        <div className="border-l-4 border-ink-300 pl-3">
+          <p className="text-sm font-semibold text-ink-900">
+            Reply from the service company
+            {review.repliedAt && (
+              <span className="font-normal text-ink-700">
+                {" "}
+                · <time dateTime={review.repliedAt}>{formatDateTime(review.repliedAt)}</time>
+              </span>
+            )}
+          </p>
+          <p className="whitespace-pre-line text-ink-900">{review.reply}</p>
+        </div>
+      ) : (
+        <p className="text-sm text-ink-700">No reply from the service company.</p>
+      )}
+      <div className="rounded-md border-l-4 border-red-700 bg-red-50 px-3 py-2">
+        <p className="text-sm font-semibold text-red-900">
+          Reported by {review.reportedBy.name || `user ${review.reportedBy.id}`} ·{" "}
+          <time dateTime={review.reportedAt}>{formatDateTime(review.reportedAt)}</time>
+        </p>
+        <p className="whitespace-pre-line text-sm text-ink-900">{review.reportReason}</p>
+      </div>
+    </article>
+  );
+}
