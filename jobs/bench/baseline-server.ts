@@ -14,7 +14,10 @@ app.get("/constant", (_req, res) => {
   res.json(body);
 });
 if (process.env.DATABASE_URL && process.env.DIRECTORY_SQL_FILE) {
-  const statements = JSON.parse(readFileSync(process.env.DIRECTORY_SQL_FILE, "utf8")) as Record<string, { sql: string; bind: unknown[] }>;
+  const statements = JSON.parse(readFileSync(process.env.DIRECTORY_SQL_FILE, "utf8")) as Record<
+    string,
+    { sql: string; bind: unknown[] }
+  >;
   // The same pool size as the app's Sequelize pool (server/db/sequelize.ts).
   const pool = new pg.Pool({ connectionString: process.env.DATABASE_URL, max: 10 });
   app.get("/directory/:name", async (req, res) => {

@@ -46,16 +46,56 @@ export function targetsOf(r: BenchResults): Target[] {
   const worstRatio = Math.min(...r.ratios.map((x) => x.b2OverB1));
   const page = r.http.find((h) => h.name.startsWith("technician page"))!;
   return [
-    { figure: "directory API p95 (worst of 3)", value: `${ms(worstDirectoryP95)} ms`, target: "<= 50 ms", met: worstDirectoryP95 <= 50 },
-    { figure: "B2/B1 requests/s (worst of 3)", value: worstRatio.toFixed(2), target: ">= 0.70", met: worstRatio >= 0.7 },
+    {
+      figure: "directory API p95 (worst of 3)",
+      value: `${ms(worstDirectoryP95)} ms`,
+      target: "<= 50 ms",
+      met: worstDirectoryP95 <= 50,
+    },
+    {
+      figure: "B2/B1 requests/s (worst of 3)",
+      value: worstRatio.toFixed(2),
+      target: ">= 0.70",
+      met: worstRatio >= 0.7,
+    },
     { figure: "technician page p95", value: `${ms(page.p95)} ms`, target: "<= 30 ms", met: page.p95 <= 30 },
-    { figure: "lapse job", value: `${(r.lapse.jobMs / 1000).toFixed(1)} s`, target: "<= 10 s", met: r.lapse.jobMs <= 10_000 },
+    {
+      figure: "lapse job",
+      value: `${(r.lapse.jobMs / 1000).toFixed(1)} s`,
+      target: "<= 10 s",
+      met: r.lapse.jobMs <= 10_000,
+    },
     { figure: "lapse job / floor", value: `${r.lapse.ratio}x`, target: "<= 3x", met: r.lapse.ratio <= 3 },
-    { figure: "upload-and-extract p95", value: `${r.upload.p95} ms`, target: "<= 300 ms", met: r.upload.p95 <= 300 },
-    { figure: "sign-in route JS (gzip)", value: `${r.client.signInRouteGzipKb} KB`, target: "<= 150 KB", met: r.client.signInRouteGzipKb <= 150 },
-    { figure: "all JS (gzip)", value: `${r.client.allJsGzipKb} KB`, target: "<= 450 KB", met: r.client.allJsGzipKb <= 450 },
-    { figure: "first directory results (LCP)", value: `${r.firstResults.lcpMs} ms`, target: "<= 1500 ms", met: r.firstResults.lcpMs <= 1500 },
-    { figure: "server peak RSS", value: `${r.serverPeakRssMb} MB`, target: "<= 300 MB", met: r.serverPeakRssMb <= 300 },
+    {
+      figure: "upload-and-extract p95",
+      value: `${r.upload.p95} ms`,
+      target: "<= 300 ms",
+      met: r.upload.p95 <= 300,
+    },
+    {
+      figure: "sign-in route JS (gzip)",
+      value: `${r.client.signInRouteGzipKb} KB`,
+      target: "<= 150 KB",
+      met: r.client.signInRouteGzipKb <= 150,
+    },
+    {
+      figure: "all JS (gzip)",
+      value: `${r.client.allJsGzipKb} KB`,
+      target: "<= 450 KB",
+      met: r.client.allJsGzipKb <= 450,
+    },
+    {
+      figure: "first directory results (LCP)",
+      value: `${r.firstResults.lcpMs} ms`,
+      target: "<= 1500 ms",
+      met: r.firstResults.lcpMs <= 1500,
+    },
+    {
+      figure: "server peak RSS",
+      value: `${r.serverPeakRssMb} MB`,
+      target: "<= 300 MB",
+      met: r.serverPeakRssMb <= 300,
+    },
   ];
 }
 
@@ -65,11 +105,16 @@ export function renderMarkdown(r: BenchResults): string {
     "",
     `Machine: ${r.machine.cpus} CPUs (${r.machine.cpuModel}), ${r.machine.memoryGb} GB, Node ${r.machine.node}, PostgreSQL ${r.machine.postgres}.`,
     `Load: autocannon, ${r.settings.connections} connections, ${r.settings.seconds} s each after ${r.settings.warmupSeconds} s of warm-up. Whole run ${Math.round(r.durationSeconds)} s.`,
-    `Data set: ${Object.entries(r.dataSet).map(([k, v]) => `${v} ${k}`).join(", ")}.`,
+    `Data set: ${Object.entries(r.dataSet)
+      .map(([k, v]) => `${v} ${k}`)
+      .join(", ")}.`,
     "",
     "| scenario | requests/s | p50 ms | p95 ms | p99 ms | non-2xx/errors |",
     "|---|---:|---:|---:|---:|---:|",
-    ...r.http.map((h) => `| ${h.name} | ${h.requestsPerSecond} | ${ms(h.p50)} | ${ms(h.p95)} | ${ms(h.p99)} | ${h.errors} |`),
+    ...r.http.map(
+      (h) =>
+        `| ${h.name} | ${h.requestsPerSecond} | ${ms(h.p50)} | ${ms(h.p95)} | ${ms(h.p99)} | ${h.errors} |`,
+    ),
     "",
     "| directory search | B2/B0 | B2/B1 |",
     "|---|---:|---:|",
@@ -77,7 +122,11 @@ export function renderMarkdown(r: BenchResults): string {
     "",
     `Lapse job as of ${r.lapse.asOf}: ${r.lapse.lapsed} lapsed, ${r.lapse.noticesCreated} notices, ${r.lapse.emailsQueued} e-mails queued, ` +
       `${r.lapse.changedStandings} standings changed, ${r.lapse.statements} statements, ${r.lapse.jobMs} ms ` +
-      `(steps ms: ${Object.entries(r.lapse.jobSteps).map(([k, v]) => `${k} ${v}`).join(", ")}); floor (one UPDATE, ${r.lapse.floorRows} rows) ${r.lapse.floorMs} ms; ratio ${r.lapse.ratio}x.`,
+      `(steps ms: ${Object.entries(r.lapse.jobSteps)
+        .map(([k, v]) => `${k} ${v}`)
+        .join(
+          ", ",
+        )}); floor (one UPDATE, ${r.lapse.floorRows} rows) ${r.lapse.floorMs} ms; ratio ${r.lapse.ratio}x.`,
     `Upload and extract (two-page certificate, ${r.upload.uploads} uploads one at a time): p50 ${r.upload.p50} ms, p95 ${r.upload.p95} ms. ` +
       `A ${(r.upload.bigFileBytes / 1024 / 1024).toFixed(2)} MB upload (answer ${r.upload.bigFileStatus}): server RSS ${r.upload.rssBeforeMb} MB -> peak ${r.upload.rssPeakMb} MB (+${r.upload.rssGrowthMb} MB).`,
     `Client: sign-in route JS ${r.client.signInRouteGzipKb} KB gzip (${r.client.signInFiles.length} files), all JS ${r.client.allJsGzipKb} KB gzip. ` +

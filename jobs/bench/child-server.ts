@@ -23,7 +23,11 @@ export function freePort(): Promise<number> {
 }
 
 /** Starts `node --import tsx <entry>` on a free port and waits until `healthPath` answers. */
-export async function startChildServer(entry: string, env: Record<string, string>, healthPath: string): Promise<ChildServer> {
+export async function startChildServer(
+  entry: string,
+  env: Record<string, string>,
+  healthPath: string,
+): Promise<ChildServer> {
   const port = await freePort();
   const child = spawn(process.execPath, ["--import", "tsx", path.resolve(benchSettings.root, entry)], {
     cwd: benchSettings.root,
@@ -38,7 +42,10 @@ export async function startChildServer(entry: string, env: Record<string, string
   const deadline = Date.now() + 60_000;
   for (;;) {
     if (child.exitCode !== null) throw new Error(`${entry} exited with ${child.exitCode}: ${stderr}`);
-    const ok = await fetch(url + healthPath).then((r) => r.ok, () => false);
+    const ok = await fetch(url + healthPath).then(
+      (r) => r.ok,
+      () => false,
+    );
     if (ok) break;
     if (Date.now() > deadline) throw new Error(`${entry} did not answer ${healthPath}: ${stderr}`);
     await new Promise((r) => setTimeout(r, 200));

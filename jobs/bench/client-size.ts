@@ -21,7 +21,11 @@ export interface ClientSize {
 export function buildClient(root: string, outDir: string, say: (l: string) => void): void {
   if (existsSync(path.join(outDir, ".vite", "manifest.json"))) return;
   say(`Building the client into ${outDir}...`);
-  const built = spawnSync(path.join(root, "node_modules", ".bin", "vite"), ["build", "--manifest", "--outDir", outDir, "--emptyOutDir"], { cwd: root, encoding: "utf8" });
+  const built = spawnSync(
+    path.join(root, "node_modules", ".bin", "vite"),
+    ["build", "--manifest", "--outDir", outDir, "--emptyOutDir"],
+    { cwd: root, encoding: "utf8" },
+  );
   if (built.status !== 0) throw new Error(`vite build failed: ${built.stderr || built.stdout}`);
 }
 
@@ -32,7 +36,10 @@ const gzipKb = (file: string) => gzipSync(readFileSync(file), { level: 9 }).leng
  * modules on the way (the auth layout and the sign-in page) with their static imports. Sizes are gzip level 9.
  */
 export function measureClientSize(outDir: string): ClientSize {
-  const manifest = JSON.parse(readFileSync(path.join(outDir, ".vite", "manifest.json"), "utf8")) as Record<string, ManifestChunk>;
+  const manifest = JSON.parse(readFileSync(path.join(outDir, ".vite", "manifest.json"), "utf8")) as Record<
+    string,
+    ManifestChunk
+  >;
   const needed = new Set<string>();
   const visit = (key: string) => {
     const chunk = manifest[key];
@@ -48,6 +55,11 @@ export function measureClientSize(outDir: string): ClientSize {
   const js = [...needed].filter((f) => f.endsWith(".js"));
   const assets = path.join(outDir, "assets");
   const all = readdirSync(assets).filter((f) => f.endsWith(".js"));
-  const sum = (files: string[]) => Math.round(files.reduce((n, f) => n + gzipKb(path.join(outDir, f)), 0) * 10) / 10;
-  return { signInRouteGzipKb: sum(js), allJsGzipKb: sum(all.map((f) => path.join("assets", f))), signInFiles: js };
+  const sum = (files: string[]) =>
+    Math.round(files.reduce((n, f) => n + gzipKb(path.join(outDir, f)), 0) * 10) / 10;
+  return {
+    signInRouteGzipKb: sum(js),
+    allJsGzipKb: sum(all.map((f) => path.join("assets", f))),
+    signInFiles: js,
+  };
 }

@@ -14,7 +14,14 @@ export const DIRECTORY_SEARCHES: { name: string; label: string; query: Record<st
   {
     name: "site-cards-gl",
     label: "site + 2 cards + mill + GL 1M/2M",
-    query: { siteId: "1", radiusKm: "400", credentialTypes: "arc_flash,lockout_tagout", technology: "mill", minEachOccurrence: "1000000", minAggregate: "2000000" },
+    query: {
+      siteId: "1",
+      radiusKm: "400",
+      credentialTypes: "arc_flash,lockout_tagout",
+      technology: "mill",
+      minEachOccurrence: "1000000",
+      minAggregate: "2000000",
+    },
   },
   {
     name: "oem-rating",
@@ -32,8 +39,17 @@ export interface CapturedStatement {
  * Runs the server's own directory search in this process and records the statements it sends, so the EXPLAIN and the
  * pg-only ceiling (B1) use exactly the SQL the API runs, not a copy that could drift.
  */
-export async function captureDirectoryStatements(sequelize: Sequelize): Promise<Record<string, CapturedStatement>> {
-  const buyer = { id: IDS.buyerUser(BENCH_BUYER.ordinal), email: BENCH_BUYER.email, name: "Buyer 1", role: "buyer" as const, companyId: IDS.shopCompany(BENCH_BUYER.ordinal), technicianId: null };
+export async function captureDirectoryStatements(
+  sequelize: Sequelize,
+): Promise<Record<string, CapturedStatement>> {
+  const buyer = {
+    id: IDS.buyerUser(BENCH_BUYER.ordinal),
+    email: BENCH_BUYER.email,
+    name: "Buyer 1",
+    role: "buyer" as const,
+    companyId: IDS.shopCompany(BENCH_BUYER.ordinal),
+    technicianId: null,
+  };
   const original = sequelize.query.bind(sequelize);
   const seen: CapturedStatement[] = [];
   (sequelize as unknown as { query: unknown }).query = (sql: string, options?: { bind?: unknown[] }) => {
@@ -47,8 +63,12 @@ export async function captureDirectoryStatements(sequelize: Sequelize): Promise<
       const page = await searchDirectory(buyer, directoryQuerySchema.parse(search.query));
       const main = seen.find((s) => typeof s.sql === "string" && s.sql.includes("ORDER BY x.sort_key"));
       if (!main) throw new Error(`no directory statement captured for ${search.name}`);
-      if (page.rows.length === 0) throw new Error(`directory search ${search.name} found nobody in the large data set`);
-      out[search.name] = { sql: main.sql, bind: main.bind.map((v) => (v instanceof Date ? v.toISOString() : v)) };
+      if (page.rows.length === 0)
+        throw new Error(`directory search ${search.name} found nobody in the large data set`);
+      out[search.name] = {
+        sql: main.sql,
+        bind: main.bind.map((v) => (v instanceof Date ? v.toISOString() : v)),
+      };
     }
   } finally {
     (sequelize as unknown as { query: unknown }).query = original;
@@ -57,15 +77,24 @@ export async function captureDirectoryStatements(sequelize: Sequelize): Promise<
 }
 
 /** EXPLAIN (ANALYZE, BUFFERS) of each statement, run twice so the saved plan is the warm one. */
-export async function explainStatements(url: string, statements: Record<string, CapturedStatement>, file: string): Promise<string> {
+export async function explainStatements(
+  url: string,
+  statements: Record<string, CapturedStatement>,
+  file: string,
+): Promise<string> {
   const client = new pg.Client({ connectionString: url });
   await client.connect();
   const parts: string[] = [];
   try {
     for (const [name, s] of Object.entries(statements)) {
       await client.query(`EXPLAIN (ANALYZE) ${s.sql}`, s.bind);
-      const { rows } = await client.query<{ "QUERY PLAN": string }>(`EXPLAIN (ANALYZE, BUFFERS) ${s.sql}`, s.bind);
-      parts.push(`### ${name}\n${s.sql}\n-- bind: ${JSON.stringify(s.bind)}\n\n${rows.map((r) => r["QUERY PLAN"]).join("\n")}\n`);
+      const { rows } = await client.query<{ "QUERY PLAN": string }>(
+        `EXPLAIN (ANALYZE, BUFFERS) ${s.sql}`,
+        s.bind,
+      );
+      parts.push(
+        `### ${name}\n${s.sql}\n-- bind: ${JSON.stringify(s.bind)}\n\n${rows.map((r) => r["QUERY PLAN"]).join("\n")}\n`,
+      );
     }
   } finally {
     await client.end();
@@ -77,7 +106,15 @@ export async function explainStatements(url: string, statements: Record<string, 
 
 /** Large tables read by a sequential scan anywhere in the saved plans (the hot path must have none). */
 export function seqScansOfLargeTables(planText: string): string[] {
-  const large = ["credentials", "technicians", "technician_standings", "work_orders", "job_reviews", "notices", "audit_events"];
+  const large = [
+    "credentials",
+    "technicians",
+    "technician_standings",
+    "work_orders",
+    "job_reviews",
+    "notices",
+    "audit_events",
+  ];
   const found = new Set<string>();
   for (const m of planText.matchAll(/Seq Scan on (\w+)/g)) if (large.includes(m[1]!)) found.add(m[1]!);
   return [...found];

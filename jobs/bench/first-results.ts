@@ -9,15 +9,32 @@ export interface FirstResultsTiming {
 }
 
 /** Headless Debian Chromium on loopback: sign in as the buyer (API), then open the directory for a site. */
-export async function measureFirstResults(baseUrl: string, email: string, password: string, siteId: number): Promise<FirstResultsTiming> {
+export async function measureFirstResults(
+  baseUrl: string,
+  email: string,
+  password: string,
+  siteId: number,
+): Promise<FirstResultsTiming> {
   const browser = await chromium.launch({
     executablePath: "/usr/bin/chromium",
     headless: true,
-    args: ["--headless", "--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"],
+    args: [
+      "--headless",
+      "--no-sandbox",
+      "--disable-gpu",
+      "--disable-quic",
+      "--no-first-run",
+      "--disable-background-networking",
+      "--disable-component-update",
+      "--disable-sync",
+    ],
   });
   try {
     // The production server sets a Secure cookie only for requests that came through TLS (see BEHIND_TLS_PROXY).
-    const context = await browser.newContext({ viewport: { width: 1280, height: 800 }, extraHTTPHeaders: { "x-forwarded-proto": "https" } });
+    const context = await browser.newContext({
+      viewport: { width: 1280, height: 800 },
+      extraHTTPHeaders: { "x-forwarded-proto": "https" },
+    });
     const signedIn = await context.request.post(`${baseUrl}/api/auth/sign-in`, {
       headers: { [CSRF_HEADER]: CSRF_HEADER_VALUE },
       data: { email, password },
@@ -32,7 +49,10 @@ export async function measureFirstResults(baseUrl: string, email: string, passwo
       }).observe({ type: "largest-contentful-paint", buffered: true });
     });
     await page.goto(`${baseUrl}/directory?siteId=${siteId}`);
-    await page.locator('[aria-label="Cleared technicians"] li, table tbody tr').first().waitFor({ state: "visible", timeout: 30_000 });
+    await page
+      .locator('[aria-label="Cleared technicians"] li, table tbody tr')
+      .first()
+      .waitFor({ state: "visible", timeout: 30_000 });
     const resultsVisibleMs = await page.evaluate(() => performance.now());
     // LCP is reported after the paint; give the observer a frame or two.
     await page.waitForTimeout(300);

@@ -47,7 +47,10 @@ function run(target: LoadTarget, seconds: number, record?: (ms: number, status: 
       },
     ],
   }) as unknown as EventEmitter & Promise<autocannon.Result>;
-  if (record) instance.on("response", (_client: unknown, status: number, _bytes: number, responseTime: number) => record(responseTime, status));
+  if (record)
+    instance.on("response", (_client: unknown, status: number, _bytes: number, responseTime: number) =>
+      record(responseTime, status),
+    );
   return instance;
 }
 

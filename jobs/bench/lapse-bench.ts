@@ -39,18 +39,31 @@ async function dropDatabase(clusterUrl: string, name: string): Promise<void> {
 }
 
 /** The set-based floor: one hand-written UPDATE doing the same marking, nothing else. */
-const FLOOR_SQL = "UPDATE credentials SET state = 'lapsed', updated_at = CURRENT_TIMESTAMP WHERE state = 'verified' AND lapses_at <= $1";
+const FLOOR_SQL =
+  "UPDATE credentials SET state = 'lapsed', updated_at = CURRENT_TIMESTAMP WHERE state = 'verified' AND lapses_at <= $1";
 
 /**
  * The daily job over the 300,000 credentials against its floor, each on a fresh copy of the large database (CREATE
  * DATABASE ... TEMPLATE) so both see the same rows; then its statements replayed under EXPLAIN (ANALYZE, BUFFERS) on a
  * third copy, in order, in one transaction that is rolled back.
  */
-export async function benchLapseJob(clusterUrl: string, template: string, asOf: Date, explainPath: string, say: (l: string) => void): Promise<LapseBenchResult> {
+export async function benchLapseJob(
+  clusterUrl: string,
+  template: string,
+  asOf: Date,
+  explainPath: string,
+  say: (l: string) => void,
+): Promise<LapseBenchResult> {
   const [jobUrl, floorUrl, explainUrl] = await Promise.all(
-    ["bench_lapse_job", "bench_lapse_floor", "bench_lapse_explain"].map((n) => copyDatabase(clusterUrl, template, n)),
+    ["bench_lapse_job", "bench_lapse_floor", "bench_lapse_explain"].map((n) =>
+      copyDatabase(clusterUrl, template, n),
+    ),
   );
-  const sequelize = new Sequelize(jobUrl!, { dialect: "postgres", logging: false, define: { underscored: true } });
+  const sequelize = new Sequelize(jobUrl!, {
+    dialect: "postgres",
+    logging: false,
+    define: { underscored: true },
+  });
   const original = sequelize.query.bind(sequelize);
   const statements: { sql: string; bind: unknown[] }[] = [];
   (sequelize as unknown as { query: unknown }).query = (sql: string, options?: { bind?: unknown[] }) => {
@@ -61,10 +74,15 @@ export async function benchLapseJob(clusterUrl: string, template: string, asOf: 
     await sequelize.authenticate();
     statements.length = 0;
     const t0 = performance.now();
-    const report = await runLapseJob({ asOf }, { sequelize, warningDays: WARNING_DAYS, publicUrl: "http://127.0.0.1" });
+    const report = await runLapseJob(
+      { asOf },
+      { sequelize, warningDays: WARNING_DAYS, publicUrl: "http://127.0.0.1" },
+    );
     const jobMs = performance.now() - t0;
     if (report.skipped) throw new Error("the lapse job skipped: another run holds the lock");
-    say(`  lapse job: ${report.lapsed} lapsed, ${report.noticesCreated} notices, ${report.emailsQueued} e-mails, ${report.changedStandings.length} standings changed in ${Math.round(jobMs)} ms`);
+    say(
+      `  lapse job: ${report.lapsed} lapsed, ${report.noticesCreated} notices, ${report.emailsQueued} e-mails, ${report.changedStandings.length} standings changed in ${Math.round(jobMs)} ms`,
+    );
 
     const floor = new pg.Client({ connectionString: floorUrl });
     await floor.connect();
@@ -90,11 +108,16 @@ export async function benchLapseJob(clusterUrl: string, template: string, asOf: 
     };
   } finally {
     await sequelize.close();
-    for (const n of ["bench_lapse_job", "bench_lapse_floor", "bench_lapse_explain"]) await dropDatabase(clusterUrl, n);
+    for (const n of ["bench_lapse_job", "bench_lapse_floor", "bench_lapse_explain"])
+      await dropDatabase(clusterUrl, n);
   }
 }
 
-async function explainReplay(url: string, statements: { sql: string; bind: unknown[] }[], file: string): Promise<void> {
+async function explainReplay(
+  url: string,
+  statements: { sql: string; bind: unknown[] }[],
+  file: string,
+): Promise<void> {
   const client = new pg.Client({ connectionString: url });
   await client.connect();
   const parts: string[] = [];
@@ -108,8 +131,13 @@ async function explainReplay(url: string, statements: { sql: string; bind: unkno
         await client.query(s.sql, s.bind);
         continue;
       }
-      const { rows } = await client.query<{ "QUERY PLAN": string }>(`EXPLAIN (ANALYZE, BUFFERS) ${s.sql}`, s.bind);
-      parts.push(`### statement\n${short}\n-- bind: ${bindText}\n\n${rows.map((r) => r["QUERY PLAN"]).join("\n")}\n`);
+      const { rows } = await client.query<{ "QUERY PLAN": string }>(
+        `EXPLAIN (ANALYZE, BUFFERS) ${s.sql}`,
+        s.bind,
+      );
+      parts.push(
+        `### statement\n${short}\n-- bind: ${bindText}\n\n${rows.map((r) => r["QUERY PLAN"]).join("\n")}\n`,
+      );
     }
   } finally {
     await client.query("ROLLBACK").catch(() => undefined);

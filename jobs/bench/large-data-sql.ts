@@ -1,4 +1,13 @@
-import { BUILDERS, COMPANY_WORDS, FIRST_NAMES, INSURERS, LAST_NAMES, SERVICE_SUFFIXES, SHOP_SUFFIXES, sqlTextArray } from "./large-data-names.ts";
+import {
+  BUILDERS,
+  COMPANY_WORDS,
+  FIRST_NAMES,
+  INSURERS,
+  LAST_NAMES,
+  SERVICE_SUFFIXES,
+  SHOP_SUFFIXES,
+  sqlTextArray,
+} from "./large-data-names.ts";
 
 /** Sizes of the large data set (issue 7 point 1). */
 export const LARGE = {
@@ -33,10 +42,29 @@ export const IDS = {
 const PAIRS = BUILDERS.flatMap((b) => b.controls.map((c) => ({ builder: b.name, control: c })));
 const BUILDER_OF_PAIR = sqlTextArray(PAIRS.map((p) => p.builder));
 const CONTROL_OF_PAIR = sqlTextArray(PAIRS.map((p) => p.control));
-const TECHNOLOGIES = sqlTextArray(["mill", "lathe", "mill_turn", "wire_edm", "sinker_edm", "grinder", "laser", "waterjet", "press_brake", "router"]);
+const TECHNOLOGIES = sqlTextArray([
+  "mill",
+  "lathe",
+  "mill_turn",
+  "wire_edm",
+  "sinker_edm",
+  "grinder",
+  "laser",
+  "waterjet",
+  "press_brake",
+  "router",
+]);
 const TECHNICIAN_KINDS = sqlTextArray([
-  "osha_10", "arc_flash", "lockout_tagout", "first_aid_cpr", "oem_training",
-  "powered_truck", "oem_training", "confined_space", "lockout_tagout", "arc_flash",
+  "osha_10",
+  "arc_flash",
+  "lockout_tagout",
+  "first_aid_cpr",
+  "oem_training",
+  "powered_truck",
+  "oem_training",
+  "confined_space",
+  "lockout_tagout",
+  "arc_flash",
 ]);
 
 /** pick(array, r): one element for a uniform r in [0, 1). */

@@ -11,7 +11,14 @@ import { startBenchCluster, withDatabase } from "./bench-cluster.ts";
 import { machineInfo, renderMarkdown, type BenchResults } from "./bench-report.ts";
 import { startChildServer } from "./child-server.ts";
 import { buildClient, measureClientSize } from "./client-size.ts";
-import { BENCH_BUYER, captureDirectoryStatements, DIRECTORY_SEARCHES, explainStatements, explainFile, seqScansOfLargeTables } from "./directory-searches.ts";
+import {
+  BENCH_BUYER,
+  captureDirectoryStatements,
+  DIRECTORY_SEARCHES,
+  explainStatements,
+  explainFile,
+  seqScansOfLargeTables,
+} from "./directory-searches.ts";
 import { measureFirstResults } from "./first-results.ts";
 import { measureLoad, type LoadResult } from "./http-load.ts";
 import { benchLapseJob } from "./lapse-bench.ts";
@@ -37,10 +44,15 @@ process.on("uncaughtException", (err) => {
   void Promise.allSettled(stopAll.map((stop) => stop())).then(() => process.exit(1));
 });
 const scratch = mkdtempSync(path.join(tmpdir(), "clearbench-bench-"));
-const stopAll: (() => Promise<void> | void)[] = [() => cluster.stop(), () => rmSync(scratch, { recursive: true, force: true })];
+const stopAll: (() => Promise<void> | void)[] = [
+  () => cluster.stop(),
+  () => rmSync(scratch, { recursive: true, force: true }),
+];
 try {
   const largeUrl = withDatabase(cluster.url, benchSettings.database);
-  const info = (await readSeedInfo(cluster.url, benchSettings.database)) ?? (await seedLargeDataSet(cluster.url, benchSettings.database, say));
+  const info =
+    (await readSeedInfo(cluster.url, benchSettings.database)) ??
+    (await seedLargeDataSet(cluster.url, benchSettings.database, say));
   const migrator = new Sequelize(largeUrl, { dialect: "postgres", logging: false });
   const applied = await migrate(migrator);
   await migrator.close();
@@ -48,14 +60,28 @@ try {
 
   // The job first: its copies need the template database free of connections.
   const lapseAsOf = new Date(info.anchor.getTime() + 7 * DAY + 6 * 3_600_000);
-  say(`Lapse job against its floor (as of ${lapseAsOf.toISOString()}: a week of lapses on the large data set)...`);
-  const lapse = await benchLapseJob(cluster.url, benchSettings.database, lapseAsOf, out("explain-lapse-job.txt"), say);
+  say(
+    `Lapse job against its floor (as of ${lapseAsOf.toISOString()}: a week of lapses on the large data set)...`,
+  );
+  const lapse = await benchLapseJob(
+    cluster.url,
+    benchSettings.database,
+    lapseAsOf,
+    out("explain-lapse-job.txt"),
+    say,
+  );
 
   say("Directory SQL captured from the server's search code; EXPLAIN (ANALYZE, BUFFERS)...");
   initModels(connectDatabase(largeUrl));
   const statements = await captureDirectoryStatements(db());
-  const plans = await explainStatements(largeUrl, statements, explainFile(benchSettings.resultsDir, "directory"));
-  const [pgVersion] = await db().query<{ server_version: string }>("SHOW server_version", { type: "SELECT" as never });
+  const plans = await explainStatements(
+    largeUrl,
+    statements,
+    explainFile(benchSettings.resultsDir, "directory"),
+  );
+  const [pgVersion] = await db().query<{ server_version: string }>("SHOW server_version", {
+    type: "SELECT" as never,
+  });
   await db().close();
   const seqScans = seqScansOfLargeTables(plans);
   const statementsFile = path.join(scratch, "directory-statements.json");
@@ -70,16 +96,26 @@ try {
     say(`  ${target.name}...`);
     const r = await measureLoad(target);
     http.push(r);
-    say(`    ${r.requestsPerSecond} req/s, p50 ${r.p50} ms, p95 ${r.p95} ms, p99 ${r.p99} ms, errors ${r.errors}`);
+    say(
+      `    ${r.requestsPerSecond} req/s, p50 ${r.p50} ms, p95 ${r.p95} ms, p99 ${r.p99} ms, errors ${r.errors}`,
+    );
     return r;
   };
 
   say("Ceilings: B0 bare Express, B1 the directory SQL with pg alone...");
-  const baseline = await startChildServer("jobs/bench/baseline-server.ts", { DATABASE_URL: largeUrl, DIRECTORY_SQL_FILE: statementsFile }, "/health");
+  const baseline = await startChildServer(
+    "jobs/bench/baseline-server.ts",
+    { DATABASE_URL: largeUrl, DIRECTORY_SQL_FILE: statementsFile },
+    "/health",
+  );
   stopAll.unshift(() => baseline.stop());
   const b0 = await measure({ name: "B0 bare Express, constant JSON", url: `${baseline.url}/constant` });
   const b1: Record<string, LoadResult> = {};
-  for (const s of DIRECTORY_SEARCHES) b1[s.name] = await measure({ name: `B1 pg only: ${s.label}`, url: `${baseline.url}/directory/${s.name}` });
+  for (const s of DIRECTORY_SEARCHES)
+    b1[s.name] = await measure({
+      name: `B1 pg only: ${s.label}`,
+      url: `${baseline.url}/directory/${s.name}`,
+    });
   await baseline.stop();
 
   say("The server in production mode...");
@@ -106,10 +142,20 @@ try {
   const ratios: BenchResults["ratios"] = [];
   for (const s of DIRECTORY_SEARCHES) {
     const query = new URLSearchParams(s.query).toString();
-    const b2 = await measure({ name: `B2 directory API: ${s.label}`, url: `${server.url}/api/directory?${query}`, headers: buyer });
-    ratios.push({ name: s.label, b2OverB0: b2.requestsPerSecond / b0.requestsPerSecond, b2OverB1: b2.requestsPerSecond / b1[s.name]!.requestsPerSecond });
+    const b2 = await measure({
+      name: `B2 directory API: ${s.label}`,
+      url: `${server.url}/api/directory?${query}`,
+      headers: buyer,
+    });
+    ratios.push({
+      name: s.label,
+      b2OverB0: b2.requestsPerSecond / b0.requestsPerSecond,
+      b2OverB1: b2.requestsPerSecond / b1[s.name]!.requestsPerSecond,
+    });
   }
-  const firstPage = (await (await fetch(`${server.url}/api/directory?siteId=${BENCH_BUYER.siteId}&limit=20`, { headers: buyer })).json()) as { rows: { technicianId: number }[] };
+  const firstPage = (await (
+    await fetch(`${server.url}/api/directory?siteId=${BENCH_BUYER.siteId}&limit=20`, { headers: buyer })
+  ).json()) as { rows: { technicianId: number }[] };
   await measure({
     name: "technician page API",
     url: server.url,
@@ -122,22 +168,42 @@ try {
     url: `${server.url}/api/auth/sign-in`,
     method: "POST",
     headers: { "content-type": "application/json", "x-clearbench-csrf": "1", ...BEHIND_TLS_PROXY },
-    bodies: Array.from({ length: LARGE.shops }, (_v, i) => JSON.stringify({ email: `buyer-${i + 1}@shop.large.test`, password: LARGE_PASSWORD })),
+    bodies: Array.from({ length: LARGE.shops }, (_v, i) =>
+      JSON.stringify({ email: `buyer-${i + 1}@shop.large.test`, password: LARGE_PASSWORD }),
+    ),
   });
 
   say("Uploads...");
   const upload = await benchUploads(server.url, office, server.pid, benchSettings.uploads);
   say(`  p50 ${upload.p50} ms, p95 ${upload.p95} ms; 10 MB upload: +${upload.rssGrowthMb} MB RSS`);
   say("Chromium: first directory results...");
-  const firstResults = await measureFirstResults(server.url, BENCH_BUYER.email, LARGE_PASSWORD, BENCH_BUYER.siteId);
+  const firstResults = await measureFirstResults(
+    server.url,
+    BENCH_BUYER.email,
+    LARGE_PASSWORD,
+    BENCH_BUYER.siteId,
+  );
   const serverPeakRssMb = Math.round(rss.stop());
   await server.stop();
 
   const results: BenchResults = {
     finishedAt: new Date().toISOString(),
     machine: machineInfo(pgVersion?.server_version ?? "unknown"),
-    settings: { seconds: benchSettings.seconds, warmupSeconds: benchSettings.warmupSeconds, connections: benchSettings.connections },
-    dataSet: { "service companies": LARGE.serviceCompanies, technicians: LARGE.technicians, credentials: LARGE.credentials, shops: LARGE.shops, sites: LARGE.sites, "work orders": LARGE.workOrders, reviews: LARGE.reviews, anchor: info.anchor.toISOString().slice(0, 10) },
+    settings: {
+      seconds: benchSettings.seconds,
+      warmupSeconds: benchSettings.warmupSeconds,
+      connections: benchSettings.connections,
+    },
+    dataSet: {
+      "service companies": LARGE.serviceCompanies,
+      technicians: LARGE.technicians,
+      credentials: LARGE.credentials,
+      shops: LARGE.shops,
+      sites: LARGE.sites,
+      "work orders": LARGE.workOrders,
+      reviews: LARGE.reviews,
+      anchor: info.anchor.toISOString().slice(0, 10),
+    },
     http,
     ratios,
     lapse,

@@ -24,14 +24,22 @@ async function upload(baseUrl: string, headers: Record<string, string>, bytes: U
   return { ms: performance.now() - t0, status: res.status, found: body.extraction?.found?.length ?? 0 };
 }
 
-const pct = (sorted: number[], p: number) => sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)]!;
+const pct = (sorted: number[], p: number) =>
+  sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)]!;
 
 /**
  * Upload-and-extract of generated two-page certificates, one at a time (each a different PDF, so each is hashed, read
  * and stored), then one file just under the 10 MB limit while the server's RSS is sampled.
  */
-export async function benchUploads(baseUrl: string, headers: Record<string, string>, serverPid: number, count: number): Promise<UploadBenchResult> {
-  const pdfs = await Promise.all(Array.from({ length: count + 3 }, (_v, i) => buildCertificatePdf({ seed: 7000 + i, pages: 2 })));
+export async function benchUploads(
+  baseUrl: string,
+  headers: Record<string, string>,
+  serverPid: number,
+  count: number,
+): Promise<UploadBenchResult> {
+  const pdfs = await Promise.all(
+    Array.from({ length: count + 3 }, (_v, i) => buildCertificatePdf({ seed: 7000 + i, pages: 2 })),
+  );
   for (const warm of pdfs.slice(0, 3)) await upload(baseUrl, headers, warm.bytes, "warm-up.pdf");
   const times: number[] = [];
   let fieldsFound = 0;

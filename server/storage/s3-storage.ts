@@ -36,7 +36,10 @@ function checkedKey(key: string): string {
 }
 
 function isNotFound(err: unknown): boolean {
-  return err instanceof S3ServiceException && (err.$metadata.httpStatusCode === 404 || err.name === "NotFound" || err.name === "NoSuchKey");
+  return (
+    err instanceof S3ServiceException &&
+    (err.$metadata.httpStatusCode === 404 || err.name === "NotFound" || err.name === "NoSuchKey")
+  );
 }
 
 /**
@@ -76,7 +79,12 @@ export function createS3Storage(options: S3StorageOptions): FileStorage {
       if (!(await exists(key))) {
         const { size } = await stat(tempPath);
         await client.send(
-          new PutObjectCommand({ Bucket, Key: checkedKey(key), Body: createReadStream(tempPath), ContentLength: size }),
+          new PutObjectCommand({
+            Bucket,
+            Key: checkedKey(key),
+            Body: createReadStream(tempPath),
+            ContentLength: size,
+          }),
         );
       }
       await rm(tempPath, { force: true });
@@ -92,7 +100,9 @@ export function createS3Storage(options: S3StorageOptions): FileStorage {
     async *keys() {
       let ContinuationToken: string | undefined;
       do {
-        const page = await client.send(new ListObjectsV2Command({ Bucket, Prefix: PREFIX, ContinuationToken }));
+        const page = await client.send(
+          new ListObjectsV2Command({ Bucket, Prefix: PREFIX, ContinuationToken }),
+        );
         for (const object of page.Contents ?? []) {
           const key = object.Key?.slice(PREFIX.length);
           if (key && KEY.test(key)) yield key;

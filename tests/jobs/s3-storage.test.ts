@@ -24,7 +24,14 @@ let t: TestApp;
 const sha256 = (body: string) => createHash("sha256").update(body).digest("hex");
 
 function storageIn(dir: string): FileStorage {
-  return createS3Storage({ endpoint, bucket: BUCKET, region: "us-east-1", ...CREDENTIALS, forcePathStyle: true, incomingDir: path.join(dir, "incoming") });
+  return createS3Storage({
+    endpoint,
+    bucket: BUCKET,
+    region: "us-east-1",
+    ...CREDENTIALS,
+    forcePathStyle: true,
+    incomingDir: path.join(dir, "incoming"),
+  });
 }
 
 function incomingFile(storage: FileStorage, body: string): string {
@@ -45,7 +52,13 @@ async function emptyBucket(storage: FileStorage) {
 
 beforeAll(async () => {
   root = mkdtempSync(path.join(tmpdir(), "clearbench-s3-"));
-  s3 = new S3rver({ address: "127.0.0.1", port: 0, silent: true, directory: path.join(root, "s3"), configureBuckets: [{ name: BUCKET, configs: [] }] });
+  s3 = new S3rver({
+    address: "127.0.0.1",
+    port: 0,
+    silent: true,
+    directory: path.join(root, "s3"),
+    configureBuckets: [{ name: BUCKET, configs: [] }],
+  });
   const { address, port } = await s3.run();
   endpoint = `http://${address}:${port}`;
   t = buildTestApp();
@@ -112,7 +125,11 @@ describe("S3 storage driver", () => {
       asked.push(input.ContinuationToken);
       return input.ContinuationToken
         ? { Contents: [{ Key: `store/${second}` }], IsTruncated: false }
-        : { Contents: [{ Key: `store/${first}` }, { Key: "store/not-a-hash.txt" }], IsTruncated: true, NextContinuationToken: "page-2" };
+        : {
+            Contents: [{ Key: `store/${first}` }, { Key: "store/not-a-hash.txt" }],
+            IsTruncated: true,
+            NextContinuationToken: "page-2",
+          };
     });
 
     const keys = await allKeys(storage);
@@ -141,7 +158,10 @@ describe("uploading through the API with the S3 driver", () => {
     const { admin } = await buildProvider(t.app);
     const { bytes } = await buildCertificatePdf({ seed: 4101 });
 
-    const res = await admin.post("/api/documents").field("typeCode", "general_liability").attach("file", Buffer.from(bytes), "certificate.pdf");
+    const res = await admin
+      .post("/api/documents")
+      .field("typeCode", "general_liability")
+      .attach("file", Buffer.from(bytes), "certificate.pdf");
 
     expect(res.status).toBe(201);
     expect(await storage.exists(res.body.document.sha256)).toBe(true);
@@ -153,11 +173,17 @@ describe("uploading through the API with the S3 driver", () => {
     const { bytes } = await buildCertificatePdf({ seed: 4102 });
     vi.spyOn(Document, "create").mockRejectedValueOnce(new Error("simulated database failure"));
 
-    const res = await admin.post("/api/documents").field("typeCode", "general_liability").attach("file", Buffer.from(bytes), "certificate.pdf");
+    const res = await admin
+      .post("/api/documents")
+      .field("typeCode", "general_liability")
+      .attach("file", Buffer.from(bytes), "certificate.pdf");
 
     expect(res.status).toBe(500);
     expect(await allKeys(storage)).toEqual([]);
-    const [row] = await sequelize().query<{ n: number }>("SELECT count(*)::int AS n FROM documents WHERE company_id = $1", { bind: [company.id], type: "SELECT" as never });
+    const [row] = await sequelize().query<{ n: number }>(
+      "SELECT count(*)::int AS n FROM documents WHERE company_id = $1",
+      { bind: [company.id], type: "SELECT" as never },
+    );
     expect(row?.n).toBe(0);
     expect(readdirSync(storage.incomingDir)).toEqual([]);
   });
