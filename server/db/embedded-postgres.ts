@@ -52,6 +52,12 @@ function runAsOwner(bin: string, args: string[]): void {
   if (result.status !== 0) throw new Error(`${path.basename(bin)} failed: ${result.stderr || result.stdout}`);
 }
 
+function isRunning(bin: string, dataDir: string): boolean {
+  const command = isRoot() ? "runuser" : path.join(bin, "pg_ctl");
+  const args = isRoot() ? ["-u", "postgres", "--", path.join(bin, "pg_ctl"), "-D", dataDir, "status"] : ["-D", dataDir, "status"];
+  return spawnSync(command, args).status === 0;
+}
+
 /** True when the postgres user can reach the folder (not so under a private 0700 parent). */
 function reachableByPostgres(dir: string): boolean {
   if (!isRoot()) return true;
@@ -96,6 +102,11 @@ export async function startEmbeddedPostgres({
       "--locale=C.UTF-8",
       "--no-sync",
     ]);
+  }
+  if (isRunning(bin, dataDir)) {
+    // Left running by an earlier run that was killed: take it over, so this run owns it and stops it at the end.
+    say("Stopping a PostgreSQL left running by an earlier run...");
+    runAsOwner(path.join(bin, "pg_ctl"), ["-D", dataDir, "-m", "fast", "-w", "stop"]);
   }
   runAsOwner(path.join(bin, "pg_ctl"), [
     "-D",
