@@ -1,18 +1,14 @@
-import { useState } from "react";
-import { useQuery, useSuspenseQuery } from "@tanstack/react-query";
+import { useSuspenseQuery } from "@tanstack/react-query";
 import { Link, useParams, type LoaderFunctionArgs } from "react-router-dom";
 import { hrefs } from "@/config/paths.ts";
 import { Button } from "@/components/ui/button.tsx";
 import { buttonStyles } from "@/components/ui/button-styles.ts";
 import { EmptyState } from "@/components/ui/empty-state.tsx";
 import { PageHeader } from "@/components/ui/page-header.tsx";
-import { Spinner } from "@/components/ui/spinner.tsx";
 import type { Credential } from "@/features/credentials/api/credential-shapes.ts";
 import { credentialsQuery } from "@/features/credentials/api/get-credentials.ts";
 import { CredentialsTable } from "@/features/credentials/components/credentials-table.tsx";
-import { FormError } from "@/components/ui/form-error.tsx";
-import { technicianStandingQuery } from "@/features/standing/api/get-technician-standing.ts";
-import { StandingPanel } from "@/features/standing/components/standing-panel.tsx";
+import { StandingSection } from "@/features/standing/components/standing-section.tsx";
 import { useDeactivateTechnician } from "@/features/technicians/api/deactivate-technician.ts";
 import { technicianQuery } from "@/features/technicians/api/get-technician.ts";
 import { useReactivateTechnician } from "@/features/technicians/api/reactivate-technician.ts";
@@ -38,10 +34,8 @@ export function Component() {
   const id = technicianIdOf(useParams());
   const { data: technician } = useSuspenseQuery(technicianQuery(id));
   const { data: credentials } = useSuspenseQuery(credentialsQuery({ technicianId: id }));
-  const standing = useQuery(technicianStandingQuery(id));
   const deactivate = useDeactivateTechnician();
   const reactivate = useReactivateTechnician();
-  const [now] = useState(() => new Date());
   const upload = (
     <Link to={hrefs.documentNew({ technicianId: id })} className={buttonStyles("primary")}>
       Upload a card
@@ -101,18 +95,7 @@ export function Component() {
       )}
       <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,1fr)_20rem]">
         <div className="space-y-8">
-          <section aria-labelledby="standing-heading">
-            <h2 id="standing-heading" className="mb-3 text-lg font-semibold text-ink-900">
-              Standing
-            </h2>
-            {standing.isPending ? (
-              <Spinner label="Loading standing" />
-            ) : standing.isError ? (
-              <FormError error={standing.error} />
-            ) : (
-              <StandingPanel standing={standing.data ?? null} now={now} />
-            )}
-          </section>
+          <StandingSection technicianId={id} loadingLabel="Loading standing" />
           <section aria-labelledby="cards-heading">
             <h2 id="cards-heading" className="mb-3 text-lg font-semibold text-ink-900">
               Credentials

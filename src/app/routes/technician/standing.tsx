@@ -1,17 +1,13 @@
-import { useState } from "react";
-import { useQuery, useSuspenseQuery } from "@tanstack/react-query";
+import { useSuspenseQuery } from "@tanstack/react-query";
 import { Link, useLoaderData, useLocation } from "react-router-dom";
 import { hrefs, paths } from "@/config/paths.ts";
 import { buttonStyles } from "@/components/ui/button-styles.ts";
 import { EmptyState } from "@/components/ui/empty-state.tsx";
-import { FormError } from "@/components/ui/form-error.tsx";
 import { PageHeader } from "@/components/ui/page-header.tsx";
-import { Spinner } from "@/components/ui/spinner.tsx";
 import type { Credential } from "@/features/credentials/api/credential-shapes.ts";
 import { credentialsQuery } from "@/features/credentials/api/get-credentials.ts";
 import { CredentialsTable } from "@/features/credentials/components/credentials-table.tsx";
-import { technicianStandingQuery } from "@/features/standing/api/get-technician-standing.ts";
-import { StandingPanel } from "@/features/standing/components/standing-panel.tsx";
+import { StandingSection } from "@/features/standing/components/standing-section.tsx";
 import { queryClient } from "@/lib/query-client.ts";
 import { currentTechnicianId } from "./current-technician.ts";
 
@@ -26,9 +22,7 @@ const correctionHref = (c: Credential) => hrefs.uploadCard(c.typeCode);
 export function Component() {
   const { technicianId } = useLoaderData<typeof loader>();
   const { data: credentials } = useSuspenseQuery(credentialsQuery());
-  const standing = useQuery(technicianStandingQuery(technicianId));
   const arrival = useLocation().state as { submitted?: string } | null;
-  const [now] = useState(() => new Date());
   const upload = (
     <Link to={paths.technician.uploadCard} className={buttonStyles("primary", "min-h-12 px-5 text-base")}>
       Upload a card
@@ -50,18 +44,7 @@ export function Component() {
         </p>
       )}
       <div className="space-y-8">
-        <section aria-labelledby="standing-heading">
-          <h2 id="standing-heading" className="mb-3 text-lg font-semibold text-ink-900">
-            Standing
-          </h2>
-          {standing.isPending ? (
-            <Spinner label="Loading your standing" />
-          ) : standing.isError ? (
-            <FormError error={standing.error} />
-          ) : (
-            <StandingPanel standing={standing.data ?? null} now={now} />
-          )}
-        </section>
+        <StandingSection technicianId={technicianId} loadingLabel="Loading your standing" />
         <section aria-labelledby="cards-heading">
           <h2 id="cards-heading" className="mb-3 text-lg font-semibold text-ink-900">
             My cards and credentials

@@ -1,18 +1,21 @@
 import { useMemo, useState, type FormEvent } from "react";
 import { baselineInputSchema, type BaselineInput } from "@shared/standing/schemas.ts";
+import {
+  emptyRequirementDraft,
+  fromRequirementDraft,
+  offeredLimits,
+  toRequirementDraft,
+  type RequirementDraft,
+} from "@/components/requirements/requirement-draft.ts";
+import {
+  RequirementFields,
+  type CredentialTypeChoice,
+} from "@/components/requirements/requirement-fields.tsx";
 import { Button } from "@/components/ui/button.tsx";
 import { FormError } from "@/components/ui/form-error.tsx";
 import { fieldErrorsOf } from "@/lib/field-errors.ts";
 import type { Baseline } from "../api/get-baseline.ts";
 import { useSaveBaseline } from "../api/save-baseline.ts";
-import {
-  emptyBaselineDraft,
-  fromBaselineDraft,
-  offeredLimits,
-  toBaselineDraft,
-  type BaselineDraft,
-} from "./baseline-draft.ts";
-import { BaselineRequirementFields, type CredentialTypeChoice } from "./baseline-requirement-fields.tsx";
 
 const fieldLabels: Record<string, string> = {
   label: "name",
@@ -48,17 +51,19 @@ type BaselineEditorProps = {
  */
 export function BaselineEditor({ baseline, credentialTypes, onSaved, onCancel }: BaselineEditorProps) {
   const save = useSaveBaseline();
-  const [drafts, setDrafts] = useState<BaselineDraft[]>(() => baseline.requirements.map(toBaselineDraft));
+  const [drafts, setDrafts] = useState<RequirementDraft[]>(() =>
+    baseline.requirements.map(toRequirementDraft),
+  );
   const [showErrors, setShowErrors] = useState(false);
   const [confirming, setConfirming] = useState<BaselineInput | null>(null);
   const parsed = useMemo(
-    () => baselineInputSchema.safeParse({ requirements: drafts.map(fromBaselineDraft) }),
+    () => baselineInputSchema.safeParse({ requirements: drafts.map(fromRequirementDraft) }),
     [drafts],
   );
   const problem = showErrors && !parsed.success ? parsed.error : save.error;
   const errors = fieldErrorsOf(problem);
 
-  const change = (next: BaselineDraft[]) => {
+  const change = (next: RequirementDraft[]) => {
     setDrafts(next);
     setConfirming(null);
   };
@@ -77,7 +82,7 @@ export function BaselineEditor({ baseline, credentialTypes, onSaved, onCancel }:
     <form noValidate onSubmit={submit} className="space-y-5" aria-label="Platform baseline">
       <FormError error={problem} labels={labelsFor(drafts.length)} />
       {drafts.map((draft, index) => (
-        <BaselineRequirementFields
+        <RequirementFields
           key={draft.key}
           index={index}
           draft={draft}
@@ -85,6 +90,8 @@ export function BaselineEditor({ baseline, credentialTypes, onSaved, onCancel }:
           errors={errors}
           onChange={(next) => change(drafts.map((d) => (d.key === draft.key ? next : d)))}
           onRemove={drafts.length > 1 ? () => change(drafts.filter((d) => d.key !== draft.key)) : undefined}
+          additionalInsuredLabel="Additional insured endorsement"
+          opensForUnlistedLimits
         />
       ))}
       {confirming ? (
@@ -105,7 +112,7 @@ export function BaselineEditor({ baseline, credentialTypes, onSaved, onCancel }:
               onClick={() =>
                 save.mutate(confirming, {
                   onSuccess: (saved) => {
-                    setDrafts(saved.requirements.map(toBaselineDraft));
+                    setDrafts(saved.requirements.map(toRequirementDraft));
                     setConfirming(null);
                     onSaved();
                   },
@@ -121,7 +128,7 @@ export function BaselineEditor({ baseline, credentialTypes, onSaved, onCancel }:
         </div>
       ) : (
         <div className="flex flex-wrap gap-2">
-          <Button variant="secondary" onClick={() => change([...drafts, emptyBaselineDraft()])}>
+          <Button variant="secondary" onClick={() => change([...drafts, emptyRequirementDraft()])}>
             Add a requirement
           </Button>
           <Button type="submit">Save baseline</Button>

@@ -1,6 +1,6 @@
 import type { Requirement } from "@shared/standing/requirements.ts";
 import { formatDollars } from "@/lib/format-money.ts";
-import { offeredLimits } from "./baseline-draft.ts";
+import { offeredLimits } from "@/components/requirements/requirement-draft.ts";
 
 type BaselineSummaryProps = {
   requirements: readonly Requirement[];

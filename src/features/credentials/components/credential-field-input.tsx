@@ -1,5 +1,5 @@
 import { useId } from "react";
-import { fieldInputStyles } from "@/components/ui/text-field.tsx";
+import { fieldInputStyles } from "@/components/ui/field-styles.ts";
 import type { FieldDefinition } from "./field-definitions.ts";
 import { ReadMarker } from "./read-marker.tsx";
 

@@ -2,6 +2,7 @@ import { useState, type FormEvent } from "react";
 import { editCredentialTypeSchema } from "@shared/credentials/schemas.ts";
 import { Button } from "@/components/ui/button.tsx";
 import { FormError } from "@/components/ui/form-error.tsx";
+import { TextAreaField } from "@/components/ui/text-area-field.tsx";
 import { TextField } from "@/components/ui/text-field.tsx";
 import { fieldErrorsOf } from "@/lib/field-errors.ts";
 import type { CredentialType } from "../api/credential-shapes.ts";
@@ -57,26 +58,13 @@ export function CredentialTypeForm({ type, onDone }: CredentialTypeFormProps) {
       </p>
       <FormError error={problem} labels={labels} plainWords={plainWords} />
       <TextField label={labels.name} name="name" defaultValue={type.name} required error={fields.name} />
-      <div className="space-y-1">
-        <label htmlFor="type-description" className="block text-sm font-medium text-ink-900">
-          {labels.description}
-        </label>
-        <textarea
-          id="type-description"
-          name="description"
-          defaultValue={type.description}
-          rows={4}
-          data-field="description"
-          aria-invalid={fields.description ? true : undefined}
-          aria-describedby={fields.description ? "type-description-error" : undefined}
-          className="block w-full rounded-md border border-ink-300 bg-white px-3 py-2 text-base text-ink-900 focus-visible:outline-2 focus-visible:outline-offset-1 focus-visible:outline-ink-700"
-        />
-        {fields.description && (
-          <p id="type-description-error" className="text-sm font-medium text-red-800">
-            {fields.description}
-          </p>
-        )}
-      </div>
+      <TextAreaField
+        label={labels.description}
+        name="description"
+        defaultValue={type.description}
+        rows={4}
+        error={fields.description}
+      />
       {months !== null && (
         <TextField
           label={labels.validityMonths}

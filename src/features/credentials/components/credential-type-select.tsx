@@ -1,6 +1,6 @@
 import { useId } from "react";
 import type { CredentialCategory } from "@shared/credentials/catalogue.ts";
-import { fieldInputStyles } from "@/components/ui/text-field.tsx";
+import { fieldInputStyles } from "@/components/ui/field-styles.ts";
 import type { CredentialType } from "../api/credential-shapes.ts";
 
 export const categoryLabels: Record<CredentialCategory, string> = {

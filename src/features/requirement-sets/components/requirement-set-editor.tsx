@@ -1,5 +1,15 @@
 import { useMemo, useState, type FormEvent } from "react";
 import { requirementSetInputSchema, type RequirementSetInput } from "@shared/standing/schemas.ts";
+import {
+  emptyRequirementDraft,
+  fromRequirementDraft,
+  toRequirementDraft,
+  type RequirementDraft,
+} from "@/components/requirements/requirement-draft.ts";
+import {
+  RequirementFields,
+  type CredentialTypeChoice,
+} from "@/components/requirements/requirement-fields.tsx";
 import { Button } from "@/components/ui/button.tsx";
 import { FormError } from "@/components/ui/form-error.tsx";
 import { SelectField, type SelectOption } from "@/components/ui/select-field.tsx";
@@ -7,8 +17,6 @@ import { TextField } from "@/components/ui/text-field.tsx";
 import { fieldErrorsOf } from "@/lib/field-errors.ts";
 import { useRequirementSetPreview } from "../api/preview-requirement-set.ts";
 import type { RequirementSetView } from "../api/requirement-set-shapes.ts";
-import { emptyDraft, fromDraft, toDraft, type RequirementDraft } from "./requirement-draft.ts";
-import { RequirementFields, type CredentialTypeChoice } from "./requirement-fields.tsx";
 import { useDebouncedValue } from "./use-debounced-value.ts";
 
 type RequirementSetEditorProps = {
@@ -25,7 +33,7 @@ function toInput(name: string, siteId: string, drafts: readonly RequirementDraft
   return {
     name,
     siteId: siteId === "" ? null : Number(siteId),
-    requirements: drafts.map(fromDraft),
+    requirements: drafts.map(fromRequirementDraft),
   };
 }
 
@@ -57,7 +65,7 @@ export function RequirementSetEditor(props: RequirementSetEditorProps) {
   const [name, setName] = useState(set?.name ?? "");
   const [siteId, setSiteId] = useState(set?.siteId?.toString() ?? "");
   const [drafts, setDrafts] = useState<RequirementDraft[]>(() =>
-    set ? set.requirements.map(toDraft) : [emptyDraft()],
+    set ? set.requirements.map(toRequirementDraft) : [emptyRequirementDraft()],
   );
   const [showErrors, setShowErrors] = useState(false);
   const parsed = useMemo(
@@ -115,10 +123,11 @@ export function RequirementSetEditor(props: RequirementSetEditorProps) {
           onRemove={
             drafts.length > 1 ? () => setDrafts(drafts.filter((d) => d.key !== draft.key)) : undefined
           }
+          additionalInsuredLabel="Shop named as additional insured"
         />
       ))}
       <div className="flex flex-wrap gap-2">
-        <Button variant="secondary" onClick={() => setDrafts([...drafts, emptyDraft()])}>
+        <Button variant="secondary" onClick={() => setDrafts([...drafts, emptyRequirementDraft()])}>
           Add a requirement
         </Button>
         <Button type="submit" pending={pending} pendingLabel="Saving">

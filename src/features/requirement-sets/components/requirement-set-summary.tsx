@@ -1,5 +1,5 @@
 import type { RequirementSetView } from "../api/requirement-set-shapes.ts";
-import { offeredLimits } from "./requirement-draft.ts";
+import { offeredLimits } from "@/components/requirements/requirement-draft.ts";
 
 const limitWords = new Map<string, string>(
   offeredLimits.map(([name, label]) => [name, label.replace(/ \(\$\)$/, "")]),

@@ -2,6 +2,7 @@ import { useState, type FormEvent } from "react";
 import { MAX_STARS, MIN_STARS, writeReviewSchema, type WriteReview } from "@shared/reviews/schemas.ts";
 import { Button } from "@/components/ui/button.tsx";
 import { FormError } from "@/components/ui/form-error.tsx";
+import { TextAreaField } from "@/components/ui/text-area-field.tsx";
 import { fieldErrorsOf } from "@/lib/field-errors.ts";
 
 const starWords: Record<number, string> = { 1: "Poor", 2: "Fair", 3: "Good", 4: "Very good", 5: "Excellent" };
@@ -66,25 +67,7 @@ export function ReviewForm({ pending, serverError, onSubmit }: ReviewFormProps) 
           </p>
         )}
       </fieldset>
-      <div className="space-y-1">
-        <label htmlFor="review-body" className="block text-sm font-medium text-ink-900">
-          {labels.body}
-        </label>
-        <textarea
-          id="review-body"
-          name="body"
-          rows={4}
-          data-field="body"
-          aria-invalid={errors.body ? true : undefined}
-          aria-describedby={errors.body ? "review-body-error" : undefined}
-          className="block w-full rounded-md border border-ink-300 bg-white px-3 py-2 text-base text-ink-900"
-        />
-        {errors.body && (
-          <p id="review-body-error" className="text-sm font-medium text-red-800">
-            {errors.body}
-          </p>
-        )}
-      </div>
+      <TextAreaField label={labels.body} name="body" rows={4} error={errors.body} />
       <Button type="submit" pending={pending} pendingLabel="Sending">
         Send rating
       </Button>

@@ -5,6 +5,7 @@ import { Button } from "@/components/ui/button.tsx";
 import { ChoiceGroup } from "@/components/ui/choice-group.tsx";
 import { FormError } from "@/components/ui/form-error.tsx";
 import { SelectField, type SelectOption } from "@/components/ui/select-field.tsx";
+import { TextAreaField } from "@/components/ui/text-area-field.tsx";
 import { TextField } from "@/components/ui/text-field.tsx";
 import { isApiError } from "@/lib/api-client.ts";
 import { fieldErrorsOf } from "@/lib/field-errors.ts";
@@ -157,25 +158,7 @@ export function RaiseWorkOrderForm(props: RaiseWorkOrderFormProps) {
           error={errors.requirementSetId}
         />
       </div>
-      <div className="space-y-1">
-        <label htmlFor="work-order-problem" className="block text-sm font-medium text-ink-900">
-          {labels.problem}
-        </label>
-        <textarea
-          id="work-order-problem"
-          name="problem"
-          rows={5}
-          data-field="problem"
-          aria-invalid={errors.problem ? true : undefined}
-          aria-describedby={errors.problem ? "work-order-problem-error" : undefined}
-          className="block w-full rounded-md border border-ink-300 bg-white px-3 py-2 text-base text-ink-900"
-        />
-        {errors.problem && (
-          <p id="work-order-problem-error" className="text-sm font-medium text-red-800">
-            {errors.problem}
-          </p>
-        )}
-      </div>
+      <TextAreaField label={labels.problem} name="problem" rows={5} error={errors.problem} />
       <ChoiceGroup
         legend={labels.urgency}
         name="urgency"
