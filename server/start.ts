@@ -5,7 +5,7 @@ import { loadConfig, publicUrl } from "./config.ts";
 import { startEmbeddedPostgres, type EmbeddedPostgres } from "./db/embedded-postgres.ts";
 import { startSmtpCatcher, type SmtpCatcher } from "./mail/smtp-catcher.ts";
 import { CaughtMail } from "./mail/model.ts";
-import { startServer } from "./main.ts";
+import { startServer, type RunningServer } from "./main.ts";
 import { loadDemoScenarioOnce, DEMO_PASSWORD, demoSignIns } from "./db/demo-scenario/index.ts";
 import { log } from "./log.ts";
 import { ensureDebianTools, OCR_TOOLS } from "./system/debian-packages.ts";
@@ -33,6 +33,21 @@ const stopPostgres = () => {
   postgres = undefined;
 };
 process.on("exit", stopPostgres);
+
+// Ctrl-C at any moment, even while starting, stops what this command started.
+let running: RunningServer | undefined;
+let stopping = false;
+async function shutdown(signal: string) {
+  if (stopping) return;
+  stopping = true;
+  log.info({ signal }, "stopping");
+  await running?.close().catch(() => undefined);
+  await catcher?.close().catch(() => undefined);
+  stopPostgres();
+  process.exit(0);
+}
+process.on("SIGINT", () => void shutdown("SIGINT"));
+process.on("SIGTERM", () => void shutdown("SIGTERM"));
 
 if (!base.SMTP_URL) {
   catcher = await startSmtpCatcher(async (m) => {
@@ -62,7 +77,7 @@ if (!existsSync(path.join(root, "dist", "index.html"))) {
 }
 
 const config = loadConfig(env);
-const running = await startServer(config);
+running = await startServer(config);
 const loaded = await loadDemoScenarioOnce({ uploadsDir: config.UPLOADS_DIR, today: new Date() });
 if (loaded) say("Demo scenario loaded.");
 
@@ -71,15 +86,3 @@ say(`Demo sign-ins (password for all: ${DEMO_PASSWORD}):`);
 for (const s of demoSignIns) say(`  ${s.role.padEnd(15)} ${s.email.padEnd(34)} ${s.company}`);
 say("Press Ctrl-C to stop.");
 
-let stopping = false;
-async function shutdown(signal: string) {
-  if (stopping) return;
-  stopping = true;
-  log.info({ signal }, "stopping");
-  await running.close().catch(() => undefined);
-  await catcher?.close().catch(() => undefined);
-  stopPostgres();
-  process.exit(0);
-}
-process.on("SIGINT", () => void shutdown("SIGINT"));
-process.on("SIGTERM", () => void shutdown("SIGTERM"));

@@ -15,6 +15,7 @@ import { decodeCursor, encodeCursor } from "./cursor.ts";
 import { assumptions, estimateTrip, ratingSummary, SCORE_SOURCE } from "./estimates.ts";
 import { buildFilters, DIRECTORY_FROM, distanceSql, type DirectoryCriteria } from "./search-filters.ts";
 import { SqlParams } from "./sql-params.ts";
+import { storedScoreIsCurrent } from "./stored-score.ts";
 
 interface DirectoryRow {
   id: number;
@@ -85,12 +86,20 @@ async function resolveCriteria(buyer: Express.User, query: DirectoryQuery, asOf:
   return { criteria, fromEquipment };
 }
 
-function sortKeySql(sort: DirectorySort, distance: string | null, p: SqlParams): string {
+function sortKeySql(
+  sort: DirectorySort,
+  distance: string | null,
+  p: SqlParams,
+  ratedOnly: boolean,
+): string {
   switch (sort) {
     case "distance":
       return distance ?? "0";
     case "score": {
       // Highest score first: the key is the negated Bayesian average, so every sort pages ascending on (key, id).
+      // With a minimum rating every row has a ratings row, so the key is the stored score itself, which
+      // technician_ratings_score_idx returns in order (the same float8 value as the expression below).
+      if (ratedOnly && storedScoreIsCurrent) return "-r.ranking_score";
       const weight = p.add(DEFAULT_PRIOR.weight);
       const mean = p.add(DEFAULT_PRIOR.mean);
       return `-((${weight}::float8 * ${mean}::float8 + coalesce(r.star_sum, 0)) / (${weight}::float8 + coalesce(r.review_count, 0)))`;
@@ -177,7 +186,7 @@ export async function searchDirectory(
 
   const p = new SqlParams();
   const distance = criteria.site ? distanceSql(p, criteria.site) : null;
-  const sortKey = sortKeySql(sort, distance, p);
+  const sortKey = sortKeySql(sort, distance, p, criteria.minRating !== undefined);
   const filters = buildFilters(p, criteria);
   const where = filters.map((f) => ` AND (${f.sql})`).join("");
   const after = cursor

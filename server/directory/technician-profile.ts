@@ -11,7 +11,6 @@ import type { Requirement } from "../../shared/standing/requirements.ts";
 import type { RequirementResult, Standing } from "../../shared/standing/standing-types.ts";
 import { db } from "../db/sequelize.ts";
 import { AppError } from "../http/app-error.ts";
-import { Site } from "../sites/index.ts";
 import { assumptions, estimateTrip, ratingSummary, SCORE_SOURCE } from "./estimates.ts";
 import { computeStandingNow } from "./live-standing.ts";
 
@@ -41,6 +40,44 @@ const FIELDS_FOR_BUYERS = new Set([
   "state",
 ]);
 
+interface CredentialRow {
+  id: number;
+  type_code: string;
+  type_name: string;
+  category: string;
+  technician_id: number | null;
+  fields: Record<string, unknown>;
+  decided_at: string | null;
+  lapses_at: string | null;
+  document_id: number;
+}
+
+interface RequirementSetRow {
+  id: number;
+  name: string;
+  site_id: number | null;
+  requirements: Requirement[];
+  standing: Standing | null;
+  earliest_lapse: string | null;
+  results: RequirementResult[] | null;
+  computed_at: string | null;
+}
+
+interface ReviewRow {
+  id: number;
+  stars: number;
+  body: string | null;
+  reply: string | null;
+  created_at: string | null;
+}
+
+interface SiteRow {
+  id: number;
+  name: string;
+  latitude: number;
+  longitude: number;
+}
+
 interface TechnicianRow {
   id: number;
   name: string;
@@ -59,6 +96,11 @@ interface TechnicianRow {
   earliest_lapse: Date | null;
   review_count: number;
   star_sum: number;
+  // The page's lists, read as JSON arrays in the same statement (timestamps arrive as ISO strings).
+  credentials: CredentialRow[];
+  requirement_sets: RequirementSetRow[];
+  reviews: ReviewRow[];
+  sites: SiteRow[];
 }
 
 /** Listed = active with a stored baseline standing of cleared or lapsing; anyone else is not shown to buyers. */
@@ -71,25 +113,42 @@ export async function isListedTechnician(technicianId: number): Promise<boolean>
   return rows.length > 0;
 }
 
-async function loadCredentials(t: TechnicianRow, asOf: Date): Promise<ProfileCredentialDto[]> {
-  const rows = await select<{
-    id: number;
-    type_code: string;
-    type_name: string;
-    category: string;
-    technician_id: number | null;
-    fields: Record<string, unknown>;
-    decided_at: Date | null;
-    lapses_at: Date | null;
-    document_id: number;
-  }>(
-    `SELECT cr.id, cr.type_code, ct.name AS type_name, ct.category, cr.technician_id, cr.fields, cr.decided_at, cr.lapses_at, cr.document_id
-       FROM credentials cr JOIN credential_types ct ON ct.code = cr.type_code
-      WHERE cr.state = 'verified' AND (cr.lapses_at IS NULL OR cr.lapses_at > $3)
-        AND ((cr.company_id = $1 AND cr.technician_id IS NULL) OR cr.technician_id = $2)
-      ORDER BY ct.category, ct.name, cr.id`,
-    [t.company_id, t.id, asOf],
-  );
+/**
+ * The whole page in one round trip: the listed technician ($1) with, as JSON arrays, the verified credentials in force
+ * at $3 (their own and their company's), the standing against each active requirement set of the shop ($2), the
+ * latest 100 reviews and the shop's active sites, each in the order the page shows them.
+ */
+const PAGE_SQL = `
+  SELECT t.id, t.name, t.company_id, c.name AS company_name, c.time_zone, t.technologies, t.control_families,
+         t.service_radius_km, t.hourly_rate_cents, t.travel_rate_cents, t.mileage_rate_cents, t.latitude, t.longitude,
+         b.standing, b.earliest_lapse, coalesce(r.review_count, 0)::int AS review_count, coalesce(r.star_sum, 0)::int AS star_sum,
+         (SELECT coalesce(json_agg(x ORDER BY x.category, x.type_name, x.id), '[]'::json) FROM (
+            SELECT cr.id, cr.type_code, ct.name AS type_name, ct.category, cr.technician_id, cr.fields, cr.decided_at,
+                   cr.lapses_at, cr.document_id
+              FROM credentials cr JOIN credential_types ct ON ct.code = cr.type_code
+             WHERE cr.state = 'verified' AND (cr.lapses_at IS NULL OR cr.lapses_at > $3)
+               AND ((cr.company_id = t.company_id AND cr.technician_id IS NULL) OR cr.technician_id = t.id)) x
+         ) AS credentials,
+         (SELECT coalesce(json_agg(x ORDER BY x.name, x.id), '[]'::json) FROM (
+            SELECT rs.id, rs.name, rs.site_id, rs.requirements, s.standing, s.earliest_lapse, s.results, s.computed_at
+              FROM requirement_sets rs
+              LEFT JOIN technician_standings s ON s.requirement_set_id = rs.id AND s.technician_id = t.id
+             WHERE rs.company_id = $2 AND rs.active) x
+         ) AS requirement_sets,
+         (SELECT coalesce(json_agg(x ORDER BY x.id DESC), '[]'::json) FROM (
+            SELECT jr.id, jr.stars, jr.body, jr.reply, jr.created_at FROM job_reviews jr
+             WHERE jr.technician_id = t.id ORDER BY jr.id DESC LIMIT 100) x
+         ) AS reviews,
+         (SELECT coalesce(json_agg(x ORDER BY x.name, x.id), '[]'::json) FROM (
+            SELECT si.id, si.name, si.latitude, si.longitude FROM sites si WHERE si.company_id = $2 AND si.active) x
+         ) AS sites
+    FROM technicians t
+    JOIN companies c ON c.id = t.company_id
+    JOIN technician_standings b ON b.technician_id = t.id AND b.requirement_set_id IS NULL AND b.standing IN ('cleared','lapsing')
+    LEFT JOIN technician_ratings r ON r.technician_id = t.id
+   WHERE t.id = $1 AND t.active`;
+
+function toCredentials(rows: CredentialRow[]): ProfileCredentialDto[] {
   return rows.map((r) => ({
     id: r.id,
     typeCode: r.type_code,
@@ -104,24 +163,8 @@ async function loadCredentials(t: TechnicianRow, asOf: Date): Promise<ProfileCre
   }));
 }
 
-async function loadStandings(t: TechnicianRow, shopId: number, asOf: Date): Promise<ProfileStandingDto[]> {
-  const rows = await select<{
-    id: number;
-    name: string;
-    site_id: number | null;
-    requirements: Requirement[];
-    standing: Standing | null;
-    earliest_lapse: Date | null;
-    results: RequirementResult[] | null;
-    computed_at: Date | null;
-  }>(
-    `SELECT rs.id, rs.name, rs.site_id, rs.requirements, s.standing, s.earliest_lapse, s.results, s.computed_at
-       FROM requirement_sets rs
-       LEFT JOIN technician_standings s ON s.requirement_set_id = rs.id AND s.technician_id = $2
-      WHERE rs.company_id = $1 AND rs.active
-      ORDER BY rs.name, rs.id`,
-    [shopId, t.id],
-  );
+async function toStandings(t: TechnicianRow, asOf: Date): Promise<ProfileStandingDto[]> {
+  const rows = t.requirement_sets;
   const missing = rows.filter((r) => r.standing === null);
   const live = await computeStandingNow(
     { id: t.id, companyId: t.company_id, timeZone: t.time_zone },
@@ -153,42 +196,25 @@ async function loadStandings(t: TechnicianRow, shopId: number, asOf: Date): Prom
 
 const textOf = (v: unknown): string | null => (typeof v === "string" && v.length > 0 ? v : null);
 
-/** Reviews from the work-order module's job_reviews table when it exists; read as JSON so a column added later is harmless. */
-async function loadReviews(technicianId: number): Promise<ProfileReviewDto[]> {
-  const [exists] = await select<{ present: boolean }>(
-    "SELECT to_regclass('public.job_reviews') IS NOT NULL AS present",
-    [],
-  );
-  if (!exists?.present) return [];
-  const rows = await select<{ review: Record<string, unknown> }>(
-    "SELECT to_jsonb(jr) AS review FROM job_reviews jr WHERE jr.technician_id = $1 ORDER BY jr.id DESC LIMIT 100",
-    [technicianId],
-  );
-  return rows.map(({ review: j }) => ({
+function toReviews(rows: ReviewRow[]): ProfileReviewDto[] {
+  return rows.map((j) => ({
     id: Number(j.id),
     stars: Number(j.stars),
-    text: textOf(j.text) ?? textOf(j.body) ?? textOf(j.comment),
-    reply: textOf(j.reply) ?? textOf(j.reply_text) ?? textOf(j.reply_body),
+    text: textOf(j.body),
+    reply: textOf(j.reply),
     createdAt: textOf(j.created_at) ? new Date(String(j.created_at)).toISOString() : null,
   }));
 }
 
-async function loadEstimates(t: TechnicianRow, shopId: number, onSiteHours: number) {
+function toEstimates(t: TechnicianRow, onSiteHours: number) {
   if (t.latitude === null || t.longitude === null) return [];
   const base = { lat: t.latitude, lon: t.longitude };
-  const sites = await Site.findAll({
-    where: { companyId: shopId, active: true },
-    order: [
-      ["name", "ASC"],
-      ["id", "ASC"],
-    ],
-  });
   const rates = {
     hourlyRateCents: t.hourly_rate_cents,
     travelRateCents: t.travel_rate_cents,
     mileageRateCents: t.mileage_rate_cents,
   };
-  return sites.map((site) => {
+  return t.sites.map((site) => {
     const km = greatCircleDistanceKm({ lat: site.latitude, lon: site.longitude }, base);
     const trip = estimateTrip(km, rates, onSiteHours);
     return {
@@ -211,24 +237,10 @@ export async function findDirectoryTechnician(
   onSiteHours: number,
   asOf = new Date(),
 ): Promise<DirectoryTechnicianDto> {
-  const [t] = await select<TechnicianRow>(
-    `SELECT t.id, t.name, t.company_id, c.name AS company_name, c.time_zone, t.technologies, t.control_families,
-            t.service_radius_km, t.hourly_rate_cents, t.travel_rate_cents, t.mileage_rate_cents, t.latitude, t.longitude,
-            b.standing, b.earliest_lapse, coalesce(r.review_count, 0)::int AS review_count, coalesce(r.star_sum, 0)::int AS star_sum
-       FROM technicians t
-       JOIN companies c ON c.id = t.company_id
-       JOIN technician_standings b ON b.technician_id = t.id AND b.requirement_set_id IS NULL AND b.standing IN ('cleared','lapsing')
-       LEFT JOIN technician_ratings r ON r.technician_id = t.id
-      WHERE t.id = $1 AND t.active`,
-    [technicianId],
-  );
+  const [t] = await select<TechnicianRow>(PAGE_SQL, [technicianId, buyer.companyId, asOf]);
   if (!t) throw new AppError("not_found", "That technician was not found");
-  const [credentials, requirementSets, reviews, estimates] = await Promise.all([
-    loadCredentials(t, asOf),
-    loadStandings(t, buyer.companyId, asOf),
-    loadReviews(t.id),
-    loadEstimates(t, buyer.companyId, onSiteHours),
-  ]);
+  // A set the standing job has not stored yet is computed now (one more query, only then).
+  const requirementSets = await toStandings(t, asOf);
   return {
     technicianId: t.id,
     name: t.name,
@@ -244,12 +256,12 @@ export async function findDirectoryTechnician(
       standing: t.standing,
       earliestLapse: t.earliest_lapse ? new Date(t.earliest_lapse).toISOString() : null,
     },
-    credentials,
+    credentials: toCredentials(t.credentials),
     requirementSets,
     rating: ratingSummary(t.review_count, t.star_sum),
     scoreSource: SCORE_SOURCE,
-    reviews,
-    estimates,
+    reviews: toReviews(t.reviews),
+    estimates: toEstimates(t, onSiteHours),
     assumptions: assumptions(onSiteHours),
     caution: CERTIFICATE_CAUTION,
   };
