@@ -35,7 +35,7 @@ const stopPostgres = () => {
 process.on("exit", stopPostgres);
 
 // Ctrl-C at any moment, even while starting, stops what this command started.
-let running: RunningServer | undefined;
+let running: RunningServer | undefined = undefined;
 let stopping = false;
 async function shutdown(signal: string) {
   if (stopping) return;

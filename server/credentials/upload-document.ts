@@ -1,9 +1,11 @@
 import { createHash } from "node:crypto";
 import { READY_SUFFIX } from "../storage/index.ts";
+import { createReadStream } from "node:fs";
 import { readFile, rename, rm } from "node:fs/promises";
 import { randomUUID } from "node:crypto";
 import path from "node:path";
-import { fileTypeFromBuffer } from "file-type";
+import { pipeline } from "node:stream/promises";
+import { fileTypeFromBuffer, fileTypeFromFile, type FileTypeResult } from "file-type";
 import type { UploadDocument } from "../../shared/credentials/schemas.ts";
 import { reviewerWarnings } from "../../shared/credentials/reviewer-checks.ts";
 import { AppError } from "../http/app-error.ts";
@@ -13,6 +15,7 @@ import type { FileStorage } from "../storage/index.ts";
 import { Company } from "../companies/model.ts";
 import { Technician } from "../technicians/model.ts";
 import { extractDocument, type ExtractableMime } from "./extraction/extract-document.ts";
+import { isOcrAvailable } from "./extraction/ocr.ts";
 import { DocumentUnreadableError } from "./extraction/document-unreadable-error.ts";
 import { activeType } from "./catalogue.ts";
 import { canSubmitFor } from "./policy.ts";
@@ -50,7 +53,22 @@ export function safeFileName(name: string): string {
 }
 
 export async function sniffUpload(bytes: Buffer, originalName: string): Promise<ExtractableMime> {
-  const detected = await fileTypeFromBuffer(bytes);
+  return checkSniffed(await fileTypeFromBuffer(bytes), originalName);
+}
+
+/** The same check from the file on disk: file-type reads only the first few kilobytes it needs. */
+export async function sniffUploadFile(filePath: string, originalName: string): Promise<ExtractableMime> {
+  return checkSniffed(await fileTypeFromFile(filePath), originalName);
+}
+
+/** SHA-256 of a file read as a stream, so a 10 MB upload is never held whole just to be hashed. */
+async function sha256OfFile(filePath: string): Promise<string> {
+  const hash = createHash("sha256");
+  await pipeline(createReadStream(filePath), hash);
+  return hash.digest("hex");
+}
+
+function checkSniffed(detected: FileTypeResult | undefined, originalName: string): ExtractableMime {
   const mime = detected?.mime as ExtractableMime | undefined;
   if (!mime || !(mime in EXTENSIONS)) {
     throw new AppError(
@@ -104,15 +122,21 @@ export async function uploadDocument(
     if (file.size === 0)
       throw new AppError("invalid_input", "The file is empty", [{ path: "file", message: "0 bytes" }]);
 
-    const bytes = await readFile(file.path);
-    const mime = await sniffUpload(bytes, file.originalname);
-    const sha256 = createHash("sha256").update(bytes).digest("hex");
+    const mime = await sniffUploadFile(file.path, file.originalname);
+    const sha256 = await sha256OfFile(file.path);
     // Named by its hash before the row commits, so the start-up sweep can finish a move a crash interrupted.
     const ready = path.join(storage.incomingDir, `${sha256}.${randomUUID()}${READY_SUFFIX}`);
     await rename(file.path, ready);
     pending = ready;
+    // The bytes are read only when something reads them: the PDF text layer (and OCR of a scan), or OCR of an image.
+    // Without OCR an image yields no text whatever its bytes, so it is not read into memory at all.
+    const needsBytes = mime === "application/pdf" || (await isOcrAvailable());
+    const bytes = needsBytes ? await readFile(ready) : Buffer.alloc(0);
+    // The file's own memory rather than a second copy when it has an ArrayBuffer to itself (pdf.js may transfer it;
+    // nothing reads it after extraction); a slice of a shared pool is copied, as before.
+    const ownMemory = bytes.byteOffset === 0 && bytes.buffer.byteLength === bytes.byteLength;
     const extraction = await extractDocument({
-      bytes: new Uint8Array(bytes),
+      bytes: ownMemory ? new Uint8Array(bytes.buffer) : new Uint8Array(bytes),
       mime,
       credentialType: { code: type.code, fieldSet: type.fieldSet },
     }).catch((err: unknown) => {
