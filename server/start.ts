@@ -85,4 +85,3 @@ say(`\nClearbench is running at ${publicUrl({ ...config, PORT: running.port })}`
 say(`Demo sign-ins (password for all: ${DEMO_PASSWORD}):`);
 for (const s of demoSignIns) say(`  ${s.role.padEnd(15)} ${s.email.padEnd(34)} ${s.company}`);
 say("Press Ctrl-C to stop.");
-

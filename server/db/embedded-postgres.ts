@@ -54,7 +54,9 @@ function runAsOwner(bin: string, args: string[]): void {
 
 function isRunning(bin: string, dataDir: string): boolean {
   const command = isRoot() ? "runuser" : path.join(bin, "pg_ctl");
-  const args = isRoot() ? ["-u", "postgres", "--", path.join(bin, "pg_ctl"), "-D", dataDir, "status"] : ["-D", dataDir, "status"];
+  const args = isRoot()
+    ? ["-u", "postgres", "--", path.join(bin, "pg_ctl"), "-D", dataDir, "status"]
+    : ["-D", dataDir, "status"];
   return spawnSync(command, args).status === 0;
 }
 
