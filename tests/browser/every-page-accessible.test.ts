@@ -1,0 +1,73 @@
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import type { Browser } from "playwright-core";
+import { startBrowserServer } from "../support/browser-server.ts";
+import { launchChromium, signIn } from "../support/browser.ts";
+import { seriousAccessibilityProblems } from "../support/axe.ts";
+import { DEMO_PASSWORD } from "../../server/db/demo-scenario/index.ts";
+
+let server: Awaited<ReturnType<typeof startBrowserServer>>;
+let browser: Browser;
+beforeAll(async () => {
+  server = await startBrowserServer();
+  browser = await launchChromium();
+});
+afterAll(async () => {
+  await browser?.close();
+  await server?.close();
+});
+
+// The main pages of each role, with a heading to wait for; the journeys cover the pages that need data first.
+const pagesByRole: { who: string; email: string | null; pages: string[] }[] = [
+  { who: "signed out", email: null, pages: ["/sign-in", "/sign-up", "/forgot-password"] },
+  {
+    email: "office@kestrel-ridge.test",
+    pages: [
+      "/provider",
+      "/provider/technicians",
+      "/provider/technicians/new",
+      "/provider/documents",
+      "/provider/work-orders",
+      "/account",
+    ],
+  },
+  {
+    who: "technician",
+    email: "tobias@kestrel-ridge.test",
+    pages: ["/technician", "/technician/upload-card"],
+  },
+  { who: "reviewer", email: "reviewer@clearbench.test", pages: ["/review"] },
+  {
+    email: "buyer@marlow-precision.test",
+    pages: ["/directory", "/roster", "/sites", "/requirement-sets", "/work-orders"],
+  },
+  {
+    email: "admin@clearbench.test",
+    pages: [
+      "/admin/users",
+      "/admin/catalogue",
+      "/admin/outbox",
+      "/admin/baseline",
+      "/admin/job-runs",
+      "/admin/reviews",
+    ],
+  },
+];
+
+describe("accessibility of every main page (axe-core, WCAG 2 A and AA)", () => {
+  it.each(pagesByRole)("has no serious or critical violation on the $who pages", async ({ email, pages }) => {
+    const context = await browser.newContext({ viewport: { width: 1280, height: 800 } });
+    const page = await context.newPage();
+    if (email) await signIn(page, server.url, email, DEMO_PASSWORD);
+    const problems: string[] = [];
+
+    for (const path of pages) {
+      await page.goto(`${server.url}${path}`);
+      await page.getByRole("heading", { level: 1 }).first().waitFor();
+      await page.waitForLoadState("networkidle");
+      problems.push(...(await seriousAccessibilityProblems(page)).map((p) => `${path}: ${p}`));
+    }
+    await context.close();
+
+    expect(problems).toEqual([]);
+  });
+});
