@@ -20,6 +20,7 @@ afterAll(async () => {
 const pagesByRole: { who: string; email: string | null; pages: string[] }[] = [
   { who: "signed out", email: null, pages: ["/sign-in", "/sign-up", "/forgot-password"] },
   {
+    who: "provider_admin",
     email: "office@kestrel-ridge.test",
     pages: [
       "/provider",
@@ -37,10 +38,12 @@ const pagesByRole: { who: string; email: string | null; pages: string[] }[] = [
   },
   { who: "reviewer", email: "reviewer@clearbench.test", pages: ["/review"] },
   {
+    who: "buyer",
     email: "buyer@marlow-precision.test",
     pages: ["/directory", "/roster", "/sites", "/requirement-sets", "/work-orders"],
   },
   {
+    who: "admin",
     email: "admin@clearbench.test",
     pages: [
       "/admin/users",
