@@ -7,7 +7,7 @@ import { randomUUID } from "node:crypto";
 import type pg from "pg";
 import type { Config } from "./config.ts";
 import { log } from "./log.ts";
-import { passport, sessionMiddleware } from "./http/auth.ts";
+import { passport, renewSessionNearExpiry, sessionMiddleware } from "./http/auth.ts";
 import { requireCsrfHeader } from "./http/csrf.ts";
 import { apiNotFound, errorHandler } from "./http/error-handler.ts";
 import { healthRoutes } from "./health/routes.ts";
@@ -58,6 +58,8 @@ export function createApp({ config, sessionPool, clientDir }: AppDeps): Express 
           "frame-src": ["'self'", "blob:"],
           "object-src": ["'self'"],
           "img-src": ["'self'", "data:", "blob:"],
+          // Only production sits behind HTTPS; elsewhere the demo is plain HTTP on a local address.
+          "upgrade-insecure-requests": config.NODE_ENV === "production" ? [] : null,
         },
       },
     }),
@@ -79,6 +81,7 @@ export function createApp({ config, sessionPool, clientDir }: AppDeps): Express 
   app.use("/api", express.json({ limit: "100kb" }));
   app.use("/api", sessionMiddleware(config, sessionPool));
   app.use("/api", passport.session());
+  app.use("/api", renewSessionNearExpiry);
   app.use("/api", requireCsrfHeader);
   for (const routes of apiRouters) app.use(routes.router);
   app.use("/api", apiNotFound);
