@@ -86,12 +86,7 @@ async function resolveCriteria(buyer: Express.User, query: DirectoryQuery, asOf:
   return { criteria, fromEquipment };
 }
 
-function sortKeySql(
-  sort: DirectorySort,
-  distance: string | null,
-  p: SqlParams,
-  ratedOnly: boolean,
-): string {
+function sortKeySql(sort: DirectorySort, distance: string | null, p: SqlParams, ratedOnly: boolean): string {
   switch (sort) {
     case "distance":
       return distance ?? "0";

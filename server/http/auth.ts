@@ -30,6 +30,32 @@ passport.deserializeUser((id: number, done) => {
   );
 });
 
+declare module "express-session" {
+  interface SessionData {
+    /** When the session's expiry was last pushed back (ms since 1970); changing it makes express-session save the row. */
+    renewedAt?: number;
+  }
+}
+
+/** One working shift of inactivity at most. */
+const SESSION_MAX_AGE_MS = 8 * 60 * 60_000;
+/** Pushed back once less than this is left, so a working session keeps going without writing its row on every request. */
+const RENEW_WHEN_LEFT_MS = SESSION_MAX_AGE_MS / 2;
+
+/**
+ * Sessions neither roll nor touch on every request (each was an UPDATE of the session row): a signed-in session is
+ * saved with a fresh expiry, and its cookie sent again, only once less than half a shift is left. A session idle for
+ * between half a shift and a whole one ends, as before only one idle for a whole shift did.
+ */
+export const renewSessionNearExpiry: RequestHandler = (req, _res, next) => {
+  const left = req.session?.cookie.maxAge;
+  if (req.user && typeof left === "number" && left < RENEW_WHEN_LEFT_MS) {
+    req.session.touch();
+    req.session.renewedAt = Date.now();
+  }
+  next();
+};
+
 /** Sessions live in PostgreSQL (table `session`), so any server instance can serve any request. */
 export function sessionMiddleware(config: Config, pool: pg.Pool): RequestHandler {
   const PgStore = connectPgSimple(session);
@@ -41,16 +67,18 @@ export function sessionMiddleware(config: Config, pool: pg.Pool): RequestHandler
       tableName: "session",
       createTableIfMissing: false,
       pruneSessionInterval: 15 * 60,
+      // No UPDATE of the row on every request; renewSessionNearExpiry saves it when its expiry must move.
+      disableTouch: true,
     }),
     resave: false,
     saveUninitialized: false,
-    rolling: true,
+    rolling: false,
     proxy: config.NODE_ENV === "production",
     cookie: {
       httpOnly: true,
       sameSite: "lax",
       secure: config.NODE_ENV === "production",
-      maxAge: 8 * 60 * 60_000, // one working shift
+      maxAge: SESSION_MAX_AGE_MS,
     },
   });
 }
