@@ -10,6 +10,7 @@ import { Technician } from "../technicians/model.ts";
 import { Credential, CredentialType, Document } from "./model.ts";
 import { toCredentialDto, toCredentialDtos } from "./dto.ts";
 import { duplicateForOtherHolder } from "./upload-document.ts";
+import { fieldsForBuyers } from "../../shared/credentials/fields-for-buyers.ts";
 
 export async function listOwnCredentials(
   user: Express.User,
@@ -24,28 +25,6 @@ export async function listOwnCredentials(
   return toCredentialDtos(rows);
 }
 
-const FIELDS_FOR_BUYERS = new Set([
-  "insurerName",
-  "naic",
-  "policyNumber",
-  "effectiveDate",
-  "expirationDate",
-  "limits",
-  "additionalInsured",
-  "waiverOfSubrogation",
-  "statutory",
-  "course",
-  "issueDate",
-  "expiryDate",
-  "builder",
-  "controlFamily",
-  "level",
-  "trainer",
-  "licenseNumber",
-  "issuingAuthority",
-  "state",
-]);
-
 /** One credential with its audit trail; reviewers also get the warnings computed beside the fields. */
 export async function findCredential(user: Express.User, id: number) {
   const row = await Credential.findByPk(id);
@@ -54,7 +33,7 @@ export async function findCredential(user: Express.User, id: number) {
   if (user.role === "buyer") {
     return {
       ...dto,
-      fields: Object.fromEntries(Object.entries(dto.fields).filter(([k]) => FIELDS_FOR_BUYERS.has(k))),
+      fields: fieldsForBuyers(dto.fields),
       returnReason: null,
       audit: [],
       warnings: [],

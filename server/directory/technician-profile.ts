@@ -13,32 +13,10 @@ import { db } from "../db/sequelize.ts";
 import { AppError } from "../http/app-error.ts";
 import { assumptions, estimateTrip, ratingSummary, SCORE_SOURCE } from "./estimates.ts";
 import { computeStandingNow } from "./live-standing.ts";
+import { fieldsForBuyers } from "../../shared/credentials/fields-for-buyers.ts";
 
 const select = <T extends object>(sql: string, bind: unknown[]) =>
   db().query<T>(sql, { bind, type: QueryTypes.SELECT });
-
-// What a buyer may read of a credential's fields: dates, limits, flags and training details, never holder contact data.
-const FIELDS_FOR_BUYERS = new Set([
-  "insurerName",
-  "naic",
-  "policyNumber",
-  "effectiveDate",
-  "expirationDate",
-  "limits",
-  "additionalInsured",
-  "waiverOfSubrogation",
-  "statutory",
-  "course",
-  "issueDate",
-  "expiryDate",
-  "builder",
-  "controlFamily",
-  "level",
-  "trainer",
-  "licenseNumber",
-  "issuingAuthority",
-  "state",
-]);
 
 interface CredentialRow {
   id: number;
@@ -155,7 +133,7 @@ function toCredentials(rows: CredentialRow[]): ProfileCredentialDto[] {
     typeName: r.type_name,
     category: r.category,
     holder: r.technician_id === null ? "company" : "technician",
-    fields: Object.fromEntries(Object.entries(r.fields).filter(([k]) => FIELDS_FOR_BUYERS.has(k))),
+    fields: fieldsForBuyers(r.fields),
     decidedAt: r.decided_at ? new Date(r.decided_at).toISOString() : null,
     lapsesAt: r.lapses_at ? new Date(r.lapses_at).toISOString() : null,
     // Buyers may download verified certificates of insurance only (credentials/policy.ts canReadDocument).
