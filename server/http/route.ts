@@ -72,24 +72,22 @@ export function createRoutes(prefix: string) {
       schemas: { params: options.params, query: options.query, body: options.body },
       upload: Boolean(options.before?.length),
     });
-    const guard: RequestHandler = (req, _res, next) => {
-      authorize(options.allow, req);
+    // Role, then ownership of the object named in the path, before any upload is parsed or any input read: a
+    // foreign id answers exactly like a missing one, whatever the body says.
+    const guard: RequestHandler = async (req, _res, next) => {
+      const user = authorize(options.allow, req);
+      if (options.allow.owns && user) {
+        const params = parsePart(options.params, req.params, "params") as Record<string, unknown>;
+        if (!(await options.allow.owns(user, params))) throw new AppError("not_found", "That record was not found");
+      }
       next();
     };
     const run = async (req: Request, res: Response, next: NextFunction) => {
-      const user = authorize(options.allow, req);
       const input = {
         params: parsePart(options.params, req.params, "params"),
         query: parsePart(options.query, req.query, "query"),
         body: parsePart(options.body, req.body, "body"),
       } as RouteInput<P, Q, B>;
-      if (
-        options.allow.owns &&
-        user &&
-        !(await options.allow.owns(user, input.params as Record<string, unknown>))
-      ) {
-        throw new AppError("not_found", "That record was not found");
-      }
       const result = await handler(req, res, input);
       if (!res.headersSent) {
         if (result === undefined) res.status(204).end();
