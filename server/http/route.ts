@@ -78,7 +78,8 @@ export function createRoutes(prefix: string) {
       const user = authorize(options.allow, req);
       if (options.allow.owns && user) {
         const params = parsePart(options.params, req.params, "params") as Record<string, unknown>;
-        if (!(await options.allow.owns(user, params))) throw new AppError("not_found", "That record was not found");
+        if (!(await options.allow.owns(user, params)))
+          throw new AppError("not_found", "That record was not found");
       }
       next();
     };

@@ -16,13 +16,11 @@ beforeAll(async () => {
   owner = await buildWorkOrderWorld(t.app);
   other = await buildWorkOrderWorld(t.app);
   const credential = await submitLiabilityCertificate(owner.provider.admin, 131);
-  const set = await owner.shop.agent
-    .post("/api/requirement-sets")
-    .send({
-      name: "Spindle rebuilds",
-      siteId: owner.siteId,
-      requirements: [{ label: "General liability", typeCodes: ["general_liability"] }],
-    });
+  const set = await owner.shop.agent.post("/api/requirement-sets").send({
+    name: "Spindle rebuilds",
+    siteId: owner.siteId,
+    requirements: [{ label: "General liability", typeCodes: ["general_liability"] }],
+  });
   const entry = await owner.shop.agent
     .post("/api/roster")
     .send({ serviceCompanyId: owner.provider.company.id });
