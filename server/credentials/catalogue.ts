@@ -1,6 +1,7 @@
 import type { CredentialTypeDefinition } from "../../shared/credentials/catalogue.ts";
 import { AppError } from "../http/app-error.ts";
 import { CredentialType } from "./model.ts";
+import { recordAudit } from "../audit/index.ts";
 
 export function toDefinition(t: CredentialType): CredentialTypeDefinition {
   return {
@@ -51,7 +52,6 @@ export async function editCredentialType(
       { path: "body.validityMonths", message: "not a months-from-issue type" },
     ]);
   }
-  const { recordAudit } = await import("../audit/index.ts");
   const before = type.toJSON();
   await type.update({
     name: input.name ?? type.name,

@@ -1,6 +1,6 @@
 import { requireOwnership, requireRole, type SignedInUser } from "../http/policy.ts";
 import { isTechnicianManagedBy } from "../technicians/policy.ts";
-import { Credential, Document } from "./model.ts";
+import { Credential, CredentialType, Document } from "./model.ts";
 
 export const canReviewCredentials = requireRole("reviewer");
 export const canUploadDocuments = requireRole("provider_admin", "technician");
@@ -52,12 +52,9 @@ export async function canReadDocument(user: SignedInUser, documentId: number): P
     );
   }
   if (user.role === "buyer") {
-    const { CredentialType } = await import("./model.ts");
-    for (const c of credentials) {
-      if (c.state !== "verified") continue;
-      const type = await CredentialType.findByPk(c.typeCode, { attributes: ["category"] });
-      if (type?.category === "insurance") return true;
-    }
+    const verified = credentials.filter((c) => c.state === "verified").map((c) => c.typeCode);
+    if (verified.length === 0) return false;
+    return (await CredentialType.count({ where: { code: verified, category: "insurance" } })) > 0;
   }
   return false;
 }

@@ -4,7 +4,7 @@ import { db } from "../db/sequelize.ts";
 import { recordAudit } from "../audit/index.ts";
 import { Company } from "../companies/model.ts";
 import { activeType, toDefinition } from "./catalogue.ts";
-import { canSubmitFor } from "./policy.ts";
+import { resolveHolder } from "./resolve-holder.ts";
 import { lapseInstantFor, parseFields } from "./field-validation.ts";
 import { Credential, Document } from "./model.ts";
 import { toCredentialDto } from "./dto.ts";
@@ -12,20 +12,7 @@ import { toCredentialDto } from "./dto.ts";
 /** Creates a credential awaiting verification from an uploaded document and the checked fields. */
 export async function submitCredential(user: Express.User, input: SubmitCredential) {
   const type = await activeType(input.typeCode);
-  const technicianId =
-    user.role === "technician" ? (input.technicianId ?? user.technicianId ?? undefined) : input.technicianId;
-  if (type.holder === "technician" && technicianId === undefined) {
-    throw new AppError("invalid_input", "Choose the technician this card belongs to", [
-      { path: "body.technicianId", message: "required for this type" },
-    ]);
-  }
-  if (type.holder === "company" && technicianId !== undefined) {
-    throw new AppError("invalid_input", "This type is held by the company, not a technician", [
-      { path: "body.technicianId", message: "must be empty for this type" },
-    ]);
-  }
-  if (!(await canSubmitFor(user, technicianId)))
-    throw new AppError("not_found", "That technician was not found");
+  const technicianId = await resolveHolder(user, type, input.technicianId);
   const document = await Document.findByPk(input.documentId);
   if (!document || document.companyId !== user.companyId) {
     throw new AppError("invalid_input", "Upload the document first", [

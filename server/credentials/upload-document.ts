@@ -18,7 +18,7 @@ import { extractDocument, type ExtractableMime } from "./extraction/extract-docu
 import { isOcrAvailable } from "./extraction/ocr.ts";
 import { DocumentUnreadableError } from "./extraction/document-unreadable-error.ts";
 import { activeType } from "./catalogue.ts";
-import { canSubmitFor } from "./policy.ts";
+import { resolveHolder } from "./resolve-holder.ts";
 import { Credential, Document } from "./model.ts";
 
 const EXTENSIONS: Record<ExtractableMime, string[]> = {
@@ -103,22 +103,7 @@ export async function uploadDocument(
     if (!file)
       throw new AppError("invalid_input", "Choose a file to upload", [{ path: "file", message: "required" }]);
     const type = await activeType(input.typeCode);
-    const technicianId =
-      user.role === "technician"
-        ? (input.technicianId ?? user.technicianId ?? undefined)
-        : input.technicianId;
-    if (type.holder === "technician" && technicianId === undefined) {
-      throw new AppError("invalid_input", "Choose the technician this card belongs to", [
-        { path: "body.technicianId", message: "required for this type" },
-      ]);
-    }
-    if (type.holder === "company" && technicianId !== undefined) {
-      throw new AppError("invalid_input", "This type is held by the company, not a technician", [
-        { path: "body.technicianId", message: "must be empty for this type" },
-      ]);
-    }
-    if (!(await canSubmitFor(user, technicianId)))
-      throw new AppError("not_found", "That technician was not found");
+    const technicianId = await resolveHolder(user, type, input.technicianId);
     if (file.size === 0)
       throw new AppError("invalid_input", "The file is empty", [{ path: "file", message: "0 bytes" }]);
 

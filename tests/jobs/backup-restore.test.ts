@@ -2,12 +2,11 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { mkdtempSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
-import { randomUUID } from "node:crypto";
-import pg from "pg";
 import { buildTestApp, type TestApp } from "../support/test-app.ts";
 import { buildProvider } from "../support/build-provider.ts";
 import { submitLiabilityCertificate } from "../support/submit-credential.ts";
 import { backup, countRows, restore } from "../../server/db/backup.ts";
+import { createTestDatabase } from "../support/test-database.ts";
 
 let t: TestApp;
 beforeAll(() => {
@@ -15,16 +14,7 @@ beforeAll(() => {
 });
 afterAll(() => t.close());
 
-async function freshDatabase(): Promise<string> {
-  const name = `restore_${randomUUID().slice(0, 8)}`;
-  const admin = new pg.Client({ connectionString: t.config.DATABASE_URL });
-  await admin.connect();
-  await admin.query(`CREATE DATABASE ${name}`);
-  await admin.end();
-  const url = new URL(t.config.DATABASE_URL!);
-  url.pathname = `/${name}`;
-  return url.toString();
-}
+const freshDatabase = async () => (await createTestDatabase("restore")).url;
 
 describe("backup and restore", () => {
   it("restores into a fresh database and folder with the same row counts and file hashes", async () => {

@@ -12,20 +12,14 @@ import { startServerProcess, stopProcess } from "../support/server-process.ts";
 import { createStorage } from "../../server/storage/index.ts";
 import { CSRF_HEADER, CSRF_HEADER_VALUE } from "../../shared/api/error-body.ts";
 import { buildCertificatePdf } from "../fixtures/build-certificate-pdf.ts";
+import { createTestDatabase } from "../support/test-database.ts";
 
 let t: TestApp;
 let databaseUrl: string;
 beforeAll(async () => {
   t = buildTestApp();
   // A database of its own, so the restarted server's sweep sees only this test's rows and files.
-  const name = `crash_${randomUUID().slice(0, 8)}`;
-  const admin = new pg.Client({ connectionString: t.config.DATABASE_URL });
-  await admin.connect();
-  await admin.query(`CREATE DATABASE ${name}`);
-  await admin.end();
-  const url = new URL(t.config.DATABASE_URL!);
-  url.pathname = `/${name}`;
-  databaseUrl = url.toString();
+  databaseUrl = (await createTestDatabase("crash")).url;
 });
 afterAll(() => t.close());
 

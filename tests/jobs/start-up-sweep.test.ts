@@ -3,7 +3,6 @@ import { createHash, randomUUID } from "node:crypto";
 import { mkdtempSync, readdirSync, utimesSync, writeFileSync, existsSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
-import pg from "pg";
 import { buildCompany } from "../support/build-company.ts";
 import { connectDatabase } from "../../server/db/sequelize.ts";
 import { initModels } from "../../server/db/associations.ts";
@@ -11,18 +10,12 @@ import { migrate } from "../../server/db/migrate.ts";
 import { createStorage } from "../../server/storage/index.ts";
 import { sweepOrphans } from "../../server/storage/sweep-orphans.ts";
 import { Document } from "../../server/credentials/model.ts";
+import { createTestDatabase } from "../support/test-database.ts";
 
 // A database of its own: the sweep looks at every document row, and other tests' files live elsewhere.
 let close: () => Promise<void>;
 beforeAll(async () => {
-  const name = `sweep_${randomUUID().slice(0, 8)}`;
-  const admin = new pg.Client({ connectionString: process.env.DATABASE_URL });
-  await admin.connect();
-  await admin.query(`CREATE DATABASE ${name}`);
-  await admin.end();
-  const url = new URL(process.env.DATABASE_URL!);
-  url.pathname = `/${name}`;
-  const sequelize = connectDatabase(url.toString());
+  const sequelize = connectDatabase((await createTestDatabase("sweep")).url);
   initModels(sequelize);
   await migrate(sequelize);
   close = () => sequelize.close();

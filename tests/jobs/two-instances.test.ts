@@ -11,19 +11,13 @@ import { startTestMailCatcher } from "../support/mail-catcher.ts";
 import { submitLiabilityCertificate } from "../support/submit-credential.ts";
 import { hashPassword, setPasswordCost } from "../../server/accounts/passwords.ts";
 import { CSRF_HEADER, CSRF_HEADER_VALUE } from "../../shared/api/error-body.ts";
+import { createTestDatabase } from "../support/test-database.ts";
 
 let databaseUrl: string;
 let mail: Awaited<ReturnType<typeof startTestMailCatcher>>;
 const children: ChildProcess[] = [];
 beforeAll(async () => {
-  const name = `instances_${randomUUID().slice(0, 8)}`;
-  const admin = new pg.Client({ connectionString: process.env.DATABASE_URL });
-  await admin.connect();
-  await admin.query(`CREATE DATABASE ${name}`);
-  await admin.end();
-  const url = new URL(process.env.DATABASE_URL!);
-  url.pathname = `/${name}`;
-  databaseUrl = url.toString();
+  databaseUrl = (await createTestDatabase("instances")).url;
   mail = await startTestMailCatcher();
 });
 afterAll(async () => {

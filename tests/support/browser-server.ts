@@ -1,11 +1,10 @@
-import { randomUUID } from "node:crypto";
 import { spawnSync } from "node:child_process";
 import { existsSync } from "node:fs";
 import path from "node:path";
-import pg from "pg";
 import { loadConfig } from "../../server/config.ts";
 import { startServer, type RunningServer } from "../../server/main.ts";
 import { loadDemoScenarioOnce } from "../../server/db/demo-scenario/index.ts";
+import { createTestDatabase } from "./test-database.ts";
 
 /** Builds the production client once per test run into the run's temporary folder. */
 export function ensureClientBuild(): string {
@@ -28,18 +27,12 @@ export function ensureClientBuild(): string {
 export async function startBrowserServer(
   env: Record<string, string> = {},
 ): Promise<RunningServer & { url: string; databaseUrl: string }> {
-  const base = new URL(process.env.DATABASE_URL!);
-  const name = `browser_${randomUUID().slice(0, 8)}`;
-  const admin = new pg.Client({ connectionString: process.env.DATABASE_URL });
-  await admin.connect();
-  await admin.query(`CREATE DATABASE ${name}`);
-  await admin.end();
-  base.pathname = `/${name}`;
+  const { name, url: databaseUrl } = await createTestDatabase("browser");
   // A database and an uploads folder of its own: the start-up sweep must not see other tests' files.
   const uploadsDir = path.join(path.dirname(process.env.UPLOADS_DIR!), `uploads-${name}`);
   const config = loadConfig({
     ...process.env,
-    DATABASE_URL: base.toString(),
+    DATABASE_URL: databaseUrl,
     UPLOADS_DIR: uploadsDir,
     PORT: "0",
     RUN_SCHEDULE: "false",
@@ -47,5 +40,5 @@ export async function startBrowserServer(
   });
   const running = await startServer(config, { clientDir: ensureClientBuild() });
   await loadDemoScenarioOnce({ uploadsDir: config.UPLOADS_DIR, today: new Date() });
-  return { ...running, url: `http://127.0.0.1:${running.port}`, databaseUrl: base.toString() };
+  return { ...running, url: `http://127.0.0.1:${running.port}`, databaseUrl };
 }
