@@ -20,7 +20,7 @@ import { buyerRouters } from "./directory/buyer-routers.ts";
 import { workOrderRoutes } from "./work-orders/index.ts";
 import { reviewRoutes } from "./reviews/index.ts";
 import { createStorage } from "./storage/index.ts";
-import { createSignInLimiter } from "./accounts/sign-in-limit.ts";
+import { createAbuseLimits } from "./accounts/abuse-limits.ts";
 
 export interface AppDeps {
   config: Config;
@@ -46,7 +46,7 @@ export function createApp({ config, sessionPool, clientDir }: AppDeps): Express 
   const app = express();
   app.locals.config = config;
   app.locals.storage = createStorage(config.UPLOADS_DIR, config);
-  app.locals.signInLimiter = createSignInLimiter(config.SIGN_IN_ATTEMPTS_PER_15_MIN);
+  app.locals.abuseLimits = createAbuseLimits(config);
   app.disable("x-powered-by");
   if (config.NODE_ENV === "production") app.set("trust proxy", 1);
 

@@ -6,7 +6,7 @@ import { connectDatabase } from "./db/sequelize.ts";
 import { initModels } from "./db/associations.ts";
 import { migrate } from "./db/migrate.ts";
 import { createApp } from "./app.ts";
-import { setPasswordCost } from "./accounts/index.ts";
+import { setHashConcurrency, setPasswordCost } from "./accounts/index.ts";
 import { createSmtpMailer, deliverDueMail } from "./mail/index.ts";
 import { sweepOrphans } from "./storage/sweep-orphans.ts";
 import { startSchedule } from "../jobs/schedule.ts";
@@ -26,6 +26,7 @@ export async function startServer(
   if (!config.DATABASE_URL) throw new Error("DATABASE_URL is required to start the server");
   configureLog(config.LOG_LEVEL);
   setPasswordCost(config.BCRYPT_COST);
+  setHashConcurrency(config.HASH_CONCURRENCY, config.HASH_QUEUE);
   const sequelize = connectDatabase(config.DATABASE_URL);
   initModels(sequelize);
   await migrate(sequelize);
