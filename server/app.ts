@@ -6,7 +6,7 @@ import { pinoHttp } from "pino-http";
 import { randomUUID } from "node:crypto";
 import type pg from "pg";
 import type { Config } from "./config.ts";
-import { log } from "./log.ts";
+import { log, logSerializers } from "./log.ts";
 import { passport, renewSessionNearExpiry, sessionMiddleware } from "./http/auth.ts";
 import { requireCsrfHeader } from "./http/csrf.ts";
 import { apiNotFound, errorHandler } from "./http/error-handler.ts";
@@ -67,6 +67,7 @@ export function createApp({ config, sessionPool, clientDir }: AppDeps): Express 
   app.use(
     pinoHttp({
       logger: log,
+      serializers: logSerializers,
       genReqId: (req) => (req.headers["x-request-id"] as string | undefined) ?? randomUUID(),
       autoLogging: { ignore: (req) => !req.url?.startsWith("/api") },
       // In production a line per successful API request costs throughput for nothing: failures (4xx, 5xx) still log.
