@@ -11,6 +11,7 @@ import { passport, renewSessionNearExpiry, sessionMiddleware } from "./http/auth
 import { requireCsrfHeader } from "./http/csrf.ts";
 import { apiNotFound, errorHandler } from "./http/error-handler.ts";
 import { healthRoutes } from "./health/routes.ts";
+import { Readiness, refuseWhileStarting } from "./health/readiness.ts";
 import { authRoutes, adminUserRoutes } from "./accounts/index.ts";
 import { outboxRoutes } from "./mail/index.ts";
 import { technicianRoutes } from "./technicians/index.ts";
@@ -47,6 +48,7 @@ export function createApp({ config, sessionPool, clientDir }: AppDeps): Express 
   app.locals.config = config;
   app.locals.storage = createStorage(config.UPLOADS_DIR, config);
   app.locals.abuseLimits = createAbuseLimits(config);
+  app.locals.readiness = new Readiness();
   app.disable("x-powered-by");
   if (config.NODE_ENV === "production") app.set("trust proxy", 1);
 
@@ -79,6 +81,7 @@ export function createApp({ config, sessionPool, clientDir }: AppDeps): Express 
             : "info",
     }),
   );
+  app.use("/api", refuseWhileStarting);
   app.use("/api", express.json({ limit: "100kb" }));
   app.use("/api", sessionMiddleware(config, sessionPool));
   app.use("/api", passport.session());
