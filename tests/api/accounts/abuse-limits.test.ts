@@ -80,6 +80,25 @@ describe("costly work only after cheap checks", () => {
   });
 });
 
+describe("hashing under load", () => {
+  it("answers 503 at once when more passwords wait to be checked than the queue holds", async () => {
+    const app = appWith({ BCRYPT_COST: "10", HASH_CONCURRENCY: "1", HASH_QUEUE: "1" });
+    const { users } = await buildCompany("shop", ["buyer"]);
+
+    const answers = await Promise.all(
+      Array.from({ length: 6 }, () =>
+        agentFor(app).post("/api/auth/sign-in").send({ email: users.buyer!.email, password: "not this one" }),
+      ),
+    );
+    const statuses = answers.map((a) => a.status);
+
+    expect(statuses.filter((s) => s === 401).length).toBeGreaterThanOrEqual(1);
+    expect(statuses.filter((s) => s === 503).length).toBeGreaterThanOrEqual(1);
+    expect(statuses.every((s) => s === 401 || s === 503)).toBe(true);
+    expect(answers.find((a) => a.status === 503)!.body.error.code).toBe("unavailable");
+  });
+});
+
 describe("limits per address", () => {
   it("stops failed sign-ins from one address even when every attempt names another e-mail", async () => {
     const app = appWith({ SIGN_IN_FAILURES_PER_IP_PER_15_MIN: "3" });
