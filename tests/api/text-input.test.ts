@@ -5,6 +5,7 @@ import { buildTestApp, type TestApp } from "../support/test-app.ts";
 import { buildProvider, signedInAgent } from "../support/build-provider.ts";
 import { certificateFields } from "../support/submit-credential.ts";
 import { buildCertificatePdf } from "../fixtures/build-certificate-pdf.ts";
+import { buildWorkOrderWorld, workOrderAt } from "../fixtures/build-work-order-world.ts";
 import { routeTable, type RouteEntry } from "../../server/http/route.ts";
 import { fieldSetSchemas } from "../../shared/credentials/credential-fields.ts";
 import type { Role } from "../../shared/accounts/schemas.ts";
@@ -213,6 +214,33 @@ describe("a NUL in any field of any route", () => {
     expect(res.status).toBe(422);
     expect(res.body.error.fields[0].path).toBe("body.name");
     expect(JSON.stringify(list.body)).not.toContain("North");
+  });
+});
+
+describe("a review reply", () => {
+  it("refuses a NUL or a lone surrogate (422) and keeps line breaks and tabs", async () => {
+    const world = await buildWorkOrderWorld(t.app);
+    const id = await workOrderAt(world, "confirmed");
+    const review = await world.shop.agent
+      .post(`/api/work-orders/${id}/review`)
+      .send({ stars: 5, body: "Spindle back within tolerance before second shift." });
+
+    const nul = await world.provider.admin
+      .post(`/api/reviews/${review.body.id}/reply`)
+      .send({ body: "Thanks\u0000 for the call" });
+    const surrogate = await world.provider.admin
+      .post(`/api/reviews/${review.body.id}/reply`)
+      .send({ body: "Thanks \udc00 for the call" });
+    const fine = await world.provider.admin
+      .post(`/api/reviews/${review.body.id}/reply`)
+      .send({ body: "Thanks for the call.\r\n\tWe keep the spare on the van." });
+
+    expect(review.status).toBe(201);
+    expect(nul.status).toBe(422);
+    expect(nul.body.error.fields[0].path).toBe("body.body");
+    expect(surrogate.status).toBe(422);
+    expect(fine.status).toBe(200);
+    expect(fine.body.reply).toBe("Thanks for the call.\n\tWe keep the spare on the van.");
   });
 });
 
