@@ -19,7 +19,10 @@ export async function canSeeCredential(user: SignedInUser, credential: Credentia
     case "buyer":
       // A technician's own card only while the shared rule shows them to shops; company policies once verified.
       if (credential.state !== "verified") return false;
-      return credential.technicianId === null || atLeast(await viewLevelOf(user, credential.technicianId), "directory");
+      return (
+        credential.technicianId === null ||
+        atLeast(await viewLevelOf(user, credential.technicianId), "directory")
+      );
     case "provider_admin":
       return credential.companyId === user.companyId;
     case "technician":
@@ -59,7 +62,9 @@ export async function canReadDocument(user: SignedInUser, documentId: number): P
     const verified = credentials.filter((c) => c.state === "verified").map((c) => c.typeCode);
     if (verified.length === 0) return false;
     return (
-      (await CredentialType.count({ where: { code: verified, category: [...BUYER_DOWNLOADABLE_CATEGORIES] } })) > 0
+      (await CredentialType.count({
+        where: { code: verified, category: [...BUYER_DOWNLOADABLE_CATEGORIES] },
+      })) > 0
     );
   }
   return false;

@@ -15,7 +15,11 @@ export const technicianViewLevels = ["none", "directory", "contact", "full"] as 
 export type TechnicianViewLevel = (typeof technicianViewLevels)[number];
 
 /** A work order in one of these states means the technician took the shop's job: only then does the shop get contact. */
-export const ENGAGED_WORK_ORDER_STATUSES = ["accepted", "completed", "confirmed"] as const satisfies readonly WorkOrderStatus[];
+export const ENGAGED_WORK_ORDER_STATUSES = [
+  "accepted",
+  "completed",
+  "confirmed",
+] as const satisfies readonly WorkOrderStatus[];
 
 export interface TechnicianFacts {
   active: boolean;
@@ -70,7 +74,14 @@ const DIRECTORY_FIELDS = [
   "travelRateCents",
   "mileageRateCents",
 ] as const;
-const CONTACT_FIELDS = [...DIRECTORY_FIELDS, "email", "phone", "postalCode", "latitude", "longitude"] as const;
+const CONTACT_FIELDS = [
+  ...DIRECTORY_FIELDS,
+  "email",
+  "phone",
+  "postalCode",
+  "latitude",
+  "longitude",
+] as const;
 const FULL_FIELDS = [...CONTACT_FIELDS, "active", "hasAccount"] as const;
 
 /** The fields of a technician record each level may read. */

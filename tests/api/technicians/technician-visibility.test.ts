@@ -3,7 +3,12 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { QueryTypes } from "sequelize";
 import { buildTestApp, sequelize, type TestApp } from "../../support/test-app.ts";
 import { buildProvider, signedInAgent } from "../../support/build-provider.ts";
-import { buildWorkOrderWorld, raiseBody, workOrderAt, type WorkOrderWorld } from "../../fixtures/build-work-order-world.ts";
+import {
+  buildWorkOrderWorld,
+  raiseBody,
+  workOrderAt,
+  type WorkOrderWorld,
+} from "../../fixtures/build-work-order-world.ts";
 import { Technician } from "../../../server/technicians/model.ts";
 import { Credential, Document } from "../../../server/credentials/model.ts";
 
@@ -75,7 +80,8 @@ describe("what a shop sees of a technician", () => {
     expect(res.status).toBe(200);
     expect(res.body.name).toBe(world.provider.technician.name);
     expect(res.body.hourlyRateCents).toBe(14000);
-    for (const field of [...CONTACT_FIELDS, "active", "hasAccount"]) expect(res.body).not.toHaveProperty(field);
+    for (const field of [...CONTACT_FIELDS, "active", "hasAccount"])
+      expect(res.body).not.toHaveProperty(field);
   });
 
   it("gives the shop contact details only once the technician has accepted its work order", async () => {
@@ -105,7 +111,9 @@ describe("what a shop sees of a technician", () => {
     const roster = await shop.agent.get("/api/roster");
     const csv = await shop.agent.get("/api/roster/export.csv");
 
-    const names = roster.body.flatMap((e: { technicians: { name: string }[] }) => e.technicians.map((m) => m.name));
+    const names = roster.body.flatMap((e: { technicians: { name: string }[] }) =>
+      e.technicians.map((m) => m.name),
+    );
     expect(names).toEqual([world.provider.technician.name]);
     expect(csv.text).toContain(world.provider.technician.name);
     expect(csv.text).not.toContain(neverCleared.name);
@@ -140,7 +148,8 @@ describe("a technician's reviews", () => {
     expect([byRivalTech.status, byRivalAdmin.status]).toEqual([404, 404]);
     expect(byShop.status).toBe(200);
     expect(byShop.body.count).toBeGreaterThanOrEqual(1);
-    for (const item of byShop.body.items) expect(Object.keys(item).sort()).toEqual(["createdAt", "id", "reply", "stars", "text"]);
+    for (const item of byShop.body.items)
+      expect(Object.keys(item).sort()).toEqual(["createdAt", "id", "reply", "stars", "text"]);
     expect(JSON.stringify(byShop.body)).not.toContain(world.shop.company.name);
     expect(JSON.stringify(byShop.body)).not.toContain(world.shop.user.name);
     expect(byOwnAdmin.status).toBe(200);
