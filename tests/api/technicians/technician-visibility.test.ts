@@ -129,6 +129,38 @@ describe("what a shop sees of a technician", () => {
   });
 });
 
+describe("a hidden technician's credentials", () => {
+  it("answers a shop 404 for a verified card of a technician it may not see, naming no one", async () => {
+    const document = await Document.create({
+      companyId: world.provider.company.id,
+      uploadedBy: world.provider.adminUser.id,
+      sha256: randomBytes(32).toString("hex"),
+      sizeBytes: 1000,
+      mime: "application/pdf",
+      originalName: "osha-10-oskar.pdf",
+      extractedText: null,
+      extractionMethod: "none",
+    });
+    const card = await Credential.create({
+      typeCode: "osha_10",
+      companyId: world.provider.company.id,
+      technicianId: neverCleared.id,
+      documentId: document.id,
+      state: "verified",
+      fields: { holderName: neverCleared.name, issueDate: "2025-05-02", cardNumber: "OC-31337" },
+      submittedBy: world.provider.adminUser.id,
+      lapsesAt: null,
+    });
+    const shop = await signedInAgent(t.app, "shop", "buyer");
+
+    const hidden = await shop.agent.get(`/api/credentials/${card.id}`);
+    const missing = await shop.agent.get("/api/credentials/99999999");
+
+    expect(hidden.status).toBe(404);
+    expect(hidden.body).toEqual(missing.body);
+  });
+});
+
 describe("a technician's reviews", () => {
   it("answers a rival company's technician and admin 404, and shows shops no shop, author or work order", async () => {
     const workOrderId = await workOrderAt(world, "confirmed");
