@@ -10,6 +10,7 @@ import {
 import { runLapseJob } from "../../jobs/lapse.ts";
 import { claimTick, TICK_LEASE_MS } from "../../jobs/claim-tick.ts";
 import { retryDueTicks, runScheduledTick, type TickDeps } from "../../jobs/run-tick.ts";
+import { listJobRuns } from "../../server/standing/job-runs.ts";
 import { DAY, rows } from "./job-support.ts";
 
 let t: TestApp;
@@ -101,6 +102,11 @@ describe("a failed scheduled run", () => {
       { attempt: 1, error: "connection terminated unexpectedly", finished_at: expect.any(Date) },
     ]);
     expect(await adminAlerts(job)).toEqual({ notes: 1, mails: 1 });
+    // The admins' job-runs page lists the failed attempt with its reason.
+    expect((await listJobRuns(200)).find((r) => r.job === job)).toMatchObject({
+      attempt: 1,
+      error: "connection terminated unexpectedly",
+    });
     const [lapsed] = await rows<{ state: string }>("SELECT state FROM credentials WHERE id = $1", [card.id]);
     expect(lapsed?.state).toBe("lapsed");
   });
