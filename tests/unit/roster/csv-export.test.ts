@@ -13,7 +13,15 @@ function entryNamed(name: string, companyName = "Harrowgate Spindle Co.", id = 1
     companyName,
     addedAt: "2026-11-30T12:00:00.000Z",
     technicians: [
-      { technicianId: id, name, companyId: 7, companyName, active: true, standing: "cleared", nextLapse: null },
+      {
+        technicianId: id,
+        name,
+        companyId: 7,
+        companyName,
+        active: true,
+        standing: "cleared",
+        nextLapse: null,
+      },
     ],
   };
 }
@@ -25,7 +33,7 @@ function cellsOf(csv: string): string[][] {
 // OWASP "CSV Injection": a cell starting with = + - @ tab or CR is treated as a formula by spreadsheets.
 describe("roster CSV formula escaping", () => {
   it.each([
-    ["=HYPERLINK(\"http://x.test\",\"open\")\n&\"\"", "equals sign with a line break"],
+    ['=HYPERLINK("http://x.test","open")\n&""', "equals sign with a line break"],
     ["+1+2\r\nmore", "plus sign with CRLF"],
     ["-2\nline", "minus sign with a line break"],
     ["@SUM(A1)\n", "at sign ending in a line break"],
