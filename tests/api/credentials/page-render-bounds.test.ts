@@ -21,11 +21,12 @@ function pngSize(png: Buffer) {
   return { width: png.readUInt32BE(16), height: png.readUInt32BE(20) };
 }
 
-const binary = (res: NodeJS.ReadableStream, cb: (err: Error | null, body: Buffer) => void) => {
+// supertest's parser signature: the response stream and a callback with the whole body.
+const binary = ((res: NodeJS.ReadableStream, cb: (err: Error | null, body: Buffer) => void) => {
   const chunks: Buffer[] = [];
   res.on("data", (c: Buffer) => chunks.push(c));
   res.on("end", () => cb(null, Buffer.concat(chunks)));
-};
+}) as never;
 
 describe("page sizes and render bounds", () => {
   it("refuses a PDF whose page is 14,400 pt a side with 422 and keeps no row and no file", async () => {
