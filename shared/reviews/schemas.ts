@@ -1,5 +1,7 @@
 import { z } from "zod";
 import { idParam } from "../credentials/schemas.ts";
+import type { ProfileReviewDto } from "../directory/schemas.ts";
+import type { PUBLIC_REVIEW_FIELDS } from "../visibility/technician-visibility.ts";
 
 export const reviewParamsSchema = z.object({ reviewId: idParam });
 export const technicianReviewsParamsSchema = z.object({ technicianId: idParam });
@@ -42,11 +44,14 @@ export interface ReviewDto {
   createdAt: string;
 }
 
+/** What anyone outside the job reads of a review: the fields PUBLIC_REVIEW_FIELDS names in the shared visibility rule. */
+export type PublicReviewDto = Pick<ProfileReviewDto, (typeof PUBLIC_REVIEW_FIELDS)[number]>;
+
 export interface TechnicianReviewsDto {
   /** Mean stars, null when there are none; always shown with its count. */
   average: number | null;
   count: number;
-  items: ReviewDto[];
+  items: PublicReviewDto[];
 }
 
 export interface ReportedReviewDto extends ReviewDto {
