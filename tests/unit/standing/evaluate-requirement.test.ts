@@ -132,12 +132,19 @@ describe("requirement evaluation", () => {
         certificateNumber: "EX-2201",
         issueDate: "2026-02-01",
         expiryDate: "2028-02-01",
+        personsCovered: ["Pell Rivera"],
+        technicianIds: [],
       },
     };
 
-    const result = evaluateRequirement(requirement, [exemption], options);
+    const result = evaluateRequirement(requirement, [exemption], {
+      ...options,
+      technician: { id: 31, name: "Pell Rivera" },
+      companyHeadcount: 1,
+    });
 
-    expect(result).toMatchObject({ status: "met", credentialId: 901 }); // common practice (TRADE-FACTS 3): exemption in place of a policy
+    // Common practice: a sole proprietor's state exemption in place of a policy, for that person.
+    expect(result).toMatchObject({ status: "met", credentialId: 901 });
   });
 
   it("is unmet when OEM training covers another control family", () => {
