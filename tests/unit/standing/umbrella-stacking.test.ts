@@ -161,3 +161,25 @@ describe("an umbrella line needs its underlying policy", () => {
     expect(underlyingTypeCodesFor(set)).toEqual(["general_liability"]);
   });
 });
+
+describe("how a line was met, kept on the work order's proof", () => {
+  it("carries 'GL $1M + umbrella $4M' into the standing snapshot", async () => {
+    const { buildStandingSnapshot } = await import("../../../shared/work-orders/standing-snapshot.ts");
+    const primary = gl();
+    const over = umbrella();
+    const result = computeStanding([fiveMillion], [primary, over], options);
+
+    const snapshot = buildStandingSnapshot({
+      takenAt: asOf,
+      technician: { id: 1, name: "Dana Quillfeather", companyName: "Harrowgate Field Service LLC" },
+      targets: [{ requirementSetId: 9, name: "Plant 2", result }],
+      credentials: new Map([[primary.id, { id: primary.id, typeCode: primary.typeCode, fields: primary.fields }]]),
+      typeNames: new Map([["general_liability", "Commercial general liability"]]),
+    });
+
+    expect(snapshot.targets[0]?.requirements[0]).toMatchObject({
+      status: "met",
+      metBy: "GL $1M + umbrella $4M each occurrence",
+    });
+  });
+});
