@@ -20,7 +20,10 @@ export function placeOfCompany(postalCode: string): PostalPlace & { timeZone: st
   const { timeZone } = place;
   if (!timeZone)
     throw new AppError("invalid_input", "No time zone is known for this ZIP code", [
-      { path: "body.postalCode", message: "no time zone is known for this ZIP code; check it or ask support" },
+      {
+        path: "body.postalCode",
+        message: "no time zone is known for this ZIP code; check it or ask support",
+      },
     ]);
   return { ...place, timeZone };
 }
@@ -32,7 +35,10 @@ async function restampLapses(companyId: number, timeZone: string, transaction: T
   for (const row of rows) {
     const type = types.get(row.typeCode);
     if (!type) continue;
-    await row.update({ lapsesAt: lapseInstantFor(type, row.fields as Record<string, unknown>, timeZone) }, { transaction });
+    await row.update(
+      { lapsesAt: lapseInstantFor(type, row.fields as Record<string, unknown>, timeZone) },
+      { transaction },
+    );
   }
 }
 
@@ -68,7 +74,11 @@ export async function changeCompanyAddress(
   return db().transaction(async (transaction) => {
     const company = await Company.findByPk(user.companyId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!company) throw new AppError("not_found", "That company was not found");
-    const before = { addressLine: company.addressLine, postalCode: company.postalCode, timeZone: company.timeZone };
+    const before = {
+      addressLine: company.addressLine,
+      postalCode: company.postalCode,
+      timeZone: company.timeZone,
+    };
     await company.update(
       {
         addressLine: input.addressLine,
@@ -86,7 +96,11 @@ export async function changeCompanyAddress(
         subjectType: "company",
         subjectId: company.id,
         before,
-        after: { addressLine: company.addressLine, postalCode: company.postalCode, timeZone: company.timeZone },
+        after: {
+          addressLine: company.addressLine,
+          postalCode: company.postalCode,
+          timeZone: company.timeZone,
+        },
       },
       transaction,
     );

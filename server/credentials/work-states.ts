@@ -6,9 +6,7 @@ import { lookupPostalCode } from "../geo/index.ts";
 const MAX_SITES = 20;
 
 /** Where a service company works: its own mailing address and the sites of its work orders, each with its state. */
-export async function workStatesOf(
-  companyId: number,
-): Promise<{ state: string; where: string }[]> {
+export async function workStatesOf(companyId: number): Promise<{ state: string; where: string }[]> {
   const rows = await db().query<{ name: string; postal_code: string | null; own: boolean }>(
     `SELECT name, postal_code, true AS own FROM companies WHERE id = $1
      UNION ALL

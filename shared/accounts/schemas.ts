@@ -42,12 +42,15 @@ export const postalCodeSchema = z.string().regex(/^\d{5}$/, "Enter a 5-digit ZIP
 
 /**
  * A policy period runs on standard time at the named insured's mailing address (the standard CGL declarations: "12:01
- * A.M. standard time at your mailing address"), so a company's zone is derived from its ZIP code and changes only with
+ * A.M. standard time at your mailing address", wording from memory), so a company's zone is derived from its ZIP code and changes only with
  * the address; a zone sent on its own is refused.
  */
 export const zoneFollowsPostalCode = z
   .unknown()
-  .refine((value) => value === undefined, "The time zone follows the ZIP code; change the mailing address instead")
+  .refine(
+    (value) => value === undefined,
+    "The time zone follows the ZIP code; change the mailing address instead",
+  )
   .optional();
 
 export const signUpSchema = z.object({

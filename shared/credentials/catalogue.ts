@@ -25,7 +25,7 @@ export interface CredentialTypeDefinition {
   description: string;
 }
 
-// NFPA 70E (2024) 110.6(A)(3): retraining at intervals not to exceed 3 years (TRADE-FACTS 4).
+// NFPA 70E (2024) 110.6(A)(3): retraining at intervals not to exceed 3 years.
 export const ARC_FLASH_RETRAINING_MONTHS = 36;
 // 29 CFR 1910.178(l)(4)(iii): operator performance evaluated at least once every 3 years (OSHA letter 2005-08-01).
 export const POWERED_TRUCK_EVALUATION_MONTHS = 36;
@@ -45,7 +45,7 @@ export const WORKERS_COMP_EXEMPTION_MONTHS = 24;
 /** Said on every catalog card whose interval is common practice rather than regulation. */
 const SITE_DECIDES =
   "The 12-month interval is common practice, not a regulatory deadline; a site's requirement set decides the interval it wants.";
-// Common practice: first aid / CPR / AED cards are usually valid 2 years (AHA course cards; TRADE-FACTS 4).
+// Common practice: first aid / CPR / AED cards are usually valid 2 years (American Heart Association course cards, cpr.heart.org "Course Card Information").
 export const FIRST_AID_CPR_MONTHS = 24;
 
 const documentDates = { kind: "document_dates" } as const;
@@ -59,7 +59,7 @@ export const credentialTypes: readonly CredentialTypeDefinition[] = [
     category: "insurance",
     holder: "company",
     fieldSet: "insurance",
-    // Standard policy wording: 12:01 a.m. standard time on the effective date to 12:01 a.m. on the expiration date (TRADE-FACTS 1.1).
+    // Standard policy wording: 12:01 a.m. standard time on the effective date to 12:01 a.m. on the expiration date (ISO CG DS 01 wording, from memory).
     validity: documentDates,
     description:
       "Liability for bodily injury and property damage arising from the company's operations and completed work.",
@@ -70,7 +70,7 @@ export const credentialTypes: readonly CredentialTypeDefinition[] = [
     category: "insurance",
     holder: "company",
     fieldSet: "insurance",
-    validity: documentDates, // policy period as printed (TRADE-FACTS 1.1)
+    validity: documentDates, // policy period as printed, 12:01 a.m. standard time as in the CGL declarations
     description:
       "Liability for vehicles used to reach the customer's site, usually one combined single limit.",
   },
@@ -80,7 +80,7 @@ export const credentialTypes: readonly CredentialTypeDefinition[] = [
     category: "insurance",
     holder: "company",
     fieldSet: "insurance",
-    validity: documentDates, // policy period as printed (TRADE-FACTS 1.1)
+    validity: documentDates, // policy period as printed, 12:01 a.m. standard time as in the CGL declarations
     description:
       "Statutory benefits for injured employees (Part One) and employer's liability limits (Part Two).",
   },
@@ -90,7 +90,7 @@ export const credentialTypes: readonly CredentialTypeDefinition[] = [
     category: "insurance",
     holder: "company",
     fieldSet: "insurance",
-    validity: documentDates, // policy period as printed (TRADE-FACTS 1.1)
+    validity: documentDates, // policy period as printed, 12:01 a.m. standard time as in the CGL declarations
     description: "Limits above the general, auto and employer's liability policies.",
   },
   {
@@ -176,7 +176,7 @@ export const credentialTypes: readonly CredentialTypeDefinition[] = [
     category: "oem",
     holder: "technician",
     fieldSet: "oem",
-    // Common practice: no regulatory expiry; the builder's printed expiry governs when there is one (TRADE-FACTS 4).
+    // Common practice: no regulatory expiry; the builder's printed expiry governs when there is one.
     validity: documentDates,
     description: "A machine builder's service training on a control family, at a stated level.",
   },

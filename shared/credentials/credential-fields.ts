@@ -13,7 +13,7 @@ export const isoDateSchema = z
 /** Whole US dollars; limits on a certificate are printed without cents. */
 export const dollarsSchema = z.number().int().min(0).max(1_000_000_000);
 
-// NAIC company code: five digits (TRADE-FACTS 2.4, NAIC company code).
+// NAIC company code: five digits (from memory).
 export const naicSchema = z.string().regex(/^\d{5}$/, "NAIC company code has five digits");
 
 export const limitNames = [

@@ -43,7 +43,7 @@ export interface ReviewerCheckInput {
   workStates?: readonly { state: string; where: string }[];
 }
 
-// NAIC company code: five digits (TRADE-FACTS 2.4).
+// NAIC company code: five digits (from memory).
 const NAIC_PATTERN = /^\d{5}$/;
 // Legal-form words that one document spells out and another abbreviates or drops.
 const LEGAL_SUFFIXES = new Set([
@@ -106,7 +106,7 @@ function insuranceWarnings(input: ReviewerCheckInput): ReviewerWarning[] {
     });
   }
   const limits = fields.limits ?? {};
-  // General aggregate >= each occurrence (TRADE-FACTS 2.5, common practice).
+  // General aggregate >= each occurrence (common practice).
   if (
     limits.generalAggregate !== undefined &&
     limits.eachOccurrence !== undefined &&
@@ -117,7 +117,7 @@ function insuranceWarnings(input: ReviewerCheckInput): ReviewerWarning[] {
       message: "The general aggregate is below the each-occurrence limit.",
     });
   }
-  // EL disease policy limit >= disease each employee (TRADE-FACTS 2.5, common practice).
+  // EL disease policy limit >= disease each employee (common practice).
   const diseasePolicy = limits.employersLiabilityDiseasePolicyLimit;
   const diseaseEmployee = limits.employersLiabilityDiseaseEachEmployee;
   if (diseasePolicy !== undefined && diseaseEmployee !== undefined && diseasePolicy < diseaseEmployee) {

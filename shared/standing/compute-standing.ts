@@ -50,7 +50,7 @@ export interface TechnicianStandingInput {
   /** The technician's own training cards and licenses. */
   technicianCredentials: readonly StandingCredential[];
   requirements: readonly Requirement[];
-  /** Zone of the company's mailing address: the policy period is read there (standard CGL declarations: "12:01 A.M. standard time at your mailing address"). */
+  /** Zone of the company's mailing address: the policy period is read there (standard CGL declarations, ISO CG DS 01: "12:01 A.M. standard time at your mailing address", wording from memory). */
   companyTimeZone: string;
   /** The technician, so a workers' compensation exemption clears only the persons it names. */
   technician: { id: number; name: string };

@@ -232,7 +232,9 @@ function withUnderlying(
       detail: `${umbrella.type.name} (credential ${umbrella.credential.id}) counts only over its underlying policies; no verified ${names} is in force.`,
     };
   }
-  const under = codes.map((code) => (found.get(code) ?? [])[0]).filter((c): c is Candidate => c !== undefined);
+  const under = codes
+    .map((code) => (found.get(code) ?? [])[0])
+    .filter((c): c is Candidate => c !== undefined);
   const endsAt = [umbrella, ...under].reduce<Date | null>(
     (soonest, c) => (endMs(c.endsAt) < endMs(soonest) ? c.endsAt : soonest),
     null,
@@ -272,7 +274,8 @@ function stackedCandidates(
       const over = { type: umbrella.type, fields: umbrella.credential.fields };
       const problem = findContentProblem(requirement, primary.type, primaryFields, over);
       const lines = compareLimits(requirement, primary.type, primaryFields, over);
-      const awaiting = umbrella.reason === "awaiting_verification" || primary.credential.state === "submitted";
+      const awaiting =
+        umbrella.reason === "awaiting_verification" || primary.credential.state === "submitted";
       const endsAt = endMs(umbrella.endsAt) < endMs(primary.endsAt) ? umbrella.endsAt : primary.endsAt;
       const metBy = lines.map((l) => `${l.how} ${limitWordsShort(l)}`).join("; ");
       out.push({
@@ -310,10 +313,7 @@ export function evaluateRequirement(
     .filter(({ credential, type }) => credential.holder === type.holder)
     .map(({ credential, type }) => assess(requirement, credential, type, options))
     .map((c) => (c.type.code === UMBRELLA ? withUnderlying(c, credentials, types, options) : c));
-  const candidates = [
-    ...single,
-    ...stackedCandidates(requirement, single, credentials, types, options),
-  ];
+  const candidates = [...single, ...stackedCandidates(requirement, single, credentials, types, options)];
 
   const met = candidates
     .filter((c) => c.reason === null)

@@ -1,7 +1,7 @@
 import type { LimitName } from "@shared/credentials/credential-fields.ts";
 import type { Requirement } from "@shared/standing/requirements.ts";
 
-// The limit lines a minimum is usually set on (TRADE-FACTS 2.5); a stored minimum on any other line is kept as it is.
+// The limit lines a minimum is usually set on (common practice); a stored minimum on any other line is kept as it is.
 export const offeredLimits = [
   ["eachOccurrence", "General liability, each occurrence ($)"],
   ["generalAggregate", "General liability, aggregate ($)"],

@@ -7,7 +7,7 @@ import { buildProvider } from "../../support/build-provider.ts";
 import { buildCredentialRow, insuranceFields } from "../../fixtures/build-credential-row.ts";
 
 // The policy period runs on standard time at the named insured's mailing address (the standard CGL declarations,
-// ISO CG DS 01: "12:01 A.M. standard time at your mailing address"), so the company's zone follows its ZIP code.
+// ISO CG DS 01: "12:01 A.M. standard time at your mailing address", wording from memory), so the company's zone follows its ZIP code.
 let t: TestApp;
 beforeAll(() => {
   t = buildTestApp();
@@ -62,7 +62,10 @@ describe("a company's time zone follows its ZIP code", () => {
     );
     expect(withAddress.status).toBe(422);
     expect(withAddress.body.error.fields).toEqual([
-      { path: "body.timeZone", message: "The time zone follows the ZIP code; change the mailing address instead" },
+      {
+        path: "body.timeZone",
+        message: "The time zone follows the ZIP code; change the mailing address instead",
+      },
     ]);
     await company.reload();
     expect(company.timeZone).toBe("America/Chicago");
@@ -79,7 +82,9 @@ describe("a company's time zone follows its ZIP code", () => {
     // 12:01 a.m. Central Standard Time (UTC-6) while the company is in Chicago.
     expect(policy.lapsesAt?.toISOString()).toBe("2027-07-15T06:01:00.000Z");
 
-    const res = await admin.put("/api/company/address").send({ addressLine: "200 Ridge Rd", postalCode: "80202" });
+    const res = await admin
+      .put("/api/company/address")
+      .send({ addressLine: "200 Ridge Rd", postalCode: "80202" });
 
     expect(res.status).toBe(200);
     expect(res.body).toMatchObject({ postalCode: "80202", state: "CO", timeZone: "America/Denver" });

@@ -59,7 +59,7 @@ describe("technician standing", () => {
     });
 
     expect(result.standing).toBe("lapsing");
-    expect(result.earliestLapse).toBe("2027-02-01T06:01:00.000Z"); // TRADE-FACTS 1.3: 12:01 a.m. CST
+    expect(result.earliestLapse).toBe("2027-02-01T06:01:00.000Z"); // 12:01 a.m. CST: CGL declarations' "standard time" (from memory)
   });
 
   it("is not cleared when any requirement is unmet, and names it", () => {

@@ -25,7 +25,7 @@ describe("credential lapse instant", () => {
   it("ends a policy at 12:01 a.m. standard time on its expiration date", () => {
     const lapse = credentialLapseInstant(type("workers_comp"), policyFields, "America/New_York");
 
-    expect(lapse?.toISOString()).toBe("2027-07-15T05:01:00.000Z"); // TRADE-FACTS 1.3 (New York, summer)
+    expect(lapse?.toISOString()).toBe("2027-07-15T05:01:00.000Z"); // 12:01 a.m. EST in summer: CGL declarations' "standard time" (from memory)
   });
 
   it("ends a license at the local midnight after its printed expiry", () => {
@@ -69,6 +69,6 @@ describe("credential lapse instant", () => {
 
     const lapse = credentialLapseInstant(type("powered_truck"), fields, "America/Chicago");
 
-    expect(lapse?.toISOString()).toBe("2027-03-01T06:00:00.000Z"); // 29 CFR 1910.178(l)(4)(iii): due 2027-02-28 (TRADE-FACTS 4), counts through it
+    expect(lapse?.toISOString()).toBe("2027-03-01T06:00:00.000Z"); // 29 CFR 1910.178(l)(4)(iii): due 2027-02-28 (OSHA letter 2005-08-01), counts through it
   });
 });

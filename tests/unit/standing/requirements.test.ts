@@ -88,7 +88,11 @@ describe("requirement flags that cannot apply", () => {
   });
 
   it("refuse statutory limits on a line without a workers' compensation policy", () => {
-    const parsed = requirementSchema.safeParse({ label: "GL", typeCodes: ["general_liability"], statutory: true });
+    const parsed = requirementSchema.safeParse({
+      label: "GL",
+      typeCodes: ["general_liability"],
+      statutory: true,
+    });
 
     expect(parsed.error?.issues[0]?.path).toEqual(["statutory"]);
   });

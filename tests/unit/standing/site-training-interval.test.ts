@@ -17,7 +17,11 @@ describe("a site's interval for training cards", () => {
       const result = evaluateRequirement({ label: "Card", typeCodes: [typeCode] }, [card], options);
 
       // Valid through 2026-12-15, so lapsed at the start of 2026-12-16 (CST, UTC-6).
-      expect(result).toMatchObject({ status: "unmet", reason: "lapsed", lapsesAt: "2026-12-16T06:00:00.000Z" });
+      expect(result).toMatchObject({
+        status: "unmet",
+        reason: "lapsed",
+        lapsesAt: "2026-12-16T06:00:00.000Z",
+      });
     },
   );
 

@@ -91,7 +91,7 @@ describe("umbrella and excess limits stacked over the primary policy", () => {
     const result = evaluateRequirement(fiveMillion, [gl(), over], options);
 
     // Umbrella ends 12:01 a.m. standard time 2027-05-01 (CST, UTC-6) before the GL's 2027-07-15: the standard
-    // policy-period wording of the CGL declarations (ISO CG DS 01), "12:01 A.M. standard time at your mailing address".
+    // policy-period wording of the CGL declarations (ISO CG DS 01), "12:01 A.M. standard time at your mailing address" (wording from memory).
     expect(result.lapsesAt).toBe("2027-05-01T06:01:00.000Z");
   });
 
@@ -134,7 +134,7 @@ describe("an umbrella line needs its underlying policy", () => {
     const result = evaluateRequirement(umbrellaLine, [umbrella(), shortGl], options);
 
     expect(result).toMatchObject({ status: "lapsing", metBy: "umbrella over GL" });
-    expect(result.lapsesAt).toBe("2027-03-01T06:01:00.000Z"); // the GL's 12:01 a.m. CST cut-off (ISO CG DS 01 wording)
+    expect(result.lapsesAt).toBe("2027-03-01T06:01:00.000Z"); // the GL's 12:01 a.m. CST cut-off (ISO CG DS 01 wording, from memory)
   });
 
   it("needs auto and employer's liability beneath it when the set requires those policies", () => {
@@ -173,7 +173,9 @@ describe("how a line was met, kept on the work order's proof", () => {
       takenAt: asOf,
       technician: { id: 1, name: "Dana Quillfeather", companyName: "Harrowgate Field Service LLC" },
       targets: [{ requirementSetId: 9, name: "Plant 2", result }],
-      credentials: new Map([[primary.id, { id: primary.id, typeCode: primary.typeCode, fields: primary.fields }]]),
+      credentials: new Map([
+        [primary.id, { id: primary.id, typeCode: primary.typeCode, fields: primary.fields }],
+      ]),
       typeNames: new Map([["general_liability", "Commercial general liability"]]),
     });
 

@@ -26,7 +26,7 @@ export const limitLabels: Record<LimitName, string> = {
   umbrellaAggregate: "Umbrella, aggregate",
 };
 
-// The limit lines each coverage prints on a certificate (TRADE-FACTS 2.5); other lines would only invite wrong entries.
+// The limit lines each coverage prints on a certificate (common practice); other lines would only invite wrong entries.
 const limitsByType: Record<string, readonly LimitName[]> = {
   general_liability: [
     "eachOccurrence",
