@@ -19,7 +19,7 @@ import { credentialRoutes } from "./credentials/index.ts";
 import { buyerRouters } from "./directory/buyer-routers.ts";
 import { workOrderRoutes } from "./work-orders/index.ts";
 import { reviewRoutes } from "./reviews/index.ts";
-import { companyRoutes } from "./companies/routes.ts";
+import { companyRoutes } from "./companies/index.ts";
 import { createStorage } from "./storage/index.ts";
 import { createSignInLimiter } from "./accounts/sign-in-limit.ts";
 

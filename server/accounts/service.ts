@@ -3,7 +3,7 @@ import type { InviteUser, SetPassword, SignUp } from "../../shared/accounts/sche
 import { db } from "../db/sequelize.ts";
 import { AppError } from "../http/app-error.ts";
 import { Company } from "../companies/model.ts";
-import { placeOfCompany } from "../companies/address.ts";
+import { placeOfCompany } from "../companies/index.ts";
 import { enqueueMail } from "../mail/outbox.ts";
 import { recordAudit } from "../audit/index.ts";
 import { User } from "./model.ts";
