@@ -27,7 +27,7 @@ export const navigationByRole: Record<Role, readonly NavItem[]> = {
   ],
   admin: [
     { label: "Users", to: paths.admin.users },
-    { label: "Catalogue", to: paths.admin.catalogue },
+    { label: "Catalog", to: paths.admin.catalog },
     { label: "Outbox", to: paths.admin.outbox },
     { label: "Baseline", to: paths.admin.baseline },
     { label: "Job runs", to: paths.admin.jobRuns },

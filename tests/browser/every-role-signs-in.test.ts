@@ -44,7 +44,7 @@ const journeys = [
   {
     role: "admin",
     email: "admin@clearbench.test",
-    sees: ["Users", "Catalogue", "Outbox", "Baseline", "Job runs", "Reported reviews"],
+    sees: ["Users", "Catalog", "Outbox", "Baseline", "Job runs", "Reported reviews"],
     hidden: ["Queue", "Directory", "Technicians"],
   },
 ] as const;

@@ -369,11 +369,11 @@ function drawFooter(pen: Pen, values: CertificateValues, top: number): void {
     write(pen, 34, holderTop + 26 + i * 10, line, 8),
   );
   const cancellation = [
-    "If a policy above is cancelled before its expiration date, notice",
+    "If a policy above is canceled before its expiration date, notice",
     "will be given as the policy itself provides.",
   ];
   cancellation.forEach((line, i) => write(pen, 310, holderTop + 26 + i * 10, line, 7));
-  write(pen, 310, holderTop + 66, "AUTHORISED REPRESENTATIVE", 6, true);
+  write(pen, 310, holderTop + 66, "AUTHORIZED REPRESENTATIVE", 6, true);
   pen.page.drawLine({
     start: { x: 310, y: 792 - holderTop - 82 },
     end: { x: 570, y: 792 - holderTop - 82 },

@@ -1,6 +1,7 @@
 import type { ReactNode } from "react";
 import { useSuspenseQuery } from "@tanstack/react-query";
 import { Link, useParams, type LoaderFunctionArgs } from "react-router-dom";
+import { wholeMilesFromKm } from "@shared/geo/units.ts";
 import { technologyLabels, type MachineTechnology } from "@shared/technicians/schemas.ts";
 import { hrefs } from "@/config/paths.ts";
 import { Button } from "@/components/ui/button.tsx";
@@ -89,7 +90,8 @@ export function Component() {
           </span>
           <span className="text-sm text-ink-800">
             {formatCents(t.hourlyRateCents)}/h on site · {formatCents(t.travelRateCents)}/h travel ·{" "}
-            {formatCents(t.mileageRateCents)}/mile · serves {t.serviceRadiusKm} km around base
+            {formatCents(t.mileageRateCents)}/mile · serves {wholeMilesFromKm(t.serviceRadiusKm)} miles around
+            base
           </span>
         </div>
         <CautionNote />

@@ -1,5 +1,6 @@
 import { useSuspenseQuery } from "@tanstack/react-query";
 import { Link, useParams, type LoaderFunctionArgs } from "react-router-dom";
+import { wholeMilesFromKm } from "@shared/geo/units.ts";
 import { hrefs } from "@/config/paths.ts";
 import { Button } from "@/components/ui/button.tsx";
 import { buttonStyles } from "@/components/ui/button-styles.ts";
@@ -46,7 +47,10 @@ export function Component() {
     ["Phone", technician.phone ?? "—"],
     ["Technologies", technologyWords(technician.technologies)],
     ["Control families", technician.controlFamilies.join(", ") || "—"],
-    ["Home base", `ZIP ${technician.postalCode}, serves ${technician.serviceRadiusKm} km around`],
+    [
+      "Home base",
+      `ZIP ${technician.postalCode}, serves ${wholeMilesFromKm(technician.serviceRadiusKm)} miles around`,
+    ],
     [
       "Rates",
       `${formatCents(technician.hourlyRateCents)}/h on site, ${formatCents(technician.travelRateCents)}/h travel, ${formatCents(technician.mileageRateCents)}/mi`,

@@ -1,5 +1,5 @@
 import type { FormEvent } from "react";
-import { DEFAULT_RADIUS_KM } from "@shared/directory/schemas.ts";
+import { DEFAULT_RADIUS_MILES } from "@shared/directory/schemas.ts";
 import { machineTechnologies, technologyLabels } from "@shared/technicians/schemas.ts";
 import { Button } from "@/components/ui/button.tsx";
 import { FormError } from "@/components/ui/form-error.tsx";
@@ -33,7 +33,7 @@ const ratingOptions = ["4.5", "4", "3.5", "3"].map((v) => ({ value: v, label: `$
 
 const labels = {
   siteId: "Site",
-  radiusKm: "Radius (km)",
+  radiusMiles: "Radius (miles)",
   equipmentId: "Machine",
   technology: "Technology",
   credentialTypes: "Credential types",
@@ -101,9 +101,9 @@ export function DirectoryFilters(props: DirectoryFiltersProps) {
           onChange={(e) => set({ siteId: e.target.value, equipmentId: "" })}
           error={errors.siteId}
         />
-        {text("radiusKm", {
+        {text("radiusMiles", {
           inputMode: "numeric",
-          hint: `With a site; ${DEFAULT_RADIUS_KM} km if left empty`,
+          hint: `With a site; ${DEFAULT_RADIUS_MILES} miles if left empty`,
         })}
         <SelectField
           label={labels.equipmentId}
