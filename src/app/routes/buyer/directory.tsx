@@ -2,6 +2,7 @@ import { useState } from "react";
 import { useSuspenseQuery } from "@tanstack/react-query";
 import { Link, useSearchParams, type LoaderFunctionArgs } from "react-router-dom";
 import { directoryQuerySchema, directorySorts, type DirectorySort } from "@shared/directory/schemas.ts";
+import { CLEARED_MEANS } from "@shared/safety/cautions.ts";
 import { technologyLabels, type MachineTechnology } from "@shared/technicians/schemas.ts";
 import { paths } from "@/config/paths.ts";
 import { Button } from "@/components/ui/button.tsx";
@@ -9,6 +10,8 @@ import { CautionNote } from "@/components/ui/caution-note.tsx";
 import { EmptyState } from "@/components/ui/empty-state.tsx";
 import { FormError } from "@/components/ui/form-error.tsx";
 import { PageHeader } from "@/components/ui/page-header.tsx";
+import { SafetyCaution } from "@/components/ui/safety-caution.tsx";
+import { StatusKey } from "@/components/ui/status-key.tsx";
 import { SelectField } from "@/components/ui/select-field.tsx";
 import { Spinner } from "@/components/ui/spinner.tsx";
 import { credentialTypesQuery } from "@/features/credentials/api/get-credential-types.ts";
@@ -158,7 +161,10 @@ function Search({ params }: { params: URLSearchParams }) {
           onChange={(e) => apply(draftFromSearch(params), e.target.value)}
         />
       </div>
+      <p className="text-sm text-ink-800">{CLEARED_MEANS}</p>
       <Results search={search} onSiteHours={onSiteHoursOf(draftFromSearch(params))} />
+      <StatusKey statuses={["cleared", "lapsing"]} />
+      <SafetyCaution />
       <CautionNote />
     </div>
   );

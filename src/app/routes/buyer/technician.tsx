@@ -8,6 +8,8 @@ import { Button } from "@/components/ui/button.tsx";
 import { buttonStyles } from "@/components/ui/button-styles.ts";
 import { CautionNote } from "@/components/ui/caution-note.tsx";
 import { PageHeader } from "@/components/ui/page-header.tsx";
+import { SafetyCaution } from "@/components/ui/safety-caution.tsx";
+import { StatusKey } from "@/components/ui/status-key.tsx";
 import { directoryTechnicianQuery } from "@/features/directory/api/get-directory-technician.ts";
 import { DirectoryStandingBadge } from "@/features/directory/components/directory-standing-badge.tsx";
 import { ProfileCredentials } from "@/features/directory/components/profile-credentials.tsx";
@@ -94,7 +96,9 @@ export function Component() {
             base
           </span>
         </div>
+        <SafetyCaution />
         <CautionNote />
+        <StatusKey statuses={["cleared", "lapsing", "not_cleared", "met", "unmet"]} />
         <Section title="Standing against your requirement sets">
           <ProfileStandings standings={t.requirementSets} />
         </Section>

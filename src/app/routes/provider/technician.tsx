@@ -6,6 +6,8 @@ import { Button } from "@/components/ui/button.tsx";
 import { buttonStyles } from "@/components/ui/button-styles.ts";
 import { EmptyState } from "@/components/ui/empty-state.tsx";
 import { PageHeader } from "@/components/ui/page-header.tsx";
+import { SafetyCaution } from "@/components/ui/safety-caution.tsx";
+import { StatusKey } from "@/components/ui/status-key.tsx";
 import type { Credential } from "@/features/credentials/api/credential-shapes.ts";
 import { credentialsQuery } from "@/features/credentials/api/get-credentials.ts";
 import { CredentialsTable } from "@/features/credentials/components/credentials-table.tsx";
@@ -99,6 +101,7 @@ export function Component() {
       )}
       <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,1fr)_20rem]">
         <div className="space-y-8">
+          <SafetyCaution />
           <StandingSection technicianId={id} loadingLabel="Loading standing" />
           <section aria-labelledby="cards-heading">
             <h2 id="cards-heading" className="mb-3 text-lg font-semibold text-ink-900">
@@ -116,6 +119,21 @@ export function Component() {
               }
             />
           </section>
+          <StatusKey
+            statuses={[
+              "cleared",
+              "lapsing",
+              "not_cleared",
+              "not_checked",
+              "met",
+              "unmet",
+              "submitted",
+              "returned",
+              "verified",
+              "superseded",
+              "lapsed",
+            ]}
+          />
         </div>
         <aside className="space-y-6">
           <section aria-labelledby="details-heading" className="rounded-lg border border-ink-100 bg-white">
