@@ -26,7 +26,12 @@ export const DIRECTORY_SEARCHES: { name: string; label: string; query: Record<st
   {
     name: "oem-rating",
     label: "OEM builder/control/level 2 + rating 4, by score",
-    query: { oemBuilder: "Vantor Machine Works", controlFamily: "VMX-40", minOemLevel: "2", minRating: "4" },
+    query: {
+      oemBuilder: "Vantor Machine Works",
+      controlFamily: "Kestle 40",
+      minOemLevel: "2",
+      minRating: "4",
+    },
   },
 ];
 

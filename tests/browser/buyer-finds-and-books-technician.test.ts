@@ -48,7 +48,7 @@ describe("a buyer finds a cleared technician and books the job", () => {
     await buyer.getByRole("button", { name: "Add site", exact: true }).click();
     await buyer.getByRole("heading", { name: "Rockford main plant" }).waitFor();
     await buyer.getByLabel("Machine builder").fill("Vantor Machine Works");
-    await buyer.getByLabel("Control family").fill("VMX-40");
+    await buyer.getByLabel("Control family").fill("Kestle 40");
     await buyer.getByLabel("Technology").selectOption("mill");
     await buyer.getByLabel("Model").fill("VM-40 vertical mill");
     await buyer.getByRole("button", { name: "Add machine" }).click();

@@ -2,6 +2,7 @@ import { PDFDocument, StandardFonts, rgb, type PDFFont, type PDFPage } from "pdf
 import type { Limits } from "../../../../shared/credentials/credential-fields.ts";
 import { formatDocumentDate, type DocumentDateFormat } from "../../../../shared/credentials/date-formats.ts";
 import { buildSeededRandom, type SeededRandom } from "./build-seeded-random.ts";
+import { demoNaic } from "../demo-naic.ts";
 
 export const coverageCodes = [
   "general_liability",
@@ -151,7 +152,7 @@ export function randomCertificateValues(seed: number): CertificateValues {
   const insurers = ["A", "B", "C", "D"].map((letter, i) => ({
     letter,
     name: `${names[i]} ${random.pick(INSURER_KINDS)}`,
-    naic: String(random.int(10_000, 99_999)),
+    naic: demoNaic(random.int(0, 99)),
   }));
   const letters = insurers.map((insurer) => insurer.letter);
   return {
