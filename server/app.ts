@@ -5,7 +5,7 @@ import helmet from "helmet";
 import { pinoHttp } from "pino-http";
 import { randomUUID } from "node:crypto";
 import type pg from "pg";
-import type { Config } from "./config.ts";
+import { publicUrl, type Config } from "./config.ts";
 import { log } from "./log.ts";
 import { passport, renewSessionNearExpiry, sessionMiddleware } from "./http/auth.ts";
 import { requireCsrfHeader } from "./http/csrf.ts";
@@ -21,6 +21,7 @@ import { workOrderRoutes } from "./work-orders/index.ts";
 import { reviewRoutes } from "./reviews/index.ts";
 import { createStorage } from "./storage/index.ts";
 import { createSignInLimiter } from "./accounts/sign-in-limit.ts";
+import { setRosterAlertLinkBase } from "./roster/index.ts";
 
 export interface AppDeps {
   config: Config;
@@ -45,6 +46,7 @@ const apiRouters = [
 export function createApp({ config, sessionPool, clientDir }: AppDeps): Express {
   const app = express();
   app.locals.config = config;
+  setRosterAlertLinkBase(publicUrl(config));
   app.locals.storage = createStorage(config.UPLOADS_DIR, config);
   app.locals.signInLimiter = createSignInLimiter(config.SIGN_IN_ATTEMPTS_PER_15_MIN);
   app.disable("x-powered-by");

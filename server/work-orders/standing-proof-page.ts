@@ -71,7 +71,7 @@ export function renderStandingProof(
     : "<p>No snapshot has been taken yet: one is taken when the technician accepts and another when the work is completed.</p>";
   const number = escapeHtml(String(subject.workOrderId));
   return `<!doctype html>
-<html lang="en"><head><meta charset="utf-8"><title>Proof of standing, work order ${number}</title>
+<html lang="en"><head><meta charset="utf-8"><title>Proof of standing, work order #${number}</title>
 <style>
 body{font-family:"Work Sans",system-ui,sans-serif;color:#14213d;margin:2rem;font-size:12px}
 table{border-collapse:collapse;width:100%;margin-bottom:1rem}th,td{border:1px solid #8a94a6;padding:4px;text-align:left;vertical-align:top}
@@ -79,7 +79,7 @@ table{border-collapse:collapse;width:100%;margin-bottom:1rem}th,td{border:1px so
 .caution{border-left:4px solid #b45309;padding:4px 8px;margin:1rem 0}
 @media print{body{margin:0}}
 </style></head><body>
-<h1>Proof of standing: work order ${number}</h1>
+<h1>Proof of standing: work order #${number}</h1>
 <p>${escapeHtml(first?.technicianName ?? "")}${first ? ` of ${escapeHtml(first.companyName)}` : ""}, for ${escapeHtml(subject.shopName)} at ${escapeHtml(subject.siteName)} (${escapeHtml(technologyWords(subject.technology))}). Times are local to the site.</p>
 <div class="caution"><strong>${escapeHtml(SAFETY_CAUTION_TITLE)}.</strong> ${escapeHtml(CLEARED_MEANS)}<ul>${SAFETY_CAUTIONS.map((s) => `<li>${escapeHtml(s)}</li>`).join("")}<li>${escapeHtml(LICENSE_CAUTION)}</li></ul></div>
 ${body}
