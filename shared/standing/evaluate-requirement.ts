@@ -59,6 +59,15 @@ function ageLimitInstant(
   return endOfValidThroughInstant(addCalendarMonths(issued, requirement.maxAgeMonths), timeZone);
 }
 
+/** A credential as people know it: its type and the number printed on it, never an internal id. */
+function nameOf(type: CredentialTypeDefinition, credential: StandingCredential): string {
+  const f = credential.fields as Partial<
+    Record<"policyNumber" | "licenseNumber" | "certificateNumber" | "cardNumber", string>
+  >;
+  const reference = f.policyNumber ?? f.licenseNumber ?? f.certificateNumber ?? f.cardNumber;
+  return reference ? `${type.name} ${reference}` : type.name;
+}
+
 function assess(
   requirement: Requirement,
   credential: StandingCredential,
@@ -72,7 +81,7 @@ function assess(
   const endsAt = endedByAge ? ageEnd : ownEnd;
   const startsAt = credentialStartInstant(type, credential.fields, timeZone);
   const base = { credential, type, startsAt, endsAt, endedByAge };
-  const named = `${type.name} (credential ${credential.id})`;
+  const named = nameOf(type, credential);
 
   if (credential.state === "returned")
     return { ...base, reason: "returned", detail: `${named} was returned to the holder.` };
@@ -132,7 +141,7 @@ function describeMet(
   lapsing: boolean,
   options: StandingOptions,
 ): string {
-  const named = `${met.type.name} (credential ${met.credential.id})`;
+  const named = nameOf(met.type, met.credential);
   if (lapsesAt === null) return `Met by ${named}; it does not expire.`;
   const until = localDate(lapsesAt, options.timeZone);
   return lapsing

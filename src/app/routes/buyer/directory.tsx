@@ -35,7 +35,7 @@ const sortLabels: Record<DirectorySort, string> = {
   score: "Rating (ranked)",
   distance: "Distance",
   hourlyRate: "Hourly rate",
-  soonestLapse: "Soonest lapse",
+  soonestLapse: "Next lapse",
 };
 
 /** The URL's filters in their one normal form (no cursor): the cache key and the API's query string. */
@@ -145,7 +145,7 @@ function Search({ params }: { params: URLSearchParams }) {
           <Link to={paths.buyer.sites} className="underline underline-offset-2">
             Sites
           </Link>{" "}
-          page to see distances, drive times and call-out estimates.
+          page to see distances, drive times and service call estimates.
         </p>
       )}
       <div className="flex flex-wrap items-end justify-between gap-3">

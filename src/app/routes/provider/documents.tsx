@@ -47,7 +47,7 @@ export function Component() {
   return (
     <>
       <PageHeader
-        title="Documents"
+        title="Credentials"
         description="Your company's insurance and your technicians' cards, each with its verification state and when it lapses."
         actions={upload}
       />
@@ -74,7 +74,7 @@ export function Component() {
         />
       </div>
       <CredentialsTable
-        caption="Documents"
+        caption="Credentials"
         credentials={credentials}
         correctionHref={correctionHref}
         empty={

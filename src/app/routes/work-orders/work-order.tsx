@@ -119,7 +119,7 @@ export function Component() {
         All work orders
       </Link>
       <PageHeader
-        title={`Work order No. ${workOrder.id}`}
+        title={`Work order #${workOrder.id}`}
         description={
           <span className="flex flex-wrap items-center gap-2">
             <WorkOrderStatusBadge status={workOrder.status} />

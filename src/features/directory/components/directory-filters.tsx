@@ -41,7 +41,7 @@ const labels = {
   minRating: "Minimum rating",
   q: "Name of technician or company",
   onSiteHours: "Expected hours on site",
-  oemBuilder: "OEM builder",
+  oemBuilder: "Machine builder",
   controlFamily: "Control family",
   minOemLevel: "Minimum OEM level",
   minEachOccurrence: "General liability, each occurrence at least ($)",
@@ -201,7 +201,10 @@ export function DirectoryFilters(props: DirectoryFiltersProps) {
           {text("minEachOccurrence", { inputMode: "numeric" })}
           {text("minAggregate", { inputMode: "numeric" })}
           {text("minAutoCsl", { inputMode: "numeric" })}
-          {text("onSiteHours", { inputMode: "decimal", hint: "For the call-out estimate; 2 if left empty" })}
+          {text("onSiteHours", {
+            inputMode: "decimal",
+            hint: "For the service call estimate; 2 if left empty",
+          })}
         </div>
       </details>
       <div className="flex flex-wrap gap-2">

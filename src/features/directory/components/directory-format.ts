@@ -17,7 +17,7 @@ export const ratingWords = (rating: { average: number | null; count: number }): 
 /** How the empty state names the filter that removed the most candidates. */
 export const filterWords: Record<DirectoryFilterName, string> = {
   credentialTypes: "the credential types",
-  oemTraining: "the OEM training (builder, control family, level)",
+  oemTraining: "the machine builder training (builder, control family, level)",
   technology: "the machine technology",
   generalLiability: "the general liability limits",
   autoLiability: "the auto liability limit",
