@@ -176,7 +176,7 @@ export function Component() {
     <>
       <PageHeader
         title="Directory"
-        description="Technicians who are cleared today, near your sites. Filter by credential, OEM training, technology, insurance limits, distance and rating; the filters stay in the address, so a search can be bookmarked."
+        description="Technicians who are cleared today, near your sites. Filter by credential, machine builder training, technology, insurance limits, distance and rating; the filters stay in the address, so a search can be bookmarked."
       />
       {/* A new URL (back, a bookmark) starts a fresh draft from it. */}
       <Search key={normalSearch(params)} params={params} />

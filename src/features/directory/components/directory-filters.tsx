@@ -185,7 +185,7 @@ export function DirectoryFilters(props: DirectoryFiltersProps) {
         }
       >
         <summary className="min-h-11 cursor-pointer py-2 text-sm font-semibold text-ink-900">
-          OEM training, insurance limits and estimate
+          Machine builder training, insurance limits and estimate
         </summary>
         <div className="grid gap-4 pt-2 sm:grid-cols-2 lg:grid-cols-4">
           {text("oemBuilder")}
