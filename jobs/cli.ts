@@ -1,11 +1,11 @@
 import { parseArgs } from "node:util";
-import { loadConfig } from "../server/config.ts";
+import { loadConfig, publicUrl } from "../server/config.ts";
 import { configureLog } from "../server/log.ts";
 import { connectDatabase } from "../server/db/sequelize.ts";
 import { initModels } from "../server/db/associations.ts";
 import { createSmtpMailer } from "../server/mail/index.ts";
 import { checkStandingConsistency } from "../server/standing/index.ts";
-import { registerRosterAlerts, sweepRosterAlerts } from "../server/roster/index.ts";
+import { registerRosterAlerts, setRosterAlertLinkBase, sweepRosterAlerts } from "../server/roster/index.ts";
 import { runLapseJob } from "./lapse.ts";
 import { runReviewerDigest } from "./reviewer-digest.ts";
 import { runSendOutbox } from "./send-outbox.ts";
@@ -26,6 +26,7 @@ const { values, positionals } = parseArgs({
 
 const command = positionals[0] ?? "lapse";
 const config = loadConfig();
+setRosterAlertLinkBase(publicUrl(config));
 configureLog(config.LOG_LEVEL === "info" ? "warn" : config.LOG_LEVEL);
 
 if (!config.DATABASE_URL) {

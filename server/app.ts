@@ -5,7 +5,7 @@ import helmet from "helmet";
 import { pinoHttp } from "pino-http";
 import { randomUUID } from "node:crypto";
 import type pg from "pg";
-import type { Config } from "./config.ts";
+import { publicUrl, type Config } from "./config.ts";
 import { log, logSerializers } from "./log.ts";
 import { passport, renewSessionNearExpiry, sessionMiddleware } from "./http/auth.ts";
 import { requireCsrfHeader } from "./http/csrf.ts";
@@ -23,6 +23,7 @@ import { reviewRoutes } from "./reviews/index.ts";
 import { companyRoutes } from "./companies/index.ts";
 import { createStorage } from "./storage/index.ts";
 import { createAbuseLimits } from "./accounts/abuse-limits.ts";
+import { setRosterAlertLinkBase } from "./roster/index.ts";
 
 export interface AppDeps {
   config: Config;
@@ -48,6 +49,7 @@ const apiRouters = [
 export function createApp({ config, sessionPool, clientDir }: AppDeps): Express {
   const app = express();
   app.locals.config = config;
+  setRosterAlertLinkBase(publicUrl(config));
   app.locals.storage = createStorage(config.UPLOADS_DIR, config);
   app.locals.abuseLimits = createAbuseLimits(config);
   app.locals.readiness = new Readiness();

@@ -10,13 +10,13 @@ import { IDS } from "./large-data-sql.ts";
 export const BENCH_BUYER = { ordinal: 1, email: "buyer-1@shop.large.test", siteId: 1 };
 
 export const DIRECTORY_SEARCHES: { name: string; label: string; query: Record<string, string> }[] = [
-  { name: "near-site", label: "site, 150 km, by distance", query: { siteId: "1" } },
+  { name: "near-site", label: "site, 100 miles, by distance", query: { siteId: "1" } },
   {
     name: "site-cards-gl",
     label: "site + 2 cards + mill + GL 1M/2M",
     query: {
       siteId: "1",
-      radiusKm: "400",
+      radiusMiles: "250",
       credentialTypes: "arc_flash,lockout_tagout",
       technology: "mill",
       minEachOccurrence: "1000000",
@@ -26,7 +26,12 @@ export const DIRECTORY_SEARCHES: { name: string; label: string; query: Record<st
   {
     name: "oem-rating",
     label: "OEM builder/control/level 2 + rating 4, by score",
-    query: { oemBuilder: "Vantor Machine Works", controlFamily: "VMX-40", minOemLevel: "2", minRating: "4" },
+    query: {
+      oemBuilder: "Vantor Machine Works",
+      controlFamily: "Kestle 40",
+      minOemLevel: "2",
+      minRating: "4",
+    },
   },
 ];
 

@@ -83,7 +83,7 @@ export const COMPANY_WORDS = [
   "Stillwater",
   "Granite",
   "Northfield",
-  "Redwing",
+  "Rookhallow",
   "Silverleaf",
   "Thornbury",
   "Harrow",
@@ -95,7 +95,7 @@ export const COMPANY_WORDS = [
   "Emberly",
   "Foxmoor",
   "Glenhaven",
-  "Highmark",
+  "Hollowmere",
 ];
 
 export const SERVICE_SUFFIXES = [
@@ -117,7 +117,7 @@ export const SHOP_SUFFIXES = [
 
 /** Invented builders, each with its control families (the directory's OEM filter compares these). */
 export const BUILDERS: { name: string; controls: string[] }[] = [
-  { name: "Vantor Machine Works", controls: ["VMX-40", "VMX-60T"] },
+  { name: "Vantor Machine Works", controls: ["Kestle 40", "Kestle 60L"] },
   { name: "Halden Axis Systems", controls: ["Halden HX-7"] },
   { name: "Orrin & Vale Toolworks", controls: ["Linea 9"] },
   { name: "Strell Spark Systems", controls: ["Spark 5"] },

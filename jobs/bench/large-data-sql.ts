@@ -157,7 +157,8 @@ export function companyCredentialsSql(): string {
            coalesce(fixed_state, CASE WHEN lapses_at > $1::timestamptz THEN 'verified' ELSE 'lapsed' END),
            jsonb_build_object(
              'insurerName', ${pick(sqlTextArray(INSURERS), "pg_temp.rnd(c, 32 + f)")},
-             'naic', lpad((10000 + floor(pg_temp.rnd(c, 33 + f) * 89999)::int)::text, 5, '0'),
+             -- Demo NAIC codes: "000" and two digits, a shape no insurer should hold (server/db/demo-scenario/demo-naic.ts).
+             'naic', '000' || lpad(floor(pg_temp.rnd(c, 33 + f) * 100)::int::text, 2, '0'),
              'policyNumber', upper(left(type_code, 2)) || '-' || c || '-' || k,
              'effectiveDate', to_char(expires - 365, 'YYYY-MM-DD'),
              'expirationDate', to_char(expires, 'YYYY-MM-DD'),

@@ -1,25 +1,45 @@
-import type { MailDraft } from "../mail/outbox.ts";
+import { composeMail, type MailDraft } from "../mail/index.ts";
 
-const escapeHtml = (s: string) =>
-  s.replace(
-    /[&<>"']/g,
-    (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" })[c] ?? c,
-  );
+const roleWords: Record<string, string> = {
+  admin: "an administrator",
+  reviewer: "a compliance reviewer",
+  provider_admin: "the office administrator",
+  technician: "a technician",
+  buyer: "a buyer",
+};
 
-export function inviteMail(to: string, name: string, companyName: string, link: string): MailDraft {
-  return {
+export function inviteMail(
+  to: string,
+  name: string,
+  companyName: string,
+  link: string,
+  role: string,
+): MailDraft {
+  const as = ` as ${roleWords[role] ?? role}`;
+  return composeMail({
     to,
-    subject: "You are invited to Clearbench",
-    text: `Hello ${name},\n\nYou have been given a Clearbench account for ${companyName}.\nSet your password here (the link works once, for 7 days):\n${link}\n\nClearbench`,
-    html: `<p>Hello ${escapeHtml(name)},</p><p>You have been given a Clearbench account for ${escapeHtml(companyName)}.</p><p><a href="${escapeHtml(link)}">Set your password</a> (the link works once, for 7 days).</p>`,
-  };
+    subject: `You are invited to Clearbench${as}`,
+    greetName: name,
+    paragraphs: [`You have been given a Clearbench account for ${companyName}${as}.`],
+    next: {
+      sentence: "Set your password to sign in. The link works once, for 7 days.",
+      label: "Set your password",
+      url: link,
+    },
+  });
 }
 
 export function resetMail(to: string, name: string, link: string): MailDraft {
-  return {
+  return composeMail({
     to,
     subject: "Reset your Clearbench password",
-    text: `Hello ${name},\n\nSomeone asked to reset the password of this account. If it was you, use this link within one hour (it works once):\n${link}\n\nIf it was not you, ignore this message.\n\nClearbench`,
-    html: `<p>Hello ${escapeHtml(name)},</p><p>Someone asked to reset the password of this account. If it was you, <a href="${escapeHtml(link)}">choose a new password</a> within one hour (the link works once).</p><p>If it was not you, ignore this message.</p>`,
-  };
+    greetName: name,
+    paragraphs: ["Someone asked to reset the password of this account."],
+    next: {
+      sentence: "If it was you, choose a new password within one hour. The link works once.",
+      label: "Choose a new password",
+      url: link,
+    },
+    after: ["If it was not you, ignore this message; your password stays as it is."],
+  });
 }

@@ -184,7 +184,7 @@ export async function createInvitedUser(
       );
       const token = await issueToken(user.id, "invite", transaction);
       await enqueueMail(
-        inviteMail(user.email, user.name, company.name, `${linkBase}/set-password?token=${token}`),
+        inviteMail(user.email, user.name, company.name, `${linkBase}/set-password?token=${token}`, user.role),
         transaction,
       );
       await recordAudit(

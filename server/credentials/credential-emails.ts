@@ -1,18 +1,18 @@
-import type { MailDraft } from "../mail/outbox.ts";
-
-const escapeHtml = (s: string) =>
-  s.replace(
-    /[&<>"']/g,
-    (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" })[c] ?? c,
-  );
+import { composeMail, type MailDraft } from "../mail/index.ts";
 
 export function verifiedMail(to: string, typeName: string, holderName: string, link: string): MailDraft {
-  return {
+  return composeMail({
     to,
     subject: `Verified: ${typeName} for ${holderName}`,
-    text: `A compliance reviewer verified the ${typeName} for ${holderName}.\n\nSee it here: ${link}\n\nClearbench`,
-    html: `<p>A compliance reviewer verified the <strong>${escapeHtml(typeName)}</strong> for ${escapeHtml(holderName)}.</p><p><a href="${escapeHtml(link)}">See it in Clearbench</a></p>`,
-  };
+    paragraphs: [
+      `A compliance reviewer verified the ${typeName} for ${holderName}. It now counts toward standing.`,
+    ],
+    next: {
+      sentence: "Nothing more is needed for this document; you will be reminded before it lapses.",
+      label: "See your documents",
+      url: link,
+    },
+  });
 }
 
 export function returnedMail(
@@ -22,10 +22,17 @@ export function returnedMail(
   reason: string,
   link: string,
 ): MailDraft {
-  return {
+  return composeMail({
     to,
     subject: `Returned: ${typeName} for ${holderName}`,
-    text: `A compliance reviewer returned the ${typeName} for ${holderName}.\n\nReason: ${reason}\n\nSubmit a corrected one here: ${link}\n\nClearbench`,
-    html: `<p>A compliance reviewer returned the <strong>${escapeHtml(typeName)}</strong> for ${escapeHtml(holderName)}.</p><p>Reason: ${escapeHtml(reason)}</p><p><a href="${escapeHtml(link)}">Submit a corrected one</a></p>`,
-  };
+    paragraphs: [
+      `A compliance reviewer returned the ${typeName} for ${holderName}. It does not count until a corrected one is verified.`,
+      `Reason: ${reason}`,
+    ],
+    next: {
+      sentence: "Upload a corrected document; a reviewer will check it again.",
+      label: "Upload a corrected document",
+      url: link,
+    },
+  });
 }

@@ -1,12 +1,13 @@
 import { QueryTypes } from "sequelize";
 import {
-  DEFAULT_RADIUS_KM,
+  DEFAULT_RADIUS_MILES,
   type DirectoryFilterName,
   type DirectoryPageDto,
   type DirectoryQuery,
   type DirectoryRowDto,
   type DirectorySort,
 } from "../../shared/directory/schemas.ts";
+import { milesToKm } from "../../shared/geo/units.ts";
 import { DEFAULT_PRIOR } from "../../shared/ranking/rating-score.ts";
 import { db } from "../db/sequelize.ts";
 import { AppError } from "../http/app-error.ts";
@@ -80,7 +81,7 @@ async function resolveCriteria(buyer: Express.User, query: DirectoryQuery, asOf:
     criteria.site = {
       latitude: site.latitude,
       longitude: site.longitude,
-      radiusKm: query.radiusKm ?? DEFAULT_RADIUS_KM,
+      radiusKm: milesToKm(query.radiusMiles ?? DEFAULT_RADIUS_MILES),
     };
   }
   return { criteria, fromEquipment };

@@ -61,15 +61,30 @@ export function renderLapseNotice(r: NoticeRecipient, asOf: Date, publicUrl: str
   const title = lapsed
     ? `Lapsed: ${r.typeName} for ${holder}`
     : `${r.typeName} for ${holder} lapses in ${days} day${days === 1 ? "" : "s"}`;
+  const hidden = r.technicianName
+    ? `${r.technicianName} is hidden from shops in the directory and cannot take new work orders`
+    : `every technician of ${r.companyName} who needs it is hidden from shops in the directory and cannot take new work orders`;
   const body = lapsed
-    ? `${r.typeName} held by ${holder} lapsed on ${when}. It no longer counts toward standing; upload and verify a renewal to restore it.`
-    : `${r.typeName} held by ${holder} lapses on ${when}. Upload the renewal before then so the standing stays cleared.`;
-  const text = [`Hello ${r.userName},`, "", body, "", `Upload the renewal: ${link}`, "", "Clearbench"].join(
-    "\n",
-  );
+    ? `${r.typeName} held by ${holder} lapsed on ${when}. It no longer counts: ${hidden} until a renewal is uploaded and a Clearbench reviewer verifies it.`
+    : `${r.typeName} held by ${holder} lapses on ${when}. If no verified renewal is on file by then, ${hidden}.`;
+  const next = lapsed
+    ? "Upload the renewal now; once a reviewer verifies it, the standing is restored."
+    : "Upload the renewal before then, leaving a reviewer time to verify it.";
+  const text = [
+    `Hello ${r.userName},`,
+    "",
+    body,
+    "",
+    next,
+    "",
+    `Upload the renewal: ${link}`,
+    "",
+    "Clearbench",
+  ].join("\n");
   const html = [
     `<p>Hello ${escapeHtml(r.userName)},</p>`,
     `<p>${escapeHtml(body)}</p>`,
+    `<p><strong>${escapeHtml(next)}</strong></p>`,
     `<p><a href="${escapeHtml(link)}">Upload the renewal</a></p>`,
     "<p>Clearbench</p>",
   ].join("\n");

@@ -2,9 +2,11 @@ import { QueryTypes } from "sequelize";
 import { ROSTER_LAPSE_ALERT_DAYS, type RosterAlertEvent } from "../../shared/roster/schemas.ts";
 import type { RequirementResult, Standing } from "../../shared/standing/standing-types.ts";
 import { MS_PER_DAY } from "../../shared/standing/warning-windows.ts";
+import { formatLocalDateTime } from "../../shared/dates/local-time.ts";
 import { isListed } from "../../shared/visibility/technician-visibility.ts";
+import { loadConfig, publicUrl } from "../config.ts";
 import { db } from "../db/sequelize.ts";
-import { enqueueMail } from "../mail/index.ts";
+import { composeMail, enqueueMail } from "../mail/index.ts";
 import { onStandingsChanged, type ChangedStanding } from "../standing/index.ts";
 
 interface RosteredRow {
@@ -19,7 +21,18 @@ interface RosteredRow {
   earliest_lapse: Date | null;
   results: RequirementResult[];
   computed_at: Date;
+  /** The shop's zone: buyers read dates on their own clock. */
+  shop_time_zone: string;
 }
+
+let linkBase: string | undefined;
+
+/** The absolute base of links in alert e-mails (PUBLIC_URL), set by the app and the job runner from their config. */
+export function setRosterAlertLinkBase(base: string): void {
+  linkBase = base.replace(/\/$/, "");
+}
+
+const rosterUrl = () => `${linkBase ?? publicUrl(loadConfig()).replace(/\/$/, "")}/roster`;
 
 interface Alert {
   shopId: number;
@@ -29,6 +42,7 @@ interface Alert {
   key: string;
   title: string;
   body: string;
+  next: string;
 }
 
 function unmetSignature(results: RequirementResult[]): string {
@@ -60,7 +74,8 @@ function alertFor(row: RosteredRow, wasListed: ReadonlySet<number>): Alert | nul
       event: "stopped_clearing",
       key: unmetSignature(row.results),
       title: `${who} is no longer cleared`,
-      body: `${who}, on your roster, is no longer cleared and has left the directory. ${reasons.join(" ")}`.trim(),
+      body: `${who}, on your roster, is no longer cleared: they are hidden from the directory and cannot take new work orders. ${reasons.join(" ")}`.trim(),
+      next: "Choose another cleared technician for open work, or ask the service company when the missing document will be verified.",
     };
   }
   if (row.earliest_lapse === null) return null;
@@ -68,13 +83,19 @@ function alertFor(row: RosteredRow, wasListed: ReadonlySet<number>): Alert | nul
   const remaining = lapse.getTime() - new Date(row.computed_at).getTime();
   if (remaining <= 0 || remaining > ROSTER_LAPSE_ALERT_DAYS * MS_PER_DAY) return null;
   const days = Math.ceil(remaining / MS_PER_DAY);
+  // The person does not lapse; the credential does. Name it when the stored results say which one it is.
+  const lapsing = row.results.find(
+    (r) => r.lapsesAt !== null && new Date(r.lapsesAt).getTime() === lapse.getTime(),
+  );
+  const what = lapsing ? lapsing.requirement.label : "A credential";
   return {
     shopId: row.shop_company_id,
     technicianId: row.technician_id,
     event: "lapse_within_30_days",
     key: lapse.toISOString(),
-    title: `${who} lapses in ${days} days`,
-    body: `A credential ${who} needs to stay cleared ends on ${lapse.toISOString().slice(0, 10)} (in ${days} days) unless it is renewed.`,
+    title: `${what} for ${who} lapses in ${days} day${days === 1 ? "" : "s"}`,
+    body: `${what}, which ${who} needs to stay cleared, lapses on ${formatLocalDateTime(lapse, row.shop_time_zone)} (in ${days} day${days === 1 ? "" : "s"}) unless a renewal is verified.`,
+    next: "Nothing is needed from you yet; if you have work booked after that date, ask the service company whether the renewal is on its way.",
   };
 }
 
@@ -104,11 +125,12 @@ async function deliverAlert(alert: Alert): Promise<boolean> {
         },
       );
       await enqueueMail(
-        {
+        composeMail({
           to: buyer.email,
           subject: alert.title.slice(0, 300),
-          text: `${alert.body}\n\nSee your roster: /roster`,
-        },
+          paragraphs: [alert.body],
+          next: { sentence: alert.next, label: "See your roster", url: rosterUrl() },
+        }),
         transaction,
       );
     }
@@ -124,11 +146,12 @@ export async function alertRosteredShops(
   if (technicianIds.length === 0) return 0;
   const rows = await db().query<RosteredRow>(
     `SELECT DISTINCT ON (re.shop_company_id, t.id) re.shop_company_id, t.id AS technician_id, t.active, t.name,
-            c.name AS company_name, b.standing, b.earliest_lapse, b.results, b.computed_at,
+            c.name AS company_name, b.standing, b.earliest_lapse, b.results, b.computed_at, sc.time_zone AS shop_time_zone,
             EXISTS (SELECT 1 FROM roster_entries d WHERE d.shop_company_id = re.shop_company_id AND d.technician_id = t.id) AS direct
        FROM technicians t
        JOIN companies c ON c.id = t.company_id
        JOIN roster_entries re ON re.technician_id = t.id OR re.service_company_id = t.company_id
+       JOIN companies sc ON sc.id = re.shop_company_id
        JOIN technician_standings b ON b.technician_id = t.id AND b.requirement_set_id IS NULL
       WHERE t.id = ANY($1::int[])
       ORDER BY re.shop_company_id, t.id`,

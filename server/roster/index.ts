@@ -6,6 +6,7 @@ export {
   alertOnBaselineChanges,
   sweepRosterAlerts,
   registerRosterAlerts,
+  setRosterAlertLinkBase,
 } from "./alerts.ts";
 
 // Whoever loads the roster module (the app) hears standing changes; registering twice is a no-op.

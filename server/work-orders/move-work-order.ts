@@ -115,7 +115,15 @@ export function acceptWorkOrder(actor: Express.User, id: number, warningDays: nu
         }
         return { snapshotAccepted: snapshot };
       },
-      news: (row, who) => ({ subject: "accepted", lines: [`${who.name} accepted work order #${row.id}.`] }),
+      news: (row, who) => ({
+        subject: "accepted",
+        lines: [`${who.name} accepted work order #${row.id}.`],
+        next: {
+          sentence:
+            "Agree the arrival time in the work order's messages, and have the site's lockout/tagout procedure and any permits ready.",
+          label: "Open the work order",
+        },
+      }),
     },
     link,
   );
@@ -131,6 +139,10 @@ export function declineWorkOrder(actor: Express.User, id: number, reason: string
       news: (row, who) => ({
         subject: "declined",
         lines: [`${who.name} declined work order #${row.id}.`, `Reason: ${reason}`],
+        next: {
+          sentence: "Search the directory for another cleared technician and raise a new work order.",
+          label: "Open the work order",
+        },
       }),
     },
     link,
@@ -168,6 +180,11 @@ export function completeWorkOrder(
           `${who.name} marked work order #${row.id} completed: ${input.hoursWorked} hours on site, ${input.travelHours} hours travel.`,
           ...(input.note ? [`Note: ${input.note}`] : []),
         ],
+        next: {
+          sentence:
+            "Check the work on site, then confirm it is complete (or reply in the messages if something is open).",
+          label: "Confirm the work order",
+        },
       }),
     },
     link,
@@ -184,6 +201,10 @@ export function confirmWorkOrder(actor: Express.User, id: number, link: string) 
       news: (row, who) => ({
         subject: "confirmed",
         lines: [`${who.name} confirmed that work order #${row.id} is complete.`],
+        next: {
+          sentence: "Nothing more is needed; the shop can now rate the work.",
+          label: "Open the work order",
+        },
       }),
     },
     link,

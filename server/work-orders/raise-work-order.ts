@@ -120,6 +120,10 @@ export async function raiseWorkOrder(
           `${buyer.name} raised a work order for ${snapshot.technicianName} at ${site.name}${urgent}.`,
           `Problem: ${input.problem}`,
         ],
+        next: {
+          sentence: "Accept or decline the request; the shop waits for your answer.",
+          label: "Accept or decline",
+        },
       },
       link(row.id),
       transaction,

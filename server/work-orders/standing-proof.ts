@@ -28,7 +28,14 @@ export async function sendStandingProof(
   res.setHeader("Cache-Control", "private, no-store");
   res.send(
     renderStandingProof(
-      { workOrderId: wo.id, shopName: wo.shop.name, siteName: wo.site.name, technology: wo.technology },
+      {
+        workOrderId: wo.id,
+        shopName: wo.shop.name,
+        siteName: wo.site.name,
+        technology: wo.technology,
+        // A site always has a zone; UTC (named as such) only if its row is gone.
+        timeZone: wo.site.timeZone ?? "UTC",
+      },
       snapshots,
     ),
   );

@@ -1,15 +1,9 @@
 import type { Transaction } from "sequelize";
 import { Op } from "sequelize";
 import type { WorkOrderSide } from "../../shared/work-orders/schemas.ts";
-import { enqueueMail, type MailDraft } from "../mail/index.ts";
+import { composeMail, enqueueMail } from "../mail/index.ts";
 import { User } from "../accounts/index.ts";
 import type { WorkOrder } from "./model.ts";
-
-const escapeHtml = (s: string) =>
-  s.replace(
-    /[&<>"']/g,
-    (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" })[c] ?? c,
-  );
 
 /** The people of one side: the buyer who raised it, or the service company's admins and the technician. */
 async function recipients(
@@ -41,6 +35,8 @@ async function recipients(
 export interface WorkOrderNews {
   subject: string;
   lines: string[];
+  /** What the reader should do now, in one sentence, and the words of the link that does it. */
+  next: { sentence: string; label: string };
 }
 
 /** Queues one e-mail per person of the other side, in the caller's transaction. */
@@ -53,12 +49,9 @@ export async function mailOtherSide(
 ) {
   const subject = `Work order #${workOrder.id}: ${news.subject}`;
   for (const address of await recipients(workOrder, to, transaction)) {
-    const draft: MailDraft = {
-      to: address,
-      subject,
-      text: `${news.lines.join("\n\n")}\n\nOpen the work order: ${link}\n\nClearbench`,
-      html: `${news.lines.map((l) => `<p>${escapeHtml(l)}</p>`).join("")}<p><a href="${escapeHtml(link)}">Open the work order</a></p>`,
-    };
-    await enqueueMail(draft, transaction);
+    await enqueueMail(
+      composeMail({ to: address, subject, paragraphs: news.lines, next: { ...news.next, url: link } }),
+      transaction,
+    );
   }
 }

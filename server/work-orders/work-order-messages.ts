@@ -115,7 +115,11 @@ export async function postMessage(
       await mailOtherSide(
         workOrder,
         side === "shop" ? "service" : "shop",
-        { subject: `message from ${user.name}`, lines: [`${user.name} wrote:`, body] },
+        {
+          subject: `message from ${user.name}`,
+          lines: [`${user.name} wrote:`, body],
+          next: { sentence: "Reply in the work order's messages.", label: "Reply" },
+        },
         link,
         transaction,
       );

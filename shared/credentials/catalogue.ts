@@ -131,7 +131,7 @@ export const credentialTypes: readonly CredentialTypeDefinition[] = [
     fieldSet: "training",
     validity: monthsFromIssue(ARC_FLASH_RETRAINING_MONTHS), // NFPA 70E (2024) 110.6(A)(3)
     description:
-      "Safety-related electrical work practices for qualified persons working near energised parts.",
+      "Training in safety-related electrical work practices near energized parts. The card alone does not make someone a qualified person: the employer decides that (NFPA 70E 110.6).",
   },
   {
     code: "lockout_tagout",
@@ -140,7 +140,7 @@ export const credentialTypes: readonly CredentialTypeDefinition[] = [
     holder: "technician",
     fieldSet: "training",
     validity: monthsFromIssue(LOCKOUT_REFRESHER_MONTHS), // common practice, see LOCKOUT_REFRESHER_MONTHS
-    description: `Control of hazardous energy while servicing machines (authorized employee). 29 CFR 1910.147(c)(7)(iii) requires retraining when jobs, machines or procedures change. ${SITE_DECIDES}`,
+    description: `Training in the control of hazardous energy while servicing machines. On the host site, the site's own lockout/tagout procedure applies (29 CFR 1910.147); 29 CFR 1910.147(c)(7)(iii) requires retraining when jobs, machines or procedures change. ${SITE_DECIDES}`,
   },
   {
     code: "powered_truck",
@@ -150,7 +150,7 @@ export const credentialTypes: readonly CredentialTypeDefinition[] = [
     fieldSet: "training",
     validity: monthsFromIssue(POWERED_TRUCK_EVALUATION_MONTHS), // 29 CFR 1910.178(l)(4)(iii)
     description:
-      "Forklift operator training and performance evaluation, needed to move machines and parts on site.",
+      "Forklift operator training and performance evaluation. The evaluation covers the trucks and workplace it was done in; the host site decides whether another is needed (29 CFR 1910.178(l)).",
   },
   {
     code: "first_aid_cpr",
@@ -187,7 +187,20 @@ export const credentialTypes: readonly CredentialTypeDefinition[] = [
     holder: "technician",
     fieldSet: "license",
     validity: documentDates, // the issuing authority's printed expiry
-    description: "A state or local license, e.g. for electrical work on machine supply circuits.",
+    description:
+      "A state or local license, e.g. for electrical work on machine supply circuits. Requirements vary by state and town; check with the authority where the work is done.",
+  },
+  {
+    code: "machine_rigging",
+    name: "Machine rigging and moving",
+    category: "safety",
+    holder: "technician",
+    fieldSet: "training",
+    // Common practice: no federal card expiry for rigging in general industry; a site wanting a recent card sets a
+    // maximum age in its requirement set.
+    validity: noExpiry,
+    description:
+      "Training in rigging, lifting and moving machine tools. The card shows training only: every lift follows the site's lift plan, the rated capacity of the gear and floor loading checked with the site.",
   },
 ];
 

@@ -14,13 +14,17 @@ const dollars = z.coerce.number().int().min(0).max(1_000_000_000);
 export const directorySorts = ["distance", "score", "hourlyRate", "soonestLapse"] as const;
 export type DirectorySort = (typeof directorySorts)[number];
 
-/** Buyer's search radius when a site is chosen and no radius is given (the issue's "within 150 km"). */
-export const DEFAULT_RADIUS_KM = 150;
-export const MAX_RADIUS_KM = 2000;
+/**
+ * Buyer's search radius in miles when a site is chosen and no radius is given. The radius is the one distance a person
+ * types and bookmarks, so the query string carries it in miles (`radiusMiles`); the server converts it once
+ * (shared/geo/units.ts) and answers distances in kilometres (`distanceKm`, `serviceRadiusKm`), which clients show in miles.
+ */
+export const DEFAULT_RADIUS_MILES = 100;
+export const MAX_RADIUS_MILES = 1200;
 export const MAX_PAGE_SIZE = 50;
 
 /**
- * The directory's query string. Every parameter is optional; `radiusKm` applies only with a `siteId`. Lists are comma
+ * The directory's query string. Every parameter is optional; `radiusMiles` applies only with a `siteId`. Lists are comma
  * separated (`credentialTypes=arc_flash,lockout_tagout`), so a search fits in a bookmarkable URL.
  */
 export const directoryQuerySchema = z.object({
@@ -45,7 +49,7 @@ export const directoryQuerySchema = z.object({
   minAutoCsl: optional(dollars),
   requirementSetId: optional(idParam),
   siteId: optional(idParam),
-  radiusKm: optional(z.coerce.number().positive().max(MAX_RADIUS_KM)),
+  radiusMiles: optional(z.coerce.number().positive().max(MAX_RADIUS_MILES)),
   minRating: optional(z.coerce.number().min(1).max(5)),
   q: optional(singleLineText().trim().min(1).max(100)),
   equipmentId: optional(idParam),
@@ -62,7 +66,7 @@ export type DirectoryQuery = z.infer<typeof directoryQuerySchema>;
 /**
  * Filter groups as the empty state names them. `oemTraining` = oemBuilder + controlFamily + minOemLevel (one credential
  * must match all three); `generalLiability` = minEachOccurrence + minAggregate (one policy); `autoLiability` = minAutoCsl;
- * `distance` = siteId + radiusKm together with the technician's own service radius.
+ * `distance` = siteId + radiusMiles together with the technician's own service radius.
  */
 export const directoryFilterNames = [
   "credentialTypes",

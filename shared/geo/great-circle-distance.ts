@@ -1,7 +1,8 @@
 /** IUGG mean radius R1 = (2a + b) / 3 of GRS80 = 6,371,008.7714 m (GRS80: a = 6,378,137 m, 1/f = 298.257222101). */
 export const EARTH_MEAN_RADIUS_KM = 6371.0088;
-/** International statute mile, exactly 1,609.344 m (international yard and pound agreement, 1959). */
-export const KM_PER_STATUTE_MILE = 1.609344;
+import { kmToMiles } from "./units.ts";
+
+export { KM_PER_STATUTE_MILE, kmToMiles, milesToKm } from "./units.ts";
 
 export interface LatLon {
   /** Degrees, north positive. */
@@ -29,14 +30,6 @@ export function centralAngleRadians(from: LatLon, to: LatLon): number {
 /** Straight-line (great-circle) distance on a sphere of the mean Earth radius; not a driving distance. */
 export function greatCircleDistanceKm(from: LatLon, to: LatLon): number {
   return centralAngleRadians(from, to) * EARTH_MEAN_RADIUS_KM;
-}
-
-export function kmToMiles(km: number): number {
-  return km / KM_PER_STATUTE_MILE;
-}
-
-export function milesToKm(miles: number): number {
-  return miles * KM_PER_STATUTE_MILE;
 }
 
 export function greatCircleDistanceMiles(from: LatLon, to: LatLon): number {

@@ -18,6 +18,7 @@ import type {
 } from "./standing-types.ts";
 import { addCalendarMonths, endOfValidThroughInstant } from "./training-validity.ts";
 import { LAPSING_WINDOW_DAYS, MS_PER_DAY, daysUntil } from "./warning-windows.ts";
+import { fieldsForBuyers } from "../credentials/fields-for-buyers.ts";
 
 interface Candidate {
   credential: StandingCredential;
@@ -73,6 +74,17 @@ function ageLimitInstant(
   return endOfValidThroughInstant(addCalendarMonths(issued, requirement.maxAgeMonths), timeZone);
 }
 
+/** A credential as people know it: its type and the number printed on it, never an internal id. */
+// Detail sentences reach buyers, so a credential is named only by a number buyers may read (a policy or license
+// number); a card or exemption certificate number stays with the holder.
+function nameOf(type: CredentialTypeDefinition, credential: StandingCredential): string {
+  const f = fieldsForBuyers(credential.fields as Record<string, unknown>) as Partial<
+    Record<"policyNumber" | "licenseNumber", string>
+  >;
+  const reference = f.policyNumber ?? f.licenseNumber;
+  return reference ? `${type.name} ${reference}` : type.name;
+}
+
 function assess(
   requirement: Requirement,
   credential: StandingCredential,
@@ -90,7 +102,7 @@ function assess(
   const endsAt = endedByAge ? ageEnd : ownEnd;
   const startsAt = credentialStartInstant(type, credential.fields, timeZone);
   const base = { credential, type, startsAt, endsAt, endedByAge, also: [] };
-  const named = `${type.name} (credential ${credential.id})`;
+  const named = nameOf(type, credential);
 
   if (credential.state === "returned")
     return { ...base, reason: "returned", detail: `${named} was returned to the holder.` };
@@ -156,8 +168,8 @@ function describeMet(
 ): string {
   const named =
     met.also.length === 0
-      ? `${met.type.name} (credential ${met.credential.id})`
-      : `${met.metBy} (credentials ${[met, ...met.also].map((c) => c.credential.id).join(" and ")})`;
+      ? nameOf(met.type, met.credential)
+      : `${met.metBy} (${[met, ...met.also].map((c) => nameOf(c.type, c.credential)).join(" and ")})`;
   if (lapsesAt === null) return `Met by ${named}; it does not expire.`;
   const until = localDate(lapsesAt, options.timeZone);
   return lapsing

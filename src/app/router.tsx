@@ -116,7 +116,7 @@ export const router = createBrowserRouter([
             lazy: roleArea,
             children: [
               { path: paths.admin.users, lazy: () => import("./routes/admin/users.tsx") },
-              { path: paths.admin.catalogue, lazy: () => import("./routes/admin/catalogue.tsx") },
+              { path: paths.admin.catalog, lazy: () => import("./routes/admin/catalogue.tsx") },
               { path: paths.admin.outbox, lazy: () => import("./routes/admin/outbox.tsx") },
               { path: paths.admin.baseline, lazy: () => import("./routes/admin/baseline.tsx") },
               { path: paths.admin.jobRuns, lazy: () => import("./routes/admin/job-runs.tsx") },

@@ -9,7 +9,7 @@ export const navigationByRole: Record<Role, readonly NavItem[]> = {
   provider_admin: [
     { label: "Dashboard", to: paths.provider.dashboard, end: true },
     { label: "Technicians", to: paths.provider.technicians },
-    { label: "Documents", to: paths.provider.documents },
+    { label: "Credentials", to: paths.provider.documents },
     { label: "Work orders", to: paths.provider.workOrders },
     { label: "Company", to: paths.company },
   ],
@@ -18,7 +18,7 @@ export const navigationByRole: Record<Role, readonly NavItem[]> = {
     { label: "Upload a card", to: paths.technician.uploadCard },
     { label: "Work orders", to: paths.provider.workOrders },
   ],
-  reviewer: [{ label: "Queue", to: paths.reviewer.queue }],
+  reviewer: [{ label: "Verification queue", to: paths.reviewer.queue }],
   buyer: [
     { label: "Directory", to: paths.buyer.directory },
     { label: "Roster", to: paths.buyer.roster },
@@ -29,11 +29,11 @@ export const navigationByRole: Record<Role, readonly NavItem[]> = {
   ],
   admin: [
     { label: "Users", to: paths.admin.users },
-    { label: "Catalogue", to: paths.admin.catalogue },
+    { label: "Catalog", to: paths.admin.catalog },
     { label: "Outbox", to: paths.admin.outbox },
-    { label: "Baseline", to: paths.admin.baseline },
+    { label: "Platform baseline", to: paths.admin.baseline },
     { label: "Job runs", to: paths.admin.jobRuns },
-    { label: "Reported reviews", to: paths.admin.reportedReviews },
+    { label: "Reported ratings", to: paths.admin.reportedReviews },
   ],
 };
 

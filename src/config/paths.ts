@@ -45,7 +45,7 @@ export const paths = {
   workOrder: "/work-orders/:workOrderId",
   admin: {
     users: "/admin/users",
-    catalogue: "/admin/catalogue",
+    catalog: "/admin/catalog",
     outbox: "/admin/outbox",
     baseline: "/admin/baseline",
     jobRuns: "/admin/job-runs",

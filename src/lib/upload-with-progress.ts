@@ -40,7 +40,7 @@ export function uploadWithProgress<S extends z.ZodType>({
           "The upload did not reach Clearbench. Check your connection and try again.",
         ),
       );
-    xhr.onabort = () => reject(new ApiError(0, "unavailable", "The upload was cancelled."));
+    xhr.onabort = () => reject(new ApiError(0, "unavailable", "The upload was canceled."));
     xhr.onload = () => {
       const response = new Response(xhr.status === 204 ? null : xhr.responseText, {
         status: xhr.status,

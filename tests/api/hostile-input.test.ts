@@ -64,7 +64,7 @@ const queryArb = fc.dictionary(
     "dir",
     "q",
     "siteId",
-    "radiusKm",
+    "radiusMiles",
     "cursor",
     "status",
     "technicianId",

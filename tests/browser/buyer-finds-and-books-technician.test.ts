@@ -11,6 +11,13 @@ const PROVIDER = "office@kestrel-ridge.test";
 const TECHNICIAN = "Tobias Wren";
 const SITE_ZIP = "61101";
 
+/** The same page at phone width, then back to the desktop width the journey runs at. */
+async function atPhoneWidth(page: Page, name: string) {
+  await page.setViewportSize({ width: 390, height: 844 });
+  await screenshot(page, name);
+  await page.setViewportSize({ width: 1280, height: 900 });
+}
+
 let server: Awaited<ReturnType<typeof startBrowserServer>>;
 let browser: Browser;
 const contexts: BrowserContext[] = [];
@@ -48,7 +55,7 @@ describe("a buyer finds a cleared technician and books the job", () => {
     await buyer.getByRole("button", { name: "Add site", exact: true }).click();
     await buyer.getByRole("heading", { name: "Rockford main plant" }).waitFor();
     await buyer.getByLabel("Machine builder").fill("Vantor Machine Works");
-    await buyer.getByLabel("Control family").fill("VMX-40");
+    await buyer.getByLabel("Control family").fill("Kestle 40");
     await buyer.getByLabel("Technology").selectOption("mill");
     await buyer.getByLabel("Model").fill("VM-40 vertical mill");
     await buyer.getByRole("button", { name: "Add machine" }).click();
@@ -63,16 +70,30 @@ describe("a buyer finds a cleared technician and books the job", () => {
     const row = buyer.getByRole("row", { name: new RegExp(TECHNICIAN) });
     await row.waitFor();
     await screenshot(buyer, "buyer-books-2-directory");
+    await atPhoneWidth(buyer, "buyer-books-2-directory-390");
 
     expect(new URL(buyer.url()).searchParams.get("siteId")).not.toBeNull();
     await expect(row.getByText("Cleared").count()).resolves.toBe(1);
     await expect(row.getByText("straight line").count()).resolves.toBe(1);
+    // Distances read in miles, never kilometres.
+    await expect(row.getByText(/\d miles?\b/).count()).resolves.toBeGreaterThan(0);
+    await expect(buyer.getByText(/\bkm\b/).count()).resolves.toBe(0);
+    await expect(
+      buyer
+        .getByText("Cleared means the required documents are verified and in force today", { exact: false })
+        .count(),
+    ).resolves.toBeGreaterThan(0);
+    await expect(buyer.getByTestId("status-key").count()).resolves.toBe(1);
     await expect(row.getByText("estimate before tax", { exact: true }).count()).resolves.toBe(1);
     await expect(seriousAccessibilityProblems(buyer)).resolves.toEqual([]);
 
     await row.getByRole("link", { name: TECHNICIAN }).click();
     await buyer.getByRole("heading", { level: 1, name: TECHNICIAN }).waitFor();
     await screenshot(buyer, "buyer-books-3-technician");
+    await atPhoneWidth(buyer, "buyer-books-3-technician-390");
+    await expect(
+      buyer.getByRole("heading", { name: "Cleared is about documents, not safety or skill" }).count(),
+    ).resolves.toBe(1);
 
     await expect(buyer.getByText("Rockford main plant").count()).resolves.toBeGreaterThan(0);
     await expect(
@@ -91,6 +112,9 @@ describe("a buyer finds a cleared technician and books the job", () => {
     const workOrderUrl = buyer.url();
     await buyer.getByText("Requested").first().waitFor();
     await screenshot(buyer, "buyer-books-4-requested");
+    await atPhoneWidth(buyer, "buyer-books-4-requested-390");
+    await buyer.getByRole("heading", { level: 1, name: /^Work order #\d+$/ }).waitFor();
+    await expect(buyer.getByText("29 CFR 1910.147", { exact: false }).count()).resolves.toBeGreaterThan(0);
 
     await expect(seriousAccessibilityProblems(buyer)).resolves.toEqual([]);
 

@@ -48,7 +48,7 @@ const pagesByRole: { who: string; email: string | null; pages: string[] }[] = [
     email: "admin@clearbench.test",
     pages: [
       "/admin/users",
-      "/admin/catalogue",
+      "/admin/catalog",
       "/admin/outbox",
       "/admin/baseline",
       "/admin/job-runs",

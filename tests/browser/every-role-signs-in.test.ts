@@ -20,32 +20,32 @@ const journeys = [
   {
     role: "provider_admin",
     email: "office@kestrel-ridge.test",
-    sees: ["Dashboard", "Technicians", "Documents", "Work orders"],
-    hidden: ["Queue", "Directory", "Users"],
+    sees: ["Dashboard", "Technicians", "Credentials", "Work orders"],
+    hidden: ["Verification queue", "Directory", "Users"],
   },
   {
     role: "technician",
     email: "tobias@kestrel-ridge.test",
     sees: ["My standing", "Upload a card"],
-    hidden: ["Technicians", "Queue", "Directory"],
+    hidden: ["Technicians", "Verification queue", "Directory"],
   },
   {
     role: "reviewer",
     email: "reviewer@clearbench.test",
-    sees: ["Queue"],
+    sees: ["Verification queue"],
     hidden: ["Technicians", "Directory", "Users"],
   },
   {
     role: "buyer",
     email: "buyer@marlow-precision.test",
     sees: ["Directory", "Roster", "Sites", "Requirement sets", "Work orders"],
-    hidden: ["Queue", "Technicians", "Users"],
+    hidden: ["Verification queue", "Technicians", "Users"],
   },
   {
     role: "admin",
     email: "admin@clearbench.test",
-    sees: ["Users", "Catalogue", "Outbox", "Baseline", "Job runs", "Reported reviews"],
-    hidden: ["Queue", "Directory", "Technicians"],
+    sees: ["Users", "Catalog", "Outbox", "Platform baseline", "Job runs", "Reported ratings"],
+    hidden: ["Verification queue", "Directory", "Technicians"],
   },
 ] as const;
 

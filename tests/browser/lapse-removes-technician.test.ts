@@ -19,9 +19,9 @@ const PROVIDER = "office@kestrel-ridge.test";
 const TECHNICIAN_USER = "tobias@kestrel-ridge.test";
 const REVIEWER = "reviewer@clearbench.test";
 const TECHNICIAN = "Tobias Wren";
-// Downtown Chicago: Kestrel Ridge's technicians are based within about 60 km of it (demo scenario).
+// Downtown Chicago: Kestrel Ridge's technicians are based within about 37 miles of it (demo scenario).
 const SITE_ZIP = "60601";
-const RADIUS_KM = "100";
+const RADIUS_MILES = "62";
 // America/Chicago's standard offset (CST, UTC-6), used all year for the policy cut-off (standard time all year, ISO CG DS 01 wording, from memory).
 const CHICAGO_STANDARD_TIME = "UTC-6";
 
@@ -92,9 +92,9 @@ async function submitRenewal(
 async function searchDirectory(buyer: Page, siteName: string) {
   await buyer.goto(`${server.url}/directory`);
   await buyer.getByLabel("Site", { exact: true }).selectOption({ label: siteName });
-  await buyer.getByLabel("Radius (km)").fill(RADIUS_KM);
+  await buyer.getByLabel("Radius (miles)").fill(RADIUS_MILES);
   await buyer.getByRole("button", { name: "Search" }).click();
-  await buyer.waitForURL(/radiusKm=100/);
+  await buyer.waitForURL(/radiusMiles=62/);
   // Either the result count or the empty state, once the search has answered.
   await buyer
     .getByText(/Showing \d+ cleared|No cleared technician matches these filters/)

@@ -113,7 +113,7 @@ describe("a compliance reviewer verifies a submitted certificate", () => {
     await screenshot(page, "reviewer-verify-3-next");
 
     await officePage.goto(`${server.url}/provider/documents`);
-    await officePage.getByRole("heading", { name: "Documents" }).waitFor();
+    await officePage.getByRole("heading", { name: "Credentials" }).waitFor();
     await screenshot(officePage, "reviewer-verify-4-office-documents");
     const verifiedState = await officeContext.request.get(`${server.url}/api/credentials/${credentialId}`);
     expect(((await verifiedState.json()) as { state: string }).state).toBe("verified");

@@ -149,6 +149,22 @@ describe("lapse notices by e-mail", () => {
     expect(catcher.to(p.technicianUser.email)).toHaveLength(0);
   });
 
+  it("tells the office on the lapse itself that the technicians are hidden and cannot take work orders, and that a reviewer verifies the renewal", async () => {
+    const p = await buildClearedProvider({ glExpires: "2027-08-01", timeZone: "America/New_York" });
+
+    await runLapseJob({ asOf: new Date("2027-08-01T12:00:00Z") }, JOB_DEPS);
+    await deliverAll(catcher);
+
+    const mails = catcher.to(p.admin.email);
+    const lapsed = mails.find((m) => m.subject.startsWith("Lapsed:"));
+    expect(lapsed?.text).toContain("hidden from shops in the directory and cannot take new work orders");
+    expect(lapsed?.text).toContain("a Clearbench reviewer verifies it");
+    // Uploaders cannot verify their own documents: the old wording told them to "upload and verify".
+    expect(lapsed?.text).not.toMatch(/upload and verify/i);
+    expect(lapsed?.html).toContain("hidden from shops");
+    expect(lapsed?.text).toMatch(/https:\/\/clearbench\.test\//);
+  });
+
   it("gives the technician a link to their own card upload and an in-app notification", async () => {
     const p = await providerWithCard("2024-07-02");
 

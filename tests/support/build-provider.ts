@@ -13,7 +13,7 @@ export async function buildProvider(app: Express, name?: string) {
     email: null,
     phone: null,
     technologies: ["mill"],
-    controlFamilies: ["VMX-40"],
+    controlFamilies: ["Kestle 40"],
     postalCode: "60601",
     latitude: 41.8858,
     longitude: -87.6181,

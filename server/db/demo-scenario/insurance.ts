@@ -5,13 +5,14 @@ import type { CertificateCoverage, CoverageCode } from "./documents/build-certif
 import { demoCompanies, type DemoCompany } from "./companies.ts";
 import type { DemoCalendar } from "./demo-calendar.ts";
 import type { DemoCredential } from "./demo-world-types.ts";
+import { demoNaic } from "./demo-naic.ts";
 
-// Invented insurers; the NAIC-style codes are made up for the demo.
+// Invented insurers, with NAIC codes of a shape no insurer should hold (demo-naic.ts).
 const INSURERS = {
-  granite: { name: "Granite Ledger Mutual Insurance Co.", naic: "24816" },
-  northwind: { name: "Northwind Harbor Casualty Company", naic: "31457" },
-  ironvale: { name: "Ironvale Indemnity Corp.", naic: "40922" },
-  quillmoor: { name: "Quillmoor Assurance Company", naic: "17365" },
+  granite: { name: "Granite Ledger Mutual Insurance Co.", naic: demoNaic(24) },
+  northwind: { name: "Northwind Harbor Casualty Company", naic: demoNaic(31) },
+  ironvale: { name: "Ironvale Indemnity Corp.", naic: demoNaic(40) },
+  quillmoor: { name: "Quillmoor Assurance Company", naic: demoNaic(17) },
 } as const;
 type InsurerKey = keyof typeof INSURERS;
 
@@ -34,7 +35,7 @@ const OFFICES: Record<
   copperline: {
     cityLine: "Indianapolis, IN 46204",
     agency: "Calder Bay Insurance Group",
-    agencyLines: ["3300 Monument Circle Annex", "Indianapolis, IN 46204"],
+    agencyLines: ["3300 Larkspur Row", "Indianapolis, IN 46204"],
     holderKey: "marlow",
   },
 };

@@ -173,7 +173,7 @@ export function RequirementFields({
             error={errors[path("maxAgeMonths")]}
           />
           <TextField
-            label="OEM builder"
+            label="Machine builder"
             name={path("builder")}
             value={draft.builder}
             onChange={(e) => set({ builder: e.target.value })}

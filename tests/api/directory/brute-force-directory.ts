@@ -1,7 +1,8 @@
 import { greatCircleDistanceKm } from "../../../shared/geo/great-circle-distance.ts";
+import { milesToKm } from "../../../shared/geo/units.ts";
 import type { DirectoryWorld, WorldTechnician } from "../../fixtures/build-directory-world.ts";
 
-/** A directory search as the property test draws it; `requirementSet` and `radiusKm` use the world's set and site. */
+/** A directory search as the property test draws it; `requirementSet` and `radiusMiles` use the world's set and site. */
 export interface DrawnFilters {
   credentialTypes?: readonly string[];
   oemBuilder?: string;
@@ -12,7 +13,7 @@ export interface DrawnFilters {
   minAggregate?: number;
   minAutoCsl?: number;
   requirementSet?: boolean;
-  radiusKm?: number;
+  radiusMiles?: number;
   minRating?: number;
   q?: string;
 }
@@ -74,12 +75,12 @@ export function bruteForceDirectory(world: DirectoryWorld, f: DrawnFilters, now:
     )
     .filter((t) => !f.requirementSet || t.setStanding === "cleared" || t.setStanding === "lapsing")
     .filter((t) => {
-      if (f.radiusKm === undefined) return true;
+      if (f.radiusMiles === undefined) return true;
       const km = greatCircleDistanceKm(
         { lat: world.site.latitude, lon: world.site.longitude },
         { lat: t.latitude, lon: t.longitude },
       );
-      return km <= Math.min(t.serviceRadiusKm, f.radiusKm);
+      return km <= Math.min(t.serviceRadiusKm, milesToKm(f.radiusMiles));
     })
     .filter(
       (t) => f.minRating === undefined || (t.ratingCount > 0 && t.starSum / t.ratingCount >= f.minRating),
@@ -103,9 +104,9 @@ export function toQuery(world: DirectoryWorld, f: DrawnFilters): Record<string, 
   if (f.minAggregate !== undefined) q.minAggregate = String(f.minAggregate);
   if (f.minAutoCsl !== undefined) q.minAutoCsl = String(f.minAutoCsl);
   if (f.requirementSet) q.requirementSetId = String(world.requirementSetId);
-  if (f.radiusKm !== undefined) {
+  if (f.radiusMiles !== undefined) {
     q.siteId = String(world.site.id);
-    q.radiusKm = String(f.radiusKm);
+    q.radiusMiles = String(f.radiusMiles);
   }
   if (f.minRating !== undefined) q.minRating = String(f.minRating);
   if (f.q !== undefined) q.q = f.q;

@@ -40,7 +40,7 @@ const filterValues = {
   minAggregate: fc.constantFrom(1_000_000, 2_000_000, 3_000_000),
   minAutoCsl: fc.constantFrom(500_000, 1_000_000),
   requirementSet: fc.constant(true),
-  radiusKm: fc.integer({ min: 20, max: 450 }),
+  radiusMiles: fc.integer({ min: 12, max: 280 }),
   minRating: fc.double({ min: 1, max: 5, noNaN: true }).map((x) => Math.round(x * 10) / 10),
   q: fc.constantFrom("a", "el", "Field", "son", "zz"),
 };

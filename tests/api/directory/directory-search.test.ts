@@ -4,6 +4,7 @@ import { agentFor, buildTestApp, type TestApp } from "../../support/test-app.ts"
 import { buildCompany, TEST_PASSWORD } from "../../support/build-company.ts";
 import { buildDirectoryWorld, type DirectoryWorld } from "../../fixtures/build-directory-world.ts";
 import { greatCircleDistanceKm } from "../../../shared/geo/great-circle-distance.ts";
+import { milesToKm } from "../../../shared/geo/units.ts";
 import { bayesianAverage } from "../../../shared/ranking/rating-score.ts";
 import { Equipment } from "../../../server/sites/model.ts";
 import { bruteForceDirectory, toQuery } from "./brute-force-directory.ts";
@@ -41,9 +42,13 @@ describe("directory: who appears", () => {
   });
 
   it("honours the technician's service radius and the buyer's radius together", async () => {
-    const radiusKm = 200;
+    const radiusMiles = 125;
+    const radiusKm = milesToKm(radiusMiles);
 
-    const { rows } = await readAllPages(buyer, { siteId: String(world.site.id), radiusKm: String(radiusKm) });
+    const { rows } = await readAllPages(buyer, {
+      siteId: String(world.site.id),
+      radiusMiles: String(radiusMiles),
+    });
 
     const site = { lat: world.site.latitude, lon: world.site.longitude };
     for (const row of rows) {
@@ -58,15 +63,15 @@ describe("directory: who appears", () => {
     expect(outsideOwnRadius.length).toBeGreaterThan(0);
     expect(rows.some((r) => outsideOwnRadius.some((x) => x.id === r.technicianId))).toBe(false);
     expect(ours(rows.map((r) => r.technicianId))).toEqual(
-      bruteForceDirectory(world, { radiusKm }, new Date()),
+      bruteForceDirectory(world, { radiusMiles }, new Date()),
     );
   });
 
-  it("applies the default 150 km radius when a site is chosen without one", async () => {
+  it("applies the default 100-mile radius when a site is chosen without one", async () => {
     const { rows } = await readAllPages(buyer, { siteId: String(world.site.id) });
 
     expect(ours(rows.map((r) => r.technicianId))).toEqual(
-      bruteForceDirectory(world, { radiusKm: 150 }, new Date()),
+      bruteForceDirectory(world, { radiusMiles: 100 }, new Date()),
     );
   });
 
@@ -115,7 +120,7 @@ describe("directory: rows", () => {
   it("carries distance in km and miles, drive time, the call-out estimate and the rating with its score", async () => {
     const res = await buyer
       .get("/api/directory")
-      .query({ siteId: world.site.id, radiusKm: 400, onSiteHours: 3, limit: 50 });
+      .query({ siteId: world.site.id, radiusMiles: 250, onSiteHours: 3, limit: 50 });
 
     expect(res.status).toBe(200);
     const row = res.body.rows.find((r: { technicianId: number }) =>
@@ -172,7 +177,7 @@ describe("directory: sorting and pages", () => {
   ] as const)("sorts by %s across pages", async (sort, key, direction) => {
     const { rows } = await readAllPages(buyer, {
       siteId: String(world.site.id),
-      radiusKm: "400",
+      radiusMiles: "250",
       sort,
       limit: "4",
     });
@@ -182,7 +187,7 @@ describe("directory: sorting and pages", () => {
   });
 
   it("pages by cursor without duplicates or gaps, whatever the page size", async () => {
-    const query = { siteId: String(world.site.id), radiusKm: "400", sort: "score" };
+    const query = { siteId: String(world.site.id), radiusMiles: "250", sort: "score" };
     const { rows: whole } = await readAllPages(buyer, { ...query, limit: "50" });
 
     for (const limit of ["1", "3", "7"]) {

@@ -32,7 +32,7 @@ try {
     .expect(200);
   const shapes: Record<string, Record<string, string>> = {
     "no filter, by score": {},
-    "site 150 km, by distance": { siteId: String(world.site.id) },
+    "site 100 miles, by distance": { siteId: String(world.site.id) },
     "site + arc flash + control family": {
       siteId: String(world.site.id),
       credentialTypes: "arc_flash",

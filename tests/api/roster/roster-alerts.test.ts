@@ -62,10 +62,13 @@ async function alertsFor(userId: number, email: string) {
       "SELECT kind, title FROM notifications WHERE user_id = $1",
       { bind: [userId], type: QueryTypes.SELECT },
     ),
-    sequelize().query<{ subject: string }>("SELECT subject FROM outbox_messages WHERE to_address = $1", {
-      bind: [email],
-      type: QueryTypes.SELECT,
-    }),
+    sequelize().query<{ subject: string; text_body: string; html_body: string | null }>(
+      "SELECT subject, text_body, html_body FROM outbox_messages WHERE to_address = $1",
+      {
+        bind: [email],
+        type: QueryTypes.SELECT,
+      },
+    ),
   ]);
   return { notifications, mails };
 }
@@ -132,6 +135,14 @@ describe("roster alerts", () => {
       { kind: "roster_lapse_within_30_days", title: expect.stringContaining("lapses in 12 days") },
     ]);
     expect(mails).toHaveLength(1);
+    const [mail] = mails;
+    // An absolute link (PUBLIC_URL), a date on the shop's clock with its zone, never ISO, and both parts.
+    expect(mail!.text_body).toMatch(/See your roster: https?:\/\/[^\s]+\/roster\b/);
+    expect(mail!.text_body).not.toMatch(/\d{4}-\d{2}-\d{2}/);
+    expect(mail!.text_body).toMatch(/\b(CST|CDT)\b/);
+    expect(mail!.html_body).toMatch(/<a href="https?:\/\/[^"]+\/roster">See your roster<\/a>/);
+    // The credential lapses, not the person.
+    expect(mail!.subject).not.toMatch(new RegExp(`^${technician.name}[^,]* lapses`));
   });
 
   it("stays quiet for a lapse more than 30 days away and for technicians on no roster", async () => {

@@ -20,7 +20,7 @@ const input = {
   email: "evander@example.test",
   phone: "555-0142",
   technologies: ["lathe", "mill_turn"],
-  controlFamilies: ["VMX-40"],
+  controlFamilies: ["Kestle 40"],
   postalCode: "53202",
   serviceRadiusKm: 200,
   hourlyRateCents: 15_000,

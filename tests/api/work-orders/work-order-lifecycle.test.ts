@@ -43,7 +43,10 @@ describe("a work order from request to confirmation", () => {
       urgency: "down",
       actions: [],
     });
-    expect(raised.body.equipment).toMatchObject({ builder: "Corvane Machine Co.", controlFamily: "VMX-40" });
+    expect(raised.body.equipment).toMatchObject({
+      builder: "Corvane Machine Co.",
+      controlFamily: "Kestle 40",
+    });
     expect(accepted.status).toBe(200);
     expect(accepted.body.status).toBe("accepted");
     expect(completed.status).toBe(200);

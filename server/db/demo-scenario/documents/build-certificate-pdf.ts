@@ -2,6 +2,7 @@ import { PDFDocument, StandardFonts, rgb, type PDFFont, type PDFPage } from "pdf
 import type { Limits } from "../../../../shared/credentials/credential-fields.ts";
 import { formatDocumentDate, type DocumentDateFormat } from "../../../../shared/credentials/date-formats.ts";
 import { buildSeededRandom, type SeededRandom } from "./build-seeded-random.ts";
+import { demoNaic } from "../demo-naic.ts";
 
 export const coverageCodes = [
   "general_liability",
@@ -151,7 +152,7 @@ export function randomCertificateValues(seed: number): CertificateValues {
   const insurers = ["A", "B", "C", "D"].map((letter, i) => ({
     letter,
     name: `${names[i]} ${random.pick(INSURER_KINDS)}`,
-    naic: String(random.int(10_000, 99_999)),
+    naic: demoNaic(random.int(0, 99)),
   }));
   const letters = insurers.map((insurer) => insurer.letter);
   return {
@@ -369,11 +370,11 @@ function drawFooter(pen: Pen, values: CertificateValues, top: number): void {
     write(pen, 34, holderTop + 26 + i * 10, line, 8),
   );
   const cancellation = [
-    "If a policy above is cancelled before its expiration date, notice",
+    "If a policy above is canceled before its expiration date, notice",
     "will be given as the policy itself provides.",
   ];
   cancellation.forEach((line, i) => write(pen, 310, holderTop + 26 + i * 10, line, 7));
-  write(pen, 310, holderTop + 66, "AUTHORISED REPRESENTATIVE", 6, true);
+  write(pen, 310, holderTop + 66, "AUTHORIZED REPRESENTATIVE", 6, true);
   pen.page.drawLine({
     start: { x: 310, y: 792 - holderTop - 82 },
     end: { x: 570, y: 792 - holderTop - 82 },

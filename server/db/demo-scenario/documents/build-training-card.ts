@@ -29,7 +29,7 @@ const PROVIDERS = [
   "Ridgeway Industrial Academy",
 ];
 const BUILDERS = ["Torsvik Machine Works", "Halden Axis Systems", "Corvane Machine Tool"];
-const CONTROLS = ["Veltrion 500", "Quintar NX", "Axiom CT-9"];
+const CONTROLS = ["Veltrion 500", "Quintar NX", "Brisel 9"];
 
 /** Random but repeatable card values; the same seed gives the same card. */
 export function randomTrainingCardValues(

@@ -24,7 +24,7 @@ export function Component() {
   return (
     <>
       <PageHeader
-        title="Catalogue"
+        title="Credential catalog"
         description="The credential types companies and technicians can hold: who holds each, how long it counts, and whether uploaders can choose it."
       />
       {saved && (

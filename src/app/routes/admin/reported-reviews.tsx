@@ -15,7 +15,7 @@ export function Component() {
   return (
     <>
       <PageHeader
-        title="Reported reviews"
+        title="Reported ratings"
         description="Ratings a shop or a service company has reported to the platform, oldest report first."
       />
       <p className="mb-4 rounded-md border border-ink-100 bg-ink-50 px-4 py-3 text-sm text-ink-900">
@@ -24,7 +24,7 @@ export function Component() {
         the shop or the service company directly.
       </p>
       {reviews.length === 0 ? (
-        <EmptyState title="No reported reviews">Reviews that someone reports appear here.</EmptyState>
+        <EmptyState title="No reported ratings">Ratings that someone reports appear here.</EmptyState>
       ) : (
         <ul className="space-y-4">
           {reviews.map((review) => (

@@ -2,6 +2,7 @@ import { useState } from "react";
 import { useSuspenseQuery } from "@tanstack/react-query";
 import { Link, useSearchParams, type LoaderFunctionArgs } from "react-router-dom";
 import { directoryQuerySchema, directorySorts, type DirectorySort } from "@shared/directory/schemas.ts";
+import { CLEARED_MEANS } from "@shared/safety/cautions.ts";
 import { technologyLabels, type MachineTechnology } from "@shared/technicians/schemas.ts";
 import { paths } from "@/config/paths.ts";
 import { Button } from "@/components/ui/button.tsx";
@@ -9,6 +10,8 @@ import { CautionNote } from "@/components/ui/caution-note.tsx";
 import { EmptyState } from "@/components/ui/empty-state.tsx";
 import { FormError } from "@/components/ui/form-error.tsx";
 import { PageHeader } from "@/components/ui/page-header.tsx";
+import { SafetyCaution } from "@/components/ui/safety-caution.tsx";
+import { StatusKey } from "@/components/ui/status-key.tsx";
 import { SelectField } from "@/components/ui/select-field.tsx";
 import { Spinner } from "@/components/ui/spinner.tsx";
 import { credentialTypesQuery } from "@/features/credentials/api/get-credential-types.ts";
@@ -32,7 +35,7 @@ const sortLabels: Record<DirectorySort, string> = {
   score: "Rating (ranked)",
   distance: "Distance",
   hourlyRate: "Hourly rate",
-  soonestLapse: "Soonest lapse",
+  soonestLapse: "Next lapse",
 };
 
 /** The URL's filters in their one normal form (no cursor): the cache key and the API's query string. */
@@ -142,7 +145,7 @@ function Search({ params }: { params: URLSearchParams }) {
           <Link to={paths.buyer.sites} className="underline underline-offset-2">
             Sites
           </Link>{" "}
-          page to see distances, drive times and call-out estimates.
+          page to see distances, drive times and service call estimates.
         </p>
       )}
       <div className="flex flex-wrap items-end justify-between gap-3">
@@ -158,7 +161,10 @@ function Search({ params }: { params: URLSearchParams }) {
           onChange={(e) => apply(draftFromSearch(params), e.target.value)}
         />
       </div>
+      <p className="text-sm text-ink-800">{CLEARED_MEANS}</p>
       <Results search={search} onSiteHours={onSiteHoursOf(draftFromSearch(params))} />
+      <StatusKey statuses={["cleared", "lapsing"]} />
+      <SafetyCaution />
       <CautionNote />
     </div>
   );
@@ -170,7 +176,7 @@ export function Component() {
     <>
       <PageHeader
         title="Directory"
-        description="Technicians who are cleared today, near your sites. Filter by credential, OEM training, technology, insurance limits, distance and rating; the filters stay in the address, so a search can be bookmarked."
+        description="Technicians who are cleared today, near your sites. Filter by credential, machine builder training, technology, insurance limits, distance and rating; the filters stay in the address, so a search can be bookmarked."
       />
       {/* A new URL (back, a bookmark) starts a fresh draft from it. */}
       <Search key={normalSearch(params)} params={params} />

@@ -57,7 +57,7 @@ export function Component() {
     <>
       <PageHeader
         title="Requirement sets"
-        description="What a technician must hold to work at your sites: insurance limits, safety training and OEM training."
+        description="What a technician must hold to work at your sites: insurance limits, safety training and machine builder training."
         actions={add}
       />
       {editing === "new" && <section className="mb-6">{editorFor()}</section>}

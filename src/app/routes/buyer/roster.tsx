@@ -5,6 +5,8 @@ import { buttonStyles } from "@/components/ui/button-styles.ts";
 import { EmptyState } from "@/components/ui/empty-state.tsx";
 import { FormError } from "@/components/ui/form-error.tsx";
 import { PageHeader } from "@/components/ui/page-header.tsx";
+import { SafetyCaution } from "@/components/ui/safety-caution.tsx";
+import { StatusKey } from "@/components/ui/status-key.tsx";
 import { rosterQuery } from "@/features/roster/api/get-roster.ts";
 import { useRemoveFromRoster } from "@/features/roster/api/remove-from-roster.ts";
 import { rosterExportUrl } from "@/features/roster/api/roster-keys.ts";
@@ -33,6 +35,7 @@ export function Component() {
           )
         }
       />
+      <SafetyCaution className="mb-6" />
       <FormError error={remove.error} />
       {rows.length === 0 ? (
         <EmptyState
@@ -52,6 +55,7 @@ export function Component() {
           onRemove={remove.mutate}
         />
       )}
+      {rows.length > 0 && <StatusKey statuses={["cleared", "lapsing", "not_cleared", "not_checked"]} />}
     </>
   );
 }

@@ -1,12 +1,15 @@
 import type { ReactNode } from "react";
 import { useSuspenseQuery } from "@tanstack/react-query";
 import { Link, useParams, type LoaderFunctionArgs } from "react-router-dom";
+import { wholeMilesFromKm } from "@shared/geo/units.ts";
 import { technologyLabels, type MachineTechnology } from "@shared/technicians/schemas.ts";
 import { hrefs } from "@/config/paths.ts";
 import { Button } from "@/components/ui/button.tsx";
 import { buttonStyles } from "@/components/ui/button-styles.ts";
 import { CautionNote } from "@/components/ui/caution-note.tsx";
 import { PageHeader } from "@/components/ui/page-header.tsx";
+import { SafetyCaution } from "@/components/ui/safety-caution.tsx";
+import { StatusKey } from "@/components/ui/status-key.tsx";
 import { directoryTechnicianQuery } from "@/features/directory/api/get-directory-technician.ts";
 import { DirectoryStandingBadge } from "@/features/directory/components/directory-standing-badge.tsx";
 import { ProfileCredentials } from "@/features/directory/components/profile-credentials.tsx";
@@ -89,10 +92,13 @@ export function Component() {
           </span>
           <span className="text-sm text-ink-800">
             {formatCents(t.hourlyRateCents)}/h on site · {formatCents(t.travelRateCents)}/h travel ·{" "}
-            {formatCents(t.mileageRateCents)}/mile · serves {t.serviceRadiusKm} km around base
+            {formatCents(t.mileageRateCents)}/mile · serves {wholeMilesFromKm(t.serviceRadiusKm)} miles around
+            base
           </span>
         </div>
+        <SafetyCaution />
         <CautionNote />
+        <StatusKey statuses={["cleared", "lapsing", "not_cleared", "met", "unmet"]} />
         <Section title="Standing against your requirement sets">
           <ProfileStandings standings={t.requirementSets} />
         </Section>

@@ -6,6 +6,7 @@ import { buttonStyles } from "@/components/ui/button-styles.ts";
 import { CautionNote } from "@/components/ui/caution-note.tsx";
 import { EmptyState } from "@/components/ui/empty-state.tsx";
 import { PageHeader } from "@/components/ui/page-header.tsx";
+import { StatusKey } from "@/components/ui/status-key.tsx";
 import { SelectField } from "@/components/ui/select-field.tsx";
 import { statusWord } from "@/components/ui/status-badge.tsx";
 import type { Credential } from "@/features/credentials/api/credential-shapes.ts";
@@ -46,7 +47,7 @@ export function Component() {
   return (
     <>
       <PageHeader
-        title="Documents"
+        title="Credentials"
         description="Your company's insurance and your technicians' cards, each with its verification state and when it lapses."
         actions={upload}
       />
@@ -73,7 +74,7 @@ export function Component() {
         />
       </div>
       <CredentialsTable
-        caption="Documents"
+        caption="Credentials"
         credentials={credentials}
         correctionHref={correctionHref}
         empty={
@@ -83,6 +84,7 @@ export function Component() {
           </EmptyState>
         }
       />
+      <StatusKey statuses={["submitted", "returned", "verified", "superseded", "lapsed", "lapsing"]} />
       <CautionNote className="mt-6" />
     </>
   );

@@ -1,10 +1,13 @@
 import { useSuspenseQuery } from "@tanstack/react-query";
 import { Link, useParams, type LoaderFunctionArgs } from "react-router-dom";
+import { wholeMilesFromKm } from "@shared/geo/units.ts";
 import { hrefs } from "@/config/paths.ts";
 import { Button } from "@/components/ui/button.tsx";
 import { buttonStyles } from "@/components/ui/button-styles.ts";
 import { EmptyState } from "@/components/ui/empty-state.tsx";
 import { PageHeader } from "@/components/ui/page-header.tsx";
+import { SafetyCaution } from "@/components/ui/safety-caution.tsx";
+import { StatusKey } from "@/components/ui/status-key.tsx";
 import type { Credential } from "@/features/credentials/api/credential-shapes.ts";
 import { credentialsQuery } from "@/features/credentials/api/get-credentials.ts";
 import { CredentialsTable } from "@/features/credentials/components/credentials-table.tsx";
@@ -46,7 +49,10 @@ export function Component() {
     ["Phone", technician.phone ?? "—"],
     ["Technologies", technologyWords(technician.technologies)],
     ["Control families", technician.controlFamilies.join(", ") || "—"],
-    ["Home base", `ZIP ${technician.postalCode}, serves ${technician.serviceRadiusKm} km around`],
+    [
+      "Home base",
+      `ZIP ${technician.postalCode}, serves ${wholeMilesFromKm(technician.serviceRadiusKm)} miles around`,
+    ],
     [
       "Rates",
       `${formatCents(technician.hourlyRateCents)}/h on site, ${formatCents(technician.travelRateCents)}/h travel, ${formatCents(technician.mileageRateCents)}/mi`,
@@ -95,6 +101,7 @@ export function Component() {
       )}
       <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,1fr)_20rem]">
         <div className="space-y-8">
+          <SafetyCaution />
           <StandingSection technicianId={id} loadingLabel="Loading standing" />
           <section aria-labelledby="cards-heading">
             <h2 id="cards-heading" className="mb-3 text-lg font-semibold text-ink-900">
@@ -112,6 +119,21 @@ export function Component() {
               }
             />
           </section>
+          <StatusKey
+            statuses={[
+              "cleared",
+              "lapsing",
+              "not_cleared",
+              "not_checked",
+              "met",
+              "unmet",
+              "submitted",
+              "returned",
+              "verified",
+              "superseded",
+              "lapsed",
+            ]}
+          />
         </div>
         <aside className="space-y-6">
           <section aria-labelledby="details-heading" className="rounded-lg border border-ink-100 bg-white">

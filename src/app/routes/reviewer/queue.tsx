@@ -5,6 +5,7 @@ import { queueQuerySchema, queueSortKeys, type QueueQuery } from "@shared/creden
 import { hrefs } from "@/config/paths.ts";
 import { DataTable } from "@/components/ui/data-table.tsx";
 import { EmptyState } from "@/components/ui/empty-state.tsx";
+import { FormError } from "@/components/ui/form-error.tsx";
 import { PageHeader } from "@/components/ui/page-header.tsx";
 import { credentialTypesQuery } from "@/features/credentials/api/get-credential-types.ts";
 import { reviewQueueQuery, useReviewQueue } from "@/features/credentials/api/get-review-queue.ts";
@@ -38,7 +39,8 @@ const columns = queueColumns(hrefs.review);
 export function Component() {
   const [search, setSearch] = useSearchParams();
   const query = queueQueryOf(search);
-  const { data } = useReviewQueue(query);
+  const queue = useReviewQueue(query);
+  const { data } = queue;
   const { data: types } = useSuspenseQuery(credentialTypesQuery());
   const probe = useQuery(reviewQueueQuery(companiesProbe));
   const arrival = useLocation().state as { decided?: string } | null;
@@ -80,7 +82,7 @@ export function Component() {
           role="status"
           className="mb-4 rounded-md border-l-4 border-emerald-700 bg-emerald-50 px-4 py-3 text-sm text-ink-900"
         >
-          {arrival.decided} The queue is empty for now.
+          {arrival.decided}
         </p>
       )}
       <QueueFilters
@@ -89,12 +91,30 @@ export function Component() {
         companyOptions={companyOptions}
         onChange={(values) => update({ ...values, page: undefined })}
       />
+      {queue.isError && <FormError error={queue.error} />}
       <DataTable
-        caption={`Queue: ${data?.total ?? 0} waiting`}
+        caption={
+          queue.isError
+            ? "Verification queue: could not be loaded"
+            : `Verification queue: ${data?.total ?? 0} waiting`
+        }
         columns={columns}
         data={data?.rows ?? []}
         getRowId={(row) => String(row.id)}
-        empty={<EmptyState title="Nothing is waiting">No document matches these filters.</EmptyState>}
+        empty={
+          queue.isError ? (
+            <EmptyState title="The queue could not be loaded">
+              Nothing is shown because the request failed, not because the queue is empty. Reload the page to
+              try again.
+            </EmptyState>
+          ) : queue.isPending ? (
+            <EmptyState title="Loading the queue">
+              The documents waiting for a decision appear here.
+            </EmptyState>
+          ) : (
+            <EmptyState title="Nothing is waiting">No document matches these filters.</EmptyState>
+          )
+        }
         serverSorting={{
           sorting,
           onSortingChange: (next) => {

@@ -4,6 +4,8 @@ import { hrefs, paths } from "@/config/paths.ts";
 import { buttonStyles } from "@/components/ui/button-styles.ts";
 import { EmptyState } from "@/components/ui/empty-state.tsx";
 import { PageHeader } from "@/components/ui/page-header.tsx";
+import { SafetyCaution } from "@/components/ui/safety-caution.tsx";
+import { StatusKey } from "@/components/ui/status-key.tsx";
 import type { Credential } from "@/features/credentials/api/credential-shapes.ts";
 import { credentialsQuery } from "@/features/credentials/api/get-credentials.ts";
 import { CredentialsTable } from "@/features/credentials/components/credentials-table.tsx";
@@ -44,6 +46,7 @@ export function Component() {
         </p>
       )}
       <div className="space-y-8">
+        <SafetyCaution />
         <StandingSection technicianId={technicianId} loadingLabel="Loading your standing" />
         <section aria-labelledby="cards-heading">
           <h2 id="cards-heading" className="mb-3 text-lg font-semibold text-ink-900">
@@ -61,6 +64,21 @@ export function Component() {
             }
           />
         </section>
+        <StatusKey
+          statuses={[
+            "cleared",
+            "lapsing",
+            "not_cleared",
+            "not_checked",
+            "met",
+            "unmet",
+            "submitted",
+            "returned",
+            "verified",
+            "superseded",
+            "lapsed",
+          ]}
+        />
       </div>
     </>
   );

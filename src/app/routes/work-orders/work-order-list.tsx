@@ -5,6 +5,7 @@ import { paths } from "@/config/paths.ts";
 import { buttonStyles } from "@/components/ui/button-styles.ts";
 import { EmptyState } from "@/components/ui/empty-state.tsx";
 import { PageHeader } from "@/components/ui/page-header.tsx";
+import { StatusKey } from "@/components/ui/status-key.tsx";
 import { SelectField } from "@/components/ui/select-field.tsx";
 import { currentUserQuery } from "@/features/accounts/api/get-current-user.ts";
 import { workOrdersQuery } from "@/features/work-orders/api/get-work-orders.ts";
@@ -72,6 +73,7 @@ export function Component() {
       ) : (
         <WorkOrdersTable workOrders={workOrders} />
       )}
+      <StatusKey statuses={["requested", "accepted", "declined", "completed", "confirmed"]} />
     </>
   );
 }

@@ -3,6 +3,8 @@ import { Link, useParams, type LoaderFunctionArgs } from "react-router-dom";
 import { technologyLabels, type MachineTechnology } from "@shared/technicians/schemas.ts";
 import { paths } from "@/config/paths.ts";
 import { PageHeader } from "@/components/ui/page-header.tsx";
+import { SafetyCaution } from "@/components/ui/safety-caution.tsx";
+import { StatusKey } from "@/components/ui/status-key.tsx";
 import { Spinner } from "@/components/ui/spinner.tsx";
 import { currentUserQuery } from "@/features/accounts/api/get-current-user.ts";
 import { useWorkOrderReview } from "@/features/reviews/api/get-work-order-review.ts";
@@ -117,7 +119,7 @@ export function Component() {
         All work orders
       </Link>
       <PageHeader
-        title={`Work order No. ${workOrder.id}`}
+        title={`Work order #${workOrder.id}`}
         description={
           <span className="flex flex-wrap items-center gap-2">
             <WorkOrderStatusBadge status={workOrder.status} />
@@ -129,6 +131,7 @@ export function Component() {
       />
       <div className="grid gap-6 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
         <div className="space-y-6">
+          <SafetyCaution />
           <Facts workOrder={workOrder} />
           <WorkOrderActions workOrder={workOrder} />
           {(workOrder.snapshotAccepted || workOrder.snapshotCompleted) && (
@@ -152,6 +155,20 @@ export function Component() {
               )}
             </section>
           )}
+          <StatusKey
+            statuses={[
+              "requested",
+              "accepted",
+              "declined",
+              "completed",
+              "confirmed",
+              "cleared",
+              "lapsing",
+              "not_cleared",
+              "met",
+              "unmet",
+            ]}
+          />
           {workOrder.status === "confirmed" && (
             <ReviewSection workOrder={workOrder} role={user?.role ?? ""} />
           )}

@@ -11,7 +11,7 @@ export function ReportedReviewCard({ review }: { review: ReportedReview }) {
       <header className="flex flex-wrap items-baseline justify-between gap-2">
         <h2 id={headingId} className="font-semibold text-ink-900">
           {review.technicianName || `Technician ${review.technicianId}`}{" "}
-          <span className="font-normal text-ink-700">· work order {review.workOrderId}</span>
+          <span className="font-normal text-ink-700">· work order #{review.workOrderId}</span>
         </h2>
         <p className="text-ink-900">
           <span aria-hidden="true" className="text-accent-700">

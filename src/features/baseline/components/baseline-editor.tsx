@@ -21,7 +21,7 @@ const fieldLabels: Record<string, string> = {
   label: "name",
   typeCodes: "credential types",
   maxAgeMonths: "card age",
-  builder: "OEM builder",
+  builder: "Machine builder",
   controlFamily: "OEM control family",
   minLevel: "minimum OEM level",
 };

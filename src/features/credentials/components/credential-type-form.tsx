@@ -73,7 +73,7 @@ export function CredentialTypeForm({ type, onDone }: CredentialTypeFormProps) {
           min={1}
           max={120}
           defaultValue={months}
-          hint="Changes when every card of this type lapses; the source of the default is noted in the catalogue code."
+          hint="Changes when every card of this type lapses. A site that wants a shorter interval sets a maximum age in its requirement set."
           error={fields.validityMonths}
         />
       )}

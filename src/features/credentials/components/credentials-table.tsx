@@ -48,7 +48,7 @@ function credentialColumns(correctionHref: (credential: Credential) => string, s
     column.accessor("typeName", { header: "Type", sortFn: "text" }),
     ...(showHolder ? [column.accessor(holderOf, { id: "holder", header: "Holder", sortFn: "text" })] : []),
     column.accessor("state", {
-      header: "State",
+      header: "Status",
       sortFn: "text",
       cell: (info) => <StatusBadge status={info.getValue()} />,
     }),

@@ -20,7 +20,7 @@ export function LapsingTable({ credentials, now, renewHref }: LapsingTableProps)
     return column.columns([
       column.accessor((c) => c.lapsesAt ?? "", {
         id: "lapsesAt",
-        header: "Lapses on",
+        header: "Lapses",
         sortFn: "text",
         cell: (info) => formatInstantDate(info.row.original.lapsesAt),
       }),

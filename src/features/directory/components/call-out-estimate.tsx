@@ -14,7 +14,7 @@ export function CallOutEstimate({ callOut, onSiteHours, forWhom }: CallOutEstima
     <details className="group text-sm">
       <summary
         className="min-h-11 cursor-pointer list-none py-1 marker:hidden"
-        aria-label={`Call-out estimate for ${forWhom}: ${formatCents(callOut.totalCents)} before tax. Show its parts`}
+        aria-label={`Service call estimate for ${forWhom}: ${formatCents(callOut.totalCents)} before tax. Show its parts`}
       >
         <span className="font-semibold text-ink-900 underline decoration-dotted underline-offset-4">
           {formatCents(callOut.totalCents)}

@@ -1,7 +1,7 @@
 /** The filter form as it is being edited; every value is the text of its URL parameter. */
 export type DirectoryDraft = {
   siteId: string;
-  radiusKm: string;
+  radiusMiles: string;
   equipmentId: string;
   credentialTypes: string[];
   oemBuilder: string;
@@ -19,7 +19,7 @@ export type DirectoryDraft = {
 
 const textKeys = [
   "siteId",
-  "radiusKm",
+  "radiusMiles",
   "equipmentId",
   "oemBuilder",
   "controlFamily",

@@ -1,5 +1,5 @@
 import type { FormEvent } from "react";
-import { DEFAULT_RADIUS_KM } from "@shared/directory/schemas.ts";
+import { DEFAULT_RADIUS_MILES } from "@shared/directory/schemas.ts";
 import { machineTechnologies, technologyLabels } from "@shared/technicians/schemas.ts";
 import { Button } from "@/components/ui/button.tsx";
 import { FormError } from "@/components/ui/form-error.tsx";
@@ -33,7 +33,7 @@ const ratingOptions = ["4.5", "4", "3.5", "3"].map((v) => ({ value: v, label: `$
 
 const labels = {
   siteId: "Site",
-  radiusKm: "Radius (km)",
+  radiusMiles: "Radius (miles)",
   equipmentId: "Machine",
   technology: "Technology",
   credentialTypes: "Credential types",
@@ -41,7 +41,7 @@ const labels = {
   minRating: "Minimum rating",
   q: "Name of technician or company",
   onSiteHours: "Expected hours on site",
-  oemBuilder: "OEM builder",
+  oemBuilder: "Machine builder",
   controlFamily: "Control family",
   minOemLevel: "Minimum OEM level",
   minEachOccurrence: "General liability, each occurrence at least ($)",
@@ -101,9 +101,9 @@ export function DirectoryFilters(props: DirectoryFiltersProps) {
           onChange={(e) => set({ siteId: e.target.value, equipmentId: "" })}
           error={errors.siteId}
         />
-        {text("radiusKm", {
+        {text("radiusMiles", {
           inputMode: "numeric",
-          hint: `With a site; ${DEFAULT_RADIUS_KM} km if left empty`,
+          hint: `With a site; ${DEFAULT_RADIUS_MILES} miles if left empty`,
         })}
         <SelectField
           label={labels.equipmentId}
@@ -185,7 +185,7 @@ export function DirectoryFilters(props: DirectoryFiltersProps) {
         }
       >
         <summary className="min-h-11 cursor-pointer py-2 text-sm font-semibold text-ink-900">
-          OEM training, insurance limits and estimate
+          Machine builder training, insurance limits and estimate
         </summary>
         <div className="grid gap-4 pt-2 sm:grid-cols-2 lg:grid-cols-4">
           {text("oemBuilder")}
@@ -201,7 +201,10 @@ export function DirectoryFilters(props: DirectoryFiltersProps) {
           {text("minEachOccurrence", { inputMode: "numeric" })}
           {text("minAggregate", { inputMode: "numeric" })}
           {text("minAutoCsl", { inputMode: "numeric" })}
-          {text("onSiteHours", { inputMode: "decimal", hint: "For the call-out estimate; 2 if left empty" })}
+          {text("onSiteHours", {
+            inputMode: "decimal",
+            hint: "For the service call estimate; 2 if left empty",
+          })}
         </div>
       </details>
       <div className="flex flex-wrap gap-2">

@@ -8,8 +8,6 @@ export function formatDriveTime(hours: number): string {
   return h === 0 ? `${m} min` : m === 0 ? `${h} h` : `${h} h ${m} min`;
 }
 
-export const formatKm = (km: number): string => `${km < 10 ? km.toFixed(1) : Math.round(km)} km`;
-
 /** "4.7 (12)" or "No ratings yet": an average is never shown without its count. */
 export const ratingWords = (rating: { average: number | null; count: number }): string =>
   rating.average === null || rating.count === 0
@@ -19,7 +17,7 @@ export const ratingWords = (rating: { average: number | null; count: number }): 
 /** How the empty state names the filter that removed the most candidates. */
 export const filterWords: Record<DirectoryFilterName, string> = {
   credentialTypes: "the credential types",
-  oemTraining: "the OEM training (builder, control family, level)",
+  oemTraining: "the machine builder training (builder, control family, level)",
   technology: "the machine technology",
   generalLiability: "the general liability limits",
   autoLiability: "the auto liability limit",

@@ -40,7 +40,7 @@ export function DirectoryResultsTable({ rows, onSiteHours }: { rows: DirectoryRo
         }),
         column.accessor((r) => r.callOut?.totalCents ?? null, {
           id: "callOut",
-          header: "Call-out",
+          header: "Service call",
           enableSorting: false,
           cell: (info) =>
             info.row.original.callOut ? (

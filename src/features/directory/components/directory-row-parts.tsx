@@ -2,7 +2,8 @@ import { Link } from "react-router-dom";
 import { hrefs } from "@/config/paths.ts";
 import { formatCents } from "@/lib/format-money.ts";
 import type { DirectoryRow } from "../api/directory-shapes.ts";
-import { formatDriveTime, formatKm } from "./directory-format.ts";
+import { formatMiles } from "@shared/geo/units.ts";
+import { formatDriveTime } from "./directory-format.ts";
 
 /** The technician's name as the link to their page. */
 export function TechnicianLink({ row }: { row: Pick<DirectoryRow, "technicianId" | "name"> }) {
@@ -21,7 +22,7 @@ export function DistanceText({ row }: { row: DirectoryRow }) {
   if (row.distanceKm === null) return <span className="text-sm text-ink-700">Choose a site</span>;
   return (
     <span className="text-sm">
-      <span className="whitespace-nowrap text-ink-900">{formatKm(row.distanceKm)}</span>{" "}
+      <span className="whitespace-nowrap text-ink-900">{formatMiles(row.distanceKm)}</span>{" "}
       <span className="whitespace-nowrap text-xs text-ink-700">straight line</span>
       {row.driveHours !== null && (
         <span className="block whitespace-nowrap text-ink-800">

@@ -26,13 +26,13 @@ function factsOf(fields: Record<string, unknown>): [string, string][] {
   add("Insurer", text(fields.insurerName));
   add("Policy", text(fields.policyNumber));
   add("Course", text(fields.course));
-  add("Builder", text(fields.builder));
+  add("Machine builder", text(fields.builder));
   add("Control family", text(fields.controlFamily));
   if (typeof fields.level === "number") add("Level", String(fields.level));
   add("Effective", text(fields.effectiveDate) && formatIsoDate(text(fields.effectiveDate)));
-  add("Expires", text(fields.expirationDate) && formatIsoDate(text(fields.expirationDate)));
+  add("Expiration date", text(fields.expirationDate) && formatIsoDate(text(fields.expirationDate)));
   add("Issued", text(fields.issueDate) && formatIsoDate(text(fields.issueDate)));
-  add("Card expiry", text(fields.expiryDate) && formatIsoDate(text(fields.expiryDate)));
+  add("Expiration date", text(fields.expiryDate) && formatIsoDate(text(fields.expiryDate)));
   if (fields.statutory === true) add("Workers' compensation", "Statutory");
   const limits =
     fields.limits && typeof fields.limits === "object" ? (fields.limits as Record<string, unknown>) : {};
@@ -55,8 +55,8 @@ export function ProfileCredentials({ credentials }: { credentials: readonly Prof
         <li key={c.id} className="rounded-lg border border-ink-100 bg-white p-4">
           <p className="font-semibold text-ink-900">{c.typeName}</p>
           <p className="text-sm text-ink-700">
-            {c.holder === "company" ? "Held by the company" : "Held by the technician"} · counts until{" "}
-            {c.lapsesAt ? formatInstantDate(c.lapsesAt) : "no expiry"}
+            {c.holder === "company" ? "Held by the company" : "Held by the technician"} ·{" "}
+            {c.lapsesAt ? `lapses ${formatInstantDate(c.lapsesAt)}` : "does not lapse"}
           </p>
           <dl className="mt-2 grid grid-cols-[max-content_1fr] gap-x-3 gap-y-0.5 text-sm">
             {factsOf(c.fields).map(([term, value]) => (

@@ -1,6 +1,7 @@
 import type { SiteEstimate } from "../api/directory-shapes.ts";
 import { CallOutEstimate } from "./call-out-estimate.tsx";
-import { formatDriveTime, formatKm } from "./directory-format.ts";
+import { formatMiles } from "@shared/geo/units.ts";
+import { formatDriveTime } from "./directory-format.ts";
 
 /** Distance, drive and call-out estimate from the technician's base to each of the buyer's sites. */
 export function SiteEstimates({
@@ -18,7 +19,7 @@ export function SiteEstimates({
         <li key={e.siteId} className="rounded-lg border border-ink-100 bg-white p-4">
           <p className="font-semibold text-ink-900">{e.siteName}</p>
           <p className="text-sm text-ink-800">
-            {formatKm(e.distanceKm)} straight line · about {formatDriveTime(e.driveHours)} drive
+            {formatMiles(e.distanceKm)} straight line · about {formatDriveTime(e.driveHours)} drive
           </p>
           {!e.withinServiceRadius && (
             <p className="text-sm font-medium text-red-800">Outside this technician's service radius.</p>

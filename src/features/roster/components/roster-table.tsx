@@ -21,7 +21,8 @@ export const rosterRowsOf = (entries: readonly RosterEntry[]): RosterRow[] =>
 
 function RosterStanding({ row }: { row: RosterRow }) {
   if (!row.active) return <span className="text-sm text-ink-700">Deactivated</span>;
-  if (row.standing === null) return <StatusBadge status="submitted" />;
+  // A standing never worked out is not "awaiting verification": nothing may be waiting for a reviewer.
+  if (row.standing === null) return <StatusBadge status="not_checked" />;
   if (row.standing === "lapsing" && row.nextLapse)
     return <StatusBadge status="lapsing" daysLeft={daysUntil(row.nextLapse, new Date())} />;
   return <StatusBadge status={row.standing === "lapsing" ? "cleared" : row.standing} />;

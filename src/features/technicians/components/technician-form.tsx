@@ -1,4 +1,5 @@
 import { useState, type FormEvent } from "react";
+import { wholeKmFromMiles, wholeMilesFromKm } from "@shared/geo/units.ts";
 import {
   machineTechnologies,
   technicianInputSchema,
@@ -19,7 +20,7 @@ const labels = {
   technologies: "Machine technologies",
   controlFamilies: "Control families",
   postalCode: "Home base ZIP code",
-  serviceRadiusKm: "Service radius (km)",
+  serviceRadiusKm: "Service radius (miles)",
   hourlyRateCents: "Hourly rate on site ($)",
   travelRateCents: "Travel rate ($ per hour)",
   mileageRateCents: "Mileage rate ($ per mile)",
@@ -27,7 +28,7 @@ const labels = {
 
 // The shared schema speaks of cents and numbers; people type dollars, so these say it their way.
 const plainWords = {
-  serviceRadiusKm: "Enter the radius in whole kilometres",
+  serviceRadiusKm: "Enter the radius in whole miles",
   hourlyRateCents: "Enter the hourly rate in dollars, e.g. 95.00",
   travelRateCents: "Enter the travel rate in dollars, e.g. 70.00",
   mileageRateCents: "Enter the mileage rate in dollars, e.g. 0.70",
@@ -50,7 +51,8 @@ function toInput(data: FormData): Record<string, unknown> {
       .map((f) => f.trim())
       .filter(Boolean),
     postalCode: textOf(data, "postalCode"),
-    serviceRadiusKm: radius === "" ? Number.NaN : Number(radius),
+    // People type miles; the record keeps whole kilometres (shared/geo/units.ts).
+    serviceRadiusKm: radius === "" ? Number.NaN : wholeKmFromMiles(Number(radius)),
     hourlyRateCents: inputToCents(textOf(data, "hourlyRateCents")),
     travelRateCents: inputToCents(textOf(data, "travelRateCents")),
     ...(mileage === "" ? {} : { mileageRateCents: inputToCents(mileage) }),
@@ -131,8 +133,8 @@ export function TechnicianForm({
           name="serviceRadiusKm"
           type="number"
           min={1}
-          max={2000}
-          defaultValue={technician?.serviceRadiusKm}
+          max={1240}
+          defaultValue={technician ? wholeMilesFromKm(technician.serviceRadiusKm) : undefined}
           required
           error={fields.serviceRadiusKm}
         />

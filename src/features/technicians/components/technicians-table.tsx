@@ -1,4 +1,5 @@
 import { Link } from "react-router-dom";
+import { wholeMilesFromKm } from "@shared/geo/units.ts";
 import { technologyLabels, type MachineTechnology } from "@shared/technicians/schemas.ts";
 import { hrefs } from "@/config/paths.ts";
 import { DataTable, dataTableColumns } from "@/components/ui/data-table.tsx";
@@ -31,7 +32,7 @@ const columns = column.columns([
   column.accessor("serviceRadiusKm", {
     header: "Radius",
     sortFn: "basic",
-    cell: (info) => `${info.getValue()} km`,
+    cell: (info) => `${wholeMilesFromKm(info.getValue())} miles`,
   }),
   column.accessor("hourlyRateCents", {
     header: "Rates",

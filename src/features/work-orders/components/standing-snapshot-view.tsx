@@ -11,8 +11,7 @@ type StandingSnapshotViewProps = {
   snapshot: StandingSnapshot;
 };
 
-const requirementBadge = (status: "met" | "lapsing" | "unmet") =>
-  status === "unmet" ? <StatusBadge status="not_cleared" /> : <StatusBadge status="cleared" />;
+const requirementBadge = (status: "met" | "lapsing" | "unmet") => <StatusBadge status={status} />;
 
 /** The technician's standing as it was when the work order was accepted or completed, kept whatever changed since. */
 export function StandingSnapshotView({ workOrderId, at, snapshot }: StandingSnapshotViewProps) {
@@ -38,7 +37,7 @@ export function StandingSnapshotView({ workOrderId, at, snapshot }: StandingSnap
         <div key={target.requirementSetId ?? "baseline"} className="space-y-1">
           <p className="flex flex-wrap items-center gap-2 text-sm font-semibold text-ink-900">
             {target.name}
-            <StatusBadge status={target.standing === "not_cleared" ? "not_cleared" : "cleared"} />
+            <StatusBadge status={target.standing} />
           </p>
           <ul className="divide-y divide-ink-100 text-sm">
             {target.requirements.map((r, i) => (
@@ -47,9 +46,9 @@ export function StandingSnapshotView({ workOrderId, at, snapshot }: StandingSnap
                 <span>{requirementBadge(r.status)}</span>
                 <span className="text-ink-800">
                   {r.metBy && r.status !== "unmet"
-                    ? `Met by ${r.metBy}, counts until ${formatInstantDate(r.credential?.lapsesAt ?? null)}`
+                    ? `Met by ${r.metBy}, ${r.credential?.lapsesAt ? `lapses ${formatInstantDate(r.credential.lapsesAt)}` : "does not lapse"}`
                     : r.credential
-                      ? `${r.credential.typeName}${r.credential.reference ? ` ${r.credential.reference}` : ""}, counts until ${formatInstantDate(r.credential.lapsesAt)}`
+                      ? `${r.credential.typeName}${r.credential.reference ? ` ${r.credential.reference}` : ""}, ${r.credential.lapsesAt ? `lapses ${formatInstantDate(r.credential.lapsesAt)}` : "does not lapse"}`
                       : r.detail}
                 </span>
               </li>

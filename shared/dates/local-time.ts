@@ -1,0 +1,40 @@
+/**
+ * Instants as a person reads them: in a named zone, with the zone shown ("Mar 1, 2027, 6:00 AM CST"), never raw ISO or
+ * UTC. Pure: the zone is always a parameter (the reader's, or the site's on a printed page).
+ */
+const cache = new Map<string, Intl.DateTimeFormat>();
+
+function formatter(timeZone: string, withTime: boolean): Intl.DateTimeFormat {
+  const key = `${timeZone}|${withTime}`;
+  let f = cache.get(key);
+  if (!f) {
+    f = new Intl.DateTimeFormat(
+      "en-US",
+      withTime
+        ? {
+            timeZone,
+            year: "numeric",
+            month: "short",
+            day: "numeric",
+            hour: "numeric",
+            minute: "2-digit",
+            timeZoneName: "short",
+          }
+        : { timeZone, year: "numeric", month: "short", day: "numeric" },
+    );
+    cache.set(key, f);
+  }
+  return f;
+}
+
+/** "Mar 1, 2027, 6:00 AM CST" */
+export function formatLocalDateTime(iso: string | Date, timeZone: string): string {
+  const date = typeof iso === "string" ? new Date(iso) : iso;
+  return Number.isNaN(date.getTime()) ? String(iso) : formatter(timeZone, true).format(date);
+}
+
+/** "Mar 1, 2027": the day of an instant in the zone. */
+export function formatLocalDate(iso: string | Date, timeZone: string): string {
+  const date = typeof iso === "string" ? new Date(iso) : iso;
+  return Number.isNaN(date.getTime()) ? String(iso) : formatter(timeZone, false).format(date);
+}
