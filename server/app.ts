@@ -19,6 +19,7 @@ import { credentialRoutes } from "./credentials/index.ts";
 import { buyerRouters } from "./directory/buyer-routers.ts";
 import { workOrderRoutes } from "./work-orders/index.ts";
 import { reviewRoutes } from "./reviews/index.ts";
+import { serviceRequestRoutes } from "./service-requests/index.ts";
 import { createStorage } from "./storage/index.ts";
 import { createSignInLimiter } from "./accounts/sign-in-limit.ts";
 
@@ -39,6 +40,7 @@ const apiRouters = [
   standingApiRoutes,
   workOrderRoutes,
   reviewRoutes,
+  serviceRequestRoutes,
   ...buyerRouters,
 ];
 
