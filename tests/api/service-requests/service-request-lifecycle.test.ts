@@ -316,6 +316,10 @@ describe("comparing and deciding", () => {
     expect(res.body.status).toBe("decided");
     expect(workOrder.status).toBe(200);
     expect(workOrder.body.status).toBe("accepted");
+    expect(workOrder.body.snapshotAccepted).toMatchObject({
+      technicianId: a.technician.id,
+      standing: "cleared",
+    });
     expect(workOrder.body.technician?.id ?? workOrder.body.technicianId).toBe(a.technician.id);
     expect(chosenView.body.site.street).toBe("77 Millrace Court");
     expect(otherView.body.site.street).toBeNull();
