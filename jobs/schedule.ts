@@ -7,6 +7,7 @@ import { runLapseJob } from "./lapse.ts";
 import { claimTick, tickOf } from "./claim-tick.ts";
 import { runReviewerDigest } from "./reviewer-digest.ts";
 import { runSendOutbox } from "./send-outbox.ts";
+import { followUpDeps, runServiceRequestFollowUp } from "./service-request-follow-up.ts";
 
 export interface RunningSchedule {
   tasks: ScheduledTask[];
@@ -64,6 +65,14 @@ export function startSchedule(config: Config, deps: { mailer?: Mailer } = {}): R
       config.JOB_CRON,
       guarded("reviewer_digest", () => runReviewerDigest({ asOf: new Date() }), true),
       { ...daily, name: "reviewer-digest" },
+    ),
+    // Every ten minutes: a machine-down request is chased after one business hour, so a daily run is too coarse.
+    cron.schedule(
+      "*/10 * * * *",
+      guarded("service_request_follow_up", () =>
+        runServiceRequestFollowUp({ asOf: new Date() }, followUpDeps(config)),
+      ),
+      { name: "service-request-follow-up", noOverlap: true },
     ),
   ];
   if (mailer) {

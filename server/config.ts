@@ -32,7 +32,11 @@ const configSchema = z
     // clock hours before an undecided request expires.
     SERVICE_REQUEST_REMINDER_HOURS: z.coerce.number().min(0.25).max(200).default(3),
     SERVICE_REQUEST_DOWN_REMINDER_HOURS: z.coerce.number().min(0.25).max(200).default(1),
-    SERVICE_REQUEST_EXPIRY_HOURS: z.coerce.number().min(1).max(24 * 90).default(72),
+    SERVICE_REQUEST_EXPIRY_HOURS: z.coerce
+      .number()
+      .min(1)
+      .max(24 * 90)
+      .default(72),
     // Where stored files live: a local folder (one machine) or S3-compatible object storage (several machines).
     STORAGE_DRIVER: z.enum(["folder", "s3"]).default("folder"),
     S3_ENDPOINT: z.url().optional(),
