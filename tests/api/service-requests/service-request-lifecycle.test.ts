@@ -286,6 +286,21 @@ describe("comparing and deciding", () => {
     expect(row.total.labourCents).toBe(2 * 14_500);
   });
 
+  it("shows the same typical response time on the technician's profile as in the comparison", async () => {
+    const { shop, a, request } = await twoCompanyRequest();
+    await sequelize().query(
+      "UPDATE service_request_invitations SET invited_at = now() - interval '95 minutes' WHERE request_id = $1",
+      { bind: [request.id] },
+    );
+    await a.admin.post(`/api/service-requests/${request.id}/estimates`).send(estimateBody(a)).expect(201);
+
+    const comparison = await shop.agent.get(`/api/service-requests/${request.id}/comparison`);
+    const profile = await shop.agent.get(`/api/directory/technicians/${a.technician.id}`);
+
+    expect(comparison.body.rows[0].medianResponseMinutes).toBe(95);
+    expect(profile.body.companyMedianResponseMinutes).toBe(95);
+  });
+
   it("answers 403 to a service company and 404 to another shop for the comparison", async () => {
     const { a, request } = await twoCompanyRequest();
     const otherShop = await buildShop(t.app);
