@@ -11,6 +11,7 @@ export const navigationByRole: Record<Role, readonly NavItem[]> = {
     { label: "Technicians", to: paths.provider.technicians },
     { label: "Documents", to: paths.provider.documents },
     { label: "Work orders", to: paths.provider.workOrders },
+    { label: "Requests", to: paths.provider.serviceRequests },
   ],
   technician: [
     { label: "My standing", to: paths.technician.standing, end: true },
@@ -24,6 +25,7 @@ export const navigationByRole: Record<Role, readonly NavItem[]> = {
     { label: "Sites", to: paths.buyer.sites },
     { label: "Requirement sets", to: paths.buyer.requirementSets },
     { label: "Work orders", to: paths.buyer.workOrders },
+    { label: "Service requests", to: paths.buyer.serviceRequests },
   ],
   admin: [
     { label: "Users", to: paths.admin.users },
@@ -32,6 +34,7 @@ export const navigationByRole: Record<Role, readonly NavItem[]> = {
     { label: "Baseline", to: paths.admin.baseline },
     { label: "Job runs", to: paths.admin.jobRuns },
     { label: "Reported reviews", to: paths.admin.reportedReviews },
+    { label: "Follow-up", to: paths.admin.followUp },
   ],
 };
 
