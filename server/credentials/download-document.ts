@@ -5,6 +5,7 @@ import path from "node:path";
 import { promisify } from "node:util";
 import type { Response } from "express";
 import { AppError } from "../http/app-error.ts";
+import { contentDisposition } from "../http/file-names.ts";
 import { recordAudit } from "../audit/index.ts";
 import type { FileStorage } from "../storage/index.ts";
 import { Document } from "./model.ts";
@@ -25,11 +26,7 @@ function setFileHeaders(res: Response, mime: string, disposition: "inline" | "at
   res.setHeader("X-Content-Type-Options", "nosniff");
   res.setHeader("Content-Security-Policy", "default-src 'none'; sandbox");
   res.setHeader("Cache-Control", "private, no-store");
-  const ascii = name.replace(/[^\x20-\x7e]/g, "_").replace(/["\\]/g, "_");
-  res.setHeader(
-    "Content-Disposition",
-    `${disposition}; filename="${ascii}"; filename*=UTF-8''${encodeURIComponent(name)}`,
-  );
+  res.setHeader("Content-Disposition", contentDisposition(disposition, name));
 }
 
 /** Sends the stored file; only images may be shown inline (a PDF is previewed as rendered pages instead). */

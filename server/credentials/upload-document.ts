@@ -7,6 +7,7 @@ import path from "node:path";
 import { pipeline } from "node:stream/promises";
 import { fileTypeFromBuffer, fileTypeFromFile, type FileTypeResult } from "file-type";
 import type { UploadDocument } from "../../shared/credentials/schemas.ts";
+import { withoutLoneSurrogates } from "../../shared/api/text.ts";
 import { reviewerWarnings } from "../../shared/credentials/reviewer-checks.ts";
 import { AppError } from "../http/app-error.ts";
 import { db } from "../db/sequelize.ts";
@@ -43,9 +44,9 @@ export interface UploadedFile {
 /** Keeps a display name safe to store and to echo in a header: no folders, no control characters, bounded. */
 export function safeFileName(name: string): string {
   const base = path
-    .basename(name.replace(/\\/g, "/"))
+    .basename(withoutLoneSurrogates(name).replace(/\\/g, "/"))
     // eslint-disable-next-line no-control-regex -- control characters are exactly what is removed here
-    .replace(/[\u0000-\u001f\u007f"<>|:*?]/g, "_")
+    .replace(/[\u0000-\u001f\u007f-\u009f"<>|:*?]/g, "_")
     .trim();
   return Array.from(base || "document")
     .slice(0, 120)

@@ -2,6 +2,8 @@ import type { Transaction } from "sequelize";
 import type { RaiseWorkOrder } from "../../shared/work-orders/schemas.ts";
 import { isClearedNow, unmetRequirements } from "../../shared/work-orders/standing-snapshot.ts";
 import { AppError } from "../http/app-error.ts";
+import { atLeast } from "../../shared/visibility/technician-visibility.ts";
+import { viewLevelOf } from "../technicians/index.ts";
 import { db } from "../db/sequelize.ts";
 import { recordAudit } from "../audit/index.ts";
 import { WorkOrder } from "./model.ts";
@@ -15,15 +17,17 @@ const unknown = (path: string, message: string) =>
 
 /** Checks that every id in the request names a record this shop may use, and settles the machine technology. */
 async function resolveTargets(buyer: Express.User, input: RaiseWorkOrder) {
-  const [site, technician, equipment, requirementSet] = await Promise.all([
+  const [site, technician, level, equipment, requirementSet] = await Promise.all([
     findSite(input.siteId),
     findTechnicianForWork(input.technicianId),
+    viewLevelOf(buyer, input.technicianId),
     input.equipmentId ? findEquipment(input.equipmentId) : undefined,
     input.requirementSetId ? findRequirementSet(input.requirementSetId) : undefined,
   ]);
   if (!site || site.company_id !== buyer.companyId)
     throw unknown("body.siteId", "Choose one of your shop's sites");
-  if (!technician || !technician.active || technician.company_kind !== "service")
+  // A technician the shared rule hides from shops is refused exactly like an unknown id: no reasons, no name.
+  if (!technician || !atLeast(level, "directory") || technician.company_kind !== "service")
     throw unknown("body.technicianId", "That technician was not found");
   if (input.equipmentId && (!equipment || equipment.site_id !== site.id))
     throw unknown("body.equipmentId", "Choose a machine at that site");
