@@ -14,11 +14,8 @@ import { AppError } from "../http/app-error.ts";
 import { assumptions, estimateTrip, ratingSummary, SCORE_SOURCE } from "./estimates.ts";
 import { computeStandingNow } from "./live-standing.ts";
 import { fieldsForBuyers } from "../../shared/credentials/fields-for-buyers.ts";
-<<<<<<< HEAD
 import { companyResponseMedians } from "../service-requests/index.ts";
-=======
 import { buyerMayDownload } from "../../shared/visibility/technician-visibility.ts";
->>>>>>> main
 
 const select = <T extends object>(sql: string, bind: unknown[]) =>
   db().query<T>(sql, { bind, type: QueryTypes.SELECT });
