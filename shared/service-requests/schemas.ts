@@ -37,7 +37,8 @@ export const threadFileParamsSchema = z.object({
   messageId: idParam,
 });
 
-const MAX_COMPANY_CHANGES = 50;
+// A dense metro area can hold hundreds of cleared companies; the buyer may untick any of them.
+const MAX_COMPANY_CHANGES = 1000;
 
 /** What a buyer describes; the shop and the author come from the session. */
 export const serviceRequestBaseSchema = z.object({
