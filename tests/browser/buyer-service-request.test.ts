@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import pg from "pg";
 import type { Browser, BrowserContext, Page } from "playwright-core";
+import { seriousAccessibilityProblems } from "../support/axe.ts";
 import { startBrowserServer } from "../support/browser-server.ts";
 import { launchChromium, screenshot, signIn } from "../support/browser.ts";
 import { DEMO_PASSWORD } from "../../server/db/demo-scenario/index.ts";
@@ -124,6 +125,7 @@ describe("a buyer with a machine down asks every cleared company at once", () =>
     const overflow = await phone.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
     await screenshot(phone, "service-request-2-estimate-390");
     expect(overflow).toBeLessThanOrEqual(0);
+    await expect(seriousAccessibilityProblems(phone)).resolves.toEqual([]);
     await phone.getByLabel("Hours on site").fill("3");
     await phone.getByRole("button", { name: "Send revision" }).click();
     await phone.getByText(/Revision 2:/).waitFor();
@@ -140,6 +142,7 @@ describe("a buyer with a machine down asks every cleared company at once", () =>
     await expect(table.getByText(first!.company, { exact: true }).count()).resolves.toBe(1);
     await expect(table.getByText(second!.company, { exact: true }).count()).resolves.toBe(1);
     await screenshot(buyer, "service-request-3-compare");
+    await expect(seriousAccessibilityProblems(buyer)).resolves.toEqual([]);
     await table.getByRole("button", { name: `Accept ${first!.company}` }).click();
     await buyer.getByRole("link", { name: /work order #\d+/ }).waitFor();
 
