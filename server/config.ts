@@ -48,6 +48,21 @@ const configSchema = z
       .min(1)
       .max(24 * 90)
       .default(72),
+    // Minutes to wait before each retry of a failed scheduled run; one more attempt than there are delays.
+    JOB_RETRY_MINUTES: z
+      .string()
+      .default("1,5,15")
+      .transform((s) => s.split(",").map((d) => Number(d.trim())))
+      .pipe(
+        z
+          .array(
+            z
+              .number()
+              .min(0)
+              .max(24 * 60),
+          )
+          .max(10),
+      ),
     // Where stored files live: a local folder (one machine) or S3-compatible object storage (several machines).
     STORAGE_DRIVER: z.enum(["folder", "s3"]).default("folder"),
     S3_ENDPOINT: z.url().optional(),

@@ -57,7 +57,9 @@ export async function startServer(
   };
   // Mail goes out right after the request that queued it; the schedule retries what failed.
   app.locals.kickOutbox = () => void sendMail();
-  const schedule = config.RUN_SCHEDULE ? startSchedule(config, { mailer }) : undefined;
+  const schedule = config.RUN_SCHEDULE
+    ? startSchedule(config, { mailer, storage: app.locals.storage as FileStorage })
+    : undefined;
 
   const server = await new Promise<Server>((resolve, reject) => {
     const s = app.listen(config.PORT, config.HOST, () => resolve(s));

@@ -69,7 +69,10 @@ export async function acceptEstimate(
         technology: request.technology,
         problem: `${requestKindLabels[request.kind]} (service request #${request.id}): ${request.problem}`,
         urgency: URGENCY[request.machine_state],
-        preferredDates: request.window_start ? [request.window_start] : [],
+        // The window's first day, unless it has passed (the work order accepts only dates from today on).
+        preferredDates: [request.window_start, request.window_end]
+          .flatMap((d) => (d && d >= new Date().toISOString().slice(0, 10) ? [d] : []))
+          .slice(0, 1),
       },
       warningDays,
       (id) => `${linkBase}/work-orders/${id}`,

@@ -1,6 +1,7 @@
 import type { Transaction } from "sequelize";
 import type { RaiseWorkOrder } from "../../shared/work-orders/schemas.ts";
 import { isClearedNow, unmetRequirements } from "../../shared/work-orders/standing-snapshot.ts";
+import { preferredDateProblem } from "../../shared/work-orders/preferred-dates.ts";
 import { AppError } from "../http/app-error.ts";
 import { atLeast } from "../../shared/visibility/technician-visibility.ts";
 import { viewLevelOf } from "../technicians/index.ts";
@@ -14,6 +15,16 @@ import { toWorkOrderDto } from "./dto.ts";
 
 const unknown = (path: string, message: string) =>
   new AppError("invalid_input", message, [{ path, message: "unknown or not yours" }]);
+
+/** Refuses preferred dates in the past or years ahead; `now` is the server's clock, read once by the caller. */
+function checkPreferredDates(dates: string[], now: Date) {
+  const today = now.toISOString().slice(0, 10);
+  const fields = dates.flatMap((date, i) => {
+    const message = preferredDateProblem(date, today);
+    return message ? [{ path: `body.preferredDates.${i}`, message }] : [];
+  });
+  if (fields.length > 0) throw new AppError("invalid_input", fields[0]!.message, fields);
+}
 
 /** Checks that every id in the request names a record this shop may use, and settles the machine technology. */
 async function resolveTargets(buyer: Express.User, input: RaiseWorkOrder) {
@@ -59,11 +70,13 @@ export async function raiseWorkOrderWithin(
   transaction: Transaction,
   options: { mailServiceSide?: boolean } = {},
 ) {
+  const now = new Date();
+  checkPreferredDates(input.preferredDates, now);
   const { site, technician, equipment, technology } = await resolveTargets(buyer, input);
   const snapshot = await standingSnapshotNow(
     technician.id,
     input.requirementSetId ?? null,
-    new Date(),
+    now,
     warningDays,
     transaction,
   );

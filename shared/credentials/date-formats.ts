@@ -1,3 +1,5 @@
+import { daysInMonth } from "../standing/iso-date.ts";
+
 /**
  * Dates as printed on certificates and cards. US documents print MM/DD/YYYY (sometimes M/D/YY); some
  * systems print ISO. We keep calendar dates as ISO text so no time zone can move them.
@@ -17,8 +19,7 @@ export const DATE_IN_TEXT =
 
 function isRealDate(year: number, month: number, day: number): boolean {
   if (month < 1 || month > 12 || day < 1) return false;
-  const daysInMonth = new Date(Date.UTC(year, month, 0)).getUTCDate();
-  return day <= daysInMonth;
+  return day <= daysInMonth(year, month);
 }
 
 function toIso(year: number, month: number, day: number): string | null {
