@@ -1,4 +1,5 @@
 import type { Transaction } from "sequelize";
+import { DateTime } from "luxon";
 import { requestKindLabels } from "../../shared/service-requests/schemas.ts";
 import type { Urgency } from "../../shared/work-orders/schemas.ts";
 import { AppError } from "../http/app-error.ts";
@@ -59,6 +60,18 @@ export async function acceptEstimate(
       [estimateId, estimate.revision],
       transaction,
     );
+    const site = await selectOne<{ time_zone: string }>(
+      "SELECT time_zone FROM sites WHERE id = $1",
+      [request.site_id],
+      transaction,
+    );
+    const today = DateTime.now().setZone(site!.time_zone).toISODate()!;
+    if (revision!.valid_until < today) {
+      throw new AppError(
+        "conflict",
+        `That estimate was valid until ${revision!.valid_until}; ask the company to revise it`,
+      );
+    }
     const { row: workOrder, snapshot } = await raiseWorkOrderWithin(
       buyer,
       {

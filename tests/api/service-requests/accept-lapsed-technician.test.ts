@@ -84,3 +84,28 @@ describe("accepting an estimate at the moment the technician lapses", () => {
     expect(res.body.status).toBe("decided");
   });
 });
+
+describe("accepting an estimate past its validity", () => {
+  it("answers 409 when the estimate's valid-until date has passed at the site", async () => {
+    const shop = await buildShop(t.app);
+    const company = await buildClearedCompany(t.app);
+    const threeDaysAgo = new Date(Date.now() - 3 * 86_400_000);
+    const request = await raiseRequest(shop, await onlyInvite(shop, [company.company.id]));
+    const sent = await at(threeDaysAgo, () =>
+      company.admin.post(`/api/service-requests/${request.id}/estimates`).send(
+        estimateBody(company, {
+          validUntil: addCalendarDays(threeDaysAgo.toISOString().slice(0, 10), 1),
+          earliestArrival: `${addCalendarDays(threeDaysAgo.toISOString().slice(0, 10), 1)}T09:30`,
+        }),
+      ),
+    );
+
+    const res = await shop.agent.post(
+      `/api/service-requests/${request.id}/estimates/${sent.body.estimates[0].id}/accept`,
+    );
+
+    expect(sent.status).toBe(201);
+    expect(res.status).toBe(409);
+    expect(res.body.error.message).toContain("valid until");
+  });
+});
