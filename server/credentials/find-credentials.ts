@@ -10,6 +10,7 @@ import { Technician } from "../technicians/model.ts";
 import { Credential, CredentialType, Document } from "./model.ts";
 import { toCredentialDto, toCredentialDtos } from "./dto.ts";
 import { duplicateForOtherHolder } from "./upload-document.ts";
+import { workStatesOf } from "./work-states.ts";
 import { fieldsForBuyers } from "../../shared/credentials/fields-for-buyers.ts";
 
 export async function listOwnCredentials(
@@ -61,6 +62,7 @@ export async function findCredential(user: Express.User, id: number) {
       duplicateOfOtherHolder: document
         ? await duplicateForOtherHolder(document.sha256, document.id, row.companyId, row.technicianId)
         : false,
+      workStates: type!.fieldSet === "exemption" ? await workStatesOf(row.companyId) : [],
     });
   }
   return {

@@ -22,6 +22,7 @@ import { DocumentUnreadableError } from "./extraction/document-unreadable-error.
 import { activeType } from "./catalogue.ts";
 import { resolveHolder } from "./resolve-holder.ts";
 import { Credential, Document } from "./model.ts";
+import { workStatesOf } from "./work-states.ts";
 
 const EXTENSIONS: Record<ExtractableMime, string[]> = {
   "application/pdf": [".pdf"],
@@ -189,6 +190,7 @@ export async function uploadDocument(
         companyLegalName: company?.name ?? "",
         technicianName: technician?.name,
         duplicateOfOtherHolder: otherHolder,
+        workStates: type.fieldSet === "exemption" ? await workStatesOf(user.companyId) : [],
       }),
     };
   } finally {

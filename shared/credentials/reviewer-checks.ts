@@ -12,6 +12,7 @@ export const reviewerWarningCodes = [
   "naic_not_five_digits",
   "holder_name_differs",
   "submitted_for_another_holder",
+  "exemption_from_another_state",
 ] as const;
 export type ReviewerWarningCode = (typeof reviewerWarningCodes)[number];
 export interface ReviewerWarning {
@@ -31,14 +32,18 @@ export interface ReviewerCheckInput {
     holderName?: string;
     issueDate?: string;
     expiryDate?: string;
+    /** Exemption: the issuing state. */
+    state?: string;
   };
   companyLegalName: string;
   technicianName?: string;
   /** The same file (by content hash) is already on another holder's credential. */
   duplicateOfOtherHolder?: boolean;
+  /** Two-letter states where the company works: its own address and the sites of its work orders. */
+  workStates?: readonly { state: string; where: string }[];
 }
 
-// NAIC company code: five digits (TRADE-FACTS 2.4).
+// NAIC company code: five digits (from memory).
 const NAIC_PATTERN = /^\d{5}$/;
 // Legal-form words that one document spells out and another abbreviates or drops.
 const LEGAL_SUFFIXES = new Set([
@@ -101,7 +106,7 @@ function insuranceWarnings(input: ReviewerCheckInput): ReviewerWarning[] {
     });
   }
   const limits = fields.limits ?? {};
-  // General aggregate >= each occurrence (TRADE-FACTS 2.5, common practice).
+  // General aggregate >= each occurrence (common practice).
   if (
     limits.generalAggregate !== undefined &&
     limits.eachOccurrence !== undefined &&
@@ -112,7 +117,7 @@ function insuranceWarnings(input: ReviewerCheckInput): ReviewerWarning[] {
       message: "The general aggregate is below the each-occurrence limit.",
     });
   }
-  // EL disease policy limit >= disease each employee (TRADE-FACTS 2.5, common practice).
+  // EL disease policy limit >= disease each employee (common practice).
   const diseasePolicy = limits.employersLiabilityDiseasePolicyLimit;
   const diseaseEmployee = limits.employersLiabilityDiseaseEachEmployee;
   if (diseasePolicy !== undefined && diseaseEmployee !== undefined && diseasePolicy < diseaseEmployee) {
@@ -152,9 +157,28 @@ function cardWarnings(input: ReviewerCheckInput): ReviewerWarning[] {
   return warnings;
 }
 
+/**
+ * A state's workers' compensation exemption is that state's: work in another state falls under that state's own law
+ * (common practice; rules on out-of-state work vary by state), so the reviewer checks before accepting it.
+ */
+function exemptionWarnings(input: ReviewerCheckInput): ReviewerWarning[] {
+  const issuedBy = input.fields.state?.trim().toUpperCase();
+  if (input.fieldSet !== "exemption" || !issuedBy) return [];
+  const elsewhere = (input.workStates ?? []).filter((w) => w.state.toUpperCase() !== issuedBy);
+  if (elsewhere.length === 0) return [];
+  const places = elsewhere.map((w) => `${w.where} (${w.state})`).join(", ");
+  return [
+    {
+      code: "exemption_from_another_state",
+      message: `The exemption is issued by ${issuedBy}, but the company works in another state: ${places}. Check that the exemption covers work there.`,
+    },
+  ];
+}
+
 /** Warnings for a reviewer about one credential's fields. */
 export function reviewerWarnings(input: ReviewerCheckInput): ReviewerWarning[] {
   const warnings = input.fieldSet === "insurance" ? insuranceWarnings(input) : cardWarnings(input);
+  warnings.push(...exemptionWarnings(input));
   if (input.duplicateOfOtherHolder) {
     warnings.push({
       code: "submitted_for_another_holder",

@@ -12,6 +12,7 @@ export const navigationByRole: Record<Role, readonly NavItem[]> = {
     { label: "Documents", to: paths.provider.documents },
     { label: "Work orders", to: paths.provider.workOrders },
     { label: "Requests", to: paths.provider.serviceRequests },
+    { label: "Company", to: paths.company },
   ],
   technician: [
     { label: "My standing", to: paths.technician.standing, end: true },
@@ -26,6 +27,7 @@ export const navigationByRole: Record<Role, readonly NavItem[]> = {
     { label: "Requirement sets", to: paths.buyer.requirementSets },
     { label: "Work orders", to: paths.buyer.workOrders },
     { label: "Service requests", to: paths.buyer.serviceRequests },
+    { label: "Company", to: paths.company },
   ],
   admin: [
     { label: "Users", to: paths.admin.users },
