@@ -20,14 +20,14 @@ const journeys = [
   {
     role: "provider_admin",
     email: "office@kestrel-ridge.test",
-    sees: ["Dashboard", "Technicians", "Documents", "Work orders"],
+    sees: ["Dashboard", "Technicians", "Documents", "Work orders", "Requests"],
     hidden: ["Queue", "Directory", "Users"],
   },
   {
     role: "technician",
     email: "tobias@kestrel-ridge.test",
     sees: ["My standing", "Upload a card"],
-    hidden: ["Technicians", "Queue", "Directory"],
+    hidden: ["Technicians", "Queue", "Directory", "Requests"],
   },
   {
     role: "reviewer",
@@ -38,13 +38,13 @@ const journeys = [
   {
     role: "buyer",
     email: "buyer@marlow-precision.test",
-    sees: ["Directory", "Roster", "Sites", "Requirement sets", "Work orders"],
+    sees: ["Directory", "Roster", "Sites", "Requirement sets", "Work orders", "Service requests"],
     hidden: ["Queue", "Technicians", "Users"],
   },
   {
     role: "admin",
     email: "admin@clearbench.test",
-    sees: ["Users", "Catalogue", "Outbox", "Baseline", "Job runs", "Reported reviews"],
+    sees: ["Users", "Catalogue", "Outbox", "Baseline", "Job runs", "Reported reviews", "Follow-up"],
     hidden: ["Queue", "Directory", "Technicians"],
   },
 ] as const;
