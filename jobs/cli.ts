@@ -9,6 +9,7 @@ import { registerRosterAlerts, setRosterAlertLinkBase, sweepRosterAlerts } from 
 import { runLapseJob } from "./lapse.ts";
 import { runReviewerDigest } from "./reviewer-digest.ts";
 import { runSendOutbox } from "./send-outbox.ts";
+import { followUpDeps, runServiceRequestFollowUp } from "./service-request-follow-up.ts";
 
 // `npm run job:lapse -- --as-of 2027-03-01T06:00:00Z [--no-send]`, `npm run job:lapse -- --check`, `npm run job:outbox`.
 const say = (line: string) => process.stdout.write(`${line}\n`);
@@ -102,11 +103,20 @@ async function main(): Promise<number> {
     if (!values["no-send"]) await sendOutbox();
     return 0;
   }
+  if (command === "follow-up") {
+    const started = performance.now();
+    const result = await runServiceRequestFollowUp({ asOf }, followUpDeps(config));
+    say(
+      `service-request follow-up as of ${asOf.toISOString()}: ${result.reminded} reminders (${result.companiesReminded} companies), ${result.expired} expired (${ms(started)})`,
+    );
+    if (!values["no-send"]) await sendOutbox();
+    return 0;
+  }
   if (command === "outbox") {
     await sendOutbox();
     return 0;
   }
-  say(`Unknown job ${command}: use lapse, digest or outbox`);
+  say(`Unknown job ${command}: use lapse, digest, follow-up or outbox`);
   return 2;
 }
 

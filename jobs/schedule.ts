@@ -9,6 +9,7 @@ import { tickOf } from "./claim-tick.ts";
 import { retryDueTicks, runScheduledTick, type JobWork, type TickDeps } from "./run-tick.ts";
 import { runReviewerDigest } from "./reviewer-digest.ts";
 import { runSendOutbox } from "./send-outbox.ts";
+import { followUpDeps, runServiceRequestFollowUp } from "./service-request-follow-up.ts";
 import { runUploadSweep } from "./sweep-uploads.ts";
 
 export interface RunningSchedule {
@@ -36,6 +37,7 @@ export function scheduledJobs(
     },
     reviewer_digest: (asOf) => runReviewerDigest({ asOf }),
     upload_sweep: (asOf) => runUploadSweep({ asOf }, { storage: deps.storage }),
+    service_request_follow_up: (asOf) => runServiceRequestFollowUp({ asOf }, followUpDeps(config)),
   };
 }
 
@@ -72,6 +74,11 @@ export function startSchedule(
     cron.schedule(config.JOB_CRON, claimed("lapse"), { ...daily, name: "lapse" }),
     cron.schedule(config.JOB_CRON, claimed("reviewer_digest"), { ...daily, name: "reviewer-digest" }),
     cron.schedule(UPLOAD_SWEEP_CRON, claimed("upload_sweep"), { noOverlap: true, name: "upload-sweep" }),
+    // Every ten minutes: a machine-down request is chased after one business hour, so a daily run is too coarse.
+    cron.schedule("*/10 * * * *", claimed("service_request_follow_up"), {
+      noOverlap: true,
+      name: "service-request-follow-up",
+    }),
     cron.schedule(
       "* * * * *",
       guarded(() => retryDueTicks(jobs, tickDeps), "job_retries"),

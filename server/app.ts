@@ -20,6 +20,7 @@ import { credentialRoutes } from "./credentials/index.ts";
 import { buyerRouters } from "./directory/buyer-routers.ts";
 import { workOrderRoutes } from "./work-orders/index.ts";
 import { reviewRoutes } from "./reviews/index.ts";
+import { serviceRequestRoutes } from "./service-requests/index.ts";
 import { companyRoutes } from "./companies/index.ts";
 import { createStorage } from "./storage/index.ts";
 import { createAbuseLimits } from "./accounts/abuse-limits.ts";
@@ -42,6 +43,7 @@ const apiRouters = [
   standingApiRoutes,
   workOrderRoutes,
   reviewRoutes,
+  serviceRequestRoutes,
   companyRoutes,
   ...buyerRouters,
 ];

@@ -39,6 +39,15 @@ const configSchema = z
       .transform((s) => s.split(",").map((d) => Number(d.trim())))
       .pipe(z.array(z.number().int().min(1).max(365)).min(1)),
     RUN_SCHEDULE: booleanText.default(true),
+    // Service requests: business hours at the site before invited companies are reminded (machine down sooner), and
+    // clock hours before an undecided request expires.
+    SERVICE_REQUEST_REMINDER_HOURS: z.coerce.number().min(0.25).max(200).default(3),
+    SERVICE_REQUEST_DOWN_REMINDER_HOURS: z.coerce.number().min(0.25).max(200).default(1),
+    SERVICE_REQUEST_EXPIRY_HOURS: z.coerce
+      .number()
+      .min(1)
+      .max(24 * 90)
+      .default(72),
     // Minutes to wait before each retry of a failed scheduled run; one more attempt than there are delays.
     JOB_RETRY_MINUTES: z
       .string()

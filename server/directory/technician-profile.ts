@@ -14,6 +14,7 @@ import { AppError } from "../http/app-error.ts";
 import { assumptions, estimateTrip, ratingSummary, SCORE_SOURCE } from "./estimates.ts";
 import { computeStandingNow } from "./live-standing.ts";
 import { fieldsForBuyers } from "../../shared/credentials/fields-for-buyers.ts";
+import { companyResponseMedians } from "../service-requests/index.ts";
 import { buyerMayDownload } from "../../shared/visibility/technician-visibility.ts";
 
 const select = <T extends object>(sql: string, bind: unknown[]) =>
@@ -209,7 +210,10 @@ export async function findDirectoryTechnician(
   const [t] = await select<TechnicianRow>(PAGE_SQL, [technicianId, buyer.companyId, asOf]);
   if (!t) throw new AppError("not_found", "That technician was not found");
   // A set the standing job has not stored yet is computed now (one more query, only then).
-  const requirementSets = await toStandings(t, asOf);
+  const [requirementSets, responseMedians] = await Promise.all([
+    toStandings(t, asOf),
+    companyResponseMedians([t.company_id], asOf),
+  ]);
   return {
     technicianId: t.id,
     name: t.name,
@@ -232,6 +236,7 @@ export async function findDirectoryTechnician(
     reviews: toReviews(t.reviews),
     estimates: toEstimates(t, onSiteHours),
     assumptions: assumptions(onSiteHours),
+    companyMedianResponseMinutes: responseMedians.get(t.company_id) ?? null,
     caution: CERTIFICATE_CAUTION,
   };
 }

@@ -1,3 +1,4 @@
+import type { Transaction } from "sequelize";
 import type { RaiseWorkOrder } from "../../shared/work-orders/schemas.ts";
 import { isClearedNow, unmetRequirements } from "../../shared/work-orders/standing-snapshot.ts";
 import { preferredDateProblem } from "../../shared/work-orders/preferred-dates.ts";
@@ -57,59 +58,62 @@ async function resolveTargets(buyer: Express.User, input: RaiseWorkOrder) {
 }
 
 /**
- * A buyer raises a work order to a technician for one of the shop's sites. Refused with 409 when the technician is not
- * cleared against the baseline (and the chosen requirement set) at this very instant.
+ * Writes a work order inside the caller's transaction, after the standing check at this very instant (409 naming what
+ * is unmet otherwise). Used by a buyer raising one directly and by an accepted service-request estimate, so both carry
+ * the same snapshot, audit and checks.
  */
-export async function raiseWorkOrder(
+export async function raiseWorkOrderWithin(
   buyer: Express.User,
   input: RaiseWorkOrder,
   warningDays: number,
   link: (id: number) => string,
+  transaction: Transaction,
+  options: { mailServiceSide?: boolean } = {},
 ) {
   const now = new Date();
   checkPreferredDates(input.preferredDates, now);
   const { site, technician, equipment, technology } = await resolveTargets(buyer, input);
-  const workOrder = await db().transaction(async (transaction) => {
-    const snapshot = await standingSnapshotNow(
-      technician.id,
-      input.requirementSetId ?? null,
-      now,
-      warningDays,
-      transaction,
+  const snapshot = await standingSnapshotNow(
+    technician.id,
+    input.requirementSetId ?? null,
+    now,
+    warningDays,
+    transaction,
+  );
+  if (!isClearedNow(snapshot.standing)) {
+    throw new AppError(
+      "conflict",
+      `${snapshot.technicianName} is not cleared right now, so no work order can be raised`,
+      unmetRequirements(snapshot),
     );
-    if (!isClearedNow(snapshot.standing)) {
-      throw new AppError(
-        "conflict",
-        `${snapshot.technicianName} is not cleared right now, so no work order can be raised`,
-        unmetRequirements(snapshot),
-      );
-    }
-    const row = await WorkOrder.create(
-      {
-        shopCompanyId: buyer.companyId,
-        siteId: site.id,
-        equipmentId: equipment?.id ?? null,
-        technicianId: technician.id,
-        serviceCompanyId: technician.company_id,
-        requirementSetId: input.requirementSetId ?? null,
-        technology,
-        problem: input.problem,
-        urgency: input.urgency,
-        preferredDates: input.preferredDates,
-        createdBy: buyer.id,
-      },
-      { transaction },
-    );
-    await recordAudit(
-      {
-        actorUserId: buyer.id,
-        action: "work_order.raised",
-        subjectType: "work_order",
-        subjectId: row.id,
-        after: { ...row.toJSON(), standing: snapshot.standing },
-      },
-      transaction,
-    );
+  }
+  const row = await WorkOrder.create(
+    {
+      shopCompanyId: buyer.companyId,
+      siteId: site.id,
+      equipmentId: equipment?.id ?? null,
+      technicianId: technician.id,
+      serviceCompanyId: technician.company_id,
+      requirementSetId: input.requirementSetId ?? null,
+      technology,
+      problem: input.problem,
+      urgency: input.urgency,
+      preferredDates: input.preferredDates,
+      createdBy: buyer.id,
+    },
+    { transaction },
+  );
+  await recordAudit(
+    {
+      actorUserId: buyer.id,
+      action: "work_order.raised",
+      subjectType: "work_order",
+      subjectId: row.id,
+      after: { ...row.toJSON(), standing: snapshot.standing },
+    },
+    transaction,
+  );
+  if (options.mailServiceSide ?? true) {
     const urgent = input.urgency === "down" ? " (machine down)" : "";
     await mailOtherSide(
       row,
@@ -128,7 +132,22 @@ export async function raiseWorkOrder(
       link(row.id),
       transaction,
     );
-    return row;
-  });
-  return toWorkOrderDto(workOrder, "shop");
+  }
+  return { row, snapshot };
+}
+
+/**
+ * A buyer raises a work order to a technician for one of the shop's sites. Refused with 409 when the technician is not
+ * cleared against the baseline (and the chosen requirement set) at this very instant.
+ */
+export async function raiseWorkOrder(
+  buyer: Express.User,
+  input: RaiseWorkOrder,
+  warningDays: number,
+  link: (id: number) => string,
+) {
+  const { row } = await db().transaction((transaction) =>
+    raiseWorkOrderWithin(buyer, input, warningDays, link, transaction),
+  );
+  return toWorkOrderDto(row, "shop");
 }

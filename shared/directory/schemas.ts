@@ -198,6 +198,8 @@ export interface DirectoryTechnicianDto {
   reviews: ProfileReviewDto[];
   estimates: SiteEstimateDto[];
   assumptions: DirectoryAssumptionsDto;
+  /** The company's median minutes from a service-request invitation to its first answer, last 90 days. */
+  companyMedianResponseMinutes: number | null;
   caution: string;
 }
 

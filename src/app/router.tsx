@@ -51,6 +51,14 @@ export const router = createBrowserRouter([
               },
               { path: paths.provider.documents, lazy: () => import("./routes/provider/documents.tsx") },
               { path: paths.provider.documentNew, lazy: () => import("./routes/provider/document-new.tsx") },
+              {
+                path: paths.provider.serviceRequests,
+                lazy: () => import("./routes/provider/service-requests.tsx"),
+              },
+              {
+                path: paths.provider.serviceRequest,
+                lazy: () => import("./routes/provider/service-request.tsx"),
+              },
             ],
           },
           {
@@ -109,6 +117,15 @@ export const router = createBrowserRouter([
               },
               { path: paths.buyer.workOrderNew, lazy: () => import("./routes/buyer/raise-work-order.tsx") },
               { path: paths.buyer.technician, lazy: () => import("./routes/buyer/technician.tsx") },
+              {
+                path: paths.buyer.serviceRequests,
+                lazy: () => import("./routes/buyer/service-requests.tsx"),
+              },
+              {
+                path: paths.buyer.serviceRequestNew,
+                lazy: () => import("./routes/buyer/service-request-new.tsx"),
+              },
+              { path: paths.buyer.serviceRequest, lazy: () => import("./routes/buyer/service-request.tsx") },
             ],
           },
           {
@@ -124,6 +141,7 @@ export const router = createBrowserRouter([
                 path: paths.admin.reportedReviews,
                 lazy: () => import("./routes/admin/reported-reviews.tsx"),
               },
+              { path: paths.admin.followUp, lazy: () => import("./routes/admin/follow-up.tsx") },
             ],
           },
         ],

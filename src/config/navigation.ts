@@ -11,6 +11,7 @@ export const navigationByRole: Record<Role, readonly NavItem[]> = {
     { label: "Technicians", to: paths.provider.technicians },
     { label: "Credentials", to: paths.provider.documents },
     { label: "Work orders", to: paths.provider.workOrders },
+    { label: "Service requests", to: paths.provider.serviceRequests },
     { label: "Company", to: paths.company },
   ],
   technician: [
@@ -25,6 +26,7 @@ export const navigationByRole: Record<Role, readonly NavItem[]> = {
     { label: "Sites", to: paths.buyer.sites },
     { label: "Requirement sets", to: paths.buyer.requirementSets },
     { label: "Work orders", to: paths.buyer.workOrders },
+    { label: "Service requests", to: paths.buyer.serviceRequests },
     { label: "Company", to: paths.company },
   ],
   admin: [
@@ -34,6 +36,7 @@ export const navigationByRole: Record<Role, readonly NavItem[]> = {
     { label: "Platform baseline", to: paths.admin.baseline },
     { label: "Job runs", to: paths.admin.jobRuns },
     { label: "Reported ratings", to: paths.admin.reportedReviews },
+    { label: "Follow-up", to: paths.admin.followUp },
   ],
 };
 

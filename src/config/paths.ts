@@ -23,6 +23,8 @@ export const paths = {
     documents: "/provider/documents",
     documentNew: "/provider/documents/new",
     workOrders: "/provider/work-orders",
+    serviceRequests: "/provider/service-requests",
+    serviceRequest: "/provider/service-requests/:requestId",
   },
   technician: {
     standing: "/technician",
@@ -40,6 +42,9 @@ export const paths = {
     workOrders: "/work-orders",
     technician: "/directory/technicians/:technicianId",
     workOrderNew: "/work-orders/new",
+    serviceRequests: "/buyer/service-requests",
+    serviceRequestNew: "/buyer/service-requests/new",
+    serviceRequest: "/buyer/service-requests/:requestId",
   },
   /** One work order, for either side (the e-mails link here). */
   workOrder: "/work-orders/:workOrderId",
@@ -50,6 +55,7 @@ export const paths = {
     baseline: "/admin/baseline",
     jobRuns: "/admin/job-runs",
     reportedReviews: "/admin/reviews",
+    followUp: "/admin/follow-up",
   },
 } as const;
 
@@ -60,6 +66,8 @@ export const hrefs = {
   review: (credentialId: number) => `/review/${credentialId}`,
   directoryTechnician: (id: number) => `/directory/technicians/${id}`,
   workOrder: (id: number) => `/work-orders/${id}`,
+  buyerServiceRequest: (id: number) => `/buyer/service-requests/${id}`,
+  providerServiceRequest: (id: number) => `/provider/service-requests/${id}`,
   workOrderNew: (technicianId: number) => `/work-orders/new?technicianId=${technicianId}`,
   /** The upload flow with the type and holder chosen already (a renewal, or a corrected returned document). */
   documentNew: (preset: { typeCode?: string | undefined; technicianId?: number | null | undefined } = {}) => {

@@ -4,6 +4,7 @@ import { buildTestApp, type TestApp } from "../support/test-app.ts";
 import { buildWorkOrderWorld, workOrderAt, type WorkOrderWorld } from "../fixtures/build-work-order-world.ts";
 import { submitLiabilityCertificate } from "../support/submit-credential.ts";
 import { routeTable } from "../../server/http/route.ts";
+import { estimateBody, storeStandings, tinyPng } from "../fixtures/build-service-request-world.ts";
 import type { Role } from "../../shared/accounts/schemas.ts";
 import { CSRF_HEADER, CSRF_HEADER_VALUE } from "../../shared/api/error-body.ts";
 import { atLeast, technicianViewLevel } from "../../shared/visibility/technician-visibility.ts";
@@ -40,8 +41,28 @@ beforeAll(async () => {
      RETURNING id`,
     { bind: [owner.shop.user.id], type: QueryTypes.SELECT },
   );
+  await storeStandings(owner.provider.company.id);
+  const serviceRequest = await owner.shop.agent.post("/api/service-requests").send({
+    siteId: owner.siteId,
+    equipmentId: owner.equipmentId,
+    kind: "repair",
+    machineState: "down",
+    problem: "won't power on",
+    removeCompanyIds: [other.provider.company.id],
+  });
+  const requestId = serviceRequest.body.id as number;
+  const attachment = await owner.shop.agent
+    .post(`/api/service-requests/${requestId}/attachments`)
+    .attach("file", tinyPng(), "panel.png");
+  const estimate = await owner.provider.admin
+    .post(`/api/service-requests/${requestId}/estimates`)
+    .send(estimateBody({ technician: owner.provider.technician } as Parameters<typeof estimateBody>[0]));
   Object.assign(ids, {
     notificationId: String(notification!.id),
+    requestId: String(requestId),
+    estimateId: String(estimate.body.estimates[0].id),
+    attachmentId: String(attachment.body.id),
+    companyId: String(owner.provider.company.id),
     technicianId: String(owner.provider.technician.id),
     credentialId: String(credential.id),
     documentId: String(credential.documentId),
@@ -118,7 +139,7 @@ describe("another company's records", () => {
       }
     }
 
-    expect(Object.keys(ids).length).toBe(12);
+    expect(Object.keys(ids).length).toBe(16);
     expect(walked.some((r) => r.policy.roles === "signed_in")).toBe(true);
     expect(checked).toBeGreaterThan(40);
     expect(wrong).toEqual([]);

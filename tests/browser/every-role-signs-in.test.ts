@@ -20,14 +20,14 @@ const journeys = [
   {
     role: "provider_admin",
     email: "office@kestrel-ridge.test",
-    sees: ["Dashboard", "Technicians", "Credentials", "Work orders"],
+    sees: ["Dashboard", "Technicians", "Credentials", "Work orders", "Service requests"],
     hidden: ["Verification queue", "Directory", "Users"],
   },
   {
     role: "technician",
     email: "tobias@kestrel-ridge.test",
     sees: ["My standing", "Upload a card"],
-    hidden: ["Technicians", "Verification queue", "Directory"],
+    hidden: ["Technicians", "Verification queue", "Directory", "Service requests"],
   },
   {
     role: "reviewer",
@@ -38,13 +38,13 @@ const journeys = [
   {
     role: "buyer",
     email: "buyer@marlow-precision.test",
-    sees: ["Directory", "Roster", "Sites", "Requirement sets", "Work orders"],
+    sees: ["Directory", "Roster", "Sites", "Requirement sets", "Work orders", "Service requests"],
     hidden: ["Verification queue", "Technicians", "Users"],
   },
   {
     role: "admin",
     email: "admin@clearbench.test",
-    sees: ["Users", "Catalog", "Outbox", "Platform baseline", "Job runs", "Reported ratings"],
+    sees: ["Users", "Catalog", "Outbox", "Platform baseline", "Job runs", "Reported ratings", "Follow-up"],
     hidden: ["Verification queue", "Directory", "Technicians"],
   },
 ] as const;

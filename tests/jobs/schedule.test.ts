@@ -14,7 +14,15 @@ describe("job schedule", () => {
     const nextLapse = byName.get("lapse")?.getNextRun();
     await schedule.stop();
 
-    expect([...byName.keys()]).toEqual(["lapse", "reviewer-digest", "upload-sweep", "job-retries", "outbox"]);
+    expect([...byName.keys()]).toEqual([
+      "lapse",
+      "reviewer-digest",
+      "upload-sweep",
+      "service-request-follow-up",
+      "job-retries",
+      "outbox",
+    ]);
+    expect(byName.get("service-request-follow-up")?.getPattern()).toBe("*/10 * * * *");
     expect(byName.get("job-retries")?.getPattern()).toBe("* * * * *");
     expect(byName.get("outbox")?.getPattern()).toBe("* * * * *");
     // 06:00 in Chicago is 11:00Z in summer (CDT, UTC-5) and 12:00Z in winter (CST, UTC-6): IANA zone data.

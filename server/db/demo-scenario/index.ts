@@ -1,4 +1,5 @@
 import { User } from "../../accounts/model.ts";
+import { insertDemoServiceRequests } from "./service-requests.ts";
 import { hashPassword } from "../../accounts/passwords.ts";
 import { Company } from "../../companies/model.ts";
 import { refreshAllStandings } from "../../standing/index.ts";
@@ -44,6 +45,7 @@ export async function loadDemoScenarioOnce({
     await db().transaction(async (transaction) => {
       await insertDemoWorld(world, files, passwordHash, transaction);
       await afterDemoLoaded(today, transaction);
+      await insertDemoServiceRequests(today, transaction);
     });
   } catch (err) {
     await discardStagedFiles(files.values());

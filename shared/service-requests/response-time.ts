@@ -1,0 +1,31 @@
+/** How far back a company's answers count towards its typical response time. */
+export const RESPONSE_WINDOW_DAYS = 90;
+
+/**
+ * The median of the minutes from invitation to first answer (estimate or pass), or null with no answers. The median
+ * rather than the mean, so one slow weekend does not define a company.
+ */
+export function medianResponseMinutes(
+  answers: readonly { invitedAt: Date; firstAnswerAt: Date }[],
+): number | null {
+  if (answers.length === 0) return null;
+  const minutes = answers
+    .map((a) => (a.firstAnswerAt.getTime() - a.invitedAt.getTime()) / 60_000)
+    .sort((x, y) => x - y);
+  const middle = Math.floor(minutes.length / 2);
+  const value = minutes.length % 2 === 1 ? minutes[middle]! : (minutes[middle - 1]! + minutes[middle]!) / 2;
+  return Math.round(value);
+}
+
+/** Answers that count at `asOf`: invited within the window and answered. */
+export function answersInWindow<T extends { invitedAt: Date; firstAnswerAt: Date | null }>(
+  rows: readonly T[],
+  asOf: Date,
+): { invitedAt: Date; firstAnswerAt: Date }[] {
+  const since = asOf.getTime() - RESPONSE_WINDOW_DAYS * 86_400_000;
+  return rows.flatMap((r) =>
+    r.firstAnswerAt && r.invitedAt.getTime() >= since && r.invitedAt.getTime() <= asOf.getTime()
+      ? [{ invitedAt: r.invitedAt, firstAnswerAt: r.firstAnswerAt }]
+      : [],
+  );
+}
