@@ -1,5 +1,6 @@
 import type { Transaction } from "sequelize";
-import { DEFAULT_RADIUS_KM } from "../../shared/directory/schemas.ts";
+import { DEFAULT_RADIUS_MILES } from "../../shared/directory/schemas.ts";
+import { milesToKm } from "../../shared/geo/units.ts";
 import { EARTH_MEAN_RADIUS_KM, kmToMiles } from "../../shared/geo/great-circle-distance.ts";
 import type { RoutedCompanyDto } from "../../shared/service-requests/schemas.ts";
 import { select } from "./sql.ts";
@@ -83,7 +84,7 @@ export async function routeRequest(
       criteria.technology,
       criteria.builder ?? null,
       criteria.controlFamily ?? null,
-      criteria.radiusKm ?? DEFAULT_RADIUS_KM,
+      criteria.radiusKm ?? milesToKm(DEFAULT_RADIUS_MILES),
     ],
     transaction,
   );

@@ -1,7 +1,8 @@
 import { QueryTypes } from "sequelize";
 import { db } from "../../../server/db/sequelize.ts";
 import { greatCircleDistanceKm } from "../../../shared/geo/great-circle-distance.ts";
-import { DEFAULT_RADIUS_KM } from "../../../shared/directory/schemas.ts";
+import { DEFAULT_RADIUS_MILES } from "../../../shared/directory/schemas.ts";
+import { milesToKm } from "../../../shared/geo/units.ts";
 import type { RoutingCriteria } from "../../../server/service-requests/index.ts";
 
 interface TechnicianFacts {
@@ -66,7 +67,7 @@ export function clearedNow(
 
 /** The companies routing must invite, by the rule spelled out one technician at a time. */
 export function bruteForceRouting(facts: Facts, criteria: RoutingCriteria): Set<number> {
-  const reach = criteria.radiusKm ?? DEFAULT_RADIUS_KM;
+  const reach = criteria.radiusKm ?? milesToKm(DEFAULT_RADIUS_MILES);
   const invited = new Set<number>();
   for (const t of facts.technicians) {
     if (!clearedNow(facts, t, criteria.requirementSetId, criteria.asOf)) continue;
