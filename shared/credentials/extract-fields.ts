@@ -98,13 +98,31 @@ function toLines(text: string): string[] {
     .filter((line) => line.trim() !== "");
 }
 
-/** Reads "$ 1,000,000", "1.000.000", "1, 000,0O0" as whole dollars. */
-export function parseAmount(fragment: string): number | undefined {
-  const match = /\d[\dOo]{0,2}(?:[,.]?\s?[\dOo]{3})*/.exec(fragment.slice(0, AMOUNT_SEARCH_CHARS));
+// Digits grouped by commas (or periods, as OCR often reads them), or plain; then cents; then a word for millions.
+const AMOUNT =
+  /(\d[\dOo]{0,2}(?:[,.]\s?[\dOo]{3})+|\d[\dOo]*)(?:\.(\d{1,2})(?!\d))?(?:\s?(MM|M|MIL(?:LION)?|K)(?![A-Za-z]))?/i;
+const SUFFIX_SCALE: Record<string, number> = { MM: 1_000_000, M: 1_000_000, MIL: 1_000_000, K: 1_000 };
+
+/**
+ * Reads "$ 1,000,000", "1,000,000.00", "1.000.000", "1, 000,0O0", "$1M", "1MM", "$2.5 million" and "$500K" as whole
+ * dollars. `scale` is 1000 on a table printed "(000s omitted)"; an amount that says its own unit is not scaled.
+ */
+export function parseAmount(fragment: string, { scale = 1 }: { scale?: number } = {}): number | undefined {
+  const match = AMOUNT.exec(fragment.slice(0, AMOUNT_SEARCH_CHARS));
   if (!match) return undefined;
-  const digits = match[0].replace(/[Oo]/g, "0").replace(/\D/g, "");
-  return digits === "" ? undefined : Number(digits);
+  const digits = (match[1] ?? "").replace(/[Oo]/g, "0").replace(/\D/g, "");
+  if (digits === "") return undefined;
+  const suffix = match[3]?.toUpperCase().replace(/LION$/, "");
+  if (suffix) {
+    const amount = Number(`${digits}.${match[2] ?? "0"}`) * (SUFFIX_SCALE[suffix] ?? 1);
+    return Math.round(amount);
+  }
+  return Number(digits) * scale;
 }
+
+/** A certificate whose limits are printed in thousands says so once, usually over the limits column. */
+export const THOUSANDS_OMITTED =
+  /\(?\s*(?:\$\s*)?0{3}\s*'?\s*s?\s+omitted\s*\)?|\bin\s+thousands\b|\(\s*\$\s*0{3}\s*'?s?\s*\)|\bthousands\s+omitted\b/i;
 
 /** The part of a line before the next wide gap or right-hand box, for a left-hand box's value. */
 function leftCell(line: string): string {
@@ -162,7 +180,7 @@ function coverageSections(lines: string[]): Partial<Record<InsuranceCoverageCode
   return sections;
 }
 
-function readLimits(code: InsuranceCoverageCode, section: string[]): Limits {
+function readLimits(code: InsuranceCoverageCode, section: string[], scale: number): Limits {
   const limits: Limits = {};
   for (const line of section) {
     const hits = LIMIT_LABELS[code]
@@ -171,7 +189,7 @@ function readLimits(code: InsuranceCoverageCode, section: string[]): Limits {
       .sort((a, b) => a.match.index - b.match.index);
     hits.forEach((hit, i) => {
       const from = hit.match.index + hit.match[0].length;
-      const amount = parseAmount(line.slice(from, hits[i + 1]?.match.index ?? line.length));
+      const amount = parseAmount(line.slice(from, hits[i + 1]?.match.index ?? line.length), { scale });
       if (amount !== undefined && limits[hit.name] === undefined) limits[hit.name] = amount;
     });
   }
@@ -187,8 +205,8 @@ const flagOf = (token: string): string | undefined => {
 const looksLikePolicyNumber = (token: string): boolean =>
   /\d/.test(token) && /^[A-Z0-9][A-Z0-9\-/.]{3,}$/i.test(token);
 
-function readRow(section: string[], code: InsuranceCoverageCode): CoverageReading {
-  const reading: CoverageReading = { limits: readLimits(code, section) };
+function readRow(section: string[], code: InsuranceCoverageCode, scale: number): CoverageReading {
+  const reading: CoverageReading = { limits: readLimits(code, section, scale) };
   const markerLine = section[0] ?? "";
   const beforeMarker = markerLine
     .slice(0, COVERAGE_MARKERS[code].exec(markerLine)?.index ?? 0)
@@ -247,10 +265,11 @@ function readRowLine(rowLine: string, reading: CoverageReading): void {
 export function readCertificate(text: string): CertificateReading {
   const lines = toLines(text);
   const sections = coverageSections(lines);
+  const scale = THOUSANDS_OMITTED.test(text) ? 1000 : 1;
   const coverages: CertificateReading["coverages"] = {};
   for (const code of insuranceCoverageCodes) {
     const section = sections[code];
-    if (section) coverages[code] = readRow(section, code);
+    if (section) coverages[code] = readRow(section, code, scale);
   }
   const reading: CertificateReading = { insurers: readInsurers(lines), coverages };
   const producer = valueUnderLabel(lines, /^\s*PRODUCER\b:?/i);

@@ -10,6 +10,7 @@ export const reviewerWarningCodes = [
   "aggregate_below_each_occurrence",
   "disease_policy_limit_below_each_employee",
   "naic_not_five_digits",
+  "limit_implausibly_small",
   "holder_name_differs",
   "submitted_for_another_holder",
 ] as const;
@@ -38,7 +39,22 @@ export interface ReviewerCheckInput {
   duplicateOfOtherHolder?: boolean;
 }
 
-// NAIC company code: five digits (TRADE-FACTS 2.4).
+// Below this, a per-occurrence or per-accident liability limit is almost surely misread (a thousands-omitted
+// table read as dollars, "$1M" read as 1) or mistyped: commercial liability limits start in the hundreds of
+// thousands (common practice).
+export const IMPLAUSIBLE_LIMIT_BELOW = 10_000;
+const HEADLINE_LIMITS = [
+  ["eachOccurrence", "each occurrence"],
+  ["combinedSingleLimit", "combined single limit"],
+  ["umbrellaEachOccurrence", "umbrella each occurrence"],
+  ["generalAggregate", "general aggregate"],
+  ["umbrellaAggregate", "umbrella aggregate"],
+  ["employersLiabilityEachAccident", "employer's liability each accident"],
+] as const;
+
+const dollars = (amount: number) => `$${amount.toLocaleString("en-US")}`;
+
+// NAIC company code: five digits.
 const NAIC_PATTERN = /^\d{5}$/;
 // Legal-form words that one document spells out and another abbreviates or drops.
 const LEGAL_SUFFIXES = new Set([
@@ -101,7 +117,7 @@ function insuranceWarnings(input: ReviewerCheckInput): ReviewerWarning[] {
     });
   }
   const limits = fields.limits ?? {};
-  // General aggregate >= each occurrence (TRADE-FACTS 2.5, common practice).
+  // General aggregate >= each occurrence (common practice).
   if (
     limits.generalAggregate !== undefined &&
     limits.eachOccurrence !== undefined &&
@@ -112,7 +128,7 @@ function insuranceWarnings(input: ReviewerCheckInput): ReviewerWarning[] {
       message: "The general aggregate is below the each-occurrence limit.",
     });
   }
-  // EL disease policy limit >= disease each employee (TRADE-FACTS 2.5, common practice).
+  // EL disease policy limit >= disease each employee (common practice).
   const diseasePolicy = limits.employersLiabilityDiseasePolicyLimit;
   const diseaseEmployee = limits.employersLiabilityDiseaseEachEmployee;
   if (diseasePolicy !== undefined && diseaseEmployee !== undefined && diseasePolicy < diseaseEmployee) {
@@ -120,6 +136,15 @@ function insuranceWarnings(input: ReviewerCheckInput): ReviewerWarning[] {
       code: "disease_policy_limit_below_each_employee",
       message: "The employer's liability disease policy limit is below the disease each-employee limit.",
     });
+  }
+  for (const [name, words] of HEADLINE_LIMITS) {
+    const amount = limits[name];
+    if (amount !== undefined && amount < IMPLAUSIBLE_LIMIT_BELOW) {
+      warnings.push({
+        code: "limit_implausibly_small",
+        message: `The ${words} limit reads ${dollars(amount)}, far below any usual limit; check whether the certificate prints "$1M" or omits thousands.`,
+      });
+    }
   }
   if (fields.naic !== undefined && fields.naic.trim() !== "" && !NAIC_PATTERN.test(fields.naic.trim())) {
     warnings.push({
