@@ -107,7 +107,7 @@ const SUFFIX_SCALE: Record<string, number> = { MM: 1_000_000, M: 1_000_000, MIL:
  * Reads "$ 1,000,000", "1,000,000.00", "1.000.000", "1, 000,0O0", "$1M", "1MM", "$2.5 million" and "$500K" as whole
  * dollars. `scale` is 1000 on a table printed "(000s omitted)"; an amount that says its own unit is not scaled.
  */
-export function parseAmount(fragment: string, { scale = 1 }: { scale?: number } = {}): number | undefined {
+export function parseScaledAmount(fragment: string, scale: number): number | undefined {
   const match = AMOUNT.exec(fragment.slice(0, AMOUNT_SEARCH_CHARS));
   if (!match) return undefined;
   const digits = (match[1] ?? "").replace(/[Oo]/g, "0").replace(/\D/g, "");
@@ -119,6 +119,9 @@ export function parseAmount(fragment: string, { scale = 1 }: { scale?: number } 
   }
   return Number(digits) * scale;
 }
+
+/** Whole dollars from an amount printed in dollars. */
+export const parseAmount = (fragment: string): number | undefined => parseScaledAmount(fragment, 1);
 
 /** A certificate whose limits are printed in thousands says so once, usually over the limits column. */
 export const THOUSANDS_OMITTED =
@@ -189,7 +192,7 @@ function readLimits(code: InsuranceCoverageCode, section: string[], scale: numbe
       .sort((a, b) => a.match.index - b.match.index);
     hits.forEach((hit, i) => {
       const from = hit.match.index + hit.match[0].length;
-      const amount = parseAmount(line.slice(from, hits[i + 1]?.match.index ?? line.length), { scale });
+      const amount = parseScaledAmount(line.slice(from, hits[i + 1]?.match.index ?? line.length), scale);
       if (amount !== undefined && limits[hit.name] === undefined) limits[hit.name] = amount;
     });
   }
