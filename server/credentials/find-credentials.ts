@@ -37,6 +37,7 @@ export async function findCredential(user: Express.User, id: number) {
       returnReason: null,
       audit: [],
       warnings: [],
+      sameDocument: [],
     };
   }
   const events = await auditTrail("credential", id);
@@ -65,6 +66,7 @@ export async function findCredential(user: Express.User, id: number) {
   }
   return {
     ...dto,
+    sameDocument: await credentialsOnDocument(row.documentId, row.companyId),
     audit: events.map((e) => ({
       id: e.id,
       action: e.action,
@@ -75,6 +77,29 @@ export async function findCredential(user: Express.User, id: number) {
     })),
     warnings,
   };
+}
+
+/**
+ * Every credential sent from the same uploaded file (the coverages of one certificate), so the reviewer reads the
+ * document once and decides each coverage on its own. Rows of the same company only.
+ */
+async function credentialsOnDocument(documentId: number, companyId: number) {
+  const rows = await Credential.findAll({
+    where: { documentId, companyId },
+    attributes: ["id", "typeCode", "state"],
+    order: [["id", "ASC"]],
+  });
+  const types = await CredentialType.findAll({
+    where: { code: [...new Set(rows.map((r) => r.typeCode))] },
+    attributes: ["code", "name"],
+  });
+  const name = new Map(types.map((t) => [t.code, t.name]));
+  return rows.map((r) => ({
+    id: r.id,
+    typeCode: r.typeCode,
+    typeName: name.get(r.typeCode) ?? r.typeCode,
+    state: r.state,
+  }));
 }
 
 const SORT_SQL: Record<QueueQuery["sort"], string> = {

@@ -7,7 +7,8 @@ import path from "node:path";
 import { pipeline } from "node:stream/promises";
 import { fileTypeFromBuffer, fileTypeFromFile, type FileTypeResult } from "file-type";
 import type { UploadDocument } from "../../shared/credentials/schemas.ts";
-import { reviewerWarnings } from "../../shared/credentials/reviewer-checks.ts";
+import { reviewerWarnings, type ReviewerWarning } from "../../shared/credentials/reviewer-checks.ts";
+import type { CertificateProposal } from "../../shared/credentials/extract-fields.ts";
 import { AppError } from "../http/app-error.ts";
 import { db } from "../db/sequelize.ts";
 import { recordAudit } from "../audit/index.ts";
@@ -19,7 +20,7 @@ import { isOcrAvailable } from "./extraction/ocr.ts";
 import { DocumentUnreadableError } from "./extraction/document-unreadable-error.ts";
 import { activeType } from "./catalogue.ts";
 import { resolveHolder } from "./resolve-holder.ts";
-import { Credential, Document } from "./model.ts";
+import { Credential, CredentialType, Document } from "./model.ts";
 
 const EXTENSIONS: Record<ExtractableMime, string[]> = {
   "application/pdf": [".pdf"],
@@ -172,6 +173,14 @@ export async function uploadDocument(
       duplicateForOtherHolder(sha256, document.id, user.companyId, technicianId ?? null),
     ]);
     const fields = extraction.proposal?.fields ?? {};
+    const warningsFor = (proposed: object) =>
+      reviewerWarnings({
+        fieldSet: type.fieldSet,
+        fields: proposed as never,
+        companyLegalName: company?.name ?? "",
+        technicianName: technician?.name,
+        duplicateOfOtherHolder: otherHolder,
+      });
     return {
       document: { id: document.id, name: document.originalName, mime, sizeBytes: file.size, sha256 },
       extraction: {
@@ -180,17 +189,40 @@ export async function uploadDocument(
         fields,
         found: extraction.proposal?.found ?? [],
       },
-      warnings: reviewerWarnings({
-        fieldSet: type.fieldSet,
-        fields: fields as never,
-        companyLegalName: company?.name ?? "",
-        technicianName: technician?.name,
-        duplicateOfOtherHolder: otherHolder,
-      }),
+      warnings: warningsFor(fields),
+      certificate: extraction.certificate
+        ? await certificateCoverages(extraction.certificate, warningsFor)
+        : null,
     };
   } finally {
     if (pending) await rm(pending, { force: true });
   }
+}
+
+/**
+ * Every coverage read from a certificate that the catalogue offers (an admin may retire a type), each with its own
+ * proposed fields and warnings, so the uploader confirms all of them on one form.
+ */
+async function certificateCoverages(
+  certificate: CertificateProposal,
+  warningsFor: (fields: object) => ReviewerWarning[],
+) {
+  const types = await CredentialType.findAll({
+    where: { code: certificate.coverages.map((c) => c.typeCode), active: true, fieldSet: "insurance" },
+  });
+  const name = new Map(types.map((t) => [t.code, t.name]));
+  return {
+    parties: certificate.parties,
+    coverages: certificate.coverages
+      .filter((coverage) => name.has(coverage.typeCode))
+      .map(({ typeCode, proposal }) => ({
+        typeCode,
+        typeName: name.get(typeCode) ?? typeCode,
+        fields: proposal.fields,
+        found: proposal.found,
+        warnings: warningsFor(proposal.fields),
+      })),
+  };
 }
 
 /** The same bytes already sit on a credential of a different holder (a copied card or certificate). */

@@ -285,7 +285,10 @@ export function readCertificate(text: string): CertificateReading {
 }
 
 function proposeInsurance(typeCode: string, text: string): FieldProposal<"insurance"> {
-  const reading = readCertificate(text);
+  return proposeCoverage(typeCode, readCertificate(text));
+}
+
+function proposeCoverage(typeCode: string, reading: CertificateReading): FieldProposal<"insurance"> {
   const fields: Partial<InsuranceFields> = {};
   const found: string[] = [];
   const put = <K extends keyof InsuranceFields>(key: K, value: InsuranceFields[K] | undefined): void => {
@@ -311,6 +314,28 @@ function proposeInsurance(typeCode: string, text: string): FieldProposal<"insura
   fields.limits = row.limits;
   found.push(...Object.keys(row.limits).map((name) => `limits.${name}`));
   return { fields, found };
+}
+
+export interface CertificateProposal {
+  /** Printed once for the whole document. */
+  parties: { producer?: string; namedInsured?: string; certificateHolder?: string };
+  /** One proposal per coverage line found, in the order of insuranceCoverageCodes. */
+  coverages: { typeCode: InsuranceCoverageCode; proposal: FieldProposal<"insurance"> }[];
+}
+
+/** Every coverage a certificate of insurance lists, each proposed as its own credential. */
+export function proposeCoverages(text: string): CertificateProposal {
+  const reading = readCertificate(text);
+  const parties: CertificateProposal["parties"] = {};
+  if (reading.producer) parties.producer = reading.producer;
+  if (reading.namedInsured) parties.namedInsured = reading.namedInsured;
+  if (reading.certificateHolder) parties.certificateHolder = reading.certificateHolder;
+  return {
+    parties,
+    coverages: insuranceCoverageCodes
+      .filter((code) => reading.coverages[code] !== undefined)
+      .map((typeCode) => ({ typeCode, proposal: proposeCoverage(typeCode, reading) })),
+  };
 }
 
 const CARD_LABELS = {

@@ -1,5 +1,10 @@
 import type { FieldSet } from "../../../shared/credentials/credential-fields.ts";
-import { proposeFields, type FieldProposal } from "../../../shared/credentials/extract-fields.ts";
+import {
+  proposeCoverages,
+  proposeFields,
+  type CertificateProposal,
+  type FieldProposal,
+} from "../../../shared/credentials/extract-fields.ts";
 import { isOcrAvailable, ocrImage, ocrPdf, type OcrOptions } from "./ocr.ts";
 import { extractPdfText } from "./pdf-text.ts";
 
@@ -20,6 +25,8 @@ export interface ExtractedDocument {
   method: "pdf_text" | "ocr" | "none";
   ocrAvailable: boolean;
   proposal: FieldProposal | null;
+  /** For a certificate of insurance: every coverage found on it, and the parties printed once. */
+  certificate?: CertificateProposal | undefined;
 }
 
 // A scan can carry a few stray characters in its text layer (a stamp, a page number); below this it counts as no text.
@@ -52,5 +59,7 @@ export async function extractDocument(input: ExtractDocumentInput): Promise<Extr
   const { text, method } = await readText(input, ocrAvailable);
   const type = input.credentialType;
   const proposal = type && method !== "none" ? proposeFields(type.code, type.fieldSet, text) : null;
-  return { text, method, ocrAvailable, proposal };
+  const certificate =
+    type?.fieldSet === "insurance" && method !== "none" ? proposeCoverages(text) : undefined;
+  return { text, method, ocrAvailable, proposal, certificate };
 }
