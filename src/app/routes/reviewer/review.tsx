@@ -11,6 +11,7 @@ import { getReviewQueue } from "@/features/credentials/api/get-review-queue.ts";
 import { AuditTrail } from "@/features/credentials/components/audit-trail.tsx";
 import { DocumentViewer } from "@/features/credentials/components/document-viewer.tsx";
 import { ReviewPanel } from "@/features/credentials/components/review-panel.tsx";
+import { SameDocumentList } from "@/features/credentials/components/same-document-list.tsx";
 import { formatDateTime } from "@/lib/format-date-time.ts";
 import { queryClient } from "@/lib/query-client.ts";
 
@@ -75,6 +76,7 @@ export function Component() {
         </div>
         <div className="space-y-5">
           {credential.category === "insurance" && <CautionNote />}
+          <SameDocumentList current={credential.id} rows={credential.sameDocument} />
           <ReviewPanel
             key={credential.id}
             credential={credential}

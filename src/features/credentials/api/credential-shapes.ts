@@ -56,9 +56,18 @@ export const auditEventSchema = z.object({
 });
 export type AuditEvent = z.infer<typeof auditEventSchema>;
 
+export const sameDocumentRowSchema = z.object({
+  id: z.number(),
+  typeCode: z.string(),
+  typeName: z.string(),
+  state: z.enum(credentialStates),
+});
+
 export const credentialDetailSchema = credentialSchema.extend({
   audit: z.array(auditEventSchema).default([]),
   warnings: z.array(reviewerWarningSchema).default([]),
+  /** Every credential sent from the same file (the coverages of one certificate), this one included. */
+  sameDocument: z.array(sameDocumentRowSchema).default([]),
 });
 export type CredentialDetail = z.infer<typeof credentialDetailSchema>;
 
@@ -82,6 +91,15 @@ export const queuePageSchema = z.object({
 });
 export type QueuePage = z.infer<typeof queuePageSchema>;
 
+export const proposedCoverageSchema = z.object({
+  typeCode: z.string(),
+  typeName: z.string(),
+  fields: z.record(z.string(), z.unknown()).default({}),
+  found: z.array(z.string()).default([]),
+  warnings: z.array(reviewerWarningSchema).default([]),
+});
+export type ProposedCoverage = z.infer<typeof proposedCoverageSchema>;
+
 export const uploadedDocumentSchema = z.object({
   document: z.object({
     id: z.number(),
@@ -97,5 +115,12 @@ export const uploadedDocumentSchema = z.object({
     found: z.array(z.string()).default([]),
   }),
   warnings: z.array(reviewerWarningSchema).default([]),
+  certificate: z
+    .object({
+      parties: z.record(z.string(), z.string()).default({}),
+      coverages: z.array(proposedCoverageSchema),
+    })
+    .nullable()
+    .default(null),
 });
 export type UploadedDocument = z.infer<typeof uploadedDocumentSchema>;
