@@ -162,7 +162,10 @@ function readInsurers(lines: string[]): CertificateReading["insurers"] {
     if (!match || insurers.some((insurer) => insurer.letter === match[1]?.toUpperCase())) continue;
     const rest = (match[2] ?? "").trim();
     const naicMatch = /\s([\dOo]{4,6})$/.exec(rest);
-    const name = (naicMatch ? rest.slice(0, naicMatch.index) : rest).replace(/\s+/g, " ").trim();
+    const name = (naicMatch ? rest.slice(0, naicMatch.index) : rest)
+      .replace(/\s*\(?\s*NAIC\s*(?:#|NO\.?|CODE)?\s*:?\s*\)?\s*$/i, "")
+      .replace(/\s+/g, " ")
+      .trim();
     if (name === "") continue;
     const naic = naicMatch?.[1]?.replace(/[Oo]/g, "0");
     insurers.push({ letter: (match[1] ?? "").toUpperCase(), name, ...(naic ? { naic } : {}) });
@@ -472,7 +475,7 @@ const anyCardLabel = (text: string): boolean =>
  * The value after a label: on the same line ("Label: value", or a wide gap without a colon), up to the next known
  * label or wide gap; or, when the label stands alone at the end of its line, the line below it.
  */
-function labelledValue(lines: string[], key: CardLabel): string | undefined {
+function* labelledValues(lines: string[], key: CardLabel): Generator<string> {
   const others = Object.entries(CARD_LABELS)
     .filter(([other]) => other !== key)
     .map(([, re]) => re);
@@ -483,7 +486,7 @@ function labelledValue(lines: string[], key: CardLabel): string | undefined {
     const standsAlone = after.trim() === "" || /^\s*[:#.]\s*$/.test(after);
     if (standsAlone) {
       const below = (lines[index + 1] ?? "").split(/\s{3,}/)[0]?.trim() ?? "";
-      if (below !== "" && !anyCardLabel(below)) return below.replace(/\s+/g, " ");
+      if (below !== "" && !anyCardLabel(below)) yield below.replace(/\s+/g, " ");
       continue;
     }
     if (!/^\s*[:#.]/.test(after) && !/^\s{2,}/.test(after)) continue;
@@ -496,8 +499,12 @@ function labelledValue(lines: string[], key: CardLabel): string | undefined {
       .replace(/[\s,;|]+$/, "")
       .replace(/\s+/g, " ")
       .trim();
-    if (value !== "") return value;
+    if (value !== "") yield value;
   }
+}
+
+function labelledValue(lines: string[], key: CardLabel): string | undefined {
+  for (const value of labelledValues(lines, key)) return value;
   return undefined;
 }
 
@@ -545,14 +552,27 @@ function proposeCard(fieldSet: Exclude<FieldSet, "insurance">, text: string): Fi
     fields[key] = value;
     found.push(key);
   };
+  // The first labelled value that holds a date: "has completed" in a sentence is a label with no date after it.
   const date = (key: CardLabel): string | undefined => {
-    const raw = labelledValue(lines, key);
-    const match = raw === undefined ? null : new RegExp(DATE_IN_TEXT.source, "i").exec(raw);
-    if (match) return parseDocumentDate(match[0]) ?? undefined;
-    // Only an end date may be a month alone: valid through the end of that month.
-    if (key !== "expiryDate" || raw === undefined) return undefined;
-    const month = new RegExp(MONTH_IN_TEXT.source, "i").exec(raw);
-    return month ? (parseDocumentEndDate(month[0]) ?? undefined) : undefined;
+    for (const raw of labelledValues(lines, key)) {
+      const match = new RegExp(DATE_IN_TEXT.source, "i").exec(raw);
+      const full = match ? parseDocumentDate(match[0]) : null;
+      if (full) return full;
+      // Only an end date may be a month alone: valid through the end of that month.
+      if (key !== "expiryDate") continue;
+      const month = new RegExp(MONTH_IN_TEXT.source, "i").exec(raw);
+      const end = month ? parseDocumentEndDate(month[0]) : null;
+      if (end) return end;
+    }
+    // "Completed on 15 Jan 2026": a date right after its label, with no colon or gap between them.
+    for (const line of lines) {
+      const label = CARD_LABELS[key].exec(line);
+      const cell = label ? line.slice(label.index + label[0].length).split(/\s{3,}/)[0] : undefined;
+      const match = cell ? new RegExp(`^\\s*(?:${DATE_IN_TEXT.source})`, "i").exec(cell) : null;
+      const full = match ? findDocumentDates(match[0])[0] : undefined;
+      if (full) return full;
+    }
+    return undefined;
   };
   const sentence = readSentenceCard(lines);
   put("holderName", labelledValue(lines, "holderName") ?? sentence.holderName);
