@@ -10,6 +10,7 @@ import { Technician } from "../technicians/model.ts";
 import { Credential, CredentialType, Document } from "./model.ts";
 import { toCredentialDto, toCredentialDtos } from "./dto.ts";
 import { duplicateForOtherHolder } from "./upload-document.ts";
+import type { Evidence } from "../../shared/credentials/locate-values.ts";
 import { fieldsForBuyers } from "../../shared/credentials/fields-for-buyers.ts";
 
 export async function listOwnCredentials(
@@ -38,6 +39,7 @@ export async function findCredential(user: Express.User, id: number) {
       audit: [],
       warnings: [],
       sameDocument: [],
+      evidence: {},
     };
   }
   const events = await auditTrail("credential", id);
@@ -47,13 +49,15 @@ export async function findCredential(user: Express.User, id: number) {
   });
   const actorName = new Map(actors.map((a) => [a.id, a.name]));
   let warnings: { code: string; message: string }[] = [];
+  let evidence: Evidence = {};
   if (user.role === "reviewer" || user.role === "admin") {
     const [type, company, technician, document] = await Promise.all([
       CredentialType.findByPk(row.typeCode),
       Company.findByPk(row.companyId),
       row.technicianId ? Technician.findByPk(row.technicianId) : null,
-      Document.findByPk(row.documentId, { attributes: ["id", "sha256"] }),
+      Document.findByPk(row.documentId, { attributes: ["id", "sha256", "extractionEvidence"] }),
     ]);
+    evidence = document?.extractionEvidence?.[row.typeCode] ?? {};
     warnings = reviewerWarnings({
       fieldSet: type!.fieldSet,
       fields: row.fields as never,
@@ -67,6 +71,7 @@ export async function findCredential(user: Express.User, id: number) {
   return {
     ...dto,
     sameDocument: await credentialsOnDocument(row.documentId, row.companyId),
+    evidence,
     audit: events.map((e) => ({
       id: e.id,
       action: e.action,

@@ -9,6 +9,7 @@ import { fileTypeFromBuffer, fileTypeFromFile, type FileTypeResult } from "file-
 import type { UploadDocument } from "../../shared/credentials/schemas.ts";
 import { reviewerWarnings, type ReviewerWarning } from "../../shared/credentials/reviewer-checks.ts";
 import type { CertificateProposal } from "../../shared/credentials/extract-fields.ts";
+import type { Evidence } from "../../shared/credentials/locate-values.ts";
 import { AppError } from "../http/app-error.ts";
 import { db } from "../db/sequelize.ts";
 import { recordAudit } from "../audit/index.ts";
@@ -145,6 +146,7 @@ export async function uploadDocument(
           originalName: safeFileName(file.originalname),
           extractedText: extraction.text.slice(0, 100_000),
           extractionMethod: extraction.method,
+          extractionEvidence: extraction.evidence ?? null,
         },
         { transaction },
       );
@@ -188,10 +190,11 @@ export async function uploadDocument(
         ocrAvailable: extraction.ocrAvailable,
         fields,
         found: extraction.proposal?.found ?? [],
+        evidence: extraction.evidence?.[type.code] ?? {},
       },
       warnings: warningsFor(fields),
       certificate: extraction.certificate
-        ? await certificateCoverages(extraction.certificate, warningsFor)
+        ? await certificateCoverages(extraction.certificate, warningsFor, extraction.evidence ?? {})
         : null,
     };
   } finally {
@@ -206,6 +209,7 @@ export async function uploadDocument(
 async function certificateCoverages(
   certificate: CertificateProposal,
   warningsFor: (fields: object) => ReviewerWarning[],
+  evidence: Record<string, Evidence>,
 ) {
   const types = await CredentialType.findAll({
     where: { code: certificate.coverages.map((c) => c.typeCode), active: true, fieldSet: "insurance" },
@@ -220,6 +224,7 @@ async function certificateCoverages(
         typeName: name.get(typeCode) ?? typeCode,
         fields: proposal.fields,
         found: proposal.found,
+        evidence: evidence[typeCode] ?? {},
         warnings: warningsFor(proposal.fields),
       })),
   };

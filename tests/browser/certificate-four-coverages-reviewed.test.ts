@@ -63,6 +63,9 @@ describe("one certificate with four coverages, from upload to decisions", () => 
     const siblings = review.getByRole("navigation", { name: "Coverages on this document" });
     await siblings.waitFor();
     await expect(siblings.getByRole("listitem").count()).resolves.toBe(4);
+    // Focusing a field shows where on the page its value was read.
+    await review.getByLabel("Policy number", { exact: true }).focus();
+    await review.getByTestId("read-here").waitFor();
     await screenshot(review, "four-coverages-2-review");
     for (const name of coverageNames.slice(0, 3)) {
       await review.goto(`${server.url}/review/${idOf(name)}`);

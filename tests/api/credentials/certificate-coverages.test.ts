@@ -16,7 +16,13 @@ beforeAll(() => {
 });
 afterAll(() => t.close());
 
-type Proposed = { typeCode: string; fields: Record<string, unknown>; found: string[] };
+type Box = { page: number; x: number; y: number; w: number; h: number };
+type Proposed = {
+  typeCode: string;
+  fields: Record<string, unknown>;
+  found: string[];
+  evidence: Record<string, { confidence: number; box?: Box }>;
+};
 
 async function uploadCertificate(
   agent: Awaited<ReturnType<typeof buildProvider>>["admin"],
@@ -182,5 +188,26 @@ describe("one certificate of insurance, every coverage", () => {
     expect(detail.body.sameDocument.map((c: { id: number }) => c.id).sort()).toEqual([...ids].sort());
     const rows = await Credential.findAll({ where: { companyId: company.id }, order: [["id", "ASC"]] });
     expect(rows.map((r) => r.state)).toEqual(["verified", "verified", "verified", "returned"]);
+  });
+
+  it("says where each value was read: a box on the page per field, each coverage's own policy number", async () => {
+    const { admin } = await buildProvider(t.app);
+    const { agent: reviewer } = await signedInAgent(t.app, "platform", "reviewer");
+    const { bytes, values } = await buildCertificatePdf({ seed: 308 });
+    const up = await uploadCertificate(admin, bytes);
+
+    const boxes = up.certificate.coverages.map((c) => c.evidence.policyNumber?.box);
+    const sent = await admin.post("/api/credentials/coverages").send({
+      documentId: up.document.id,
+      credentials: [{ typeCode: "auto_liability", fields: certificateFields(values, "auto_liability") }],
+    });
+    const detail = await reviewer.get(`/api/credentials/${sent.body.credentials[0].id}`);
+
+    expect(boxes.every((box) => box !== undefined && box.page === 1 && box.x > 0 && box.x < 1)).toBe(true);
+    // The rows are printed top to bottom in the order read, so each coverage's box sits below the one before.
+    const tops = boxes.map((box) => box!.y);
+    expect([...tops].sort((a, b) => a - b)).toEqual(tops);
+    expect(up.certificate.coverages[0]!.evidence.policyNumber!.confidence).toBeGreaterThanOrEqual(0.6);
+    expect(detail.body.evidence.policyNumber.box).toEqual(boxes[1]);
   });
 });

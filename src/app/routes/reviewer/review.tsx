@@ -1,3 +1,4 @@
+import { useState } from "react";
 import { useSuspenseQuery } from "@tanstack/react-query";
 import { data, useLocation, useNavigate, useParams, type LoaderFunctionArgs } from "react-router-dom";
 import { idParam } from "@shared/credentials/schemas.ts";
@@ -38,6 +39,7 @@ export function Component() {
   const { data: types } = useSuspenseQuery(credentialTypesQuery());
   const navigate = useNavigate();
   const arrival = useLocation().state as { decided?: string } | null;
+  const [focused, setFocused] = useState<string | null>(null);
   const fieldSet = types.find((t) => t.code === credential.typeCode)?.fieldSet ?? "insurance";
 
   // After a decision, the next document is the oldest still waiting (the queue's default order).
@@ -72,6 +74,7 @@ export function Component() {
             documentId={credential.documentId}
             name={credential.documentName}
             mime={credential.documentMime}
+            highlight={focused ? credential.evidence[focused]?.box : undefined}
           />
         </div>
         <div className="space-y-5">
@@ -82,6 +85,7 @@ export function Component() {
             credential={credential}
             fieldSet={fieldSet}
             onDecided={(c) => void goToNext(c)}
+            onFocusField={setFocused}
           />
         </div>
       </div>

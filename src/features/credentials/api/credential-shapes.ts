@@ -24,6 +24,13 @@ export type CredentialType = z.infer<typeof credentialTypeSchema>;
 export const reviewerWarningSchema = z.object({ code: z.string(), message: z.string() });
 export type ReviewerWarningView = z.infer<typeof reviewerWarningSchema>;
 
+export const fieldEvidenceSchema = z.object({
+  confidence: z.number(),
+  box: z.object({ page: z.number(), x: z.number(), y: z.number(), w: z.number(), h: z.number() }).optional(),
+});
+export const evidenceSchema = z.record(z.string(), fieldEvidenceSchema).default({});
+export type FieldEvidenceView = z.infer<typeof fieldEvidenceSchema>;
+
 export const credentialSchema = z.object({
   id: z.number(),
   typeCode: z.string(),
@@ -68,6 +75,8 @@ export const credentialDetailSchema = credentialSchema.extend({
   warnings: z.array(reviewerWarningSchema).default([]),
   /** Every credential sent from the same file (the coverages of one certificate), this one included. */
   sameDocument: z.array(sameDocumentRowSchema).default([]),
+  /** Where each field was read on the page and how sure the reader was. */
+  evidence: evidenceSchema,
 });
 export type CredentialDetail = z.infer<typeof credentialDetailSchema>;
 
@@ -96,6 +105,7 @@ export const proposedCoverageSchema = z.object({
   typeName: z.string(),
   fields: z.record(z.string(), z.unknown()).default({}),
   found: z.array(z.string()).default([]),
+  evidence: evidenceSchema,
   warnings: z.array(reviewerWarningSchema).default([]),
 });
 export type ProposedCoverage = z.infer<typeof proposedCoverageSchema>;
@@ -113,6 +123,7 @@ export const uploadedDocumentSchema = z.object({
     ocrAvailable: z.boolean(),
     fields: z.record(z.string(), z.unknown()).default({}),
     found: z.array(z.string()).default([]),
+    evidence: evidenceSchema,
   }),
   warnings: z.array(reviewerWarningSchema).default([]),
   certificate: z

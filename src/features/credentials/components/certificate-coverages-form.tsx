@@ -1,4 +1,5 @@
 import { useMemo, useState, type FormEvent } from "react";
+import { LOW_CONFIDENCE } from "@shared/credentials/locate-values.ts";
 import { isApiError } from "@/lib/api-client.ts";
 import { fieldErrorsOf } from "@/lib/field-errors.ts";
 import { Button } from "@/components/ui/button.tsx";
@@ -180,6 +181,13 @@ export function CertificateCoveragesForm({
                   onChange={(path, value) => update(index, { values: { ...state.values, [path]: value } })}
                   errors={state.problems}
                   found={new Set(coverage.found)}
+                  lowConfidence={
+                    new Set(
+                      Object.entries(coverage.evidence)
+                        .filter(([, e]) => e.confidence < LOW_CONFIDENCE)
+                        .map(([path]) => path),
+                    )
+                  }
                   disabled={submit.isPending}
                 />
               </>
