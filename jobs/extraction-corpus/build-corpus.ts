@@ -1,10 +1,10 @@
 import { createHash } from "node:crypto";
 import { PDFDocument, StandardFonts, type PDFFont, type PDFPage } from "pdf-lib";
-import { buildSeededRandom, type SeededRandom } from "../../server/db/demo-scenario/documents/build-seeded-random.ts";
 import {
-  documentDateFormats,
-  formatDocumentDate,
-} from "../../shared/credentials/date-formats.ts";
+  buildSeededRandom,
+  type SeededRandom,
+} from "../../server/db/demo-scenario/documents/build-seeded-random.ts";
+import { documentDateFormats, formatDocumentDate } from "../../shared/credentials/date-formats.ts";
 
 /**
  * A corpus of certificates and cards in layouts the reader's unit fixtures do not use: several layout modes, each
@@ -53,9 +53,21 @@ const CERT_MODES = ["stacked", "label_below", "two_column"] as const;
 const CARD_MODES = ["colon", "label_below", "sentence", "two_column"] as const;
 
 const WORDINGS = [
-  { policy: "Policy No.", eff: "Effective", exp: "Expires", ai: "Additional insured", wos: "Waiver of subrogation" },
+  {
+    policy: "Policy No.",
+    eff: "Effective",
+    exp: "Expires",
+    ai: "Additional insured",
+    wos: "Waiver of subrogation",
+  },
   { policy: "Policy number", eff: "Eff. date", exp: "Exp. date", ai: "Addl insd", wos: "Subr wvd" },
-  { policy: "Pol #", eff: "Policy effective", exp: "Policy expiration", ai: "Additional Insured", wos: "Waiver of Subrogation" },
+  {
+    policy: "Pol #",
+    eff: "Policy effective",
+    exp: "Policy expiration",
+    ai: "Additional Insured",
+    wos: "Waiver of Subrogation",
+  },
   { policy: "Policy #", eff: "Effective date", exp: "Expiration date", ai: "ADDL INSD", wos: "SUBR WVD" },
 ];
 const HEADINGS: Record<CoverageCode, string[]> = {
@@ -73,8 +85,22 @@ const LIMIT_WORDS: Record<string, string[]> = {
   employersLiabilityEachAccident: ["E.L. each accident", "E.L. Each Accident"],
 };
 const CARD_WORDINGS = [
-  { name: "Name", course: "Course", issue: "Date of evaluation", expiry: "Re-evaluation due", number: "Card No", trainer: "Evaluator" },
-  { name: "Participant", course: "Course title", issue: "Completed on", expiry: "Valid through", number: "Certificate #", trainer: "Instructor" },
+  {
+    name: "Name",
+    course: "Course",
+    issue: "Date of evaluation",
+    expiry: "Re-evaluation due",
+    number: "Card No",
+    trainer: "Evaluator",
+  },
+  {
+    name: "Participant",
+    course: "Course title",
+    issue: "Completed on",
+    expiry: "Valid through",
+    number: "Certificate #",
+    trainer: "Instructor",
+  },
 ];
 
 const FIRST = ["Odile", "Brannock", "Tamsin", "Heloise", "Corwin", "Ysolde", "Peregrine", "Maelis"];
@@ -115,12 +141,19 @@ function coverageTruth(random: SeededRandom, code: CoverageCode): CoverageTruth 
         : code === "umbrella_liability"
           ? { umbrellaEachOccurrence: million * 2, umbrellaAggregate: million * 2 }
           : { employersLiabilityEachAccident: random.pick([500_000, 1_000_000]) };
-  const prefix = { general_liability: "GL", auto_liability: "CA", umbrella_liability: "UX", workers_comp: "WC" }[code];
+  const prefix = {
+    general_liability: "GL",
+    auto_liability: "CA",
+    umbrella_liability: "UX",
+    workers_comp: "WC",
+  }[code];
   return {
     code,
     insurerName: `${random.pick(FIRMS)} ${random.pick(INSURER_KINDS)}`,
     naic: `0${random.int(1000, 9999)}`,
-    policyNumber: random.bool() ? `${prefix}-${random.int(100000, 999999)}` : `${prefix} ${random.int(100, 999)} ${random.int(1000, 9999)}`,
+    policyNumber: random.bool()
+      ? `${prefix}-${random.int(100000, 999999)}`
+      : `${prefix} ${random.int(100, 999)} ${random.int(1000, 9999)}`,
     effectiveDate,
     expirationDate: nextYear(effectiveDate),
     limits,
@@ -143,18 +176,22 @@ async function certificatePdf(seed: number, mode: (typeof CERT_MODES)[number], w
   const random = buildSeededRandom(seed);
   const words = WORDINGS[wording]!;
   const dateFormat = random.pick(documentDateFormats);
-  const codes = (["general_liability", "auto_liability", "umbrella_liability", "workers_comp"] as const).filter(
-    () => random.next() < 0.8,
-  );
+  const codes = (
+    ["general_liability", "auto_liability", "umbrella_liability", "workers_comp"] as const
+  ).filter(() => random.next() < 0.8);
   const truth: CertificateTruth = {
     kind: "certificate",
     family: `certificate/${mode}/${wording}`,
     namedInsured: `${random.pick(FIRMS)} Machine Service ${random.pick(["LLC", "Inc.", "Co."])}`,
     certificateHolder: `${random.pick(FIRMS)} Precision Works ${random.pick(["LLC", "Inc."])}`,
-    coverages: (codes.length ? codes : (["general_liability"] as const)).map((code) => coverageTruth(random, code)),
+    coverages: (codes.length ? codes : (["general_liability"] as const)).map((code) =>
+      coverageTruth(random, code),
+    ),
   };
   const doc = await PDFDocument.create();
-  const font = await doc.embedFont(random.pick([StandardFonts.Helvetica, StandardFonts.TimesRoman, StandardFonts.Courier]));
+  const font = await doc.embedFont(
+    random.pick([StandardFonts.Helvetica, StandardFonts.TimesRoman, StandardFonts.Courier]),
+  );
   let pen: Pen = { page: doc.addPage([612, 792]), font, size: random.pick([8, 9, 10]), top: 50 };
   const step = () => {
     pen.top += pen.size + 5;
@@ -178,7 +215,11 @@ async function certificatePdf(seed: number, mode: (typeof CERT_MODES)[number], w
   step();
   step();
   field("Named insured", truth.namedInsured);
-  line(pen, 40, `${random.int(10, 999)} ${random.pick(["Quarry", "Foundry", "Lathe"])} Road, ${random.pick(["Ashmoor", "Dunlin Cross"])}, OH 4${random.int(1000, 9999)}`);
+  line(
+    pen,
+    40,
+    `${random.int(10, 999)} ${random.pick(["Quarry", "Foundry", "Lathe"])} Road, ${random.pick(["Ashmoor", "Dunlin Cross"])}, OH 4${random.int(1000, 9999)}`,
+  );
   step();
   step();
   line(pen, 40, "COVERAGES");
@@ -224,7 +265,8 @@ async function cardPdf(seed: number, mode: (typeof CARD_MODES)[number], wording:
   const doc = await PDFDocument.create();
   const font = await doc.embedFont(random.pick([StandardFonts.Helvetica, StandardFonts.TimesRoman]));
   const pen: Pen = { page: doc.addPage([360, 240]), font, size: 9, top: 30 };
-  const put = (x: number, text: string) => pen.page.drawText(text, { x, y: 240 - pen.top, size: pen.size, font });
+  const put = (x: number, text: string) =>
+    pen.page.drawText(text, { x, y: 240 - pen.top, size: pen.size, font });
   const step = () => (pen.top += 14);
   const fmt = (iso: string) => formatDocumentDate(iso, dateFormat);
   put(20, random.pick(["SAFETY TRAINING RECORD", "CERTIFICATE OF COMPLETION", "OPERATOR CARD"]));

@@ -9,19 +9,36 @@ import { buildCorpus, type CardTruth, type CertificateTruth } from "./build-corp
  * the held-out part is never looked at field by field while tuning. A value from the wrong coverage, or any value
  * that differs from the printed one, counts as wrong; an empty field counts as not right.
  */
-type Kind = "names" | "insurers" | "naic" | "policy_numbers" | "dates" | "limits" | "marks" | "card_numbers" | "courses";
+type Kind =
+  | "names"
+  | "insurers"
+  | "naic"
+  | "policy_numbers"
+  | "dates"
+  | "limits"
+  | "marks"
+  | "card_numbers"
+  | "courses";
 type Tally = Record<Kind, { right: number; wrong: number; empty: number }>;
 
+const say = (text: string) => process.stdout.write(`${text}\n`);
 const args = process.argv.slice(2);
 const split = args.includes("--split") ? args[args.indexOf("--split") + 1] : "held_out";
 const withOcr = args.includes("--ocr");
 
 const emptyTally = (): Tally =>
   Object.fromEntries(
-    ["names", "insurers", "naic", "policy_numbers", "dates", "limits", "marks", "card_numbers", "courses"].map((k) => [
-      k,
-      { right: 0, wrong: 0, empty: 0 },
-    ]),
+    [
+      "names",
+      "insurers",
+      "naic",
+      "policy_numbers",
+      "dates",
+      "limits",
+      "marks",
+      "card_numbers",
+      "courses",
+    ].map((k) => [k, { right: 0, wrong: 0, empty: 0 }]),
   ) as Tally;
 
 const failures: string[] = [];
@@ -45,7 +62,13 @@ function scoreCertificate(tally: Tally, truth: CertificateTruth, text: string, i
     count(tally, "dates", coverage.effectiveDate, read.effectiveDate, `${at} effective`);
     count(tally, "dates", coverage.expirationDate, read.expirationDate, `${at} expiration`);
     for (const [name, amount] of Object.entries(coverage.limits))
-      count(tally, "limits", amount, (read.limits as Record<string, number> | undefined)?.[name], `${at} ${name}`);
+      count(
+        tally,
+        "limits",
+        amount,
+        (read.limits as Record<string, number> | undefined)?.[name],
+        `${at} ${name}`,
+      );
     count(tally, "marks", coverage.additionalInsured, read.additionalInsured, `${at} additionalInsured`);
     count(tally, "marks", coverage.waiverOfSubrogation, read.waiverOfSubrogation, `${at} waiver`);
   }
@@ -67,17 +90,19 @@ function print(label: string, tally: Tally, docs: number, msPerPage: number[]) {
   const right = rows.reduce((s, [, t]) => s + t.right, 0);
   const sorted = [...msPerPage].sort((a, b) => a - b);
   const p95 = sorted[Math.min(sorted.length - 1, Math.floor(sorted.length * 0.95))] ?? 0;
-  console.log(`\n${label}: ${docs} documents, ${right}/${total} fields right (${((100 * right) / total).toFixed(1)}%), read p95 ${p95.toFixed(0)} ms/page`);
-  console.log("| field kind | right | wrong | empty | accuracy |\n|---|---:|---:|---:|---:|");
+  say(
+    `\n${label}: ${docs} documents, ${right}/${total} fields right (${((100 * right) / total).toFixed(1)}%), read p95 ${p95.toFixed(0)} ms/page`,
+  );
+  say("| field kind | right | wrong | empty | accuracy |\n|---|---:|---:|---:|---:|");
   for (const [kind, t] of rows) {
     const n = t.right + t.wrong + t.empty;
-    console.log(`| ${kind} | ${t.right} | ${t.wrong} | ${t.empty} | ${((100 * t.right) / n).toFixed(1)}% |`);
+    say(`| ${kind} | ${t.right} | ${t.wrong} | ${t.empty} | ${((100 * t.right) / n).toFixed(1)}% |`);
   }
 }
 
 const corpus = (await buildCorpus()).filter((doc) => doc.split === split);
 const families = new Set(corpus.map((doc) => doc.truth.family));
-console.log(`Corpus split "${split}": ${corpus.length} documents from ${families.size} families`);
+say(`Corpus split "${split}": ${corpus.length} documents from ${families.size} families`);
 for (const path of withOcr ? (["text", "ocr"] as const) : (["text"] as const)) {
   const tally = emptyTally();
   const times: number[] = [];
@@ -91,4 +116,4 @@ for (const path of withOcr ? (["text", "ocr"] as const) : (["text"] as const)) {
   }
   print(`${path} path`, tally, corpus.length, times);
 }
-if (split === "tune" && args.includes("--failures")) console.log(failures.join("\n"));
+if (split === "tune" && args.includes("--failures")) say(failures.join("\n"));

@@ -148,11 +148,12 @@ function leftCell(line: string): string {
 function valueUnderLabel(lines: string[], label: RegExp): string | undefined {
   const index = lines.findIndex((line) => label.test(line));
   if (index < 0) return undefined;
-  const sameLine = leftCell((lines[index] ?? "").replace(label, ""));
+  const sameLine = leftCell((lines[index] ?? "").replace(label, "").replace(/^[\s:]+/, ""));
   if (sameLine.length > 1) return sameLine;
   const next = lines[index + 1];
   const value = next === undefined ? "" : leftCell(next);
-  return value.length > 1 ? value : undefined;
+  // A street address under the label means the name was not where we looked: empty beats wrong.
+  return value.length > 1 && !/^\d+\s+\S+/.test(value) ? value : undefined;
 }
 
 function readInsurers(lines: string[]): CertificateReading["insurers"] {
@@ -201,14 +202,21 @@ function coverageSections(lines: string[]): Partial<Record<InsuranceCoverageCode
 
 function readLimits(code: InsuranceCoverageCode, section: string[], scale: number): Limits {
   const limits: Limits = {};
-  for (const line of section) {
+  for (const [at, line] of section.entries()) {
     const hits = LIMIT_LABELS[code]
       .map(([name, label]) => ({ name, match: label.exec(line) }))
       .filter((hit): hit is { name: LimitName; match: RegExpExecArray } => hit.match !== null)
       .sort((a, b) => a.match.index - b.match.index);
     hits.forEach((hit, i) => {
       const from = hit.match.index + hit.match[0].length;
-      const amount = parseScaledAmount(line.slice(from, hits[i + 1]?.match.index ?? line.length), scale);
+      const rest = line.slice(from, hits[i + 1]?.match.index ?? line.length);
+      // A label alone on its line ("Each occurrence" / "$1M" below it): the amount is the whole next line.
+      const below = section[at + 1]?.trim() ?? "";
+      const fragment =
+        rest.trim() === "" && hits.length === 1 && /^\$?\s?[\d,.]+\s?(?:MM|M|K)?$/i.test(below)
+          ? below
+          : rest;
+      const amount = parseScaledAmount(fragment, scale);
       if (amount !== undefined && limits[hit.name] === undefined) limits[hit.name] = amount;
     });
   }
@@ -254,7 +262,8 @@ const SECTION_LABELS = {
     /\b(?:POLICY\s+)?(?:EXPIRATION(?:\s+DATE)?|EXPIRES|EXPIRY(?:\s+DATE)?|EXP\.?(?:\s+DATE)?|TO)\s*[:.]?/i,
   additionalInsured: /\bADD(?:ITIONA)?L\.?\s*INS(?:URED|D)?\b\s*[:.?]?/i,
   waiverOfSubrogation: /\b(?:WAIVER\s+OF\s+SUBROGATION|SUBR(?:OGATION)?\.?\s*(?:WVD|WAIVED))\b\s*[:.?]?/i,
-  insurer: /\b(?:INSURER|CARRIER|WRITTEN\s+BY|INSURANCE\s+COMPANY)\b(?!\s+[A-F]\s*[:;.,])\s*[:.]/i,
+  insurer:
+    /\b(?:INSURER|CARRIER|WRITTEN\s+BY|INSURANCE\s+COMPANY)\b(?!\s+[A-F]\s*[:;.,])(?:\s*[:.]|(?=\s{3,})|\s*$)/i,
   naic: /\bNAIC\s*(?:#|NO\.?|CODE)?\s*[:.]?\s*([\dOo]{5})\b/i,
 } as const;
 
@@ -267,9 +276,13 @@ function afterLabel(section: string[], label: RegExp): { value: string; line: nu
     const rest =
       line
         .slice(match.index + match[0].length)
+        .trimStart()
         .split(/\s{3,}/)[0]
         ?.trim() ?? "";
     if (rest !== "") return { value: rest, line: i };
+    // The line below is the value only when it is not itself another label.
+    if (Object.values(SECTION_LABELS).some((other) => other.exec(section[i + 1] ?? "")?.index === 0))
+      continue;
     const next = section[i + 1]
       ?.trim()
       .split(/\s{3,}/)[0]

@@ -8,8 +8,10 @@ export interface PositionedText {
   y: number;
   w: number;
   h: number;
+  /** Font size as a fraction of the page's width, to tell a word space from a gap between columns. */
+  em?: number;
 }
-export type PageBox = Omit<PositionedText, "text">;
+export type PageBox = Omit<PositionedText, "text" | "em">;
 
 /** Where a proposed value was read and how sure the reader is, for the reviewer's side-by-side page. */
 export interface FieldEvidence {
@@ -21,6 +23,46 @@ export type Evidence = Record<string, FieldEvidence>;
 
 /** Below this a field is marked for a closer look. */
 export const LOW_CONFIDENCE = 0.6;
+
+// A gap wider than this many font sizes separates two cells (columns, or a label and its value across the page).
+const CELL_GAP_EMS = 1.5;
+
+/**
+ * The page's text rebuilt from positioned items: items on one baseline form a line, read left to right, and a wide
+ * gap between two items becomes three spaces, so the readers see "Name   Odile Carrack" as a label and a value in two
+ * cells, as they would in a table, rather than one run of words.
+ */
+export function layoutText(items: readonly PositionedText[]): string {
+  const order = [...items].sort((a, b) => a.page - b.page || a.y - b.y || a.x - b.x);
+  const lines: PositionedText[][] = [];
+  for (const item of order) {
+    const last = lines[lines.length - 1];
+    const head = last?.[0];
+    if (last && head && head.page === item.page && Math.abs(item.y - head.y) < Math.max(head.h, item.h) / 2)
+      last.push(item);
+    else lines.push([item]);
+  }
+  const out: string[] = [];
+  let page = order[0]?.page ?? 1;
+  for (const line of lines) {
+    if (line[0]!.page !== page) {
+      out.push("");
+      page = line[0]!.page;
+    }
+    const cells = [...line].sort((a, b) => a.x - b.x);
+    let text = "";
+    let right = 0;
+    for (const item of cells) {
+      const em = item.em ?? item.h / 1.2;
+      const gap = item.x - right;
+      if (text !== "") text += gap > CELL_GAP_EMS * em ? "   " : gap > em * 0.15 ? " " : "";
+      text += item.text;
+      right = Math.max(right, item.x + item.w);
+    }
+    out.push(text.trimEnd());
+  }
+  return out.join("\n");
+}
 
 interface Line {
   page: number;

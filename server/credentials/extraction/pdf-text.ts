@@ -1,7 +1,7 @@
 import { createRequire } from "node:module";
 import { Worker } from "node:worker_threads";
 import { DocumentUnreadableError } from "./document-unreadable-error.ts";
-import type { PositionedText } from "../../../shared/credentials/locate-values.ts";
+import { layoutText, type PositionedText } from "../../../shared/credentials/locate-values.ts";
 
 export { DocumentUnreadableError, type UnreadableReason } from "./document-unreadable-error.ts";
 
@@ -52,6 +52,7 @@ const { PDFParse } = require(workerData.modulePath);
           y: (height - f - size) / height,
           w: (item.width || size * item.str.length * 0.5) / width,
           h: (size * 1.2) / height,
+          em: size / width,
         });
         if (items.length > 20000) break;
       }
@@ -102,7 +103,9 @@ export async function extractPdfText(bytes: Uint8Array, options: PdfTextOptions 
       );
     });
     if (!reply.ok) throw toUnreadable(reply);
-    return { text: reply.text, pageCount: reply.pageCount, pagesRead: reply.pagesRead, items: reply.items };
+    // Lines and cells rebuilt from the items' positions; pdf.js's own text when a page gave no positioned items.
+    const text = reply.items.length > 0 ? layoutText(reply.items) : reply.text;
+    return { text, pageCount: reply.pageCount, pagesRead: reply.pagesRead, items: reply.items };
   } finally {
     clearTimeout(timer);
     await worker.terminate();
