@@ -1,80 +1,89 @@
 import cron, { type ScheduledTask } from "node-cron";
-import type { Config } from "../server/config.ts";
+import { publicUrl, type Config } from "../server/config.ts";
 import { log } from "../server/log.ts";
 import { createSmtpMailer, type Mailer } from "../server/mail/index.ts";
 import { sweepRosterAlerts } from "../server/roster/index.ts";
+import { createStorage, type FileStorage } from "../server/storage/index.ts";
 import { runLapseJob } from "./lapse.ts";
-import { claimTick, tickOf } from "./claim-tick.ts";
+import { tickOf } from "./claim-tick.ts";
+import { retryDueTicks, runScheduledTick, type JobWork, type TickDeps } from "./run-tick.ts";
 import { runReviewerDigest } from "./reviewer-digest.ts";
 import { runSendOutbox } from "./send-outbox.ts";
+import { runUploadSweep } from "./sweep-uploads.ts";
 
 export interface RunningSchedule {
   tasks: ScheduledTask[];
   stop(): Promise<void>;
 }
 
-function guarded(name: string, work: () => Promise<unknown>, claimed = false) {
-  return async (context?: { date?: Date }) => {
+// Hourly, at an odd minute so it does not meet the daily jobs.
+const UPLOAD_SWEEP_CRON = "17 * * * *";
+
+/** The claimed jobs by name: each runs once per tick across every instance, and is retried when it fails. */
+export function scheduledJobs(
+  config: Config,
+  deps: { mailer?: Mailer; storage: FileStorage },
+): Record<string, JobWork> {
+  return {
+    lapse: async (asOf) => {
+      const result = await runLapseJob({ asOf });
+      // Rostered technicians coming within 30 days of a lapse alert their buyers even without a standing change.
+      await sweepRosterAlerts();
+      // The warnings leave now rather than at the outbox's next round.
+      if (deps.mailer)
+        await runSendOutbox({ asOf: new Date() }, { mailer: deps.mailer, from: config.MAIL_FROM });
+      return result;
+    },
+    reviewer_digest: (asOf) => runReviewerDigest({ asOf }),
+    upload_sweep: (asOf) => runUploadSweep({ asOf }, { storage: deps.storage }),
+  };
+}
+
+function guarded(work: () => Promise<unknown>, name: string) {
+  return async () => {
     try {
-      if (claimed && !(await claimTick(name, tickOf(context?.date ?? new Date())))) {
-        log.info({ job: name }, "scheduled job already run by another instance");
-        return;
-      }
-      const result = await work();
-      log.info({ job: name, result: summarize(result) }, "scheduled job finished");
+      await work();
     } catch (err) {
-      log.error({ err, job: name }, "scheduled job failed");
+      log.error({ err, job: name }, "scheduled task failed");
     }
   };
 }
 
-function summarize(result: unknown): unknown {
-  if (result && typeof result === "object" && "changedStandings" in result) {
-    const { changedStandings, ...rest } = result as { changedStandings: unknown[] };
-    return { ...rest, changedStandings: changedStandings.length };
-  }
-  return result;
-}
-
 /**
- * The server's timers: the lapse job and the reviewers' digest once a day at JOB_CRON in JOB_TIME_ZONE, and the outbox
- * every minute. `noOverlap` skips a tick while the previous one still runs; the advisory locks keep other instances out.
+ * The server's timers: the lapse job and the reviewers' digest once a day at JOB_CRON in JOB_TIME_ZONE, the sweep of
+ * abandoned uploads hourly, the outbox and the retry round every minute. `noOverlap` skips a tick while the previous
+ * one still runs; claimed ticks and the advisory locks keep other instances out.
  */
-export function startSchedule(config: Config, deps: { mailer?: Mailer } = {}): RunningSchedule {
+export function startSchedule(
+  config: Config,
+  deps: { mailer?: Mailer; storage?: FileStorage } = {},
+): RunningSchedule {
   const mailer = deps.mailer ?? (config.SMTP_URL ? createSmtpMailer(config.SMTP_URL) : undefined);
+  const storage = deps.storage ?? createStorage(config.UPLOADS_DIR, config);
+  const jobs = scheduledJobs(config, { mailer, storage });
+  const tickDeps: TickDeps = {
+    retryDelaysMs: config.JOB_RETRY_MINUTES.map((m) => m * 60_000),
+    publicUrl: publicUrl(config),
+  };
+  const claimed = (name: string) => (context?: { date?: Date }) =>
+    guarded(() => runScheduledTick(name, tickOf(context?.date ?? new Date()), jobs[name]!, tickDeps), name)();
   const daily = { timezone: config.JOB_TIME_ZONE, noOverlap: true };
   const tasks = [
+    cron.schedule(config.JOB_CRON, claimed("lapse"), { ...daily, name: "lapse" }),
+    cron.schedule(config.JOB_CRON, claimed("reviewer_digest"), { ...daily, name: "reviewer-digest" }),
+    cron.schedule(UPLOAD_SWEEP_CRON, claimed("upload_sweep"), { noOverlap: true, name: "upload-sweep" }),
     cron.schedule(
-      config.JOB_CRON,
-      guarded(
-        "lapse",
-        async () => {
-          const result = await runLapseJob({ asOf: new Date() });
-          // Rostered technicians coming within 30 days of a lapse alert their buyers even without a standing change.
-          await sweepRosterAlerts();
-          // The warnings leave now rather than at the outbox's next round.
-          if (mailer) await runSendOutbox({ asOf: new Date() }, { mailer, from: config.MAIL_FROM });
-          return result;
-        },
-        true,
-      ),
-      { ...daily, name: "lapse" },
-    ),
-    cron.schedule(
-      config.JOB_CRON,
-      guarded("reviewer_digest", () => runReviewerDigest({ asOf: new Date() }), true),
-      { ...daily, name: "reviewer-digest" },
+      "* * * * *",
+      guarded(() => retryDueTicks(jobs, tickDeps), "job_retries"),
+      { noOverlap: true, name: "job-retries" },
     ),
   ];
   if (mailer) {
     tasks.push(
       cron.schedule(
         "* * * * *",
-        guarded("outbox", () => runSendOutbox({ asOf: new Date() }, { mailer, from: config.MAIL_FROM })),
-        {
-          name: "outbox",
-          noOverlap: true,
-        },
+        guarded(() => runSendOutbox({ asOf: new Date() }, { mailer, from: config.MAIL_FROM }), "outbox"),
+        { name: "outbox", noOverlap: true },
       ),
     );
   }

@@ -6,11 +6,12 @@ import { pinoHttp } from "pino-http";
 import { randomUUID } from "node:crypto";
 import type pg from "pg";
 import type { Config } from "./config.ts";
-import { log } from "./log.ts";
+import { log, logSerializers } from "./log.ts";
 import { passport, renewSessionNearExpiry, sessionMiddleware } from "./http/auth.ts";
 import { requireCsrfHeader } from "./http/csrf.ts";
 import { apiNotFound, errorHandler } from "./http/error-handler.ts";
 import { healthRoutes } from "./health/routes.ts";
+import { Readiness, refuseWhileStarting } from "./health/readiness.ts";
 import { authRoutes, adminUserRoutes } from "./accounts/index.ts";
 import { outboxRoutes } from "./mail/index.ts";
 import { technicianRoutes } from "./technicians/index.ts";
@@ -20,7 +21,7 @@ import { buyerRouters } from "./directory/buyer-routers.ts";
 import { workOrderRoutes } from "./work-orders/index.ts";
 import { reviewRoutes } from "./reviews/index.ts";
 import { createStorage } from "./storage/index.ts";
-import { createSignInLimiter } from "./accounts/sign-in-limit.ts";
+import { createAbuseLimits } from "./accounts/abuse-limits.ts";
 
 export interface AppDeps {
   config: Config;
@@ -46,7 +47,8 @@ export function createApp({ config, sessionPool, clientDir }: AppDeps): Express 
   const app = express();
   app.locals.config = config;
   app.locals.storage = createStorage(config.UPLOADS_DIR, config);
-  app.locals.signInLimiter = createSignInLimiter(config.SIGN_IN_ATTEMPTS_PER_15_MIN);
+  app.locals.abuseLimits = createAbuseLimits(config);
+  app.locals.readiness = new Readiness();
   app.disable("x-powered-by");
   if (config.NODE_ENV === "production") app.set("trust proxy", 1);
 
@@ -67,6 +69,7 @@ export function createApp({ config, sessionPool, clientDir }: AppDeps): Express 
   app.use(
     pinoHttp({
       logger: log,
+      serializers: logSerializers,
       genReqId: (req) => (req.headers["x-request-id"] as string | undefined) ?? randomUUID(),
       autoLogging: { ignore: (req) => !req.url?.startsWith("/api") },
       // In production a line per successful API request costs throughput for nothing: failures (4xx, 5xx) still log.
@@ -78,6 +81,7 @@ export function createApp({ config, sessionPool, clientDir }: AppDeps): Express 
             : "info",
     }),
   );
+  app.use("/api", refuseWhileStarting);
   app.use("/api", express.json({ limit: "100kb" }));
   app.use("/api", sessionMiddleware(config, sessionPool));
   app.use("/api", passport.session());

@@ -18,7 +18,18 @@ const configSchema = z
     SESSION_SECRET: z.string().min(16).default("clearbench-demo-secret-change-me"),
     UPLOADS_DIR: z.string().default("uploads"),
     LOG_LEVEL: z.enum(["fatal", "error", "warn", "info", "debug", "trace", "silent"]).default("info"),
+    // Limits of the anonymous account routes (per address and per account, counted in memory per instance).
     SIGN_IN_ATTEMPTS_PER_15_MIN: z.coerce.number().int().min(1).default(10),
+    SIGN_IN_FAILURES_PER_IP_PER_15_MIN: z.coerce.number().int().min(1).default(50),
+    SIGN_UPS_PER_IP_PER_HOUR: z.coerce.number().int().min(1).default(20),
+    SIGN_UPS_PER_EMAIL_PER_HOUR: z.coerce.number().int().min(1).default(5),
+    PASSWORD_RESETS_PER_IP_PER_15_MIN: z.coerce.number().int().min(1).default(20),
+    PASSWORD_RESETS_PER_EMAIL_PER_HOUR: z.coerce.number().int().min(1).default(10),
+    SET_PASSWORD_FAILURES_PER_IP_PER_15_MIN: z.coerce.number().int().min(1).default(20),
+    SET_PASSWORD_FAILURES_PER_LINK_PER_15_MIN: z.coerce.number().int().min(1).default(5),
+    RESET_EMAIL_INTERVAL_MINUTES: z.coerce.number().int().min(0).max(1440).default(5),
+    HASH_CONCURRENCY: z.coerce.number().int().min(1).max(64).default(2),
+    HASH_QUEUE: z.coerce.number().int().min(0).max(10_000).default(16),
     BCRYPT_COST: z.coerce.number().int().min(4).max(15).default(12),
     JOB_TIME_ZONE: z.string().default("America/Chicago"),
     JOB_CRON: z.string().default("0 6 * * *"),
@@ -28,6 +39,21 @@ const configSchema = z
       .transform((s) => s.split(",").map((d) => Number(d.trim())))
       .pipe(z.array(z.number().int().min(1).max(365)).min(1)),
     RUN_SCHEDULE: booleanText.default(true),
+    // Minutes to wait before each retry of a failed scheduled run; one more attempt than there are delays.
+    JOB_RETRY_MINUTES: z
+      .string()
+      .default("1,5,15")
+      .transform((s) => s.split(",").map((d) => Number(d.trim())))
+      .pipe(
+        z
+          .array(
+            z
+              .number()
+              .min(0)
+              .max(24 * 60),
+          )
+          .max(10),
+      ),
     // Where stored files live: a local folder (one machine) or S3-compatible object storage (several machines).
     STORAGE_DRIVER: z.enum(["folder", "s3"]).default("folder"),
     S3_ENDPOINT: z.url().optional(),

@@ -6,7 +6,8 @@ import { connectDatabase } from "./db/sequelize.ts";
 import { initModels } from "./db/associations.ts";
 import { migrate } from "./db/migrate.ts";
 import { createApp } from "./app.ts";
-import { setPasswordCost } from "./accounts/index.ts";
+import { readinessOf } from "./health/readiness.ts";
+import { setHashConcurrency, setPasswordCost } from "./accounts/index.ts";
 import { createSmtpMailer, deliverDueMail } from "./mail/index.ts";
 import { sweepOrphans } from "./storage/sweep-orphans.ts";
 import { startSchedule } from "../jobs/schedule.ts";
@@ -18,14 +19,19 @@ export interface RunningServer {
   close(): Promise<void>;
 }
 
-/** Connects, migrates, listens and starts the background senders; resolves once the port is open. */
+/**
+ * Connects, migrates, listens, runs `prepare` (e.g. loading the demo scenario) and starts the background senders;
+ * resolves once the instance is ready. Between listening and ready, the liveness check answers and everything else
+ * answers 503, so nothing is announced before it can be served.
+ */
 export async function startServer(
   config: Config,
-  options: { clientDir?: string } = {},
+  options: { clientDir?: string; prepare?: () => Promise<void>; onListening?: (port: number) => void } = {},
 ): Promise<RunningServer> {
   if (!config.DATABASE_URL) throw new Error("DATABASE_URL is required to start the server");
   configureLog(config.LOG_LEVEL);
   setPasswordCost(config.BCRYPT_COST);
+  setHashConcurrency(config.HASH_CONCURRENCY, config.HASH_QUEUE);
   const sequelize = connectDatabase(config.DATABASE_URL);
   initModels(sequelize);
   await migrate(sequelize);
@@ -36,6 +42,7 @@ export async function startServer(
   });
   sessionPool.on("error", (err) => log.warn({ err }, "session pool error"));
   const app = createApp({ config, sessionPool, clientDir: options.clientDir });
+  const starting = readinessOf(app).hold("starting up");
   const swept = await sweepOrphans(app.locals.storage as FileStorage);
   if (Object.values(swept).some((n) => n > 0)) log.warn({ swept }, "start-up sweep repaired stored files");
 
@@ -50,7 +57,9 @@ export async function startServer(
   };
   // Mail goes out right after the request that queued it; the schedule retries what failed.
   app.locals.kickOutbox = () => void sendMail();
-  const schedule = config.RUN_SCHEDULE ? startSchedule(config, { mailer }) : undefined;
+  const schedule = config.RUN_SCHEDULE
+    ? startSchedule(config, { mailer, storage: app.locals.storage as FileStorage })
+    : undefined;
 
   const server = await new Promise<Server>((resolve, reject) => {
     const s = app.listen(config.PORT, config.HOST, () => resolve(s));
@@ -59,6 +68,15 @@ export async function startServer(
   const address = server.address();
   const port = typeof address === "object" && address ? address.port : config.PORT;
   log.info({ port }, "server listening");
+  options.onListening?.(port);
+  try {
+    await options.prepare?.();
+  } catch (err) {
+    await new Promise<void>((resolve) => server.close(() => resolve()));
+    throw err;
+  }
+  starting();
+  log.info({ port }, "server ready");
 
   return {
     server,

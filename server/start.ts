@@ -77,9 +77,13 @@ if (!existsSync(path.join(root, "dist", "index.html"))) {
 }
 
 const config = loadConfig(env);
-running = await startServer(config);
-const loaded = await loadDemoScenarioOnce({ uploadsDir: config.UPLOADS_DIR, today: new Date() });
-if (loaded) say("Demo scenario loaded.");
+// The URL is printed only once the demo scenario is in: until then the server answers 503 "starting".
+running = await startServer(config, {
+  prepare: async () => {
+    const loaded = await loadDemoScenarioOnce({ uploadsDir: config.UPLOADS_DIR, today: new Date() });
+    if (loaded) say("Demo scenario loaded.");
+  },
+});
 
 say(`\nClearbench is running at ${publicUrl({ ...config, PORT: running.port })}`);
 say(`Demo sign-ins (password for all: ${DEMO_PASSWORD}):`);

@@ -6,6 +6,7 @@ import {
   signInSchema,
   signUpSchema,
 } from "../../shared/accounts/schemas.ts";
+import type { Config } from "../config.ts";
 import { createRoutes } from "../http/route.ts";
 import { anyone, signedIn } from "../http/policy.ts";
 import { AppError } from "../http/app-error.ts";
@@ -13,7 +14,7 @@ import { linkBase } from "../http/app-locals.ts";
 import { passport, SESSION_COOKIE } from "../http/auth.ts";
 import { kickOutbox } from "../mail/outbox.ts";
 import { canManageUsers } from "./policy.ts";
-import { signInRateLimit } from "./sign-in-limit.ts";
+import { abuseLimit } from "./abuse-limits.ts";
 import { toSessionUser } from "./dto.ts";
 import {
   findCurrentUser,
@@ -48,7 +49,7 @@ async function meOrThrow(userId: number) {
 
 authRoutes.post(
   "/sign-in",
-  { allow: anyone, before: [signInRateLimit], body: signInSchema },
+  { allow: anyone, before: [abuseLimit("signIn")], body: signInSchema },
   async (req, res, { body }) => {
     req.body = body;
     const user = await authenticate(req, res, () => undefined);
@@ -67,25 +68,33 @@ authRoutes.post("/sign-out", { allow: anyone }, async (req, res) => {
 
 authRoutes.get("/me", { allow: signedIn }, async (req) => meOrThrow(req.user!.id));
 
-authRoutes.post("/sign-up", { allow: anyone, body: signUpSchema }, async (req, res, { body }) => {
-  const user = await signUpCompany(body);
-  await logIn(req, toSessionUser(user));
-  res.status(201).json(await meOrThrow(user.id));
-});
+authRoutes.post(
+  "/sign-up",
+  { allow: anyone, before: [abuseLimit("signUp")], body: signUpSchema },
+  async (req, res, { body }) => {
+    const user = await signUpCompany(body);
+    await logIn(req, toSessionUser(user));
+    res.status(201).json(await meOrThrow(user.id));
+  },
+);
 
 authRoutes.post(
   "/password-reset",
-  { allow: anyone, body: requestPasswordResetSchema },
+  { allow: anyone, before: [abuseLimit("passwordReset")], body: requestPasswordResetSchema },
   async (req, res, { body }) => {
-    await requestPasswordReset(body.email, linkBase(req));
+    await requestPasswordReset(body.email, linkBase(req), req.app.locals.config as Config);
     kickOutbox(req.app.locals);
     res.status(202).json({ message: "If that e-mail has an account, a reset link is on its way." });
   },
 );
 
-authRoutes.post("/set-password", { allow: anyone, body: setPasswordSchema }, async (_req, _res, { body }) => {
-  await setPasswordWithToken(body);
-});
+authRoutes.post(
+  "/set-password",
+  { allow: anyone, before: [abuseLimit("setPassword")], body: setPasswordSchema },
+  async (req, _res, { body }) => {
+    await setPasswordWithToken(body, req.sessionID);
+  },
+);
 
 adminUserRoutes.get("/users", { allow: canManageUsers }, () => listUsers());
 adminUserRoutes.get("/companies", { allow: canManageUsers }, () => listCompanies());

@@ -1,4 +1,5 @@
-import { UniqueConstraintError } from "sequelize";
+import { Transaction, UniqueConstraintError } from "sequelize";
+import type { Config } from "../config.ts";
 import type { InviteUser, SetPassword, SignUp } from "../../shared/accounts/schemas.ts";
 import { db } from "../db/sequelize.ts";
 import { AppError } from "../http/app-error.ts";
@@ -7,7 +8,14 @@ import { enqueueMail } from "../mail/outbox.ts";
 import { recordAudit } from "../audit/index.ts";
 import { User } from "./model.ts";
 import { checkPassword, hashPassword } from "./passwords.ts";
-import { consumeToken, issueToken } from "./tokens.ts";
+import {
+  consumeToken,
+  isUsableToken,
+  issueToken,
+  resetIssuedWithin,
+  revokeOutstandingTokens,
+} from "./tokens.ts";
+import { endSessionsOfUser } from "./end-sessions.ts";
 import { inviteMail, resetMail } from "./emails.ts";
 import { toCurrentUserDto } from "./dto.ts";
 
@@ -17,6 +25,8 @@ const emailTaken = () =>
   ]);
 
 export async function signUpCompany(input: SignUp) {
+  // A taken e-mail is refused before the costly hash; the unique index still decides a race.
+  if (await User.findOne({ where: { email: input.email }, attributes: ["id"] })) throw emailTaken();
   const passwordHash = await hashPassword(input.password);
   try {
     return await db().transaction(async (transaction) => {
@@ -75,10 +85,23 @@ export async function findCurrentUser(userId: number) {
   return { user, dto: toCurrentUserDto(user, company) };
 }
 
-export async function requestPasswordReset(email: string, linkBase: string): Promise<void> {
-  const user = await User.findOne({ where: { email: email.toLowerCase(), active: true } });
-  if (!user) return;
+/**
+ * Queues a reset e-mail, at most one per account per RESET_EMAIL_INTERVAL_MINUTES; the caller answers the same whether
+ * the e-mail is unknown, throttled or sent. The user row is locked so parallel requests cannot each send one.
+ */
+export async function requestPasswordReset(
+  email: string,
+  linkBase: string,
+  config: Pick<Config, "RESET_EMAIL_INTERVAL_MINUTES">,
+): Promise<void> {
   await db().transaction(async (transaction) => {
+    const user = await User.findOne({
+      where: { email: email.toLowerCase(), active: true },
+      lock: Transaction.LOCK.UPDATE,
+      transaction,
+    });
+    if (!user) return;
+    if (await resetIssuedWithin(user.id, config.RESET_EMAIL_INTERVAL_MINUTES, transaction)) return;
     const token = await issueToken(user.id, "reset", transaction);
     await enqueueMail(
       resetMail(user.email, user.name, `${linkBase}/set-password?token=${token}`),
@@ -87,18 +110,32 @@ export async function requestPasswordReset(email: string, linkBase: string): Pro
   });
 }
 
-export async function setPasswordWithToken(input: SetPassword): Promise<void> {
+const linkExpired = () =>
+  new AppError("invalid_input", "This link has expired or was already used", [
+    { path: "body.token", message: "expired or used" },
+  ]);
+
+/**
+ * The link is checked before the password is hashed (a bogus link costs one index probe, not a bcrypt hash), then used
+ * in one statement. Setting a password ends every other session of the user and every other outstanding link.
+ */
+export async function setPasswordWithToken(input: SetPassword, keepSessionId?: string): Promise<void> {
+  if (!(await isUsableToken(input.token))) throw linkExpired();
   const passwordHash = await hashPassword(input.password);
   await db().transaction(async (transaction) => {
     const userId = await consumeToken(input.token, transaction);
-    if (!userId) {
-      throw new AppError("invalid_input", "This link has expired or was already used", [
-        { path: "body.token", message: "expired or used" },
-      ]);
-    }
+    if (!userId) throw linkExpired();
     await User.update({ passwordHash }, { where: { id: userId }, transaction });
+    const revokedLinks = await revokeOutstandingTokens(userId, transaction);
+    const endedSessions = await endSessionsOfUser(userId, keepSessionId, transaction);
     await recordAudit(
-      { actorUserId: userId, action: "user.password_set", subjectType: "user", subjectId: userId },
+      {
+        actorUserId: userId,
+        action: "user.password_set",
+        subjectType: "user",
+        subjectId: userId,
+        after: { revokedLinks, endedSessions },
+      },
       transaction,
     );
   });

@@ -33,3 +33,32 @@ export async function consumeToken(token: string, transaction: Transaction): Pro
   );
   return count === 1 && rows[0] ? rows[0].userId : null;
 }
+
+/** Whether a link is still usable, without using it: read before any password is hashed for it. */
+export async function isUsableToken(token: string): Promise<boolean> {
+  const found = await OneTimeToken.findOne({
+    where: { tokenHash: digest(token), usedAt: null, expiresAt: { [Op.gt]: new Date() } },
+    attributes: ["id"],
+  });
+  return found !== null;
+}
+
+/** Every other outstanding link of the user stops working (a reset or invitation already used one). */
+export async function revokeOutstandingTokens(userId: number, transaction: Transaction): Promise<number> {
+  const [count] = await OneTimeToken.update(
+    { usedAt: new Date() },
+    { where: { userId, usedAt: null, expiresAt: { [Op.gt]: new Date() } }, transaction },
+  );
+  return count;
+}
+
+/** A reset link was issued to the user within the last `minutes` (whether or not it was used). */
+export async function resetIssuedWithin(userId: number, minutes: number, transaction: Transaction) {
+  if (minutes <= 0) return false;
+  const found = await OneTimeToken.findOne({
+    where: { userId, purpose: "reset", createdAt: { [Op.gt]: new Date(Date.now() - minutes * 60_000) } },
+    attributes: ["id"],
+    transaction,
+  });
+  return found !== null;
+}

@@ -1,15 +1,16 @@
-import { execFile } from "node:child_process";
 import { mkdtemp, readFile, rm, writeFile } from "node:fs/promises";
 import { tmpdir } from "node:os";
 import path from "node:path";
-import { promisify } from "node:util";
 import type { Response } from "express";
 import { AppError } from "../http/app-error.ts";
+import { contentDisposition } from "../http/file-names.ts";
 import { recordAudit } from "../audit/index.ts";
 import type { FileStorage } from "../storage/index.ts";
 import { Document } from "./model.ts";
+import { MAX_PREVIEW_PIXELS, pdfPageSizes, renderDpi, runBounded } from "./extraction/render-bounds.ts";
 
-const run = promisify(execFile);
+const PREVIEW_DPI = 110;
+
 const PAGE_RENDER_TIMEOUT_MS = 15_000;
 const MAX_PREVIEW_PAGES = 10;
 
@@ -25,11 +26,7 @@ function setFileHeaders(res: Response, mime: string, disposition: "inline" | "at
   res.setHeader("X-Content-Type-Options", "nosniff");
   res.setHeader("Content-Security-Policy", "default-src 'none'; sandbox");
   res.setHeader("Cache-Control", "private, no-store");
-  const ascii = name.replace(/[^\x20-\x7e]/g, "_").replace(/["\\]/g, "_");
-  res.setHeader(
-    "Content-Disposition",
-    `${disposition}; filename="${ascii}"; filename*=UTF-8''${encodeURIComponent(name)}`,
-  );
+  res.setHeader("Content-Disposition", contentDisposition(disposition, name));
 }
 
 /** Sends the stored file; only images may be shown inline (a PDF is previewed as rendered pages instead). */
@@ -57,7 +54,10 @@ export async function sendDocumentFile(
   });
 }
 
-/** A PNG of one page of a PDF, rendered by poppler's pdftoppm with a time limit: nothing of the PDF runs in the browser. */
+/**
+ * A PNG of one page of a PDF, rendered by poppler's pdftoppm within the render bounds (pixels, memory, the shared queue,
+ * a time limit): nothing of the PDF runs in the browser.
+ */
 export async function sendPdfPage(id: number, page: number, storage: FileStorage, res: Response) {
   const document = await loadDocument(id);
   if (document.mime !== "application/pdf" || page > MAX_PREVIEW_PAGES)
@@ -66,26 +66,29 @@ export async function sendPdfPage(id: number, page: number, storage: FileStorage
   try {
     const chunks: Buffer[] = [];
     for await (const chunk of await storage.open(document.sha256)) chunks.push(chunk as Buffer);
-    await writeFile(path.join(dir, "in.pdf"), Buffer.concat(chunks));
-    await run(
-      "pdftoppm",
+    const pdfPath = path.join(dir, "in.pdf");
+    await writeFile(pdfPath, Buffer.concat(chunks));
+    // The resolution comes from the page's own size, so a page declared huge still renders to a bounded image.
+    const [size] = await pdfPageSizes(pdfPath, page, page);
+    if (!size || size.page !== page) throw new AppError("not_found", "No such page");
+    const dpi = renderDpi(size, PREVIEW_DPI, MAX_PREVIEW_PIXELS);
+    await runBounded(
+      "/usr/bin/pdftoppm",
       [
         "-png",
         "-r",
-        "110",
+        String(dpi),
         "-f",
         String(page),
         "-l",
         String(page),
         "-singlefile",
-        path.join(dir, "in.pdf"),
+        pdfPath,
         path.join(dir, "out"),
       ],
-      {
-        timeout: PAGE_RENDER_TIMEOUT_MS,
-        killSignal: "SIGKILL",
-      },
-    ).catch(() => {
+      { timeoutMs: PAGE_RENDER_TIMEOUT_MS },
+    ).catch((err: unknown) => {
+      if (err instanceof AppError) throw err;
       throw new AppError("not_found", "No such page");
     });
     const png = await readFile(path.join(dir, "out.png")).catch(() => {

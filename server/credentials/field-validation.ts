@@ -1,5 +1,6 @@
 import { fieldSetSchemas, type FieldSet } from "../../shared/credentials/credential-fields.ts";
 import type { CredentialTypeDefinition } from "../../shared/credentials/catalogue.ts";
+import { documentDateProblems } from "../../shared/credentials/document-dates.ts";
 import { credentialLapseInstant } from "../../shared/standing/lapse-instant.ts";
 import { AppError } from "../http/app-error.ts";
 
@@ -20,8 +21,17 @@ export function parseFields(
       })),
     );
   }
-  // An end date before the start is a reviewer warning, not a refusal: the certificate itself may say so.
-  return result.data as Record<string, unknown>;
+  const data = result.data as Record<string, unknown>;
+  // Impossible dates are refused here rather than stored: the lapse instant computed from them would mean nothing.
+  const problems = documentDateProblems(data);
+  if (problems.length > 0) {
+    throw new AppError(
+      "invalid_input",
+      problems[0]!.message,
+      problems.map((p) => ({ path: `${prefix}.${p.path}`, message: p.message })),
+    );
+  }
+  return data;
 }
 
 export function lapseInstantFor(

@@ -1,5 +1,7 @@
 import { requireOwnership, requireRole, type SignedInUser } from "../http/policy.ts";
 import { isTechnicianManagedBy } from "../technicians/policy.ts";
+import { viewLevelOf } from "../technicians/visibility.ts";
+import { atLeast, BUYER_DOWNLOADABLE_CATEGORIES } from "../../shared/visibility/technician-visibility.ts";
 import { Credential, CredentialType, Document } from "./model.ts";
 
 export const canReviewCredentials = requireRole("reviewer");
@@ -17,7 +19,12 @@ export async function canSeeCredential(user: SignedInUser, credential: Credentia
     case "admin":
       return true;
     case "buyer":
-      return credential.state === "verified";
+      // A technician's own card only while the shared rule shows them to shops; company policies once verified.
+      if (credential.state !== "verified") return false;
+      return (
+        credential.technicianId === null ||
+        atLeast(await viewLevelOf(user, credential.technicianId), "directory")
+      );
     case "provider_admin":
       return credential.companyId === user.companyId;
     case "technician":
@@ -56,7 +63,11 @@ export async function canReadDocument(user: SignedInUser, documentId: number): P
   if (user.role === "buyer") {
     const verified = credentials.filter((c) => c.state === "verified").map((c) => c.typeCode);
     if (verified.length === 0) return false;
-    return (await CredentialType.count({ where: { code: verified, category: "insurance" } })) > 0;
+    return (
+      (await CredentialType.count({
+        where: { code: verified, category: [...BUYER_DOWNLOADABLE_CATEGORIES] },
+      })) > 0
+    );
   }
   return false;
 }

@@ -7,6 +7,7 @@ import path from "node:path";
 import { pipeline } from "node:stream/promises";
 import { fileTypeFromBuffer, fileTypeFromFile, type FileTypeResult } from "file-type";
 import type { UploadDocument } from "../../shared/credentials/schemas.ts";
+import { withoutLoneSurrogates } from "../../shared/api/text.ts";
 import { reviewerWarnings, type ReviewerWarning } from "../../shared/credentials/reviewer-checks.ts";
 import type { CertificateProposal } from "../../shared/credentials/extract-fields.ts";
 import type { Evidence } from "../../shared/credentials/locate-values.ts";
@@ -18,6 +19,7 @@ import { Company } from "../companies/model.ts";
 import { Technician } from "../technicians/model.ts";
 import { extractDocument, type ExtractableMime } from "./extraction/extract-document.ts";
 import { isOcrAvailable } from "./extraction/ocr.ts";
+import { refuseOversizedPages } from "./extraction/render-bounds.ts";
 import { DocumentUnreadableError } from "./extraction/document-unreadable-error.ts";
 import { activeType } from "./catalogue.ts";
 import { resolveHolder } from "./resolve-holder.ts";
@@ -45,9 +47,9 @@ export interface UploadedFile {
 /** Keeps a display name safe to store and to echo in a header: no folders, no control characters, bounded. */
 export function safeFileName(name: string): string {
   const base = path
-    .basename(name.replace(/\\/g, "/"))
+    .basename(withoutLoneSurrogates(name).replace(/\\/g, "/"))
     // eslint-disable-next-line no-control-regex -- control characters are exactly what is removed here
-    .replace(/[\u0000-\u001f\u007f"<>|:*?]/g, "_")
+    .replace(/[\u0000-\u001f\u007f-\u009f"<>|:*?]/g, "_")
     .trim();
   return Array.from(base || "document")
     .slice(0, 120)
@@ -115,6 +117,7 @@ export async function uploadDocument(
     const ready = path.join(storage.incomingDir, `${sha256}.${randomUUID()}${READY_SUFFIX}`);
     await rename(file.path, ready);
     pending = ready;
+    if (mime === "application/pdf") await refuseOversizedPages(ready);
     // The bytes are read only when something reads them: the PDF text layer (and OCR of a scan), or OCR of an image.
     // Without OCR an image yields no text whatever its bytes, so it is not read into memory at all.
     const needsBytes = mime === "application/pdf" || (await isOcrAvailable());

@@ -1,11 +1,12 @@
 import { requireOwnership, requireRole } from "../http/policy.ts";
-import { isListedTechnician } from "./technician-profile.ts";
+import { atLeast } from "../../shared/visibility/technician-visibility.ts";
+import { viewLevelOf } from "../technicians/visibility.ts";
 
 export const canSearchDirectory = requireRole("buyer");
 
-// A technician who is not listed (not cleared, inactive, or unknown) answers 404 to buyers, so nothing about them leaks.
+// A technician the shared rule hides from shops (not cleared, inactive, or unknown) answers 404, so nothing leaks.
 export const canViewListedTechnician = requireOwnership(
   requireRole("buyer"),
   "a listed technician",
-  (_user, params) => isListedTechnician(Number(params.technicianId)),
+  async (user, params) => atLeast(await viewLevelOf(user, Number(params.technicianId)), "directory"),
 );

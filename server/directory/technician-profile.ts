@@ -14,6 +14,7 @@ import { AppError } from "../http/app-error.ts";
 import { assumptions, estimateTrip, ratingSummary, SCORE_SOURCE } from "./estimates.ts";
 import { computeStandingNow } from "./live-standing.ts";
 import { fieldsForBuyers } from "../../shared/credentials/fields-for-buyers.ts";
+import { buyerMayDownload } from "../../shared/visibility/technician-visibility.ts";
 
 const select = <T extends object>(sql: string, bind: unknown[]) =>
   db().query<T>(sql, { bind, type: QueryTypes.SELECT });
@@ -81,16 +82,6 @@ interface TechnicianRow {
   sites: SiteRow[];
 }
 
-/** Listed = active with a stored baseline standing of cleared or lapsing; anyone else is not shown to buyers. */
-export async function isListedTechnician(technicianId: number): Promise<boolean> {
-  const rows = await select<{ id: number }>(
-    `SELECT t.id FROM technicians t JOIN technician_standings b ON b.technician_id = t.id AND b.requirement_set_id IS NULL
-      WHERE t.id = $1 AND t.active AND b.standing IN ('cleared','lapsing')`,
-    [technicianId],
-  );
-  return rows.length > 0;
-}
-
 /**
  * The whole page in one round trip: the listed technician ($1) with, as JSON arrays, the verified credentials in force
  * at $3 (their own and their company's), the standing against each active requirement set of the shop ($2), the
@@ -136,8 +127,8 @@ function toCredentials(rows: CredentialRow[]): ProfileCredentialDto[] {
     fields: fieldsForBuyers(r.fields),
     decidedAt: r.decided_at ? new Date(r.decided_at).toISOString() : null,
     lapsesAt: r.lapses_at ? new Date(r.lapses_at).toISOString() : null,
-    // Buyers may download verified certificates of insurance only (credentials/policy.ts canReadDocument).
-    documentId: r.category === "insurance" ? r.document_id : null,
+    // The shared buyer rule decides which documents a shop may download (credentials/policy.ts canReadDocument).
+    documentId: buyerMayDownload(r.category) ? r.document_id : null,
   }));
 }
 

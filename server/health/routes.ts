@@ -1,14 +1,43 @@
+import { QueryTypes } from "sequelize";
 import { createRoutes } from "../http/route.ts";
 import { anyone } from "../http/policy.ts";
 import { db } from "../db/sequelize.ts";
+import type { Readiness } from "./readiness.ts";
 
 export const healthRoutes = createRoutes("/api");
 
-healthRoutes.get("/health", { allow: anyone }, async (_req, res) => {
+const DATABASE_CHECK_MS = 2_000;
+
+async function databaseUp(): Promise<boolean> {
+  let timer: NodeJS.Timeout | undefined;
   try {
-    await db().query("SELECT 1");
-    return { status: "ok", database: "up" };
+    return await Promise.race([
+      db()
+        .query("SELECT 1", { type: QueryTypes.SELECT })
+        .then(() => true),
+      new Promise<boolean>((resolve) => (timer = setTimeout(() => resolve(false), DATABASE_CHECK_MS))),
+    ]);
   } catch {
-    res.status(503).json({ status: "degraded", database: "down" });
+    return false;
+  } finally {
+    clearTimeout(timer);
   }
-});
+}
+
+// Readiness: a load balancer sends traffic only while this answers 200 (started, and the database answers).
+for (const path of ["/health", "/health/ready"]) {
+  healthRoutes.get(path, { allow: anyone }, async (req, res) => {
+    const starting = (req.app.locals.readiness as Readiness | undefined)?.starting ?? [];
+    const database = (await databaseUp()) ? "up" : "down";
+    const status = starting.length ? "starting" : database === "up" ? "ok" : "degraded";
+    const body = starting.length ? { status, database, starting } : { status, database };
+    if (status !== "ok") {
+      res.status(503).json(body);
+      return;
+    }
+    return body;
+  });
+}
+
+// Liveness: the process answers; restart it only when this fails (never because the database is down).
+healthRoutes.get("/health/live", { allow: anyone }, () => ({ status: "alive" }));

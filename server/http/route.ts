@@ -1,3 +1,4 @@
+import { rm } from "node:fs/promises";
 import { Router, type NextFunction, type Request, type RequestHandler, type Response } from "express";
 import type { z } from "zod";
 import { AppError } from "./app-error.ts";
@@ -96,7 +97,22 @@ export function createRoutes(prefix: string) {
       }
       void next;
     };
-    router[method](prefix + path, guard, ...(options.before ?? []), run);
+    // A refused upload (a bad field, an unknown holder, any error) must not leave multer's temporary file behind: the
+    // use case moves a file it keeps, so whatever is still at the temporary path after a failure is removed here.
+    const runAndTidy = async (req: Request, res: Response, next: NextFunction) => {
+      try {
+        await run(req, res, next);
+      } catch (err) {
+        if (req.file?.path) await rm(req.file.path, { force: true });
+        throw err;
+      }
+    };
+    router[method](
+      prefix + path,
+      guard,
+      ...(options.before ?? []),
+      options.before?.length ? runAndTidy : run,
+    );
   }
 
   return {

@@ -2,6 +2,7 @@ import multer from "multer";
 import { randomUUID } from "node:crypto";
 import type { RequestHandler } from "express";
 import { appStorage } from "../storage/index.ts";
+import { utf8FileName } from "./file-names.ts";
 
 export const MAX_UPLOAD_BYTES = 10 * 1024 * 1024;
 
@@ -18,5 +19,8 @@ export const singleFileUpload: RequestHandler = (req, res, next) => {
     }),
     limits: { fileSize: MAX_UPLOAD_BYTES, files: 1, fields: 10, fieldSize: 10_000, parts: 12 },
   }).single("file");
-  locals.uploader(req, res, next);
+  locals.uploader(req, res, (err?: unknown) => {
+    if (req.file) req.file.originalname = utf8FileName(req.file.originalname);
+    next(err);
+  });
 };

@@ -6,6 +6,8 @@ export interface MailToSend {
   subject: string;
   text: string;
   html?: string | null;
+  /** A stable `<id@domain>` so a resend of the same outbox row carries the same Message-ID. */
+  messageId?: string;
 }
 
 export interface Mailer {

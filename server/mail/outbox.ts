@@ -1,4 +1,4 @@
-import { Op, type Transaction } from "sequelize";
+import type { Transaction } from "sequelize";
 import { OutboxMessage } from "./model.ts";
 import type { Mailer } from "./mailer.ts";
 import { db } from "../db/sequelize.ts";
@@ -33,58 +33,85 @@ export interface DeliveryReport {
   failed: number;
 }
 
+/** How long a claimed message stays out of other senders' reach; a sender that dies mid-send frees it after this. */
+export const CLAIM_LEASE_MS = 2 * 60_000;
+
 /**
- * Sends every due message. Rows are claimed with SKIP LOCKED so two server instances never send the
- * same row; a failure keeps the row with a later attempt time, so nothing is lost while SMTP is down.
+ * The Message-ID of an outbox row: the same on every attempt, so a message sent again after a crash between the send
+ * and its mark is recognisable as the same message by the recipient's mail system and by anyone reading the headers.
+ */
+export function outboxMessageId(message: { id: number; createdAt: Date }, from: string): string {
+  const domain = /@([^>\s]+)>?\s*$/.exec(from)?.[1] ?? "clearbench.invalid";
+  return `<outbox.${message.id}.${message.createdAt.getTime()}@${domain}>`;
+}
+
+/**
+ * Claims the oldest due message for this sender alone, in its own statement: the claim pushes `next_attempt_at` one
+ * lease ahead and counts the attempt, so no other sender takes it while it is being sent, and a sender that crashes
+ * leaves it due again once the lease runs out.
+ */
+async function claimNextDue(now: Date): Promise<OutboxMessage | null> {
+  const [rows] = await db().query(
+    `UPDATE outbox_messages SET next_attempt_at = :leaseUntil, attempts = attempts + 1
+      WHERE id = (
+        SELECT id FROM outbox_messages
+         WHERE status = 'pending' AND next_attempt_at <= :now
+         ORDER BY id
+         LIMIT 1
+         FOR UPDATE SKIP LOCKED)
+      RETURNING id`,
+    { replacements: { now, leaseUntil: new Date(now.getTime() + CLAIM_LEASE_MS) } },
+  );
+  const claimed = (rows as { id: number }[])[0];
+  return claimed ? OutboxMessage.findByPk(claimed.id) : null;
+}
+
+export interface DeliveryHooks {
+  /** Runs between a message's send and its mark; tests throw here to stand in for a crash. */
+  afterSend?: (message: OutboxMessage) => void | Promise<void>;
+}
+
+/**
+ * Sends up to `batch` due messages, each claimed, sent and marked on its own: no transaction is held across SMTP, so a
+ * crash can send again at most the one message whose mark it interrupted, and that one with its Message-ID unchanged.
+ * A failure keeps the row with a later attempt time, so nothing is lost while SMTP is down.
  */
 export async function deliverDueMail(
   mailer: Mailer,
   from: string,
   now = new Date(),
   batch = 50,
+  hooks: DeliveryHooks = {},
 ): Promise<DeliveryReport> {
   const report: DeliveryReport = { sent: 0, retried: 0, failed: 0 };
-  await db().transaction(async (transaction) => {
-    const due = await OutboxMessage.findAll({
-      where: { status: "pending", nextAttemptAt: { [Op.lte]: now } },
-      order: [["id", "ASC"]],
-      limit: batch,
-      lock: transaction.LOCK.UPDATE,
-      skipLocked: true,
-      transaction,
-    });
-    for (const message of due) {
-      try {
-        await mailer.send({
-          from,
-          to: message.toAddress,
-          subject: message.subject,
-          text: message.textBody,
-          html: message.htmlBody,
-        });
-        await message.update(
-          { status: "sent", sentAt: new Date(), attempts: message.attempts + 1, lastError: null },
-          { transaction },
-        );
-        report.sent += 1;
-      } catch (err) {
-        const attempts = message.attempts + 1;
-        const failed = attempts >= MAX_ATTEMPTS;
-        await message.update(
-          {
-            attempts,
-            status: failed ? "failed" : "pending",
-            lastError: err instanceof Error ? err.message.slice(0, 500) : String(err),
-            nextAttemptAt: new Date(now.getTime() + nextBackoffMs(attempts)),
-          },
-          { transaction },
-        );
-        if (failed) report.failed += 1;
-        else report.retried += 1;
-        log.warn({ outboxId: message.id, attempts }, "mail delivery failed; will retry");
-      }
+  for (let i = 0; i < batch; i += 1) {
+    const message = await claimNextDue(now);
+    if (!message) break;
+    try {
+      await mailer.send({
+        from,
+        to: message.toAddress,
+        subject: message.subject,
+        text: message.textBody,
+        html: message.htmlBody,
+        messageId: outboxMessageId(message, from),
+      });
+    } catch (err) {
+      const failed = message.attempts >= MAX_ATTEMPTS;
+      await message.update({
+        status: failed ? "failed" : "pending",
+        lastError: err instanceof Error ? err.message.slice(0, 500) : String(err),
+        nextAttemptAt: new Date(now.getTime() + nextBackoffMs(message.attempts)),
+      });
+      if (failed) report.failed += 1;
+      else report.retried += 1;
+      log.warn({ outboxId: message.id, attempts: message.attempts }, "mail delivery failed; will retry");
+      continue;
     }
-  });
+    await hooks.afterSend?.(message);
+    await message.update({ status: "sent", sentAt: new Date(), lastError: null });
+    report.sent += 1;
+  }
   return report;
 }
 

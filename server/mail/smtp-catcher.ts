@@ -8,6 +8,7 @@ export interface CaughtMessage {
   subject: string;
   text: string;
   html: string | null;
+  messageId: string | null;
 }
 
 export interface SmtpCatcher {
@@ -41,6 +42,7 @@ export async function startSmtpCatcher(
             subject: parsed.subject ?? "",
             text: parsed.text ?? "",
             html: typeof parsed.html === "string" ? parsed.html : null,
+            messageId: parsed.messageId ?? null,
           }),
         )
         .then(

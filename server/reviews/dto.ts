@@ -1,4 +1,4 @@
-import type { ReportedReviewDto, ReviewDto } from "../../shared/reviews/schemas.ts";
+import type { PublicReviewDto, ReportedReviewDto, ReviewDto } from "../../shared/reviews/schemas.ts";
 import { Company } from "../companies/index.ts";
 import { User } from "../accounts/index.ts";
 import { Technician } from "../technicians/index.ts";
@@ -55,4 +55,15 @@ export async function toReportedReviewDtos(rows: JobReview[]): Promise<ReportedR
     reportedBy: { id: r.reportedBy ?? 0, name: names.user.get(r.reportedBy ?? 0) ?? "" },
     technicianName: names.technician.get(r.technicianId) ?? "",
   }));
+}
+
+/** A review as the directory shows it: never the shop, the author or the work order, so no one learns who hired whom. */
+export function toPublicReviewDto(r: JobReview): PublicReviewDto {
+  return {
+    id: r.id,
+    stars: r.stars,
+    text: r.body.length > 0 ? r.body : null,
+    reply: r.reply && r.reply.length > 0 ? r.reply : null,
+    createdAt: r.createdAt.toISOString(),
+  };
 }

@@ -2,7 +2,7 @@ import { Op, QueryTypes } from "sequelize";
 import type { TechnicianReviewsDto } from "../../shared/reviews/schemas.ts";
 import { db } from "../db/sequelize.ts";
 import { JobReview } from "./model.ts";
-import { toReportedReviewDtos, toReviewDtos } from "./dto.ts";
+import { toPublicReviewDto, toReportedReviewDtos, toReviewDtos } from "./dto.ts";
 
 const REPORTED_LIMIT = 200;
 
@@ -24,7 +24,7 @@ export async function listTechnicianReviews(
   return {
     average: count > 0 ? (totals!.star_sum ?? 0) / count : null,
     count,
-    items: await toReviewDtos(rows),
+    items: rows.map(toPublicReviewDto),
   };
 }
 

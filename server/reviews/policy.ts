@@ -1,5 +1,6 @@
-import { requireOwnership, requireRole, signedIn, type SignedInUser } from "../http/policy.ts";
-import { Technician } from "../technicians/index.ts";
+import { requireOwnership, requireRole, type SignedInUser } from "../http/policy.ts";
+import { mayReadTechnicianReviews } from "../../shared/visibility/technician-visibility.ts";
+import { Technician, viewLevelOf } from "../technicians/index.ts";
 import { WorkOrder, sideOf } from "../work-orders/index.ts";
 import { JobReview } from "./model.ts";
 
@@ -56,8 +57,9 @@ export const canReportReview = requireOwnership(
 
 export const canModerateReviews = requireRole("admin");
 
+/** Whoever the shared rule shows the technician's profile to; a rival company's staff get the 404 of a missing id. */
 export const canReadTechnicianReviews = requireOwnership(
-  signedIn,
-  "an existing technician",
-  async (_user, params) => (await Technician.count({ where: { id: Number(params.technicianId) } })) > 0,
+  requireRole("provider_admin", "technician", "reviewer", "buyer", "admin"),
+  "whoever may see the technician's profile",
+  async (user, params) => mayReadTechnicianReviews(await viewLevelOf(user, Number(params.technicianId))),
 );

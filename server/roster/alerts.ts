@@ -2,6 +2,7 @@ import { QueryTypes } from "sequelize";
 import { ROSTER_LAPSE_ALERT_DAYS, type RosterAlertEvent } from "../../shared/roster/schemas.ts";
 import type { RequirementResult, Standing } from "../../shared/standing/standing-types.ts";
 import { MS_PER_DAY } from "../../shared/standing/warning-windows.ts";
+import { isListed } from "../../shared/visibility/technician-visibility.ts";
 import { db } from "../db/sequelize.ts";
 import { enqueueMail } from "../mail/index.ts";
 import { onStandingsChanged, type ChangedStanding } from "../standing/index.ts";
@@ -9,6 +10,9 @@ import { onStandingsChanged, type ChangedStanding } from "../standing/index.ts";
 interface RosteredRow {
   shop_company_id: number;
   technician_id: number;
+  active: boolean;
+  /** The shop rostered this technician by name (not only through their company). */
+  direct: boolean;
   name: string;
   company_name: string;
   standing: Standing;
@@ -39,8 +43,15 @@ function unmetSignature(results: RequirementResult[]): string {
  * What, if anything, a shop must hear about a rostered technician. The reference instant is the standing's own
  * computed_at (the job's "as of"), so a demo run with a future date judges "within 30 days" at that date.
  */
-function alertFor(row: RosteredRow): Alert | null {
+function alertFor(row: RosteredRow, wasListed: ReadonlySet<number>): Alert | null {
   const who = `${row.name} (${row.company_name})`;
+  // The shared rule hides unlisted technicians from shops: a shop that rostered only the company hears about one only
+  // as they leave the directory, never about a technician it could not have seen.
+  if (
+    !row.direct &&
+    !(wasListed.has(row.technician_id) || isListed({ active: row.active, baseline: row.standing }))
+  )
+    return null;
   if (row.standing === "not_cleared") {
     const reasons = row.results.filter((r) => r.status === "unmet").map((r) => r.detail);
     return {
@@ -106,11 +117,15 @@ async function deliverAlert(alert: Alert): Promise<boolean> {
 }
 
 /** Alerts the shops that roster any of these technicians, directly or through their company. Returns alerts sent. */
-export async function alertRosteredShops(technicianIds: readonly number[]): Promise<number> {
+export async function alertRosteredShops(
+  technicianIds: readonly number[],
+  wasListed: ReadonlySet<number> = new Set(),
+): Promise<number> {
   if (technicianIds.length === 0) return 0;
   const rows = await db().query<RosteredRow>(
-    `SELECT DISTINCT ON (re.shop_company_id, t.id) re.shop_company_id, t.id AS technician_id, t.name, c.name AS company_name,
-            b.standing, b.earliest_lapse, b.results, b.computed_at
+    `SELECT DISTINCT ON (re.shop_company_id, t.id) re.shop_company_id, t.id AS technician_id, t.active, t.name,
+            c.name AS company_name, b.standing, b.earliest_lapse, b.results, b.computed_at,
+            EXISTS (SELECT 1 FROM roster_entries d WHERE d.shop_company_id = re.shop_company_id AND d.technician_id = t.id) AS direct
        FROM technicians t
        JOIN companies c ON c.id = t.company_id
        JOIN roster_entries re ON re.technician_id = t.id OR re.service_company_id = t.company_id
@@ -121,7 +136,7 @@ export async function alertRosteredShops(technicianIds: readonly number[]): Prom
   );
   let sent = 0;
   for (const row of rows) {
-    const alert = alertFor(row);
+    const alert = alertFor(row, wasListed);
     if (alert && (await deliverAlert(alert))) sent += 1;
   }
   return sent;
@@ -139,7 +154,14 @@ export async function sweepRosterAlerts(): Promise<number> {
 
 /** The standing hook's listener: only baseline changes move a technician in or out of the directory. */
 export function alertOnBaselineChanges(changes: readonly ChangedStanding[]): Promise<number> {
-  return alertRosteredShops(changes.filter((c) => c.requirementSetId === null).map((c) => c.technicianId));
+  const baseline = changes.filter((c) => c.requirementSetId === null);
+  const wasListed = new Set(
+    baseline.filter((c) => c.before === "cleared" || c.before === "lapsing").map((c) => c.technicianId),
+  );
+  return alertRosteredShops(
+    baseline.map((c) => c.technicianId),
+    wasListed,
+  );
 }
 
 let unsubscribe: (() => void) | undefined;

@@ -2,6 +2,13 @@ import Papa from "papaparse";
 import { rosterCsvColumns, standingWords, type RosterEntryDto } from "../../shared/roster/schemas.ts";
 
 /**
+ * A cell whose first character is = + - @ tab or carriage return is prefixed with a quote so a spreadsheet never
+ * runs it as a formula (OWASP "CSV Injection"). Only the first character counts: the library's own pattern
+ * (`^[=+\-@\t\r].*$`) fails on a cell with a line break, which would reach the spreadsheet live.
+ */
+export const formulaStart = /^[=+\-@\t\r]/;
+
+/**
  * The roster as CSV for the shop's quality records: one line per technician (a company entry lists each of its
  * technicians), instants in ISO 8601 UTC so the file sorts and imports without a zone guess.
  */
@@ -21,6 +28,5 @@ export function rosterToCsv(entries: RosterEntryDto[]): string {
       ]);
     }
   }
-  // Cells starting with = + - @ are escaped so a spreadsheet never runs them as formulas (OWASP "CSV Injection").
-  return Papa.unparse({ fields: [...rosterCsvColumns], data }, { escapeFormulae: true });
+  return Papa.unparse({ fields: [...rosterCsvColumns], data }, { escapeFormulae: formulaStart });
 }

@@ -4,7 +4,8 @@ import type { Standing } from "../../shared/standing/standing-types.ts";
 import { db } from "../db/sequelize.ts";
 import { AppError } from "../http/app-error.ts";
 import { recordAudit } from "../audit/index.ts";
-import { isListedTechnician } from "../directory/index.ts";
+import { atLeast, isListed } from "../../shared/visibility/technician-visibility.ts";
+import { viewLevelOf } from "../technicians/visibility.ts";
 
 const select = <T extends object>(sql: string, bind: unknown[]) =>
   db().query<T>(sql, { bind, type: QueryTypes.SELECT });
@@ -56,7 +57,8 @@ export async function listRoster(shopId: number): Promise<RosterEntryDto[]> {
     ),
   ]);
   const byEntry = new Map<number, RosterTechnicianDto[]>();
-  for (const m of members) {
+  // The shared rule: a shop sees only listed technicians, so a company entry never reveals its hidden ones.
+  for (const m of members.filter((x) => isListed({ active: x.active, baseline: x.standing }))) {
     const list = byEntry.get(m.entry_id) ?? [];
     list.push({
       technicianId: m.technician_id,
@@ -81,10 +83,10 @@ export async function listRoster(shopId: number): Promise<RosterEntryDto[]> {
   }));
 }
 
-async function checkSubject(input: AddRosterEntry): Promise<void> {
+async function checkSubject(actor: Express.User, input: AddRosterEntry): Promise<void> {
   if (input.technicianId !== undefined) {
-    // Buyers add technicians they can see: listed ones (the directory's rule); anyone else answers 404.
-    if (!(await isListedTechnician(input.technicianId)))
+    // Buyers add technicians they can see (the shared visibility rule); anyone else answers 404.
+    if (!atLeast(await viewLevelOf(actor, input.technicianId), "directory"))
       throw new AppError("not_found", "That technician was not found");
     return;
   }
@@ -95,7 +97,7 @@ async function checkSubject(input: AddRosterEntry): Promise<void> {
 }
 
 export async function addToRoster(actor: Express.User, input: AddRosterEntry): Promise<RosterEntryDto> {
-  await checkSubject(input);
+  await checkSubject(actor, input);
   const id = await db().transaction(async (transaction) => {
     const [inserted] = await db().query<{ id: number }>(
       `INSERT INTO roster_entries (shop_company_id, technician_id, service_company_id, added_by)

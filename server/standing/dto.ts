@@ -22,5 +22,7 @@ export function toJobRunDto(run: JobRun): JobRunDto {
     startedAt: run.startedAt.toISOString(),
     finishedAt: run.finishedAt?.toISOString() ?? null,
     counts: run.counts,
+    attempt: run.attempt,
+    error: run.error,
   };
 }

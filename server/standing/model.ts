@@ -39,6 +39,8 @@ export class JobRun extends Model<InferAttributes<JobRun>, InferCreationAttribut
   declare startedAt: Date;
   declare finishedAt: Date | null;
   declare counts: Record<string, unknown>;
+  declare attempt: CreationOptional<number>;
+  declare error: CreationOptional<string | null>;
 }
 
 export function initStandingTables(sequelize: Sequelize) {
@@ -72,6 +74,8 @@ export function initStandingTables(sequelize: Sequelize) {
       startedAt: { type: DataTypes.DATE, allowNull: false },
       finishedAt: { type: DataTypes.DATE, allowNull: true },
       counts: { type: DataTypes.JSONB, allowNull: false, defaultValue: {} },
+      attempt: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
+      error: { type: DataTypes.TEXT, allowNull: true },
     },
     { sequelize, tableName: "job_runs", underscored: true, timestamps: false },
   );

@@ -1,5 +1,6 @@
 import { requireOwnership, requireRole, type SignedInUser } from "../http/policy.ts";
 import { Technician } from "./model.ts";
+import { viewLevelOf } from "./visibility.ts";
 
 async function technicianCompanyId(id: unknown): Promise<number | undefined> {
   const technician = await Technician.findByPk(Number(id), { attributes: ["companyId"] });
@@ -22,13 +23,9 @@ export const canEditTechnician = requireOwnership(
   (user, params) => isTechnicianManagedBy(user, params.technicianId),
 );
 
+/** Anyone the shared visibility rule shows the technician to; everyone else gets the 404 of a missing id. */
 export const canViewTechnician = requireOwnership(
   requireRole("provider_admin", "technician", "reviewer", "buyer", "admin"),
-  "own company, self, or a reviewer/buyer/admin",
-  async (user, params) => {
-    if (user.role === "reviewer" || user.role === "admin" || user.role === "buyer") {
-      return (await technicianCompanyId(params.technicianId)) !== undefined;
-    }
-    return isTechnicianManagedBy(user, params.technicianId);
-  },
+  "own company, self, reviewer/admin, or a buyer while the technician is listed",
+  async (user, params) => (await viewLevelOf(user, Number(params.technicianId))) !== "none",
 );

@@ -17,6 +17,7 @@ import {
   addTechnician,
   editTechnician,
   findTechnician,
+  findTechnicianFor,
   listCompanyTechnicians,
   setTechnicianActive,
 } from "./service.ts";
@@ -38,7 +39,7 @@ technicianRoutes.post(
 technicianRoutes.get(
   "/:technicianId",
   { allow: canViewTechnician, params: technicianParamsSchema },
-  (_req, _res, { params }) => findTechnician(params.technicianId),
+  (req, _res, { params }) => findTechnicianFor(req.user!, params.technicianId),
 );
 
 technicianRoutes.put(

@@ -7,6 +7,8 @@ import { Company } from "../companies/model.ts";
 import { User } from "../accounts/model.ts";
 import { Technician } from "./model.ts";
 import { toTechnicianDto } from "./dto.ts";
+import { viewLevelOf } from "./visibility.ts";
+import { pickTechnicianFields } from "../../shared/visibility/technician-visibility.ts";
 
 // Default mileage: IRS business standard mileage rate for 2026, 72.5 cents/mi (Notice 2026-10), rounded up to whole cents.
 export const DEFAULT_MILEAGE_RATE_CENTS = 73;
@@ -42,6 +44,13 @@ export async function findTechnician(id: number) {
   const t = await Technician.findByPk(id);
   if (!t) throw new AppError("not_found", "That technician was not found");
   return toDto(t);
+}
+
+/** The technician as this caller may see them: only the fields of the caller's level by the shared rule. */
+export async function findTechnicianFor(user: Express.User, id: number) {
+  const level = await viewLevelOf(user, id);
+  if (level === "none") throw new AppError("not_found", "That technician was not found");
+  return pickTechnicianFields(await findTechnician(id), level);
 }
 
 export async function addTechnician(actor: Express.User, input: TechnicianInput) {

@@ -3,6 +3,7 @@ import { readFile, rm } from "node:fs/promises";
 import type { Response } from "express";
 import { safeFileName, sniffUpload } from "../credentials/index.ts";
 import { AppError } from "../http/app-error.ts";
+import { contentDisposition } from "../http/file-names.ts";
 import type { FileStorage } from "../storage/index.ts";
 
 export interface UploadedFile {
@@ -46,16 +47,12 @@ export async function sendAttachment(
   storage: FileStorage,
   file: { sha256: string; mime: string; originalName: string },
 ) {
-  const ascii = file.originalName.replace(/[^\x20-\x7e]/g, "_").replace(/["\\]/g, "_");
   const disposition = file.mime.startsWith("image/") ? "inline" : "attachment";
   res.setHeader("Content-Type", file.mime);
   res.setHeader("X-Content-Type-Options", "nosniff");
   res.setHeader("Content-Security-Policy", "default-src 'none'; sandbox");
   res.setHeader("Cache-Control", "private, no-store");
-  res.setHeader(
-    "Content-Disposition",
-    `${disposition}; filename="${ascii}"; filename*=UTF-8''${encodeURIComponent(file.originalName)}`,
-  );
+  res.setHeader("Content-Disposition", contentDisposition(disposition, file.originalName));
   const stream = await storage.open(file.sha256);
   await new Promise<void>((resolve, reject) => {
     stream.on("error", reject);

@@ -1,6 +1,8 @@
 import { QueryTypes } from "sequelize";
 import type { WorkOrderDto, WorkOrderSide, WorkOrderSummaryDto } from "../../shared/work-orders/schemas.ts";
 import { availableActions } from "../../shared/work-orders/work-order-transitions.ts";
+import type { StandingSnapshot } from "../../shared/work-orders/standing-snapshot.ts";
+import { snapshotForBuyer } from "../../shared/visibility/technician-visibility.ts";
 import { db } from "../db/sequelize.ts";
 import type { WorkOrder } from "./model.ts";
 
@@ -66,6 +68,12 @@ export async function toWorkOrderSummaries(rows: WorkOrder[]): Promise<WorkOrder
   });
 }
 
+/** The shop reads snapshots through the shared buyer rule; the service side reads its own credentials in full. */
+function snapshotFor(side: WorkOrderSide, snapshot: StandingSnapshot | null): StandingSnapshot | null {
+  if (!snapshot) return null;
+  return side === "shop" ? snapshotForBuyer(snapshot) : snapshot;
+}
+
 export async function toWorkOrderDto(r: WorkOrder, side: WorkOrderSide): Promise<WorkOrderDto> {
   const n = (await loadNames([r.id])).get(r.id)!;
   return {
@@ -102,8 +110,8 @@ export async function toWorkOrderDto(r: WorkOrder, side: WorkOrderSide): Promise
     hoursWorked: hours(r.hoursWorked),
     travelHours: hours(r.travelHours),
     completionNote: r.completionNote,
-    snapshotAccepted: r.snapshotAccepted,
-    snapshotCompleted: r.snapshotCompleted,
+    snapshotAccepted: snapshotFor(side, r.snapshotAccepted),
+    snapshotCompleted: snapshotFor(side, r.snapshotCompleted),
     createdBy: { id: r.createdBy, name: n.created_by_name },
     createdAt: r.createdAt.toISOString(),
     acceptedAt: iso(r.acceptedAt),

@@ -1,6 +1,9 @@
 import type { RaiseWorkOrder } from "../../shared/work-orders/schemas.ts";
 import { isClearedNow, unmetRequirements } from "../../shared/work-orders/standing-snapshot.ts";
+import { preferredDateProblem } from "../../shared/work-orders/preferred-dates.ts";
 import { AppError } from "../http/app-error.ts";
+import { atLeast } from "../../shared/visibility/technician-visibility.ts";
+import { viewLevelOf } from "../technicians/index.ts";
 import { db } from "../db/sequelize.ts";
 import { recordAudit } from "../audit/index.ts";
 import { WorkOrder } from "./model.ts";
@@ -12,17 +15,29 @@ import { toWorkOrderDto } from "./dto.ts";
 const unknown = (path: string, message: string) =>
   new AppError("invalid_input", message, [{ path, message: "unknown or not yours" }]);
 
+/** Refuses preferred dates in the past or years ahead; `now` is the server's clock, read once by the caller. */
+function checkPreferredDates(dates: string[], now: Date) {
+  const today = now.toISOString().slice(0, 10);
+  const fields = dates.flatMap((date, i) => {
+    const message = preferredDateProblem(date, today);
+    return message ? [{ path: `body.preferredDates.${i}`, message }] : [];
+  });
+  if (fields.length > 0) throw new AppError("invalid_input", fields[0]!.message, fields);
+}
+
 /** Checks that every id in the request names a record this shop may use, and settles the machine technology. */
 async function resolveTargets(buyer: Express.User, input: RaiseWorkOrder) {
-  const [site, technician, equipment, requirementSet] = await Promise.all([
+  const [site, technician, level, equipment, requirementSet] = await Promise.all([
     findSite(input.siteId),
     findTechnicianForWork(input.technicianId),
+    viewLevelOf(buyer, input.technicianId),
     input.equipmentId ? findEquipment(input.equipmentId) : undefined,
     input.requirementSetId ? findRequirementSet(input.requirementSetId) : undefined,
   ]);
   if (!site || site.company_id !== buyer.companyId)
     throw unknown("body.siteId", "Choose one of your shop's sites");
-  if (!technician || !technician.active || technician.company_kind !== "service")
+  // A technician the shared rule hides from shops is refused exactly like an unknown id: no reasons, no name.
+  if (!technician || !atLeast(level, "directory") || technician.company_kind !== "service")
     throw unknown("body.technicianId", "That technician was not found");
   if (input.equipmentId && (!equipment || equipment.site_id !== site.id))
     throw unknown("body.equipmentId", "Choose a machine at that site");
@@ -51,12 +66,14 @@ export async function raiseWorkOrder(
   warningDays: number,
   link: (id: number) => string,
 ) {
+  const now = new Date();
+  checkPreferredDates(input.preferredDates, now);
   const { site, technician, equipment, technology } = await resolveTargets(buyer, input);
   const workOrder = await db().transaction(async (transaction) => {
     const snapshot = await standingSnapshotNow(
       technician.id,
       input.requirementSetId ?? null,
-      new Date(),
+      now,
       warningDays,
       transaction,
     );

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { singleLineText } from "../api/text.ts";
 
 export const roles = ["provider_admin", "technician", "reviewer", "buyer", "admin"] as const;
 export type Role = (typeof roles)[number];
@@ -8,8 +9,7 @@ export const companyKinds = ["service", "shop", "platform"] as const;
 export type CompanyKind = (typeof companyKinds)[number];
 
 // bcrypt reads only the first 72 bytes, so longer passwords are refused rather than silently cut.
-export const passwordSchema = z
-  .string()
+export const passwordSchema = singleLineText()
   .min(10, "Use at least 10 characters")
   .max(72, "Use at most 72 characters")
   .refine((p) => new TextEncoder().encode(p).length <= 72, "Use at most 72 bytes");
@@ -21,12 +21,11 @@ export const emailSchema = z
 
 export const signInSchema = z.object({
   email: emailSchema,
-  password: z.string().min(1, "Enter your password").max(200),
+  password: singleLineText().min(1, "Enter your password").max(200),
 });
 export type SignIn = z.infer<typeof signInSchema>;
 
-export const timeZoneSchema = z
-  .string()
+export const timeZoneSchema = singleLineText()
   .min(1)
   .max(64)
   .refine((tz) => {
@@ -38,15 +37,15 @@ export const timeZoneSchema = z
     }
   }, "Unknown IANA time zone");
 
-export const postalCodeSchema = z.string().regex(/^\d{5}$/, "Enter a 5-digit ZIP code");
+export const postalCodeSchema = singleLineText().regex(/^\d{5}$/, "Enter a 5-digit ZIP code");
 
 export const signUpSchema = z.object({
   kind: z.enum(["service", "shop"]),
-  companyName: z.string().trim().min(2, "Enter the company's legal name").max(160),
-  addressLine: z.string().trim().min(3, "Enter the mailing address").max(200),
+  companyName: singleLineText().trim().min(2, "Enter the company's legal name").max(160),
+  addressLine: singleLineText().trim().min(3, "Enter the mailing address").max(200),
   postalCode: postalCodeSchema,
   timeZone: timeZoneSchema,
-  name: z.string().trim().min(2, "Enter your name").max(120),
+  name: singleLineText().trim().min(2, "Enter your name").max(120),
   email: emailSchema,
   password: passwordSchema,
 });
@@ -56,14 +55,14 @@ export const requestPasswordResetSchema = z.object({ email: emailSchema });
 export type RequestPasswordReset = z.infer<typeof requestPasswordResetSchema>;
 
 export const setPasswordSchema = z.object({
-  token: z.string().min(20).max(200),
+  token: singleLineText().min(20).max(200),
   password: passwordSchema,
 });
 export type SetPassword = z.infer<typeof setPasswordSchema>;
 
 export const inviteUserSchema = z.object({
   email: emailSchema,
-  name: z.string().trim().min(2).max(120),
+  name: singleLineText().trim().min(2).max(120),
   role: roleSchema,
   companyId: z.coerce.number().int().positive(),
 });

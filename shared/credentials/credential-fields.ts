@@ -1,8 +1,8 @@
 import { z } from "zod";
+import { singleLineText, multiLineText } from "../api/text.ts";
 
 /** Calendar date as printed on a document, kept as ISO text so no time zone can shift it. */
-export const isoDateSchema = z
-  .string()
+export const isoDateSchema = singleLineText()
   .regex(/^\d{4}-\d{2}-\d{2}$/, "Use YYYY-MM-DD")
   .refine(
     (d) =>
@@ -14,7 +14,7 @@ export const isoDateSchema = z
 export const dollarsSchema = z.number().int().min(0).max(1_000_000_000);
 
 // NAIC company code: five digits (TRADE-FACTS 2.4, NAIC company code).
-export const naicSchema = z.string().regex(/^\d{5}$/, "NAIC company code has five digits");
+export const naicSchema = singleLineText().regex(/^\d{5}$/, "NAIC company code has five digits");
 
 export const limitNames = [
   "eachOccurrence",
@@ -37,12 +37,12 @@ export type Limits = z.infer<typeof limitsSchema>;
 
 /** One coverage line of a certificate of insurance. */
 export const insuranceFieldsSchema = z.object({
-  insurerName: z.string().trim().min(1, "Enter the insurer").max(200),
+  insurerName: singleLineText().trim().min(1, "Enter the insurer").max(200),
   // Stored as text; a wrong length is a reviewer warning, not a refusal (the certificate may be wrong).
-  naic: z.string().trim().max(9).optional(),
-  policyNumber: z.string().trim().min(1, "Enter the policy number").max(60),
-  namedInsured: z.string().trim().max(200).optional(),
-  certificateHolder: z.string().trim().max(300).optional(),
+  naic: singleLineText().trim().max(9).optional(),
+  policyNumber: singleLineText().trim().min(1, "Enter the policy number").max(60),
+  namedInsured: multiLineText().trim().max(200).optional(),
+  certificateHolder: multiLineText().trim().max(300).optional(),
   effectiveDate: isoDateSchema,
   expirationDate: isoDateSchema,
   limits: limitsSchema.default({}),
@@ -55,27 +55,27 @@ export type InsuranceFields = z.infer<typeof insuranceFieldsSchema>;
 
 /** A safety-training wallet card or certificate. */
 export const trainingFieldsSchema = z.object({
-  holderName: z.string().trim().min(1, "Enter the name on the card").max(160),
-  course: z.string().trim().max(200).optional(),
+  holderName: singleLineText().trim().min(1, "Enter the name on the card").max(160),
+  course: singleLineText().trim().max(200).optional(),
   issueDate: isoDateSchema,
   expiryDate: isoDateSchema.optional(),
-  cardNumber: z.string().trim().max(60).optional(),
-  trainer: z.string().trim().max(160).optional(),
+  cardNumber: singleLineText().trim().max(60).optional(),
+  trainer: singleLineText().trim().max(160).optional(),
 });
 export type TrainingFields = z.infer<typeof trainingFieldsSchema>;
 
 /** Machine-builder training on a control family, at a level (1 operator, 2 maintenance, 3 advanced service). */
 export const oemFieldsSchema = trainingFieldsSchema.extend({
-  builder: z.string().trim().min(1).max(120),
-  controlFamily: z.string().trim().min(1).max(120),
+  builder: singleLineText().trim().min(1).max(120),
+  controlFamily: singleLineText().trim().min(1).max(120),
   level: z.number().int().min(1).max(3),
 });
 export type OemFields = z.infer<typeof oemFieldsSchema>;
 
 export const licenseFieldsSchema = z.object({
-  holderName: z.string().trim().min(1).max(160),
-  licenseNumber: z.string().trim().min(1).max(60),
-  issuingAuthority: z.string().trim().min(1).max(160),
+  holderName: singleLineText().trim().min(1).max(160),
+  licenseNumber: singleLineText().trim().min(1).max(60),
+  issuingAuthority: singleLineText().trim().min(1).max(160),
   issueDate: isoDateSchema,
   expiryDate: isoDateSchema.optional(),
 });
@@ -83,9 +83,9 @@ export type LicenseFields = z.infer<typeof licenseFieldsSchema>;
 
 /** A state-issued exemption from carrying workers' compensation (sole proprietors, where the state allows it). */
 export const exemptionFieldsSchema = z.object({
-  holderName: z.string().trim().min(1).max(160),
-  state: z.string().regex(/^[A-Z]{2}$/, "Two-letter state code"),
-  certificateNumber: z.string().trim().min(1).max(60),
+  holderName: singleLineText().trim().min(1).max(160),
+  state: singleLineText().regex(/^[A-Z]{2}$/, "Two-letter state code"),
+  certificateNumber: singleLineText().trim().min(1).max(60),
   issueDate: isoDateSchema,
   expiryDate: isoDateSchema.optional(),
 });

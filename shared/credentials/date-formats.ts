@@ -1,3 +1,4 @@
+import { daysInMonth } from "../standing/iso-date.ts";
 import { monthOnlyValidThrough } from "../standing/training-validity.ts";
 
 /**
@@ -66,8 +67,7 @@ function monthOfWord(word: string): number | null {
 
 function isRealDate(year: number, month: number, day: number): boolean {
   if (month < 1 || month > 12 || day < 1) return false;
-  const daysInMonth = new Date(Date.UTC(year, month, 0)).getUTCDate();
-  return day <= daysInMonth;
+  return day <= daysInMonth(year, month);
 }
 
 function toIso(year: number, month: number, day: number): string | null {

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { singleLineText, multiLineText } from "../api/text.ts";
 
 export const credentialStates = ["submitted", "verified", "returned", "superseded", "lapsed"] as const;
 export type CredentialState = (typeof credentialStates)[number];
@@ -7,7 +8,7 @@ export const idParam = z.coerce.number().int().positive().max(2_147_483_647);
 
 export const credentialParamsSchema = z.object({ credentialId: idParam });
 export const documentParamsSchema = z.object({ documentId: idParam });
-export const typeCodeSchema = z.string().regex(/^[a-z][a-z0-9_]{1,39}$/, "Unknown credential type");
+export const typeCodeSchema = singleLineText().regex(/^[a-z][a-z0-9_]{1,39}$/, "Unknown credential type");
 
 /** The multipart fields sent with an uploaded file. */
 export const uploadDocumentSchema = z.object({
@@ -21,7 +22,7 @@ export const submitCredentialSchema = z.object({
   documentId: idParam,
   typeCode: typeCodeSchema,
   technicianId: idParam.optional(),
-  fields: z.record(z.string(), z.unknown()),
+  fields: z.record(singleLineText(), z.unknown()),
 });
 export type SubmitCredential = z.infer<typeof submitCredentialSchema>;
 
@@ -41,17 +42,17 @@ export const submitCoveragesSchema = z.object({
 export type SubmitCoverages = z.infer<typeof submitCoveragesSchema>;
 
 export const returnCredentialSchema = z.object({
-  reason: z.string().trim().min(5, "Say what the uploader must fix (at least 5 characters)").max(1000),
+  reason: multiLineText().trim().min(5, "Say what the uploader must fix (at least 5 characters)").max(1000),
 });
 export type ReturnCredential = z.infer<typeof returnCredentialSchema>;
 
 export const verifyCredentialSchema = z.object({
-  fields: z.record(z.string(), z.unknown()).optional(),
+  fields: z.record(singleLineText(), z.unknown()).optional(),
 });
 export type VerifyCredential = z.infer<typeof verifyCredentialSchema>;
 
 export const editCredentialFieldsSchema = z.object({
-  fields: z.record(z.string(), z.unknown()),
+  fields: z.record(singleLineText(), z.unknown()),
 });
 
 export const listCredentialsQuerySchema = z.object({
@@ -77,8 +78,8 @@ export const queueQuerySchema = z.object({
 export type QueueQuery = z.infer<typeof queueQuerySchema>;
 
 export const editCredentialTypeSchema = z.object({
-  name: z.string().trim().min(3).max(160).optional(),
-  description: z.string().trim().min(3).max(2000).optional(),
+  name: singleLineText().trim().min(3).max(160).optional(),
+  description: multiLineText().trim().min(3).max(2000).optional(),
   active: z.boolean().optional(),
   validityMonths: z.number().int().min(1).max(120).optional(),
 });

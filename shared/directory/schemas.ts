@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { singleLineText } from "../api/text.ts";
 import { idParam } from "../credentials/schemas.ts";
 import { machineTechnologies } from "../technicians/schemas.ts";
 import type { Standing, UnmetReason, RequirementResult } from "../standing/standing-types.ts";
@@ -24,8 +25,7 @@ export const MAX_PAGE_SIZE = 50;
  */
 export const directoryQuerySchema = z.object({
   credentialTypes: optional(
-    z
-      .string()
+    singleLineText()
       .transform((v) => [
         ...new Set(
           v
@@ -34,10 +34,10 @@ export const directoryQuerySchema = z.object({
             .filter(Boolean),
         ),
       ])
-      .pipe(z.array(z.string().regex(/^[a-z][a-z0-9_]{1,39}$/, "Unknown credential type")).max(12)),
+      .pipe(z.array(singleLineText().regex(/^[a-z][a-z0-9_]{1,39}$/, "Unknown credential type")).max(12)),
   ),
-  oemBuilder: optional(z.string().trim().min(1).max(120)),
-  controlFamily: optional(z.string().trim().min(1).max(120)),
+  oemBuilder: optional(singleLineText().trim().min(1).max(120)),
+  controlFamily: optional(singleLineText().trim().min(1).max(120)),
   minOemLevel: optional(z.coerce.number().int().min(1).max(3)),
   technology: optional(z.enum(machineTechnologies)),
   minEachOccurrence: optional(dollars),
@@ -47,10 +47,10 @@ export const directoryQuerySchema = z.object({
   siteId: optional(idParam),
   radiusKm: optional(z.coerce.number().positive().max(MAX_RADIUS_KM)),
   minRating: optional(z.coerce.number().min(1).max(5)),
-  q: optional(z.string().trim().min(1).max(100)),
+  q: optional(singleLineText().trim().min(1).max(100)),
   equipmentId: optional(idParam),
   sort: optional(z.enum(directorySorts)),
-  cursor: optional(z.string().max(400)),
+  cursor: optional(singleLineText().max(400)),
   limit: z.preprocess(
     (v) => (v === "" ? undefined : v),
     z.coerce.number().int().min(1).max(MAX_PAGE_SIZE).default(20),

@@ -1,5 +1,8 @@
 import { z } from "zod";
+import { multiLineText } from "../api/text.ts";
 import { idParam } from "../credentials/schemas.ts";
+import type { ProfileReviewDto } from "../directory/schemas.ts";
+import type { PUBLIC_REVIEW_FIELDS } from "../visibility/technician-visibility.ts";
 
 export const reviewParamsSchema = z.object({ reviewId: idParam });
 export const technicianReviewsParamsSchema = z.object({ technicianId: idParam });
@@ -10,16 +13,16 @@ export const MAX_STARS = 5;
 /** Only the stars and the words come from the client; the work order decides who is rated and by whom. */
 export const writeReviewSchema = z.object({
   stars: z.number().int().min(MIN_STARS).max(MAX_STARS),
-  body: z.string().trim().min(10, "Say something about the job (at least 10 characters)").max(5000),
+  body: multiLineText().trim().min(10, "Say something about the job (at least 10 characters)").max(5000),
 });
 export type WriteReview = z.infer<typeof writeReviewSchema>;
 
 export const replyToReviewSchema = z.object({
-  body: z.string().trim().min(2, "Write a reply").max(5000),
+  body: multiLineText().trim().min(2, "Write a reply").max(5000),
 });
 
 export const reportReviewSchema = z.object({
-  reason: z.string().trim().min(5, "Say what is wrong with it (at least 5 characters)").max(1000),
+  reason: multiLineText().trim().min(5, "Say what is wrong with it (at least 5 characters)").max(1000),
 });
 
 export const technicianReviewsQuerySchema = z.object({
@@ -42,11 +45,14 @@ export interface ReviewDto {
   createdAt: string;
 }
 
+/** What anyone outside the job reads of a review: the fields PUBLIC_REVIEW_FIELDS names in the shared visibility rule. */
+export type PublicReviewDto = Pick<ProfileReviewDto, (typeof PUBLIC_REVIEW_FIELDS)[number]>;
+
 export interface TechnicianReviewsDto {
   /** Mean stars, null when there are none; always shown with its count. */
   average: number | null;
   count: number;
-  items: ReviewDto[];
+  items: PublicReviewDto[];
 }
 
 export interface ReportedReviewDto extends ReviewDto {

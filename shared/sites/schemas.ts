@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { singleLineText } from "../api/text.ts";
 import { postalCodeSchema, timeZoneSchema } from "../accounts/schemas.ts";
 import { idParam } from "../credentials/schemas.ts";
 import { machineTechnologies, type MachineTechnology } from "../technicians/schemas.ts";
@@ -9,8 +10,8 @@ export const postalCodeParamsSchema = z.object({ code: postalCodeSchema });
 
 /** A shop's site as the buyer's form sends it; the time zone is suggested from the ZIP code when left out. */
 export const siteInputSchema = z.object({
-  name: z.string().trim().min(2, "Name the site").max(160),
-  addressLine: z.string().trim().min(3, "Enter the street address").max(200),
+  name: singleLineText().trim().min(2, "Name the site").max(160),
+  addressLine: singleLineText().trim().min(3, "Enter the street address").max(200),
   postalCode: postalCodeSchema,
   timeZone: timeZoneSchema.optional(),
 });
@@ -25,11 +26,11 @@ export const listSitesQuerySchema = z.object({
 
 /** One machine at a site; picking it in the directory fills the technology and control-family filters. */
 export const equipmentInputSchema = z.object({
-  builder: z.string().trim().min(1, "Enter the machine builder").max(120),
-  controlFamily: z.string().trim().min(1, "Enter the control family").max(120),
+  builder: singleLineText().trim().min(1, "Enter the machine builder").max(120),
+  controlFamily: singleLineText().trim().min(1, "Enter the control family").max(120),
   technology: z.enum(machineTechnologies),
-  model: z.string().trim().min(1, "Enter the model").max(120),
-  serialNumber: z.string().trim().max(80).optional(),
+  model: singleLineText().trim().min(1, "Enter the model").max(120),
+  serialNumber: singleLineText().trim().max(80).optional(),
 });
 export type EquipmentInput = z.infer<typeof equipmentInputSchema>;
 

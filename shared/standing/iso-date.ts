@@ -28,7 +28,23 @@ export function daysInMonth(year: number, month: number): number {
   return days;
 }
 
+/**
+ * Milliseconds since the epoch of a UTC wall-clock time. `Date.UTC` reads years 0 to 99 as 1900 to 1999, which would
+ * make a date's computed lapse disagree with the date itself; setting the full year keeps every year as written.
+ */
+export function utcMilliseconds(year: number, monthIndex: number, day: number, hour = 0, minute = 0): number {
+  const instant = new Date(0);
+  instant.setUTCFullYear(year, monthIndex, day);
+  instant.setUTCHours(hour, minute, 0, 0);
+  return instant.getTime();
+}
+
 export function addCalendarDays(isoDate: string, days: number): string {
   const { year, month, day } = parseIsoDate(isoDate);
-  return new Date(Date.UTC(year, month - 1, day + days)).toISOString().slice(0, 10);
+  const moved = new Date(utcMilliseconds(year, month - 1, day + days));
+  return formatIsoDate({
+    year: moved.getUTCFullYear(),
+    month: moved.getUTCMonth() + 1,
+    day: moved.getUTCDate(),
+  });
 }

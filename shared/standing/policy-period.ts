@@ -1,5 +1,5 @@
 import { DateTime } from "luxon";
-import { parseIsoDate } from "./iso-date.ts";
+import { parseIsoDate, utcMilliseconds } from "./iso-date.ts";
 
 const MINUTES_PAST_MIDNIGHT = 1; // 12:01 a.m. (TRADE-FACTS 1.1)
 const MS_PER_MINUTE = 60_000;
@@ -21,7 +21,7 @@ export function standardOffsetMinutes(timeZone: string, year: number): number {
  */
 export function policyCutoffInstant(isoDate: string, timeZone: string): Date {
   const { year, month, day } = parseIsoDate(isoDate);
-  const wallClockAsUtc = Date.UTC(year, month - 1, day, 0, MINUTES_PAST_MIDNIGHT);
+  const wallClockAsUtc = utcMilliseconds(year, month - 1, day, 0, MINUTES_PAST_MIDNIGHT);
   return new Date(wallClockAsUtc - standardOffsetMinutes(timeZone, year) * MS_PER_MINUTE);
 }
 

@@ -71,4 +71,8 @@ export interface JobRunDto {
   startedAt: string;
   finishedAt: string | null;
   counts: Record<string, unknown>;
+  /** Which attempt of its scheduled tick this run was (1 = on time, 2+ = a retry after a failure). */
+  attempt: number;
+  /** Why the run failed; null for a run that finished. */
+  error: string | null;
 }

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { singleLineText } from "../api/text.ts";
 import { postalCodeSchema } from "../accounts/schemas.ts";
 
 export const machineTechnologies = [
@@ -31,15 +32,15 @@ export const technologyLabels: Record<MachineTechnology, string> = {
 const money = (label: string) => z.number().int(`${label} in whole cents`).min(0).max(10_000_00);
 
 export const technicianInputSchema = z.object({
-  name: z.string().trim().min(2, "Enter the technician's name").max(160),
+  name: singleLineText().trim().min(2, "Enter the technician's name").max(160),
   email: z
     .email()
     .max(254)
     .optional()
     .or(z.literal("").transform(() => undefined)),
-  phone: z.string().trim().max(40).optional(),
+  phone: singleLineText().trim().max(40).optional(),
   technologies: z.array(z.enum(machineTechnologies)).max(10).default([]),
-  controlFamilies: z.array(z.string().trim().min(1).max(80)).max(20).default([]),
+  controlFamilies: z.array(singleLineText().trim().min(1).max(80)).max(20).default([]),
   postalCode: postalCodeSchema,
   serviceRadiusKm: z.number().int().min(1, "At least 1 km").max(2000),
   hourlyRateCents: money("Hourly rate"),

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { singleLineText, multiLineText } from "../api/text.ts";
 import { idParam } from "../credentials/schemas.ts";
 import { isoDateSchema } from "../credentials/credential-fields.ts";
 import type { StandingSnapshot } from "./standing-snapshot.ts";
@@ -29,8 +30,8 @@ export const raiseWorkOrderSchema = z.object({
   /** Null or absent = the platform baseline only. */
   requirementSetId: idParam.nullable().optional(),
   // Taken from the machine when one is chosen and this is left out.
-  technology: z.string().trim().min(1).max(40).optional(),
-  problem: z.string().trim().min(10, "Describe the problem (at least 10 characters)").max(5000),
+  technology: singleLineText().trim().min(1).max(40).optional(),
+  problem: multiLineText().trim().min(10, "Describe the problem (at least 10 characters)").max(5000),
   urgency: z.enum(urgencies).default("normal"),
   preferredDates: z
     .array(isoDateSchema)
@@ -40,7 +41,7 @@ export const raiseWorkOrderSchema = z.object({
 export type RaiseWorkOrder = z.infer<typeof raiseWorkOrderSchema>;
 
 export const declineWorkOrderSchema = z.object({
-  reason: z.string().trim().min(5, "Say why (at least 5 characters)").max(1000),
+  reason: multiLineText().trim().min(5, "Say why (at least 5 characters)").max(1000),
 });
 
 // Hours are recorded to the quarter hour or finer; 2 decimals is what the column keeps.
@@ -49,7 +50,7 @@ const hoursSchema = z.number().min(0).max(999).multipleOf(0.01);
 export const completeWorkOrderSchema = z.object({
   hoursWorked: hoursSchema.refine((h) => h > 0, "Hours worked must be more than 0"),
   travelHours: hoursSchema,
-  note: z.string().trim().max(5000).optional(),
+  note: multiLineText().trim().max(5000).optional(),
 });
 export type CompleteWorkOrder = z.infer<typeof completeWorkOrderSchema>;
 
@@ -59,7 +60,7 @@ export const listWorkOrdersQuerySchema = z.object({
 
 /** The message text as a form field (multipart) or JSON; the file, when any, is the multipart part `file`. */
 export const postMessageSchema = z.object({
-  body: z.string().trim().min(1, "Write a message").max(5000),
+  body: multiLineText().trim().min(1, "Write a message").max(5000),
 });
 
 export const standingProofQuerySchema = z.object({

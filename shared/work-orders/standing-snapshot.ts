@@ -8,6 +8,8 @@ export interface SnapshotCredential {
   typeName: string;
   /** Policy number, card number, license or certificate number: whatever the document is known by. */
   reference: string | null;
+  /** The field the reference was read from (policyNumber, cardNumber...), so each reader's field rule can apply to it. */
+  referenceField?: string | null;
   /** First instant it no longer counts (ISO), null = never. */
   lapsesAt: string | null;
 }
@@ -61,12 +63,12 @@ export function isClearedNow(standing: Standing): boolean {
   return standing !== "not_cleared";
 }
 
-/** The number a document is known by, from whichever field its field set carries. */
-export function credentialReference(fields: CredentialFields): string | null {
-  if ("policyNumber" in fields) return fields.policyNumber;
-  if ("licenseNumber" in fields) return fields.licenseNumber;
-  if ("certificateNumber" in fields) return fields.certificateNumber;
-  if ("cardNumber" in fields) return fields.cardNumber ?? null;
+/** The number a document is known by, and the field it came from, whichever field its field set carries. */
+export function credentialReference(fields: CredentialFields): { field: string; value: string } | null {
+  if ("policyNumber" in fields) return { field: "policyNumber", value: fields.policyNumber };
+  if ("licenseNumber" in fields) return { field: "licenseNumber", value: fields.licenseNumber };
+  if ("certificateNumber" in fields) return { field: "certificateNumber", value: fields.certificateNumber };
+  if ("cardNumber" in fields && fields.cardNumber) return { field: "cardNumber", value: fields.cardNumber };
   return null;
 }
 
@@ -86,6 +88,7 @@ export function buildStandingSnapshot(input: SnapshotInput): StandingSnapshot {
     earliestLapse: result.earliestLapse,
     requirements: result.results.map((r) => {
       const source = r.credentialId === null ? undefined : input.credentials.get(r.credentialId);
+      const reference = source ? credentialReference(source.fields) : null;
       return {
         label: r.requirement.label,
         status: r.status,
@@ -96,7 +99,8 @@ export function buildStandingSnapshot(input: SnapshotInput): StandingSnapshot {
               id: source.id,
               typeCode: source.typeCode,
               typeName: input.typeNames.get(source.typeCode) ?? source.typeCode,
-              reference: credentialReference(source.fields),
+              reference: reference?.value ?? null,
+              referenceField: reference?.field ?? null,
               lapsesAt: r.lapsesAt,
             }
           : null,

@@ -106,4 +106,38 @@ describe("authorisation matrix", () => {
 
     expect(wrong).toEqual([]);
   });
+
+  it("lets every role call each signed-in route, and answers a missing record id with 404", async () => {
+    const wrong: string[] = [];
+    const signedInRoutes = routeTable.filter((r) => r.policy.roles === "signed_in");
+    for (const r of signedInRoutes) {
+      for (const role of roles) {
+        const res = await call(agents[role], r.method, concretePath(r.path)).send({});
+        if (res.status === 401 || res.status === 403 || res.status >= 500)
+          wrong.push(`${role} ${r.method} ${r.path} -> ${res.status}`);
+        if (/:[A-Za-z]+Id\b/.test(r.path) && res.status !== 404)
+          wrong.push(`${role} ${r.method} ${r.path} -> ${res.status} for a missing id`);
+      }
+    }
+
+    expect(signedInRoutes.length).toBeGreaterThanOrEqual(4);
+    expect(wrong).toEqual([]);
+  });
+
+  it("checks ownership on every route that names a record, unless its service scopes the record by the caller", () => {
+    // Each of these looks its record up only among the caller's own rows (the cross-company walk proves it).
+    const scopedByCaller = new Set(["post /api/notifications/:notificationId/read"]);
+    // Reviewers and admins work on every company's records by their role; only company roles need an ownership check.
+    const platformOnly = (r: (typeof routeTable)[number]) =>
+      Array.isArray(r.policy.roles) &&
+      r.policy.roles.every((role) => role === "reviewer" || role === "admin");
+
+    const unguarded = routeTable
+      .filter((r) => /:[A-Za-z]+Id\b/.test(r.path) && !r.policy.owns && r.policy.roles !== "anyone")
+      .filter((r) => !platformOnly(r))
+      .map((r) => `${r.method} ${r.path}`)
+      .filter((r) => !scopedByCaller.has(r));
+
+    expect(unguarded).toEqual([]);
+  });
 });

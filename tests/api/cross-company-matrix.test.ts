@@ -6,6 +6,9 @@ import { submitLiabilityCertificate } from "../support/submit-credential.ts";
 import { routeTable } from "../../server/http/route.ts";
 import type { Role } from "../../shared/accounts/schemas.ts";
 import { CSRF_HEADER, CSRF_HEADER_VALUE } from "../../shared/api/error-body.ts";
+import { atLeast, technicianViewLevel } from "../../shared/visibility/technician-visibility.ts";
+import { sequelize } from "../support/test-app.ts";
+import { QueryTypes } from "sequelize";
 
 let t: TestApp;
 let owner: WorkOrderWorld;
@@ -31,7 +34,14 @@ beforeAll(async () => {
   const review = await owner.shop.agent
     .post(`/api/work-orders/${workOrderId}/review`)
     .send({ stars: 5, body: "Found the encoder fault in an hour." });
+  // A notification of the owner's buyer, so the signed-in "mark as read" route is walked with a real foreign id.
+  const [notification] = await sequelize().query<{ id: number }>(
+    `INSERT INTO notifications (user_id, kind, title, body, link) VALUES ($1, 'test', 'Spindle Works roster note', 'For the owner only', '/roster')
+     RETURNING id`,
+    { bind: [owner.shop.user.id], type: QueryTypes.SELECT },
+  );
   Object.assign(ids, {
+    notificationId: String(notification!.id),
     technicianId: String(owner.provider.technician.id),
     credentialId: String(credential.id),
     documentId: String(credential.documentId),
@@ -47,11 +57,20 @@ beforeAll(async () => {
 }, 120_000);
 afterAll(() => t.close());
 
-// Where a policy deliberately reaches across companies: buyers browse technicians of every service company.
-const OPEN_BY_DESIGN = new Set([
-  "buyer get /api/technicians/:technicianId",
-  "buyer get /api/directory/technicians/:technicianId",
-]);
+// Shops may see another company's listed technician: the shared visibility rule decides what a shop of another company
+// gets on a route about a technician (the owner's technician is listed: active with verified insurance).
+const strangerShopSeesListed = atLeast(
+  technicianViewLevel(
+    { role: "buyer", sameCompany: false, isSelf: false, engaged: false },
+    { active: true, baseline: "cleared" },
+  ),
+  "directory",
+);
+const openByRule = (role: Role, path: string) =>
+  role === "buyer" && path.includes(":technicianId") && strangerShopSeesListed;
+
+/** Routes any signed-in user may call, each role taking the part of the intruder. */
+const SIGNED_IN_INTRUDERS: Role[] = ["provider_admin", "technician", "buyer"];
 
 const withIds = (path: string, missing: boolean) =>
   path.replace(/:([A-Za-z]+)/g, (_m, name: string) => (missing && name !== "page" ? "99999999" : ids[name]!));
@@ -73,13 +92,23 @@ describe("another company's records", () => {
     const wrong: string[] = [];
     let checked = 0;
 
-    for (const route of routeTable.filter((r) => r.policy.owns && Array.isArray(r.policy.roles))) {
-      for (const role of (route.policy.roles as Role[]).filter(
-        (r) => r === "provider_admin" || r === "technician" || r === "buyer",
-      )) {
-        if (OPEN_BY_DESIGN.has(`${role} ${route.method} ${route.path}`)) continue;
+    // Owned routes, and signed-in routes that name a record in their path (each scopes it by the caller).
+    const walked = routeTable.filter(
+      (r) =>
+        (r.policy.owns && Array.isArray(r.policy.roles)) ||
+        (r.policy.roles === "signed_in" && /:[A-Za-z]+Id\b/.test(r.path)),
+    );
+    for (const route of walked) {
+      const permitted =
+        route.policy.roles === "signed_in" ? SIGNED_IN_INTRUDERS : (route.policy.roles as Role[]);
+      for (const role of permitted.filter((r) => SIGNED_IN_INTRUDERS.includes(r))) {
         checked += 1;
         const foreign = await call(intruder(role), route.method, withIds(route.path, false));
+        if (openByRule(role, route.path)) {
+          if (foreign.status !== 200)
+            wrong.push(`${role} ${route.method} ${route.path} -> ${foreign.status} (rule: visible)`);
+          continue;
+        }
         const missing = await call(intruder(role), route.method, withIds(route.path, true));
         if (foreign.status !== 404 || JSON.stringify(foreign.body) !== JSON.stringify(missing.body)) {
           wrong.push(
@@ -89,10 +118,42 @@ describe("another company's records", () => {
       }
     }
 
-    expect(Object.keys(ids).length).toBe(11);
+    expect(Object.keys(ids).length).toBe(12);
+    expect(walked.some((r) => r.policy.roles === "signed_in")).toBe(true);
     expect(checked).toBeGreaterThan(40);
     expect(wrong).toEqual([]);
   }, 120_000);
+
+  it("never shows another company's names or e-mails on a signed-in route that takes no record id", async () => {
+    const secrets = [
+      owner.shop.company.name,
+      owner.shop.user.email,
+      owner.provider.company.name,
+      owner.provider.technician.name,
+      owner.provider.adminUser.email,
+      "Spindle Works roster note",
+    ];
+    const leaks: string[] = [];
+    let checked = 0;
+
+    for (const route of routeTable.filter((r) => r.policy.roles === "signed_in" && r.method === "get")) {
+      for (const role of SIGNED_IN_INTRUDERS) {
+        checked += 1;
+        const res = await call(
+          intruder(role),
+          route.method,
+          withIds(route.path.replace(":code", "60601"), false),
+        );
+        const text = JSON.stringify(res.body);
+        for (const secret of secrets)
+          if (text.includes(secret)) leaks.push(`${role} ${route.path}: ${secret}`);
+        if (res.status >= 400) leaks.push(`${role} ${route.path} -> ${res.status}`);
+      }
+    }
+
+    expect(checked).toBeGreaterThanOrEqual(9);
+    expect(leaks).toEqual([]);
+  });
 
   it("still lets the owners themselves reach those records", async () => {
     const own = await owner.provider.admin.get(`/api/credentials/${ids.credentialId}`);

@@ -14,7 +14,8 @@ describe("job schedule", () => {
     const nextLapse = byName.get("lapse")?.getNextRun();
     await schedule.stop();
 
-    expect([...byName.keys()]).toEqual(["lapse", "reviewer-digest", "outbox"]);
+    expect([...byName.keys()]).toEqual(["lapse", "reviewer-digest", "upload-sweep", "job-retries", "outbox"]);
+    expect(byName.get("job-retries")?.getPattern()).toBe("* * * * *");
     expect(byName.get("outbox")?.getPattern()).toBe("* * * * *");
     // 06:00 in Chicago is 11:00Z in summer (CDT, UTC-5) and 12:00Z in winter (CST, UTC-6): IANA zone data.
     expect(nextLapse && [11, 12]).toContain(nextLapse?.getUTCHours());

@@ -14,7 +14,7 @@ export async function startServerProcess(
     const timer = setTimeout(() => reject(new Error(`server did not start: ${seen.slice(-2000)}`)), 30_000);
     const onData = (chunk: Buffer) => {
       seen += chunk.toString();
-      const match = /"port":(\d+),"msg":"server listening"/.exec(seen);
+      const match = /"port":(\d+),"msg":"server ready"/.exec(seen);
       if (match) {
         clearTimeout(timer);
         resolve(Number(match[1]));

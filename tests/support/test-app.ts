@@ -6,7 +6,7 @@ import { configureLog } from "../../server/log.ts";
 import { connectDatabase, db } from "../../server/db/sequelize.ts";
 import { initModels } from "../../server/db/associations.ts";
 import { createApp } from "../../server/app.ts";
-import { setPasswordCost } from "../../server/accounts/passwords.ts";
+import { setHashConcurrency, setPasswordCost } from "../../server/accounts/passwords.ts";
 import { CSRF_HEADER, CSRF_HEADER_VALUE } from "../../shared/api/error-body.ts";
 
 export interface TestApp {
@@ -22,6 +22,7 @@ export function buildTestApp(overrides: Record<string, string> = {}): TestApp {
   const config = loadConfig({ ...process.env, ...overrides });
   configureLog(config.LOG_LEVEL);
   setPasswordCost(config.BCRYPT_COST);
+  setHashConcurrency(config.HASH_CONCURRENCY, config.HASH_QUEUE);
   if (!connected) {
     initModels(connectDatabase(config.DATABASE_URL!));
     connected = true;

@@ -1,9 +1,9 @@
-import { execFile } from "node:child_process";
-import { access, mkdtemp, readdir, rm, writeFile } from "node:fs/promises";
+import { access, mkdtemp, rm, writeFile } from "node:fs/promises";
 import { constants } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { DocumentUnreadableError } from "./document-unreadable-error.ts";
+import { ChildFailedError, MAX_OCR_PIXELS, pdfPageSizes, renderDpi, runBounded } from "./render-bounds.ts";
 
 export interface OcrOptions {
   timeoutMs?: number;
@@ -44,25 +44,19 @@ export async function isOcrAvailable(options: OcrOptions = {}): Promise<boolean>
   return ocr && render;
 }
 
-function run(file: string, args: string[], timeoutMs: number): Promise<string> {
-  return new Promise((resolve, reject) => {
-    execFile(
-      file,
-      args,
-      {
-        timeout: Math.max(1, timeoutMs),
-        killSignal: "SIGKILL",
-        env: CHILD_ENV,
-        maxBuffer: MAX_OUTPUT_BYTES,
-        encoding: "utf8",
-      },
-      (error, stdout) => {
-        if (!error) return resolve(stdout);
-        if (error.killed || error.signal === "SIGKILL") return reject(new DocumentUnreadableError("timeout"));
-        reject(new DocumentUnreadableError("corrupt", `${file.split("/").pop()} failed`));
-      },
-    );
-  });
+/** A poppler or tesseract child, through the shared queue and under the memory cap (render-bounds.ts). */
+async function run(file: string, args: string[], timeoutMs: number): Promise<string> {
+  if (timeoutMs <= 0) throw new DocumentUnreadableError("timeout");
+  return runBounded(file, args, { timeoutMs, env: CHILD_ENV, maxBuffer: MAX_OUTPUT_BYTES }).catch(
+    (err: unknown) => {
+      if (err instanceof ChildFailedError) {
+        throw err.timedOut
+          ? new DocumentUnreadableError("timeout")
+          : new DocumentUnreadableError("corrupt", err.message);
+      }
+      throw err;
+    },
+  );
 }
 
 async function withTempDir<T>(work: (dir: string) => Promise<T>): Promise<T> {
@@ -87,31 +81,47 @@ export async function ocrImage(input: string | Uint8Array, options: OcrOptions =
   });
 }
 
-/** Text of a scanned PDF: its first pages rendered by pdftoppm, then read by tesseract, all within one time limit. */
+/**
+ * Text of a scanned PDF: its first pages rendered by pdftoppm one at a time, each at a resolution chosen from its size
+ * so no render exceeds MAX_OCR_PIXELS, then read by tesseract, all within one time limit.
+ */
 export async function ocrPdf(bytes: Uint8Array, options: PdfOcrOptions = {}): Promise<string> {
   if (bytes.byteLength === 0) throw new DocumentUnreadableError("empty");
   const deadline = Date.now() + (options.timeoutMs ?? DEFAULT_TIMEOUT_MS);
-  const pages = String(options.maxPages ?? DEFAULT_OCR_PAGES);
+  const pages = options.maxPages ?? DEFAULT_OCR_PAGES;
   return withTempDir(async (dir) => {
     const pdfPath = join(dir, "document.pdf");
     await writeFile(pdfPath, bytes);
-    const renderArgs = [
-      "-r",
-      String(options.dpi ?? DEFAULT_DPI),
-      "-f",
-      "1",
-      "-l",
-      pages,
-      "-png",
-      pdfPath,
-      join(dir, "page"),
-    ];
-    await run(options.pdftoppmPath ?? PDFTOPPM, renderArgs, deadline - Date.now());
-    const images = (await readdir(dir)).filter((name) => name.endsWith(".png")).sort();
+    const sizes = await pdfPageSizes(pdfPath, 1, pages, Math.max(1, deadline - Date.now()));
+    if (sizes.length === 0) throw new DocumentUnreadableError("corrupt", "no page sizes");
     const texts: string[] = [];
-    for (const image of images) {
-      texts.push(await ocrImage(join(dir, image), { ...options, timeoutMs: deadline - Date.now() }));
+    for (const size of sizes) {
+      const dpi = renderDpi(size, options.dpi ?? DEFAULT_DPI, MAX_OCR_PIXELS);
+      const out = join(dir, `page-${size.page}`);
+      const renderArgs = [
+        "-r",
+        String(dpi),
+        "-f",
+        String(size.page),
+        "-l",
+        String(size.page),
+        "-singlefile",
+        "-png",
+        pdfPath,
+        out,
+      ];
+      await run(options.pdftoppmPath ?? PDFTOPPM, renderArgs, deadline - Date.now());
+      const image = `${out}.png`;
+      if (!(await isReadable(image))) throw new DocumentUnreadableError("corrupt", "page did not render");
+      texts.push(await ocrImage(image, { ...options, timeoutMs: deadline - Date.now() }));
     }
     return texts.join("\n");
   });
+}
+
+async function isReadable(path: string): Promise<boolean> {
+  return access(path, constants.R_OK).then(
+    () => true,
+    () => false,
+  );
 }

@@ -114,3 +114,40 @@ describe("password reset", () => {
     expect(newPassword.status).toBe(200);
   });
 });
+
+describe("after a password reset", () => {
+  it("ends the user's other sessions and revokes the other outstanding links", async () => {
+    const quick = buildTestApp({ RESET_EMAIL_INTERVAL_MINUTES: "0" });
+    const { users } = await buildCompany("shop", ["buyer"]);
+    const email = users.buyer!.email;
+    const elsewhere = agentFor(quick.app);
+    await elsewhere.post("/api/auth/sign-in").send({ email, password: TEST_PASSWORD }).expect(200);
+    const bystander = (await buildCompany("shop", ["buyer"])).users.buyer!;
+    const other = agentFor(quick.app);
+    await other
+      .post("/api/auth/sign-in")
+      .send({ email: bystander.email, password: TEST_PASSWORD })
+      .expect(200);
+    await agentFor(quick.app).post("/api/auth/password-reset").send({ email }).expect(202);
+    await agentFor(quick.app).post("/api/auth/password-reset").send({ email }).expect(202);
+    await mail.deliver();
+    const [older, newer] = mail.to(email).map((m) => linkToken(m.text));
+
+    const used = await agentFor(quick.app)
+      .post("/api/auth/set-password")
+      .send({ token: newer, password: "after the reset 2026" });
+    const oldLink = await agentFor(quick.app)
+      .post("/api/auth/set-password")
+      .send({ token: older, password: "someone else's try" });
+    const elsewhereMe = await elsewhere.get("/api/auth/me");
+    const otherMe = await other.get("/api/auth/me");
+    await quick.close();
+
+    expect(older).toBeDefined();
+    expect(newer).toBeDefined();
+    expect(used.status).toBe(204);
+    expect(oldLink.status).toBe(422);
+    expect(elsewhereMe.status).toBe(401);
+    expect(otherMe.status).toBe(200);
+  });
+});

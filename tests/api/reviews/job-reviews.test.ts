@@ -211,11 +211,11 @@ describe("a technician's reviews", () => {
     const world = await buildWorkOrderWorld(t.app);
     const first = await workOrderAt(world, "confirmed");
     const second = await workOrderAt(world, "confirmed");
-    await world.shop.agent
+    const older = await world.shop.agent
       .post(`/api/work-orders/${first}/review`)
       .send({ stars: 5, body: "Excellent, fast and careful." })
       .expect(201);
-    await world.shop.agent
+    const newer = await world.shop.agent
       .post(`/api/work-orders/${second}/review`)
       .send({ stars: 2, body: "Late, and left swarf everywhere." })
       .expect(201);
@@ -225,7 +225,7 @@ describe("a technician's reviews", () => {
     expect(res.status).toBe(200);
     expect(res.body.count).toBe(2);
     expect(res.body.average).toBe(3.5);
-    expect(res.body.items.map((r: { workOrderId: number }) => r.workOrderId)).toEqual([second, first]);
+    expect(res.body.items.map((r: { id: number }) => r.id)).toEqual([newer.body.id, older.body.id]);
     expect(await ratingOf(world.provider.technician.id)).toEqual({ review_count: 2, star_sum: 7 });
   });
 

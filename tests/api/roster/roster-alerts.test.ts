@@ -3,6 +3,7 @@ import { QueryTypes } from "sequelize";
 import { agentFor, buildTestApp, sequelize, type TestApp } from "../../support/test-app.ts";
 import { buildCompany, TEST_PASSWORD } from "../../support/build-company.ts";
 import { emitStandingsChanged, type ChangedStanding } from "../../../server/standing/index.ts";
+import { sweepRosterAlerts } from "../../../server/roster/index.ts";
 import { Technician } from "../../../server/technicians/model.ts";
 import type { Standing } from "../../../shared/standing/standing-types.ts";
 
@@ -148,5 +149,47 @@ describe("roster alerts", () => {
 
     expect((await alertsFor(buyer.id, buyer.email)).notifications).toEqual([]);
     expect((await alertsFor(stranger.buyer.id, stranger.buyer.email)).notifications).toEqual([]);
+  });
+
+  it("never names a technician of a rostered company who was never listed, on a change or in the daily sweep", async () => {
+    const { agent, buyer, provider } = await shopWithRoster();
+    await agent.post("/api/roster").send({ serviceCompanyId: provider.id }).expect(201);
+    const hidden = await Technician.create({
+      companyId: provider.id,
+      name: `Perpetua Lindqvist ${provider.id}`,
+      email: null,
+      phone: null,
+      technologies: ["lathe"],
+      controlFamilies: [],
+      postalCode: "60601",
+      latitude: 41.8858,
+      longitude: -87.6181,
+      serviceRadiusKm: 100,
+      hourlyRateCents: 13000,
+      travelRateCents: 9000,
+    });
+    await storeBaseline(hidden.id, "not_cleared", null, [lapsedGl]);
+
+    await emitStandingsChanged([
+      { ...change(hidden.id, provider.id, "cleared", "not_cleared"), before: null },
+    ]);
+    await sweepRosterAlerts();
+
+    const { notifications, mails } = await alertsFor(buyer.id, buyer.email);
+    expect(notifications.map((n) => n.title).join(" ")).not.toContain("Perpetua");
+    expect(mails.map((m) => m.subject).join(" ")).not.toContain("Perpetua");
+  });
+
+  it("still tells a shop that rostered only the company when a listed technician leaves the directory", async () => {
+    const { agent, buyer, technician, provider } = await shopWithRoster();
+    await agent.post("/api/roster").send({ serviceCompanyId: provider.id }).expect(201);
+    await storeBaseline(technician.id, "not_cleared", null, [lapsedGl]);
+
+    await emitStandingsChanged([change(technician.id, provider.id, "cleared", "not_cleared")]);
+
+    const { notifications } = await alertsFor(buyer.id, buyer.email);
+    expect(notifications).toEqual([
+      { kind: "roster_stopped_clearing", title: expect.stringContaining(technician.name) },
+    ]);
   });
 });

@@ -61,6 +61,8 @@ describe("raising a work order at the moment a policy lapses", () => {
   it("accepts the same request one second before the lapse (the technician is then lapsing, still cleared)", async () => {
     const expirationDate = yesterday();
     const world = await buildWorkOrderWorld(t.app, { generalLiabilityExpires: expirationDate });
+    // A second before the lapse the stored standing still listed the technician, so the shop could find them.
+    await storeClearedBaseline(world);
     const lapse = policyEndInstant(expirationDate, "America/Chicago");
 
     const res = await raiseAt(world, new Date(lapse.getTime() - 1000));

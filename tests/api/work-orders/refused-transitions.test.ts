@@ -162,17 +162,20 @@ describe("raising a work order", () => {
     expect(foreignSetRes.body.error.fields[0].path).toBe("body.requirementSetId");
   });
 
-  it("answers 409 with the reason for a technician whose company has no workers' compensation on file", async () => {
+  it("refuses a technician the directory does not list exactly like an unknown one, naming no reason", async () => {
     const world = await buildWorkOrderWorld(t.app);
+    // No verified insurance at all: never cleared, so never shown to shops.
     const bare = await buildProvider(t.app);
 
     const res = await world.shop.agent
       .post("/api/work-orders")
       .send(raiseBody(world, { technicianId: bare.technician.id }));
+    const unknown = await world.shop.agent
+      .post("/api/work-orders")
+      .send(raiseBody(world, { technicianId: 99999999 }));
 
-    expect(res.status).toBe(409);
-    const messages = res.body.error.fields.map((f: { message: string }) => f.message).join("\n");
-    expect(messages).toContain("Workers' compensation or a state exemption");
-    expect(messages).toContain("General liability in force");
+    expect(res.status).toBe(422);
+    expect(res.body).toEqual(unknown.body);
+    expect(JSON.stringify(res.body)).not.toContain("Workers' compensation");
   });
 });

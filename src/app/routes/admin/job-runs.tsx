@@ -16,7 +16,7 @@ export function Component() {
     <>
       <PageHeader
         title="Job runs"
-        description="Each run of the scheduled jobs: the instant it judged as of, how long it took and what it changed."
+        description="Each run of the scheduled jobs: the instant it judged as of, how long it took and what it changed. A failed run is retried after 1, 5 and 15 minutes (JOB_RETRY_MINUTES); each failure is listed with its attempt and reason."
         actions={
           <Button
             variant="secondary"

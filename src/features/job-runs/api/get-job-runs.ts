@@ -15,6 +15,8 @@ export const jobRunSchema = z.object({
   startedAt: z.string(),
   finishedAt: z.string().nullable(),
   counts: z.record(z.string(), z.unknown()),
+  attempt: z.number(),
+  error: z.string().nullable(),
 });
 export type JobRun = z.infer<typeof jobRunSchema>;
 

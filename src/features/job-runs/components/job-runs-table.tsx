@@ -6,6 +6,7 @@ import type { JobRun } from "../api/get-job-runs.ts";
 const jobNames: Record<string, string> = {
   lapse: "Daily lapse check",
   reviewer_digest: "Reviewer digest",
+  upload_sweep: "Abandoned uploads sweep",
 };
 
 // `counts` is whatever the job recorded; a job that does not count a thing shows a dash, not a zero.
@@ -18,10 +19,12 @@ const countOf = (run: JobRun, ...keys: string[]): number | null => {
 };
 
 const durationMs = (run: JobRun): number | null =>
-  run.finishedAt === null ? null : new Date(run.finishedAt).getTime() - new Date(run.startedAt).getTime();
+  run.finishedAt === null || run.error !== null
+    ? null
+    : new Date(run.finishedAt).getTime() - new Date(run.startedAt).getTime();
 
 function formatDuration(ms: number | null): string {
-  if (ms === null) return "Not finished";
+  if (ms === null) return "—";
   if (ms < 1000) return `${ms} ms`;
   const seconds = ms / 1000;
   return seconds < 60
@@ -44,6 +47,26 @@ const Count = ({ value }: { value: number | null }) => (
 
 const Instant = ({ iso }: { iso: string | null }) =>
   iso === null ? <>—</> : <time dateTime={iso}>{formatDateTime(iso)}</time>;
+
+/** Failed runs say so in words and with a shape, never by colour alone; the error is shown beside it. */
+function RunResult({ run }: { run: JobRun }) {
+  if (run.error !== null) {
+    return (
+      <span className="flex flex-col">
+        <span className="font-medium text-red-800">
+          <span aria-hidden="true">✕ </span>Failed
+        </span>
+        <span className="text-sm text-ink-700 break-words">{run.error}</span>
+      </span>
+    );
+  }
+  if (run.finishedAt === null) return <span>Running</span>;
+  return (
+    <span>
+      <span aria-hidden="true">✓ </span>Finished
+    </span>
+  );
+}
 
 const column = dataTableColumns<JobRun>();
 
@@ -68,6 +91,22 @@ const columns = column.columns([
     header: "Finished",
     sortFn: "text",
     cell: (info) => <Instant iso={info.getValue()} />,
+  }),
+  column.accessor((run) => (run.error === null ? (run.finishedAt === null ? "running" : "ok") : "failed"), {
+    id: "result",
+    header: "Result",
+    sortFn: "text",
+    cell: (info) => <RunResult run={info.row.original} />,
+  }),
+  column.accessor("attempt", {
+    header: "Attempt",
+    sortFn: "basic",
+    cell: (info) => (
+      <span className="block text-right tabular-nums">
+        {info.getValue()}
+        {info.getValue() > 1 ? <span className="sr-only"> (a retry)</span> : null}
+      </span>
+    ),
   }),
   column.accessor((run) => durationMs(run), {
     id: "duration",
@@ -115,7 +154,7 @@ export function JobRunsTable({ runs }: { runs: JobRun[] }) {
       empty={
         <EmptyState title="No job runs yet">
           The daily lapse check records each run here, whether it runs on the schedule or from the command
-          line.
+          line. A failed run is recorded too, and retried a few minutes later.
         </EmptyState>
       }
     />

@@ -9,7 +9,12 @@ import { TextAreaField } from "@/components/ui/text-area-field.tsx";
 import { TextField } from "@/components/ui/text-field.tsx";
 import { isApiError } from "@/lib/api-client.ts";
 import { fieldErrorsOf } from "@/lib/field-errors.ts";
+import { preferredDateWindow } from "@shared/work-orders/preferred-dates.ts";
+
 import { urgencyWords } from "./work-order-words.ts";
+
+const localIsoDate = (d: Date) =>
+  `${d.getFullYear()}-${String(d.getMonth() + 1).padStart(2, "0")}-${String(d.getDate()).padStart(2, "0")}`;
 
 export type MachineChoice = { id: number; label: string; technology: string };
 
@@ -78,6 +83,8 @@ export function RaiseWorkOrderForm(props: RaiseWorkOrderFormProps) {
   const conflict = isApiError(serverError) && serverError.status === 409;
   const problem = invalid ?? (conflict ? null : serverError);
   const errors = fieldErrorsOf(problem, plainWords);
+  // The reader's own calendar date; the server checks again against its clock.
+  const dateWindow = preferredDateWindow(localIsoDate(new Date()));
 
   const submit = (event: FormEvent<HTMLFormElement>) => {
     event.preventDefault();
@@ -175,7 +182,9 @@ export function RaiseWorkOrderForm(props: RaiseWorkOrderFormProps) {
               label={`Preferred date ${i + 1}`}
               name="preferredDates"
               type="date"
-              error={i === 0 ? errors.preferredDates : undefined}
+              min={dateWindow.earliest}
+              max={dateWindow.latest}
+              error={errors[`preferredDates.${i}`] ?? (i === 0 ? errors.preferredDates : undefined)}
             />
           ))}
         </div>
