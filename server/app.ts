@@ -20,6 +20,7 @@ import { credentialRoutes } from "./credentials/index.ts";
 import { buyerRouters } from "./directory/buyer-routers.ts";
 import { workOrderRoutes } from "./work-orders/index.ts";
 import { reviewRoutes } from "./reviews/index.ts";
+import { companyRoutes } from "./companies/index.ts";
 import { createStorage } from "./storage/index.ts";
 import { createAbuseLimits } from "./accounts/abuse-limits.ts";
 
@@ -40,6 +41,7 @@ const apiRouters = [
   standingApiRoutes,
   workOrderRoutes,
   reviewRoutes,
+  companyRoutes,
   ...buyerRouters,
 ];
 

@@ -12,7 +12,7 @@ function positive(name: string, fallback: number): number {
 
 export const benchSettings = {
   root,
-  /** Seconds of load per HTTP scenario (issue 7: 15 s); BENCH_SECONDS=3 for a quick run. */
+  /** Seconds of load per HTTP scenario (15 s by default); BENCH_SECONDS=3 for a quick run. */
   seconds: positive("BENCH_SECONDS", 15),
   /** Seconds of warm-up before each measured HTTP scenario. */
   warmupSeconds: positive("BENCH_WARMUP_SECONDS", 3),

@@ -6,7 +6,7 @@ import { directoryQuerySchema } from "../../shared/directory/schemas.ts";
 import { searchDirectory } from "../../server/directory/search.ts";
 import { IDS } from "./large-data-sql.ts";
 
-/** Buyer of shop 1, site 1 (a real ZIP centroid); the three filter combinations of issue 7 point 2. */
+/** Buyer of shop 1, site 1 (a real ZIP centroid); the three filter combinations measured. */
 export const BENCH_BUYER = { ordinal: 1, email: "buyer-1@shop.large.test", siteId: 1 };
 
 export const DIRECTORY_SEARCHES: { name: string; label: string; query: Record<string, string> }[] = [

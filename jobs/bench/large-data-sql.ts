@@ -9,7 +9,7 @@ import {
   sqlTextArray,
 } from "./large-data-names.ts";
 
-/** Sizes of the large data set (issue 7 point 1). */
+/** Sizes of the large data set. */
 export const LARGE = {
   serviceCompanies: 3_000,
   technicians: 30_000,

@@ -29,7 +29,7 @@ import { BEHIND_TLS_PROXY, signIn } from "./session-client.ts";
 import { benchUploads } from "./upload-bench.ts";
 
 // `npm run bench`: its own PostgreSQL cluster, the large data set (loaded when absent), the server in production mode
-// as a child process, and every figure of issue 7 in one run. Writes bench/results/latest.json and latest.md.
+// as a child process, and every figure in one run. Writes bench/results/latest.json and latest.md.
 const say = (line: string) => process.stdout.write(`${line}\n`);
 const started = performance.now();
 configureLog("warn");

@@ -4,6 +4,7 @@ import type { InviteUser, SetPassword, SignUp } from "../../shared/accounts/sche
 import { db } from "../db/sequelize.ts";
 import { AppError } from "../http/app-error.ts";
 import { Company } from "../companies/model.ts";
+import { placeOfCompany } from "../companies/index.ts";
 import { enqueueMail } from "../mail/outbox.ts";
 import { recordAudit } from "../audit/index.ts";
 import { User } from "./model.ts";
@@ -27,6 +28,8 @@ const emailTaken = () =>
 export async function signUpCompany(input: SignUp) {
   // A taken e-mail is refused before the costly hash; the unique index still decides a race.
   if (await User.findOne({ where: { email: input.email }, attributes: ["id"] })) throw emailTaken();
+  // The zone of the mailing address, never a choice: every policy period of the company is read in it.
+  const place = placeOfCompany(input.postalCode);
   const passwordHash = await hashPassword(input.password);
   try {
     return await db().transaction(async (transaction) => {
@@ -35,10 +38,10 @@ export async function signUpCompany(input: SignUp) {
           name: input.companyName,
           kind: input.kind,
           addressLine: input.addressLine,
-          postalCode: input.postalCode,
-          timeZone: input.timeZone,
-          latitude: null,
-          longitude: null,
+          postalCode: place.postalCode,
+          timeZone: place.timeZone,
+          latitude: place.latitude,
+          longitude: place.longitude,
         },
         { transaction },
       );

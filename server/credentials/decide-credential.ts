@@ -8,7 +8,7 @@ import { User } from "../accounts/model.ts";
 import { Technician } from "../technicians/model.ts";
 import { refreshStandingsForHolder } from "../standing/index.ts";
 import { toDefinition } from "./catalogue.ts";
-import { lapseInstantFor, parseFields } from "./field-validation.ts";
+import { checkNamedTechnicians, lapseInstantFor, parseFields } from "./field-validation.ts";
 import { Credential, CredentialType } from "./model.ts";
 import { toCredentialDto } from "./dto.ts";
 import { returnedMail, verifiedMail } from "./credential-emails.ts";
@@ -55,6 +55,7 @@ async function applyFieldEdit(
   const type = await CredentialType.findByPk(credential.typeCode, { transaction });
   const company = await Company.findByPk(credential.companyId, { transaction });
   const parsed = parseFields(type!.fieldSet, fields);
+  await checkNamedTechnicians(parsed, credential.companyId);
   const before = credential.fields;
   await credential.update(
     { fields: parsed, lapsesAt: lapseInstantFor(toDefinition(type!), parsed, company!.timeZone) },

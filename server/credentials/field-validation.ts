@@ -3,6 +3,7 @@ import type { CredentialTypeDefinition } from "../../shared/credentials/catalogu
 import { documentDateProblems } from "../../shared/credentials/document-dates.ts";
 import { credentialLapseInstant } from "../../shared/standing/lapse-instant.ts";
 import { AppError } from "../http/app-error.ts";
+import { Technician } from "../technicians/model.ts";
 
 /** Parses fields with the type's own schema; problems are reported under body.fields.<path>. */
 export function parseFields(
@@ -32,6 +33,22 @@ export function parseFields(
     );
   }
   return data;
+}
+
+/** Technicians an exemption names by id must be the company's own; another company's id is refused, never stored. */
+export async function checkNamedTechnicians(
+  fields: Record<string, unknown>,
+  companyId: number,
+  prefix = "body.fields",
+): Promise<void> {
+  const ids = Array.isArray(fields.technicianIds) ? (fields.technicianIds as number[]) : [];
+  if (ids.length === 0) return;
+  const own = await Technician.count({ where: { id: ids, companyId } });
+  if (own !== new Set(ids).size) {
+    throw new AppError("invalid_input", "Some fields need attention", [
+      { path: `${prefix}.technicianIds`, message: "name technicians of this company only" },
+    ]);
+  }
 }
 
 export function lapseInstantFor(

@@ -11,6 +11,7 @@ import { Credential, CredentialType, Document } from "./model.ts";
 import { toCredentialDto, toCredentialDtos } from "./dto.ts";
 import { duplicateForOtherHolder } from "./upload-document.ts";
 import type { Evidence } from "../../shared/credentials/locate-values.ts";
+import { workStatesOf } from "./work-states.ts";
 import { fieldsForBuyers } from "../../shared/credentials/fields-for-buyers.ts";
 
 export async function listOwnCredentials(
@@ -66,6 +67,7 @@ export async function findCredential(user: Express.User, id: number) {
       duplicateOfOtherHolder: document
         ? await duplicateForOtherHolder(document.sha256, document.id, row.companyId, row.technicianId)
         : false,
+      workStates: type!.fieldSet === "exemption" ? await workStatesOf(row.companyId) : [],
     });
   }
   return {

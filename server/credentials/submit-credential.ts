@@ -5,7 +5,7 @@ import { recordAudit } from "../audit/index.ts";
 import { Company } from "../companies/model.ts";
 import { activeType, toDefinition } from "./catalogue.ts";
 import { resolveHolder } from "./resolve-holder.ts";
-import { lapseInstantFor, parseFields } from "./field-validation.ts";
+import { checkNamedTechnicians, lapseInstantFor, parseFields } from "./field-validation.ts";
 import { Credential, Document } from "./model.ts";
 import { toCredentialDto } from "./dto.ts";
 
@@ -20,6 +20,7 @@ export async function submitCredential(user: Express.User, input: SubmitCredenti
     ]);
   }
   const fields = parseFields(type.fieldSet, input.fields);
+  await checkNamedTechnicians(fields, user.companyId);
   const company = await Company.findByPk(user.companyId);
   const lapsesAt = lapseInstantFor(toDefinition(type), fields, company!.timeZone);
 

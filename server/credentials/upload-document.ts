@@ -24,6 +24,7 @@ import { DocumentUnreadableError } from "./extraction/document-unreadable-error.
 import { activeType } from "./catalogue.ts";
 import { resolveHolder } from "./resolve-holder.ts";
 import { Credential, CredentialType, Document } from "./model.ts";
+import { workStatesOf } from "./work-states.ts";
 
 const EXTENSIONS: Record<ExtractableMime, string[]> = {
   "application/pdf": [".pdf"],
@@ -178,6 +179,7 @@ export async function uploadDocument(
       duplicateForOtherHolder(sha256, document.id, user.companyId, technicianId ?? null),
     ]);
     const fields = extraction.proposal?.fields ?? {};
+    const workStates = type.fieldSet === "exemption" ? await workStatesOf(user.companyId) : [];
     const warningsFor = (proposed: object) =>
       reviewerWarnings({
         fieldSet: type.fieldSet,
@@ -185,6 +187,7 @@ export async function uploadDocument(
         companyLegalName: company?.name ?? "",
         technicianName: technician?.name,
         duplicateOfOtherHolder: otherHolder,
+        workStates,
       });
     return {
       document: { id: document.id, name: document.originalName, mime, sizeBytes: file.size, sha256 },

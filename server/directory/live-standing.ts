@@ -38,7 +38,7 @@ function toStandingCredential(row: CredentialRow): StandingCredential | null {
  * technician (e.g. a set created a moment ago).
  */
 export async function computeStandingNow(
-  technician: { id: number; companyId: number; timeZone: string },
+  technician: { id: number; name: string; companyId: number; timeZone: string },
   requirementSets: { id: number; requirements: Requirement[] }[],
   asOf: Date,
 ): Promise<Map<number, StandingResult>> {
@@ -50,6 +50,10 @@ export async function computeStandingNow(
     { bind: [technician.companyId, technician.id], type: QueryTypes.SELECT },
   );
   const credentials = rows.map(toStandingCredential).filter((c): c is StandingCredential => c !== null);
+  const [count] = await db().query<{ headcount: number }>(
+    `SELECT count(*)::int AS headcount FROM technicians WHERE company_id = $1 AND active`,
+    { bind: [technician.companyId], type: QueryTypes.SELECT },
+  );
   for (const set of requirementSets) {
     out.set(
       set.id,
@@ -58,6 +62,8 @@ export async function computeStandingNow(
         technicianCredentials: credentials.filter((c) => c.holder === "technician"),
         requirements: set.requirements,
         companyTimeZone: technician.timeZone,
+        technician: { id: technician.id, name: technician.name },
+        companyHeadcount: count?.headcount ?? 0,
         asOf,
       }),
     );

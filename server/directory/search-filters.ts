@@ -132,7 +132,7 @@ export function buildFilters(p: SqlParams, criteria: DirectoryCriteria): FilterC
     });
   }
   if (criteria.site) {
-    // Inside the technician's own service radius AND the buyer's search radius (DESIGN.md "Distance").
+    // Inside the technician's own service radius AND the buyer's search radius.
     filters.push({
       name: "distance",
       sql: `${boundingBoxSql(p, criteria.site)}

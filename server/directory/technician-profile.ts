@@ -136,7 +136,7 @@ async function toStandings(t: TechnicianRow, asOf: Date): Promise<ProfileStandin
   const rows = t.requirement_sets;
   const missing = rows.filter((r) => r.standing === null);
   const live = await computeStandingNow(
-    { id: t.id, companyId: t.company_id, timeZone: t.time_zone },
+    { id: t.id, name: t.name, companyId: t.company_id, timeZone: t.time_zone },
     missing,
     asOf,
   );

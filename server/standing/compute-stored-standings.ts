@@ -26,6 +26,8 @@ export function computeStandings(
         technicianCredentials,
         requirements: target.requirements,
         companyTimeZone: technician.timeZone,
+        technician: { id: technician.id, name: technician.name },
+        companyHeadcount: technician.companyHeadcount,
         asOf,
         warningDays,
         types: inputs.types,

@@ -11,6 +11,9 @@ export interface StandingTechnician {
   companyId: number;
   active: boolean;
   timeZone: string;
+  name: string;
+  /** Active technicians of the company: an exemption naming fewer people cannot stand in for a policy. */
+  companyHeadcount: number;
 }
 
 /** A requirement set as the engine needs it; `id` null = the platform baseline. */
@@ -36,6 +39,8 @@ interface TechnicianRow {
   company_id: number;
   active: boolean;
   time_zone: string;
+  name: string;
+  headcount: number;
 }
 interface CredentialRow {
   id: number;
@@ -60,8 +65,11 @@ interface TargetRow {
   requirements: Requirement[];
 }
 
-const TECHNICIANS_SQL = `SELECT t.id, t.company_id, t.active, co.time_zone
-  FROM technicians t JOIN companies co ON co.id = t.company_id`;
+// The headcount is one grouped pass over technicians, not a sub-query per row.
+const TECHNICIANS_SQL = `SELECT t.id, t.company_id, t.active, co.time_zone, t.name, COALESCE(hc.headcount, 0) AS headcount
+  FROM technicians t JOIN companies co ON co.id = t.company_id
+  LEFT JOIN (SELECT company_id, count(*)::int AS headcount FROM technicians WHERE active GROUP BY company_id) hc
+    ON hc.company_id = t.company_id`;
 
 async function loadTechnicians(
   selection: HolderSelection,
@@ -75,7 +83,14 @@ async function loadTechnicians(
           `${TECHNICIANS_SQL} WHERE t.company_id = ANY($1::int[]) OR t.id = ANY($2::int[]) ORDER BY t.id`,
           [selection.companyIds, selection.technicianIds],
         );
-  return rows.map((r) => ({ id: r.id, companyId: r.company_id, active: r.active, timeZone: r.time_zone }));
+  return rows.map((r) => ({
+    id: r.id,
+    companyId: r.company_id,
+    active: r.active,
+    timeZone: r.time_zone,
+    name: r.name,
+    companyHeadcount: r.headcount,
+  }));
 }
 
 // Superseded credentials never count (a newer one of the same type was verified); lapsed and returned ones stay so the

@@ -17,6 +17,7 @@ interface TechnicianRow {
   company_id: number;
   company_name: string;
   time_zone: string;
+  headcount: number;
 }
 interface CredentialRow {
   id: number;
@@ -47,7 +48,8 @@ export async function standingSnapshotNow(
   transaction?: Transaction,
 ): Promise<StandingSnapshot> {
   const [technician] = await select<TechnicianRow>(
-    `SELECT t.id, t.name, t.company_id, co.name AS company_name, co.time_zone
+    `SELECT t.id, t.name, t.company_id, co.name AS company_name, co.time_zone,
+            (SELECT count(*)::int FROM technicians x WHERE x.company_id = t.company_id AND x.active) AS headcount
        FROM technicians t JOIN companies co ON co.id = t.company_id WHERE t.id = $1`,
     [technicianId],
     transaction,
@@ -102,6 +104,8 @@ export async function standingSnapshotNow(
         technicianCredentials,
         requirements: target.requirements,
         companyTimeZone: technician.time_zone,
+        technician: { id: technician.id, name: technician.name },
+        companyHeadcount: technician.headcount,
         asOf,
         warningDays,
         types,

@@ -13,7 +13,7 @@ const WORDS = {
   met: "Met",
   unmet: "Not met",
 } as const;
-// A status is never colour alone: each word carries a shape too (DESIGN.md "Look").
+// A status is never colour alone: each word carries a shape too.
 const SHAPES = { cleared: "●", met: "●", lapsing: "▲", not_cleared: "■", unmet: "■" } as const;
 
 export interface ProofSubject {

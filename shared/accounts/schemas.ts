@@ -39,17 +39,50 @@ export const timeZoneSchema = singleLineText()
 
 export const postalCodeSchema = singleLineText().regex(/^\d{5}$/, "Enter a 5-digit ZIP code");
 
+/**
+ * A policy period runs on standard time at the named insured's mailing address (the standard CGL declarations: "12:01
+ * A.M. standard time at your mailing address", wording from memory), so a company's zone is derived from its ZIP code and changes only with
+ * the address; a zone sent on its own is refused.
+ */
+export const zoneFollowsPostalCode = z
+  .unknown()
+  .refine(
+    (value) => value === undefined,
+    "The time zone follows the ZIP code; change the mailing address instead",
+  )
+  .optional();
+
 export const signUpSchema = z.object({
   kind: z.enum(["service", "shop"]),
   companyName: singleLineText().trim().min(2, "Enter the company's legal name").max(160),
   addressLine: singleLineText().trim().min(3, "Enter the mailing address").max(200),
   postalCode: postalCodeSchema,
-  timeZone: timeZoneSchema,
+  timeZone: zoneFollowsPostalCode,
   name: singleLineText().trim().min(2, "Enter your name").max(120),
   email: emailSchema,
   password: passwordSchema,
 });
 export type SignUp = z.infer<typeof signUpSchema>;
+
+/** A company's mailing address; its time zone is derived from the ZIP code. */
+export const companyAddressSchema = z.object({
+  addressLine: z.string().trim().min(3, "Enter the mailing address").max(200),
+  postalCode: postalCodeSchema,
+  timeZone: zoneFollowsPostalCode,
+});
+export type CompanyAddress = z.infer<typeof companyAddressSchema>;
+
+export interface CompanyProfileDto {
+  id: number;
+  name: string;
+  kind: CompanyKind;
+  addressLine: string | null;
+  postalCode: string | null;
+  city: string | null;
+  state: string | null;
+  /** Derived from the ZIP code; shown, never chosen. */
+  timeZone: string;
+}
 
 export const requestPasswordResetSchema = z.object({ email: emailSchema });
 export type RequestPasswordReset = z.infer<typeof requestPasswordResetSchema>;

@@ -25,14 +25,27 @@ export interface CredentialTypeDefinition {
   description: string;
 }
 
-// NFPA 70E (2024) 110.6(A)(3): retraining at intervals not to exceed 3 years (TRADE-FACTS 4).
+// NFPA 70E (2024) 110.6(A)(3): retraining at intervals not to exceed 3 years.
 export const ARC_FLASH_RETRAINING_MONTHS = 36;
 // 29 CFR 1910.178(l)(4)(iii): operator performance evaluated at least once every 3 years (OSHA letter 2005-08-01).
 export const POWERED_TRUCK_EVALUATION_MONTHS = 36;
-// Common practice: 29 CFR 1910.147 sets no calendar interval for retraining ((c)(7)(iii) retrains on changes or deviations);
-// employers align a yearly refresher with the at-least-annual periodic inspection of (c)(6).
+// Common practice: 29 CFR 1910.147 sets no calendar interval for retraining ((c)(7)(iii) retrains on a change in job
+// assignments, machines or procedures, or when an inspection shows deviations); employers align a yearly refresher
+// with the at-least-annual periodic inspection of 1910.147(c)(6)(i).
 export const LOCKOUT_REFRESHER_MONTHS = 12;
-// Common practice: first aid / CPR / AED cards are usually valid 2 years (AHA course cards; TRADE-FACTS 4).
+// Common practice, the same shape: 29 CFR 1910.146(g)(2) trains before first assignment, on a change of duties or of
+// permit-space hazards, and when evaluation shows deviations, with no calendar interval; employers use a yearly
+// refresher as for lockout/tagout.
+export const CONFINED_SPACE_REFRESHER_MONTHS = 12;
+// Common practice, varies by state: when a state's exemption prints no expiry, treat it as lasting 24 months from
+// issue (e.g. Florida construction-industry elections run 2 years, from memory), so a stale exemption is not cleared
+// forever. A printed expiry always governs.
+export const WORKERS_COMP_EXEMPTION_MONTHS = 24;
+
+/** Said on every catalog card whose interval is common practice rather than regulation. */
+const SITE_DECIDES =
+  "The 12-month interval is common practice, not a regulatory deadline; a site's requirement set decides the interval it wants.";
+// Common practice: first aid / CPR / AED cards are usually valid 2 years (American Heart Association course cards, cpr.heart.org "Course Card Information").
 export const FIRST_AID_CPR_MONTHS = 24;
 
 const documentDates = { kind: "document_dates" } as const;
@@ -46,7 +59,7 @@ export const credentialTypes: readonly CredentialTypeDefinition[] = [
     category: "insurance",
     holder: "company",
     fieldSet: "insurance",
-    // Standard policy wording: 12:01 a.m. standard time on the effective date to 12:01 a.m. on the expiration date (TRADE-FACTS 1.1).
+    // Standard policy wording: 12:01 a.m. standard time on the effective date to 12:01 a.m. on the expiration date (ISO CG DS 01 wording, from memory).
     validity: documentDates,
     description:
       "Liability for bodily injury and property damage arising from the company's operations and completed work.",
@@ -57,7 +70,7 @@ export const credentialTypes: readonly CredentialTypeDefinition[] = [
     category: "insurance",
     holder: "company",
     fieldSet: "insurance",
-    validity: documentDates, // policy period as printed (TRADE-FACTS 1.1)
+    validity: documentDates, // policy period as printed, 12:01 a.m. standard time as in the CGL declarations
     description:
       "Liability for vehicles used to reach the customer's site, usually one combined single limit.",
   },
@@ -67,7 +80,7 @@ export const credentialTypes: readonly CredentialTypeDefinition[] = [
     category: "insurance",
     holder: "company",
     fieldSet: "insurance",
-    validity: documentDates, // policy period as printed (TRADE-FACTS 1.1)
+    validity: documentDates, // policy period as printed, 12:01 a.m. standard time as in the CGL declarations
     description:
       "Statutory benefits for injured employees (Part One) and employer's liability limits (Part Two).",
   },
@@ -77,7 +90,7 @@ export const credentialTypes: readonly CredentialTypeDefinition[] = [
     category: "insurance",
     holder: "company",
     fieldSet: "insurance",
-    validity: documentDates, // policy period as printed (TRADE-FACTS 1.1)
+    validity: documentDates, // policy period as printed, 12:01 a.m. standard time as in the CGL declarations
     description: "Limits above the general, auto and employer's liability policies.",
   },
   {
@@ -86,10 +99,10 @@ export const credentialTypes: readonly CredentialTypeDefinition[] = [
     category: "insurance",
     holder: "company",
     fieldSet: "exemption",
-    // Common practice: each state sets its own exemption term (e.g. Florida construction elections run 2 years), so the
-    // expiry printed on the state's document governs (TRADE-FACTS 3).
-    validity: documentDates,
-    description: "A state-issued exemption from carrying workers' compensation, where the state allows one.",
+    // A printed expiry governs; none printed, the usual term (common practice, see WORKERS_COMP_EXEMPTION_MONTHS).
+    validity: monthsFromIssue(WORKERS_COMP_EXEMPTION_MONTHS),
+    description:
+      "A state-issued exemption from carrying workers' compensation, for the persons it names (a sole proprietor or officers) only, never for employees. Without a printed expiry it counts for 24 months from issue (common practice; terms vary by state).",
   },
   {
     code: "osha_10",
@@ -127,7 +140,7 @@ export const credentialTypes: readonly CredentialTypeDefinition[] = [
     holder: "technician",
     fieldSet: "training",
     validity: monthsFromIssue(LOCKOUT_REFRESHER_MONTHS), // common practice, see LOCKOUT_REFRESHER_MONTHS
-    description: "Control of hazardous energy while servicing machines (authorized employee).",
+    description: `Control of hazardous energy while servicing machines (authorized employee). 29 CFR 1910.147(c)(7)(iii) requires retraining when jobs, machines or procedures change. ${SITE_DECIDES}`,
   },
   {
     code: "powered_truck",
@@ -154,11 +167,8 @@ export const credentialTypes: readonly CredentialTypeDefinition[] = [
     category: "safety",
     holder: "technician",
     fieldSet: "training",
-    // 29 CFR 1910.146(g)(2) retrains on changes and deviations, with no calendar interval; a site wanting a yearly
-    // refresher sets a maximum age in its requirement set.
-    validity: noExpiry,
-    description:
-      "Entry into permit-required confined spaces such as coolant pits and chip conveyor trenches.",
+    validity: monthsFromIssue(CONFINED_SPACE_REFRESHER_MONTHS), // common practice, see CONFINED_SPACE_REFRESHER_MONTHS
+    description: `Entry into permit-required confined spaces such as coolant pits and chip conveyor trenches. 29 CFR 1910.146(g)(2) requires training when duties or permit-space hazards change. ${SITE_DECIDES}`,
   },
   {
     code: "oem_training",
@@ -166,7 +176,7 @@ export const credentialTypes: readonly CredentialTypeDefinition[] = [
     category: "oem",
     holder: "technician",
     fieldSet: "oem",
-    // Common practice: no regulatory expiry; the builder's printed expiry governs when there is one (TRADE-FACTS 4).
+    // Common practice: no regulatory expiry; the builder's printed expiry governs when there is one.
     validity: documentDates,
     description: "A machine builder's service training on a control family, at a stated level.",
   },

@@ -13,7 +13,7 @@ export const isoDateSchema = singleLineText()
 /** Whole US dollars; limits on a certificate are printed without cents. */
 export const dollarsSchema = z.number().int().min(0).max(1_000_000_000);
 
-// NAIC company code: five digits (TRADE-FACTS 2.4, NAIC company code).
+// NAIC company code: five digits (from memory).
 export const naicSchema = singleLineText().regex(/^\d{5}$/, "NAIC company code has five digits");
 
 export const limitNames = [
@@ -81,13 +81,22 @@ export const licenseFieldsSchema = z.object({
 });
 export type LicenseFields = z.infer<typeof licenseFieldsSchema>;
 
-/** A state-issued exemption from carrying workers' compensation (sole proprietors, where the state allows it). */
+/**
+ * A state-issued exemption from carrying workers' compensation. A state issues it to named persons (a sole proprietor,
+ * or officers of a corporation or members of an LLC), often for a term; it covers those persons only, never the
+ * company's employees.
+ */
 export const exemptionFieldsSchema = z.object({
   holderName: singleLineText().trim().min(1).max(160),
   state: singleLineText().regex(/^[A-Z]{2}$/, "Two-letter state code"),
   certificateNumber: singleLineText().trim().min(1).max(60),
   issueDate: isoDateSchema,
+  // None printed: the catalogue's usual term applies (WORKERS_COMP_EXEMPTION_MONTHS, common practice).
   expiryDate: isoDateSchema.optional(),
+  // The persons the state names; empty on older rows, where the holder's name is the one person covered.
+  personsCovered: z.array(singleLineText().trim().min(2).max(160)).max(20).default([]),
+  // Technicians the uploader ticked as the persons named, when a name on the document is spelled otherwise.
+  technicianIds: z.array(z.number().int().positive()).max(20).default([]),
 });
 export type ExemptionFields = z.infer<typeof exemptionFieldsSchema>;
 

@@ -13,6 +13,7 @@ export const reviewerWarningCodes = [
   "limit_implausibly_small",
   "holder_name_differs",
   "submitted_for_another_holder",
+  "exemption_from_another_state",
 ] as const;
 export type ReviewerWarningCode = (typeof reviewerWarningCodes)[number];
 export interface ReviewerWarning {
@@ -32,11 +33,15 @@ export interface ReviewerCheckInput {
     holderName?: string;
     issueDate?: string;
     expiryDate?: string;
+    /** Exemption: the issuing state. */
+    state?: string;
   };
   companyLegalName: string;
   technicianName?: string;
   /** The same file (by content hash) is already on another holder's credential. */
   duplicateOfOtherHolder?: boolean;
+  /** Two-letter states where the company works: its own address and the sites of its work orders. */
+  workStates?: readonly { state: string; where: string }[];
 }
 
 // Below this, a per-occurrence or per-accident liability limit is almost surely misread (a thousands-omitted
@@ -54,7 +59,7 @@ const HEADLINE_LIMITS = [
 
 const dollars = (amount: number) => `$${amount.toLocaleString("en-US")}`;
 
-// NAIC company code: five digits.
+// NAIC company code: five digits (from memory).
 const NAIC_PATTERN = /^\d{5}$/;
 // Legal-form words that one document spells out and another abbreviates or drops.
 const LEGAL_SUFFIXES = new Set([
@@ -177,9 +182,28 @@ function cardWarnings(input: ReviewerCheckInput): ReviewerWarning[] {
   return warnings;
 }
 
+/**
+ * A state's workers' compensation exemption is that state's: work in another state falls under that state's own law
+ * (common practice; rules on out-of-state work vary by state), so the reviewer checks before accepting it.
+ */
+function exemptionWarnings(input: ReviewerCheckInput): ReviewerWarning[] {
+  const issuedBy = input.fields.state?.trim().toUpperCase();
+  if (input.fieldSet !== "exemption" || !issuedBy) return [];
+  const elsewhere = (input.workStates ?? []).filter((w) => w.state.toUpperCase() !== issuedBy);
+  if (elsewhere.length === 0) return [];
+  const places = elsewhere.map((w) => `${w.where} (${w.state})`).join(", ");
+  return [
+    {
+      code: "exemption_from_another_state",
+      message: `The exemption is issued by ${issuedBy}, but the company works in another state: ${places}. Check that the exemption covers work there.`,
+    },
+  ];
+}
+
 /** Warnings for a reviewer about one credential's fields. */
 export function reviewerWarnings(input: ReviewerCheckInput): ReviewerWarning[] {
   const warnings = input.fieldSet === "insurance" ? insuranceWarnings(input) : cardWarnings(input);
+  warnings.push(...exemptionWarnings(input));
   if (input.duplicateOfOtherHolder) {
     warnings.push({
       code: "submitted_for_another_holder",

@@ -1,6 +1,6 @@
 import { estimateDriveHours, type DriveAssumptions } from "./drive-time.ts";
 
-/** Common practice: a call-out books at least a couple of hours on site (TRADE-FACTS 8 worked example). */
+/** Common practice: a call-out books at least a couple of hours on site. */
 export const DEFAULT_ON_SITE_HOURS = 2;
 
 export interface CallOutInput {
@@ -25,7 +25,7 @@ export interface CallOutEstimate {
 
 /**
  * Travel is billed portal to portal, both ways, at its own rate; labour on site at the hourly rate; mileage both ways
- * (common practice, TRADE-FACTS 8). Each line is computed exactly and rounded once to whole cents, and the total is the
+ * (common practice). Each line is computed exactly and rounded once to whole cents, and the total is the
  * sum of the printed lines so the estimate always adds up.
  */
 export function estimateCallOut(input: CallOutInput): CallOutEstimate {

@@ -201,7 +201,7 @@ export const technicianProfileQuerySchema = z.object({
   onSiteHours: z.preprocess((v) => (v === "" ? undefined : v), z.coerce.number().min(0).max(24).default(2)),
 });
 
-/** Shown beside every certificate and estimate (DESIGN.md "Everywhere"). */
+/** Shown beside every certificate and estimate. */
 export const CERTIFICATE_CAUTION =
   "A certificate of insurance is information only and confers no rights; confirm coverage with the insurer or broker. " +
   "Follow local codes, site safety rules and licensed practice. Estimates are before tax.";

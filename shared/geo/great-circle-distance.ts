@@ -1,4 +1,4 @@
-/** IUGG mean radius R1 = (2a + b) / 3 of GRS80 = 6,371,008.7714 m (TRADE-FACTS 6; GRS80 parameters). */
+/** IUGG mean radius R1 = (2a + b) / 3 of GRS80 = 6,371,008.7714 m (GRS80: a = 6,378,137 m, 1/f = 298.257222101). */
 export const EARTH_MEAN_RADIUS_KM = 6371.0088;
 /** International statute mile, exactly 1,609.344 m (international yard and pound agreement, 1959). */
 export const KM_PER_STATUTE_MILE = 1.609344;
@@ -43,7 +43,7 @@ export function greatCircleDistanceMiles(from: LatLon, to: LatLon): number {
   return kmToMiles(greatCircleDistanceKm(from, to));
 }
 
-/** A technician is offered only inside their own service radius and the buyer's search radius (DESIGN.md "Distance"). */
+/** A technician is offered only inside their own service radius and the buyer's search radius. */
 export function isWithinReach(
   distanceMiles: number,
   serviceRadiusMiles: number,

@@ -15,7 +15,7 @@ export interface BayesianPrior {
 export const DEFAULT_PRIOR: BayesianPrior = { mean: 4.0, weight: 10 };
 
 /**
- * Bayesian average (C·m + Σ ratings) / (C + n): the same form as the IMDb weighted rating (TRADE-FACTS 7.2). With no
+ * Bayesian average (C·m + Σ ratings) / (C + n): the same form as the IMDb weighted rating (from memory). With no
  * ratings it is the prior mean; one 5-star job (4.09) stays below forty 4.8-star jobs (4.64) with m = 4, C = 10.
  * This is the score the directory sorts by: it stays on the 1-5 star scale people read, and uses every star rather than
  * a positive/negative split.
@@ -24,7 +24,7 @@ export function bayesianAverage(ratings: RatingSummary, prior: BayesianPrior = D
   return (prior.weight * prior.mean + ratings.sumStars) / (prior.weight + ratings.count);
 }
 
-/** z for a two-sided 95 % interval (TRADE-FACTS 7.1 fixes z = 1.96). */
+/** z for a two-sided 95 % interval (the usual two-sided choice, z = 1.96). */
 export const WILSON_Z_95 = 1.96;
 
 /**
@@ -40,7 +40,7 @@ export function wilsonLowerBound(positive: number, total: number, z: number = WI
   return (centre - margin) / (1 + z2 / total);
 }
 
-/** Common practice for 5-star input to Wilson: 4 and 5 stars count as positive (TRADE-FACTS 7.1). */
+/** Common practice for 5-star input to Wilson: 4 and 5 stars count as positive. */
 export function isPositiveRating(stars: number): boolean {
   return stars >= 4;
 }

@@ -2,13 +2,36 @@ import { evaluateRequirement } from "./evaluate-requirement.ts";
 import type { Requirement } from "./requirements.ts";
 import type { Standing, StandingCredential, StandingOptions, StandingResult } from "./standing-types.ts";
 
+// Policies an umbrella is written over when the set asks for them on their own; general liability always.
+const UNDERLYING_WHEN_REQUIRED = ["auto_liability", "workers_comp"];
+
+/**
+ * What an umbrella line needs beneath it for this set: general liability, plus auto and employer's liability when the set
+ * requires those policies with no alternative (a line that also accepts a state exemption does not require employer's
+ * liability).
+ */
+export function underlyingTypeCodesFor(requirements: readonly Requirement[]): string[] {
+  const required = UNDERLYING_WHEN_REQUIRED.filter((code) =>
+    requirements.some(
+      (r) => r.typeCodes.includes(code) && r.typeCodes.every((c) => c === code || c === "umbrella_liability"),
+    ),
+  );
+  return ["general_liability", ...required];
+}
+
 /** The worst of the requirement results: any unmet → not_cleared; else any lapsing → lapsing; else cleared. */
 export function computeStanding(
   requirements: readonly Requirement[],
   credentials: readonly StandingCredential[],
   options: StandingOptions,
 ): StandingResult {
-  const results = requirements.map((requirement) => evaluateRequirement(requirement, credentials, options));
+  const withUnderlying = {
+    ...options,
+    underlyingTypeCodes: options.underlyingTypeCodes ?? underlyingTypeCodesFor(requirements),
+  };
+  const results = requirements.map((requirement) =>
+    evaluateRequirement(requirement, credentials, withUnderlying),
+  );
   const standing: Standing = results.some((r) => r.status === "unmet")
     ? "not_cleared"
     : results.some((r) => r.status === "lapsing")
@@ -27,8 +50,12 @@ export interface TechnicianStandingInput {
   /** The technician's own training cards and licenses. */
   technicianCredentials: readonly StandingCredential[];
   requirements: readonly Requirement[];
-  /** Zone of the company's mailing address: the policy period is read there (TRADE-FACTS 1.1). */
+  /** Zone of the company's mailing address: the policy period is read there (standard CGL declarations, ISO CG DS 01: "12:01 A.M. standard time at your mailing address", wording from memory). */
   companyTimeZone: string;
+  /** The technician, so a workers' compensation exemption clears only the persons it names. */
+  technician: { id: number; name: string };
+  /** The company's active technicians: an exemption naming fewer people cannot stand in for a policy. */
+  companyHeadcount: number;
   asOf: Date;
   warningDays?: number | undefined;
   types?: StandingOptions["types"];
@@ -41,5 +68,7 @@ export function computeTechnicianStanding(input: TechnicianStandingInput): Stand
     asOf: input.asOf,
     warningDays: input.warningDays,
     types: input.types,
+    technician: input.technician,
+    companyHeadcount: input.companyHeadcount,
   });
 }

@@ -1,4 +1,4 @@
-/** Calendar dates as ISO `YYYY-MM-DD` text: arithmetic on the digits, so no time zone can shift a day (TRADE-FACTS 5). */
+/** Calendar dates as ISO `YYYY-MM-DD` text: arithmetic on the digits, so no time zone can shift a day (common practice). */
 export interface CalendarDate {
   year: number;
   month: number;

@@ -20,7 +20,7 @@ function issueDates(
 
 /**
  * The first instant a credential no longer counts, or null when it never lapses by the calendar.
- * Insurance: 12:01 a.m. standard time on the expiration date at the insured's address (TRADE-FACTS 1).
+ * Insurance: 12:01 a.m. standard time on the expiration date at the insured's address (ISO CG DS 01 wording, from memory).
  * Everything else: the start of the day after its valid-through date in the holder's zone (training-validity.ts).
  */
 export function credentialLapseInstant(

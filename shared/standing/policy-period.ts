@@ -1,12 +1,12 @@
 import { DateTime } from "luxon";
 import { parseIsoDate, utcMilliseconds } from "./iso-date.ts";
 
-const MINUTES_PAST_MIDNIGHT = 1; // 12:01 a.m. (TRADE-FACTS 1.1)
+const MINUTES_PAST_MIDNIGHT = 1; // 12:01 a.m. (ISO CG DS 01 wording, from memory)
 const MS_PER_MINUTE = 60_000;
 
 /**
  * The zone's standard UTC offset in minutes for a year: the smaller (more negative) of its offsets on 1 January and
- * 1 July, because daylight saving time always adds to the standard offset (TRADE-FACTS 1.3).
+ * 1 July, because daylight saving time always adds to the standard offset (standard time all year, ISO CG DS 01 wording, from memory).
  */
 export function standardOffsetMinutes(timeZone: string, year: number): number {
   const january = DateTime.fromObject({ year, month: 1, day: 1 }, { zone: timeZone });
@@ -17,7 +17,7 @@ export function standardOffsetMinutes(timeZone: string, year: number): number {
 
 /**
  * 12:01 a.m. standard time at the insured's address on a policy date. Daylight saving time is ignored on purpose:
- * standard policy wording says "standard time", so in summer the cut-off is 1:01 a.m. on the wall clock (TRADE-FACTS 1.1, 1.3).
+ * standard policy wording says "standard time", so in summer the cut-off is 1:01 a.m. on the wall clock (ISO CG DS 01 wording, from memory).
  */
 export function policyCutoffInstant(isoDate: string, timeZone: string): Date {
   const { year, month, day } = parseIsoDate(isoDate);
@@ -30,7 +30,7 @@ export function policyStartInstant(effectiveDate: string, timeZone: string): Dat
   return policyCutoffInstant(effectiveDate, timeZone);
 }
 
-/** First instant the policy is no longer in force: it is not in force for the rest of its expiration date (TRADE-FACTS 1.2). */
+/** First instant the policy is no longer in force: it is not in force for the rest of its expiration date (ISO CG DS 01 wording, from memory). */
 export function policyEndInstant(expirationDate: string, timeZone: string): Date {
   return policyCutoffInstant(expirationDate, timeZone);
 }
@@ -40,7 +40,7 @@ export interface PolicyPeriod {
   expirationDate: string;
 }
 
-/** In force on the half-open interval [effective 00:01 std, expiration 00:01 std) (TRADE-FACTS 1.2). */
+/** In force on the half-open interval [effective 00:01 std, expiration 00:01 std) (ISO CG DS 01 wording, from memory). */
 export function isPolicyInForce(period: PolicyPeriod, timeZone: string, asOf: Date): boolean {
   const at = asOf.getTime();
   return (

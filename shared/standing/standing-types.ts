@@ -1,5 +1,5 @@
 import type { CredentialHolder, CredentialTypeDefinition } from "../credentials/catalogue.ts";
-import type { CredentialFields } from "../credentials/credential-fields.ts";
+import type { CredentialFields, LimitName } from "../credentials/credential-fields.ts";
 import type { Requirement } from "./requirements.ts";
 
 export const credentialStates = ["submitted", "verified", "returned", "superseded", "lapsed"] as const;
@@ -30,6 +30,8 @@ export const unmetReasons = [
   "wrong_control_family",
   "below_level",
   "too_old",
+  "underlying_missing",
+  "exemption_does_not_cover",
 ] as const;
 export type UnmetReason = (typeof unmetReasons)[number];
 
@@ -43,6 +45,22 @@ export interface RequirementResult {
   credentialId: number | null;
   /** ISO instant when the requirement stops being met (met/lapsing) or when the candidate ended (unmet); null = never. */
   lapsesAt: string | null;
+  /** How the line was met, short enough for a table cell: "GL $1M + umbrella $4M"; null when unmet. */
+  metBy?: string | null;
+  /** Every other credential the line leans on (the umbrella over a GL policy, the GL under an umbrella). */
+  alsoCredentialIds?: number[];
+  /** Each required limit compared on its own line (employer's liability each accident, disease each employee, ...). */
+  limitLines?: LimitLine[];
+}
+
+export interface LimitLine {
+  limit: LimitName;
+  required: number;
+  /** What the documents show together (primary plus any umbrella stacked over it); null when not shown. */
+  shown: number | null;
+  met: boolean;
+  /** "GL $1M + umbrella $4M" when stacked, "GL $1M" otherwise. */
+  how: string;
 }
 
 export const standings = ["cleared", "lapsing", "not_cleared"] as const;
@@ -61,6 +79,15 @@ export interface StandingOptions {
   asOf: Date;
   /** A met requirement whose lapse is within this many days is "lapsing". */
   warningDays?: number | undefined;
+  /**
+   * The technician whose standing this is: a workers' compensation exemption counts only for the persons it names.
+   * Absent, no exemption can be matched to a person and none counts.
+   */
+  technician?: { id: number; name: string } | undefined;
+  /** How many people the company employs (its active technicians); an exemption naming fewer cannot stand in for a policy. */
+  companyHeadcount?: number | undefined;
+  /** Policies an umbrella line needs in force beneath it; computeStanding derives them from the whole set. */
+  underlyingTypeCodes?: readonly string[] | undefined;
   /** Credential catalogue; defaults to the built-in one. */
   types?: ReadonlyMap<string, CredentialTypeDefinition> | undefined;
 }

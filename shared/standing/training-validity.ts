@@ -4,7 +4,7 @@ import { addCalendarDays, daysInMonth, formatIsoDate, parseIsoDate } from "./iso
 
 /**
  * Adds calendar months to a calendar date, keeping the day of month clamped to the target month's last day
- * (TRADE-FACTS 5). Callers add the total to the original date: chaining clamps twice and drifts (2024-01-31 +1 +1 = 03-29).
+ * (common practice). Callers add the total to the original date: chaining clamps twice and drifts (2024-01-31 +1 +1 = 03-29).
  * Works on the date's digits, never on a Date at UTC midnight, so no time zone can shift it.
  */
 export function addCalendarMonths(isoDate: string, months: number): string {
@@ -56,7 +56,7 @@ export function trainingValidThrough(validity: CredentialValidity, dates: Traini
 /**
  * When a credential that is valid through a calendar date stops counting: the start of the next day in the holder's
  * zone. A card reading "valid through" or "expires" a date is honoured for all of that local day (common practice;
- * AHA cards are valid "through" the end of a month, TRADE-FACTS 4).
+ * American Heart Association cards are valid "through" the end of a month, cpr.heart.org "Course Card Information").
  */
 export function endOfValidThroughInstant(validThrough: string, timeZone: string): Date {
   return startOfDateInstant(addCalendarDays(validThrough, 1), timeZone);

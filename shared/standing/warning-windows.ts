@@ -1,4 +1,4 @@
-/** Days before a lapse at which the daily job warns the holder, plus the lapse itself (DESIGN.md "Warning windows"). */
+/** Days before a lapse at which the daily job warns the holder, plus the lapse itself. */
 export const DEFAULT_WARNING_DAYS = [60, 30, 14, 7, 1] as const;
 
 /** A requirement is "lapsing" when its credential ends within the widest warning window. */

@@ -19,6 +19,8 @@ export interface SnapshotRequirement {
   status: RequirementStatus;
   reason: UnmetReason | null;
   detail: string;
+  /** How it was met ("GL $1M + umbrella $4M each occurrence"); null when unmet. Absent on snapshots taken before. */
+  metBy?: string | null;
   /** The credential that met it (or, when unmet, the closest one on file). */
   credential: SnapshotCredential | null;
 }
@@ -94,6 +96,7 @@ export function buildStandingSnapshot(input: SnapshotInput): StandingSnapshot {
         status: r.status,
         reason: r.reason,
         detail: r.detail,
+        metBy: r.metBy ?? null,
         credential: source
           ? {
               id: source.id,

@@ -1,6 +1,6 @@
 import type { WorkOrderAction, WorkOrderSide, WorkOrderStatus } from "./schemas.ts";
 
-/** Each action: the side that may take it, the status it needs, and the status it leaves (DESIGN.md "WorkOrder"). */
+/** Each action: the side that may take it, the status it needs, and the status it leaves. */
 export const TRANSITIONS: Record<
   WorkOrderAction,
   { side: WorkOrderSide; from: WorkOrderStatus; to: WorkOrderStatus }

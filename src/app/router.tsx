@@ -64,6 +64,11 @@ export const router = createBrowserRouter([
             ],
           },
           {
+            loader: requireRole("buyer", "provider_admin"),
+            lazy: roleArea,
+            children: [{ path: paths.company, lazy: () => import("./routes/company.tsx") }],
+          },
+          {
             loader: requireRole("buyer", "provider_admin", "technician"),
             lazy: roleArea,
             children: [{ path: paths.workOrder, lazy: () => import("./routes/work-orders/work-order.tsx") }],

@@ -11,6 +11,7 @@ export const navigationByRole: Record<Role, readonly NavItem[]> = {
     { label: "Technicians", to: paths.provider.technicians },
     { label: "Documents", to: paths.provider.documents },
     { label: "Work orders", to: paths.provider.workOrders },
+    { label: "Company", to: paths.company },
   ],
   technician: [
     { label: "My standing", to: paths.technician.standing, end: true },
@@ -24,6 +25,7 @@ export const navigationByRole: Record<Role, readonly NavItem[]> = {
     { label: "Sites", to: paths.buyer.sites },
     { label: "Requirement sets", to: paths.buyer.requirementSets },
     { label: "Work orders", to: paths.buyer.workOrders },
+    { label: "Company", to: paths.company },
   ],
   admin: [
     { label: "Users", to: paths.admin.users },

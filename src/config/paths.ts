@@ -8,6 +8,7 @@ export const paths = {
     setPassword: "/set-password",
   },
   account: "/account",
+  company: "/company",
   /** Role-neutral links in e-mails; each role is sent on to its own page. */
   mailLinks: {
     documents: "/documents",

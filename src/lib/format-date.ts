@@ -3,7 +3,7 @@ const instantDate = new Intl.DateTimeFormat("en-US", { dateStyle: "medium" });
 
 /**
  * A calendar date as printed on a document ("2027-07-15" → "Jul 15, 2027"). Read at UTC on purpose: a plain
- * `new Date("2027-07-15")` shown in a zone west of UTC would print the day before (TRADE-FACTS 5).
+ * `new Date("2027-07-15")` shown in a zone west of UTC would print the day before (common practice).
  */
 export function formatIsoDate(iso: string | null | undefined): string {
   if (!iso) return "—";

@@ -29,6 +29,7 @@ const pagesByRole: { who: string; email: string | null; pages: string[] }[] = [
       "/provider/documents",
       "/provider/work-orders",
       "/account",
+      "/company",
     ],
   },
   {
@@ -40,7 +41,7 @@ const pagesByRole: { who: string; email: string | null; pages: string[] }[] = [
   {
     who: "buyer",
     email: "buyer@marlow-precision.test",
-    pages: ["/directory", "/roster", "/sites", "/requirement-sets", "/work-orders"],
+    pages: ["/directory", "/roster", "/sites", "/requirement-sets", "/work-orders", "/company"],
   },
   {
     who: "admin",

@@ -15,7 +15,7 @@ afterAll(async () => {
   await server?.close();
 });
 
-// Each role sees only what it may use (DESIGN.md, "Who uses it").
+// Each role sees only what it may use.
 const journeys = [
   {
     role: "provider_admin",

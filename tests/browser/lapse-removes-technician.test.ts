@@ -22,7 +22,7 @@ const TECHNICIAN = "Tobias Wren";
 // Downtown Chicago: Kestrel Ridge's technicians are based within about 60 km of it (demo scenario).
 const SITE_ZIP = "60601";
 const RADIUS_KM = "100";
-// America/Chicago's standard offset (CST, UTC-6), used all year for the policy cut-off (TRADE-FACTS 1.3).
+// America/Chicago's standard offset (CST, UTC-6), used all year for the policy cut-off (standard time all year, ISO CG DS 01 wording, from memory).
 const CHICAGO_STANDARD_TIME = "UTC-6";
 
 let server: Awaited<ReturnType<typeof startBrowserServer>>;
@@ -122,7 +122,7 @@ describe("the daily lapse job takes a technician out of the buyer's directory", 
     const buyer = await signedInPage(BUYER);
 
     // The stored lapse instant is 12:01 a.m. standard time at the insured's address on the expiration date
-    // (standard policy wording, TRADE-FACTS 1.1 and 1.3).
+    // (the CGL declarations' standard time, ISO CG DS 01 wording, from memory).
     expect(new Date(policy!.lapses_at).getTime()).toBe(cutOff.toMillis());
 
     // Step 1 (now): a Chicago site, and the technician is listed within the radius.
@@ -182,7 +182,7 @@ describe("the daily lapse job takes a technician out of the buyer's directory", 
 
     // Step 4: the provider sees the lapsed policy and the technician's standing.
     const provider = await signedInPage(PROVIDER);
-    // The dashboard lists what lapsed and has no renewal yet (issue 5: "the dashboard shows it lapsed").
+    // The dashboard lists what lapsed and has no renewal yet (the dashboard shows it lapsed).
     await provider.goto(`${server.url}/provider`);
     const lapsedSection = provider.getByRole("region", { name: /^Lapsed/ });
     await lapsedSection.getByText(policy!.type_name).first().waitFor();

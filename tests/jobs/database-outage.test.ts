@@ -62,7 +62,6 @@ describe("PostgreSQL stopped and restarted under a running server", () => {
         companyName: "Fernhollow Spindle Repair LLC",
         addressLine: "3 Gantry Row",
         postalCode: "60601",
-        timeZone: "America/Chicago",
         name: "Ines Marwood",
         email: "office@fernhollow.test",
         password: "outage password 1",

@@ -69,7 +69,6 @@ describe("the server killed with SIGKILL in the middle of an upload", () => {
         companyName: "Marrowfield Machine Service LLC",
         addressLine: "9 Crane Way",
         postalCode: "60601",
-        timeZone: "America/Chicago",
         name: "Teodora Vance",
         email: `crash-${randomUUID().slice(0, 8)}@example.test`,
         password: TEST_PASSWORD,

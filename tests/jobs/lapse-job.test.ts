@@ -32,8 +32,8 @@ describe("daily lapse job: the policy period", () => {
     await run("2027-07-15T06:01:00Z");
     const after = await Credential.findByPk(provider.generalLiability.id);
 
-    // TRADE-FACTS 1.3: America/Chicago, expiring 2027-07-15 (summer) → cut-off 2027-07-15T06:01:00Z (01:01 CDT),
-    // from standard policy declarations wording "12:01 a.m. standard time" (TRADE-FACTS 1.1).
+    // America/Chicago, expiring 2027-07-15 (summer) → cut-off 2027-07-15T06:01:00Z (01:01 CDT),
+    // from the standard CGL declarations' "12:01 A.M. standard time" (ISO CG DS 01 wording, from memory).
     expect(provider.generalLiability.lapsesAt?.toISOString()).toBe("2027-07-15T06:01:00.000Z");
     expect(before?.state).toBe("verified");
     expect(after?.state).toBe("lapsed");
@@ -44,7 +44,7 @@ describe("daily lapse job: the policy period", () => {
 
     await run("2027-07-15T05:01:00Z");
 
-    // TRADE-FACTS 1.3 wrong-answer check: 00:01 CDT would be 05:01Z, one hour early.
+    // 00:01 CDT would be 05:01Z, one hour early: the declarations say standard time.
     expect((await Credential.findByPk(provider.generalLiability.id))?.state).toBe("verified");
   });
 

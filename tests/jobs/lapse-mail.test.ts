@@ -137,7 +137,7 @@ describe("lapse notices by e-mail", () => {
     await deliverAll(catcher);
 
     const [mail] = catcher.to(p.admin.email);
-    // 12:01 a.m. standard time on 2027-08-01 in New York is 05:01Z, 1:01 AM EDT on the wall clock (TRADE-FACTS 1.3).
+    // 12:01 a.m. standard time on 2027-08-01 in New York is 05:01Z, 1:01 AM EDT on the wall clock (standard time all year, ISO CG DS 01 wording, from memory).
     expect(mail?.subject).toBe(`Commercial general liability for ${p.company.name} lapses in 1 day`);
     expect(mail?.text).toContain("Sunday, August 1, 2027 at 1:01 AM EDT");
     expect(mail?.text).toContain("https://clearbench.test/provider/documents/new?type=general_liability");

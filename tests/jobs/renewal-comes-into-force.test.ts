@@ -30,7 +30,7 @@ describe("a renewal verified before it starts", () => {
       submittedBy: provider.admin.id,
     });
     await run("2027-07-15T06:01:00Z");
-    // Verified during the gap; its policy period starts 2027-07-20 at 12:01 a.m. standard time (TRADE-FACTS 1.1, 1.3).
+    // Verified during the gap; its policy period starts 2027-07-20 at 12:01 a.m. standard time (ISO CG DS 01 wording, from memory).
     await buildCredentialRow({
       companyId: provider.company.id,
       typeCode: "general_liability",

@@ -55,7 +55,6 @@ describe("two server instances on one database", () => {
         companyName: "Thornbury Spindle Care LLC",
         addressLine: "4 Arbor Mill Road",
         postalCode: "60601",
-        timeZone: "America/Chicago",
         name: "Adaeze Holloway",
         email: `office-${randomUUID().slice(0, 6)}@example.test`,
         password: "instance password 1",

@@ -1,12 +1,14 @@
 import type { LimitName } from "@shared/credentials/credential-fields.ts";
 import type { Requirement } from "@shared/standing/requirements.ts";
 
-// The limit lines a minimum is usually set on (TRADE-FACTS 2.5); a stored minimum on any other line is kept as it is.
+// The limit lines a minimum is usually set on (common practice); a stored minimum on any other line is kept as it is.
 export const offeredLimits = [
   ["eachOccurrence", "General liability, each occurrence ($)"],
   ["generalAggregate", "General liability, aggregate ($)"],
   ["combinedSingleLimit", "Auto, combined single limit ($)"],
   ["employersLiabilityEachAccident", "Employer's liability, each accident ($)"],
+  ["employersLiabilityDiseaseEachEmployee", "Employer's liability, disease, each employee ($)"],
+  ["employersLiabilityDiseasePolicyLimit", "Employer's liability, disease, policy limit ($)"],
   ["umbrellaEachOccurrence", "Umbrella, each occurrence ($)"],
 ] as const satisfies readonly (readonly [LimitName, string])[];
 
@@ -22,6 +24,7 @@ export type RequirementDraft = {
   otherLimits: Partial<Record<LimitName, number>>;
   additionalInsured: boolean;
   waiverOfSubrogation: boolean;
+  statutory: boolean;
   maxAgeMonths: string;
   builder: string;
   controlFamily: string;
@@ -39,6 +42,7 @@ export const emptyRequirementDraft = (): RequirementDraft => ({
   otherLimits: {},
   additionalInsured: false,
   waiverOfSubrogation: false,
+  statutory: false,
   maxAgeMonths: "",
   builder: "",
   controlFamily: "",
@@ -64,6 +68,7 @@ export function toRequirementDraft(requirement: Requirement): RequirementDraft {
     otherLimits,
     additionalInsured: requirement.additionalInsured ?? false,
     waiverOfSubrogation: requirement.waiverOfSubrogation ?? false,
+    statutory: requirement.statutory ?? false,
     maxAgeMonths: requirement.maxAgeMonths?.toString() ?? "",
     builder: requirement.builder ?? "",
     controlFamily: requirement.controlFamily ?? "",
@@ -92,6 +97,7 @@ export function fromRequirementDraft(draft: RequirementDraft): Record<string, un
     ...(Object.keys(minLimits).length > 0 ? { minLimits } : {}),
     ...(draft.additionalInsured ? { additionalInsured: true } : {}),
     ...(draft.waiverOfSubrogation ? { waiverOfSubrogation: true } : {}),
+    ...(draft.statutory ? { statutory: true } : {}),
     maxAgeMonths: numberOrNothing(draft.maxAgeMonths),
     builder: textOrNothing(draft.builder),
     controlFamily: textOrNothing(draft.controlFamily),

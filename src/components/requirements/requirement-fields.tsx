@@ -48,7 +48,10 @@ export function RequirementFields({
     Object.values(draft.limits).some(Boolean) ||
     (opensForUnlistedLimits && Object.keys(draft.otherLimits).length > 0) ||
     draft.additionalInsured ||
-    draft.waiverOfSubrogation;
+    draft.waiverOfSubrogation ||
+    draft.statutory;
+  const additionalInsuredError = errors[path("additionalInsured")];
+  const statutoryError = errors[path("statutory")];
   const hasTraining = Boolean(draft.maxAgeMonths || draft.builder || draft.controlFamily || draft.minLevel);
   return (
     <fieldset className="space-y-4 rounded-lg border border-ink-100 bg-white p-4">
@@ -112,10 +115,27 @@ export function RequirementFields({
             <input
               type="checkbox"
               className="size-4 accent-ink-700"
+              name={path("additionalInsured")}
+              data-field={path("additionalInsured")}
+              aria-invalid={additionalInsuredError ? true : undefined}
+              aria-describedby={additionalInsuredError ? `${path("additionalInsured")}-error` : undefined}
               checked={draft.additionalInsured}
               onChange={(e) => set({ additionalInsured: e.target.checked })}
             />
             {additionalInsuredLabel}
+          </label>
+          <label className={checkboxRow}>
+            <input
+              type="checkbox"
+              className="size-4 accent-ink-700"
+              name={path("statutory")}
+              data-field={path("statutory")}
+              aria-invalid={statutoryError ? true : undefined}
+              aria-describedby={statutoryError ? `${path("statutory")}-error` : undefined}
+              checked={draft.statutory}
+              onChange={(e) => set({ statutory: e.target.checked })}
+            />
+            Workers' compensation: statutory limits (per statute)
           </label>
           <label className={checkboxRow}>
             <input
@@ -127,6 +147,16 @@ export function RequirementFields({
             Waiver of subrogation
           </label>
         </div>
+        {additionalInsuredError && (
+          <p id={`${path("additionalInsured")}-error`} className="mt-1 text-sm font-medium text-red-800">
+            {additionalInsuredError}
+          </p>
+        )}
+        {statutoryError && (
+          <p id={`${path("statutory")}-error`} className="mt-1 text-sm font-medium text-red-800">
+            {statutoryError}
+          </p>
+        )}
       </details>
       <details open={hasTraining || undefined}>
         <summary className="min-h-11 cursor-pointer py-2 text-sm font-semibold text-ink-900">
@@ -137,6 +167,7 @@ export function RequirementFields({
             label="Card no older than (months)"
             name={path("maxAgeMonths")}
             inputMode="numeric"
+            hint="For a card without a printed expiry this replaces the catalog's interval."
             value={draft.maxAgeMonths}
             onChange={(e) => set({ maxAgeMonths: e.target.value })}
             error={errors[path("maxAgeMonths")]}

@@ -30,7 +30,6 @@ const signUpBody = (email: string) => ({
   companyName: "Quarry Hollow Fixtures LLC",
   addressLine: "12 Anvil Row",
   postalCode: "60601",
-  timeZone: "America/Chicago",
   name: "Imre Castellan",
   email,
   password: "a long enough password",

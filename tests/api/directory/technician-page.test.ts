@@ -78,7 +78,7 @@ describe("technician page for buyers", () => {
     const res = await buyer.get(`/api/directory/technicians/${tech.id}`).query({ onSiteHours: 4 });
 
     const estimate = res.body.estimates.find((e: { siteId: number }) => e.siteId === world.site.id);
-    // Travel is billed portal to portal, both ways, at the travel rate (common practice, TRADE-FACTS 8); driveHours is
+    // Travel is billed portal to portal, both ways, at the travel rate (common practice); driveHours is
     // shown rounded to 0.01 h, hence the tolerance of one rounding step each way.
     expect(
       Math.abs(estimate.callOut.travelCents - 2 * estimate.driveHours * res.body.travelRateCents),

@@ -36,7 +36,7 @@ describe("shop sites", () => {
     const res = await agent.post("/api/sites").send(plant);
 
     expect(res.status).toBe(201);
-    // zipcodes 8.0.0 centroid of 60601 (TRADE-FACTS 9 check value)
+    // zipcodes 8.0.0 lookup("60601"): Chicago, IL, 41.8858, -87.6181
     expect(res.body).toMatchObject({
       name: "North Plant",
       postalCode: "60601",

@@ -171,6 +171,31 @@ describe("requirement sets", () => {
     ]);
   });
 
+  it("answers 422 to additional insured on workers' compensation, which no certificate can show, and saves nothing", async () => {
+    const { agent } = await buyer();
+    const body = {
+      name: `WC with AI ${Date.now()}`,
+      requirements: [
+        { label: "General liability", typeCodes: ["general_liability"], additionalInsured: true },
+        { label: "Workers' comp", typeCodes: ["workers_comp"], additionalInsured: true },
+      ],
+    };
+
+    const res = await agent.post("/api/requirement-sets").send(body);
+    const listed = await agent.get("/api/requirement-sets");
+
+    // Common practice (from memory: the ACORD 25 certificate leaves "ADDL INSD" unused on the workers' comp line).
+    expect(res.status).toBe(422);
+    expect(res.body.error.fields).toEqual([
+      {
+        path: "body.requirements.1.additionalInsured",
+        message:
+          "Additional insured cannot apply to workers' compensation: no certificate can show it. Ask for a waiver of subrogation instead.",
+      },
+    ]);
+    expect(listed.body.map((set: { name: string }) => set.name)).not.toContain(body.name);
+  });
+
   it("answers 401 when signed out", async () => {
     const res = await request(t.app).get("/api/requirement-sets");
 

@@ -46,7 +46,7 @@ describe("raising a work order at the moment a policy lapses", () => {
     const expirationDate = yesterday();
     const world = await buildWorkOrderWorld(t.app, { generalLiabilityExpires: expirationDate });
     await storeClearedBaseline(world);
-    // The policy ends at 12:01 a.m. standard time at the insured's address on its expiration date (TRADE-FACTS 1.1).
+    // The policy ends at 12:01 a.m. standard time at the insured's address on its expiration date (ISO CG DS 01 wording, from memory).
     const lapse = policyEndInstant(expirationDate, "America/Chicago");
 
     const res = await raiseAt(world, new Date(lapse.getTime() + 1000));

@@ -68,7 +68,7 @@ describe("a work order from request to confirmation", () => {
         typeCode: "general_liability",
         reference: glFields.policyNumber,
       });
-      // The policy ends at 12:01 a.m. standard time on its expiration date at the insured's address (TRADE-FACTS 1.1).
+      // The policy ends at 12:01 a.m. standard time on its expiration date at the insured's address (ISO CG DS 01 wording, from memory).
       expect(general.credential.lapsesAt).toBe(
         policyEndInstant(glFields.expirationDate, "America/Chicago").toISOString(),
       );

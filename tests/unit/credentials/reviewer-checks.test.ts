@@ -70,7 +70,7 @@ describe("reviewer warnings", () => {
 
     const found = codes(input);
 
-    // general aggregate >= each occurrence: TRADE-FACTS 2.5 (common practice)
+    // general aggregate >= each occurrence: common practice
     expect(found).toEqual(["aggregate_below_each_occurrence"]);
   });
 
@@ -80,7 +80,7 @@ describe("reviewer warnings", () => {
 
     const found = codes(input);
 
-    // EL disease policy limit >= disease each employee: TRADE-FACTS 2.5 (common practice)
+    // EL disease policy limit >= disease each employee: common practice
     expect(found).toEqual(["disease_policy_limit_below_each_employee"]);
   });
 
@@ -91,7 +91,7 @@ describe("reviewer warnings", () => {
       codes({ ...soundCertificate, fields: { ...soundCertificate.fields, naic } }),
     );
 
-    // five digits: TRADE-FACTS 2.4 (NAIC company code)
+    // five digits: NAIC company code (from memory)
     expect(found).toEqual([["naic_not_five_digits"], ["naic_not_five_digits"], ["naic_not_five_digits"], []]);
   });
 

@@ -85,7 +85,7 @@ describe.each(TODAYS)("demo world as of %s", (today) => {
     expect(lapsed.state).toBe("lapsed");
     expect(daysFrom(today, lapseOf(world, lapsed)!)).toBeGreaterThan(-30);
     expect(renewal.state).toBe("submitted");
-    // Continuous cover: the renewal starts at the instant the old policy ends (12:01 a.m. standard time, TRADE-FACTS 1.1).
+    // Continuous cover: the renewal starts at the instant the old policy ends (12:01 a.m. standard time, ISO CG DS 01 wording, from memory).
     expect(credentialStartInstant(type, renewal.fields as CredentialFields, zoneOf(world, renewal))).toEqual(
       lapseOf(world, lapsed),
     );

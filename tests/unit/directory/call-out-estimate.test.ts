@@ -8,17 +8,17 @@ describe("call-out estimate", () => {
   it("bills 200.00 of travel before work starts and 564.00 in all for a technician 1 h and 60 mi away", () => {
     const estimate = estimateCallOut({ ...rates, oneWayMiles: 60, oneWayHours: 1 });
 
-    expect(estimate.travelCents).toBe(20_000); // TRADE-FACTS 8: 2 × 1 h × 100 (portal to portal, common practice)
-    expect(estimate.mileageCents).toBe(8_400); // TRADE-FACTS 8: 120 mi × 0.70
-    expect(estimate.labourCents).toBe(28_000); // TRADE-FACTS 8: 2 h × 140
-    expect(estimate.totalCents).toBe(56_400); // TRADE-FACTS 8
+    expect(estimate.travelCents).toBe(20_000); // common practice: 2 × 1 h × 100, portal to portal
+    expect(estimate.mileageCents).toBe(8_400); // common practice worked example: 120 mi × 0.70
+    expect(estimate.labourCents).toBe(28_000); // common practice worked example: 2 h × 140
+    expect(estimate.totalCents).toBe(56_400); // common practice worked example
   });
 
   it("costs 567.00 at the 72.5 cents a mile rate", () => {
     const estimate = estimateCallOut({ ...rates, mileageRateCents: 72.5, oneWayMiles: 60, oneWayHours: 1 });
 
-    expect(estimate.mileageCents).toBe(8_700); // TRADE-FACTS 8
-    expect(estimate.totalCents).toBe(56_700); // TRADE-FACTS 8
+    expect(estimate.mileageCents).toBe(8_700); // common practice worked example
+    expect(estimate.totalCents).toBe(56_700); // common practice worked example
   });
 
   it("estimates the drive time from the miles at the stated average speed when none is given", () => {

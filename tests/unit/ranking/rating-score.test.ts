@@ -12,15 +12,15 @@ describe("rating score", () => {
     const single = bayesianAverage({ count: 1, sumStars: 5 }, prior);
     const forty = bayesianAverage({ count: 40, sumStars: 192 }, prior);
 
-    expect(single).toBeCloseTo(4.090909, 6); // TRADE-FACTS 7.2: 45/11
-    expect(forty).toBeCloseTo(4.64, 6); // TRADE-FACTS 7.2: 232/50
+    expect(single).toBeCloseTo(4.090909, 6); // Bayesian average (C·m + Σ) / (C + n), IMDb weighted-rating form (from memory): 45/11
+    expect(forty).toBeCloseTo(4.64, 6); // Bayesian average, m = 4, C = 10: 232/50
     expect(forty).toBeGreaterThan(single);
   });
 
   it("gives the prior mean when there are no ratings", () => {
     const score = bayesianAverage({ count: 0, sumStars: 0 }, { mean: 4.0, weight: 10 });
 
-    expect(score).toBe(4.0); // TRADE-FACTS 7.2
+    expect(score).toBe(4.0); // Bayesian average: no reviews gives the prior m
   });
 
   it("keeps the same order with m = 3.5, C = 5", () => {
@@ -29,8 +29,8 @@ describe("rating score", () => {
     const single = bayesianAverage({ count: 1, sumStars: 5 }, prior);
     const forty = bayesianAverage({ count: 40, sumStars: 192 }, prior);
 
-    expect(single).toBeCloseTo(3.75, 6); // TRADE-FACTS 7.2
-    expect(forty).toBeCloseTo(4.655556, 6); // TRADE-FACTS 7.2
+    expect(single).toBeCloseTo(3.75, 6); // Bayesian average, m = 3.5, C = 5: (17.5 + 5) / 6
+    expect(forty).toBeCloseTo(4.655556, 6); // Bayesian average, m = 3.5, C = 5: (17.5 + 192) / 45
   });
 
   it("sorts the directory by the Bayesian score, highest first", () => {
@@ -44,7 +44,7 @@ describe("rating score", () => {
       .sort((a, b) => compareByRankingScore(a.ratings, b.ratings))
       .map((t) => t.name);
 
-    expect(order).toEqual(["forty", "one five", "none"]); // TRADE-FACTS 7.2 with the default prior m = 4.0, C = 10
+    expect(order).toEqual(["forty", "one five", "none"]); // Bayesian average (IMDb weighted-rating form, from memory), m = 4.0, C = 10
   });
 
   it.each([
@@ -59,7 +59,7 @@ describe("rating score", () => {
     ({ positive, total, lower }) => {
       const bound = wilsonLowerBound(positive, total);
 
-      expect(bound).toBeCloseTo(lower, 6); // TRADE-FACTS 7.1 (Wilson 1927; Evan Miller 2009)
+      expect(bound).toBeCloseTo(lower, 6); // Wilson score lower bound (E. B. Wilson 1927; Evan Miller, "How Not To Sort By Average Rating", 2009 from memory)
     },
   );
 
@@ -72,10 +72,10 @@ describe("rating score", () => {
   ])(
     "gives Miller's one-sided bound of $lower for $positive/$total at z = 1.644854",
     ({ positive, total, lower }) => {
-      // The 95th percentile of the standard normal to full precision; TRADE-FACTS 7.1 prints it as 1.644854.
+      // The 95th percentile of the standard normal to full precision; Evan Miller's sample uses 1.644854.
       const bound = wilsonLowerBound(positive, total, 1.6448536269514722);
 
-      expect(bound).toBeCloseTo(lower, 6); // TRADE-FACTS 7.1 (Evan Miller 2009, one-sided 95 %)
+      expect(bound).toBeCloseTo(lower, 6); // Evan Miller, "How Not To Sort By Average Rating" (one-sided 95 %; year 2009 from memory)
     },
   );
 });

@@ -7,7 +7,7 @@ import type { StandingCredential } from "../../../shared/standing/standing-types
 
 let nextId = 1;
 
-/** A verified general liability certificate with typical limits (TRADE-FACTS 2.5); override what the test is about. */
+/** A verified general liability certificate with typical limits (common practice); override what the test is about. */
 export function buildInsuranceCredential(
   overrides: Partial<Omit<StandingCredential, "fields">> = {},
   fields: Partial<InsuranceFields> = {},

@@ -9,6 +9,7 @@ import { addCalendarDays } from "../../../shared/standing/iso-date.ts";
 import { buildInsuranceCredential, buildTrainingCredential } from "./build-standing-credential.ts";
 
 const CHICAGO = "America/Chicago";
+const technician = { id: 7, name: "Dana Quillfeather" };
 const asOf = new Date("2027-01-10T15:00:00Z");
 const siteRequirements: Requirement[] = [
   ...defaultBaseline.requirements,
@@ -28,6 +29,8 @@ describe("technician standing", () => {
       technicianCredentials,
       requirements: siteRequirements,
       companyTimeZone: CHICAGO,
+      technician,
+      companyHeadcount: 1,
       asOf,
     });
 
@@ -50,11 +53,13 @@ describe("technician standing", () => {
       technicianCredentials,
       requirements: siteRequirements,
       companyTimeZone: CHICAGO,
+      technician,
+      companyHeadcount: 1,
       asOf,
     });
 
     expect(result.standing).toBe("lapsing");
-    expect(result.earliestLapse).toBe("2027-02-01T06:01:00.000Z"); // TRADE-FACTS 1.3: 12:01 a.m. CST
+    expect(result.earliestLapse).toBe("2027-02-01T06:01:00.000Z"); // 12:01 a.m. CST: CGL declarations' "standard time" (from memory)
   });
 
   it("is not cleared when any requirement is unmet, and names it", () => {
@@ -65,6 +70,8 @@ describe("technician standing", () => {
       technicianCredentials: [buildTrainingCredential()],
       requirements: siteRequirements,
       companyTimeZone: CHICAGO,
+      technician,
+      companyHeadcount: 1,
       asOf,
     });
 
@@ -84,6 +91,8 @@ describe("technician standing", () => {
       technicianCredentials: [],
       requirements: siteRequirements,
       companyTimeZone: CHICAGO,
+      technician,
+      companyHeadcount: 1,
       asOf,
     });
 

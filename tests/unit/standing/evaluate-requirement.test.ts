@@ -26,7 +26,7 @@ describe("requirement evaluation", () => {
     const result = evaluateRequirement(generalLiability, [policy], options);
 
     expect(result).toMatchObject({ status: "met", reason: null, credentialId: policy.id });
-    expect(result.lapsesAt).toBe("2027-07-15T06:01:00.000Z"); // TRADE-FACTS 1.3: 12:01 a.m. CST even in July
+    expect(result.lapsesAt).toBe("2027-07-15T06:01:00.000Z"); // 12:01 a.m. CST even in July: CGL declarations' "standard time" (from memory)
   });
 
   it("is unmet while the only certificate awaits verification", () => {
@@ -68,7 +68,7 @@ describe("requirement evaluation", () => {
       asOf: new Date("2027-07-15T06:01:00Z"),
     });
 
-    expect(result.reason).toBe("lapsed"); // TRADE-FACTS 1.2: half-open interval
+    expect(result.reason).toBe("lapsed"); // half-open policy period: not in force at the cut-off itself
   });
 
   it("is unmet when a limit is below the site's minimum", () => {
@@ -132,12 +132,19 @@ describe("requirement evaluation", () => {
         certificateNumber: "EX-2201",
         issueDate: "2026-02-01",
         expiryDate: "2028-02-01",
+        personsCovered: ["Pell Rivera"],
+        technicianIds: [],
       },
     };
 
-    const result = evaluateRequirement(requirement, [exemption], options);
+    const result = evaluateRequirement(requirement, [exemption], {
+      ...options,
+      technician: { id: 31, name: "Pell Rivera" },
+      companyHeadcount: 1,
+    });
 
-    expect(result).toMatchObject({ status: "met", credentialId: 901 }); // common practice (TRADE-FACTS 3): exemption in place of a policy
+    // Common practice: a sole proprietor's state exemption in place of a policy, for that person.
+    expect(result).toMatchObject({ status: "met", credentialId: 901 });
   });
 
   it("is unmet when OEM training covers another control family", () => {
@@ -200,7 +207,7 @@ describe("requirement evaluation", () => {
 
     const result = evaluateRequirement(requirement, [card], options);
 
-    // Employer practice: a card no older than 3-5 years (TRADE-FACTS 4, legalclarity.org).
+    // Employer practice: a card no older than 3-5 years (common practice; legalclarity.org on employer practice).
     expect(result).toMatchObject({ status: "unmet", reason: "too_old" });
   });
 

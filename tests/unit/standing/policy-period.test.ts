@@ -6,7 +6,7 @@ import {
   standardOffsetMinutes,
 } from "../../../shared/standing/policy-period.ts";
 
-// Every row of TRADE-FACTS 1.3 (values computed with luxon 3.7.2 and the IANA zone data; standard policy wording, TRADE-FACTS 1.1).
+// Cut-off instants computed with luxon 3.7.2 and the IANA zone data, for the standard CGL declarations' "12:01 A.M. standard time" at the insured's address (ISO CG DS 01 wording, from memory).
 const cutoffRows = [
   {
     zone: "America/Chicago",
@@ -72,20 +72,20 @@ describe("policy period", () => {
     ({ zone, date, cutoff }) => {
       const end = policyEndInstant(date, zone);
 
-      expect(end.toISOString()).toBe(cutoff); // TRADE-FACTS 1.3 table
+      expect(end.toISOString()).toBe(cutoff); // luxon 3.7.2, IANA tz data
     },
   );
 
   it.each(cutoffRows)("uses the standard offset of $zone for the year of $date", ({ zone, date, offset }) => {
     const minutes = standardOffsetMinutes(zone, Number(date.slice(0, 4)));
 
-    expect(minutes).toBe(offset); // TRADE-FACTS 1.3: the smaller of the 1 January and 1 July offsets
+    expect(minutes).toBe(offset); // standard offset = the smaller of the 1 January and 1 July offsets (IANA tz data)
   });
 
   it("starts at the same 12:01 a.m. standard time on its effective date", () => {
     const start = policyStartInstant("2026-07-15", "America/Chicago");
 
-    expect(start.toISOString()).toBe("2026-07-15T06:01:00.000Z"); // TRADE-FACTS 1.1: both ends at 12:01 a.m. standard time
+    expect(start.toISOString()).toBe("2026-07-15T06:01:00.000Z"); // ISO CG DS 01 (from memory): both ends at 12:01 a.m. standard time
   });
 
   it("is in force one second before the cut-off and not at the cut-off", () => {
@@ -94,14 +94,14 @@ describe("policy period", () => {
     const before = isPolicyInForce(period, "America/Chicago", new Date("2027-07-15T06:00:59Z"));
     const at = isPolicyInForce(period, "America/Chicago", new Date("2027-07-15T06:01:00Z"));
 
-    expect(before).toBe(true); // TRADE-FACTS 1.3 boundary check
-    expect(at).toBe(false); // TRADE-FACTS 1.3 boundary check: half-open interval
+    expect(before).toBe(true); // in force until the 12:01 a.m. standard-time cut-off
+    expect(at).toBe(false); // half-open policy period [effective, expiration)
   });
 
   it("does not read 12:01 a.m. as local daylight time in summer", () => {
     const end = policyEndInstant("2027-07-15", "America/Chicago");
 
-    expect(end.toISOString()).not.toBe("2027-07-15T05:01:00.000Z"); // TRADE-FACTS 1.3 wrong-answer check: one hour early
+    expect(end.toISOString()).not.toBe("2027-07-15T05:01:00.000Z"); // local wall time would be one hour early; the declarations say standard time
   });
 
   it("is not in force during the rest of its expiration date", () => {
@@ -109,7 +109,7 @@ describe("policy period", () => {
 
     const middayOnExpiry = isPolicyInForce(period, "America/New_York", new Date("2027-07-15T16:00:00Z"));
 
-    expect(middayOnExpiry).toBe(false); // TRADE-FACTS 1.2: not to the end of the business day
+    expect(middayOnExpiry).toBe(false); // the policy ends at 12:01 a.m., not at the end of the business day
   });
 
   it("is not in force before 12:01 a.m. standard time on its effective date", () => {
@@ -118,8 +118,8 @@ describe("policy period", () => {
     const justBefore = isPolicyInForce(period, "America/New_York", new Date("2027-01-15T05:00:59Z"));
     const atStart = isPolicyInForce(period, "America/New_York", new Date("2027-01-15T05:01:00Z"));
 
-    expect(justBefore).toBe(false); // TRADE-FACTS 1.2: [effective 00:01 std, ...)
-    expect(atStart).toBe(true); // TRADE-FACTS 1.2
+    expect(justBefore).toBe(false); // in force from 12:01 a.m. standard time on the effective date
+    expect(atStart).toBe(true); // in force on the half-open period
   });
 
   it("takes the standard offset from winter in the southern hemisphere too", () => {

@@ -55,3 +55,57 @@ describe("requirement sets", () => {
     expect(codes.flat().every((code) => credentialTypeByCode.has(code))).toBe(true);
   });
 });
+
+describe("requirement flags that cannot apply", () => {
+  // Common practice (from memory: the ACORD 25 certificate leaves "ADDL INSD" unused on the workers' compensation
+  // line): workers' compensation covers the insured's own employees, so no certificate can name a site on it.
+  it.each([["workers_comp"], ["workers_comp", "workers_comp_exemption"], ["workers_comp_exemption"]])(
+    "refuse additional insured on workers' compensation (%s) and say why",
+    (...typeCodes) => {
+      const parsed = requirementSchema.safeParse({ label: "WC", typeCodes, additionalInsured: true });
+
+      expect(parsed.success).toBe(false);
+      expect(parsed.error?.issues[0]?.path).toEqual(["additionalInsured"]);
+      expect(parsed.error?.issues[0]?.message).toContain("no certificate can show it");
+    },
+  );
+
+  it("keep additional insured on general liability and a waiver of subrogation on workers' compensation", () => {
+    const gl = requirementSchema.safeParse({
+      label: "GL",
+      typeCodes: ["general_liability"],
+      additionalInsured: true,
+    });
+    const wc = requirementSchema.safeParse({
+      label: "WC",
+      typeCodes: ["workers_comp"],
+      waiverOfSubrogation: true,
+      statutory: true,
+    });
+
+    expect(gl.success).toBe(true);
+    expect(wc.success).toBe(true);
+  });
+
+  it("refuse statutory limits on a line without a workers' compensation policy", () => {
+    const parsed = requirementSchema.safeParse({
+      label: "GL",
+      typeCodes: ["general_liability"],
+      statutory: true,
+    });
+
+    expect(parsed.error?.issues[0]?.path).toEqual(["statutory"]);
+  });
+
+  it("refuse the flag inside a whole set, at the requirement's path", () => {
+    const parsed = requirementSetSchema.safeParse({
+      name: "Plant 2",
+      requirements: [
+        { label: "GL", typeCodes: ["general_liability"] },
+        { label: "WC", typeCodes: ["workers_comp"], additionalInsured: true },
+      ],
+    });
+
+    expect(parsed.error?.issues[0]?.path).toEqual(["requirements", 1, "additionalInsured"]);
+  });
+});

@@ -15,7 +15,7 @@ function validityOf(code: string) {
 }
 
 describe("adding calendar months", () => {
-  // TRADE-FACTS 5 table (verified with date-fns 4.4.0 addMonths and luxon 3.7.2 plus({months})).
+  // Month clamping as date-fns 4.4.0 addMonths and luxon 3.7.2 plus({months}) compute it.
   it.each([
     { start: "2024-01-31", months: 1, result: "2024-02-29" },
     { start: "2023-01-31", months: 1, result: "2023-02-28" },
@@ -27,15 +27,15 @@ describe("adding calendar months", () => {
   ])("clamps $start + $months months to $result", ({ start, months, result }) => {
     const sum = addCalendarMonths(start, months);
 
-    expect(sum).toBe(result); // TRADE-FACTS 5
+    expect(sum).toBe(result); // date-fns 4.4.0 addMonths and luxon 3.7.2 plus({months})
   });
 
   it("differs from adding one month twice, so the total is always added to the original date", () => {
     const chained = addCalendarMonths(addCalendarMonths("2024-01-31", 1), 1);
     const total = addCalendarMonths("2024-01-31", 2);
 
-    expect(chained).toBe("2024-03-29"); // TRADE-FACTS 5: chaining is not the same as adding 2
-    expect(total).toBe("2024-03-31"); // TRADE-FACTS 5
+    expect(chained).toBe("2024-03-29"); // date-fns 4.4.0 addMonths: chaining is not the same as adding 2
+    expect(total).toBe("2024-03-31"); // date-fns 4.4.0 addMonths and luxon 3.7.2 plus({months})
   });
 
   it("agrees with luxon's plus({ months }) on random dates", () => {
@@ -52,7 +52,7 @@ describe("adding calendar months", () => {
         const ours = addCalendarMonths(iso, months);
         const luxons = DateTime.fromISO(iso, { zone: "UTC" }).plus({ months }).toISODate();
 
-        expect(ours).toBe(luxons); // TRADE-FACTS 5: luxon 3.7.2 clamps the same way
+        expect(ours).toBe(luxons); // luxon 3.7.2 plus({months}) clamps the same way
       }),
       { numRuns: 2000 },
     );
@@ -63,13 +63,13 @@ describe("training validity", () => {
   it("needs arc-flash retraining within 36 months of the issue date", () => {
     const validThrough = trainingValidThrough(validityOf("arc_flash"), { issueDate: "2024-05-15" });
 
-    expect(validThrough).toBe("2027-05-15"); // NFPA 70E (2024) 110.6(A)(3): intervals not to exceed 3 years; TRADE-FACTS 4 check value
+    expect(validThrough).toBe("2027-05-15"); // NFPA 70E (2024) 110.6(A)(3): intervals not to exceed 3 years
   });
 
   it("needs a forklift operator evaluation every 3 years, clamped from a leap day", () => {
     const validThrough = trainingValidThrough(validityOf("powered_truck"), { issueDate: "2024-02-29" });
 
-    expect(validThrough).toBe("2027-02-28"); // 29 CFR 1910.178(l)(4)(iii); TRADE-FACTS 4 check value
+    expect(validThrough).toBe("2027-02-28"); // 29 CFR 1910.178(l)(4)(iii), OSHA letter 2005-08-01
   });
 
   it("treats lockout/tagout as a 12-month refresher", () => {
@@ -82,7 +82,7 @@ describe("training validity", () => {
   it("treats first aid / CPR as valid for 24 months", () => {
     const validThrough = trainingValidThrough(validityOf("first_aid_cpr"), { issueDate: "2025-03-10" });
 
-    expect(validThrough).toBe("2027-03-10"); // common practice (2-year cards, TRADE-FACTS 4)
+    expect(validThrough).toBe("2027-03-10"); // common practice (2-year cards, American Heart Association)
   });
 
   it("lets the expiry printed on the card win over the type's interval", () => {
@@ -91,7 +91,7 @@ describe("training validity", () => {
       expiryDate: "2027-03-31",
     });
 
-    expect(validThrough).toBe("2027-03-31"); // AHA cards run through the end of the month (cpr.heart.org, TRADE-FACTS 4 check value)
+    expect(validThrough).toBe("2027-03-31"); // AHA cards run through the end of the month (cpr.heart.org "Course Card Information")
   });
 
   it("never lapses an outreach card without a printed expiry", () => {

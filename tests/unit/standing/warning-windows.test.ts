@@ -8,7 +8,7 @@ describe("warning windows", () => {
   it("warns 60, 30, 14, 7 and 1 days before a lapse by default", () => {
     const thresholds = [...DEFAULT_WARNING_DAYS];
 
-    expect(thresholds).toEqual([60, 30, 14, 7, 1]); // DESIGN.md "Warning windows"
+    expect(thresholds).toEqual([60, 30, 14, 7, 1]); // the product's warning days, also the WARNING_DAYS default
   });
 
   it.each([

@@ -16,7 +16,7 @@ import { LapsedList } from "@/features/credentials/components/lapsed-list.tsx";
 import { ReturnedList } from "@/features/credentials/components/returned-list.tsx";
 import { queryClient } from "@/lib/query-client.ts";
 
-// The horizon of "what lapses next": the first warning goes out 60 days ahead (DESIGN.md), so 90 shows what comes after it too.
+// The horizon of "what lapses next": the first warning goes out 60 days ahead, so 90 shows what comes after it too.
 const HORIZON_DAYS = 90;
 const HORIZON_WEEKS = Math.ceil(HORIZON_DAYS / 7);
 

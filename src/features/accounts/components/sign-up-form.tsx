@@ -3,12 +3,10 @@ import { signUpSchema, type CurrentUser } from "@shared/accounts/schemas.ts";
 import { Button } from "@/components/ui/button.tsx";
 import { ChoiceGroup } from "@/components/ui/choice-group.tsx";
 import { FormError } from "@/components/ui/form-error.tsx";
-import { SelectField } from "@/components/ui/select-field.tsx";
 import { TextField } from "@/components/ui/text-field.tsx";
 import { fieldErrorsOf } from "@/lib/field-errors.ts";
 import { readForm } from "@/lib/read-form.ts";
 import { useSignUp } from "../api/sign-up.ts";
-import { likelyTimeZone, usTimeZoneOptions } from "./us-time-zones.ts";
 
 const labels = {
   kind: "Your company is",
@@ -21,8 +19,7 @@ const labels = {
   password: "Password",
 };
 
-// timeZoneSchema's min(1) has no message of its own; an empty value means nothing was chosen.
-const plainWords = { timeZone: "Choose a time zone", kind: "Choose what kind of company you are" };
+const plainWords = { kind: "Choose what kind of company you are" };
 
 const kindOptions = [
   { value: "service", label: "A field-service company", hint: "Your technicians keep machine tools running" },
@@ -72,26 +69,16 @@ export function SignUpForm({ onSignedUp }: { onSignedUp: (user: CurrentUser) => 
           required
           error={fields.addressLine}
         />
-        <div className="grid gap-4 sm:grid-cols-[10rem_1fr]">
-          <TextField
-            label={labels.postalCode}
-            name="postalCode"
-            inputMode="numeric"
-            autoComplete="postal-code"
-            maxLength={5}
-            required
-            error={fields.postalCode}
-          />
-          <SelectField
-            label={labels.timeZone}
-            name="timeZone"
-            options={usTimeZoneOptions}
-            placeholder="Choose a time zone"
-            defaultValue={likelyTimeZone()}
-            required
-            error={fields.timeZone}
-          />
-        </div>
+        <TextField
+          label={labels.postalCode}
+          name="postalCode"
+          inputMode="numeric"
+          autoComplete="postal-code"
+          maxLength={5}
+          hint="Your time zone is set from this ZIP code: a policy period runs on standard time at the insured's mailing address."
+          required
+          error={fields.postalCode}
+        />
       </fieldset>
       <fieldset className="space-y-4">
         <legend className="text-base font-semibold text-ink-900">You</legend>

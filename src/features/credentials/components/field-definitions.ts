@@ -1,6 +1,6 @@
 import type { FieldSet, LimitName } from "@shared/credentials/credential-fields.ts";
 
-export type FieldKind = "text" | "date" | "dollars" | "checkbox" | "level" | "state";
+export type FieldKind = "text" | "date" | "dollars" | "checkbox" | "level" | "state" | "names";
 
 export type FieldDefinition = {
   /** Path inside the credential's fields, e.g. "limits.eachOccurrence". */
@@ -26,7 +26,7 @@ export const limitLabels: Record<LimitName, string> = {
   umbrellaAggregate: "Umbrella, aggregate",
 };
 
-// The limit lines each coverage prints on a certificate (TRADE-FACTS 2.5); other lines would only invite wrong entries.
+// The limit lines each coverage prints on a certificate (common practice); other lines would only invite wrong entries.
 const limitsByType: Record<string, readonly LimitName[]> = {
   general_liability: [
     "eachOccurrence",
@@ -115,10 +115,21 @@ export function fieldDefinitionsFor(fieldSet: FieldSet, typeCode: string): Field
     case "exemption":
       return [
         { path: "holderName", label: "Name on the exemption", kind: "text", required: true },
+        {
+          path: "personsCovered",
+          label: "Persons the exemption names",
+          kind: "names",
+          hint: "The sole proprietor or officers, separated by semicolons. It clears only these people, never employees.",
+        },
         { path: "state", label: "State", kind: "state", required: true, hint: "Two letters, e.g. TX" },
         { path: "certificateNumber", label: "Certificate number", kind: "text", required: true },
         { path: "issueDate", label: "Issue date", kind: "date", required: true },
-        { path: "expiryDate", label: "Expiry date", kind: "date", hint: dateHint },
+        {
+          path: "expiryDate",
+          label: "Expiry date",
+          kind: "date",
+          hint: "Leave empty if the document shows none: it then counts for 24 months from issue (common practice; terms vary by state).",
+        },
       ];
   }
 }

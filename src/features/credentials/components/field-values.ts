@@ -24,6 +24,7 @@ export function toFieldValues(
     if (definition.kind === "checkbox") values[definition.path] = value === true;
     else if (definition.kind === "dollars" && typeof value === "number")
       values[definition.path] = value.toLocaleString("en-US");
+    else if (definition.kind === "names" && Array.isArray(value)) values[definition.path] = value.join("; ");
     else if (value !== undefined && value !== null) values[definition.path] = String(value);
     else values[definition.path] = "";
   }
@@ -74,6 +75,15 @@ export function parseFieldValues(
       else setAt(fields, definition.path, amount);
     } else if (definition.kind === "level") setAt(fields, definition.path, Number(text));
     else if (definition.kind === "state") setAt(fields, definition.path, text.toUpperCase());
+    else if (definition.kind === "names")
+      setAt(
+        fields,
+        definition.path,
+        text
+          .split(/[;\n]/)
+          .map((name) => name.trim())
+          .filter((name) => name !== ""),
+      );
     else setAt(fields, definition.path, text);
   }
   const parsed = fieldSetSchemas[fieldSet].safeParse(fields);

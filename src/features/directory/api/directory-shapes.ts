@@ -87,6 +87,8 @@ const profileStandingSchema = z.object({
         status: z.enum(requirementStatuses),
         detail: z.string(),
         lapsesAt: z.string().nullable(),
+        // Standings stored before stacked limits were described carry no metBy.
+        metBy: z.string().nullable().optional(),
       })
       .loose(),
   ),

@@ -70,7 +70,7 @@ export function DirectoryFilters(props: DirectoryFiltersProps) {
   );
   const pickMachine = (equipmentId: string) => {
     const machine = machines.find((m) => String(m.id) === equipmentId);
-    // Picking a machine fills the technology and control family (DESIGN.md "Site and Equipment").
+    // Picking a machine fills the technology and control family.
     set(
       machine
         ? { equipmentId, technology: machine.technology, controlFamily: machine.controlFamily }

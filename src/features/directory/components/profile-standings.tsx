@@ -17,6 +17,17 @@ export function ProfileStandings({ standings }: { standings: readonly ProfileSta
             {s.name}
             <DirectoryStandingBadge standing={s.standing} earliestLapse={s.earliestLapse} />
           </p>
+          {s.results.some((r) => r.status !== "unmet" && r.metBy) && (
+            <ul aria-label={`How ${s.name} is met`} className="mt-2 space-y-0.5 text-sm text-ink-800">
+              {s.results
+                .filter((r) => r.status !== "unmet" && r.metBy)
+                .map((r, i) => (
+                  <li key={i}>
+                    <span className="font-medium text-ink-900">{r.requirement.label}</span>: met by {r.metBy}
+                  </li>
+                ))}
+            </ul>
+          )}
           {s.unmet.length > 0 && (
             <ul className="mt-2 list-disc space-y-0.5 pl-5 text-sm text-ink-900">
               {s.unmet.map((u, i) => (

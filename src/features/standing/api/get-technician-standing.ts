@@ -12,6 +12,8 @@ const requirementResultSchema = z.object({
   detail: z.string(),
   credentialId: z.number().nullable(),
   lapsesAt: z.string().nullable(),
+  // Standings stored before stacked limits were described carry no metBy.
+  metBy: z.string().nullable().optional(),
 });
 export type RequirementResultView = z.infer<typeof requirementResultSchema>;
 

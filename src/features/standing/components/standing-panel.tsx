@@ -18,6 +18,8 @@ const reasonWords: Record<NonNullable<RequirementResultView["reason"]>, string> 
   wrong_control_family: "Wrong control family",
   below_level: "Level too low",
   too_old: "Too old",
+  underlying_missing: "No underlying policy",
+  exemption_does_not_cover: "Exemption does not cover",
 };
 
 function OverallBadge({ result, now }: { result: StandingAgainstView; now: Date }) {
@@ -47,9 +49,14 @@ function RequirementRow({ result, now }: { result: RequirementResultView; now: D
           </>
         ) : result.lapsesAt ? (
           // The engine's sentence names credential ids and ISO dates; people get the date in words.
-          <span className="text-ink-700">Counts until {formatInstantDate(result.lapsesAt)}</span>
+          <span className="text-ink-700">
+            {result.metBy && <span className="text-ink-900">Met by {result.metBy}. </span>}
+            Counts until {formatInstantDate(result.lapsesAt)}
+          </span>
         ) : (
-          <span className="text-ink-700">Met; it does not expire</span>
+          <span className="text-ink-700">
+            {result.metBy ? `Met by ${result.metBy}; it does not expire` : "Met; it does not expire"}
+          </span>
         )}
       </span>
     </li>

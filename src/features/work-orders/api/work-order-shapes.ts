@@ -40,6 +40,8 @@ const snapshotSchema = z.object({
           status: z.enum(requirementStatuses),
           reason: z.enum(unmetReasons).nullable(),
           detail: z.string(),
+          // Snapshots taken before stacked limits were described carry no metBy.
+          metBy: z.string().nullable().optional(),
           credential: z
             .object({
               id: z.number(),

@@ -46,9 +46,11 @@ export function StandingSnapshotView({ workOrderId, at, snapshot }: StandingSnap
                 <span className="font-medium text-ink-900">{r.label}</span>
                 <span>{requirementBadge(r.status)}</span>
                 <span className="text-ink-800">
-                  {r.credential
-                    ? `${r.credential.typeName}${r.credential.reference ? ` ${r.credential.reference}` : ""}, counts until ${formatInstantDate(r.credential.lapsesAt)}`
-                    : r.detail}
+                  {r.metBy && r.status !== "unmet"
+                    ? `Met by ${r.metBy}, counts until ${formatInstantDate(r.credential?.lapsesAt ?? null)}`
+                    : r.credential
+                      ? `${r.credential.typeName}${r.credential.reference ? ` ${r.credential.reference}` : ""}, counts until ${formatInstantDate(r.credential.lapsesAt)}`
+                      : r.detail}
                 </span>
               </li>
             ))}

@@ -1,7 +1,7 @@
 import type { ReactNode } from "react";
 import type { WorkOrderStatus } from "@shared/work-orders/schemas.ts";
 
-// Each status has a shape and a word, never colour alone (DESIGN.md "Look"); shapes keep 3:1 against white.
+// Each status has a shape and a word, never colour alone; shapes keep 3:1 against white.
 const shapes: Record<WorkOrderStatus, ReactNode> = {
   requested: (
     <circle
