@@ -10,6 +10,7 @@ import { Technician } from "../technicians/model.ts";
 import { Credential, CredentialType, Document } from "./model.ts";
 import { toCredentialDto, toCredentialDtos } from "./dto.ts";
 import { duplicateForOtherHolder } from "./upload-document.ts";
+import type { Evidence } from "../../shared/credentials/locate-values.ts";
 import { workStatesOf } from "./work-states.ts";
 import { fieldsForBuyers } from "../../shared/credentials/fields-for-buyers.ts";
 
@@ -38,6 +39,8 @@ export async function findCredential(user: Express.User, id: number) {
       returnReason: null,
       audit: [],
       warnings: [],
+      sameDocument: [],
+      evidence: {},
     };
   }
   const events = await auditTrail("credential", id);
@@ -47,13 +50,15 @@ export async function findCredential(user: Express.User, id: number) {
   });
   const actorName = new Map(actors.map((a) => [a.id, a.name]));
   let warnings: { code: string; message: string }[] = [];
+  let evidence: Evidence = {};
   if (user.role === "reviewer" || user.role === "admin") {
     const [type, company, technician, document] = await Promise.all([
       CredentialType.findByPk(row.typeCode),
       Company.findByPk(row.companyId),
       row.technicianId ? Technician.findByPk(row.technicianId) : null,
-      Document.findByPk(row.documentId, { attributes: ["id", "sha256"] }),
+      Document.findByPk(row.documentId, { attributes: ["id", "sha256", "extractionEvidence"] }),
     ]);
+    evidence = document?.extractionEvidence?.[row.typeCode] ?? {};
     warnings = reviewerWarnings({
       fieldSet: type!.fieldSet,
       fields: row.fields as never,
@@ -67,6 +72,8 @@ export async function findCredential(user: Express.User, id: number) {
   }
   return {
     ...dto,
+    sameDocument: await credentialsOnDocument(row.documentId, row.companyId),
+    evidence,
     audit: events.map((e) => ({
       id: e.id,
       action: e.action,
@@ -77,6 +84,29 @@ export async function findCredential(user: Express.User, id: number) {
     })),
     warnings,
   };
+}
+
+/**
+ * Every credential sent from the same uploaded file (the coverages of one certificate), so the reviewer reads the
+ * document once and decides each coverage on its own. Rows of the same company only.
+ */
+async function credentialsOnDocument(documentId: number, companyId: number) {
+  const rows = await Credential.findAll({
+    where: { documentId, companyId },
+    attributes: ["id", "typeCode", "state"],
+    order: [["id", "ASC"]],
+  });
+  const types = await CredentialType.findAll({
+    where: { code: [...new Set(rows.map((r) => r.typeCode))] },
+    attributes: ["code", "name"],
+  });
+  const name = new Map(types.map((t) => [t.code, t.name]));
+  return rows.map((r) => ({
+    id: r.id,
+    typeCode: r.typeCode,
+    typeName: name.get(r.typeCode) ?? r.typeCode,
+    state: r.state,
+  }));
 }
 
 const SORT_SQL: Record<QueueQuery["sort"], string> = {

@@ -9,6 +9,7 @@ import {
 import type { CredentialValidity } from "../../shared/credentials/catalogue.ts";
 import type { FieldSet } from "../../shared/credentials/credential-fields.ts";
 import type { CredentialState } from "../../shared/credentials/schemas.ts";
+import type { Evidence } from "../../shared/credentials/locate-values.ts";
 
 export class CredentialType extends Model<
   InferAttributes<CredentialType>,
@@ -36,6 +37,8 @@ export class Document extends Model<InferAttributes<Document>, InferCreationAttr
   declare originalName: string;
   declare extractedText: string | null;
   declare extractionMethod: string;
+  /** Field evidence (confidence and page box) by credential type code, as the reader proposed it. */
+  declare extractionEvidence: CreationOptional<Record<string, Evidence> | null>;
   declare createdAt: CreationOptional<Date>;
 }
 
@@ -84,6 +87,7 @@ export function initCredentialModels(sequelize: Sequelize) {
       originalName: { type: DataTypes.STRING(255), allowNull: false },
       extractedText: { type: DataTypes.TEXT, allowNull: true },
       extractionMethod: { type: DataTypes.STRING(12), allowNull: false },
+      extractionEvidence: { type: DataTypes.JSONB, allowNull: true },
       createdAt: DataTypes.DATE,
     },
     { sequelize, tableName: "documents", underscored: true, updatedAt: false },

@@ -6,6 +6,8 @@ import { Credential, CredentialType, Document } from "./model.ts";
 
 export const canReviewCredentials = requireRole("reviewer");
 export const canUploadDocuments = requireRole("provider_admin", "technician");
+// A certificate of insurance is held by the company, so only its office sends the coverages read from one.
+export const canSubmitCoverages = requireRole("provider_admin");
 export const canListOwnCredentials = requireRole("provider_admin", "technician");
 export const canEditCatalogue = requireRole("admin");
 export const canReadCatalogue = requireRole("provider_admin", "technician", "reviewer", "buyer", "admin");

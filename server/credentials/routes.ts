@@ -8,6 +8,7 @@ import {
   listCredentialsQuerySchema,
   queueQuerySchema,
   returnCredentialSchema,
+  submitCoveragesSchema,
   submitCredentialSchema,
   uploadDocumentSchema,
   verifyCredentialSchema,
@@ -23,12 +24,14 @@ import {
   canListOwnCredentials,
   canReadCatalogue,
   canReviewCredentials,
+  canSubmitCoverages,
   canUploadDocuments,
   canViewCredential,
 } from "./policy.ts";
 import { editCredentialType, listCredentialTypes } from "./catalogue.ts";
 import { uploadDocument } from "./upload-document.ts";
 import { submitCredential } from "./submit-credential.ts";
+import { submitCoverages } from "./submit-coverages.ts";
 import { editCredentialFields, returnCredential, verifyCredential } from "./decide-credential.ts";
 import { findCredential, findQueue, listOwnCredentials } from "./find-credentials.ts";
 import { sendDocumentFile, sendPdfPage } from "./download-document.ts";
@@ -76,6 +79,15 @@ credentialRoutes.post(
   { allow: canUploadDocuments, body: submitCredentialSchema },
   async (req, res, { body }) => {
     res.status(201).json(await submitCredential(req.user!, body));
+  },
+);
+
+// Every coverage of one certificate in one request: all are saved, or none.
+credentialRoutes.post(
+  "/credentials/coverages",
+  { allow: canSubmitCoverages, body: submitCoveragesSchema },
+  async (req, res, { body }) => {
+    res.status(201).json(await submitCoverages(req.user!, body));
   },
 );
 

@@ -8,7 +8,9 @@ import { pipeline } from "node:stream/promises";
 import { fileTypeFromBuffer, fileTypeFromFile, type FileTypeResult } from "file-type";
 import type { UploadDocument } from "../../shared/credentials/schemas.ts";
 import { withoutLoneSurrogates } from "../../shared/api/text.ts";
-import { reviewerWarnings } from "../../shared/credentials/reviewer-checks.ts";
+import { reviewerWarnings, type ReviewerWarning } from "../../shared/credentials/reviewer-checks.ts";
+import type { CertificateProposal } from "../../shared/credentials/extract-fields.ts";
+import type { Evidence } from "../../shared/credentials/locate-values.ts";
 import { AppError } from "../http/app-error.ts";
 import { db } from "../db/sequelize.ts";
 import { recordAudit } from "../audit/index.ts";
@@ -21,7 +23,7 @@ import { refuseOversizedPages } from "./extraction/render-bounds.ts";
 import { DocumentUnreadableError } from "./extraction/document-unreadable-error.ts";
 import { activeType } from "./catalogue.ts";
 import { resolveHolder } from "./resolve-holder.ts";
-import { Credential, Document } from "./model.ts";
+import { Credential, CredentialType, Document } from "./model.ts";
 import { workStatesOf } from "./work-states.ts";
 
 const EXTENSIONS: Record<ExtractableMime, string[]> = {
@@ -148,6 +150,7 @@ export async function uploadDocument(
           originalName: safeFileName(file.originalname),
           extractedText: extraction.text.slice(0, 100_000),
           extractionMethod: extraction.method,
+          extractionEvidence: extraction.evidence ?? null,
         },
         { transaction },
       );
@@ -176,6 +179,16 @@ export async function uploadDocument(
       duplicateForOtherHolder(sha256, document.id, user.companyId, technicianId ?? null),
     ]);
     const fields = extraction.proposal?.fields ?? {};
+    const workStates = type.fieldSet === "exemption" ? await workStatesOf(user.companyId) : [];
+    const warningsFor = (proposed: object) =>
+      reviewerWarnings({
+        fieldSet: type.fieldSet,
+        fields: proposed as never,
+        companyLegalName: company?.name ?? "",
+        technicianName: technician?.name,
+        duplicateOfOtherHolder: otherHolder,
+        workStates,
+      });
     return {
       document: { id: document.id, name: document.originalName, mime, sizeBytes: file.size, sha256 },
       extraction: {
@@ -183,19 +196,44 @@ export async function uploadDocument(
         ocrAvailable: extraction.ocrAvailable,
         fields,
         found: extraction.proposal?.found ?? [],
+        evidence: extraction.evidence?.[type.code] ?? {},
       },
-      warnings: reviewerWarnings({
-        fieldSet: type.fieldSet,
-        fields: fields as never,
-        companyLegalName: company?.name ?? "",
-        technicianName: technician?.name,
-        duplicateOfOtherHolder: otherHolder,
-        workStates: type.fieldSet === "exemption" ? await workStatesOf(user.companyId) : [],
-      }),
+      warnings: warningsFor(fields),
+      certificate: extraction.certificate
+        ? await certificateCoverages(extraction.certificate, warningsFor, extraction.evidence ?? {})
+        : null,
     };
   } finally {
     if (pending) await rm(pending, { force: true });
   }
+}
+
+/**
+ * Every coverage read from a certificate that the catalogue offers (an admin may retire a type), each with its own
+ * proposed fields and warnings, so the uploader confirms all of them on one form.
+ */
+async function certificateCoverages(
+  certificate: CertificateProposal,
+  warningsFor: (fields: object) => ReviewerWarning[],
+  evidence: Record<string, Evidence>,
+) {
+  const types = await CredentialType.findAll({
+    where: { code: certificate.coverages.map((c) => c.typeCode), active: true, fieldSet: "insurance" },
+  });
+  const name = new Map(types.map((t) => [t.code, t.name]));
+  return {
+    parties: certificate.parties,
+    coverages: certificate.coverages
+      .filter((coverage) => name.has(coverage.typeCode))
+      .map(({ typeCode, proposal }) => ({
+        typeCode,
+        typeName: name.get(typeCode) ?? typeCode,
+        fields: proposal.fields,
+        found: proposal.found,
+        evidence: evidence[typeCode] ?? {},
+        warnings: warningsFor(proposal.fields),
+      })),
+  };
 }
 
 /** The same bytes already sit on a credential of a different holder (a copied card or certificate). */

@@ -10,6 +10,7 @@ export const reviewerWarningCodes = [
   "aggregate_below_each_occurrence",
   "disease_policy_limit_below_each_employee",
   "naic_not_five_digits",
+  "limit_implausibly_small",
   "holder_name_differs",
   "submitted_for_another_holder",
   "exemption_from_another_state",
@@ -42,6 +43,21 @@ export interface ReviewerCheckInput {
   /** Two-letter states where the company works: its own address and the sites of its work orders. */
   workStates?: readonly { state: string; where: string }[];
 }
+
+// Below this, a per-occurrence or per-accident liability limit is almost surely misread (a thousands-omitted
+// table read as dollars, "$1M" read as 1) or mistyped: commercial liability limits start in the hundreds of
+// thousands (common practice).
+export const IMPLAUSIBLE_LIMIT_BELOW = 10_000;
+const HEADLINE_LIMITS = [
+  ["eachOccurrence", "each occurrence"],
+  ["combinedSingleLimit", "combined single limit"],
+  ["umbrellaEachOccurrence", "umbrella each occurrence"],
+  ["generalAggregate", "general aggregate"],
+  ["umbrellaAggregate", "umbrella aggregate"],
+  ["employersLiabilityEachAccident", "employer's liability each accident"],
+] as const;
+
+const dollars = (amount: number) => `$${amount.toLocaleString("en-US")}`;
 
 // NAIC company code: five digits (from memory).
 const NAIC_PATTERN = /^\d{5}$/;
@@ -125,6 +141,15 @@ function insuranceWarnings(input: ReviewerCheckInput): ReviewerWarning[] {
       code: "disease_policy_limit_below_each_employee",
       message: "The employer's liability disease policy limit is below the disease each-employee limit.",
     });
+  }
+  for (const [name, words] of HEADLINE_LIMITS) {
+    const amount = limits[name];
+    if (amount !== undefined && amount < IMPLAUSIBLE_LIMIT_BELOW) {
+      warnings.push({
+        code: "limit_implausibly_small",
+        message: `The ${words} limit reads ${dollars(amount)}, far below any usual limit; check whether the certificate prints "$1M" or omits thousands.`,
+      });
+    }
   }
   if (fields.naic !== undefined && fields.naic.trim() !== "" && !NAIC_PATTERN.test(fields.naic.trim())) {
     warnings.push({

@@ -26,6 +26,21 @@ export const submitCredentialSchema = z.object({
 });
 export type SubmitCredential = z.infer<typeof submitCredentialSchema>;
 
+/** Every coverage read from one certificate of insurance, confirmed by the uploader and sent together. */
+export const submitCoveragesSchema = z.object({
+  documentId: idParam,
+  credentials: z
+    .array(z.object({ typeCode: typeCodeSchema, fields: z.record(z.string(), z.unknown()) }))
+    .min(1, "Keep at least one coverage")
+    // A certificate lists a handful of coverage lines; more would be a client bug, not a certificate.
+    .max(12, "At most 12 coverages at once")
+    .refine(
+      (list) => new Set(list.map((c) => c.typeCode)).size === list.length,
+      "Each coverage may be sent once per certificate",
+    ),
+});
+export type SubmitCoverages = z.infer<typeof submitCoveragesSchema>;
+
 export const returnCredentialSchema = z.object({
   reason: multiLineText().trim().min(5, "Say what the uploader must fix (at least 5 characters)").max(1000),
 });

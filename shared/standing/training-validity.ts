@@ -27,6 +27,15 @@ export function startOfDateInstant(isoDate: string, timeZone: string): Date {
   return start.toJSDate();
 }
 
+/**
+ * The last calendar date a document that prints only a month and year ("Recommended renewal: 03/2027") counts
+ * through: the last day of that month (common practice). Stored as that day, a month-only expiry then lapses by the
+ * same rule as a printed day: at the start of the next day in the holder's zone.
+ */
+export function monthOnlyValidThrough(year: number, month: number): string {
+  return formatIsoDate({ year, month, day: daysInMonth(year, month) });
+}
+
 export interface TrainingDates {
   issueDate: string;
   expiryDate?: string | undefined;

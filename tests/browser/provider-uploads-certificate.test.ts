@@ -26,9 +26,9 @@ const widths = [
   { name: "phone", seed: 42, viewport: { width: 390, height: 844 } },
 ] as const;
 
-describe("a service company's office uploads a general-liability certificate", () => {
+describe("a service company's office uploads a certificate of insurance", () => {
   it.each(widths)(
-    "pre-fills what the PDF says and sends it for verification ($name)",
+    "pre-fills every coverage the PDF lists and sends them together ($name)",
     async ({ name, seed, viewport }) => {
       const certificate = await writeCertificateFile(seed, office.company);
       const context = await browser.newContext({ viewport });
@@ -43,29 +43,38 @@ describe("a service company's office uploads a general-liability certificate", (
       await screenshot(page, `provider-upload-${name}-2-choose`);
       expect(await seriousAccessibilityProblems(page)).toEqual([]);
       await page.getByLabel("Choose a file").setInputFiles(certificate.file);
-      const form = page.getByRole("form", { name: "Check the fields" });
+      const form = page.getByRole("form", { name: "Check the coverages" });
       await form.waitFor();
+      // The certificate prints four coverages; each is proposed on the same form.
+      const gl = form.getByRole("region", { name: "Commercial general liability" });
       await screenshot(page, `provider-upload-${name}-3-fields`);
 
       const written = certificate.generalLiability;
-      await expect(form.getByLabel("Policy number").inputValue()).resolves.toBe(written.policyNumber);
-      await expect(form.getByLabel("Effective date").inputValue()).resolves.toBe(written.effectiveDate);
-      await expect(form.getByLabel("Expiration date").inputValue()).resolves.toBe(written.expirationDate);
-      await expect(form.getByLabel("Each occurrence").inputValue()).resolves.toBe(
+      await expect(gl.getByLabel("Policy number", { exact: true }).inputValue()).resolves.toBe(
+        written.policyNumber,
+      );
+      await expect(gl.getByLabel("Effective date", { exact: true }).inputValue()).resolves.toBe(
+        written.effectiveDate,
+      );
+      await expect(gl.getByLabel("Expiration date", { exact: true }).inputValue()).resolves.toBe(
+        written.expirationDate,
+      );
+      await expect(gl.getByLabel("Each occurrence").inputValue()).resolves.toBe(
         dollars(written.limits.eachOccurrence),
       );
-      await expect(form.getByLabel("General aggregate").inputValue()).resolves.toBe(
+      await expect(gl.getByLabel("General aggregate").inputValue()).resolves.toBe(
         dollars(written.limits.generalAggregate),
       );
       expect(await seriousAccessibilityProblems(page)).toEqual([]);
 
-      await form.getByRole("button", { name: "Send for verification" }).click();
+      await form.getByRole("button", { name: "Send 4 coverages for verification" }).click();
       await page.waitForURL((url) => url.pathname === "/provider/documents");
-      const sent = page.getByRole("status").filter({ hasText: "was sent for verification" });
+      const sent = page.getByRole("status").filter({ hasText: "were sent for verification" });
       await sent.waitFor();
       await screenshot(page, `provider-upload-${name}-4-documents`);
 
       await expect(sent.innerText()).resolves.toContain("Commercial general liability");
+      await expect(sent.innerText()).resolves.toContain("Automobile liability");
       const waiting = page
         .getByRole("row")
         .filter({ hasText: "Commercial general liability" })

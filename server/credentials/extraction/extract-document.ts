@@ -1,5 +1,15 @@
 import type { FieldSet } from "../../../shared/credentials/credential-fields.ts";
-import { proposeFields, type FieldProposal } from "../../../shared/credentials/extract-fields.ts";
+import {
+  proposeCoverages,
+  proposeFields,
+  type CertificateProposal,
+  type FieldProposal,
+} from "../../../shared/credentials/extract-fields.ts";
+import {
+  locateValues,
+  type Evidence,
+  type PositionedText,
+} from "../../../shared/credentials/locate-values.ts";
 import { isOcrAvailable, ocrImage, ocrPdf, type OcrOptions } from "./ocr.ts";
 import { extractPdfText } from "./pdf-text.ts";
 
@@ -20,6 +30,10 @@ export interface ExtractedDocument {
   method: "pdf_text" | "ocr" | "none";
   ocrAvailable: boolean;
   proposal: FieldProposal | null;
+  /** For a certificate of insurance: every coverage found on it, and the parties printed once. */
+  certificate?: CertificateProposal | undefined;
+  /** Confidence and page box of each proposed field, by credential type code. */
+  evidence?: Record<string, Evidence> | undefined;
 }
 
 // A scan can carry a few stray characters in its text layer (a stamp, a page number); below this it counts as no text.
@@ -31,16 +45,16 @@ const hasTextLayer = (text: string): boolean =>
 async function readText(
   input: ExtractDocumentInput,
   ocrAvailable: boolean,
-): Promise<Pick<ExtractedDocument, "text" | "method">> {
+): Promise<Pick<ExtractedDocument, "text" | "method"> & { items: PositionedText[] }> {
   const ocrOptions = { ...input.ocr, ...(input.timeoutMs ? { timeoutMs: input.timeoutMs } : {}) };
   if (input.mime === "application/pdf") {
     const pdf = await extractPdfText(input.bytes, input.timeoutMs ? { timeoutMs: input.timeoutMs } : {});
-    if (hasTextLayer(pdf.text)) return { text: pdf.text, method: "pdf_text" };
-    if (!ocrAvailable) return { text: "", method: "none" };
-    return { text: await ocrPdf(input.bytes, ocrOptions), method: "ocr" };
+    if (hasTextLayer(pdf.text)) return { text: pdf.text, method: "pdf_text", items: pdf.items };
+    if (!ocrAvailable) return { text: "", method: "none", items: [] };
+    return { text: await ocrPdf(input.bytes, ocrOptions), method: "ocr", items: [] };
   }
-  if (!ocrAvailable) return { text: "", method: "none" };
-  return { text: await ocrImage(input.bytes, ocrOptions), method: "ocr" };
+  if (!ocrAvailable) return { text: "", method: "none", items: [] };
+  return { text: await ocrImage(input.bytes, ocrOptions), method: "ocr", items: [] };
 }
 
 /**
@@ -49,8 +63,23 @@ async function readText(
  */
 export async function extractDocument(input: ExtractDocumentInput): Promise<ExtractedDocument> {
   const ocrAvailable = await isOcrAvailable(input.ocr);
-  const { text, method } = await readText(input, ocrAvailable);
+  const { text, method, items } = await readText(input, ocrAvailable);
   const type = input.credentialType;
   const proposal = type && method !== "none" ? proposeFields(type.code, type.fieldSet, text) : null;
-  return { text, method, ocrAvailable, proposal };
+  const certificate =
+    type?.fieldSet === "insurance" && method !== "none" ? proposeCoverages(text) : undefined;
+  if (!type || method === "none") return { text, method, ocrAvailable, proposal, certificate };
+  const evidence: Record<string, Evidence> = {};
+  for (const coverage of certificate?.coverages ?? []) {
+    const { fields, found } = coverage.proposal;
+    evidence[coverage.typeCode] = locateValues(fields as Record<string, unknown>, found, items, method);
+  }
+  if (proposal && !evidence[type.code])
+    evidence[type.code] = locateValues(
+      proposal.fields as Record<string, unknown>,
+      proposal.found,
+      items,
+      method,
+    );
+  return { text, method, ocrAvailable, proposal, certificate, evidence };
 }

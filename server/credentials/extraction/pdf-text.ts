@@ -1,6 +1,7 @@
 import { createRequire } from "node:module";
 import { Worker } from "node:worker_threads";
 import { DocumentUnreadableError } from "./document-unreadable-error.ts";
+import { layoutText, type PositionedText } from "../../../shared/credentials/locate-values.ts";
 
 export { DocumentUnreadableError, type UnreadableReason } from "./document-unreadable-error.ts";
 
@@ -14,6 +15,8 @@ export interface PdfText {
   text: string;
   pageCount: number;
   pagesRead: number;
+  /** Each text item with its box, as fractions of its page (top-left origin), for showing where a value was read. */
+  items: PositionedText[];
 }
 
 const DEFAULT_TIMEOUT_MS = 10_000;
@@ -31,7 +34,30 @@ const { PDFParse } = require(workerData.modulePath);
   const parser = new PDFParse({ data: workerData.bytes });
   try {
     const result = await parser.getText({ first: workerData.maxPages, pageJoiner: "" });
-    parentPort.postMessage({ ok: true, text: result.text, pageCount: result.total, pagesRead: result.pages.length });
+    // The same pages' items with their positions (pdf.js transform: e, f are the baseline origin in points).
+    const doc = await parser.load();
+    const items = [];
+    for (let number = 1; number <= result.pages.length; number += 1) {
+      const page = await doc.getPage(number);
+      const { width, height } = page.getViewport({ scale: 1 });
+      const content = await page.getTextContent();
+      for (const item of content.items) {
+        if (!item.str || !item.str.trim()) continue;
+        const [a, b, , , e, f] = item.transform;
+        const size = Math.hypot(a, b) || item.height || 1;
+        items.push({
+          page: number,
+          text: item.str,
+          x: e / width,
+          y: (height - f - size) / height,
+          w: (item.width || size * item.str.length * 0.5) / width,
+          h: (size * 1.2) / height,
+          em: size / width,
+        });
+        if (items.length > 20000) break;
+      }
+    }
+    parentPort.postMessage({ ok: true, text: result.text, pageCount: result.total, pagesRead: result.pages.length, items });
   } catch (err) {
     parentPort.postMessage({ ok: false, name: String(err && err.name), message: String(err && err.message) });
   } finally {
@@ -41,7 +67,7 @@ const { PDFParse } = require(workerData.modulePath);
 `;
 
 type WorkerReply =
-  | { ok: true; text: string; pageCount: number; pagesRead: number }
+  | { ok: true; text: string; pageCount: number; pagesRead: number; items: PositionedText[] }
   | { ok: false; name: string; message: string };
 
 function toUnreadable(reply: Extract<WorkerReply, { ok: false }>): DocumentUnreadableError {
@@ -77,7 +103,9 @@ export async function extractPdfText(bytes: Uint8Array, options: PdfTextOptions 
       );
     });
     if (!reply.ok) throw toUnreadable(reply);
-    return { text: reply.text, pageCount: reply.pageCount, pagesRead: reply.pagesRead };
+    // Lines and cells rebuilt from the items' positions; pdf.js's own text when a page gave no positioned items.
+    const text = reply.items.length > 0 ? layoutText(reply.items) : reply.text;
+    return { text, pageCount: reply.pageCount, pagesRead: reply.pagesRead, items: reply.items };
   } finally {
     clearTimeout(timer);
     await worker.terminate();

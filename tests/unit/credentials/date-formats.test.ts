@@ -4,7 +4,10 @@ import {
   findDocumentDates,
   formatDocumentDate,
   parseDocumentDate,
+  parseDocumentEndDate,
+  parseDocumentMonth,
 } from "../../../shared/credentials/date-formats.ts";
+import { trainingLapseInstant } from "../../../shared/standing/training-validity.ts";
 
 const isoDate = (year: number, month: number, day: number) =>
   `${year}-${String(month).padStart(2, "0")}-${String(day).padStart(2, "0")}`;
@@ -16,6 +19,65 @@ describe("document dates", () => {
     const read = printed.map(parseDocumentDate);
 
     expect(read).toEqual(["2026-03-07", "2026-03-07", "2026-03-07"]);
+  });
+
+  it("reads dates with the month spelled out, day first or month first", () => {
+    const printed = ["15 Mar 2027", "15-Mar-2027", "March 15, 2027", "Mar. 15 2027", "Sept 3, 2026"];
+
+    const read = printed.map(parseDocumentDate);
+
+    expect(read).toEqual(["2027-03-15", "2027-03-15", "2027-03-15", "2027-03-15", "2026-09-03"]);
+  });
+
+  it("finds spelled-out dates inside a line", () => {
+    const line = "Completed on 15 Mar 2025 and valid through March 15, 2027.";
+
+    const dates = findDocumentDates(line);
+
+    expect(dates).toEqual(["2025-03-15", "2027-03-15"]);
+  });
+
+  it("does not take a month and year for a full date, but reads it as one", () => {
+    const printed = ["03/2027", "3-2027", "March 2027", "Feb 2028"];
+
+    const asDate = printed.map(parseDocumentDate);
+    const asMonth = printed.map(parseDocumentMonth);
+
+    expect(asDate).toEqual([null, null, null, null]);
+    expect(asMonth).toEqual([
+      { year: 2027, month: 3 },
+      { year: 2027, month: 3 },
+      { year: 2027, month: 3 },
+      { year: 2028, month: 2 },
+    ]);
+  });
+
+  it("reads a month-only renewal as valid through the last day of that month (common practice)", () => {
+    const printed = ["03/2027", "02/2028", "04/2027", "13/2027"];
+
+    const read = printed.map(parseDocumentEndDate);
+
+    expect(read).toEqual(["2027-03-31", "2028-02-29", "2027-04-30", null]);
+  });
+
+  it("lapses a month-only card the same way as a card printing that last day", () => {
+    const validity = { kind: "months_from_issue", months: 24 } as const;
+    const monthOnly = parseDocumentEndDate("Recommended renewal: 03/2027".split(": ")[1] ?? "")!;
+
+    const lapses = trainingLapseInstant(
+      validity,
+      { issueDate: "2025-03-04", expiryDate: monthOnly },
+      "America/Chicago",
+    );
+    const dayCard = trainingLapseInstant(
+      validity,
+      { issueDate: "2025-03-04", expiryDate: "2027-03-31" },
+      "America/Chicago",
+    );
+
+    // Valid through the end of the month: lapses at the start of 1 April, local time.
+    expect(lapses?.toISOString()).toBe("2027-04-01T05:00:00.000Z");
+    expect(lapses).toEqual(dayCard);
   });
 
   it("reads an OCR'd letter O as a zero and ignores stray spaces", () => {

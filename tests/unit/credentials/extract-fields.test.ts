@@ -110,6 +110,33 @@ describe("reading OCR-like text", () => {
     expect(amounts).toEqual([1_000_000, 1_000_000, 2_000_000, 2_000_000, 5_000]);
   });
 
+  it("reads millions written as $1M, 1MM, $2MM and amounts with cents", () => {
+    const fragments = ["$1M", "1MM", "$2MM", "$1.5M", "$ 5 million", "1,000,000.00", "$500K", "1000000"];
+
+    const amounts = fragments.map((fragment) => parseAmount(fragment));
+
+    expect(amounts).toEqual([
+      1_000_000, 1_000_000, 2_000_000, 1_500_000, 5_000_000, 1_000_000, 500_000, 1_000_000,
+    ]);
+  });
+
+  it("reads a table printed with thousands omitted as whole dollars", () => {
+    const text = [
+      "INSURER A:  Tallgrass Indemnity Corp.   31905",
+      "TYPE OF INSURANCE                                        LIMITS (000s omitted)",
+      "A  GENERAL LIABILITY   Y  N  GLP-4410023   01/15/2026  01/15/2027   EACH OCCURRENCE  $ 1,000",
+      "                                                                   GENERAL AGGREGATE  $ 2,000",
+      "A  UMBRELLA LIABILITY  N  N  UMB-7730021   01/15/2026  01/15/2027   EACH OCCURRENCE  $2M",
+      "DESCRIPTION OF OPERATIONS",
+    ].join("\n");
+
+    const gl = proposeFields("general_liability", "insurance", text).fields;
+    const umbrella = proposeFields("umbrella_liability", "insurance", text).fields;
+
+    expect(gl.limits).toEqual({ eachOccurrence: 1_000_000, generalAggregate: 2_000_000 });
+    expect(umbrella.limits).toEqual({ umbrellaEachOccurrence: 2_000_000 });
+  });
+
   it("reads a coverage row whose columns OCR put on one line with noise between them", () => {
     const text = [
       "INSURER B:  Quillmoor Casualty Company          4O512",

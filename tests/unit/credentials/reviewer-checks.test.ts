@@ -121,4 +121,17 @@ describe("reviewer warnings", () => {
 
     expect(found).toEqual([["submitted_for_another_holder"], ["submitted_for_another_holder"]]);
   });
+
+  it("warns when an each-occurrence limit is implausibly small, as a misread $1M or thousands table would be", () => {
+    const input = {
+      ...soundCertificate,
+      fields: { ...soundCertificate.fields, limits: { eachOccurrence: 1_000, generalAggregate: 2_000_000 } },
+    };
+
+    const found = codes(input);
+
+    // Commercial liability limits start in the hundreds of thousands (common practice).
+    expect(found).toContain("limit_implausibly_small");
+    expect(codes(soundCertificate)).not.toContain("limit_implausibly_small");
+  });
 });

@@ -36,6 +36,11 @@ export function Component() {
         onSubmitted={(credential) =>
           navigate(paths.provider.documents, { state: { submitted: credential.typeName } })
         }
+        onCoveragesSubmitted={(credentials) =>
+          navigate(paths.provider.documents, {
+            state: { submitted: credentials.map((c) => c.typeName).join(", "), count: credentials.length },
+          })
+        }
       />
     </>
   );

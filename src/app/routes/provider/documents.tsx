@@ -32,7 +32,7 @@ const stateOptions = credentialStates.map((state) => ({
 }));
 
 /** Navigation state the upload flow leaves behind, to say what was just sent. */
-type Arrival = { submitted?: string } | null;
+type Arrival = { submitted?: string; count?: number } | null;
 
 export function Component() {
   const [search, setSearch] = useSearchParams();
@@ -56,7 +56,8 @@ export function Component() {
           role="status"
           className="mb-4 rounded-md border-l-4 border-emerald-700 bg-emerald-50 px-4 py-3 text-sm text-ink-900"
         >
-          {arrival.submitted} was sent for verification. A reviewer will check it against the document.
+          {arrival.submitted} {(arrival.count ?? 1) > 1 ? "were" : "was"} sent for verification. A reviewer
+          will check {(arrival.count ?? 1) > 1 ? "each" : "it"} against the document.
         </p>
       )}
       <div className="mb-4 flex flex-wrap items-end gap-4">

@@ -1,3 +1,4 @@
+import { useState } from "react";
 import { useSuspenseQuery } from "@tanstack/react-query";
 import { data, useLocation, useNavigate, useParams, type LoaderFunctionArgs } from "react-router-dom";
 import { idParam } from "@shared/credentials/schemas.ts";
@@ -11,6 +12,7 @@ import { getReviewQueue } from "@/features/credentials/api/get-review-queue.ts";
 import { AuditTrail } from "@/features/credentials/components/audit-trail.tsx";
 import { DocumentViewer } from "@/features/credentials/components/document-viewer.tsx";
 import { ReviewPanel } from "@/features/credentials/components/review-panel.tsx";
+import { SameDocumentList } from "@/features/credentials/components/same-document-list.tsx";
 import { formatDateTime } from "@/lib/format-date-time.ts";
 import { queryClient } from "@/lib/query-client.ts";
 
@@ -37,6 +39,7 @@ export function Component() {
   const { data: types } = useSuspenseQuery(credentialTypesQuery());
   const navigate = useNavigate();
   const arrival = useLocation().state as { decided?: string } | null;
+  const [focused, setFocused] = useState<string | null>(null);
   const fieldSet = types.find((t) => t.code === credential.typeCode)?.fieldSet ?? "insurance";
 
   // After a decision, the next document is the oldest still waiting (the queue's default order).
@@ -71,15 +74,18 @@ export function Component() {
             documentId={credential.documentId}
             name={credential.documentName}
             mime={credential.documentMime}
+            highlight={focused ? credential.evidence[focused]?.box : undefined}
           />
         </div>
         <div className="space-y-5">
           {credential.category === "insurance" && <CautionNote />}
+          <SameDocumentList current={credential.id} rows={credential.sameDocument} />
           <ReviewPanel
             key={credential.id}
             credential={credential}
             fieldSet={fieldSet}
             onDecided={(c) => void goToNext(c)}
+            onFocusField={setFocused}
           />
         </div>
       </div>

@@ -24,6 +24,13 @@ export type CredentialType = z.infer<typeof credentialTypeSchema>;
 export const reviewerWarningSchema = z.object({ code: z.string(), message: z.string() });
 export type ReviewerWarningView = z.infer<typeof reviewerWarningSchema>;
 
+export const fieldEvidenceSchema = z.object({
+  confidence: z.number(),
+  box: z.object({ page: z.number(), x: z.number(), y: z.number(), w: z.number(), h: z.number() }).optional(),
+});
+export const evidenceSchema = z.record(z.string(), fieldEvidenceSchema).default({});
+export type FieldEvidenceView = z.infer<typeof fieldEvidenceSchema>;
+
 export const credentialSchema = z.object({
   id: z.number(),
   typeCode: z.string(),
@@ -56,9 +63,20 @@ export const auditEventSchema = z.object({
 });
 export type AuditEvent = z.infer<typeof auditEventSchema>;
 
+export const sameDocumentRowSchema = z.object({
+  id: z.number(),
+  typeCode: z.string(),
+  typeName: z.string(),
+  state: z.enum(credentialStates),
+});
+
 export const credentialDetailSchema = credentialSchema.extend({
   audit: z.array(auditEventSchema).default([]),
   warnings: z.array(reviewerWarningSchema).default([]),
+  /** Every credential sent from the same file (the coverages of one certificate), this one included. */
+  sameDocument: z.array(sameDocumentRowSchema).default([]),
+  /** Where each field was read on the page and how sure the reader was. */
+  evidence: evidenceSchema,
 });
 export type CredentialDetail = z.infer<typeof credentialDetailSchema>;
 
@@ -82,6 +100,16 @@ export const queuePageSchema = z.object({
 });
 export type QueuePage = z.infer<typeof queuePageSchema>;
 
+export const proposedCoverageSchema = z.object({
+  typeCode: z.string(),
+  typeName: z.string(),
+  fields: z.record(z.string(), z.unknown()).default({}),
+  found: z.array(z.string()).default([]),
+  evidence: evidenceSchema,
+  warnings: z.array(reviewerWarningSchema).default([]),
+});
+export type ProposedCoverage = z.infer<typeof proposedCoverageSchema>;
+
 export const uploadedDocumentSchema = z.object({
   document: z.object({
     id: z.number(),
@@ -95,7 +123,15 @@ export const uploadedDocumentSchema = z.object({
     ocrAvailable: z.boolean(),
     fields: z.record(z.string(), z.unknown()).default({}),
     found: z.array(z.string()).default([]),
+    evidence: evidenceSchema,
   }),
   warnings: z.array(reviewerWarningSchema).default([]),
+  certificate: z
+    .object({
+      parties: z.record(z.string(), z.string()).default({}),
+      coverages: z.array(proposedCoverageSchema),
+    })
+    .nullable()
+    .default(null),
 });
 export type UploadedDocument = z.infer<typeof uploadedDocumentSchema>;

@@ -9,6 +9,8 @@ type CredentialFieldInputProps = {
   onChange: (value: string | boolean) => void;
   error?: string | undefined;
   wasRead: boolean;
+  /** Read from the document but with low confidence: marked for a closer look. */
+  lowConfidence?: boolean | undefined;
   disabled?: boolean | undefined;
 };
 
@@ -19,13 +21,20 @@ export function CredentialFieldInput({
   onChange,
   error,
   wasRead,
+  lowConfidence,
   disabled,
 }: CredentialFieldInputProps) {
   const id = `credential-${definition.path.replace(/\W/g, "-")}-${useId()}`;
   const markerId = wasRead ? `${id}-read` : undefined;
+  const doubtId = lowConfidence ? `${id}-doubt` : undefined;
+  const doubt = doubtId && (
+    <p id={doubtId} className="text-sm font-medium text-amber-900">
+      Low confidence: compare it with the document closely.
+    </p>
+  );
   const hintId = definition.hint ? `${id}-hint` : undefined;
   const errorId = error ? `${id}-error` : undefined;
-  const describedBy = [markerId, hintId, errorId].filter(Boolean).join(" ") || undefined;
+  const describedBy = [markerId, doubtId, hintId, errorId].filter(Boolean).join(" ") || undefined;
   const border = error ? "border-red-700" : wasRead ? "border-ink-500 border-dashed" : "border-ink-300";
 
   if (definition.kind === "checkbox") {
@@ -45,6 +54,7 @@ export function CredentialFieldInput({
           <span className="text-sm font-medium text-ink-900">{definition.label}</span>
         </label>
         {markerId && <ReadMarker id={markerId} />}
+        {doubt}
         {error && (
           <p id={errorId} className="text-sm font-medium text-red-800">
             {error}
@@ -73,6 +83,7 @@ export function CredentialFieldInput({
         {!definition.required && <span className="font-normal text-ink-700"> (optional)</span>}
       </label>
       {markerId && <ReadMarker id={markerId} />}
+      {doubt}
       {definition.hint && (
         <p id={hintId} className="text-sm text-ink-700">
           {definition.hint}

@@ -10,6 +10,10 @@ type CredentialFieldsFormProps = {
   errors: Readonly<Record<string, string>>;
   /** Paths the server read from the document. */
   found: ReadonlySet<string>;
+  /** Paths read with low confidence, marked for a closer look. */
+  lowConfidence?: ReadonlySet<string>;
+  /** Told which field has the focus, so the document beside it can show where that value was read. */
+  onFocusField?: (path: string) => void;
   disabled?: boolean;
 };
 
@@ -20,21 +24,25 @@ export function CredentialFieldsForm({
   onChange,
   errors,
   found,
+  lowConfidence,
+  onFocusField,
   disabled,
 }: CredentialFieldsFormProps) {
   const limits = definitions.filter((d) => d.kind === "dollars" || d.path === "statutory");
   const flags = definitions.filter((d) => d.kind === "checkbox" && d.path !== "statutory");
   const main = definitions.filter((d) => !limits.includes(d) && !flags.includes(d));
   const input = (definition: FieldDefinition) => (
-    <CredentialFieldInput
-      key={definition.path}
-      definition={definition}
-      value={values[definition.path] ?? ""}
-      onChange={(value) => onChange(definition.path, value)}
-      error={errors[definition.path]}
-      wasRead={found.has(definition.path)}
-      disabled={disabled}
-    />
+    <div key={definition.path} onFocus={onFocusField ? () => onFocusField(definition.path) : undefined}>
+      <CredentialFieldInput
+        definition={definition}
+        value={values[definition.path] ?? ""}
+        onChange={(value) => onChange(definition.path, value)}
+        error={errors[definition.path]}
+        wasRead={found.has(definition.path)}
+        lowConfidence={lowConfidence?.has(definition.path)}
+        disabled={disabled}
+      />
+    </div>
   );
   return (
     <div className="space-y-5">

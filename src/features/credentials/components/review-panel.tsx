@@ -1,5 +1,6 @@
 import { useMemo, useRef, useState } from "react";
 import type { FieldSet } from "@shared/credentials/credential-fields.ts";
+import { LOW_CONFIDENCE } from "@shared/credentials/locate-values.ts";
 import { returnCredentialSchema } from "@shared/credentials/schemas.ts";
 import { isApiError } from "@/lib/api-client.ts";
 import { Button } from "@/components/ui/button.tsx";
@@ -20,13 +21,14 @@ type ReviewPanelProps = {
   credential: CredentialDetail;
   fieldSet: FieldSet;
   onDecided: (decided: Credential) => void;
+  onFocusField?: (path: string) => void;
 };
 
 const conflictWords = "Another reviewer decided this first.";
 const noFound: ReadonlySet<string> = new Set();
 
 /** The right-hand side of the review page: the fields (editable), the checks beside them, and the two decisions. */
-export function ReviewPanel({ credential, fieldSet, onDecided }: ReviewPanelProps) {
+export function ReviewPanel({ credential, fieldSet, onDecided, onFocusField }: ReviewPanelProps) {
   const definitions = useMemo(
     () => fieldDefinitionsFor(fieldSet, credential.typeCode),
     [fieldSet, credential.typeCode],
@@ -36,6 +38,15 @@ export function ReviewPanel({ credential, fieldSet, onDecided }: ReviewPanelProp
     [definitions, credential.fields],
   );
   const [values, setValues] = useState<FieldValues>(initial);
+  const doubtful = useMemo(
+    () =>
+      new Set(
+        Object.entries(credential.evidence)
+          .filter(([, e]) => e.confidence < LOW_CONFIDENCE)
+          .map(([path]) => path),
+      ),
+    [credential.evidence],
+  );
   const [problems, setProblems] = useState<Record<string, string>>({});
   const [summary, setSummary] = useState<unknown>(null);
   const [reason, setReason] = useState("");
@@ -136,6 +147,8 @@ export function ReviewPanel({ credential, fieldSet, onDecided }: ReviewPanelProp
           onChange={(path, value) => setValues((current) => ({ ...current, [path]: value }))}
           errors={problems}
           found={noFound}
+          lowConfidence={doubtful}
+          onFocusField={onFocusField}
           disabled={!open || busy}
         />
         {open && (

@@ -7,6 +7,7 @@ import { SelectField } from "@/components/ui/select-field.tsx";
 import type { Credential, CredentialType, UploadedDocument } from "../api/credential-shapes.ts";
 import { useSubmitCredential } from "../api/submit-credential.ts";
 import { useUploadDocument } from "../api/upload-document.ts";
+import { CertificateCoveragesForm } from "./certificate-coverages-form.tsx";
 import { CredentialFieldsForm } from "./credential-fields-form.tsx";
 import { CredentialTypeSelect } from "./credential-type-select.tsx";
 import { ExtractionNote } from "./extraction-note.tsx";
@@ -29,6 +30,8 @@ type UploadFlowProps = {
   initialTypeCode?: string | undefined;
   initialTechnicianId?: number | undefined;
   onSubmitted: (credential: Credential) => void;
+  /** Every coverage sent from one certificate; without it the first stands for all. */
+  onCoveragesSubmitted?: (credentials: Credential[]) => void;
 };
 
 const uploadProblem = (error: unknown): string => {
@@ -45,6 +48,7 @@ export function UploadFlow({
   initialTypeCode,
   initialTechnicianId,
   onSubmitted,
+  onCoveragesSubmitted,
 }: UploadFlowProps) {
   const [typeCode, setTypeCode] = useState(
     types.some((t) => t.code === initialTypeCode) ? (initialTypeCode ?? "") : "",
@@ -181,19 +185,38 @@ export function UploadFlow({
     );
   }
 
+  const fileBar = (
+    <div className="flex flex-wrap items-center justify-between gap-3 rounded-lg border border-ink-100 bg-white px-4 py-3">
+      <div className="min-w-0 text-sm">
+        <p className="font-semibold text-ink-900">{type?.name}</p>
+        <p className="truncate text-ink-700">
+          File: {uploaded.document.name} ({Math.max(1, Math.round(uploaded.document.sizeBytes / 1024))} kB)
+        </p>
+      </div>
+      <Button variant="secondary" onClick={startOver} disabled={submit.isPending}>
+        Use another file
+      </Button>
+    </div>
+  );
+
+  const certificate = uploaded.certificate;
+  if (certificate && certificate.coverages.length > 0) {
+    return (
+      <div className="max-w-3xl space-y-5">
+        {fileBar}
+        <CertificateCoveragesForm
+          uploaded={{ ...uploaded, certificate }}
+          onSubmitted={(credentials) =>
+            onCoveragesSubmitted ? onCoveragesSubmitted(credentials) : onSubmitted(credentials[0]!)
+          }
+        />
+      </div>
+    );
+  }
+
   return (
     <form noValidate onSubmit={send} className="max-w-3xl space-y-5" aria-label="Check the fields">
-      <div className="flex flex-wrap items-center justify-between gap-3 rounded-lg border border-ink-100 bg-white px-4 py-3">
-        <div className="min-w-0 text-sm">
-          <p className="font-semibold text-ink-900">{type?.name}</p>
-          <p className="truncate text-ink-700">
-            File: {uploaded.document.name} ({Math.max(1, Math.round(uploaded.document.sizeBytes / 1024))} kB)
-          </p>
-        </div>
-        <Button variant="secondary" onClick={startOver} disabled={submit.isPending}>
-          Use another file
-        </Button>
-      </div>
+      {fileBar}
       <ExtractionNote
         extraction={uploaded.extraction}
         readCount={definitions.filter((d) => found.has(d.path)).length}

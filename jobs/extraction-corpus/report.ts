@@ -1,0 +1,119 @@
+import { extractDocument } from "../../server/credentials/extraction/extract-document.ts";
+import { proposeCoverages, proposeFields } from "../../shared/credentials/extract-fields.ts";
+import { buildScannedPdf } from "../../tests/fixtures/build-scanned-pdf.ts";
+import { buildCorpus, type CardTruth, type CertificateTruth } from "./build-corpus.ts";
+
+/**
+ * Field accuracy of the reader on the corpus, per field kind, for the text layer and (with --ocr) the same documents
+ * scanned. Reports the held-out split unless --split tune is given; failures are listed for the tune split only, so
+ * the held-out part is never looked at field by field while tuning. A value from the wrong coverage, or any value
+ * that differs from the printed one, counts as wrong; an empty field counts as not right.
+ */
+type Kind =
+  | "names"
+  | "insurers"
+  | "naic"
+  | "policy_numbers"
+  | "dates"
+  | "limits"
+  | "marks"
+  | "card_numbers"
+  | "courses";
+type Tally = Record<Kind, { right: number; wrong: number; empty: number }>;
+
+const say = (text: string) => process.stdout.write(`${text}\n`);
+const args = process.argv.slice(2);
+const split = args.includes("--split") ? args[args.indexOf("--split") + 1] : "held_out";
+const withOcr = args.includes("--ocr");
+
+const emptyTally = (): Tally =>
+  Object.fromEntries(
+    [
+      "names",
+      "insurers",
+      "naic",
+      "policy_numbers",
+      "dates",
+      "limits",
+      "marks",
+      "card_numbers",
+      "courses",
+    ].map((k) => [k, { right: 0, wrong: 0, empty: 0 }]),
+  ) as Tally;
+
+const failures: string[] = [];
+function count(tally: Tally, kind: Kind, expected: unknown, got: unknown, where: string) {
+  if (got === undefined || got === null || got === "") tally[kind].empty += 1;
+  else if (got === expected) tally[kind].right += 1;
+  else tally[kind].wrong += 1;
+  if (got !== expected) failures.push(`${where}: ${String(got)} != ${String(expected)}`);
+}
+
+function scoreCertificate(tally: Tally, truth: CertificateTruth, text: string, id: string) {
+  const { coverages, parties } = proposeCoverages(text);
+  count(tally, "names", truth.namedInsured, parties.namedInsured, `${id} namedInsured`);
+  count(tally, "names", truth.certificateHolder, parties.certificateHolder, `${id} certificateHolder`);
+  for (const coverage of truth.coverages) {
+    const read = coverages.find((c) => c.typeCode === coverage.code)?.proposal.fields ?? {};
+    const at = `${id} ${coverage.code}`;
+    count(tally, "insurers", coverage.insurerName, read.insurerName, `${at} insurer`);
+    count(tally, "naic", coverage.naic, read.naic, `${at} naic`);
+    count(tally, "policy_numbers", coverage.policyNumber, read.policyNumber, `${at} policy`);
+    count(tally, "dates", coverage.effectiveDate, read.effectiveDate, `${at} effective`);
+    count(tally, "dates", coverage.expirationDate, read.expirationDate, `${at} expiration`);
+    for (const [name, amount] of Object.entries(coverage.limits))
+      count(
+        tally,
+        "limits",
+        amount,
+        (read.limits as Record<string, number> | undefined)?.[name],
+        `${at} ${name}`,
+      );
+    count(tally, "marks", coverage.additionalInsured, read.additionalInsured, `${at} additionalInsured`);
+    count(tally, "marks", coverage.waiverOfSubrogation, read.waiverOfSubrogation, `${at} waiver`);
+  }
+}
+
+function scoreCard(tally: Tally, truth: CardTruth, text: string, id: string) {
+  const read = proposeFields("lockout_tagout", "training", text).fields;
+  count(tally, "names", truth.holderName, read.holderName, `${id} holder`);
+  count(tally, "courses", truth.course, read.course, `${id} course`);
+  count(tally, "dates", truth.issueDate, read.issueDate, `${id} issue`);
+  count(tally, "dates", truth.expiryDate, read.expiryDate, `${id} expiry`);
+  count(tally, "card_numbers", truth.cardNumber, read.cardNumber, `${id} number`);
+  count(tally, "names", truth.trainer, read.trainer, `${id} trainer`);
+}
+
+function print(label: string, tally: Tally, docs: number, msPerPage: number[]) {
+  const rows = Object.entries(tally).filter(([, t]) => t.right + t.wrong + t.empty > 0);
+  const total = rows.reduce((s, [, t]) => s + t.right + t.wrong + t.empty, 0);
+  const right = rows.reduce((s, [, t]) => s + t.right, 0);
+  const sorted = [...msPerPage].sort((a, b) => a - b);
+  const p95 = sorted[Math.min(sorted.length - 1, Math.floor(sorted.length * 0.95))] ?? 0;
+  say(
+    `\n${label}: ${docs} documents, ${right}/${total} fields right (${((100 * right) / total).toFixed(1)}%), read p95 ${p95.toFixed(0)} ms/page`,
+  );
+  say("| field kind | right | wrong | empty | accuracy |\n|---|---:|---:|---:|---:|");
+  for (const [kind, t] of rows) {
+    const n = t.right + t.wrong + t.empty;
+    say(`| ${kind} | ${t.right} | ${t.wrong} | ${t.empty} | ${((100 * t.right) / n).toFixed(1)}% |`);
+  }
+}
+
+const corpus = (await buildCorpus()).filter((doc) => doc.split === split);
+const families = new Set(corpus.map((doc) => doc.truth.family));
+say(`Corpus split "${split}": ${corpus.length} documents from ${families.size} families`);
+for (const path of withOcr ? (["text", "ocr"] as const) : (["text"] as const)) {
+  const tally = emptyTally();
+  const times: number[] = [];
+  for (const doc of corpus) {
+    const bytes = path === "ocr" ? await buildScannedPdf(doc.bytes, 200) : doc.bytes;
+    const started = performance.now();
+    const { text } = await extractDocument({ bytes, mime: "application/pdf" });
+    times.push(performance.now() - started);
+    if (doc.truth.kind === "certificate") scoreCertificate(tally, doc.truth, text, doc.id);
+    else scoreCard(tally, doc.truth, text, doc.id);
+  }
+  print(`${path} path`, tally, corpus.length, times);
+}
+if (split === "tune" && args.includes("--failures")) say(failures.join("\n"));

@@ -1,0 +1,206 @@
+import { formatDocumentDate, documentDateFormats } from "./date-formats.ts";
+
+/** A piece of text on a page, its box as fractions of the page's width and height (top-left origin). */
+export interface PositionedText {
+  page: number;
+  text: string;
+  x: number;
+  y: number;
+  w: number;
+  h: number;
+  /** Font size as a fraction of the page's width, to tell a word space from a gap between columns. */
+  em?: number;
+}
+export type PageBox = Omit<PositionedText, "text" | "em">;
+
+/** Where a proposed value was read and how sure the reader is, for the reviewer's side-by-side page. */
+export interface FieldEvidence {
+  /** 0 to 1: 0.9 when the value was found once on the page from its text layer; lower for OCR or doubtful finds. */
+  confidence: number;
+  box?: PageBox;
+}
+export type Evidence = Record<string, FieldEvidence>;
+
+/** Below this a field is marked for a closer look. */
+export const LOW_CONFIDENCE = 0.6;
+
+// A gap wider than this many font sizes separates two cells (columns, or a label and its value across the page).
+const CELL_GAP_EMS = 1.5;
+
+/**
+ * The page's text rebuilt from positioned items: items on one baseline form a line, read left to right, and a wide
+ * gap between two items becomes three spaces, so the readers see "Name   Odile Carrack" as a label and a value in two
+ * cells, as they would in a table, rather than one run of words.
+ */
+export function layoutText(items: readonly PositionedText[]): string {
+  const order = [...items].sort((a, b) => a.page - b.page || a.y - b.y || a.x - b.x);
+  const lines: PositionedText[][] = [];
+  for (const item of order) {
+    const last = lines[lines.length - 1];
+    const head = last?.[0];
+    if (last && head && head.page === item.page && Math.abs(item.y - head.y) < Math.max(head.h, item.h) / 2)
+      last.push(item);
+    else lines.push([item]);
+  }
+  const out: string[] = [];
+  let page = order[0]?.page ?? 1;
+  for (const line of lines) {
+    if (line[0]!.page !== page) {
+      out.push("");
+      page = line[0]!.page;
+    }
+    const cells = [...line].sort((a, b) => a.x - b.x);
+    let text = "";
+    let right = 0;
+    for (const item of cells) {
+      const em = item.em ?? item.h / 1.2;
+      const gap = item.x - right;
+      if (text !== "") text += gap > CELL_GAP_EMS * em ? "   " : gap > em * 0.15 ? " " : "";
+      text += item.text;
+      right = Math.max(right, item.x + item.w);
+    }
+    out.push(text.trimEnd());
+  }
+  return out.join("\n");
+}
+
+interface Line {
+  page: number;
+  text: string;
+  /** For each character of text, the item it came from. */
+  owners: number[];
+}
+
+const squash = (text: string) => text.toLowerCase().replace(/\s+/g, " ");
+
+// Items on one baseline (within half a line) are one line, read left to right.
+function buildLines(items: readonly PositionedText[]): Line[] {
+  const order = items
+    .map((item, index) => ({ item, index }))
+    .sort((a, b) => a.item.page - b.item.page || a.item.y - b.item.y || a.item.x - b.item.x);
+  const lines: { page: number; y: number; h: number; members: number[] }[] = [];
+  for (const { item, index } of order) {
+    const last = lines[lines.length - 1];
+    if (last && last.page === item.page && Math.abs(item.y - last.y) < Math.max(last.h, item.h) / 2) {
+      last.members.push(index);
+    } else lines.push({ page: item.page, y: item.y, h: item.h, members: [index] });
+  }
+  return lines.map((line) => {
+    const members = [...line.members].sort((a, b) => items[a]!.x - items[b]!.x);
+    let text = "";
+    const owners: number[] = [];
+    for (const member of members) {
+      const piece = squash(items[member]!.text);
+      if (text !== "" && !text.endsWith(" ")) {
+        text += " ";
+        owners.push(member);
+      }
+      text += piece;
+      for (let i = 0; i < piece.length; i += 1) owners.push(member);
+    }
+    return { page: line.page, text, owners };
+  });
+}
+
+function unionBox(items: readonly PositionedText[], members: Iterable<number>): PageBox | undefined {
+  let box: PageBox | undefined;
+  for (const member of members) {
+    const item = items[member];
+    if (!item) continue;
+    if (!box) {
+      box = { page: item.page, x: item.x, y: item.y, w: item.w, h: item.h };
+      continue;
+    }
+    const right = Math.max(box.x + box.w, item.x + item.w);
+    const bottom = Math.max(box.y + box.h, item.y + item.h);
+    box.x = Math.min(box.x, item.x);
+    box.y = Math.min(box.y, item.y);
+    box.w = right - box.x;
+    box.h = bottom - box.y;
+  }
+  return box;
+}
+
+/** The ways a value may be printed: the text itself, a date in each format, an amount with or without commas. */
+function printedForms(value: unknown): string[] {
+  if (typeof value === "number") {
+    const forms = [value.toLocaleString("en-US"), String(value)];
+    if (value >= 1_000_000 && value % 1_000_000 === 0)
+      forms.push(`${value / 1_000_000}m`, `${value / 1_000_000}mm`);
+    if (value >= 1_000 && value % 1_000 === 0) forms.push((value / 1_000).toLocaleString("en-US"));
+    return forms;
+  }
+  if (typeof value !== "string" || value.trim().length < 2) return [];
+  if (/^\d{4}-\d{2}-\d{2}$/.test(value)) return documentDateFormats.map((f) => formatDocumentDate(value, f));
+  return [value];
+}
+
+function matches(lines: Line[], items: readonly PositionedText[], form: string): PageBox[] {
+  const needle = squash(form.trim());
+  const found: PageBox[] = [];
+  for (const line of lines) {
+    let at = line.text.indexOf(needle);
+    while (at >= 0) {
+      const before = line.text[at - 1];
+      const after = line.text[at + needle.length];
+      // Whole values only: "1,000,000" is not found inside "11,000,000".
+      if (!/[\w,]/.test(before ?? " ") && !/[\w]/.test(after ?? " ")) {
+        const box = unionBox(items, new Set(line.owners.slice(at, at + needle.length)));
+        if (box) found.push(box);
+      }
+      at = line.text.indexOf(needle, at + 1);
+    }
+  }
+  return found;
+}
+
+const flatten = (fields: Record<string, unknown>, prefix = ""): [string, unknown][] =>
+  Object.entries(fields).flatMap(([key, value]) =>
+    value && typeof value === "object" && !Array.isArray(value)
+      ? flatten(value as Record<string, unknown>, `${prefix}${key}.`)
+      : [[`${prefix}${key}`, value] as [string, unknown]],
+  );
+
+const distance = (a: PageBox, b: PageBox) =>
+  (a.page - b.page) * 10 + Math.abs(a.y + a.h / 2 - (b.y + b.h / 2)) + Math.abs(a.x - b.x) / 4;
+
+/**
+ * Finds where each proposed value sits on the page. A value printed in several places (the same $1,000,000 in two
+ * coverages) is placed nearest the field that anchors its coverage (the policy number) and trusted less; a value
+ * the page does not show in any printed form, and every value read by OCR (no boxes), is marked low.
+ */
+export function locateValues(
+  fields: Record<string, unknown>,
+  found: readonly string[],
+  items: readonly PositionedText[],
+  method: "pdf_text" | "ocr" | "none",
+): Evidence {
+  const evidence: Evidence = {};
+  const lines = buildLines(items);
+  const values = new Map(flatten(fields));
+  const locate = (path: string) => {
+    const boxes = printedForms(values.get(path)).flatMap((form) => matches(lines, items, form));
+    return [...new Map(boxes.map((box) => [`${box.page}:${box.x}:${box.y}`, box])).values()];
+  };
+  const anchor = locate("policyNumber")[0];
+  for (const path of found) {
+    const value = values.get(path);
+    if (typeof value === "boolean") {
+      // A mark is read from its column; the box of a one-letter mark cannot be told from other letters reliably.
+      evidence[path] = { confidence: method === "pdf_text" ? 0.7 : 0.4 };
+      continue;
+    }
+    if (method !== "pdf_text") {
+      evidence[path] = { confidence: 0.5 };
+      continue;
+    }
+    const boxes = locate(path);
+    if (boxes.length === 0) {
+      evidence[path] = { confidence: 0.5 };
+      continue;
+    }
+    const sorted = anchor ? [...boxes].sort((a, b) => distance(a, anchor) - distance(b, anchor)) : boxes;
+    evidence[path] = { confidence: boxes.length === 1 ? 0.9 : anchor ? 0.75 : 0.55, box: sorted[0]! };
+  }
+  return evidence;
+}

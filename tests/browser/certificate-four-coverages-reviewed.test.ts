@@ -1,0 +1,90 @@
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import type { Browser } from "playwright-core";
+import { startBrowserServer } from "../support/browser-server.ts";
+import { launchChromium, screenshot, signIn } from "../support/browser.ts";
+import { writeCertificateFile } from "../support/certificate-file.ts";
+import { DEMO_PASSWORD, demoSignIns } from "../../server/db/demo-scenario/index.ts";
+
+let server: Awaited<ReturnType<typeof startBrowserServer>>;
+let browser: Browser;
+beforeAll(async () => {
+  server = await startBrowserServer();
+  browser = await launchChromium();
+});
+afterAll(async () => {
+  await browser?.close();
+  await server?.close();
+});
+
+const office = demoSignIns.find((s) => s.email === "office@kestrel-ridge.test")!;
+const reviewer = demoSignIns.find((s) => s.role === "reviewer")!;
+const coverageNames = [
+  "Commercial general liability",
+  "Automobile liability",
+  "Umbrella / excess liability",
+  "Workers' compensation and employer's liability",
+];
+
+describe("one certificate with four coverages, from upload to decisions", () => {
+  it("is sent as four coverages; the reviewer verifies three and returns one, each on its own", async () => {
+    const certificate = await writeCertificateFile(51, office.company);
+    const officeContext = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+    const page = await officeContext.newPage();
+    await signIn(page, server.url, office.email, DEMO_PASSWORD);
+    await page.goto(`${server.url}/provider/documents/new`);
+    await page.getByLabel("Type of document").selectOption({ label: "Commercial general liability" });
+    await page.getByLabel("Choose a file").setInputFiles(certificate.file);
+    const form = page.getByRole("form", { name: "Check the coverages" });
+    await form.waitFor();
+
+    const sections = coverageNames.map((name) => form.getByRole("region", { name }));
+    for (const section of sections) {
+      await expect(section.getByLabel("Policy number", { exact: true }).inputValue()).resolves.not.toBe("");
+    }
+    await screenshot(page, "four-coverages-1-form");
+    await form.getByRole("button", { name: "Send 4 coverages for verification" }).click();
+    await page.getByRole("status").filter({ hasText: "were sent for verification" }).waitFor();
+    await officeContext.close();
+
+    const reviewerContext = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+    const review = await reviewerContext.newPage();
+    await signIn(review, server.url, reviewer.email, DEMO_PASSWORD);
+    const queue = await reviewerContext.request.get(
+      `${server.url}/api/review/queue?pageSize=100&sort=submittedAt&dir=desc`,
+    );
+    const rows = (
+      (await queue.json()) as { rows: { id: number; typeName: string; companyName: string }[] }
+    ).rows
+      .filter((row) => row.companyName === office.company)
+      .slice(0, 4);
+    const idOf = (name: string) => rows.find((row) => row.typeName === name)!.id;
+
+    await review.goto(`${server.url}/review/${idOf(coverageNames[0]!)}`);
+    const siblings = review.getByRole("navigation", { name: "Coverages on this document" });
+    await siblings.waitFor();
+    await expect(siblings.getByRole("listitem").count()).resolves.toBe(4);
+    // Focusing a field shows where on the page its value was read.
+    await review.getByLabel("Policy number", { exact: true }).focus();
+    await review.getByTestId("read-here").waitFor();
+    await screenshot(review, "four-coverages-2-review");
+    for (const name of coverageNames.slice(0, 3)) {
+      await review.goto(`${server.url}/review/${idOf(name)}`);
+      await review.getByRole("button", { name: "Verify", exact: true }).click();
+      await review.waitForURL((url) => !url.pathname.endsWith(`/review/${idOf(name)}`));
+    }
+    await review.goto(`${server.url}/review/${idOf(coverageNames[3]!)}`);
+    await review
+      .getByLabel("Reason for returning")
+      .fill("The employer's liability limits are cut off; send the full page.");
+    await review.getByRole("button", { name: "Return to uploader" }).click();
+    await review.waitForURL((url) => !url.pathname.endsWith(`/review/${idOf(coverageNames[3]!)}`));
+
+    await review.goto(`${server.url}/review/${idOf(coverageNames[0]!)}`);
+    const decided = review.getByRole("navigation", { name: "Coverages on this document" });
+    await decided.waitFor();
+    await screenshot(review, "four-coverages-3-decided");
+    await expect(decided.locator('[data-status="verified"]').count()).resolves.toBe(3);
+    await expect(decided.locator('[data-status="returned"]').count()).resolves.toBe(1);
+    await reviewerContext.close();
+  });
+});
