@@ -4,6 +4,7 @@ import { proposeCoverages, proposeFields } from "../../shared/credentials/extrac
 import { buildScannedPdf } from "../../tests/fixtures/build-scanned-pdf.ts";
 import { buildCorpus, type CardTruth, type CertificateTruth } from "./build-corpus.ts";
 import { buildHtmlCorpus } from "./build-html-corpus.ts";
+import { photoStyle, photographPage } from "./photograph.ts";
 
 /**
  * Field accuracy of the reader on the corpus, per field kind, for the text layer and (with --ocr) the same documents
@@ -27,6 +28,8 @@ const say = (text: string) => process.stdout.write(`${text}\n`);
 const args = process.argv.slice(2);
 const split = args.includes("--split") ? args[args.indexOf("--split") + 1] : "held_out";
 const withOcr = args.includes("--ocr");
+// OCR reads about a second a page, so --sample N reads every Nth document on the OCR paths (the text path reads all).
+const sample = args.includes("--sample") ? Number(args[args.indexOf("--sample") + 1]) : 1;
 
 const emptyTally = (): Tally =>
   Object.fromEntries(
@@ -110,16 +113,27 @@ const twoPage = [...pages.values()].filter((n) => n > 1).length;
 say(
   `Corpus split "${split}": ${corpus.length} documents from ${families.size} families, ${twoPage} of two pages`,
 );
-for (const path of withOcr ? (["text", "ocr"] as const) : (["text"] as const)) {
+for (const path of withOcr ? (["text", "ocr", "photo"] as const) : (["text"] as const)) {
   const all = { tally: emptyTally(), times: [] as number[], docs: 0 };
   const byGenerator = new Map<string, typeof all>();
-  for (const doc of corpus) {
+  for (const [index, doc] of corpus.entries()) {
+    if (path !== "text" && index % sample !== 0) continue;
+    // A photo shows one page: two-page certificates are scanned, not photographed.
+    if (path === "photo" && pages.get(doc.id)! > 1) continue;
     const mine = byGenerator.get(doc.generator) ?? { tally: emptyTally(), times: [], docs: 0 };
     byGenerator.set(doc.generator, mine);
-    const bytes = path === "ocr" ? await buildScannedPdf(doc.bytes, 200) : doc.bytes;
+    const bytes =
+      path === "ocr"
+        ? await buildScannedPdf(doc.bytes, 200)
+        : path === "photo"
+          ? await photographPage(doc.bytes, photoStyle(doc.seed))
+          : doc.bytes;
     const started = performance.now();
-    const { text } = await extractDocument({ bytes, mime: "application/pdf" });
-    const msPerPage = (performance.now() - started) / pages.get(doc.id)!;
+    const { text } = await extractDocument({
+      bytes,
+      mime: path === "photo" ? "image/png" : "application/pdf",
+    });
+    const msPerPage = (performance.now() - started) / (path === "photo" ? 1 : pages.get(doc.id)!);
     for (const bucket of [all, mine]) {
       bucket.times.push(msPerPage);
       bucket.docs += 1;
