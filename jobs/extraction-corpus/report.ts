@@ -145,4 +145,4 @@ for (const path of withOcr ? (["text", "ocr", "photo"] as const) : (["text"] as 
   for (const [generator, bucket] of byGenerator)
     print(`${path} path, ${generator}`, bucket.tally, bucket.docs, bucket.times);
 }
-if (split === "tune" && args.includes("--failures")) say(failures.join("\n"));
+if (split === "tune" && args.includes("--failures")) say([...new Set(failures)].join("\n"));
