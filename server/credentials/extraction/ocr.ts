@@ -3,6 +3,7 @@ import { constants } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { Jimp } from "jimp";
+import { imageDimensionsOfFile } from "./image-dimensions.ts";
 import { layoutText, type PositionedText } from "../../../shared/credentials/locate-values.ts";
 import {
   readingQuality,
@@ -94,6 +95,10 @@ export interface OcrReading {
 
 /** Writes the image turned counter-clockwise by `degrees` (white corners), and returns the new path. */
 async function turned(path: string, degrees: number, out: string): Promise<string> {
+  // Checked from the header before decoding: the decode itself runs in this process, outside the children's caps.
+  const declared = await imageDimensionsOfFile(path);
+  if (!declared || declared.width * declared.height > MAX_OCR_PIXELS)
+    throw new DocumentUnreadableError("corrupt", "image too large to read");
   const image = await Jimp.read(path);
   if (image.bitmap.width * image.bitmap.height > MAX_OCR_PIXELS)
     throw new DocumentUnreadableError("corrupt", "image too large to read");
