@@ -36,6 +36,11 @@ export class Document extends Model<InferAttributes<Document>, InferCreationAttr
   declare originalName: string;
   declare extractedText: string | null;
   declare extractionMethod: string;
+  /** Set for a file posted in a work-order thread: it belongs to that work order's parties only. */
+  declare workOrderId: CreationOptional<number | null>;
+  /** What a credential document was uploaded as, and for which technician (null: the company). */
+  declare typeCode: CreationOptional<string | null>;
+  declare technicianId: CreationOptional<number | null>;
   declare createdAt: CreationOptional<Date>;
 }
 
@@ -84,6 +89,9 @@ export function initCredentialModels(sequelize: Sequelize) {
       originalName: { type: DataTypes.STRING(255), allowNull: false },
       extractedText: { type: DataTypes.TEXT, allowNull: true },
       extractionMethod: { type: DataTypes.STRING(12), allowNull: false },
+      workOrderId: { type: DataTypes.INTEGER, allowNull: true },
+      typeCode: { type: DataTypes.STRING(40), allowNull: true },
+      technicianId: { type: DataTypes.INTEGER, allowNull: true },
       createdAt: DataTypes.DATE,
     },
     { sequelize, tableName: "documents", underscored: true, updatedAt: false },

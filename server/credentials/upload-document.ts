@@ -144,6 +144,8 @@ export async function uploadDocument(
           originalName: safeFileName(file.originalname),
           extractedText: extraction.text.slice(0, 100_000),
           extractionMethod: extraction.method,
+          typeCode: type.code,
+          technicianId: technicianId ?? null,
         },
         { transaction },
       );
