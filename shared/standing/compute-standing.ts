@@ -1,19 +1,25 @@
 import { evaluateRequirement } from "./evaluate-requirement.ts";
 import type { Requirement } from "./requirements.ts";
-import type { Standing, StandingCredential, StandingOptions, StandingResult } from "./standing-types.ts";
+import type {
+  RequirementResult,
+  Standing,
+  StandingCredential,
+  StandingOptions,
+  StandingResult,
+} from "./standing-types.ts";
 
 /** The worst of the requirement results: any unmet → not_cleared; else any lapsing → lapsing; else cleared. */
+export function worstStanding(statuses: readonly RequirementResult["status"][]): Standing {
+  return statuses.includes("unmet") ? "not_cleared" : statuses.includes("lapsing") ? "lapsing" : "cleared";
+}
+
 export function computeStanding(
   requirements: readonly Requirement[],
   credentials: readonly StandingCredential[],
   options: StandingOptions,
 ): StandingResult {
   const results = requirements.map((requirement) => evaluateRequirement(requirement, credentials, options));
-  const standing: Standing = results.some((r) => r.status === "unmet")
-    ? "not_cleared"
-    : results.some((r) => r.status === "lapsing")
-      ? "lapsing"
-      : "cleared";
+  const standing = worstStanding(results.map((r) => r.status));
   const lapses = results
     .filter((r) => r.status !== "unmet" && r.lapsesAt !== null)
     .map((r) => r.lapsesAt as string)
