@@ -348,7 +348,7 @@ describe("the preview of an unsaved set", () => {
     const { agent } = await buyer();
 
     const res = await agent.post("/api/requirement-sets/preview").send(set);
-    const reference = await fullEvaluation(set.requirements as Requirement[]);
+    const reference = await fullEvaluation(set.requirements as unknown as Requirement[]);
 
     expect(res.status).toBe(200);
     expect(res.body).toEqual(reference);
