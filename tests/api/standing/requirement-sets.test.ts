@@ -252,7 +252,7 @@ describe("a set's site and the number of sets", () => {
         companyId: company.id,
         siteId: null,
         name: `Set ${i}`,
-        requirements: spindleSet("Orrin Machine Works").requirements,
+        requirements: spindleSet("Orrin Machine Works").requirements as unknown as Requirement[],
       })),
     );
 
