@@ -152,6 +152,8 @@ export async function uploadDocument(
           extractedText: extraction.text.slice(0, 100_000),
           extractionMethod: extraction.method,
           extractionEvidence: extraction.evidence ?? null,
+          typeCode: type.code,
+          technicianId: technicianId ?? null,
         },
         { transaction },
       );
