@@ -19,7 +19,11 @@ export interface Mailer {
 export function createSmtpMailer(smtpUrl: string): Mailer {
   const url = new URL(smtpUrl);
   const secure = url.protocol === "smtps:";
+  // Pooled: the outbox sends one message at a time, and a lapse day can queue thousands; one SMTP conversation per
+  // message would open thousands of connections.
   const transporter: Transporter = nodemailer.createTransport({
+    pool: true,
+    maxConnections: 2,
     host: url.hostname,
     port: Number(url.port || (secure ? 465 : 587)),
     secure,

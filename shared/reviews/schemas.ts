@@ -27,7 +27,10 @@ export const reportReviewSchema = z.object({
 });
 
 export const excludeReviewSchema = z.object({
-  reason: z.string().trim().min(5, "Say why it is left out of the score (at least 5 characters)").max(1000),
+  reason: multiLineText()
+    .trim()
+    .min(5, "Say why it is left out of the score (at least 5 characters)")
+    .max(1000),
 });
 
 export const technicianReviewsQuerySchema = z.object({

@@ -93,13 +93,14 @@ describe("two server instances on one database", () => {
     children.push(one.child, two.child);
     const sessionOnOther = await agentOn(two.url, cookie).get("/api/auth/me");
     await new Promise((r) => setTimeout(r, 7_500));
+    // Stopped before counting, so no tick can start between the count and the logs it is compared with.
+    await stopProcess(one.child);
+    await stopProcess(two.child);
     const ticks = await db.query<{ n: number }>(
       "SELECT count(*)::int AS n FROM job_ticks WHERE job = 'lapse'",
     );
     const runs = await db.query<{ n: number }>("SELECT count(*)::int AS n FROM job_runs WHERE job = 'lapse'");
     const notices = await db.query<{ n: number }>("SELECT count(*)::int AS n FROM notices");
-    await stopProcess(one.child);
-    await stopProcess(two.child);
     await db.end();
 
     expect(sessionOnOther.status).toBe(200);
