@@ -49,7 +49,7 @@ async function addSiteWithMill() {
   );
   await client.query(
     `INSERT INTO equipment (site_id, builder, control_family, technology, model, serial_number)
-     VALUES ($1, 'Vantor Machine Works', 'VMX-40', 'mill', 'VM-40 vertical mill', 'VM40-7781')`,
+     VALUES ($1, 'Vantor Machine Works', 'Kestle 40', 'mill', 'VM-40 vertical mill', 'VM40-7781')`,
     [site.rows[0]!.id],
   );
 }
@@ -95,7 +95,7 @@ describe("a buyer with a machine down asks every cleared company at once", () =>
     await buyer.getByLabel("Site", { exact: true }).selectOption({ label: "Marlow east bay" });
     await buyer
       .getByLabel("Machine", { exact: true })
-      .selectOption({ label: "Vantor Machine Works VM-40 vertical mill (VMX-40)" });
+      .selectOption({ label: "Vantor Machine Works VM-40 vertical mill (Kestle 40)" });
     await buyer.getByLabel("Machine state").selectOption("down");
     await buyer.getByLabel("What is wrong").fill("won't power on");
     await buyer
