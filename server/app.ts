@@ -22,6 +22,7 @@ import { workOrderRoutes } from "./work-orders/index.ts";
 import { reviewRoutes } from "./reviews/index.ts";
 import { serviceRequestRoutes } from "./service-requests/index.ts";
 import { companyRoutes } from "./companies/index.ts";
+import { geoRoutes } from "./geo/routes.ts";
 import { createStorage } from "./storage/index.ts";
 import { createAbuseLimits } from "./accounts/abuse-limits.ts";
 import { setRosterAlertLinkBase } from "./roster/index.ts";
@@ -45,6 +46,7 @@ const apiRouters = [
   reviewRoutes,
   serviceRequestRoutes,
   companyRoutes,
+  geoRoutes,
   ...buyerRouters,
 ];
 

@@ -45,6 +45,8 @@ export interface CorpusDocument {
   id: string;
   seed: number;
   split: "tune" | "held_out";
+  /** Which independently written producer made the document: pdf-lib drawing, or HTML printed by Chromium. */
+  generator: "pdf-lib" | "chromium";
   bytes: Uint8Array;
   truth: CertificateTruth | CardTruth;
 }
@@ -103,21 +105,34 @@ const CARD_WORDINGS = [
   },
 ];
 
-const FIRST = ["Odile", "Brannock", "Tamsin", "Heloise", "Corwin", "Ysolde", "Peregrine", "Maelis"];
-const LAST = ["Quarrington", "Vellacott", "Ashgrove", "Pendlebury", "Morrowind", "Thistlewood", "Carrack"];
-const FIRMS = ["Lanternfield", "Oxbow Reach", "Saltmarsh", "Wrenfold", "Cobblestone", "Harrowgate"];
-const INSURER_KINDS = ["Mutual Casualty Co.", "Indemnity Company", "Assurance Corp.", "Fire & Casualty Co."];
-const COURSES = [
+export const FIRST = ["Odile", "Brannock", "Tamsin", "Heloise", "Corwin", "Ysolde", "Peregrine", "Maelis"];
+export const LAST = [
+  "Quarrington",
+  "Vellacott",
+  "Ashgrove",
+  "Pendlebury",
+  "Morrowind",
+  "Thistlewood",
+  "Carrack",
+];
+export const FIRMS = ["Lanternfield", "Oxbow Reach", "Saltmarsh", "Wrenfold", "Cobblestone", "Harrowgate"];
+export const INSURER_KINDS = [
+  "Mutual Casualty Co.",
+  "Indemnity Company",
+  "Assurance Corp.",
+  "Fire & Casualty Co.",
+];
+export const COURSES = [
   "Control of Hazardous Energy (Lockout/Tagout)",
   "Powered Industrial Truck Operator Evaluation",
   "Electrical Safety and Arc Flash Awareness",
   "Confined Space Entrant and Attendant",
 ];
 
-const hashSplit = (id: string): "tune" | "held_out" =>
+export const hashSplit = (id: string): "tune" | "held_out" =>
   createHash("sha256").update(id).digest()[0]! % 10 < 4 ? "held_out" : "tune";
 
-function date(random: SeededRandom, fromYear: number): string {
+export function date(random: SeededRandom, fromYear: number): string {
   return `${random.int(fromYear, fromYear + 1)}-${String(random.int(1, 12)).padStart(2, "0")}-${String(random.int(1, 28)).padStart(2, "0")}`;
 }
 const nextYear = (iso: string) => `${Number(iso.slice(0, 4)) + 1}${iso.slice(4)}`;
@@ -130,7 +145,7 @@ function amountText(random: SeededRandom, amount: number): string {
   return `$${amount.toLocaleString("en-US")}.00`;
 }
 
-function coverageTruth(random: SeededRandom, code: CoverageCode): CoverageTruth {
+export function coverageTruth(random: SeededRandom, code: CoverageCode): CoverageTruth {
   const effectiveDate = date(random, 2026);
   const million = random.pick([1, 2]) * 1_000_000;
   const limits: Record<string, number> =
@@ -310,7 +325,7 @@ export async function buildCorpus(perFamily = 4): Promise<CorpusDocument[]> {
         seed += 1;
         const { bytes, truth } = await certificatePdf(seed, mode, wording);
         const id = `${truth.family}/${seed}`;
-        documents.push({ id, seed, split: hashSplit(id), bytes, truth });
+        documents.push({ id, seed, split: hashSplit(id), generator: "pdf-lib", bytes, truth });
       }
     }
   }
@@ -320,7 +335,7 @@ export async function buildCorpus(perFamily = 4): Promise<CorpusDocument[]> {
         seed += 1;
         const { bytes, truth } = await cardPdf(seed, mode, wording);
         const id = `${truth.family}/${seed}`;
-        documents.push({ id, seed, split: hashSplit(id), bytes, truth });
+        documents.push({ id, seed, split: hashSplit(id), generator: "pdf-lib", bytes, truth });
       }
     }
   }

@@ -1,7 +1,10 @@
+import { PDFDocument } from "pdf-lib";
 import { extractDocument } from "../../server/credentials/extraction/extract-document.ts";
 import { proposeCoverages, proposeFields } from "../../shared/credentials/extract-fields.ts";
 import { buildScannedPdf } from "../../tests/fixtures/build-scanned-pdf.ts";
 import { buildCorpus, type CardTruth, type CertificateTruth } from "./build-corpus.ts";
+import { buildHtmlCorpus } from "./build-html-corpus.ts";
+import { photoStyle, photographPage } from "./photograph.ts";
 
 /**
  * Field accuracy of the reader on the corpus, per field kind, for the text layer and (with --ocr) the same documents
@@ -25,6 +28,8 @@ const say = (text: string) => process.stdout.write(`${text}\n`);
 const args = process.argv.slice(2);
 const split = args.includes("--split") ? args[args.indexOf("--split") + 1] : "held_out";
 const withOcr = args.includes("--ocr");
+// OCR reads about a second a page, so --sample N reads every Nth document on the OCR paths (the text path reads all).
+const sample = args.includes("--sample") ? Number(args[args.indexOf("--sample") + 1]) : 1;
 
 const emptyTally = (): Tally =>
   Object.fromEntries(
@@ -100,20 +105,44 @@ function print(label: string, tally: Tally, docs: number, msPerPage: number[]) {
   }
 }
 
-const corpus = (await buildCorpus()).filter((doc) => doc.split === split);
+const corpus = [...(await buildCorpus()), ...(await buildHtmlCorpus())].filter((doc) => doc.split === split);
 const families = new Set(corpus.map((doc) => doc.truth.family));
-say(`Corpus split "${split}": ${corpus.length} documents from ${families.size} families`);
-for (const path of withOcr ? (["text", "ocr"] as const) : (["text"] as const)) {
-  const tally = emptyTally();
-  const times: number[] = [];
-  for (const doc of corpus) {
-    const bytes = path === "ocr" ? await buildScannedPdf(doc.bytes, 200) : doc.bytes;
+const pages = new Map<string, number>();
+for (const doc of corpus) pages.set(doc.id, (await PDFDocument.load(doc.bytes)).getPageCount());
+const twoPage = [...pages.values()].filter((n) => n > 1).length;
+say(
+  `Corpus split "${split}": ${corpus.length} documents from ${families.size} families, ${twoPage} of two pages`,
+);
+for (const path of withOcr ? (["text", "ocr", "photo"] as const) : (["text"] as const)) {
+  const all = { tally: emptyTally(), times: [] as number[], docs: 0 };
+  const byGenerator = new Map<string, typeof all>();
+  for (const [index, doc] of corpus.entries()) {
+    if (path !== "text" && index % sample !== 0) continue;
+    // A photo shows one page: two-page certificates are scanned, not photographed.
+    if (path === "photo" && pages.get(doc.id)! > 1) continue;
+    const mine = byGenerator.get(doc.generator) ?? { tally: emptyTally(), times: [], docs: 0 };
+    byGenerator.set(doc.generator, mine);
+    const bytes =
+      path === "ocr"
+        ? await buildScannedPdf(doc.bytes, 200)
+        : path === "photo"
+          ? await photographPage(doc.bytes, photoStyle(doc.seed))
+          : doc.bytes;
     const started = performance.now();
-    const { text } = await extractDocument({ bytes, mime: "application/pdf" });
-    times.push(performance.now() - started);
-    if (doc.truth.kind === "certificate") scoreCertificate(tally, doc.truth, text, doc.id);
-    else scoreCard(tally, doc.truth, text, doc.id);
+    const { text } = await extractDocument({
+      bytes,
+      mime: path === "photo" ? "image/png" : "application/pdf",
+    });
+    const msPerPage = (performance.now() - started) / (path === "photo" ? 1 : pages.get(doc.id)!);
+    for (const bucket of [all, mine]) {
+      bucket.times.push(msPerPage);
+      bucket.docs += 1;
+      if (doc.truth.kind === "certificate") scoreCertificate(bucket.tally, doc.truth, text, doc.id);
+      else scoreCard(bucket.tally, doc.truth, text, doc.id);
+    }
   }
-  print(`${path} path`, tally, corpus.length, times);
+  print(`${path} path, all generators`, all.tally, all.docs, all.times);
+  for (const [generator, bucket] of byGenerator)
+    print(`${path} path, ${generator}`, bucket.tally, bucket.docs, bucket.times);
 }
-if (split === "tune" && args.includes("--failures")) say(failures.join("\n"));
+if (split === "tune" && args.includes("--failures")) say([...new Set(failures)].join("\n"));

@@ -41,7 +41,11 @@ function limiter(spec: LimitSpec): RequestHandler {
   return limit;
 }
 
-export type AbuseLimitName = "signIn" | "signUp" | "passwordReset" | "setPassword";
+export type AbuseLimitName = "signIn" | "signUp" | "passwordReset" | "setPassword" | "zipLookup";
+
+// Common practice: the sign-up form asks once per ZIP typed; 30 a minute per address is plenty for people and too slow
+// to copy the ZIP table through it.
+const ZIP_LOOKUPS_PER_IP_PER_MINUTE = 30;
 
 /**
  * Per address and per account limits of the four anonymous account routes, built once per app (counts are kept in
@@ -97,6 +101,15 @@ export function createAbuseLimits(config: Config): Record<AbuseLimitName, Reques
         key: byEmail,
         failuresOnly: false,
         message: `Too many reset requests for this e-mail; ${wait(60)}`,
+      }),
+    ],
+    zipLookup: [
+      limiter({
+        windowMs: MINUTE,
+        limit: ZIP_LOOKUPS_PER_IP_PER_MINUTE,
+        key: byIp,
+        failuresOnly: false,
+        message: "Too many ZIP look-ups from this address; wait a minute and try again",
       }),
     ],
     setPassword: [

@@ -11,17 +11,18 @@ import { lapseInstantFor } from "../credentials/field-validation.ts";
 import { Credential } from "../credentials/model.ts";
 
 /** The place of a company's mailing address, with the zone its policy periods are read in; refused when unknown. */
-export function placeOfCompany(postalCode: string): PostalPlace & { timeZone: string } {
+export function placeOfCompany(
+  postalCode: string,
+  path = "body.postalCode",
+): PostalPlace & { timeZone: string } {
   const place = lookupPostalCode(postalCode);
   if (!place)
-    throw new AppError("invalid_input", "Unknown ZIP code", [
-      { path: "body.postalCode", message: "not a known US ZIP code" },
-    ]);
+    throw new AppError("invalid_input", "Unknown ZIP code", [{ path, message: "not a known US ZIP code" }]);
   const { timeZone } = place;
   if (!timeZone)
     throw new AppError("invalid_input", "No time zone is known for this ZIP code", [
       {
-        path: "body.postalCode",
+        path,
         message: "no time zone is known for this ZIP code; check it or ask support",
       },
     ]);

@@ -1,4 +1,4 @@
-import type { CredentialTypeDefinition } from "../../shared/credentials/catalogue.ts";
+import { credentialTypeByCode, type CredentialTypeDefinition } from "../../shared/credentials/catalogue.ts";
 import { AppError } from "../http/app-error.ts";
 import { CredentialType } from "./model.ts";
 import { recordAudit } from "../audit/index.ts";
@@ -37,7 +37,12 @@ export async function listCredentialTypes() {
       ["name", "ASC"],
     ],
   });
-  return rows.map((r) => ({ ...toDefinition(r), active: r.active }));
+  // Cautions are not admin-editable: they come from the code's catalog so each caution is written once.
+  return rows.map((r) => ({
+    ...toDefinition(r),
+    caution: credentialTypeByCode.get(r.code)?.caution ?? null,
+    active: r.active,
+  }));
 }
 
 export async function editCredentialType(

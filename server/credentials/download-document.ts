@@ -8,6 +8,7 @@ import { recordAudit } from "../audit/index.ts";
 import type { FileStorage } from "../storage/index.ts";
 import { Document } from "./model.ts";
 import { MAX_PREVIEW_PIXELS, pdfPageSizes, renderDpi, runBounded } from "./extraction/render-bounds.ts";
+import { documentAccessFor } from "./document-access.ts";
 
 const PREVIEW_DPI = 110;
 
@@ -18,6 +19,21 @@ async function loadDocument(id: number) {
   const document = await Document.findByPk(id);
   if (!document) throw new AppError("not_found", "That document was not found");
   return document;
+}
+
+/**
+ * A work-order attachment is private to the two parties; an admin may open one to settle a dispute, and that reading is
+ * recorded on the work order itself, where the parties' own history lives.
+ */
+async function recordDisputeRead(user: Express.User, document: Document) {
+  if (document.workOrderId === null || (await documentAccessFor(user, document.id)) !== "dispute") return;
+  await recordAudit({
+    actorUserId: user.id,
+    action: "work_order.attachment_read_by_admin",
+    subjectType: "work_order",
+    subjectId: document.workOrderId,
+    after: { documentId: document.id },
+  });
 }
 
 // Files are served as data, never as pages: no sniffing, no scripts, and a download by default.
@@ -38,6 +54,7 @@ export async function sendDocumentFile(
   res: Response,
 ) {
   const document = await loadDocument(id);
+  await recordDisputeRead(user, document);
   await recordAudit({
     actorUserId: user.id,
     action: "document.downloaded",
@@ -58,8 +75,15 @@ export async function sendDocumentFile(
  * A PNG of one page of a PDF, rendered by poppler's pdftoppm within the render bounds (pixels, memory, the shared queue,
  * a time limit): nothing of the PDF runs in the browser.
  */
-export async function sendPdfPage(id: number, page: number, storage: FileStorage, res: Response) {
+export async function sendPdfPage(
+  user: Express.User,
+  id: number,
+  page: number,
+  storage: FileStorage,
+  res: Response,
+) {
   const document = await loadDocument(id);
+  await recordDisputeRead(user, document);
   if (document.mime !== "application/pdf" || page > MAX_PREVIEW_PAGES)
     throw new AppError("not_found", "No such page");
   const dir = await mkdtemp(path.join(tmpdir(), "clearbench-page-"));

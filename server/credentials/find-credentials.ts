@@ -1,4 +1,5 @@
-import { QueryTypes } from "sequelize";
+import { Op, QueryTypes, type WhereOptions } from "sequelize";
+import { credentialScopeWhere } from "./policy.ts";
 import type { QueueQuery } from "../../shared/credentials/schemas.ts";
 import { reviewerWarnings } from "../../shared/credentials/reviewer-checks.ts";
 import { db } from "../db/sequelize.ts";
@@ -14,16 +15,21 @@ import type { Evidence } from "../../shared/credentials/locate-values.ts";
 import { workStatesOf } from "./work-states.ts";
 import { fieldsForBuyers } from "../../shared/credentials/fields-for-buyers.ts";
 
+/** The caller's credentials: the shared read scope narrowed by the filters, never widened by them. */
 export async function listOwnCredentials(
   user: Express.User,
   filter: { technicianId?: number; state?: string; holder?: "company" | "technician" },
 ) {
-  const where: Record<string, unknown> = { companyId: user.companyId };
-  if (user.role === "technician") where.technicianId = user.technicianId ?? -1;
-  else if (filter.technicianId) where.technicianId = filter.technicianId;
-  if (filter.holder === "company") where.technicianId = null;
-  if (filter.state) where.state = filter.state;
-  const rows = await Credential.findAll({ where, order: [["submittedAt", "DESC"]], limit: 500 });
+  const narrowed: WhereOptions[] = [credentialScopeWhere(user)];
+  if (filter.technicianId) narrowed.push({ technicianId: filter.technicianId });
+  if (filter.holder === "company") narrowed.push({ technicianId: null });
+  if (filter.holder === "technician") narrowed.push({ technicianId: { [Op.ne]: null } });
+  if (filter.state) narrowed.push({ state: filter.state });
+  const rows = await Credential.findAll({
+    where: { [Op.and]: narrowed },
+    order: [["submittedAt", "DESC"]],
+    limit: 500,
+  });
   return toCredentialDtos(rows);
 }
 

@@ -39,6 +39,11 @@ export class Document extends Model<InferAttributes<Document>, InferCreationAttr
   declare extractionMethod: string;
   /** Field evidence (confidence and page box) by credential type code, as the reader proposed it. */
   declare extractionEvidence: CreationOptional<Record<string, Evidence> | null>;
+  /** Set for a file posted in a work-order thread: it belongs to that work order's parties only. */
+  declare workOrderId: CreationOptional<number | null>;
+  /** What a credential document was uploaded as, and for which technician (null: the company). */
+  declare typeCode: CreationOptional<string | null>;
+  declare technicianId: CreationOptional<number | null>;
   declare createdAt: CreationOptional<Date>;
 }
 
@@ -88,6 +93,9 @@ export function initCredentialModels(sequelize: Sequelize) {
       extractedText: { type: DataTypes.TEXT, allowNull: true },
       extractionMethod: { type: DataTypes.STRING(12), allowNull: false },
       extractionEvidence: { type: DataTypes.JSONB, allowNull: true },
+      workOrderId: { type: DataTypes.INTEGER, allowNull: true },
+      typeCode: { type: DataTypes.STRING(40), allowNull: true },
+      technicianId: { type: DataTypes.INTEGER, allowNull: true },
       createdAt: DataTypes.DATE,
     },
     { sequelize, tableName: "documents", underscored: true, updatedAt: false },

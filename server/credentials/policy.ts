@@ -1,8 +1,28 @@
 import { requireOwnership, requireRole, type SignedInUser } from "../http/policy.ts";
 import { isTechnicianManagedBy } from "../technicians/policy.ts";
 import { viewLevelOf } from "../technicians/visibility.ts";
-import { atLeast, BUYER_DOWNLOADABLE_CATEGORIES } from "../../shared/visibility/technician-visibility.ts";
-import { Credential, CredentialType, Document } from "./model.ts";
+import { atLeast } from "../../shared/visibility/technician-visibility.ts";
+import { Op, type WhereOptions } from "sequelize";
+import { credentialReadScope } from "../../shared/credentials/read-rules.ts";
+import { Credential } from "./model.ts";
+import { documentAccessFor } from "./document-access.ts";
+
+/** The shared credential read scope as a where clause: the list and the single read both use it. */
+export function credentialScopeWhere(user: SignedInUser): WhereOptions {
+  const scope = credentialReadScope(user);
+  switch (scope.kind) {
+    case "all":
+      return {};
+    case "verified":
+      return { state: "verified" };
+    case "company":
+      return { companyId: scope.companyId };
+    case "technician":
+      return { companyId: scope.companyId, technicianId: scope.technicianId };
+    case "none":
+      return { id: -1 };
+  }
+}
 
 export const canReviewCredentials = requireRole("reviewer");
 export const canUploadDocuments = requireRole("provider_admin", "technician");
@@ -12,64 +32,31 @@ export const canListOwnCredentials = requireRole("provider_admin", "technician")
 export const canEditCatalogue = requireRole("admin");
 export const canReadCatalogue = requireRole("provider_admin", "technician", "reviewer", "buyer", "admin");
 
-/** Who may see one credential: its company's admin, its technician, reviewers and admins; buyers once verified. */
-export async function canSeeCredential(user: SignedInUser, credential: Credential): Promise<boolean> {
-  switch (user.role) {
-    case "reviewer":
-    case "admin":
-      return true;
-    case "buyer":
-      // A technician's own card only while the shared rule shows them to shops; company policies once verified.
-      if (credential.state !== "verified") return false;
-      return (
-        credential.technicianId === null ||
-        atLeast(await viewLevelOf(user, credential.technicianId), "directory")
-      );
-    case "provider_admin":
-      return credential.companyId === user.companyId;
-    case "technician":
-      return credential.technicianId !== null && credential.technicianId === user.technicianId;
-  }
+/**
+ * Who may see one credential: the same scope the list is read with (shared/credentials/read-rules.ts); for a buyer, a
+ * technician's own card only while the shared technician rule shows that technician to shops.
+ */
+export async function canSeeCredential(user: SignedInUser, credentialId: number): Promise<boolean> {
+  const credential = await Credential.findOne({
+    where: { [Op.and]: [{ id: credentialId }, credentialScopeWhere(user)] },
+    attributes: ["id", "technicianId"],
+  });
+  if (!credential) return false;
+  if (user.role !== "buyer" || credential.technicianId === null) return true;
+  return atLeast(await viewLevelOf(user, credential.technicianId), "directory");
 }
 
 export const canViewCredential = requireOwnership(
   requireRole("provider_admin", "technician", "reviewer", "buyer", "admin"),
   "own company, own card, reviewer/admin, or a buyer once verified",
   async (user, params) => {
-    const credential = await Credential.findByPk(Number(params.credentialId));
-    return credential ? canSeeCredential(user, credential) : false;
+    return canSeeCredential(user, Number(params.credentialId));
   },
 );
 
-/**
- * Files: the uploading company's admin and the technician it concerns, reviewers and admins; buyers only
- * a certificate of insurance that has been verified.
- */
+/** Files: the shared read rule (shared/credentials/read-rules.ts), one answer for every role. */
 export async function canReadDocument(user: SignedInUser, documentId: number): Promise<boolean> {
-  const document = await Document.findByPk(documentId, { attributes: ["id", "companyId", "uploadedBy"] });
-  if (!document) return false;
-  if (user.role === "reviewer" || user.role === "admin") return true;
-  if (user.role === "provider_admin") return document.companyId === user.companyId;
-  const credentials = await Credential.findAll({
-    where: { documentId },
-    attributes: ["state", "typeCode", "technicianId", "companyId"],
-  });
-  if (user.role === "technician") {
-    return (
-      document.uploadedBy === user.id ||
-      credentials.some((c) => c.technicianId !== null && c.technicianId === user.technicianId)
-    );
-  }
-  if (user.role === "buyer") {
-    const verified = credentials.filter((c) => c.state === "verified").map((c) => c.typeCode);
-    if (verified.length === 0) return false;
-    return (
-      (await CredentialType.count({
-        where: { code: verified, category: [...BUYER_DOWNLOADABLE_CATEGORIES] },
-      })) > 0
-    );
-  }
-  return false;
+  return (await documentAccessFor(user, documentId)) !== "none";
 }
 
 export const canDownloadDocument = requireOwnership(

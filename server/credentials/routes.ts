@@ -71,7 +71,7 @@ credentialRoutes.get(
     allow: canDownloadDocument,
     params: documentParamsSchema.extend({ page: z.coerce.number().int().min(1).max(10) }),
   },
-  (_req, res, { params }) => sendPdfPage(params.documentId, params.page, appStorage(_req), res),
+  (req, res, { params }) => sendPdfPage(req.user!, params.documentId, params.page, appStorage(req), res),
 );
 
 credentialRoutes.post(

@@ -17,9 +17,22 @@ type FieldProblem = { path: string; message: string };
  */
 export async function submitCoverages(user: Express.User, input: SubmitCoverages) {
   const document = await Document.findByPk(input.documentId);
-  if (!document || document.companyId !== user.companyId) {
+  // The file rule of a single credential: the company's own credential document (never a work-order attachment),
+  // uploaded as a certificate of insurance rather than as a card.
+  const uploadedAs = document?.typeCode
+    ? await CredentialType.findByPk(document.typeCode, { attributes: ["fieldSet", "holder"] })
+    : null;
+  if (!document || document.companyId !== user.companyId || document.workOrderId !== null) {
     throw new AppError("invalid_input", "Upload the document first", [
       { path: "body.documentId", message: "unknown document" },
+    ]);
+  }
+  if (uploadedAs && (uploadedAs.fieldSet !== "insurance" || uploadedAs.holder !== "company")) {
+    throw new AppError("invalid_input", "That document cannot back these coverages", [
+      {
+        path: "body.documentId",
+        message: "uploaded as another kind of document; upload it again as a certificate",
+      },
     ]);
   }
   const types = await CredentialType.findAll({ where: { code: input.credentials.map((c) => c.typeCode) } });

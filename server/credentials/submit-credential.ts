@@ -6,19 +6,46 @@ import { Company } from "../companies/model.ts";
 import { activeType, toDefinition } from "./catalogue.ts";
 import { resolveHolder } from "./resolve-holder.ts";
 import { checkNamedTechnicians, lapseInstantFor, parseFields } from "./field-validation.ts";
-import { Credential, Document } from "./model.ts";
+import { Credential, CredentialType, Document } from "./model.ts";
+import { documentAccessFor } from "./document-access.ts";
 import { toCredentialDto } from "./dto.ts";
+
+const documentProblem = (message: string) =>
+  new AppError("invalid_input", "That document cannot back this credential", [
+    { path: "body.documentId", message },
+  ]);
+
+/**
+ * The file a credential stands on: one its submitter may already read (anything else answers like a missing file), a
+ * credential document rather than a work-order attachment, uploaded as the same kind of document (same field set, so
+ * one certificate of insurance may back each coverage it lists) and for the same holder.
+ */
+async function usableDocument(
+  user: Express.User,
+  documentId: number,
+  type: CredentialType,
+  technicianId: number | null,
+) {
+  const document = await Document.findByPk(documentId);
+  if (!document || document.workOrderId !== null || (await documentAccessFor(user, documentId)) !== "read")
+    throw documentProblem("unknown document");
+  if (document.typeCode !== null) {
+    const uploadedAs = await CredentialType.findByPk(document.typeCode, {
+      attributes: ["fieldSet", "holder"],
+    });
+    if (uploadedAs && (uploadedAs.fieldSet !== type.fieldSet || uploadedAs.holder !== type.holder))
+      throw documentProblem("uploaded as another kind of document; upload it again as this type");
+    if (document.technicianId !== technicianId)
+      throw documentProblem("uploaded for another holder; upload it again for this one");
+  }
+  return document;
+}
 
 /** Creates a credential awaiting verification from an uploaded document and the checked fields. */
 export async function submitCredential(user: Express.User, input: SubmitCredential) {
   const type = await activeType(input.typeCode);
   const technicianId = await resolveHolder(user, type, input.technicianId);
-  const document = await Document.findByPk(input.documentId);
-  if (!document || document.companyId !== user.companyId) {
-    throw new AppError("invalid_input", "Upload the document first", [
-      { path: "body.documentId", message: "unknown document" },
-    ]);
-  }
+  const document = await usableDocument(user, input.documentId, type, technicianId ?? null);
   const fields = parseFields(type.fieldSet, input.fields);
   await checkNamedTechnicians(fields, user.companyId);
   const company = await Company.findByPk(user.companyId);

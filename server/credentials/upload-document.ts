@@ -19,7 +19,7 @@ import { Company } from "../companies/model.ts";
 import { Technician } from "../technicians/model.ts";
 import { extractDocument, type ExtractableMime } from "./extraction/extract-document.ts";
 import { isOcrAvailable } from "./extraction/ocr.ts";
-import { refuseOversizedPages } from "./extraction/render-bounds.ts";
+import { refuseOversizedImage, refuseOversizedPages } from "./extraction/render-bounds.ts";
 import { DocumentUnreadableError } from "./extraction/document-unreadable-error.ts";
 import { activeType } from "./catalogue.ts";
 import { resolveHolder } from "./resolve-holder.ts";
@@ -119,6 +119,7 @@ export async function uploadDocument(
     await rename(file.path, ready);
     pending = ready;
     if (mime === "application/pdf") await refuseOversizedPages(ready);
+    else await refuseOversizedImage(ready);
     // The bytes are read only when something reads them: the PDF text layer (and OCR of a scan), or OCR of an image.
     // Without OCR an image yields no text whatever its bytes, so it is not read into memory at all.
     const needsBytes = mime === "application/pdf" || (await isOcrAvailable());
@@ -151,6 +152,8 @@ export async function uploadDocument(
           extractedText: extraction.text.slice(0, 100_000),
           extractionMethod: extraction.method,
           extractionEvidence: extraction.evidence ?? null,
+          typeCode: type.code,
+          technicianId: technicianId ?? null,
         },
         { transaction },
       );

@@ -17,6 +17,7 @@ import { assumptions, estimateTrip, ratingSummary, SCORE_SOURCE } from "./estima
 import { buildFilters, DIRECTORY_FROM, distanceSql, type DirectoryCriteria } from "./search-filters.ts";
 import { SqlParams } from "./sql-params.ts";
 import { storedScoreIsCurrent } from "./stored-score.ts";
+import { loadRequirementsMet } from "./requirements-met.ts";
 
 interface DirectoryRow {
   id: number;
@@ -107,7 +108,11 @@ function sortKeySql(sort: DirectorySort, distance: string | null, p: SqlParams, 
   }
 }
 
-function toRowDto(row: DirectoryRow, onSiteHours: number): DirectoryRowDto {
+function toRowDto(
+  row: DirectoryRow,
+  onSiteHours: number,
+  requirementsMet: DirectoryRowDto["requirementsMet"],
+): DirectoryRowDto {
   const rates = {
     hourlyRateCents: row.hourly_rate_cents,
     travelRateCents: row.travel_rate_cents,
@@ -130,6 +135,7 @@ function toRowDto(row: DirectoryRow, onSiteHours: number): DirectoryRowDto {
     rating: ratingSummary(row.review_count, row.star_sum),
     standing: row.standing,
     earliestLapse: row.earliest_lapse ? new Date(row.earliest_lapse).toISOString() : null,
+    requirementsMet,
     ...rates,
   };
 }
@@ -209,8 +215,16 @@ export async function searchDirectory(
       ? encodeCursor({ sort, key: Number(last.sort_key), id: last.id })
       : null;
   const emptyReason = page.length === 0 && !cursor ? await findEmptyReason(criteria) : null;
+  const setId = criteria.requirementSetId;
+  const met =
+    setId === undefined
+      ? null
+      : await loadRequirementsMet(
+          setId,
+          page.map((r) => r.id),
+        );
   return {
-    rows: page.map((r) => toRowDto(r, query.onSiteHours)),
+    rows: page.map((r) => toRowDto(r, query.onSiteHours, met ? (met.get(r.id) ?? []) : null)),
     nextCursor,
     sort,
     emptyReason,

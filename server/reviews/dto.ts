@@ -3,6 +3,7 @@ import { Company } from "../companies/index.ts";
 import { User } from "../accounts/index.ts";
 import { Technician } from "../technicians/index.ts";
 import type { JobReview } from "./model.ts";
+import { selfRatingSignalKinds, type SelfRatingSignal } from "../../shared/reviews/self-rating.ts";
 
 async function namesFor(rows: JobReview[]) {
   const ids = (pick: (r: JobReview) => number | null) => [
@@ -11,7 +12,9 @@ async function namesFor(rows: JobReview[]) {
   const [shops, users, technicians] = await Promise.all([
     Company.findAll({ where: { id: ids((r) => r.shopCompanyId) }, attributes: ["id", "name"] }),
     User.findAll({
-      where: { id: [...ids((r) => r.authorUserId), ...ids((r) => r.reportedBy)] },
+      where: {
+        id: [...ids((r) => r.authorUserId), ...ids((r) => r.reportedBy), ...ids((r) => r.excludedBy)],
+      },
       attributes: ["id", "name"],
     }),
     Technician.findAll({ where: { id: ids((r) => r.technicianId) }, attributes: ["id", "name"] }),
@@ -50,8 +53,18 @@ export async function toReportedReviewDtos(rows: JobReview[]): Promise<ReportedR
   const names = await namesFor(rows);
   return rows.map((r) => ({
     ...toDto(r, names),
-    reportedAt: r.reportedAt!.toISOString(),
+    reportedAt: r.reportedAt?.toISOString() ?? null,
     reportReason: r.reportReason ?? "",
+    selfRatingSignals: r.selfRatingSignals.filter((s): s is SelfRatingSignal =>
+      (selfRatingSignalKinds as readonly string[]).includes(s),
+    ),
+    excluded: r.excludedAt
+      ? {
+          at: r.excludedAt.toISOString(),
+          reason: r.exclusionReason ?? "",
+          by: names.user.get(r.excludedBy ?? 0) ?? "",
+        }
+      : null,
     reportedBy: { id: r.reportedBy ?? 0, name: names.user.get(r.reportedBy ?? 0) ?? "" },
     technicianName: names.technician.get(r.technicianId) ?? "",
   }));

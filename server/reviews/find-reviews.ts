@@ -1,4 +1,4 @@
-import { Op, QueryTypes } from "sequelize";
+import { Op, QueryTypes, literal } from "sequelize";
 import type { TechnicianReviewsDto } from "../../shared/reviews/schemas.ts";
 import { db } from "../db/sequelize.ts";
 import { JobReview } from "./model.ts";
@@ -12,7 +12,7 @@ export async function listTechnicianReviews(
   page: { limit: number; before?: number | undefined },
 ): Promise<TechnicianReviewsDto> {
   const [totals] = await db().query<{ count: number; star_sum: number | null }>(
-    "SELECT count(*)::int AS count, sum(stars)::int AS star_sum FROM job_reviews WHERE technician_id = $1",
+    "SELECT count(*)::int AS count, sum(stars)::int AS star_sum FROM job_reviews WHERE technician_id = $1 AND excluded_at IS NULL",
     { bind: [technicianId], type: QueryTypes.SELECT },
   );
   const rows = await JobReview.findAll({
@@ -33,11 +33,17 @@ export async function findWorkOrderReview(workOrderId: number) {
   return { review: row ? (await toReviewDtos([row]))[0]! : null };
 }
 
-/** The admin's queue of flagged reviews, oldest report first. */
+/** The admin's queue: reported reviews, oldest report first, then those flagged as possible self-rating. */
 export async function listReportedReviews() {
   const rows = await JobReview.findAll({
-    where: { reportedAt: { [Op.ne]: null } },
-    order: [["reportedAt", "ASC"]],
+    where: {
+      [Op.or]: [{ reportedAt: { [Op.ne]: null } }, literal("cardinality(self_rating_signals) > 0")],
+    },
+    order: [
+      [literal("reported_at IS NULL"), "ASC"],
+      ["reportedAt", "ASC"],
+      ["createdAt", "ASC"],
+    ],
     limit: REPORTED_LIMIT,
   });
   return toReportedReviewDtos(rows);

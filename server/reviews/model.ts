@@ -21,6 +21,10 @@ export class JobReview extends Model<InferAttributes<JobReview>, InferCreationAt
   declare reportedAt: CreationOptional<Date | null>;
   declare reportReason: CreationOptional<string | null>;
   declare reportedBy: CreationOptional<number | null>;
+  declare selfRatingSignals: CreationOptional<string[]>;
+  declare excludedAt: CreationOptional<Date | null>;
+  declare excludedBy: CreationOptional<number | null>;
+  declare exclusionReason: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
 }
 
@@ -40,6 +44,10 @@ export function initReviewModel(sequelize: Sequelize) {
       reportedAt: { type: DataTypes.DATE, allowNull: true },
       reportReason: { type: DataTypes.TEXT, allowNull: true },
       reportedBy: { type: DataTypes.INTEGER, allowNull: true },
+      selfRatingSignals: { type: DataTypes.ARRAY(DataTypes.TEXT), allowNull: false, defaultValue: [] },
+      excludedAt: { type: DataTypes.DATE, allowNull: true },
+      excludedBy: { type: DataTypes.INTEGER, allowNull: true },
+      exclusionReason: { type: DataTypes.TEXT, allowNull: true },
       createdAt: DataTypes.DATE,
     },
     { sequelize, tableName: "job_reviews", underscored: true, updatedAt: false },

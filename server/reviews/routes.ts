@@ -1,4 +1,5 @@
 import {
+  excludeReviewSchema,
   replyToReviewSchema,
   reportReviewSchema,
   reviewParamsSchema,
@@ -17,6 +18,7 @@ import {
   canWriteReview,
 } from "./policy.ts";
 import { writeReview } from "./write-review.ts";
+import { excludeReviewFromScore } from "./exclude-review.ts";
 import { replyToReview, reportReview } from "./answer-review.ts";
 import { findWorkOrderReview, listReportedReviews, listTechnicianReviews } from "./find-reviews.ts";
 
@@ -49,6 +51,12 @@ reviewRoutes.post(
 );
 
 reviewRoutes.get("/admin/reviews/reported", { allow: canModerateReviews }, () => listReportedReviews());
+
+reviewRoutes.post(
+  "/admin/reviews/:reviewId/exclude",
+  { allow: canModerateReviews, params: reviewParamsSchema, body: excludeReviewSchema },
+  (req, _res, { params, body }) => excludeReviewFromScore(req.user!, params.reviewId, body.reason),
+);
 
 reviewRoutes.get(
   "/technicians/:technicianId/reviews",

@@ -6,6 +6,7 @@ import { recordAudit } from "../audit/index.ts";
 import { WorkOrder } from "../work-orders/index.ts";
 import { JobReview } from "./model.ts";
 import { toReviewDtos } from "./dto.ts";
+import { findSelfRatingSignals } from "./self-rating-check.ts";
 
 /** The directory's running totals, kept in the review's own transaction so a count never disagrees with the reviews. */
 async function addToRatings(technicianId: number, stars: number, transaction: Transaction) {
@@ -38,6 +39,11 @@ export async function writeReview(buyer: Express.User, workOrderId: number, inpu
           authorUserId: buyer.id,
           stars: input.stars,
           body: input.body,
+          selfRatingSignals: await findSelfRatingSignals(
+            workOrder.shopCompanyId,
+            workOrder.serviceCompanyId,
+            transaction,
+          ),
         },
         { transaction },
       );

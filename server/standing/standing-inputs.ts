@@ -42,7 +42,7 @@ interface TechnicianRow {
   name: string;
   headcount: number;
 }
-interface CredentialRow {
+export interface StandingCredentialRow {
   id: number;
   type_code: string;
   company_id: number;
@@ -98,9 +98,9 @@ async function loadTechnicians(
 const CREDENTIALS_SQL = `SELECT id, type_code, company_id, technician_id, state, fields FROM credentials WHERE state <> 'superseded'`;
 
 async function loadCredentials(technicians: StandingTechnician[], all: boolean, transaction: Transaction) {
-  if (all) return selectRows<CredentialRow>(transaction, CREDENTIALS_SQL);
+  if (all) return selectRows<StandingCredentialRow>(transaction, CREDENTIALS_SQL);
   const companyIds = [...new Set(technicians.map((t) => t.companyId))];
-  return selectRows<CredentialRow>(
+  return selectRows<StandingCredentialRow>(
     transaction,
     `${CREDENTIALS_SQL} AND ((technician_id IS NULL AND company_id = ANY($1::int[])) OR technician_id = ANY($2::int[]))`,
     [companyIds, technicians.map((t) => t.id)],
@@ -143,8 +143,8 @@ export async function loadTargets(transaction: Transaction, setIds?: number[]): 
   );
 }
 
-function toStandingCredential(
-  row: CredentialRow,
+export function toStandingCredential(
+  row: StandingCredentialRow,
   types: Map<string, CredentialTypeDefinition>,
 ): StandingCredential | null {
   const type = types.get(row.type_code);

@@ -1,22 +1,9 @@
 import type { WorkOrderSide } from "../../shared/work-orders/schemas.ts";
+import { sideOf } from "../../shared/work-orders/work-order-side.ts";
 import { requireOwnership, requireRole, type SignedInUser } from "../http/policy.ts";
 import { WorkOrder } from "./model.ts";
 
-/** The shop's buyers on one side; the service company's admin and the named technician on the other. */
-export function sideOf(
-  user: SignedInUser,
-  workOrder: Pick<WorkOrder, "shopCompanyId" | "serviceCompanyId" | "technicianId">,
-): WorkOrderSide | null {
-  if (user.role === "buyer" && workOrder.shopCompanyId === user.companyId) return "shop";
-  if (user.role === "provider_admin" && workOrder.serviceCompanyId === user.companyId) return "service";
-  if (
-    user.role === "technician" &&
-    user.technicianId !== null &&
-    workOrder.technicianId === user.technicianId
-  )
-    return "service";
-  return null;
-}
+export { sideOf };
 
 export async function workOrderSide(user: SignedInUser, workOrderId: unknown): Promise<WorkOrderSide | null> {
   const workOrder = await WorkOrder.findByPk(Number(workOrderId), {

@@ -83,6 +83,7 @@ export async function postMessage(
             originalName: attachment.name,
             extractedText: null,
             extractionMethod: "none",
+            workOrderId,
           },
           { transaction },
         );

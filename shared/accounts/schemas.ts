@@ -66,7 +66,7 @@ export type SignUp = z.infer<typeof signUpSchema>;
 
 /** A company's mailing address; its time zone is derived from the ZIP code. */
 export const companyAddressSchema = z.object({
-  addressLine: z.string().trim().min(3, "Enter the mailing address").max(200),
+  addressLine: singleLineText().trim().min(3, "Enter the mailing address").max(200),
   postalCode: postalCodeSchema,
   timeZone: zoneFollowsPostalCode,
 });

@@ -1,3 +1,12 @@
+import {
+  ARC_FLASH_CAUTION,
+  EXEMPTION_CAUTION,
+  INSURANCE_CAUTION,
+  LICENSE_CAUTION,
+  LOCKOUT_CAUTION,
+  POWERED_TRUCK_CAUTION,
+  RIGGING_CAUTION,
+} from "../safety/cautions.ts";
 import type { FieldSet } from "./credential-fields.ts";
 
 export const credentialCategories = ["insurance", "safety", "oem", "license"] as const;
@@ -23,6 +32,8 @@ export interface CredentialTypeDefinition {
   fieldSet: FieldSet;
   validity: CredentialValidity;
   description: string;
+  /** The caution shown where this type is uploaded or relied on; it lives in shared/safety/cautions.ts, once. */
+  caution?: string;
 }
 
 // NFPA 70E (2024) 110.6(A)(3): retraining at intervals not to exceed 3 years.
@@ -63,6 +74,7 @@ export const credentialTypes: readonly CredentialTypeDefinition[] = [
     validity: documentDates,
     description:
       "Liability for bodily injury and property damage arising from the company's operations and completed work.",
+    caution: INSURANCE_CAUTION,
   },
   {
     code: "auto_liability",
@@ -73,6 +85,7 @@ export const credentialTypes: readonly CredentialTypeDefinition[] = [
     validity: documentDates, // policy period as printed, 12:01 a.m. standard time as in the CGL declarations
     description:
       "Liability for vehicles used to reach the customer's site, usually one combined single limit.",
+    caution: INSURANCE_CAUTION,
   },
   {
     code: "workers_comp",
@@ -83,6 +96,7 @@ export const credentialTypes: readonly CredentialTypeDefinition[] = [
     validity: documentDates, // policy period as printed, 12:01 a.m. standard time as in the CGL declarations
     description:
       "Statutory benefits for injured employees (Part One) and employer's liability limits (Part Two).",
+    caution: INSURANCE_CAUTION,
   },
   {
     code: "umbrella_liability",
@@ -92,6 +106,7 @@ export const credentialTypes: readonly CredentialTypeDefinition[] = [
     fieldSet: "insurance",
     validity: documentDates, // policy period as printed, 12:01 a.m. standard time as in the CGL declarations
     description: "Limits above the general, auto and employer's liability policies.",
+    caution: INSURANCE_CAUTION,
   },
   {
     code: "workers_comp_exemption",
@@ -103,6 +118,7 @@ export const credentialTypes: readonly CredentialTypeDefinition[] = [
     validity: monthsFromIssue(WORKERS_COMP_EXEMPTION_MONTHS),
     description:
       "A state-issued exemption from carrying workers' compensation, for the persons it names (a sole proprietor or officers) only, never for employees. Without a printed expiry it counts for 24 months from issue (common practice; terms vary by state).",
+    caution: EXEMPTION_CAUTION,
   },
   {
     code: "osha_10",
@@ -132,6 +148,7 @@ export const credentialTypes: readonly CredentialTypeDefinition[] = [
     validity: monthsFromIssue(ARC_FLASH_RETRAINING_MONTHS), // NFPA 70E (2024) 110.6(A)(3)
     description:
       "Training in safety-related electrical work practices near energized parts. The card alone does not make someone a qualified person: the employer decides that (NFPA 70E 110.6).",
+    caution: ARC_FLASH_CAUTION,
   },
   {
     code: "lockout_tagout",
@@ -141,6 +158,7 @@ export const credentialTypes: readonly CredentialTypeDefinition[] = [
     fieldSet: "training",
     validity: monthsFromIssue(LOCKOUT_REFRESHER_MONTHS), // common practice, see LOCKOUT_REFRESHER_MONTHS
     description: `Training in the control of hazardous energy while servicing machines. On the host site, the site's own lockout/tagout procedure applies (29 CFR 1910.147); 29 CFR 1910.147(c)(7)(iii) requires retraining when jobs, machines or procedures change. ${SITE_DECIDES}`,
+    caution: LOCKOUT_CAUTION,
   },
   {
     code: "powered_truck",
@@ -151,6 +169,7 @@ export const credentialTypes: readonly CredentialTypeDefinition[] = [
     validity: monthsFromIssue(POWERED_TRUCK_EVALUATION_MONTHS), // 29 CFR 1910.178(l)(4)(iii)
     description:
       "Forklift operator training and performance evaluation. The evaluation covers the trucks and workplace it was done in; the host site decides whether another is needed (29 CFR 1910.178(l)).",
+    caution: POWERED_TRUCK_CAUTION,
   },
   {
     code: "first_aid_cpr",
@@ -189,6 +208,7 @@ export const credentialTypes: readonly CredentialTypeDefinition[] = [
     validity: documentDates, // the issuing authority's printed expiry
     description:
       "A state or local license, e.g. for electrical work on machine supply circuits. Requirements vary by state and town; check with the authority where the work is done.",
+    caution: LICENSE_CAUTION,
   },
   {
     code: "machine_rigging",
@@ -201,6 +221,7 @@ export const credentialTypes: readonly CredentialTypeDefinition[] = [
     validity: noExpiry,
     description:
       "Training in rigging, lifting and moving machine tools. The card shows training only: every lift follows the site's lift plan, the rated capacity of the gear and floor loading checked with the site.",
+    caution: RIGGING_CAUTION,
   },
 ];
 

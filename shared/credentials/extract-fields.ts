@@ -179,7 +179,8 @@ const INSURER_LINE = /^\s*INSURER\s+[A-F]\s*[:;.,]/i;
 function coverageSections(lines: string[]): Partial<Record<InsuranceCoverageCode, string[]>> {
   const start = Math.max(
     0,
-    lines.findIndex((line) => /TYPE\s+OF\s+INSURANCE|\bCOVERAGES\b/i.test(line)),
+    // "Coverages (continued)" heads page 2; the table began on page 1, with or without a heading of its own.
+    lines.findIndex((line) => /TYPE\s+OF\s+INSURANCE|\bCOVERAGES\b/i.test(line) && !/CONTINUED/i.test(line)),
   );
   const endIndex = lines.findIndex((line, i) => i > start && /DESCRIPTION\s+OF\s+OPERATIONS/i.test(line));
   const table = lines.slice(start, endIndex < 0 ? lines.length : endIndex);
@@ -263,7 +264,7 @@ const SECTION_LABELS = {
   additionalInsured: /\bADD(?:ITIONA)?L\.?\s*INS(?:URED|D)?\b\s*[:.?]?/i,
   waiverOfSubrogation: /\b(?:WAIVER\s+OF\s+SUBROGATION|SUBR(?:OGATION)?\.?\s*(?:WVD|WAIVED))\b\s*[:.?]?/i,
   insurer:
-    /\b(?:INSURER|CARRIER|WRITTEN\s+BY|INSURANCE\s+COMPANY)\b(?!\s+[A-F]\s*[:;.,])(?:\s*[:.]|(?=\s{3,})|\s*$)/i,
+    /\b(?:INSURER(?:\s+AFFORDING\s+COVERAGE)?|CARRIER|WRITTEN\s+BY|INSURANCE\s+COMPANY)\b(?!\s+[A-F]\s*[:;.,])(?:\s*[:.]|(?=\s{3,})|\s*$)/i,
   naic: /\bNAIC\s*(?:#|NO\.?|CODE)?\s*[:.]?\s*([\dOo]{5})\b/i,
 } as const;
 

@@ -167,7 +167,7 @@ const distance = (a: PageBox, b: PageBox) =>
 /**
  * Finds where each proposed value sits on the page. A value printed in several places (the same $1,000,000 in two
  * coverages) is placed nearest the field that anchors its coverage (the policy number) and trusted less; a value
- * the page does not show in any printed form, and every value read by OCR (no boxes), is marked low.
+ * the page does not show in any printed form is marked low; values read by OCR are placed by tesseract's word boxes.
  */
 export function locateValues(
   fields: Record<string, unknown>,
@@ -190,17 +190,16 @@ export function locateValues(
       evidence[path] = { confidence: method === "pdf_text" ? 0.7 : 0.4 };
       continue;
     }
-    if (method !== "pdf_text") {
-      evidence[path] = { confidence: 0.5 };
-      continue;
-    }
-    const boxes = locate(path);
+    const boxes = method === "none" ? [] : locate(path);
     if (boxes.length === 0) {
       evidence[path] = { confidence: 0.5 };
       continue;
     }
     const sorted = anchor ? [...boxes].sort((a, b) => distance(a, anchor) - distance(b, anchor)) : boxes;
-    evidence[path] = { confidence: boxes.length === 1 ? 0.9 : anchor ? 0.75 : 0.55, box: sorted[0]! };
+    // OCR may misread a letter the text layer would not, so a value found by its word boxes is trusted a step less.
+    const penalty = method === "ocr" ? 0.15 : 0;
+    const confidence = (boxes.length === 1 ? 0.9 : anchor ? 0.75 : 0.55) - penalty;
+    evidence[path] = { confidence: Math.round(confidence * 100) / 100, box: sorted[0]! };
   }
   return evidence;
 }

@@ -30,7 +30,7 @@ export type SubmitCredential = z.infer<typeof submitCredentialSchema>;
 export const submitCoveragesSchema = z.object({
   documentId: idParam,
   credentials: z
-    .array(z.object({ typeCode: typeCodeSchema, fields: z.record(z.string(), z.unknown()) }))
+    .array(z.object({ typeCode: typeCodeSchema, fields: z.record(singleLineText(), z.unknown()) }))
     .min(1, "Keep at least one coverage")
     // A certificate lists a handful of coverage lines; more would be a client bug, not a certificate.
     .max(12, "At most 12 coverages at once")

@@ -38,3 +38,11 @@ export function formatLocalDate(iso: string | Date, timeZone: string): string {
   const date = typeof iso === "string" ? new Date(iso) : iso;
   return Number.isNaN(date.getTime()) ? String(iso) : formatter(timeZone, false).format(date);
 }
+
+/** "Jan 5, 2027" for a printed calendar date (`YYYY-MM-DD`, no zone: an issue date is the same day everywhere). */
+export function formatCalendarDate(isoDate: string): string {
+  const match = /^(\d{4})-(\d{2})-(\d{2})$/.exec(isoDate);
+  if (!match) return isoDate;
+  const noonUtc = new Date(Date.UTC(Number(match[1]), Number(match[2]) - 1, Number(match[3]), 12));
+  return formatter("UTC", false).format(noonUtc);
+}

@@ -89,6 +89,16 @@ export interface RatingSummaryDto {
   score: number;
 }
 
+/** One line of the chosen requirement set: "General liability", met by "GL $1M + umbrella $4M each occurrence". */
+export interface RequirementMetDto {
+  label: string;
+  /** Short "how": the stacked limits or the credential; null when the stored standing predates it. */
+  metBy: string | null;
+  /** The engine's sentence, e.g. "Met by Commercial general liability GL-4471 until Jul 15, 2027." */
+  detail: string;
+  lapsing: boolean;
+}
+
 export interface DirectoryRowDto {
   technicianId: number;
   name: string;
@@ -107,6 +117,8 @@ export interface DirectoryRowDto {
   rating: RatingSummaryDto;
   standing: Extract<Standing, "cleared" | "lapsing">;
   earliestLapse: string | null;
+  /** With a requirement set chosen: how each of its lines is met, from the stored standing; null without a set. */
+  requirementsMet: RequirementMetDto[] | null;
   hourlyRateCents: number;
   travelRateCents: number;
   mileageRateCents: number;

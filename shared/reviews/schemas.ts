@@ -1,3 +1,4 @@
+import type { SelfRatingSignal } from "./self-rating.ts";
 import { z } from "zod";
 import { multiLineText } from "../api/text.ts";
 import { idParam } from "../credentials/schemas.ts";
@@ -23,6 +24,10 @@ export const replyToReviewSchema = z.object({
 
 export const reportReviewSchema = z.object({
   reason: multiLineText().trim().min(5, "Say what is wrong with it (at least 5 characters)").max(1000),
+});
+
+export const excludeReviewSchema = z.object({
+  reason: z.string().trim().min(5, "Say why it is left out of the score (at least 5 characters)").max(1000),
 });
 
 export const technicianReviewsQuerySchema = z.object({
@@ -55,8 +60,11 @@ export interface TechnicianReviewsDto {
   items: PublicReviewDto[];
 }
 
+/** A review the admin should look at: reported by a party, or flagged as possible self-rating, or both. */
 export interface ReportedReviewDto extends ReviewDto {
-  reportedAt: string;
+  reportedAt: string | null;
+  selfRatingSignals: SelfRatingSignal[];
+  excluded: { at: string; reason: string; by: string } | null;
   reportReason: string;
   reportedBy: { id: number; name: string };
   technicianName: string;

@@ -8,11 +8,23 @@ export const CLEARED_MEANS =
 
 export const SAFETY_CAUTION_TITLE = "Cleared is about documents, not safety or skill";
 
-/** Each sentence names the rule it defers to; the 70E section numbers are from memory (110.6 in the 2024 edition). */
+// Per-type cautions: the catalog hangs each on its credential type (shown where that type is uploaded), and the list
+// below repeats them where a decision about who works on a machine is made. The 70E section numbers are from memory
+// (110.6 in the 2024 edition).
+export const ARC_FLASH_CAUTION =
+  "The employer decides who is a qualified person for electrical work (NFPA 70E 110.6; 110.2 in editions before 2021).";
+
+export const LOCKOUT_CAUTION =
+  "On the host site, the site's own lockout/tagout procedure applies to every machine serviced (29 CFR 1910.147).";
+
+export const POWERED_TRUCK_CAUTION =
+  "A forklift operator evaluation covers the trucks and the workplace it was done in; the host site decides whether another is needed (29 CFR 1910.178(l)).";
+
+/** Each sentence names the rule it defers to. */
 export const SAFETY_CAUTIONS: readonly string[] = [
-  "The employer decides who is a qualified person for electrical work (NFPA 70E 110.6; 110.2 in editions before 2021).",
-  "On the host site, the site's own lockout/tagout procedure applies to every machine serviced (29 CFR 1910.147).",
-  "A forklift operator evaluation covers the trucks and the workplace it was done in; the host site decides whether another is needed (29 CFR 1910.178(l)).",
+  ARC_FLASH_CAUTION,
+  LOCKOUT_CAUTION,
+  POWERED_TRUCK_CAUTION,
   "A machine down never overrides lockout/tagout, permits or the site's safety rules.",
 ];
 
@@ -24,3 +36,6 @@ export const LICENSE_CAUTION =
 
 export const RIGGING_CAUTION =
   "A machine rigging and moving card shows training only: every lift and move follows the site's lift plan, the rated capacity of the gear and floor loading checked with the site (common practice).";
+
+export const EXEMPTION_CAUTION =
+  "An exemption covers only the persons it names, never employees; whether it is accepted is up to the state and the site's insurer or broker (common practice; rules vary by state).";

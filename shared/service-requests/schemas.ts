@@ -1,3 +1,4 @@
+import { multiLineText, singleLineText } from "../api/text.ts";
 import { z } from "zod";
 import { idParam } from "../credentials/schemas.ts";
 import { isoDateSchema } from "../credentials/credential-fields.ts";
@@ -54,7 +55,7 @@ export const serviceRequestBaseSchema = z.object({
   windowStart: isoDateSchema.optional(),
   windowEnd: isoDateSchema.optional(),
   // A machine that will not start is described in three words; the thread carries the rest.
-  problem: z.string().trim().min(3, "Describe the problem (at least 3 characters)").max(5000),
+  problem: multiLineText().trim().min(3, "Describe the problem (at least 3 characters)").max(5000),
   addCompanyIds: z.array(idParam).max(MAX_COMPANY_CHANGES).default([]),
   removeCompanyIds: z.array(idParam).max(MAX_COMPANY_CHANGES).default([]),
 });
@@ -78,7 +79,7 @@ export type RaiseServiceRequest = z.infer<typeof raiseServiceRequestSchema>;
 const cents = z.number().int().min(0).max(100_000_000);
 
 export const estimatePartSchema = z.object({
-  description: z.string().trim().min(1).max(300),
+  description: singleLineText().trim().min(1).max(300),
   quantity: z.number().int().min(1).max(1000).default(1),
   /** Null = price not known yet; the part is listed but not in the total. */
   unitPriceCents: cents.nullable().default(null),
@@ -98,21 +99,21 @@ export const estimateInputSchema = z.object({
   onSiteHours: z.number().min(0.25).max(500).multipleOf(0.25),
   earliestArrival: localDateTime,
   parts: z.array(estimatePartSchema).max(50).default([]),
-  note: z.string().trim().max(5000).optional(),
+  note: multiLineText().trim().max(5000).optional(),
   validUntil: isoDateSchema,
 });
 export type EstimateInput = z.infer<typeof estimateInputSchema>;
 
 export const passSchema = z.object({
-  reason: z.string().trim().min(3, "Say why (at least 3 characters)").max(1000),
+  reason: multiLineText().trim().min(3, "Say why (at least 3 characters)").max(1000),
 });
 export const cancelRequestSchema = z.object({
-  reason: z.string().trim().min(3, "Say why (at least 3 characters)").max(1000),
+  reason: multiLineText().trim().min(3, "Say why (at least 3 characters)").max(1000),
 });
 export const followUpNoteSchema = z.object({
-  note: z.string().trim().min(3, "Say what you did (at least 3 characters)").max(2000),
+  note: multiLineText().trim().min(3, "Say what you did (at least 3 characters)").max(2000),
 });
-export const requestMessageSchema = z.object({ body: z.string().trim().min(1).max(5000) });
+export const requestMessageSchema = z.object({ body: multiLineText().trim().min(1).max(5000) });
 
 export interface RoutedCompanyDto {
   companyId: number;

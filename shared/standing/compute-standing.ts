@@ -1,6 +1,12 @@
 import { evaluateRequirement } from "./evaluate-requirement.ts";
 import type { Requirement } from "./requirements.ts";
-import type { Standing, StandingCredential, StandingOptions, StandingResult } from "./standing-types.ts";
+import type {
+  RequirementResult,
+  Standing,
+  StandingCredential,
+  StandingOptions,
+  StandingResult,
+} from "./standing-types.ts";
 
 // Policies an umbrella is written over when the set asks for them on their own; general liability always.
 const UNDERLYING_WHEN_REQUIRED = ["auto_liability", "workers_comp"];
@@ -20,6 +26,10 @@ export function underlyingTypeCodesFor(requirements: readonly Requirement[]): st
 }
 
 /** The worst of the requirement results: any unmet → not_cleared; else any lapsing → lapsing; else cleared. */
+export function worstStanding(statuses: readonly RequirementResult["status"][]): Standing {
+  return statuses.includes("unmet") ? "not_cleared" : statuses.includes("lapsing") ? "lapsing" : "cleared";
+}
+
 export function computeStanding(
   requirements: readonly Requirement[],
   credentials: readonly StandingCredential[],
@@ -32,11 +42,7 @@ export function computeStanding(
   const results = requirements.map((requirement) =>
     evaluateRequirement(requirement, credentials, withUnderlying),
   );
-  const standing: Standing = results.some((r) => r.status === "unmet")
-    ? "not_cleared"
-    : results.some((r) => r.status === "lapsing")
-      ? "lapsing"
-      : "cleared";
+  const standing = worstStanding(results.map((r) => r.status));
   const lapses = results
     .filter((r) => r.status !== "unmet" && r.lapsesAt !== null)
     .map((r) => r.lapsesAt as string)

@@ -1,4 +1,4 @@
-import { DateTime } from "luxon";
+import { formatCalendarDate, formatLocalDate } from "../dates/local-time.ts";
 import { credentialTypeByCode, type CredentialTypeDefinition } from "../credentials/catalogue.ts";
 import { credentialLapseInstant, credentialStartInstant } from "./lapse-instant.ts";
 import { checkExemptionCovers } from "./exemption-coverage.ts";
@@ -55,9 +55,7 @@ const UNMET_RANK: Record<UnmetReason, number> = {
 
 const endMs = (end: Date | null): number => end?.getTime() ?? Number.POSITIVE_INFINITY;
 
-function localDate(instant: Date, timeZone: string): string {
-  return DateTime.fromJSDate(instant, { zone: timeZone }).toISODate() ?? instant.toISOString();
-}
+const localDate = formatLocalDate;
 
 function issueDateOf(credential: StandingCredential): string | undefined {
   return "issueDate" in credential.fields ? credential.fields.issueDate : credential.issuedOn;
@@ -110,7 +108,7 @@ function assess(
   if (credential.state === "lapsed" || endMs(endsAt) <= asOf.getTime()) {
     const on = endsAt ? ` on ${localDate(endsAt, timeZone)}` : "";
     if (endedByAge) {
-      const detail = `${named} was issued ${issueDateOf(credential)}, older than the ${requirement.maxAgeMonths} months this site allows.`;
+      const detail = `${named} was issued ${formatCalendarDate(issueDateOf(credential) ?? "")}, older than the ${requirement.maxAgeMonths} months this site allows.`;
       return { ...base, reason: "too_old", detail };
     }
     return { ...base, reason: "lapsed", detail: `${named} lapsed${on}.` };

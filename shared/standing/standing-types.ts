@@ -39,7 +39,7 @@ export interface RequirementResult {
   requirement: Requirement;
   status: RequirementStatus;
   reason: UnmetReason | null;
-  /** One sentence for people, e.g. "Commercial general liability lapsed on 2027-07-15." */
+  /** One sentence for people, e.g. "Commercial general liability lapsed on Jul 15, 2027." */
   detail: string;
   /** The credential that met it; when unmet, the closest candidate (null when none is on file). */
   credentialId: number | null;

@@ -11,10 +11,14 @@ const PROVIDER = "office@kestrel-ridge.test";
 const TECHNICIAN = "Tobias Wren";
 const SITE_ZIP = "61101";
 
-/** The same page at phone width, then back to the desktop width the journey runs at. */
+/** The same page at phone width (nothing wider than the screen), then back to the desktop width the journey runs at. */
 async function atPhoneWidth(page: Page, name: string) {
   await page.setViewportSize({ width: 390, height: 844 });
   await screenshot(page, name);
+  await expect(
+    page.evaluate(() => document.documentElement.scrollWidth),
+    name,
+  ).resolves.toBeLessThanOrEqual(390);
   await page.setViewportSize({ width: 1280, height: 900 });
 }
 

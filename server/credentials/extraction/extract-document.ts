@@ -10,7 +10,7 @@ import {
   type Evidence,
   type PositionedText,
 } from "../../../shared/credentials/locate-values.ts";
-import { isOcrAvailable, ocrImage, ocrPdf, type OcrOptions } from "./ocr.ts";
+import { isOcrAvailable, ocrImageLayout, ocrPdfLayout, type OcrOptions } from "./ocr.ts";
 import { extractPdfText } from "./pdf-text.ts";
 
 export const extractableMimes = ["application/pdf", "image/png", "image/jpeg"] as const;
@@ -51,10 +51,10 @@ async function readText(
     const pdf = await extractPdfText(input.bytes, input.timeoutMs ? { timeoutMs: input.timeoutMs } : {});
     if (hasTextLayer(pdf.text)) return { text: pdf.text, method: "pdf_text", items: pdf.items };
     if (!ocrAvailable) return { text: "", method: "none", items: [] };
-    return { text: await ocrPdf(input.bytes, ocrOptions), method: "ocr", items: [] };
+    return { ...(await ocrPdfLayout(input.bytes, ocrOptions)), method: "ocr" };
   }
   if (!ocrAvailable) return { text: "", method: "none", items: [] };
-  return { text: await ocrImage(input.bytes, ocrOptions), method: "ocr", items: [] };
+  return { ...(await ocrImageLayout(input.bytes, ocrOptions)), method: "ocr" };
 }
 
 /**

@@ -2,6 +2,16 @@ import { access, mkdtemp, rm, writeFile } from "node:fs/promises";
 import { constants } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
+import { Jimp } from "jimp";
+import { imageDimensionsOfFile } from "./image-dimensions.ts";
+import { layoutText, type PositionedText } from "../../../shared/credentials/locate-values.ts";
+import {
+  readingQuality,
+  skewDegrees,
+  tsvToPositionedText,
+  uprightTurn,
+  type QuarterTurn,
+} from "../../../shared/credentials/ocr-layout.ts";
 import { DocumentUnreadableError } from "./document-unreadable-error.ts";
 import { ChildFailedError, MAX_OCR_PIXELS, pdfPageSizes, renderDpi, runBounded } from "./render-bounds.ts";
 
@@ -23,7 +33,16 @@ const DEFAULT_OCR_PAGES = 2;
 // 200 dpi keeps 7-point certificate print legible to tesseract at about 2 s a page.
 const DEFAULT_DPI = 200;
 // Layout analysis by columns (psm 4) keeps each coverage row on one line; kept spaces mark the gaps between boxes.
-const TESSERACT_ARGS = ["--psm", "4", "-c", "preserve_interword_spaces=1"];
+// Sauvola's local threshold keeps text legible under uneven light (a lamp, a shadow), where one global threshold turns
+// a shaded, tilted photo all black or all white.
+const TESSERACT_ARGS = ["--psm", "4", "-c", "preserve_interword_spaces=1", "-c", "thresholding_method=2"];
+// Orientation and script detection only: answers which quarter turn makes the page upright.
+const OSD_ARGS = ["--psm", "0", "-c", "thresholding_method=2"];
+// A reading with this many sure words is taken as upright; below it the other quarter turns are tried too.
+const SURE_WORDS = 12;
+// A tilt under this reads fine; over the upper bound it is not a tilted photo but something the turn step missed.
+const MIN_DESKEW_DEGREES = 0.8;
+const MAX_DESKEW_DEGREES = 15;
 // One thread per page: tesseract's OpenMP threads cost more than they save on small pages and cannot be timed out cleanly.
 const CHILD_ENV = { OMP_THREAD_LIMIT: "1", PATH: "/usr/bin:/bin" };
 const MAX_OUTPUT_BYTES = 4 * 1024 * 1024;
@@ -68,24 +87,102 @@ async function withTempDir<T>(work: (dir: string) => Promise<T>): Promise<T> {
   }
 }
 
-/** Text read from an image file (a path) or image bytes by tesseract, within the time limit. */
-export async function ocrImage(input: string | Uint8Array, options: OcrOptions = {}): Promise<string> {
-  const timeoutMs = options.timeoutMs ?? DEFAULT_TIMEOUT_MS;
-  const tesseract = options.tesseractPath ?? TESSERACT;
-  if (typeof input === "string") return run(tesseract, [input, "stdout", ...TESSERACT_ARGS], timeoutMs);
-  if (input.byteLength === 0) throw new DocumentUnreadableError("empty");
-  return withTempDir(async (dir) => {
-    const path = join(dir, "image");
-    await writeFile(path, input);
-    return run(tesseract, [path, "stdout", ...TESSERACT_ARGS], timeoutMs);
-  });
+export interface OcrReading {
+  text: string;
+  /** Tesseract's word boxes as fractions of the (upright, levelled) page, for the layout reader and evidence boxes. */
+  items: PositionedText[];
+}
+
+/** Writes the image turned counter-clockwise by `degrees` (white corners), and returns the new path. */
+async function turned(path: string, degrees: number, out: string): Promise<string> {
+  // Checked from the header before decoding: the decode itself runs in this process, outside the children's caps.
+  const declared = await imageDimensionsOfFile(path);
+  if (!declared || declared.width * declared.height > MAX_OCR_PIXELS)
+    throw new DocumentUnreadableError("corrupt", "image too large to read");
+  const image = await Jimp.read(path);
+  if (image.bitmap.width * image.bitmap.height > MAX_OCR_PIXELS)
+    throw new DocumentUnreadableError("corrupt", "image too large to read");
+  image.background = 0xffffffff;
+  image.rotate(degrees);
+  await image.write(out as `${string}.png`);
+  return out;
 }
 
 /**
- * Text of a scanned PDF: its first pages rendered by pdftoppm one at a time, each at a resolution chosen from its size
- * so no render exceeds MAX_OCR_PIXELS, then read by tesseract, all within one time limit.
+ * One page image read with positions: orientation detection first (a card photographed sideways or upside down is
+ * turned upright), then the word boxes; a page tilted a few degrees is levelled and read again, so its lines stay
+ * lines. Every tesseract run goes through the bounded queue.
  */
-export async function ocrPdf(bytes: Uint8Array, options: PdfOcrOptions = {}): Promise<string> {
+async function readPageImage(
+  imagePath: string,
+  page: number,
+  dir: string,
+  deadline: number,
+  tesseract: string,
+): Promise<OcrReading> {
+  // A page with too little text for orientation detection makes tesseract exit non-zero: it is read as it came.
+  const osd = await run(tesseract, [imagePath, "stdout", ...OSD_ARGS], deadline - Date.now()).catch(
+    (err: unknown) => {
+      if (err instanceof DocumentUnreadableError && err.reason === "timeout") throw err;
+      return "";
+    },
+  );
+  const read = async (turn: QuarterTurn) => {
+    // Tesseract names the clockwise turn; Jimp turns counter-clockwise.
+    const path = turn
+      ? await turned(imagePath, 360 - turn, join(dir, `turn-${turn}-${page}.png`))
+      : imagePath;
+    const tsv = await run(tesseract, [path, "stdout", ...TESSERACT_ARGS, "tsv"], deadline - Date.now());
+    return { path, tsv, quality: readingQuality(tsv) };
+  };
+  const first = uprightTurn(osd);
+  let best = await read(first);
+  // Orientation detection is often unsure on a small card: when the reading is poor, the other turns are tried.
+  for (const turn of [0, 180, 90, 270] as const) {
+    if (best.quality >= SURE_WORDS) break;
+    if (turn === first) continue;
+    const other = await read(turn);
+    if (other.quality > best.quality) best = other;
+  }
+  let { path, tsv } = best;
+  const skew = skewDegrees(tsv);
+  if (Math.abs(skew) >= MIN_DESKEW_DEGREES && Math.abs(skew) <= MAX_DESKEW_DEGREES) {
+    // Lines falling to the right (clockwise tilt) are levelled by turning counter-clockwise by the same angle.
+    path = await turned(path, skew, join(dir, `level-${page}.png`));
+    tsv = await run(tesseract, [path, "stdout", ...TESSERACT_ARGS, "tsv"], deadline - Date.now());
+  }
+  const items = tsvToPositionedText(tsv, page);
+  return { text: layoutText(items), items };
+}
+
+/** Text and word boxes read from an image file (a path) or image bytes by tesseract, within the time limit. */
+export async function ocrImageLayout(
+  input: string | Uint8Array,
+  options: OcrOptions = {},
+): Promise<OcrReading> {
+  const deadline = Date.now() + (options.timeoutMs ?? DEFAULT_TIMEOUT_MS);
+  const tesseract = options.tesseractPath ?? TESSERACT;
+  if (typeof input !== "string" && input.byteLength === 0) throw new DocumentUnreadableError("empty");
+  return withTempDir(async (dir) => {
+    let path = input;
+    if (typeof path !== "string") {
+      path = join(dir, "image");
+      await writeFile(path, input);
+    }
+    return readPageImage(path, 1, dir, deadline, tesseract);
+  });
+}
+
+/** Text read from an image file (a path) or image bytes by tesseract, within the time limit. */
+export async function ocrImage(input: string | Uint8Array, options: OcrOptions = {}): Promise<string> {
+  return (await ocrImageLayout(input, options)).text;
+}
+
+/**
+ * Text and word boxes of a scanned PDF: its first pages rendered by pdftoppm one at a time, each at a resolution
+ * chosen from its size so no render exceeds MAX_OCR_PIXELS, then read by tesseract, all within one time limit.
+ */
+export async function ocrPdfLayout(bytes: Uint8Array, options: PdfOcrOptions = {}): Promise<OcrReading> {
   if (bytes.byteLength === 0) throw new DocumentUnreadableError("empty");
   const deadline = Date.now() + (options.timeoutMs ?? DEFAULT_TIMEOUT_MS);
   const pages = options.maxPages ?? DEFAULT_OCR_PAGES;
@@ -94,7 +191,7 @@ export async function ocrPdf(bytes: Uint8Array, options: PdfOcrOptions = {}): Pr
     await writeFile(pdfPath, bytes);
     const sizes = await pdfPageSizes(pdfPath, 1, pages, Math.max(1, deadline - Date.now()));
     if (sizes.length === 0) throw new DocumentUnreadableError("corrupt", "no page sizes");
-    const texts: string[] = [];
+    const items: PositionedText[] = [];
     for (const size of sizes) {
       const dpi = renderDpi(size, options.dpi ?? DEFAULT_DPI, MAX_OCR_PIXELS);
       const out = join(dir, `page-${size.page}`);
@@ -113,10 +210,16 @@ export async function ocrPdf(bytes: Uint8Array, options: PdfOcrOptions = {}): Pr
       await run(options.pdftoppmPath ?? PDFTOPPM, renderArgs, deadline - Date.now());
       const image = `${out}.png`;
       if (!(await isReadable(image))) throw new DocumentUnreadableError("corrupt", "page did not render");
-      texts.push(await ocrImage(image, { ...options, timeoutMs: deadline - Date.now() }));
+      const page = await readPageImage(image, size.page, dir, deadline, options.tesseractPath ?? TESSERACT);
+      items.push(...page.items);
     }
-    return texts.join("\n");
+    return { text: layoutText(items), items };
   });
+}
+
+/** Text of a scanned PDF (see ocrPdfLayout). */
+export async function ocrPdf(bytes: Uint8Array, options: PdfOcrOptions = {}): Promise<string> {
+  return (await ocrPdfLayout(bytes, options)).text;
 }
 
 async function isReadable(path: string): Promise<boolean> {

@@ -27,13 +27,15 @@ const WORKER_HEAP_MB = 256;
 const pdfParsePath = createRequire(import.meta.url).resolve("pdf-parse");
 
 // The worker runs plain JavaScript (eval) so it needs no TypeScript loader in any runtime (tsx, Vitest).
+// It stays up between documents (starting a thread and loading pdf.js cost more than reading a one-page card) and
+// reads one document at a time; it is replaced after a time-out or a crash.
 const WORKER_SOURCE = `
 const { parentPort, workerData } = require("node:worker_threads");
 const { PDFParse } = require(workerData.modulePath);
-(async () => {
-  const parser = new PDFParse({ data: workerData.bytes });
+parentPort.on("message", async (job) => {
+  const parser = new PDFParse({ data: job.bytes });
   try {
-    const result = await parser.getText({ first: workerData.maxPages, pageJoiner: "" });
+    const result = await parser.getText({ first: job.maxPages, pageJoiner: "" });
     // The same pages' items with their positions (pdf.js transform: e, f are the baseline origin in points).
     const doc = await parser.load();
     const items = [];
@@ -63,7 +65,7 @@ const { PDFParse } = require(workerData.modulePath);
   } finally {
     await parser.destroy().catch(() => undefined);
   }
-})();
+});
 `;
 
 type WorkerReply =
@@ -75,39 +77,68 @@ function toUnreadable(reply: Extract<WorkerReply, { ok: false }>): DocumentUnrea
   return new DocumentUnreadableError("corrupt", reply.message);
 }
 
+let reader: Worker | undefined;
+// Documents wait their turn for the one reader, so a time limit covers one document's reading, not a queue's.
+let turn: Promise<unknown> = Promise.resolve();
+
+function startReader(): Worker {
+  const worker = new Worker(WORKER_SOURCE, {
+    eval: true,
+    workerData: { modulePath: pdfParsePath },
+    resourceLimits: { maxOldGenerationSizeMb: WORKER_HEAP_MB },
+    stdout: true,
+    stderr: true,
+  });
+  // An idle reader must not keep a job or a test run alive.
+  worker.unref();
+  worker.once("exit", () => {
+    if (reader === worker) reader = undefined;
+  });
+  return worker;
+}
+
+function readInWorker(bytes: Uint8Array, maxPages: number, timeoutMs: number): Promise<WorkerReply> {
+  const worker = (reader ??= startReader());
+  let timer: NodeJS.Timeout | undefined;
+  let onExit: ((code: number) => void) | undefined;
+  let onError: ((err: Error) => void) | undefined;
+  return new Promise<WorkerReply>((resolve, reject) => {
+    timer = setTimeout(() => {
+      // A reader stuck on a hostile file is stopped; the next document gets a fresh one.
+      reader = undefined;
+      void worker.terminate();
+      reject(new DocumentUnreadableError("timeout"));
+    }, timeoutMs);
+    onExit = (code) => reject(new DocumentUnreadableError("corrupt", `reader stopped (${code})`));
+    onError = (err) => {
+      reader = undefined;
+      void worker.terminate();
+      reject(new DocumentUnreadableError("corrupt", err.message));
+    };
+    worker.once("message", resolve);
+    worker.once("exit", onExit);
+    worker.once("error", onError);
+    worker.postMessage({ bytes: new Uint8Array(bytes), maxPages });
+  }).finally(() => {
+    clearTimeout(timer);
+    worker.removeAllListeners("message");
+    if (onExit) worker.off("exit", onExit);
+    if (onError) worker.off("error", onError);
+  });
+}
+
 /** The text layer of a PDF, read in a worker thread that is killed at the time limit. */
 export async function extractPdfText(bytes: Uint8Array, options: PdfTextOptions = {}): Promise<PdfText> {
   if (bytes.byteLength === 0) throw new DocumentUnreadableError("empty");
   if (!Buffer.from(bytes.subarray(0, 1024)).includes("%PDF-"))
     throw new DocumentUnreadableError("corrupt", "no PDF header");
   const timeoutMs = options.timeoutMs ?? DEFAULT_TIMEOUT_MS;
-  const worker = new Worker(WORKER_SOURCE, {
-    eval: true,
-    workerData: {
-      bytes: new Uint8Array(bytes),
-      maxPages: options.maxPages ?? DEFAULT_MAX_PAGES,
-      modulePath: pdfParsePath,
-    },
-    resourceLimits: { maxOldGenerationSizeMb: WORKER_HEAP_MB },
-    stdout: true,
-    stderr: true,
-  });
-  let timer: NodeJS.Timeout | undefined;
-  try {
-    const reply = await new Promise<WorkerReply>((resolve, reject) => {
-      timer = setTimeout(() => reject(new DocumentUnreadableError("timeout")), timeoutMs);
-      worker.once("message", resolve);
-      worker.once("error", (err) => reject(new DocumentUnreadableError("corrupt", err.message)));
-      worker.once("exit", (code) =>
-        reject(new DocumentUnreadableError("corrupt", `reader stopped (${code})`)),
-      );
-    });
-    if (!reply.ok) throw toUnreadable(reply);
-    // Lines and cells rebuilt from the items' positions; pdf.js's own text when a page gave no positioned items.
-    const text = reply.items.length > 0 ? layoutText(reply.items) : reply.text;
-    return { text, pageCount: reply.pageCount, pagesRead: reply.pagesRead, items: reply.items };
-  } finally {
-    clearTimeout(timer);
-    await worker.terminate();
-  }
+  const maxPages = options.maxPages ?? DEFAULT_MAX_PAGES;
+  const mine = turn.then(() => readInWorker(bytes, maxPages, timeoutMs));
+  turn = mine.catch(() => undefined);
+  const reply = await mine;
+  if (!reply.ok) throw toUnreadable(reply);
+  // Lines and cells rebuilt from the items' positions; pdf.js's own text when a page gave no positioned items.
+  const text = reply.items.length > 0 ? layoutText(reply.items) : reply.text;
+  return { text, pageCount: reply.pageCount, pagesRead: reply.pagesRead, items: reply.items };
 }

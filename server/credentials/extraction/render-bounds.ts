@@ -1,6 +1,7 @@
 import { execFile } from "node:child_process";
 import { accessSync, constants } from "node:fs";
 import { AppError } from "../../http/app-error.ts";
+import { imageDimensionsOfFile } from "./image-dimensions.ts";
 
 /**
  * Bounds on the poppler and tesseract children that render and read documents. A PDF of a kilobyte can declare a page
@@ -173,4 +174,16 @@ export async function refuseOversizedPages(pdfPath: string, pagesChecked = 10): 
   const inches = (pt: number) => Math.round(pt / 72);
   const message = `Page ${tooLarge.page} is ${inches(tooLarge.widthPt)} × ${inches(tooLarge.heightPt)} in; pages up to ${MAX_PAGE_SIDE_POINTS / 72} in a side are accepted. Export or scan the document at its real size`;
   throw new AppError("invalid_input", message, [{ path: "file", message: "page too large" }]);
+}
+
+/** Pixels an uploaded photo or scan may declare: a 48-megapixel phone photo fits, a decompression bomb does not. */
+export const MAX_UPLOAD_IMAGE_PIXELS = 50_000_000;
+
+/** Refuses, at upload, a PNG or JPEG that declares more pixels than any photo of a card or certificate needs. */
+export async function refuseOversizedImage(imagePath: string): Promise<void> {
+  const declared = await imageDimensionsOfFile(imagePath);
+  if (!declared || declared.width * declared.height <= MAX_UPLOAD_IMAGE_PIXELS) return;
+  const megapixels = Math.round((declared.width * declared.height) / 1_000_000);
+  const message = `The image is ${declared.width} × ${declared.height} pixels (${megapixels} megapixels); images up to ${MAX_UPLOAD_IMAGE_PIXELS / 1_000_000} megapixels are accepted. Send a smaller photo or scan`;
+  throw new AppError("invalid_input", message, [{ path: "file", message: "image too large" }]);
 }

@@ -167,6 +167,8 @@ export async function insertDemoWorld(
       originalName: demo.document.fileName,
       extractedText: null,
       extractionMethod: "pdf_text",
+      typeCode: demo.typeCode,
+      technicianId: demo.technicianKey ? (technicianIds.get(demo.technicianKey) ?? null) : null,
       createdAt: demo.submittedAt,
     })),
     { transaction, returning: true },

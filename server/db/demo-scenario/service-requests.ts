@@ -46,7 +46,7 @@ export async function insertDemoServiceRequests(today: Date, transaction: Transa
   const machineId = (
     await one<{ id: number }>(
       `INSERT INTO equipment (site_id, builder, control_family, technology, model, serial_number)
-       VALUES ($1, 'Vantor Machine Works', 'VMX-40', 'mill', 'VM-40 vertical mill', 'VM40-2209') RETURNING id`,
+       VALUES ($1, 'Vantor Machine Works', 'Kestle 40', 'mill', 'VM-40 vertical mill', 'VM40-2209') RETURNING id`,
       [siteId],
       transaction,
     )
@@ -70,7 +70,7 @@ export async function insertDemoServiceRequests(today: Date, transaction: Transa
       await one<{ id: number }>(
         `INSERT INTO service_requests (shop_company_id, site_id, equipment_id, kind, machine_state, timing, technology,
            builder, control_family, problem, created_by, sent_at)
-         VALUES ($1, $2, $3, 'repair', $4, 'soonest', 'mill', 'Vantor Machine Works', 'VMX-40', $5, $6, $7) RETURNING id`,
+         VALUES ($1, $2, $3, 'repair', $4, 'soonest', 'mill', 'Vantor Machine Works', 'Kestle 40', $5, $6, $7) RETURNING id`,
         [
           shop.id,
           siteId,

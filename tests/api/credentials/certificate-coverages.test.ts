@@ -146,6 +146,28 @@ describe("one certificate of insurance, every coverage", () => {
     expect(await Credential.count({ where: { companyId: company.id } })).toBe(0);
   });
 
+  it("refuses coverages on a file uploaded as a technician's card", async () => {
+    const { admin, company, technician } = await buildProvider(t.app);
+    const { bytes, values } = await buildCertificatePdf({ seed: 307 });
+    const asCard = await admin
+      .post("/api/documents")
+      .field("typeCode", "first_aid_cpr")
+      .field("technicianId", String(technician.id))
+      .attach("file", Buffer.from(bytes), "certificate.pdf");
+
+    const res = await admin.post("/api/credentials/coverages").send({
+      documentId: asCard.body.document.id,
+      credentials: [
+        { typeCode: "general_liability", fields: certificateFields(values, "general_liability") },
+      ],
+    });
+
+    expect(asCard.status).toBe(201);
+    expect(res.status).toBe(422);
+    expect(res.body.error.fields[0].path).toBe("body.documentId");
+    expect(await Credential.count({ where: { companyId: company.id } })).toBe(0);
+  });
+
   it("refuses another company's document and the same coverage sent twice", async () => {
     const owner = await buildProvider(t.app);
     const other = await buildProvider(t.app);

@@ -93,3 +93,44 @@ describe("page sizes and render bounds", () => {
     expect(width * height).toBeLessThanOrEqual(MAX_PREVIEW_PIXELS);
   });
 });
+
+/** A PNG of a few dozen bytes whose header declares `width` × `height` pixels (a decompression bomb's shape). */
+function pngDeclaring(width: number, height: number): Buffer {
+  const chunk = (type: string, data: Buffer) => {
+    const length = Buffer.alloc(4);
+    length.writeUInt32BE(data.length);
+    // The CRC is not checked by the type sniffer or the header reader; zeros keep the fixture short.
+    return Buffer.concat([length, Buffer.from(type, "latin1"), data, Buffer.alloc(4)]);
+  };
+  const ihdr = Buffer.alloc(13);
+  ihdr.writeUInt32BE(width, 0);
+  ihdr.writeUInt32BE(height, 4);
+  ihdr.writeUInt8(8, 8); // bit depth
+  ihdr.writeUInt8(0, 9); // grayscale
+  const signature = Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]);
+  return Buffer.concat([
+    signature,
+    chunk("IHDR", ihdr),
+    chunk("IDAT", Buffer.alloc(16)),
+    chunk("IEND", Buffer.alloc(0)),
+  ]);
+}
+
+describe("image sizes at upload", () => {
+  it("refuses a small PNG that declares 40,000 × 40,000 pixels with 422 and keeps no row and no file", async () => {
+    const { tech } = await buildProvider(t.app);
+    const bytes = pngDeclaring(40_000, 40_000);
+    const before = await countStored(t.config.UPLOADS_DIR);
+
+    const res = await tech
+      .post("/api/documents")
+      .field("typeCode", "first_aid_cpr")
+      .attach("file", bytes, "card.png");
+
+    expect(bytes.length).toBeLessThan(200);
+    expect(res.status).toBe(422);
+    expect(res.body.error.fields).toEqual([{ path: "file", message: "image too large" }]);
+    expect(res.body.error.message).toContain("40000 × 40000 pixels");
+    expect(await countStored(t.config.UPLOADS_DIR)).toEqual(before);
+  });
+});

@@ -96,7 +96,7 @@ const lapsedGl = {
   },
   status: "unmet",
   reason: "lapsed",
-  detail: "Commercial general liability lapsed on 2026-12-01.",
+  detail: "Commercial general liability lapsed on Dec 1, 2026.",
   credentialId: 1,
   lapsesAt: "2026-12-01T06:01:00.000Z",
 };

@@ -6,10 +6,19 @@ import { buildCompany } from "../../support/build-company.ts";
 import {
   buildClearedProvider,
   buildCredentialRow,
+  insuranceFields,
   oemFields,
   trainingFields,
 } from "../../fixtures/build-credential-row.ts";
 import { Technician } from "../../../server/technicians/model.ts";
+import { RequirementSet } from "../../../server/standing/model.ts";
+import { Credential } from "../../../server/credentials/model.ts";
+import { db } from "../../../server/db/sequelize.ts";
+import { loadStandingInputs } from "../../../server/standing/standing-inputs.ts";
+import { computeStandings } from "../../../server/standing/compute-stored-standings.ts";
+import { MAX_ACTIVE_REQUIREMENT_SETS_PER_SHOP } from "../../../shared/standing/requirement-set-limits.ts";
+import { addCalendarDays } from "../../../shared/standing/iso-date.ts";
+import type { Requirement } from "../../../shared/standing/requirements.ts";
 import { signIn } from "./sign-in-as.ts";
 
 let t: TestApp;
@@ -226,5 +235,149 @@ describe("requirement sets", () => {
 
     expect(answers.map((r) => r.status)).toEqual([404, 404, 404, 404]);
     expect((await owner.agent.get(path)).body.active).toBe(true);
+  });
+});
+
+describe("a set's site and the number of sets", () => {
+  it("answers 422 naming body.siteId for another shop's site or an unknown one, on create and on revise", async () => {
+    const owner = await buyer();
+    const other = await buyer();
+    const foreignSite = await other.agent
+      .post("/api/sites")
+      .send({ name: "North Plant", addressLine: "400 Lathe Street", postalCode: "60601" });
+    const ownSite = await owner.agent
+      .post("/api/sites")
+      .send({ name: "South Plant", addressLine: "12 Gear Court", postalCode: "60601" });
+    const created = await owner.agent
+      .post("/api/requirement-sets")
+      .send({ ...spindleSet("Orrin Machine Works"), siteId: ownSite.body.id });
+
+    const answers = await Promise.all([
+      owner.agent.post("/api/requirement-sets").send({ ...spindleSet("x"), siteId: foreignSite.body.id }),
+      owner.agent.post("/api/requirement-sets").send({ ...spindleSet("x"), siteId: 2_000_000_000 }),
+      owner.agent
+        .put(`/api/requirement-sets/${created.body.id}`)
+        .send({ ...spindleSet("x"), siteId: foreignSite.body.id }),
+    ]);
+
+    expect(created.status).toBe(201);
+    expect(created.body.siteId).toBe(ownSite.body.id);
+    for (const res of answers) {
+      expect(res.status).toBe(422);
+      expect(res.body.error.fields).toEqual([{ path: "body.siteId", message: "unknown site" }]);
+    }
+    const stored = await RequirementSet.findAll({ where: { companyId: owner.company.id } });
+    expect(stored.map((r) => r.siteId)).toEqual([ownSite.body.id]);
+  });
+
+  it(`keeps at most ${MAX_ACTIVE_REQUIREMENT_SETS_PER_SHOP} active sets per shop, and makes room when one is archived`, async () => {
+    const { agent, company } = await buyer();
+    await RequirementSet.bulkCreate(
+      Array.from({ length: MAX_ACTIVE_REQUIREMENT_SETS_PER_SHOP }, (_, i) => ({
+        companyId: company.id,
+        siteId: null,
+        name: `Set ${i}`,
+        requirements: spindleSet("Orrin Machine Works").requirements as unknown as Requirement[],
+      })),
+    );
+
+    const refused = await agent.post("/api/requirement-sets").send(spindleSet("Orrin Machine Works"));
+    const first = await RequirementSet.findOne({ where: { companyId: company.id } });
+    await agent.delete(`/api/requirement-sets/${first!.id}`).expect(200);
+    const accepted = await agent.post("/api/requirement-sets").send(spindleSet("Orrin Machine Works"));
+
+    expect(refused.status).toBe(422);
+    expect(refused.body.error.message).toMatch(String(MAX_ACTIVE_REQUIREMENT_SETS_PER_SHOP));
+    expect(refused.body.error.fields[0].path).toBe("body");
+    expect(accepted.status).toBe(201);
+    expect(await RequirementSet.count({ where: { companyId: company.id, active: true } })).toBe(
+      MAX_ACTIVE_REQUIREMENT_SETS_PER_SHOP,
+    );
+  });
+});
+
+describe("the preview of an unsaved set", () => {
+  /** Every active technician through the full engine, as the stored standings are computed: the reference answer. */
+  async function fullEvaluation(requirements: Requirement[]) {
+    const standings = await db().transaction(async (transaction) => {
+      const inputs = await loadStandingInputs("all", transaction, {
+        targets: [{ id: -1, name: "draft", requirements }],
+      });
+      return computeStandings(
+        inputs,
+        new Date(),
+        inputs.technicians.filter((t) => t.active),
+      ).map((s) => s.standing);
+    });
+    const cleared = standings.filter((s) => s === "cleared").length;
+    const lapsing = standings.filter((s) => s === "lapsing").length;
+    return {
+      technicians: standings.length,
+      cleared,
+      lapsing,
+      meeting: cleared + lapsing,
+      notCleared: standings.length - cleared - lapsing,
+    };
+  }
+
+  it("counts what the full engine counts: lapsing soon, carried by a renewal, below the level, awaiting verification", async () => {
+    const builder = `Orrin Works ${randomUUID().slice(0, 6)}`;
+    const today = new Date().toISOString().slice(0, 10);
+    const cleared = await qualifiedTechnician(builder);
+    const lapsing = await qualifiedTechnician(builder);
+    const renewed = await qualifiedTechnician(builder);
+    const lowLevel = await qualifiedTechnician(builder);
+    const unverified = await qualifiedTechnician(builder);
+    const soon = addCalendarDays(today, 20);
+    for (const p of [lapsing, renewed]) {
+      await p.generalLiability.update({ state: "superseded" });
+      await buildCredentialRow({
+        companyId: p.company.id,
+        submittedBy: p.admin.id,
+        typeCode: "general_liability",
+        fields: insuranceFields({ effectiveDate: addCalendarDays(today, -345), expirationDate: soon }),
+      });
+    }
+    await buildCredentialRow({
+      companyId: renewed.company.id,
+      submittedBy: renewed.admin.id,
+      typeCode: "general_liability",
+      fields: insuranceFields({ effectiveDate: soon, expirationDate: addCalendarDays(soon, 365) }),
+    });
+    await buildCredentialRow({
+      companyId: lowLevel.company.id,
+      technicianId: lowLevel.technician.id,
+      submittedBy: lowLevel.admin.id,
+      typeCode: "oem_training",
+      fields: oemFields({ builder, level: 1, expiryDate: "2099-01-01" }),
+    });
+    await Credential.update(
+      { state: "submitted" },
+      { where: { technicianId: unverified.technician.id, typeCode: "oem_training" } },
+    );
+    const set = spindleSet(builder, 3);
+    await Credential.update(
+      { fields: oemFields({ builder, level: 3, expiryDate: "2099-01-01" }) as never },
+      {
+        where: {
+          technicianId: [
+            cleared.technician.id,
+            lapsing.technician.id,
+            renewed.technician.id,
+            unverified.technician.id,
+          ],
+          typeCode: "oem_training",
+        },
+      },
+    );
+    const { agent } = await buyer();
+
+    const res = await agent.post("/api/requirement-sets/preview").send(set);
+    const reference = await fullEvaluation(set.requirements as unknown as Requirement[]);
+
+    expect(res.status).toBe(200);
+    expect(res.body).toEqual(reference);
+    // Of this test's technicians: two cleared (one carried on by its renewal), one lapsing, two short.
+    expect({ cleared: res.body.cleared, lapsing: res.body.lapsing }).toEqual({ cleared: 2, lapsing: 1 });
   });
 });

@@ -20,3 +20,28 @@ describe("requirement details read by buyers", () => {
     }
   });
 });
+
+describe("dates in requirement details", () => {
+  const isoDigits = /\d{4}-\d{2}-\d{2}/;
+
+  it("print the day a policy ends as a readable local date, not ISO digits", () => {
+    const policy = buildInsuranceCredential({}, { expirationDate: "2027-07-15" });
+    const met = evaluateRequirement(generalLiability, [policy], options);
+    const later = { ...options, asOf: new Date("2027-08-01T15:00:00Z") };
+    const lapsed = evaluateRequirement(generalLiability, [policy], later);
+
+    expect(met.detail).toContain("Jul 15, 2027");
+    expect(lapsed.detail).toMatch(/lapsed on Jul 15, 2027\.$/);
+    for (const result of [met, lapsed]) expect(result.detail).not.toMatch(isoDigits);
+  });
+
+  it("print a policy that has not started yet with its readable first day", () => {
+    const policy = buildInsuranceCredential(
+      {},
+      { effectiveDate: "2027-02-03", expirationDate: "2028-02-03" },
+    );
+    const result = evaluateRequirement(generalLiability, [policy], options);
+
+    expect(result.detail).toMatch(/starts on Feb 3, 2027\.$/);
+  });
+});

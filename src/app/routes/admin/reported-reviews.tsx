@@ -16,15 +16,18 @@ export function Component() {
     <>
       <PageHeader
         title="Reported ratings"
-        description="Ratings a shop or a service company has reported to the platform, oldest report first."
+        description="Ratings a shop or a service company has reported, oldest report first, then ratings where the shop and the rated company share an e-mail domain, phone number or address."
       />
       <p className="mb-4 rounded-md border border-ink-100 bg-ink-50 px-4 py-3 text-sm text-ink-900">
         <span className="font-semibold">Reviews are never deleted,</span> so there is no delete button here. A
         rating is part of a technician&apos;s record of confirmed work; read the report and take it up with
-        the shop or the service company directly.
+        the shop or the service company directly. A rating flagged as possible self-rating can be left out of
+        the score, with a reason; it stays on the record.
       </p>
       {reviews.length === 0 ? (
-        <EmptyState title="No reported ratings">Ratings that someone reports appear here.</EmptyState>
+        <EmptyState title="No reported ratings">
+          Ratings that someone reports, or that look like self-rating, appear here.
+        </EmptyState>
       ) : (
         <ul className="space-y-4">
           {reviews.map((review) => (

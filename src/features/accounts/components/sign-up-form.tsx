@@ -4,6 +4,7 @@ import { Button } from "@/components/ui/button.tsx";
 import { ChoiceGroup } from "@/components/ui/choice-group.tsx";
 import { FormError } from "@/components/ui/form-error.tsx";
 import { TextField } from "@/components/ui/text-field.tsx";
+import { ZipZoneNote } from "./zip-zone-note.tsx";
 import { fieldErrorsOf } from "@/lib/field-errors.ts";
 import { readForm } from "@/lib/read-form.ts";
 import { useSignUp } from "../api/sign-up.ts";
@@ -28,6 +29,7 @@ const kindOptions = [
 
 export function SignUpForm({ onSignedUp }: { onSignedUp: (user: CurrentUser) => void }) {
   const [invalid, setInvalid] = useState<unknown>(null);
+  const [zip, setZip] = useState("");
   const signUp = useSignUp();
   const problem = invalid ?? signUp.error;
   const fields = fieldErrorsOf(problem, plainWords);
@@ -75,10 +77,12 @@ export function SignUpForm({ onSignedUp }: { onSignedUp: (user: CurrentUser) => 
           inputMode="numeric"
           autoComplete="postal-code"
           maxLength={5}
+          onChange={(event) => setZip(event.currentTarget.value.trim())}
           hint="Your time zone is set from this ZIP code: a policy period runs on standard time at the insured's mailing address."
           required
           error={fields.postalCode}
         />
+        <ZipZoneNote zip={zip} />
       </fieldset>
       <fieldset className="space-y-4">
         <legend className="text-base font-semibold text-ink-900">You</legend>

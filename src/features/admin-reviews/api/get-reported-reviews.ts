@@ -20,9 +20,11 @@ export const reportedReviewSchema = z.object({
   reply: z.string().nullable(),
   repliedAt: z.string().nullable(),
   createdAt: z.string(),
-  reportedAt: z.string(),
+  reportedAt: z.string().nullable(),
   reportReason: z.string(),
   reportedBy: z.object({ id: z.number(), name: z.string() }),
+  selfRatingSignals: z.array(z.enum(["email_domain", "phone", "address"])),
+  excluded: z.object({ at: z.string(), reason: z.string(), by: z.string() }).nullable(),
 });
 export type ReportedReview = z.infer<typeof reportedReviewSchema>;
 

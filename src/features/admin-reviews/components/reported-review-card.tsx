@@ -1,9 +1,16 @@
 import { formatDateTime } from "@/lib/format-date-time.ts";
 import type { ReportedReview } from "../api/get-reported-reviews.ts";
+import { ExcludeReviewForm } from "./exclude-review-form.tsx";
 
 const MAX_STARS = 5;
 
-/** One reported review: the rating, the reply, and who reported it and why. */
+const SIGNAL_WORDS: Record<ReportedReview["selfRatingSignals"][number], string> = {
+  email_domain: "an e-mail domain",
+  phone: "a phone number",
+  address: "a street address",
+};
+
+/** One review for the admin: the rating, the reply, who reported it and why, and any sign of self-rating. */
 export function ReportedReviewCard({ review }: { review: ReportedReview }) {
   const headingId = `reported-review-${review.id}`;
   return (
@@ -46,13 +53,33 @@ export function ReportedReviewCard({ review }: { review: ReportedReview }) {
       ) : (
         <p className="text-sm text-ink-700">No reply from the service company.</p>
       )}
-      <div className="rounded-md border-l-4 border-red-700 bg-red-50 px-3 py-2">
-        <p className="text-sm font-semibold text-red-900">
-          Reported by {review.reportedBy.name || `user ${review.reportedBy.id}`} ·{" "}
-          <time dateTime={review.reportedAt}>{formatDateTime(review.reportedAt)}</time>
-        </p>
-        <p className="whitespace-pre-line text-sm text-ink-900">{review.reportReason}</p>
-      </div>
+      {review.reportedAt && (
+        <div className="rounded-md border-l-4 border-red-700 bg-red-50 px-3 py-2">
+          <p className="text-sm font-semibold text-red-900">
+            Reported by {review.reportedBy.name || `user ${review.reportedBy.id}`} ·{" "}
+            <time dateTime={review.reportedAt}>{formatDateTime(review.reportedAt)}</time>
+          </p>
+          <p className="whitespace-pre-line text-sm text-ink-900">{review.reportReason}</p>
+        </div>
+      )}
+      {review.selfRatingSignals.length > 0 && (
+        <div className="space-y-2 rounded-md border-l-4 border-amber-700 bg-amber-50 px-3 py-2">
+          <p className="text-sm font-semibold text-ink-900">
+            Possible self-rating: the shop and the service company share{" "}
+            {review.selfRatingSignals.map((s) => SIGNAL_WORDS[s]).join(", ")}.
+          </p>
+          {review.excluded ? (
+            <p className="text-sm text-ink-900">
+              <span className="font-semibold">Left out of the score</span> by{" "}
+              {review.excluded.by || "an admin"} ·{" "}
+              <time dateTime={review.excluded.at}>{formatDateTime(review.excluded.at)}</time>:{" "}
+              {review.excluded.reason}
+            </p>
+          ) : (
+            <ExcludeReviewForm reviewId={review.id} />
+          )}
+        </div>
+      )}
     </article>
   );
 }

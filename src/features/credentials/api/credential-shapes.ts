@@ -17,6 +17,7 @@ export const credentialTypeSchema = z.object({
     z.object({ kind: z.literal("no_expiry") }),
   ]),
   description: z.string(),
+  caution: z.string().nullable(),
   active: z.boolean(),
 });
 export type CredentialType = z.infer<typeof credentialTypeSchema>;

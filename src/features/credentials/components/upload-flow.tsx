@@ -1,7 +1,6 @@
 import { useMemo, useState, type FormEvent } from "react";
 import { isApiError } from "@/lib/api-client.ts";
 import { Button } from "@/components/ui/button.tsx";
-import { CautionNote } from "@/components/ui/caution-note.tsx";
 import { FormError } from "@/components/ui/form-error.tsx";
 import { SelectField } from "@/components/ui/select-field.tsx";
 import type { Credential, CredentialType, UploadedDocument } from "../api/credential-shapes.ts";
@@ -17,6 +16,8 @@ import { parseFieldValues, toFieldValues, type FieldValues } from "./field-value
 import { FileDrop } from "./file-drop.tsx";
 import { ReviewerWarnings } from "./reviewer-warnings.tsx";
 import { UploadProgress } from "./upload-progress.tsx";
+import { TypeCaution } from "./type-caution.tsx";
+import { NamedTechniciansChecklist } from "./named-technicians-checklist.tsx";
 
 export type HolderOption = { id: number; name: string };
 
@@ -60,6 +61,7 @@ export function UploadFlow({
   const [values, setValues] = useState<FieldValues>({});
   const [problems, setProblems] = useState<Record<string, string>>({});
   const [summary, setSummary] = useState<unknown>(null);
+  const [namedTechnicianIds, setNamedTechnicianIds] = useState<number[]>([]);
   const upload = useUploadDocument();
   const submit = useSubmitCredential();
 
@@ -100,6 +102,7 @@ export function UploadFlow({
     setValues({});
     setProblems({});
     setSummary(null);
+    setNamedTechnicianIds([]);
     upload.reset();
     submit.reset();
   };
@@ -120,7 +123,10 @@ export function UploadFlow({
         documentId: uploaded.document.id,
         typeCode: type.code,
         ...(heldByTechnician && holderId ? { technicianId: holderId } : {}),
-        fields: parsed.fields,
+        fields:
+          type.fieldSet === "exemption"
+            ? { ...parsed.fields, technicianIds: namedTechnicianIds }
+            : parsed.fields,
       },
       {
         onSuccess: onSubmitted,
@@ -163,7 +169,7 @@ export function UploadFlow({
             disabled={upload.isPending}
           />
         )}
-        {type?.category === "insurance" && <CautionNote />}
+        {type && <TypeCaution type={type} />}
         {progress ? (
           <UploadProgress fileName={progress.name} fraction={progress.fraction} />
         ) : (
@@ -231,6 +237,15 @@ export function UploadFlow({
         found={found}
         disabled={submit.isPending}
       />
+      {type?.fieldSet === "exemption" && fixedTechnicianId === undefined && (
+        <NamedTechniciansChecklist
+          technicians={technicians}
+          checked={namedTechnicianIds}
+          onChange={setNamedTechnicianIds}
+          error={problems.technicianIds}
+          disabled={submit.isPending}
+        />
+      )}
       <div className="flex flex-wrap gap-3 border-t border-ink-100 pt-4">
         <Button type="submit" pending={submit.isPending} pendingLabel="Sending…" className="min-h-12">
           Send for verification

@@ -40,6 +40,11 @@ export const directoryRowSchema = z.object({
   rating: ratingSchema,
   standing: cleared,
   earliestLapse: z.string().nullable(),
+  requirementsMet: z
+    .array(
+      z.object({ label: z.string(), metBy: z.string().nullable(), detail: z.string(), lapsing: z.boolean() }),
+    )
+    .nullable(),
   hourlyRateCents: z.number(),
   travelRateCents: z.number(),
   mileageRateCents: z.number(),

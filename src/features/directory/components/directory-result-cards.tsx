@@ -3,6 +3,7 @@ import { CallOutEstimate } from "./call-out-estimate.tsx";
 import { DirectoryStandingBadge } from "./directory-standing-badge.tsx";
 import { DistanceText, RatesText, TechnicianLink } from "./directory-row-parts.tsx";
 import { RatingSummary } from "./rating-summary.tsx";
+import { RequirementsMetLine } from "./requirements-met-line.tsx";
 
 /** Phone widths: one card per technician, with targets large enough for a thumb. */
 export function DirectoryResultCards({ rows, onSiteHours }: { rows: DirectoryRow[]; onSiteHours: number }) {
@@ -25,6 +26,7 @@ export function DirectoryResultCards({ rows, onSiteHours }: { rows: DirectoryRow
             )}
             <RatesText row={row} />
           </div>
+          <RequirementsMetLine row={row} />
         </li>
       ))}
     </ul>

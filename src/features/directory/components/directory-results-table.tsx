@@ -5,6 +5,7 @@ import { CallOutEstimate } from "./call-out-estimate.tsx";
 import { DirectoryStandingBadge } from "./directory-standing-badge.tsx";
 import { DistanceText, RatesText, TechnicianLink } from "./directory-row-parts.tsx";
 import { RatingSummary } from "./rating-summary.tsx";
+import { RequirementsMetLine } from "./requirements-met-line.tsx";
 
 const column = dataTableColumns<DirectoryRow>();
 
@@ -27,10 +28,13 @@ export function DirectoryResultsTable({ rows, onSiteHours }: { rows: DirectoryRo
           header: "Standing",
           enableSorting: false,
           cell: (info) => (
-            <DirectoryStandingBadge
-              standing={info.getValue()}
-              earliestLapse={info.row.original.earliestLapse}
-            />
+            <div className="max-w-xs space-y-1">
+              <DirectoryStandingBadge
+                standing={info.getValue()}
+                earliestLapse={info.row.original.earliestLapse}
+              />
+              <RequirementsMetLine row={info.row.original} />
+            </div>
           ),
         }),
         column.accessor("distanceKm", {

@@ -52,17 +52,17 @@ export function ProfileCredentials({ credentials }: { credentials: readonly Prof
   return (
     <ul className="grid gap-3 md:grid-cols-2">
       {credentials.map((c) => (
-        <li key={c.id} className="rounded-lg border border-ink-100 bg-white p-4">
+        <li key={c.id} className="min-w-0 rounded-lg border border-ink-100 bg-white p-4">
           <p className="font-semibold text-ink-900">{c.typeName}</p>
           <p className="text-sm text-ink-700">
             {c.holder === "company" ? "Held by the company" : "Held by the technician"} ·{" "}
             {c.lapsesAt ? `lapses ${formatInstantDate(c.lapsesAt)}` : "does not lapse"}
           </p>
-          <dl className="mt-2 grid grid-cols-[max-content_1fr] gap-x-3 gap-y-0.5 text-sm">
+          <dl className="mt-2 grid grid-cols-[minmax(0,3fr)_minmax(0,2fr)] gap-x-3 gap-y-0.5 text-sm">
             {factsOf(c.fields).map(([term, value]) => (
               <div key={term} className="contents">
                 <dt className="text-ink-700">{term}</dt>
-                <dd className="text-ink-900">{value}</dd>
+                <dd className="break-words text-ink-900">{value}</dd>
               </div>
             ))}
           </dl>

@@ -1,0 +1,122 @@
+import type { PositionedText } from "./locate-values.ts";
+
+/** Quarter turns tesseract's orientation detection may ask for, clockwise, to make a page upright. */
+export type QuarterTurn = 0 | 90 | 180 | 270;
+
+// Orientation detection on a sparse card answers with low confidence (0.3 is common and usually right); only a zero
+// means it had nothing to go on. A doubtful turn is checked afterwards by how well the page reads (readingQuality).
+const MIN_OSD_CONFIDENCE = 0.05;
+
+/**
+ * The clockwise turn that makes a page upright, from `tesseract --psm 0` output ("Rotate: 90",
+ * "Orientation confidence: 7.3"); 0 when the answer is missing or too unsure to act on.
+ */
+export function uprightTurn(osdOutput: string): QuarterTurn {
+  const rotate = /Rotate:\s*(\d+)/.exec(osdOutput);
+  const confidence = /Orientation confidence:\s*([\d.]+)/.exec(osdOutput);
+  if (!rotate || !confidence || Number(confidence[1]) < MIN_OSD_CONFIDENCE) return 0;
+  const turn = Number(rotate[1]) % 360;
+  return turn === 90 || turn === 180 || turn === 270 ? turn : 0;
+}
+
+interface TsvWord {
+  key: string;
+  left: number;
+  top: number;
+  width: number;
+  height: number;
+  text: string;
+  conf: number;
+}
+
+function parseTsv(tsv: string): { words: TsvWord[]; pageWidth: number; pageHeight: number } {
+  const words: TsvWord[] = [];
+  let pageWidth = 0;
+  let pageHeight = 0;
+  for (const row of tsv.split("\n")) {
+    const cells = row.split("\t");
+    if (cells.length < 12 || !/^\d+$/.test(cells[0]!)) continue;
+    const [level, , block, par, lineNo, , left, top, width, height, conf] = cells.map(Number) as number[];
+    if (level === 1) {
+      pageWidth = width!;
+      pageHeight = height!;
+    }
+    const text = cells.slice(11).join("\t").trim();
+    // Level 5 rows are words; conf -1 marks a layout row with no text of its own.
+    if (level !== 5 || !text || conf! < 0) continue;
+    words.push({
+      key: `${block}/${par}/${lineNo}`,
+      left: left!,
+      top: top!,
+      width: width!,
+      height: height!,
+      text,
+      conf: conf!,
+    });
+  }
+  return { words, pageWidth, pageHeight };
+}
+
+/**
+ * Tesseract's word boxes (`tesseract IMAGE stdout tsv`) as positioned text for the same layout reader as a PDF's
+ * text items. Words tesseract put on one line share that line's top and height, so a tall capital beside a short
+ * word never splits a line in two; sizes are fractions of the image, like the PDF path's fractions of the page.
+ */
+export function tsvToPositionedText(tsv: string, page: number): PositionedText[] {
+  const { words, pageWidth, pageHeight } = parseTsv(tsv);
+  if (!pageWidth || !pageHeight) return [];
+  const lines = new Map<string, { top: number; bottom: number }>();
+  for (const word of words) {
+    const line = lines.get(word.key);
+    lines.set(word.key, {
+      top: Math.min(line?.top ?? Infinity, word.top),
+      bottom: Math.max(line?.bottom ?? 0, word.top + word.height),
+    });
+  }
+  return words.map((word) => {
+    const line = lines.get(word.key)!;
+    const lineHeight = line.bottom - line.top;
+    return {
+      page,
+      text: word.text,
+      x: word.left / pageWidth,
+      y: line.top / pageHeight,
+      w: word.width / pageWidth,
+      h: lineHeight / pageHeight,
+      // A line box spans ascenders to descenders, about 1.2 font sizes (the PDF path uses the same ratio).
+      em: lineHeight / 1.2 / pageWidth,
+    };
+  });
+}
+
+/**
+ * The page's skew in degrees (positive: lines fall to the right, clockwise), the median slope of the baselines of
+ * lines with at least three words; 0 when too few lines say so.
+ */
+export function skewDegrees(tsv: string): number {
+  const { words } = parseTsv(tsv);
+  const byLine = new Map<string, TsvWord[]>();
+  for (const word of words) byLine.set(word.key, [...(byLine.get(word.key) ?? []), word]);
+  const slopes: number[] = [];
+  for (const line of byLine.values()) {
+    if (line.length < 3) continue;
+    const first = line[0]!;
+    const last = line[line.length - 1]!;
+    const run = last.left + last.width / 2 - (first.left + first.width / 2);
+    if (run <= 0) continue;
+    const rise = last.top + last.height - (first.top + first.height);
+    slopes.push(Math.atan2(rise, run));
+  }
+  if (slopes.length < 2) return 0;
+  slopes.sort((a, b) => a - b);
+  return (slopes[Math.floor(slopes.length / 2)]! * 180) / Math.PI;
+}
+
+/**
+ * How well a page read: the words tesseract is fairly sure of (confidence 60 or more, two letters or digits at least).
+ * An upside-down or sideways page reads as a few doubtful fragments, so the count tells a right turn from a wrong one.
+ */
+export function readingQuality(tsv: string): number {
+  return parseTsv(tsv).words.filter((w) => w.conf >= 60 && (w.text.match(/[A-Za-z0-9]/g) ?? []).length >= 2)
+    .length;
+}

@@ -1,0 +1,30 @@
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { buildTestApp, type TestApp } from "../../support/test-app.ts";
+import { buildProvider } from "../../support/build-provider.ts";
+
+let t: TestApp;
+beforeAll(() => {
+  t = buildTestApp();
+});
+afterAll(() => t.close());
+
+describe("the caution that comes with each credential type", () => {
+  it("names the rule each safety card defers to, for the upload screens to show", async () => {
+    const { admin } = await buildProvider(t.app);
+    const res = await admin.get("/api/credential-types");
+    expect(res.status).toBe(200);
+    const cautionOf = (code: string): string | null =>
+      (res.body as { code: string; caution: string | null }[]).find((type) => type.code === code)?.caution ??
+      null;
+
+    // NFPA 70E 110.6 (from memory): the employer decides who is qualified.
+    expect(cautionOf("arc_flash")).toMatch(/employer decides.*NFPA 70E 110\.6/);
+    // 29 CFR 1910.147: the host site's energy-control procedure applies.
+    expect(cautionOf("lockout_tagout")).toMatch(/site's own lockout\/tagout procedure.*29 CFR 1910\.147/);
+    // 29 CFR 1910.178(l): the evaluation is specific to the trucks and workplace.
+    expect(cautionOf("powered_truck")).toMatch(/trucks and the workplace.*29 CFR 1910\.178\(l\)/);
+    expect(cautionOf("machine_rigging")).toMatch(/training only.*lift plan/);
+    expect(cautionOf("general_liability")).toMatch(/information only/);
+    expect(cautionOf("workers_comp_exemption")).toMatch(/only the persons it names/);
+  });
+});

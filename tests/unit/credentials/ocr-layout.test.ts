@@ -1,0 +1,120 @@
+import { describe, expect, it } from "vitest";
+import { layoutText } from "../../../shared/credentials/locate-values.ts";
+import {
+  readingQuality,
+  skewDegrees,
+  tsvToPositionedText,
+  uprightTurn,
+} from "../../../shared/credentials/ocr-layout.ts";
+import { proposeFields } from "../../../shared/credentials/extract-fields.ts";
+
+const HEADER =
+  "level\tpage_num\tblock_num\tpar_num\tline_num\tword_num\tleft\ttop\twidth\theight\tconf\ttext";
+/** A tesseract TSV for a 1000 x 600 image: each word as [line, left, top, width, height, conf, text]. */
+function tsv(words: Array<[number, number, number, number, number, number, string]>): string {
+  const rows = [
+    HEADER,
+    "1\t1\t0\t0\t0\t0\t0\t0\t1000\t600\t-1\t",
+    "2\t1\t1\t0\t0\t0\t40\t40\t900\t500\t-1\t",
+  ];
+  words.forEach(([line, left, top, width, height, conf, text], n) =>
+    rows.push(`5\t1\t1\t1\t${line}\t${n + 1}\t${left}\t${top}\t${width}\t${height}\t${conf}\t${text}`),
+  );
+  return rows.join("\n");
+}
+
+describe("orientation detection output", () => {
+  it("takes the clockwise quarter turn tesseract asks for", () => {
+    const osd =
+      "Page number: 0\nOrientation in degrees: 270\nRotate: 90\nOrientation confidence: 3.21\nScript: Latin";
+    expect(uprightTurn(osd)).toBe(90);
+    expect(uprightTurn(osd.replace("Rotate: 90", "Rotate: 180"))).toBe(180);
+  });
+  it("reads the page as it came when detection failed or had nothing to go on", () => {
+    expect(uprightTurn("Too few characters. Skipping this page\nError during processing.")).toBe(0);
+    expect(uprightTurn("Rotate: 180\nOrientation confidence: 0.00")).toBe(0);
+    expect(uprightTurn("Rotate: 45\nOrientation confidence: 9")).toBe(0);
+  });
+});
+
+describe("tesseract word boxes for the layout reader", () => {
+  const page = tsv([
+    [1, 40, 100, 60, 20, 95, "Name"],
+    [1, 300, 96, 70, 26, 93, "Odile"],
+    [1, 380, 100, 90, 22, 91, "Carrack"],
+    [2, 40, 140, 80, 20, 90, "Course"],
+    [2, 300, 140, 90, 20, 88, "Electrical"],
+    [2, 400, 140, 70, 20, 87, "Safety"],
+    [3, 40, 180, 50, 20, -1, ""],
+  ]);
+
+  it("gives each word its box as fractions of the image, with its line's top and height", () => {
+    const items = tsvToPositionedText(page, 2);
+    expect(items).toHaveLength(6);
+    const odile = items.find((item) => item.text === "Odile")!;
+    const carrack = items.find((item) => item.text === "Carrack")!;
+    expect(odile).toMatchObject({ page: 2, x: 0.3, w: 0.07 });
+    // "Odile" starts higher than "Carrack"; both take the line's top (96) and full height (96..122).
+    expect(odile.y).toBeCloseTo(96 / 600);
+    expect(carrack.y).toBeCloseTo(96 / 600);
+    expect(carrack.h).toBeCloseTo(26 / 600);
+  });
+
+  it("rebuilds label and value cells the way a PDF's text items are rebuilt, so the card fields read", () => {
+    const text = layoutText(tsvToPositionedText(page, 1));
+    expect(text.split("\n")).toEqual(["Name   Odile Carrack", "Course   Electrical Safety"]);
+    expect(proposeFields("lockout_tagout", "training", text).fields).toMatchObject({
+      holderName: "Odile Carrack",
+    });
+  });
+
+  it("gives nothing for output without a page row", () => {
+    expect(tsvToPositionedText("not a tsv", 1)).toEqual([]);
+  });
+});
+
+describe("skew and reading quality", () => {
+  it("measures lines falling to the right as a positive tilt, and level lines as none", () => {
+    const fall = Math.tan((3 * Math.PI) / 180);
+    const tilted = tsv(
+      [0, 1, 2].flatMap((line) =>
+        [0, 1, 2].map((n): [number, number, number, number, number, number, string] => [
+          line + 1,
+          100 + n * 200,
+          100 + line * 60 + Math.round(n * 200 * fall),
+          150,
+          20,
+          90,
+          "word",
+        ]),
+      ),
+    );
+    expect(skewDegrees(tilted)).toBeCloseTo(3, 0);
+    expect(
+      skewDegrees(
+        tsv([
+          [1, 0, 10, 50, 20, 90, "a"],
+          [1, 60, 10, 50, 20, 90, "b"],
+          [1, 120, 10, 50, 20, 90, "c"],
+          [2, 0, 50, 50, 20, 90, "d"],
+          [2, 60, 50, 50, 20, 90, "e"],
+          [2, 120, 50, 50, 20, 90, "f"],
+        ]),
+      ),
+    ).toBe(0);
+  });
+
+  it("counts only the words tesseract is sure of, so an upside-down page scores low", () => {
+    const upright = tsv([
+      [1, 0, 0, 50, 20, 96, "Course"],
+      [1, 60, 0, 50, 20, 91, "Safety"],
+    ]);
+    const upsideDown = tsv([
+      [1, 0, 0, 50, 20, 31, "ÁʇǝɟɐS"],
+      [1, 60, 0, 50, 20, 12, "es"],
+      [1, 120, 0, 50, 20, 80, "'"],
+    ]);
+    expect(readingQuality(upright)).toBe(2);
+    expect(readingQuality(upsideDown)).toBe(0);
+  });
+});
