@@ -88,7 +88,7 @@ export function initCredentialModels(sequelize: Sequelize) {
       uploadedBy: { type: DataTypes.INTEGER, allowNull: false },
       sha256: { type: DataTypes.STRING(64), allowNull: false },
       sizeBytes: { type: DataTypes.INTEGER, allowNull: false },
-      mime: { type: DataTypes.STRING(40), allowNull: false },
+      mime: { type: DataTypes.STRING(100), allowNull: false },
       originalName: { type: DataTypes.STRING(255), allowNull: false },
       extractedText: { type: DataTypes.TEXT, allowNull: true },
       extractionMethod: { type: DataTypes.STRING(12), allowNull: false },

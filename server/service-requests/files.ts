@@ -7,13 +7,14 @@ import { recordAudit } from "../audit/index.ts";
 import { Document } from "../credentials/index.ts";
 import type { FileStorage } from "../storage/index.ts";
 import { checkAttachment, sendAttachment, type UploadedFile } from "../work-orders/attachment-file.ts";
+import { sniffRequestAttachment } from "./attachment-type.ts";
 import { tellCompany, tellShop } from "./notify.ts";
 import { findInvitation, findRequest, loadRequestForSide, requestLink } from "./records.ts";
 import { insertReturningId, select, selectOne } from "./sql.ts";
 
 /**
  * Stores a checked file and its document row in one transaction, the same way as work-order attachments: the type is
- * read from the bytes, and the file moves into the store as the last step, taken out again if the commit fails.
+ * read from the bytes (photos, PDFs, .xlsx and .csv here), and the file moves into the store as the last step, taken out again if the commit fails.
  */
 async function storeWithRow<T>(
   user: Express.User,
@@ -21,7 +22,7 @@ async function storeWithRow<T>(
   storage: FileStorage,
   write: (documentId: number, transaction: Transaction) => Promise<T>,
 ): Promise<T> {
-  const attachment = await checkAttachment(file);
+  const attachment = await checkAttachment(file, sniffRequestAttachment);
   const hadFile = await storage.exists(attachment.sha256);
   let stored = false;
   try {

@@ -20,13 +20,16 @@ export interface CheckedAttachment {
   name: string;
 }
 
-export async function checkAttachment(file: UploadedFile): Promise<CheckedAttachment> {
+export async function checkAttachment(
+  file: UploadedFile,
+  sniff: (bytes: Buffer, originalName: string) => Promise<string> = sniffUpload,
+): Promise<CheckedAttachment> {
   if (file.size === 0)
     throw new AppError("invalid_input", "The file is empty", [{ path: "file", message: "0 bytes" }]);
   const bytes = await readFile(file.path);
   // The same three types and the same checks as credential documents: the type is read from the bytes, and the
   // file's name must agree with it.
-  const mime = await sniffUpload(bytes, file.originalname);
+  const mime = await sniff(bytes, file.originalname);
   return {
     tempPath: file.path,
     sha256: createHash("sha256").update(bytes).digest("hex"),

@@ -16,6 +16,8 @@ import { PageHeader } from "@/components/ui/page-header.tsx";
 import { SelectField } from "@/components/ui/select-field.tsx";
 import { TextAreaField } from "@/components/ui/text-area-field.tsx";
 import { TextField } from "@/components/ui/text-field.tsx";
+import { useRoster } from "@/features/roster/api/get-roster.ts";
+import type { RosterEntry } from "@/features/roster/api/roster-shapes.ts";
 import { requirementSetsQuery } from "@/features/requirement-sets/api/get-requirement-sets.ts";
 import { useSiteEquipment } from "@/features/sites/api/get-site-equipment.ts";
 import { sitesQuery } from "@/features/sites/api/get-sites.ts";
@@ -33,6 +35,16 @@ export async function loader() {
     queryClient.ensureQueryData(requirementSetsQuery()),
   ]);
   return null;
+}
+
+/** The service companies on the shop's roster, once each, whether listed as a company or through a technician. */
+function rosterCompanies(entries: RosterEntry[]) {
+  const byId = new Map<number, string>();
+  for (const e of entries) {
+    const id = e.serviceCompanyId ?? e.technicians[0]?.companyId;
+    if (id) byId.set(id, e.companyName);
+  }
+  return [...byId].map(([companyId, companyName]) => ({ companyId, companyName }));
 }
 
 const labels = { siteId: "Site", equipmentId: "Machine", problem: "What is wrong", windowEnd: "Last day" };
@@ -53,6 +65,8 @@ export function Component() {
     problem: "",
   });
   const [removed, setRemoved] = useState<number[]>([]);
+  const [added, setAdded] = useState<number[]>([]);
+  const roster = useRoster();
   const [files, setFiles] = useState<File[]>([]);
   const [preview, setPreview] = useState<RoutingPreviewDto | null>(null);
   const equipment = useSiteEquipment(form.siteId ? Number(form.siteId) : null);
@@ -73,12 +87,23 @@ export function Component() {
     ...(form.timing === "window" ? { windowStart: form.windowStart, windowEnd: form.windowEnd } : {}),
     problem: form.problem,
     removeCompanyIds: removed,
+    addCompanyIds: added,
   });
   const errors = fieldErrorsOf(raise.error ?? check.error);
 
-  function onPreview() {
-    check.mutate({ ...input(), removeCompanyIds: [] }, { onSuccess: (p) => setPreview(p) });
+  function onPreview(addCompanyIds = added) {
+    check.mutate({ ...input(), removeCompanyIds: [], addCompanyIds }, { onSuccess: (p) => setPreview(p) });
   }
+  function onAdd(companyId: number) {
+    const next = [...new Set([...added, companyId])];
+    setAdded(next);
+    setRemoved((r) => r.filter((id) => id !== companyId));
+    onPreview(next);
+  }
+  const shown = new Set(preview?.companies.map((c) => c.companyId));
+  const addable = rosterCompanies(roster.data ?? []).filter((c) => !shown.has(c.companyId));
+  const nameOf = (id: number) =>
+    rosterCompanies(roster.data ?? []).find((c) => c.companyId === id)?.companyName ?? `Company ${id}`;
   function onSubmit(e: FormEvent) {
     e.preventDefault();
     raise.mutate({ input: input(), files }, { onSuccess: (r) => navigate(hrefs.buyerServiceRequest(r.id)) });
@@ -180,12 +205,12 @@ export function Component() {
           name="file"
           type="file"
           multiple
-          accept="image/png,image/jpeg,application/pdf"
-          hint="PNG, JPEG or PDF, 10 MB each at most."
+          accept="image/png,image/jpeg,application/pdf,.xlsx,.csv"
+          hint="Photos (PNG, JPEG), PDFs or a maintenance log (.xlsx, .csv); 10 MB each at most, 2 MB for .csv."
           onChange={(e) => setFiles([...((e.target as HTMLInputElement).files ?? [])])}
         />
         <div className="space-y-2 rounded-md border border-ink-100 bg-ink-50 p-3">
-          <Button variant="secondary" onClick={onPreview} pending={check.isPending}>
+          <Button variant="secondary" onClick={() => onPreview()} pending={check.isPending}>
             Check who it reaches
           </Button>
           {preview && (
@@ -209,10 +234,31 @@ export function Component() {
                       {c.companyName} · {c.clearedTechnicians} cleared
                       {c.nearestMiles !== null && ` · ${c.nearestMiles} mi`}
                       {c.oemTrained && " · builder-trained"}
+                      {c.source === "buyer" && " · added from your roster"}
                     </label>
                   </li>
                 ))}
               </ul>
+              {preview.refused.length > 0 && (
+                <ul role="alert" data-testid="refused-companies" className="space-y-1 text-sm text-red-900">
+                  {preview.refused.map((r) => (
+                    <li key={r.companyId}>
+                      {nameOf(r.companyId)} cannot be invited: {r.reason}.
+                    </li>
+                  ))}
+                </ul>
+              )}
+              {addable.length > 0 && (
+                <SelectField
+                  label="Add a company from your roster"
+                  name="addCompany"
+                  value=""
+                  onChange={(e) => e.target.value && onAdd(Number(e.target.value))}
+                  placeholder="Choose a company"
+                  options={addable.map((c) => ({ value: String(c.companyId), label: c.companyName }))}
+                  hint="Only a company with a technician cleared today for your requirements can be invited."
+                />
+              )}
             </>
           )}
         </div>

@@ -72,7 +72,7 @@ export function RequestThread({ requestId, companyId, title, readOnly }: Props) 
           <input
             type="file"
             aria-label="Attach a file"
-            accept="image/png,image/jpeg,application/pdf"
+            accept="image/png,image/jpeg,application/pdf,.xlsx,.csv"
             onChange={(e) => setFile(e.target.files?.[0] ?? null)}
           />
           <Button type="submit" variant="secondary" pending={post.isPending}>
