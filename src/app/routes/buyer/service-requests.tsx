@@ -40,7 +40,7 @@ export function Component() {
             </Link>
             <span className="text-sm text-ink-700">
               {requestKindLabels[r.kind]} · {r.siteArea} · sent {formatDateTime(r.sentAt)} · {r.invited}{" "}
-              invited · {r.estimates} estimates
+              invited · {r.estimates} {r.estimates === 1 ? "estimate" : "estimates"}
             </span>
           </li>
         ))}
