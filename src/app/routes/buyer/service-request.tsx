@@ -4,6 +4,7 @@ import { Link, useParams, type LoaderFunctionArgs } from "react-router-dom";
 import { hrefs } from "@/config/paths.ts";
 import { Button } from "@/components/ui/button.tsx";
 import { CautionNote } from "@/components/ui/caution-note.tsx";
+import { SafetyCaution } from "@/components/ui/safety-caution.tsx";
 import { FormError } from "@/components/ui/form-error.tsx";
 import { PageHeader } from "@/components/ui/page-header.tsx";
 import { TextField } from "@/components/ui/text-field.tsx";
@@ -106,6 +107,7 @@ export function Component() {
           <RequestTimeline events={request.timeline} />
         </section>
       </div>
+      <SafetyCaution className="mt-6" />
       <CautionNote className="mt-6" />
     </>
   );

@@ -57,6 +57,12 @@ type Props = {
 };
 
 /** Sortable on wide screens; one card per estimate on a phone. */
+// The ranked score with no confirmed work behind it is only the prior: say so instead of showing a number.
+const ratingWords = (rating: { score: number; count: number }) =>
+  rating.count === 0
+    ? "No ratings yet"
+    : `${rating.score.toFixed(2)} (${rating.count} ${rating.count === 1 ? "rating" : "ratings"})`;
+
 export function ComparisonTable({ rows, canAccept, pending, onAccept }: Props) {
   const columns = [
     column.accessor("companyName", {
@@ -85,7 +91,7 @@ export function ComparisonTable({ rows, canAccept, pending, onAccept }: Props) {
     column.accessor((r) => r.rating.score, {
       id: "rating",
       header: "Rating",
-      cell: (c) => `${c.getValue().toFixed(2)} (${c.row.original.rating.count} reviews)`,
+      cell: (c) => ratingWords(c.row.original.rating),
     }),
     column.accessor((r) => r.medianResponseMinutes ?? Number.MAX_SAFE_INTEGER, {
       id: "response",
@@ -98,8 +104,12 @@ export function ComparisonTable({ rows, canAccept, pending, onAccept }: Props) {
       header: "Decide",
       cell: (c) =>
         canAccept ? (
-          <Button pending={pending} onClick={() => onAccept(c.row.original.estimateId)}>
-            Accept {c.row.original.companyName}
+          <Button
+            pending={pending}
+            aria-label={`Accept ${c.row.original.companyName}`}
+            onClick={() => onAccept(c.row.original.estimateId)}
+          >
+            Accept
           </Button>
         ) : null,
     }),
@@ -127,8 +137,7 @@ export function ComparisonTable({ rows, canAccept, pending, onAccept }: Props) {
             <TotalParts row={row} />
             <div className="text-sm">
               {row.distanceMiles} mi · arrives {formatDateTime(row.earliestArrival)} · responds in{" "}
-              {responseWords(row.medianResponseMinutes)} · rating {row.rating.score.toFixed(2)} (
-              {row.rating.count})
+              {responseWords(row.medianResponseMinutes)} · {ratingWords(row.rating)}
             </div>
             {canAccept && (
               <Button pending={pending} onClick={() => onAccept(row.estimateId)}>
