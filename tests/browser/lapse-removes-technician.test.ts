@@ -47,7 +47,7 @@ async function rows<T extends object>(sql: string, bind: unknown[] = []): Promis
 }
 
 async function signedInPage(email: string): Promise<Page> {
-  // AxeBuilder needs a page from browser.newContext(), not browser.newPage() (STACK.md gotcha 11).
+  // AxeBuilder needs a page from browser.newContext(), not browser.newPage(): it throws "Please use browser.newContext()" otherwise.
   const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
   contexts.push(context);
   const page = await context.newPage();
