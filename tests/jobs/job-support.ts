@@ -1,3 +1,4 @@
+import { spawn } from "node:child_process";
 import { QueryTypes } from "sequelize";
 import { db } from "../../server/db/sequelize.ts";
 
@@ -34,4 +35,22 @@ export async function deliverAll(catcher: {
     const report = await catcher.deliver(new Date(Date.now() + 1_000));
     if (report.sent + report.retried + report.failed === 0) return;
   }
+}
+
+/** `npm run job:<name>` as its own process, exactly what a second server instance or an operator would run. */
+export function runJobCli(
+  args: string[],
+  env: { DATABASE_URL: string | undefined; SMTP_URL: string | undefined },
+): Promise<{ code: number | null; out: string }> {
+  return new Promise((resolve, reject) => {
+    const child = spawn(process.execPath, ["--import", "tsx", "jobs/cli.ts", ...args], {
+      env: { ...process.env, ...env, LOG_LEVEL: "silent" },
+      stdio: ["ignore", "pipe", "pipe"],
+    });
+    let out = "";
+    child.stdout.on("data", (d: Buffer) => (out += d.toString()));
+    child.stderr.on("data", (d: Buffer) => (out += d.toString()));
+    child.once("error", reject);
+    child.once("close", (code) => resolve({ code, out }));
+  });
 }

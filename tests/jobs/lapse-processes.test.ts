@@ -7,6 +7,7 @@ import {
   buildCredentialRow,
   trainingFields,
 } from "../fixtures/build-credential-row.ts";
+import { runJobCli } from "./job-support.ts";
 
 let t: TestApp;
 let catcher: Awaited<ReturnType<typeof startTestMailCatcher>>;
@@ -19,25 +20,8 @@ afterAll(async () => {
   await t.close();
 });
 
-/** `npm run job:lapse` as its own process: exactly what a second server instance or an operator would run. */
-function runJobProcess(args: string[]): Promise<{ code: number | null; out: string }> {
-  return new Promise((resolve, reject) => {
-    const child = spawn(process.execPath, ["--import", "tsx", "jobs/cli.ts", "lapse", ...args], {
-      env: {
-        ...process.env,
-        DATABASE_URL: t.config.DATABASE_URL,
-        SMTP_URL: catcher.url,
-        LOG_LEVEL: "silent",
-      },
-      stdio: ["ignore", "pipe", "pipe"],
-    });
-    let out = "";
-    child.stdout.on("data", (d: Buffer) => (out += d.toString()));
-    child.stderr.on("data", (d: Buffer) => (out += d.toString()));
-    child.once("error", reject);
-    child.once("close", (code) => resolve({ code, out }));
-  });
-}
+const runJobProcess = (args: string[]) =>
+  runJobCli(["lapse", ...args], { DATABASE_URL: t.config.DATABASE_URL, SMTP_URL: catcher.url });
 
 describe("lapse job in two processes at once", () => {
   it("sends each notice once when two processes run the job and deliver the outbox at the same time", async () => {

@@ -1,5 +1,4 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { spawn } from "node:child_process";
 import { buildTestApp, sequelize, type TestApp } from "../support/test-app.ts";
 import { startTestMailCatcher } from "../support/mail-catcher.ts";
 import { signedInAgent } from "../support/build-provider.ts";
@@ -12,7 +11,7 @@ import {
 } from "../fixtures/build-service-request-world.ts";
 import { addBusinessHours } from "../../shared/service-requests/business-hours.ts";
 import { runServiceRequestFollowUp } from "../../jobs/service-request-follow-up.ts";
-import { deliverAll, rows, HOUR } from "./job-support.ts";
+import { deliverAll, rows, runJobCli, HOUR } from "./job-support.ts";
 
 let t: TestApp;
 let catcher: Awaited<ReturnType<typeof startTestMailCatcher>>;
@@ -57,28 +56,11 @@ async function requestSent(hoursAgo: number, machineState: "down" | "planned" = 
 const reminders = (email: string, requestId: number) =>
   catcher.to(email).filter((m) => m.subject.startsWith(`Reminder: service request #${requestId} `));
 
-function runJobProcess(asOf: Date): Promise<{ code: number | null; out: string }> {
-  return new Promise((resolve, reject) => {
-    const child = spawn(
-      process.execPath,
-      ["--import", "tsx", "jobs/cli.ts", "follow-up", "--as-of", asOf.toISOString()],
-      {
-        env: {
-          ...process.env,
-          DATABASE_URL: t.config.DATABASE_URL,
-          SMTP_URL: catcher.url,
-          LOG_LEVEL: "silent",
-        },
-        stdio: ["ignore", "pipe", "pipe"],
-      },
-    );
-    let out = "";
-    child.stdout.on("data", (d: Buffer) => (out += d.toString()));
-    child.stderr.on("data", (d: Buffer) => (out += d.toString()));
-    child.once("error", reject);
-    child.once("close", (code) => resolve({ code, out }));
+const runJobProcess = (asOf: Date) =>
+  runJobCli(["follow-up", "--as-of", asOf.toISOString()], {
+    DATABASE_URL: t.config.DATABASE_URL,
+    SMTP_URL: catcher.url,
   });
-}
 
 describe("service-request follow-up job", () => {
   it("reminds an invited company once after 3 business hours without an estimate, however often it runs", async () => {

@@ -1,6 +1,21 @@
 import { statusMarks, type StatusMeaning } from "@shared/status/status-marks.ts";
 import { StatusMark } from "./status-mark.tsx";
 
+/** Every status a technician's standing page shows: the standing, each requirement line and each card's state. */
+export const technicianPageStatuses: readonly StatusMeaning[] = [
+  "cleared",
+  "lapsing",
+  "not_cleared",
+  "not_checked",
+  "met",
+  "unmet",
+  "submitted",
+  "returned",
+  "verified",
+  "superseded",
+  "lapsed",
+];
+
 /** Explains the shapes of the statuses on this page, so nobody has to learn them from colour or guess. */
 export function StatusKey({
   statuses,

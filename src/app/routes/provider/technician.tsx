@@ -7,7 +7,7 @@ import { buttonStyles } from "@/components/ui/button-styles.ts";
 import { EmptyState } from "@/components/ui/empty-state.tsx";
 import { PageHeader } from "@/components/ui/page-header.tsx";
 import { SafetyCaution } from "@/components/ui/safety-caution.tsx";
-import { StatusKey } from "@/components/ui/status-key.tsx";
+import { StatusKey, technicianPageStatuses } from "@/components/ui/status-key.tsx";
 import type { Credential } from "@/features/credentials/api/credential-shapes.ts";
 import { credentialsQuery } from "@/features/credentials/api/get-credentials.ts";
 import { CredentialsTable } from "@/features/credentials/components/credentials-table.tsx";
@@ -119,21 +119,7 @@ export function Component() {
               }
             />
           </section>
-          <StatusKey
-            statuses={[
-              "cleared",
-              "lapsing",
-              "not_cleared",
-              "not_checked",
-              "met",
-              "unmet",
-              "submitted",
-              "returned",
-              "verified",
-              "superseded",
-              "lapsed",
-            ]}
-          />
+          <StatusKey statuses={technicianPageStatuses} />
         </div>
         <aside className="space-y-6">
           <section aria-labelledby="details-heading" className="rounded-lg border border-ink-100 bg-white">
