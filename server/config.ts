@@ -11,6 +11,12 @@ const configSchema = z
     PORT: z.coerce.number().int().min(0).max(65535).default(3000),
     PUBLIC_URL: z.url().optional(),
     DATABASE_URL: z.string().optional(),
+    // A streaming replica for the read-heavy pages; a session that wrote reads from the primary for a while after.
+    DATABASE_REPLICA_URL: z
+      .string()
+      .regex(/^postgres(ql)?:\/\//, "must be a postgres:// or postgresql:// address")
+      .optional(),
+    READ_YOUR_WRITES_SECONDS: z.coerce.number().int().min(0).max(3600).default(10),
     PG_PORT: z.coerce.number().int().min(1024).max(65535).default(54329),
     SMTP_URL: z.string().optional(),
     SMTP_CATCHER_PORT: z.coerce.number().int().min(1024).max(65535).default(2525),

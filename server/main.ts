@@ -3,6 +3,7 @@ import pg from "pg";
 import type { Config } from "./config.ts";
 import { configureLog, log } from "./log.ts";
 import { connectDatabase } from "./db/sequelize.ts";
+import { closeReplica, connectReplica } from "./db/replica.ts";
 import { initModels } from "./db/associations.ts";
 import { migrate } from "./db/migrate.ts";
 import { createApp } from "./app.ts";
@@ -35,6 +36,7 @@ export async function startServer(
   const sequelize = connectDatabase(config.DATABASE_URL);
   initModels(sequelize);
   await migrate(sequelize);
+  if (config.DATABASE_REPLICA_URL) connectReplica(config.DATABASE_REPLICA_URL);
   const sessionPool = new pg.Pool({
     connectionString: config.DATABASE_URL,
     max: 5,
@@ -86,6 +88,7 @@ export async function startServer(
       await new Promise<void>((resolve) => server.close(() => resolve()));
       mailer?.close();
       await sessionPool.end();
+      await closeReplica();
       await sequelize.close();
     },
   };

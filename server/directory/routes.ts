@@ -7,13 +7,20 @@ import { findDirectoryTechnician } from "./technician-profile.ts";
 
 export const directoryRoutes = createRoutes("/api/directory");
 
-directoryRoutes.get("", { allow: canSearchDirectory, query: directoryQuerySchema }, (req, _res, { query }) =>
-  searchDirectory(req.user!, query),
+directoryRoutes.get(
+  "",
+  { allow: canSearchDirectory, query: directoryQuerySchema, reads: "replica" },
+  (req, _res, { query }) => searchDirectory(req.user!, query),
 );
 
 directoryRoutes.get(
   "/technicians/:technicianId",
-  { allow: canViewListedTechnician, params: technicianParamsSchema, query: technicianProfileQuerySchema },
+  {
+    allow: canViewListedTechnician,
+    params: technicianParamsSchema,
+    query: technicianProfileQuerySchema,
+    reads: "replica",
+  },
   (req, _res, { params, query }) =>
     findDirectoryTechnician(req.user!, params.technicianId, query.onSiteHours),
 );

@@ -1,7 +1,8 @@
 import { QueryTypes } from "sequelize";
 import { createRoutes } from "../http/route.ts";
 import { anyone } from "../http/policy.ts";
-import { db } from "../db/sequelize.ts";
+import { primaryDb } from "../db/sequelize.ts";
+import { replicaHealth } from "../db/replica.ts";
 import type { Readiness } from "./readiness.ts";
 
 export const healthRoutes = createRoutes("/api");
@@ -12,7 +13,7 @@ async function databaseUp(): Promise<boolean> {
   let timer: NodeJS.Timeout | undefined;
   try {
     return await Promise.race([
-      db()
+      primaryDb()
         .query("SELECT 1", { type: QueryTypes.SELECT })
         .then(() => true),
       new Promise<boolean>((resolve) => (timer = setTimeout(() => resolve(false), DATABASE_CHECK_MS))),
@@ -24,13 +25,18 @@ async function databaseUp(): Promise<boolean> {
   }
 }
 
-// Readiness: a load balancer sends traffic only while this answers 200 (started, and the database answers).
+// Readiness: a load balancer sends traffic only while this answers 200 (started, and the primary database answers).
 for (const path of ["/health", "/health/ready"]) {
   healthRoutes.get(path, { allow: anyone }, async (req, res) => {
     const starting = (req.app.locals.readiness as Readiness | undefined)?.starting ?? [];
-    const database = (await databaseUp()) ? "up" : "down";
+    const [primaryUp, replica] = await Promise.all([databaseUp(), replicaHealth(DATABASE_CHECK_MS)]);
+    const database = primaryUp ? "up" : "down";
     const status = starting.length ? "starting" : database === "up" ? "ok" : "degraded";
-    const body = starting.length ? { status, database, starting } : { status, database };
+    // A replica that is down is reported but never fails readiness: its reads fall back to the primary.
+    const replicaPart = replica.replica === "none" ? {} : replica;
+    const body = starting.length
+      ? { status, database, ...replicaPart, starting }
+      : { status, database, ...replicaPart };
     if (status !== "ok") {
       res.status(503).json(body);
       return;

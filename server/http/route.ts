@@ -4,6 +4,8 @@ import type { z } from "zod";
 import { AppError } from "./app-error.ts";
 import { zodToAppError } from "./error-handler.ts";
 import type { Policy, SignedInUser } from "./policy.ts";
+import { noteWrite, readFromReplica, wroteRecently } from "../db/replica.ts";
+import { appConfig } from "./app-locals.ts";
 
 type Schemas = { params?: z.ZodType; query?: z.ZodType; body?: z.ZodType };
 type Maybe = z.ZodType | undefined;
@@ -22,6 +24,11 @@ export interface RouteOptions<P extends Maybe, Q extends Maybe, B extends Maybe>
   params?: P;
   query?: Q;
   body?: B;
+  /**
+   * "replica": a read-only page that tolerates a little lag may be answered by the streaming replica, unless this
+   * session wrote within READ_YOUR_WRITES_SECONDS. The handler must only read, and only through db().
+   */
+  reads?: "replica";
 }
 
 type Handler<P extends Maybe, Q extends Maybe, B extends Maybe> = (
@@ -82,6 +89,7 @@ export function createRoutes(prefix: string) {
         if (!(await options.allow.owns(user, params)))
           throw new AppError("not_found", "That record was not found");
       }
+      noteWrite(req);
       next();
     };
     const run = async (req: Request, res: Response, next: NextFunction) => {
@@ -90,7 +98,11 @@ export function createRoutes(prefix: string) {
         query: parsePart(options.query, req.query, "query"),
         body: parsePart(options.body, req.body, "body"),
       } as RouteInput<P, Q, B>;
-      const result = await handler(req, res, input);
+      const onReplica =
+        options.reads === "replica" && !wroteRecently(req, appConfig(req).READ_YOUR_WRITES_SECONDS);
+      const result = onReplica
+        ? await readFromReplica(async () => handler(req, res, input))
+        : await handler(req, res, input);
       if (!res.headersSent) {
         if (result === undefined) res.status(204).end();
         else res.json(result);
