@@ -47,7 +47,11 @@ export function Component() {
       )}
       <div className="space-y-8">
         <SafetyCaution />
-        <StandingSection technicianId={technicianId} loadingLabel="Loading your standing" />
+        <StandingSection
+          technicianId={technicianId}
+          loadingLabel="Loading your standing"
+          viewer="technician"
+        />
         <section aria-labelledby="cards-heading">
           <h2 id="cards-heading" className="mb-3 text-lg font-semibold text-ink-900">
             My cards and credentials

@@ -4,7 +4,8 @@ import { buttonStyles } from "@/components/ui/button-styles.ts";
 import { DataTable, dataTableColumns } from "@/components/ui/data-table.tsx";
 import { EmptyState } from "@/components/ui/empty-state.tsx";
 import { StatusBadge } from "@/components/ui/status-badge.tsx";
-import { formatInstantDate } from "@/lib/format-date.ts";
+import { credentialTypeByCode } from "@shared/credentials/catalogue.ts";
+import { lapseWords, readerTimeZone } from "@shared/standing/lapse-words.ts";
 import type { Credential } from "../api/credential-shapes.ts";
 import { documentUrls } from "./document-urls.ts";
 
@@ -57,7 +58,13 @@ function credentialColumns(correctionHref: (credential: Credential) => string, s
       header: "Lapses",
       sortFn: "text",
       cell: (info) =>
-        info.row.original.lapsesAt ? formatInstantDate(info.row.original.lapsesAt) : "No expiry",
+        info.row.original.lapsesAt
+          ? lapseWords(
+              info.row.original.lapsesAt,
+              credentialTypeByCode.get(info.row.original.typeCode)?.fieldSet,
+              readerTimeZone(),
+            )
+          : "No expiry",
     }),
     column.display({
       id: "note",

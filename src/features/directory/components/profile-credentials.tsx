@@ -1,4 +1,6 @@
-import { formatInstantDate, formatIsoDate } from "@/lib/format-date.ts";
+import { credentialTypeByCode } from "@shared/credentials/catalogue.ts";
+import { lapseWords, readerTimeZone } from "@shared/standing/lapse-words.ts";
+import { formatIsoDate } from "@/lib/format-date.ts";
 import { formatDollars } from "@/lib/format-money.ts";
 import type { ProfileCredential } from "../api/directory-shapes.ts";
 
@@ -56,7 +58,9 @@ export function ProfileCredentials({ credentials }: { credentials: readonly Prof
           <p className="font-semibold text-ink-900">{c.typeName}</p>
           <p className="text-sm text-ink-700">
             {c.holder === "company" ? "Held by the company" : "Held by the technician"} ·{" "}
-            {c.lapsesAt ? `lapses ${formatInstantDate(c.lapsesAt)}` : "does not lapse"}
+            {c.lapsesAt
+              ? lapseWords(c.lapsesAt, credentialTypeByCode.get(c.typeCode)?.fieldSet, readerTimeZone())
+              : "does not lapse"}
           </p>
           <dl className="mt-2 grid grid-cols-[minmax(0,3fr)_minmax(0,2fr)] gap-x-3 gap-y-0.5 text-sm">
             {factsOf(c.fields).map(([term, value]) => (

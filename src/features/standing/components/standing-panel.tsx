@@ -1,5 +1,8 @@
 import { EmptyState } from "@/components/ui/empty-state.tsx";
 import { StatusBadge } from "@/components/ui/status-badge.tsx";
+import { credentialTypeByCode } from "@shared/credentials/catalogue.ts";
+import { lapseWords, readerTimeZone } from "@shared/standing/lapse-words.ts";
+import { onlyCompanyCanRenew } from "@shared/standing/who-renews.ts";
 import { daysUntil, formatInstantDate } from "@/lib/format-date.ts";
 import type {
   RequirementResultView,
@@ -28,7 +31,39 @@ function OverallBadge({ result, now }: { result: StandingAgainstView; now: Date 
   return <StatusBadge status={result.standing === "lapsing" ? "cleared" : result.standing} />;
 }
 
-function RequirementRow({ result, now }: { result: RequirementResultView; now: Date }) {
+/** Who is looking: a technician cannot renew what the company holds, so the line says who acts. */
+export type StandingViewer = "technician" | "office";
+
+/** The catalogue types a line accepts (the engine sends the whole requirement; older rows may lack them). */
+function typesOf(result: RequirementResultView) {
+  const codes = (result.requirement as { typeCodes?: unknown }).typeCodes;
+  return Array.isArray(codes)
+    ? codes.flatMap((code) => {
+        const type = typeof code === "string" ? credentialTypeByCode.get(code) : undefined;
+        return type ? [type] : [];
+      })
+    : [];
+}
+
+function RequirementRow({
+  result,
+  now,
+  viewer,
+}: {
+  result: RequirementResultView;
+  now: Date;
+  viewer: StandingViewer;
+}) {
+  const whoActs =
+    viewer === "technician" &&
+    result.status !== "met" &&
+    onlyCompanyCanRenew((result.requirement as { typeCodes?: unknown[] }).typeCodes) ? (
+      <span className="mt-1 block font-medium text-ink-900">
+        Only your office can renew this: it is the company&apos;s document, so ask them to upload the renewed
+        one.
+      </span>
+    ) : null;
+  const fieldSet = typesOf(result)[0]?.fieldSet;
   const badge =
     result.status === "met" ? (
       <StatusBadge status="cleared" />
@@ -46,12 +81,14 @@ function RequirementRow({ result, now }: { result: RequirementResultView; now: D
           <>
             {result.reason && <span className="font-semibold">{reasonWords[result.reason]}: </span>}
             {result.detail}
+            {whoActs}
           </>
         ) : result.lapsesAt ? (
           // The engine's sentence names credential ids and ISO dates; people get the date in words.
           <span className="text-ink-700">
             {result.metBy && <span className="text-ink-900">Met by {result.metBy}. </span>}
-            Counts until {formatInstantDate(result.lapsesAt)}
+            Counts: {lapseWords(result.lapsesAt, fieldSet, readerTimeZone())}
+            {whoActs}
           </span>
         ) : (
           <span className="text-ink-700">
@@ -63,7 +100,17 @@ function RequirementRow({ result, now }: { result: RequirementResultView; now: D
   );
 }
 
-function StandingBlock({ title, result, now }: { title: string; result: StandingAgainstView; now: Date }) {
+function StandingBlock({
+  title,
+  result,
+  now,
+  viewer,
+}: {
+  title: string;
+  result: StandingAgainstView;
+  now: Date;
+  viewer: StandingViewer;
+}) {
   return (
     <section aria-label={title} className="rounded-lg border border-ink-100 bg-white px-4 py-3">
       <div className="flex flex-wrap items-center gap-3 border-b border-ink-100 pb-2">
@@ -77,7 +124,12 @@ function StandingBlock({ title, result, now }: { title: string; result: Standing
       </div>
       <ul className="divide-y divide-ink-100">
         {result.results.map((r, i) => (
-          <RequirementRow key={r.requirement.id ?? `${r.requirement.label}-${i}`} result={r} now={now} />
+          <RequirementRow
+            key={r.requirement.id ?? `${r.requirement.label}-${i}`}
+            result={r}
+            now={now}
+            viewer={viewer}
+          />
         ))}
       </ul>
     </section>
@@ -85,7 +137,15 @@ function StandingBlock({ title, result, now }: { title: string; result: Standing
 }
 
 /** Each requirement, whether it is met, and why not; the baseline first, then any site's requirement sets. */
-export function StandingPanel({ standing, now }: { standing: TechnicianStanding | null; now: Date }) {
+export function StandingPanel({
+  standing,
+  now,
+  viewer = "office",
+}: {
+  standing: TechnicianStanding | null;
+  now: Date;
+  viewer?: StandingViewer;
+}) {
   if (!standing || (!standing.baseline && standing.requirementSets.length === 0)) {
     return (
       <EmptyState title="Standing is not available yet">
@@ -95,9 +155,11 @@ export function StandingPanel({ standing, now }: { standing: TechnicianStanding 
   }
   return (
     <div className="space-y-4">
-      {standing.baseline && <StandingBlock title="Platform baseline" result={standing.baseline} now={now} />}
+      {standing.baseline && (
+        <StandingBlock title="Platform baseline" result={standing.baseline} now={now} viewer={viewer} />
+      )}
       {standing.requirementSets.map((set) => (
-        <StandingBlock key={set.requirementSetId} title={set.name} result={set} now={now} />
+        <StandingBlock key={set.requirementSetId} title={set.name} result={set} now={now} viewer={viewer} />
       ))}
     </div>
   );

@@ -2,12 +2,12 @@ import { useState } from "react";
 import { FormError } from "@/components/ui/form-error.tsx";
 import { Spinner } from "@/components/ui/spinner.tsx";
 import { useTechnicianStanding } from "../api/get-technician-standing.ts";
-import { StandingPanel } from "./standing-panel.tsx";
+import { StandingPanel, type StandingViewer } from "./standing-panel.tsx";
 
-type StandingSectionProps = { technicianId: number; loadingLabel: string };
+type StandingSectionProps = { technicianId: number; loadingLabel: string; viewer?: StandingViewer };
 
 /** One technician's standing under its own heading; it loads after the page, so a slow answer never holds the page up. */
-export function StandingSection({ technicianId, loadingLabel }: StandingSectionProps) {
+export function StandingSection({ technicianId, loadingLabel, viewer = "office" }: StandingSectionProps) {
   const standing = useTechnicianStanding(technicianId);
   const [now] = useState(() => new Date());
   return (
@@ -20,7 +20,7 @@ export function StandingSection({ technicianId, loadingLabel }: StandingSectionP
       ) : standing.isError ? (
         <FormError error={standing.error} />
       ) : (
-        <StandingPanel standing={standing.data ?? null} now={now} />
+        <StandingPanel standing={standing.data ?? null} now={now} viewer={viewer} />
       )}
     </section>
   );
