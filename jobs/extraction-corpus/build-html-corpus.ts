@@ -45,6 +45,26 @@ const CERT_WORDS = [
     ai: "Additional insured",
     wos: "Waiver of subrogation",
   },
+  // Insurers listed once by letter on lines of their own; each coverage names only its letter.
+  {
+    insurer: "Insurer",
+    policy: "Pol #",
+    eff: "Eff date",
+    exp: "Exp date",
+    ai: "Additional insured",
+    wos: "Waiver of subrogation",
+    byLetter: true,
+  },
+  // Limits in a "(000s omitted)" table, short labels and marks as bare letters.
+  {
+    insurer: "Company affording coverage",
+    policy: "Policy no",
+    eff: "Policy effective",
+    exp: "Policy expires",
+    ai: "AI",
+    wos: "WOS",
+    thousands: true,
+  },
 ];
 const TITLES: Record<CoverageCode, string> = {
   general_liability: "Commercial General Liability",
@@ -77,6 +97,16 @@ const CARD_WORDS = [
     number: "Card #",
     trainer: "Evaluated by",
   },
+  // Each label on a line of its own with its value on the line below.
+  {
+    name: "Participant",
+    course: "Training",
+    issue: "Date of evaluation",
+    expiry: "Re-evaluation due",
+    number: "Certificate No.",
+    trainer: "Instructor",
+    below: true,
+  },
 ];
 /** Titles long enough to wrap on a wallet card, alongside the shared short ones. */
 const LONG_COURSES = [
@@ -87,8 +117,16 @@ const LONG_COURSES = [
 const escape = (text: string) =>
   text.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;");
 
-function money(random: SeededRandom, amount: number): string {
-  return random.bool() ? `$${amount.toLocaleString("en-US")}` : `$ ${amount.toLocaleString("en-US")}`;
+function money(random: SeededRandom, amount: number, thousands = false): string {
+  if (thousands) return (amount / 1000).toLocaleString("en-US");
+  const millions = amount / 1_000_000;
+  const styles = [
+    `$${amount.toLocaleString("en-US")}`,
+    `$ ${amount.toLocaleString("en-US")}`,
+    amount.toLocaleString("en-US"),
+    ...(Number.isInteger(millions) ? [`$${millions}M`, `${millions}MM`] : []),
+  ];
+  return random.pick(styles);
 }
 
 const BASE_CSS = `
@@ -128,13 +166,17 @@ function certificateHtml(seed: number, layout: (typeof CERT_LAYOUTS)[number], wo
   // Half of the certificates push the later coverages onto page 2 under a "continued" heading.
   const breakAfter =
     truth.coverages.length > 1 && random.bool() ? random.int(1, truth.coverages.length - 1) : -1;
+  const letters = truth.coverages.map((_, index) => "ABCDEF"[index]!);
   const blocks = truth.coverages.map((c, index) => {
     const rows: Array<[string, string]> = [
-      [words.insurer, `${escape(c.insurerName)}, NAIC ${c.naic}`],
+      [words.insurer, "byLetter" in words ? letters[index]! : `${escape(c.insurerName)}, NAIC ${c.naic}`],
       [words.policy, escape(c.policyNumber)],
       [words.eff, fmt(c.effectiveDate)],
       [words.exp, fmt(c.expirationDate)],
-      ...Object.entries(c.limits).map(([k, v]): [string, string] => [LIMIT_LABELS[k]!, money(random, v)]),
+      ...Object.entries(c.limits).map(([k, v]): [string, string] => [
+        LIMIT_LABELS[k]!,
+        money(random, v, "thousands" in words),
+      ]),
       [words.ai, mark(c.additionalInsured)],
       [words.wos, mark(c.waiverOfSubrogation)],
     ];
@@ -146,13 +188,24 @@ function certificateHtml(seed: number, layout: (typeof CERT_LAYOUTS)[number], wo
           : rows.map(([l, v]) => `<div class="pair"><span>${l}</span><span>${v}</span></div>`).join("");
     const continued =
       index === breakAfter ? `<div class="page-break"></div><h1>Coverages (continued)</h1>` : "";
-    return `${continued}<section><h2>${TITLES[c.code]}</h2>${body}</section>`;
+    const omitted = "thousands" in words ? `<div class="line">Limits (000s omitted)</div>` : "";
+    return `${continued}<section><h2>${TITLES[c.code]}</h2>${omitted}${body}</section>`;
   });
+  const insurerLines =
+    "byLetter" in words
+      ? truth.coverages
+          .map(
+            (c, i) =>
+              `<div class="line">Insurer ${letters[i]}: ${escape(c.insurerName)} NAIC ${c.naic}</div>`,
+          )
+          .join("")
+      : "";
   const street = `${random.int(100, 9999)} ${random.pick(["Gantry", "Collet", "Tailstock"])} Avenue`;
   const html = `<!doctype html><html><head><style>${BASE_CSS.replace("FONT", random.pick(["Arial, sans-serif", "Georgia, serif", "'DejaVu Sans', sans-serif"])).replace("SIZE", String(random.pick([9, 10])))}</style></head><body>
     <h1>Certificate of Liability Insurance</h1>
     <div class="line">Insured</div><div class="line">${escape(truth.namedInsured)}</div>
     <div class="line">${street}</div><div class="line">Kestrel Falls, IN 4${random.int(6000, 7999)}</div>
+    ${insurerLines}
     ${layout === "two_column" ? `<div class="cols">${blocks.join("")}</div>` : blocks.join("")}
     <h2>Description of operations</h2><div class="line">Repair and calibration of CNC machine tools at the holder's plant.</div>
     <h2>Certificate holder</h2><div class="line">${escape(truth.certificateHolder)}</div>
@@ -186,15 +239,17 @@ function cardHtml(seed: number, layout: (typeof CARD_LAYOUTS)[number], wording: 
     [words.trainer, escape(truth.trainer)],
   ];
   const body =
-    layout === "wallet"
-      ? fields.map(([l, v]) => `<div class="line"><b>${l}:</b> ${v}</div>`).join("")
-      : layout === "grid"
-        ? fields.map(([l, v]) => `<div class="pair"><span>${l}</span><span>${v}</span></div>`).join("")
-        : `<p>This certifies that ${escape(truth.holderName)} has completed ${escape(truth.course)}.</p>` +
-          fields
-            .slice(2)
-            .map(([l, v]) => `<div class="line">${l} ${v}</div>`)
-            .join("");
+    layout === "wallet" && "below" in words
+      ? fields.map(([l, v]) => `<div class="line"><b>${l}</b></div><div class="line">${v}</div>`).join("")
+      : layout === "wallet"
+        ? fields.map(([l, v]) => `<div class="line"><b>${l}:</b> ${v}</div>`).join("")
+        : layout === "grid"
+          ? fields.map(([l, v]) => `<div class="pair"><span>${l}</span><span>${v}</span></div>`).join("")
+          : `<p>This certifies that ${escape(truth.holderName)} has completed ${escape(truth.course)}.</p>` +
+            fields
+              .slice(2)
+              .map(([l, v]) => `<div class="line">${l} ${v}</div>`)
+              .join("");
   const html = `<!doctype html><html><head><style>${BASE_CSS.replace("FONT", random.pick(["Arial, sans-serif", "Georgia, serif"])).replace("SIZE", "8")} body { padding: 10pt 12pt; }</style></head><body>
     <h1>${random.pick(["Training Completion Card", "Qualified Operator"])}</h1>${body}</body></html>`;
   return { html, truth, size: { width: "3.5in", height: "2.6in" } };

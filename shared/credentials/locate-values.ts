@@ -34,14 +34,15 @@ const CELL_GAP_EMS = 1.5;
  */
 export function layoutText(items: readonly PositionedText[]): string {
   const order = [...items].sort((a, b) => a.page - b.page || a.y - b.y || a.x - b.x);
-  const lines: PositionedText[][] = [];
+  const baselines: PositionedText[][] = [];
   for (const item of order) {
-    const last = lines[lines.length - 1];
+    const last = baselines[baselines.length - 1];
     const head = last?.[0];
     if (last && head && head.page === item.page && Math.abs(item.y - head.y) < Math.max(head.h, item.h) / 2)
       last.push(item);
-    else lines.push([item]);
+    else baselines.push([item]);
   }
+  const lines = splitColumns(baselines);
   const out: string[] = [];
   let page = order[0]?.page ?? 1;
   for (const line of lines) {
@@ -62,6 +63,70 @@ export function layoutText(items: readonly PositionedText[]): string {
     out.push(text.trimEnd());
   }
   return out.join("\n");
+}
+
+// A column must be repeated on at least this many lines before a page is read as side-by-side columns.
+const MIN_COLUMN_ROWS = 3;
+
+const firstWord = (text: string) => /^[A-Za-z][A-Za-z.'-]{2,}/.exec(text.trim())?.[0]?.toLowerCase();
+
+function cellStarts(line: readonly PositionedText[]): PositionedText[] {
+  const cells = [...line].sort((a, b) => a.x - b.x);
+  const starts: PositionedText[] = [];
+  let right = -1;
+  for (const item of cells) {
+    const em = item.em ?? item.h / 1.2;
+    if (right < 0 || item.x - right > CELL_GAP_EMS * em) starts.push(item);
+    right = Math.max(right, item.x + item.w);
+  }
+  return starts;
+}
+
+/**
+ * Blocks printed side by side (two coverages in two columns) share baselines, so reading each baseline across the page
+ * would join the left block's values to the right block's labels. A gutter is taken to exist where the same label
+ * word opens a line and opens a cell further right on several lines; over the run of lines no item crosses it, the
+ * left column is read first, then the right. A table of labels and values never repeats its label word across a row,
+ * so it stays one column.
+ */
+function splitColumns(lines: PositionedText[][]): PositionedText[][] {
+  const votes = new Map<string, number>();
+  for (const line of lines) {
+    const starts = cellStarts(line);
+    const opening = firstWord(starts[0]?.text ?? "");
+    if (!opening) continue;
+    for (const cell of starts.slice(1))
+      if (cell.x > 0.3 && firstWord(cell.text) === opening) {
+        const key = `${cell.page}:${cell.x.toFixed(2)}`;
+        votes.set(key, (votes.get(key) ?? 0) + 1);
+      }
+  }
+  const gutters = new Map<number, number>();
+  for (const [key, n] of votes) {
+    const [page, x] = key.split(":").map(Number) as [number, number];
+    if (n >= MIN_COLUMN_ROWS && x < (gutters.get(page) ?? Infinity)) gutters.set(page, x - 0.005);
+  }
+  if (gutters.size === 0) return lines;
+  const out: PositionedText[][] = [];
+  let index = 0;
+  while (index < lines.length) {
+    const line = lines[index]!;
+    const gutter = gutters.get(line[0]!.page);
+    const crosses = (l: PositionedText[]) =>
+      gutter === undefined || l.some((item) => item.x < gutter && item.x + item.w > gutter);
+    if (crosses(line)) {
+      out.push(line);
+      index += 1;
+      continue;
+    }
+    const run: PositionedText[][] = [];
+    while (index < lines.length && lines[index]![0]!.page === line[0]!.page && !crosses(lines[index]!))
+      run.push(lines[(index += 1) - 1]!);
+    const left = run.map((l) => l.filter((item) => item.x < gutter!)).filter((l) => l.length > 0);
+    const right = run.map((l) => l.filter((item) => item.x >= gutter!)).filter((l) => l.length > 0);
+    out.push(...left, ...right);
+  }
+  return out;
 }
 
 interface Line {

@@ -18,6 +18,8 @@ afterAll(async () => {
 
 const office = demoSignIns.find((s) => s.email === "office@kestrel-ridge.test")!;
 const reviewer = demoSignIns.find((s) => s.role === "reviewer")!;
+const buyer = demoSignIns.find((s) => s.role === "buyer")!;
+const coverageCodes = ["general_liability", "auto_liability", "umbrella_liability", "workers_comp"] as const;
 const coverageNames = [
   "Commercial general liability",
   "Automobile liability",
@@ -27,7 +29,10 @@ const coverageNames = [
 
 describe("one certificate with four coverages, from upload to decisions", () => {
   it("is sent as four coverages; the reviewer verifies three and returns one, each on its own", async () => {
-    const certificate = await writeCertificateFile(51, office.company);
+    // Every coverage in force today, so a verified one is listed to buyers and only the returned one is missing.
+    const certificate = await writeCertificateFile(51, office.company, new Date(), {
+      everyCoverageInForce: true,
+    });
     const officeContext = await browser.newContext({ viewport: { width: 1280, height: 900 } });
     const page = await officeContext.newPage();
     await signIn(page, server.url, office.email, DEMO_PASSWORD);
@@ -86,5 +91,22 @@ describe("one certificate with four coverages, from upload to decisions", () => 
     await expect(decided.locator('[data-status="verified"]').count()).resolves.toBe(3);
     await expect(decided.locator('[data-status="returned"]').count()).resolves.toBe(1);
     await reviewerContext.close();
+
+    // A buyer sees the company's three verified coverages on its technician's page; the returned one is absent.
+    const buyerContext = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+    const shop = await buyerContext.newPage();
+    await signIn(shop, server.url, buyer.email, DEMO_PASSWORD);
+    const found = await buyerContext.request.get(`${server.url}/api/directory?limit=100`);
+    const listed = ((await found.json()) as { rows: { technicianId: number; companyName: string }[] }).rows;
+    const technicianId = listed.find((row) => row.companyName === office.company)!.technicianId;
+    await shop.goto(`${server.url}/directory/technicians/${technicianId}`);
+    const onFile = shop.getByRole("region", { name: "Verified credentials" });
+    await onFile.waitFor();
+    const policies = coverageCodes.map((code) => certificate.coverages[code]!.policyNumber);
+    for (const policy of policies.slice(0, 3))
+      await expect(onFile.getByText(policy, { exact: true }).count()).resolves.toBe(1);
+    await expect(onFile.getByText(policies[3]!, { exact: true }).count()).resolves.toBe(0);
+    await screenshot(shop, "four-coverages-4-directory");
+    await buyerContext.close();
   });
 });
