@@ -23,6 +23,7 @@ import { reviewRoutes } from "./reviews/index.ts";
 import { serviceRequestRoutes } from "./service-requests/index.ts";
 import { companyRoutes } from "./companies/index.ts";
 import { geoRoutes } from "./geo/routes.ts";
+import { gateRoutes } from "./gate/routes.ts";
 import { createStorage } from "./storage/index.ts";
 import { createAbuseLimits } from "./accounts/abuse-limits.ts";
 import { setRosterAlertLinkBase } from "./roster/index.ts";
@@ -47,6 +48,7 @@ const apiRouters = [
   serviceRequestRoutes,
   companyRoutes,
   geoRoutes,
+  gateRoutes,
   ...buyerRouters,
 ];
 

@@ -1,3 +1,4 @@
+import { createHmac } from "node:crypto";
 import { z } from "zod";
 
 // The only file that reads process.env. Demo defaults are built in so `npm start` just works;
@@ -22,6 +23,8 @@ const configSchema = z
     SMTP_CATCHER_PORT: z.coerce.number().int().min(1024).max(65535).default(2525),
     MAIL_FROM: z.string().default("Clearbench <no-reply@clearbench.test>"),
     SESSION_SECRET: z.string().min(16).default("clearbench-demo-secret-change-me"),
+    // Signs the gate badge tokens; when unset (development and tests only) it is derived from SESSION_SECRET.
+    GATE_SECRET: z.string().min(32).optional(),
     UPLOADS_DIR: z.string().default("uploads"),
     LOG_LEVEL: z.enum(["fatal", "error", "warn", "info", "debug", "trace", "silent"]).default("info"),
     // Limits of the anonymous account routes (per address and per account, counted in memory per instance).
@@ -82,6 +85,13 @@ const configSchema = z
     if (c.NODE_ENV === "production" && c.SESSION_SECRET === "clearbench-demo-secret-change-me") {
       ctx.addIssue({ code: "custom", path: ["SESSION_SECRET"], message: "set a real secret in production" });
     }
+    if (c.NODE_ENV === "production" && !c.GATE_SECRET) {
+      ctx.addIssue({
+        code: "custom",
+        path: ["GATE_SECRET"],
+        message: "set a secret of 32+ characters in production",
+      });
+    }
     if (c.STORAGE_DRIVER === "s3" && !c.S3_BUCKET) {
       ctx.addIssue({ code: "custom", path: ["S3_BUCKET"], message: "required when STORAGE_DRIVER is s3" });
     }
@@ -96,6 +106,13 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     throw new Error(`Invalid configuration: ${problems}`);
   }
   return Object.freeze(parsed.data);
+}
+
+/** The key that signs gate badges: the configured one, or for development and tests one derived from the session secret. */
+export function gateSecret(config: Config): string {
+  return (
+    config.GATE_SECRET ?? createHmac("sha256", config.SESSION_SECRET).update("clearbench-gate").digest("hex")
+  );
 }
 
 export function publicUrl(config: Config): string {

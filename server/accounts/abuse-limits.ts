@@ -41,11 +41,14 @@ function limiter(spec: LimitSpec): RequestHandler {
   return limit;
 }
 
-export type AbuseLimitName = "signIn" | "signUp" | "passwordReset" | "setPassword" | "zipLookup";
+export type AbuseLimitName =
+  "signIn" | "signUp" | "passwordReset" | "setPassword" | "zipLookup" | "gateCheck";
 
 // Common practice: the sign-up form asks once per ZIP typed; 30 a minute per address is plenty for people and too slow
 // to copy the ZIP table through it.
 const ZIP_LOOKUPS_PER_IP_PER_MINUTE = 30;
+// Common practice: a front desk scans a few badges a minute; 60 a minute per address stops guessing tokens.
+const GATE_CHECKS_PER_IP_PER_MINUTE = 60;
 
 /**
  * Per address and per account limits of the four anonymous account routes, built once per app (counts are kept in
@@ -110,6 +113,15 @@ export function createAbuseLimits(config: Config): Record<AbuseLimitName, Reques
         key: byIp,
         failuresOnly: false,
         message: "Too many ZIP look-ups from this address; wait a minute and try again",
+      }),
+    ],
+    gateCheck: [
+      limiter({
+        windowMs: MINUTE,
+        limit: GATE_CHECKS_PER_IP_PER_MINUTE,
+        key: byIp,
+        failuresOnly: false,
+        message: "Too many gate checks from this address; wait a minute and try again",
       }),
     ],
     setPassword: [

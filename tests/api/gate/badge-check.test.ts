@@ -1,0 +1,139 @@
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import jsQR from "jsqr";
+import { PNG } from "pngjs";
+import request from "supertest";
+import { buildTestApp, type TestApp } from "../../support/test-app.ts";
+import { buildCompany } from "../../support/build-company.ts";
+import { buildClearedProvider, buildProvider } from "../../fixtures/build-credential-row.ts";
+import { runLapseJob } from "../../../jobs/lapse.ts";
+import { JOB_DEPS } from "../../jobs/job-support.ts";
+import { Site } from "../../../server/sites/model.ts";
+import { gateSecret } from "../../../server/config.ts";
+import { issueBadgeToken } from "../../../server/gate/token.ts";
+import { signIn } from "../standing/sign-in-as.ts";
+
+let t: TestApp;
+beforeAll(() => {
+  t = buildTestApp();
+});
+afterAll(() => t.close());
+
+/** Reads the QR back with a decoder independent of the encoder, as a phone camera would (ISO/IEC 18004). */
+function decodeQr(dataUrl: string): string {
+  const png = PNG.sync.read(Buffer.from(dataUrl.replace(/^data:image\/png;base64,/, ""), "base64"));
+  const code = jsQR(new Uint8ClampedArray(png.data), png.width, png.height);
+  if (!code) throw new Error("no QR code found in the badge image");
+  return code.data;
+}
+
+function pathOf(url: string): string {
+  const u = new URL(url);
+  return `/api${u.pathname}${u.search}`;
+}
+
+describe("gate check", () => {
+  it("decodes the badge QR to a check that shows cleared before the lapse and not cleared after the job runs past it", async () => {
+    const p = await buildClearedProvider({ glExpires: "2099-07-15", wcExpires: "2099-07-15" });
+    const technician = await signIn(t.app, p.technicianUser.email);
+
+    const badge = await technician.get("/api/badge");
+    expect(badge.status).toBe(200);
+    const url = decodeQr(badge.body.qrPng);
+    expect(url).toBe(badge.body.url);
+
+    const before = await request(t.app).get(pathOf(url));
+    expect(before.status).toBe(200);
+    expect(before.body).toMatchObject({
+      state: "cleared",
+      technician: { name: p.technician.name, company: p.company.name },
+      against: "Platform baseline",
+    });
+    expect(before.body.lines.length).toBeGreaterThan(0);
+    expect(before.body.lines.every((l: { status: string }) => l.status === "met")).toBe(true);
+    expect(Date.parse(before.body.checkedAt)).toBeGreaterThan(Date.now() - 60_000);
+
+    // The lapse job stores standings as of a run past the policies' end.
+    await runLapseJob({ asOf: new Date("2099-08-01T12:00:00Z") }, JOB_DEPS);
+
+    const after = await request(t.app).get(pathOf(url));
+    expect(after.status).toBe(200);
+    expect(after.body.state).toBe("not_cleared");
+    expect(after.body.lines.some((l: { status: string }) => l.status !== "met")).toBe(true);
+  });
+
+  it("answers expired for a code older than its lifetime and invalid for a forged one", async () => {
+    const p = await buildClearedProvider({ glExpires: "2099-07-15", wcExpires: "2099-07-15" });
+    const secret = gateSecret(t.config);
+    const yesterday = issueBadgeToken(secret, p.technician.id, new Date(Date.now() - 24 * 3_600_000));
+    const forged = issueBadgeToken("not-the-server-secret-at-all-000000", p.technician.id);
+
+    const old = await request(t.app).get("/api/gate/check").query({ token: yesterday });
+    const fake = await request(t.app).get("/api/gate/check").query({ token: forged });
+
+    expect(old.status).toBe(200);
+    expect(old.body).toEqual({ state: "expired", checkedAt: expect.any(String) });
+    expect(fake.body).toEqual({ state: "invalid", checkedAt: expect.any(String) });
+  });
+
+  it("reveals only name, company and standing lines, nothing about other shops or contact details", async () => {
+    const p = await buildClearedProvider({ glExpires: "2099-07-15", wcExpires: "2099-07-15" });
+    const badge = await (await signIn(t.app, p.technicianUser.email)).get("/api/badge");
+
+    const res = await request(t.app).get(pathOf(badge.body.url));
+
+    expect(Object.keys(res.body).sort()).toEqual(
+      ["against", "checkedAt", "lines", "site", "state", "technician", "workOrder"].sort(),
+    );
+    expect(Object.keys(res.body.technician).sort()).toEqual(["company", "name"]);
+    expect(res.body.lines.every((l: object) => Object.keys(l).sort().join() === "requirement,status")).toBe(
+      true,
+    );
+  });
+
+  it("ties a scan to a site only through the code on that site's gate sign", async () => {
+    const p = await buildClearedProvider({ glExpires: "2099-07-15", wcExpires: "2099-07-15" });
+    const shop = await buildCompany("shop", ["buyer"]);
+    const otherShop = await buildCompany("shop", ["buyer"]);
+    const site = await Site.create({
+      companyId: shop.company.id,
+      name: "North bay",
+      addressLine: "100 Sample Way",
+      postalCode: "60601",
+      timeZone: "America/Chicago",
+      latitude: 41.8858,
+      longitude: -87.6181,
+    });
+
+    const sign = await (await signIn(t.app, shop.users.buyer!.email)).get(`/api/sites/${site.id}/gate-sign`);
+    const foreign = await (
+      await signIn(t.app, otherShop.users.buyer!.email)
+    ).get(`/api/sites/${site.id}/gate-sign`);
+    expect(sign.status).toBe(200);
+    expect(foreign.status).toBe(404);
+    expect(decodeQr(sign.body.qrPng)).toBe(sign.body.badgeUrl);
+
+    const badge = await (
+      await signIn(t.app, p.technicianUser.email)
+    )
+      .get("/api/badge")
+      .query({ site: sign.body.code });
+    const res = await request(t.app).get(pathOf(badge.body.url));
+    expect(res.body.site).toEqual({ name: "North bay" });
+
+    const madeUp = `${site.id}-AAAAAAAAAA`;
+    const guessed = await request(t.app)
+      .get("/api/gate/check")
+      .query({ token: new URL(badge.body.url).searchParams.get("token"), site: madeUp });
+    expect(guessed.body.site).toBeNull();
+  });
+
+  it("shows the badge to the technician only", async () => {
+    const p = await buildProvider();
+
+    const admin = await (await signIn(t.app, p.admin.email)).get("/api/badge");
+    const anonymous = await request(t.app).get("/api/badge");
+
+    expect(admin.status).toBe(403);
+    expect(anonymous.status).toBe(401);
+  });
+});
