@@ -7,6 +7,9 @@ import { AppError } from "../http/app-error.ts";
 import { kickOutbox } from "../mail/outbox.ts";
 import { createInvitedUser } from "../accounts/index.ts";
 import { Company } from "../companies/model.ts";
+import { singleFileUpload } from "../http/upload.ts";
+import { importTemplateCsv } from "../../shared/technicians/bulk-import.ts";
+import { previewImport, runImport } from "./bulk-import.ts";
 import {
   canEditTechnician,
   canListOwnTechnicians,
@@ -26,6 +29,28 @@ export const technicianRoutes = createRoutes("/api/technicians");
 
 technicianRoutes.get("", { allow: canListOwnTechnicians }, (req) =>
   listCompanyTechnicians(req.user!.companyId),
+);
+
+const importBodySchema = z.object({ mapping: z.string().max(5_000).optional() });
+
+technicianRoutes.get("/import/template", { allow: canManageTechnicians }, (_req, res) => {
+  res.type("text/csv").attachment("technicians-template.csv").send(importTemplateCsv());
+});
+
+technicianRoutes.post(
+  "/import/preview",
+  { allow: canManageTechnicians, before: [singleFileUpload], body: importBodySchema },
+  (req, _res, { body }) => previewImport(req.user!, req.file, body.mapping),
+);
+
+technicianRoutes.post(
+  "/import",
+  { allow: canManageTechnicians, before: [singleFileUpload], body: importBodySchema },
+  async (req, res, { body }) => {
+    const report = await runImport(req.user!, req.file, body.mapping, linkBase(req));
+    kickOutbox(req.app.locals);
+    res.status(201).json(report);
+  },
 );
 
 technicianRoutes.post(

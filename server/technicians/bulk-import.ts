@@ -1,0 +1,250 @@
+import { readFile, rm } from "node:fs/promises";
+import Papa from "papaparse";
+import { Op, fn, col, where as sqlWhere } from "sequelize";
+import { AppError } from "../http/app-error.ts";
+import { db } from "../db/sequelize.ts";
+import { recordAudit } from "../audit/index.ts";
+import { lookupPostalCode } from "../geo/index.ts";
+import { Company } from "../companies/model.ts";
+import { User } from "../accounts/model.ts";
+import { issueToken } from "../accounts/tokens.ts";
+import { inviteMail } from "../accounts/emails.ts";
+import { enqueueMail } from "../mail/outbox.ts";
+import { Technician } from "./model.ts";
+import { DEFAULT_MILEAGE_RATE_CENTS } from "./service.ts";
+import {
+  checkRow,
+  columnMappingSchema,
+  guessMapping,
+  importFields,
+  type CheckedRow,
+  type ColumnMapping,
+} from "../../shared/technicians/bulk-import.ts";
+
+export const MAX_IMPORT_ROWS = 5_000;
+
+interface UploadedFile {
+  path: string;
+  originalname: string;
+  mimetype: string;
+}
+
+const csvMimes = new Set([
+  "text/csv",
+  "text/plain",
+  "application/csv",
+  "application/vnd.ms-excel",
+  "application/octet-stream",
+]);
+
+/** The file's text when it is a CSV, judged from its name, declared type and bytes (a spreadsheet's binary is not). */
+async function readCsvText(file: UploadedFile | undefined): Promise<string> {
+  if (!file)
+    throw new AppError("invalid_input", "Choose a CSV file", [{ path: "file", message: "required" }]);
+  // The file is only read, never kept: it leaves the incoming folder whatever the outcome.
+  const bytes = await readFile(file.path).finally(() => rm(file.path, { force: true }));
+  const looksBinary = bytes.includes(0) || (bytes[0] === 0x50 && bytes[1] === 0x4b);
+  if (!/\.csv$/i.test(file.originalname) || !csvMimes.has(file.mimetype) || looksBinary)
+    throw new AppError(
+      "unsupported_type",
+      "Only CSV files can be imported; save the spreadsheet as CSV (comma-separated) first",
+      [{ path: "file", message: "not a CSV file" }],
+    );
+  const text = bytes.toString("utf8");
+  if (text.includes("\uFFFD"))
+    throw new AppError("unsupported_type", "The file is not UTF-8 text", [
+      { path: "file", message: "not UTF-8 text" },
+    ]);
+  return text.replace(/^\uFEFF/, "");
+}
+
+function parseMapping(raw: string | undefined, headers: string[]): ColumnMapping {
+  if (raw === undefined || raw === "") return guessMapping(headers);
+  let json: unknown;
+  try {
+    json = JSON.parse(raw);
+  } catch {
+    throw new AppError("bad_request", "The column mapping is not valid JSON", [
+      { path: "body.mapping", message: "not JSON" },
+    ]);
+  }
+  const parsed = columnMappingSchema.safeParse(json);
+  if (!parsed.success)
+    throw new AppError("invalid_input", "The column mapping names an unknown field", [
+      { path: "body.mapping", message: parsed.error.issues[0]?.message ?? "invalid" },
+    ]);
+  for (const [key, header] of Object.entries(parsed.data))
+    if (header !== undefined && !headers.includes(header))
+      throw new AppError("invalid_input", `The column "${header}" is not in the file`, [
+        { path: `body.mapping.${key}`, message: "no such column in the file" },
+      ]);
+  return parsed.data;
+}
+
+export interface ImportPreview {
+  headers: string[];
+  mapping: ColumnMapping;
+  rows: { line: number; name: string; email: string | null; problems: string[] }[];
+  goodCount: number;
+  badCount: number;
+}
+
+async function checkFile(companyId: number, file: UploadedFile | undefined, mappingRaw: string | undefined) {
+  const text = await readCsvText(file);
+  // RFC 4180 reading (quoted fields, embedded commas and line breaks) by papaparse.
+  const parsed = Papa.parse<Record<string, string>>(text, { header: true, skipEmptyLines: "greedy" });
+  const headers = (parsed.meta.fields ?? []).filter((h) => h.trim() !== "");
+  if (headers.length === 0)
+    throw new AppError("invalid_input", "The file has no header row", [
+      { path: "file", message: "no header row" },
+    ]);
+  if (parsed.data.length > MAX_IMPORT_ROWS)
+    throw new AppError("too_large", `At most ${MAX_IMPORT_ROWS} rows per import`, [
+      { path: "file", message: `more than ${MAX_IMPORT_ROWS} rows` },
+    ]);
+  const mapping = parseMapping(mappingRaw, headers);
+  const missing = importFields.filter((f) => f.required && mapping[f.key] === undefined);
+  if (missing.length > 0)
+    throw new AppError(
+      "invalid_input",
+      `Choose a column for ${missing.map((f) => f.header).join(", ")}`,
+      missing.map((f) => ({ path: `body.mapping.${f.key}`, message: "no column chosen" })),
+    );
+
+  const rows = parsed.data.map((record, i) =>
+    checkRow(i + 2, record, mapping, (zip) => lookupPostalCode(zip) !== undefined),
+  );
+
+  // Duplicates: an e-mail twice in the file, an e-mail already signed in anywhere on the platform or on this
+  // company's technicians, and (for rows without e-mail) the same name at the same ZIP already on the roster.
+  const emails = rows.flatMap((r) => (r.input?.email ? [r.input.email] : []));
+  const [users, technicians] = await Promise.all([
+    emails.length
+      ? User.findAll({
+          where: sqlWhere(fn("lower", col("email")), { [Op.in]: emails }),
+          attributes: ["email"],
+        })
+      : [],
+    Technician.findAll({ where: { companyId }, attributes: ["name", "email", "postalCode"] }),
+  ]);
+  const taken = new Set([
+    ...users.map((u) => u.email.toLowerCase()),
+    ...technicians.flatMap((t) => (t.email ? [t.email.toLowerCase()] : [])),
+  ]);
+  const onRoster = new Set(technicians.map((t) => `${t.name.trim().toLowerCase()}|${t.postalCode}`));
+  const firstLine = new Map<string, number>();
+  for (const row of rows) {
+    if (!row.input) continue;
+    const { email, name, postalCode } = row.input;
+    if (email) {
+      const earlier = firstLine.get(email);
+      if (earlier !== undefined)
+        row.problems.push(`E-mail: ${email} is also on line ${earlier} of this file`);
+      else firstLine.set(email, row.line);
+      if (taken.has(email)) row.problems.push(`E-mail: ${email} is already on the platform`);
+    } else if (onRoster.has(`${name.toLowerCase()}|${postalCode}`)) {
+      row.problems.push(`Name: ${name} at ZIP ${postalCode} is already on your roster`);
+    }
+    if (row.problems.length > 0) row.input = null;
+  }
+  return { headers, mapping, rows };
+}
+
+function summarize(headers: string[], mapping: ColumnMapping, rows: CheckedRow[]): ImportPreview {
+  const shown = rows.map((r) => ({
+    line: r.line,
+    name: r.input?.name ?? "",
+    email: r.input?.email ?? null,
+    problems: r.problems,
+  }));
+  const goodCount = rows.filter((r) => r.input).length;
+  return { headers, mapping, rows: shown, goodCount, badCount: rows.length - goodCount };
+}
+
+export async function previewImport(actor: Express.User, file: UploadedFile | undefined, mapping?: string) {
+  const { headers, mapping: used, rows } = await checkFile(actor.companyId, file, mapping);
+  return summarize(headers, used, rows);
+}
+
+export interface ImportReport {
+  imported: number;
+  invited: number;
+  skipped: { line: number; problems: string[] }[];
+}
+
+/** Imports every good row and invites those with e-mail, all in one transaction: all of them or none. */
+export async function runImport(
+  actor: Express.User,
+  file: UploadedFile | undefined,
+  mapping: string | undefined,
+  linkBase: string,
+): Promise<ImportReport> {
+  const { rows } = await checkFile(actor.companyId, file, mapping);
+  const good = rows.flatMap((r) => (r.input ? [r.input] : []));
+  const company = await Company.findByPk(actor.companyId);
+  if (!company) throw new AppError("not_found", "That company was not found");
+  let invited = 0;
+  await db().transaction(async (transaction) => {
+    // One import at a time per company, so two uploads of the same file cannot both pass the duplicate check.
+    await db().query("SELECT pg_advisory_xact_lock(hashtext('technician-import'), :companyId)", {
+      replacements: { companyId: actor.companyId },
+      transaction,
+    });
+    const created = await Technician.bulkCreate(
+      good.map((g) => {
+        const place = lookupPostalCode(g.postalCode)!;
+        return {
+          companyId: actor.companyId,
+          name: g.name,
+          email: g.email,
+          phone: g.phone,
+          technologies: g.technologies,
+          controlFamilies: [],
+          postalCode: g.postalCode,
+          latitude: place.latitude,
+          longitude: place.longitude,
+          serviceRadiusKm: g.serviceRadiusKm,
+          hourlyRateCents: g.hourlyRateCents,
+          travelRateCents: g.travelRateCents,
+          mileageRateCents: DEFAULT_MILEAGE_RATE_CENTS,
+        };
+      }),
+      { transaction, returning: true },
+    );
+    for (const t of created) {
+      if (!t.email) continue;
+      const user = await User.create(
+        {
+          companyId: company.id,
+          email: t.email,
+          name: t.name,
+          role: "technician",
+          passwordHash: null,
+          technicianId: t.id,
+        },
+        { transaction },
+      );
+      const token = await issueToken(user.id, "invite", transaction);
+      await enqueueMail(
+        inviteMail(user.email, user.name, company.name, `${linkBase}/set-password?token=${token}`, user.role),
+        transaction,
+      );
+      invited += 1;
+    }
+    await recordAudit(
+      {
+        actorUserId: actor.id,
+        action: "technician.imported",
+        subjectType: "company",
+        subjectId: company.id,
+        after: { imported: created.length, invited, technicianIds: created.map((t) => t.id) },
+      },
+      transaction,
+    );
+  });
+  return {
+    imported: good.length,
+    invited,
+    skipped: rows.filter((r) => !r.input).map((r) => ({ line: r.line, problems: r.problems })),
+  };
+}
