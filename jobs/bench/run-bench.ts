@@ -27,6 +27,7 @@ import { sampleRss } from "./rss-sampler.ts";
 import { LARGE_PASSWORD, readSeedInfo, seedLargeDataSet } from "./seed-large-data.ts";
 import { BEHIND_TLS_PROXY, signIn } from "./session-client.ts";
 import { benchUploads } from "./upload-bench.ts";
+import { prepareComparison, routingRequestBody } from "./service-request-bench.ts";
 
 // `npm run bench`: its own PostgreSQL cluster, the large data set (loaded when absent), the server in production mode
 // as a child process, and every figure in one run. Writes bench/results/latest.json and latest.md.
@@ -166,6 +167,20 @@ try {
     paths: firstPage.rows.map((r) => `/api/directory/technicians/${r.technicianId}`),
   });
   await measure({ name: "verification queue API", url: `${server.url}/api/review/queue`, headers: reviewer });
+  // Routing: the invited-set preview a buyer sees before sending, for a machine-down mill repair at the bench site.
+  await measure({
+    name: "service-request routing preview API",
+    url: `${server.url}/api/service-requests/preview`,
+    method: "POST",
+    headers: { ...buyer, "content-type": "application/json" },
+    bodies: [JSON.stringify(routingRequestBody(BENCH_BUYER.siteId))],
+  });
+  const comparison = await prepareComparison(server.url, largeUrl, buyer, BENCH_BUYER.siteId, say);
+  await measure({
+    name: `estimates comparison API (${comparison.estimates} estimates, ${comparison.invited} invited)`,
+    url: `${server.url}/api/service-requests/${comparison.requestId}/comparison`,
+    headers: buyer,
+  });
   await measure({
     name: "sign-in (bcrypt cost 12)",
     url: `${server.url}/api/auth/sign-in`,
