@@ -23,6 +23,7 @@ import { reviewRoutes } from "./reviews/index.ts";
 import { serviceRequestRoutes } from "./service-requests/index.ts";
 import { companyRoutes } from "./companies/index.ts";
 import { geoRoutes } from "./geo/routes.ts";
+import { machineCatalogRoutes } from "./machines/catalog-routes.ts";
 import { createStorage } from "./storage/index.ts";
 import { createAbuseLimits } from "./accounts/abuse-limits.ts";
 import { setRosterAlertLinkBase } from "./roster/index.ts";
@@ -48,6 +49,7 @@ const apiRouters = [
   companyRoutes,
   geoRoutes,
   ...buyerRouters,
+  machineCatalogRoutes,
 ];
 
 export function createApp({ config, sessionPool, clientDir }: AppDeps): Express {
