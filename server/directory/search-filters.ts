@@ -7,7 +7,14 @@ export interface DirectoryCriteria {
   asOf: Date;
   credentialTypes?: string[] | undefined;
   oem?:
-    | { builder?: string | undefined; controlFamily?: string | undefined; minLevel?: number | undefined }
+    | {
+        builder?: string | undefined;
+        controlFamily?: string | undefined;
+        minLevel?: number | undefined;
+        /** Catalog keys (name and aliases) that stand for the builder / control family; replace the plain compare. */
+        builderKeys?: string[] | undefined;
+        controlFamilyKeys?: string[] | undefined;
+      }
     | undefined;
   technology?: string | undefined;
   generalLiability?: { eachOccurrence?: number | undefined; aggregate?: number | undefined } | undefined;
@@ -98,9 +105,13 @@ export function buildFilters(p: SqlParams, criteria: DirectoryCriteria): FilterC
     // One training certificate must show the builder, the control family and the level together (names compared
     // without regard to case, as the standing engine does).
     let extra = "";
-    if (oem.builder !== undefined)
+    const keyOf = (field: string) => `lower(regexp_replace(btrim(cr.fields->>'${field}'), '\\s+', ' ', 'g'))`;
+    if (oem.builderKeys?.length) extra += ` AND ${keyOf("builder")} = ANY(${p.add(oem.builderKeys)}::text[])`;
+    else if (oem.builder !== undefined)
       extra += ` AND lower(trim(cr.fields->>'builder')) = lower(${p.add(oem.builder)})`;
-    if (oem.controlFamily !== undefined)
+    if (oem.controlFamilyKeys?.length)
+      extra += ` AND ${keyOf("controlFamily")} = ANY(${p.add(oem.controlFamilyKeys)}::text[])`;
+    else if (oem.controlFamily !== undefined)
       extra += ` AND lower(trim(cr.fields->>'controlFamily')) = lower(${p.add(oem.controlFamily)})`;
     if (oem.minLevel !== undefined) extra += ` AND (cr.fields->>'level')::int >= ${p.add(oem.minLevel)}`;
     filters.push({ name: "oemTraining", sql: heldInForce(p, "oem_training", asOf, extra) });

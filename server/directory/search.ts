@@ -1,3 +1,4 @@
+import { catalogMatchKeys } from "../machines/catalog-service.ts";
 import { QueryTypes } from "sequelize";
 import {
   DEFAULT_RADIUS_MILES,
@@ -66,14 +67,29 @@ async function resolveCriteria(buyer: Express.User, query: DirectoryQuery, asOf:
   };
   let controlFamily = query.controlFamily;
   let fromEquipment: DirectoryPageDto["fromEquipment"] = null;
+  let fromEquipmentBuilder: string | undefined;
   if (query.equipmentId !== undefined) {
     const machine = await findShopEquipment(buyer.companyId, query.equipmentId);
     if (!machine) throw new AppError("not_found", "That machine was not found");
-    fromEquipment = { technology: machine.technology, controlFamily: machine.controlFamily };
+    fromEquipment = {
+      technology: machine.technology,
+      controlFamily: machine.controlFamily,
+      builder: machine.builder,
+    };
     criteria.technology ??= machine.technology;
     controlFamily ??= machine.controlFamily;
+    fromEquipmentBuilder = machine.builder;
   }
-  criteria.oem = { builder: query.oemBuilder, controlFamily, minLevel: query.minOemLevel };
+  let builder = query.oemBuilder;
+  if (fromEquipment) builder ??= fromEquipmentBuilder;
+  criteria.oem = {
+    builder,
+    controlFamily,
+    minLevel: query.minOemLevel,
+    builderKeys: builder !== undefined ? await catalogMatchKeys("builder", builder) : undefined,
+    controlFamilyKeys:
+      controlFamily !== undefined ? await catalogMatchKeys("control_family", controlFamily) : undefined,
+  };
   if (query.requirementSetId !== undefined) await ownRequirementSet(buyer.companyId, query.requirementSetId);
   if (query.siteId !== undefined) {
     const site = await Site.findByPk(query.siteId, { attributes: ["companyId", "latitude", "longitude"] });

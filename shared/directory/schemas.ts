@@ -139,7 +139,7 @@ export interface DirectoryPageDto {
   /** On an empty first page: the filter that removed the most candidates and how many it removed. */
   emptyReason: { filter: DirectoryFilterName; removed: number } | null;
   /** Technology and control family filled from `equipmentId` (explicit parameters win). */
-  fromEquipment: { technology: string; controlFamily: string } | null;
+  fromEquipment: { technology: string; controlFamily: string; builder?: string } | null;
   scoreSource: string;
   assumptions: DirectoryAssumptionsDto;
 }

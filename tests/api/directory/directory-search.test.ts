@@ -97,7 +97,7 @@ describe("directory: who appears", () => {
     expect(expected.length).toBeLessThan(bruteForceDirectory(world, {}, new Date()).length);
   });
 
-  it("fills technology and control family from a machine at the shop's site", async () => {
+  it("fills technology, control family and builder from a machine at the shop's site", async () => {
     const machine = await Equipment.create({
       siteId: world.site.id,
       builder: "Brisca",
@@ -110,8 +110,12 @@ describe("directory: who appears", () => {
     const res = await buyer.get("/api/directory").query({ equipmentId: machine.id, limit: 50 });
 
     expect(res.status).toBe(200);
-    expect(res.body.fromEquipment).toEqual({ technology: "mill", controlFamily: "QX" });
-    const expected = bruteForceDirectory(world, { technology: "mill", controlFamily: "QX" }, new Date());
+    expect(res.body.fromEquipment).toEqual({ technology: "mill", controlFamily: "QX", builder: "Brisca" });
+    const expected = bruteForceDirectory(
+      world,
+      { technology: "mill", controlFamily: "QX", oemBuilder: "Brisca" },
+      new Date(),
+    );
     expect(ours(res.body.rows.map((r: { technicianId: number }) => r.technicianId))).toEqual(expected);
   });
 });

@@ -1,0 +1,29 @@
+import {
+  catalogEntryInputSchema,
+  catalogEntryParamsSchema,
+  catalogListQuerySchema,
+} from "../../shared/machines/catalog.ts";
+import { createRoutes } from "../http/route.ts";
+import { requireRole, signedIn } from "../http/policy.ts";
+import { addCatalogEntry, editCatalogEntry, listCatalog } from "./catalog-service.ts";
+
+export const machineCatalogRoutes = createRoutes("/api/machine-catalog");
+
+// Every form that names a builder or control picks from this list, so every signed-in role reads it.
+machineCatalogRoutes.get("", { allow: signedIn, query: catalogListQuerySchema }, (_req, _res, { query }) =>
+  listCatalog(query.kind),
+);
+
+machineCatalogRoutes.post(
+  "",
+  { allow: requireRole("admin"), body: catalogEntryInputSchema },
+  async (req, res, { body }) => {
+    res.status(201).json(await addCatalogEntry(req.user!, body));
+  },
+);
+
+machineCatalogRoutes.put(
+  "/:entryId",
+  { allow: requireRole("admin"), params: catalogEntryParamsSchema, body: catalogEntryInputSchema },
+  (req, _res, { params, body }) => editCatalogEntry(req.user!, params.entryId, body),
+);
