@@ -26,6 +26,7 @@ const pagesByRole: { who: string; email: string | null; pages: string[] }[] = [
       "/provider",
       "/provider/technicians",
       "/provider/technicians/new",
+      "/provider/technicians/import",
       "/provider/documents",
       "/provider/work-orders",
       "/account",
