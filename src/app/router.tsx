@@ -44,6 +44,10 @@ export const router = createBrowserRouter([
                 path: paths.provider.technicianNew,
                 lazy: () => import("./routes/provider/technician-new.tsx"),
               },
+              {
+                path: paths.provider.techniciansImport,
+                lazy: () => import("./routes/provider/technicians-import.tsx"),
+              },
               { path: paths.provider.technician, lazy: () => import("./routes/provider/technician.tsx") },
               {
                 path: paths.provider.technicianEdit,

@@ -18,6 +18,7 @@ export const paths = {
     dashboard: "/provider",
     technicians: "/provider/technicians",
     technicianNew: "/provider/technicians/new",
+    techniciansImport: "/provider/technicians/import",
     technician: "/provider/technicians/:technicianId",
     technicianEdit: "/provider/technicians/:technicianId/edit",
     documents: "/provider/documents",

@@ -20,12 +20,20 @@ export function Component() {
       Add technician
     </Link>
   );
+  const actions = (
+    <div className="flex gap-2">
+      <Link to={paths.provider.techniciansImport} className={buttonStyles("secondary")}>
+        Import from CSV
+      </Link>
+      {add}
+    </div>
+  );
   return (
     <>
       <PageHeader
         title="Technicians"
         description="Your technicians, where they work from and what they charge. Open one to see their cards and standing."
-        actions={add}
+        actions={actions}
       />
       {technicians.length === 0 ? (
         <EmptyState title="No technicians yet" action={add}>
