@@ -24,6 +24,7 @@ import { serviceRequestRoutes } from "./service-requests/index.ts";
 import { companyRoutes } from "./companies/index.ts";
 import { geoRoutes } from "./geo/routes.ts";
 import { machineCatalogRoutes } from "./machines/catalog-routes.ts";
+import { machineRoutes } from "./machines/machine-routes.ts";
 import { createStorage } from "./storage/index.ts";
 import { createAbuseLimits } from "./accounts/abuse-limits.ts";
 import { setRosterAlertLinkBase } from "./roster/index.ts";
@@ -50,6 +51,7 @@ const apiRouters = [
   geoRoutes,
   ...buyerRouters,
   machineCatalogRoutes,
+  machineRoutes,
 ];
 
 export function createApp({ config, sessionPool, clientDir }: AppDeps): Express {
