@@ -25,6 +25,7 @@ import { companyRoutes } from "./companies/index.ts";
 import { geoRoutes } from "./geo/routes.ts";
 import { gateRoutes } from "./gate/routes.ts";
 import { machineCatalogRoutes } from "./machines/catalog-routes.ts";
+import { machineRoutes } from "./machines/machine-routes.ts";
 import { createStorage } from "./storage/index.ts";
 import { createAbuseLimits } from "./accounts/abuse-limits.ts";
 import { setRosterAlertLinkBase } from "./roster/index.ts";
@@ -52,6 +53,7 @@ const apiRouters = [
   gateRoutes,
   ...buyerRouters,
   machineCatalogRoutes,
+  machineRoutes,
 ];
 
 export function createApp({ config, sessionPool, clientDir }: AppDeps): Express {

@@ -31,5 +31,11 @@ export function toEquipmentDto(e: Equipment): EquipmentDto {
     technology: e.technology,
     model: e.model,
     serialNumber: e.serialNumber,
+    yearBuilt: e.yearBuilt ?? null,
+    inServiceOn: e.inServiceOn ?? null,
+    building: e.building ?? null,
+    bay: e.bay ?? null,
+    notes: e.notes ?? null,
+    state: e.state ?? "running",
   };
 }

@@ -7,6 +7,7 @@ import {
   type Sequelize,
 } from "sequelize";
 import type { MachineTechnology } from "../../shared/technicians/schemas.ts";
+import type { MachineState } from "../../shared/sites/schemas.ts";
 
 export class Site extends Model<InferAttributes<Site>, InferCreationAttributes<Site>> {
   declare id: CreationOptional<number>;
@@ -30,6 +31,12 @@ export class Equipment extends Model<InferAttributes<Equipment>, InferCreationAt
   declare technology: MachineTechnology;
   declare model: string;
   declare serialNumber: string | null;
+  declare yearBuilt: CreationOptional<number | null>;
+  declare inServiceOn: CreationOptional<string | null>;
+  declare building: CreationOptional<string | null>;
+  declare bay: CreationOptional<string | null>;
+  declare notes: CreationOptional<string | null>;
+  declare state: CreationOptional<MachineState>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -60,6 +67,12 @@ export function initSiteModels(sequelize: Sequelize) {
       technology: { type: DataTypes.STRING(40), allowNull: false },
       model: { type: DataTypes.STRING(120), allowNull: false },
       serialNumber: { type: DataTypes.STRING(80), allowNull: true },
+      yearBuilt: { type: DataTypes.SMALLINT, allowNull: true },
+      inServiceOn: { type: DataTypes.DATEONLY, allowNull: true },
+      building: { type: DataTypes.STRING(80), allowNull: true },
+      bay: { type: DataTypes.STRING(40), allowNull: true },
+      notes: { type: DataTypes.TEXT, allowNull: true },
+      state: { type: DataTypes.STRING(16), allowNull: false, defaultValue: "running" },
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,
     },

@@ -1,4 +1,4 @@
-import { fn, col } from "sequelize";
+import { fn, col, QueryTypes, type Transaction } from "sequelize";
 import type { EquipmentInput, SiteInput } from "../../shared/sites/schemas.ts";
 import { AppError } from "../http/app-error.ts";
 import { db } from "../db/sequelize.ts";
@@ -156,12 +156,51 @@ export async function listSiteEquipment(siteId: number) {
   return rows.map(toEquipmentDto);
 }
 
+/** The record's columns from the form; a field left out keeps what is stored. */
+function machineValues(input: EquipmentInput) {
+  const values: Record<string, unknown> = { ...input, serialNumber: input.serialNumber || null };
+  for (const k of Object.keys(values)) if (values[k] === undefined) delete values[k];
+  return values as Omit<EquipmentInput, "serialNumber"> & { serialNumber: string | null };
+}
+
+/**
+ * One builder's serial number names one machine on the whole platform. A serial held by another shop is the same
+ * machine changing hands, so the answer points at a transfer rather than letting a second record start.
+ */
+export async function refuseTakenSerial(
+  companyId: number,
+  builder: string,
+  serialNumber: string | null | undefined,
+  selfId: number | null,
+  transaction: Transaction,
+) {
+  if (!serialNumber) return;
+  const builderKey = builder.trim().replace(/\s+/g, " ").toLowerCase();
+  const serialKey = serialNumber.trim().toUpperCase();
+  await db().query("SELECT pg_advisory_xact_lock(hashtext($1))", {
+    bind: [`machine-serial:${builderKey}:${serialKey}`],
+    transaction,
+  });
+  const [taken] = await db().query<{ id: number; companyId: number }>(
+    `SELECT e.id, s.company_id AS "companyId" FROM equipment e JOIN sites s ON s.id = e.site_id
+      WHERE lower(regexp_replace(btrim(e.builder), '\\s+', ' ', 'g')) = $1 AND upper(btrim(e.serial_number)) = $2
+        AND ($3::int IS NULL OR e.id <> $3) LIMIT 1`,
+    { bind: [builderKey, serialKey, selfId], type: QueryTypes.SELECT, transaction },
+  );
+  if (!taken) return;
+  const message =
+    taken.companyId === companyId
+      ? "One of your machines already has this builder and serial number"
+      : "Another shop holds a machine with this builder and serial number: ask that shop to start a transfer to you instead of adding it again";
+  throw new AppError("conflict", message, [
+    { path: "body.serialNumber", message: "already on the platform" },
+  ]);
+}
+
 export async function addEquipment(actor: Express.User, siteId: number, input: EquipmentInput) {
   const equipment = await db().transaction(async (transaction) => {
-    const e = await Equipment.create(
-      { siteId, ...input, serialNumber: input.serialNumber || null },
-      { transaction },
-    );
+    await refuseTakenSerial(actor.companyId, input.builder, input.serialNumber, null, transaction);
+    const e = await Equipment.create({ siteId, ...machineValues(input) }, { transaction });
     await recordAudit(
       {
         actorUserId: actor.id,
@@ -182,7 +221,8 @@ export async function editEquipment(actor: Express.User, equipmentId: number, in
     const e = await Equipment.findByPk(equipmentId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!e) throw new AppError("not_found", "That machine was not found");
     const before = e.toJSON();
-    await e.update({ ...input, serialNumber: input.serialNumber || null }, { transaction });
+    await refuseTakenSerial(actor.companyId, input.builder, input.serialNumber, e.id, transaction);
+    await e.update(machineValues(input), { transaction });
     await recordAudit(
       {
         actorUserId: actor.id,

@@ -1,5 +1,6 @@
 import { z } from "zod";
-import { singleLineText } from "../api/text.ts";
+import { multiLineText, singleLineText } from "../api/text.ts";
+import { isoDateSchema } from "../credentials/credential-fields.ts";
 import { postalCodeSchema, timeZoneSchema } from "../accounts/schemas.ts";
 import { idParam } from "../credentials/schemas.ts";
 import { machineTechnologies, type MachineTechnology } from "../technicians/schemas.ts";
@@ -31,8 +32,17 @@ export const equipmentInputSchema = z.object({
   technology: z.enum(machineTechnologies),
   model: singleLineText().trim().min(1, "Enter the model").max(120),
   serialNumber: singleLineText().trim().max(80).optional(),
+  yearBuilt: z.number().int().min(1900, "Enter a year from 1900 on").max(2100).nullable().optional(),
+  inServiceOn: isoDateSchema.nullable().optional(),
+  building: singleLineText().trim().max(80).nullable().optional(),
+  bay: singleLineText().trim().max(40).nullable().optional(),
+  notes: multiLineText().trim().max(4000).nullable().optional(),
+  state: z.enum(["running", "down", "out_of_service", "sold"]).optional(),
 });
 export type EquipmentInput = z.infer<typeof equipmentInputSchema>;
+
+export const machineStates = ["running", "down", "out_of_service", "sold"] as const;
+export type MachineState = (typeof machineStates)[number];
 
 export interface EquipmentDto {
   id: number;
@@ -42,6 +52,12 @@ export interface EquipmentDto {
   technology: MachineTechnology;
   model: string;
   serialNumber: string | null;
+  yearBuilt?: number | null;
+  inServiceOn?: string | null;
+  building?: string | null;
+  bay?: string | null;
+  notes?: string | null;
+  state?: MachineState;
 }
 
 export interface SiteDto {

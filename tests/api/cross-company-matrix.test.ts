@@ -69,6 +69,7 @@ beforeAll(async () => {
     requirementSetId: String(set.body.id),
     siteId: String(owner.siteId),
     equipmentId: String(owner.equipmentId),
+    machineId: String(owner.equipmentId),
     entryId: String(entry.body.id),
     workOrderId: String(workOrderId),
     messageId: String(message.body.id),
@@ -139,7 +140,7 @@ describe("another company's records", () => {
       }
     }
 
-    expect(Object.keys(ids).length).toBe(16);
+    expect(Object.keys(ids).length).toBe(17);
     expect(walked.some((r) => r.policy.roles === "signed_in")).toBe(true);
     expect(checked).toBeGreaterThan(40);
     expect(wrong).toEqual([]);

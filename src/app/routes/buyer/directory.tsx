@@ -134,6 +134,7 @@ function Search({ params }: { params: URLSearchParams }) {
           label: `${m.builder} ${m.model} (${technologyLabels[m.technology as MachineTechnology] ?? m.technology}, ${m.controlFamily})`,
           technology: m.technology,
           controlFamily: m.controlFamily,
+          builder: m.builder,
         }))}
         requirementSets={sets.map((s) => ({ value: String(s.id), label: s.name }))}
         credentialTypes={types.filter((t) => t.active).map((t) => ({ code: t.code, name: t.name }))}

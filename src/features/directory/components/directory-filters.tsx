@@ -8,7 +8,13 @@ import { TextField } from "@/components/ui/text-field.tsx";
 import { fieldErrorsOf } from "@/lib/field-errors.ts";
 import type { DirectoryDraft } from "./directory-draft.ts";
 
-export type MachineChoice = { id: number; label: string; technology: string; controlFamily: string };
+export type MachineChoice = {
+  id: number;
+  label: string;
+  technology: string;
+  controlFamily: string;
+  builder?: string;
+};
 export type CredentialTypeChoice = { code: string; name: string };
 
 type DirectoryFiltersProps = {
@@ -70,10 +76,15 @@ export function DirectoryFilters(props: DirectoryFiltersProps) {
   );
   const pickMachine = (equipmentId: string) => {
     const machine = machines.find((m) => String(m.id) === equipmentId);
-    // Picking a machine fills the technology and control family.
+    // Picking a machine fills the technology, control family and builder (the search matches the builder too).
     set(
       machine
-        ? { equipmentId, technology: machine.technology, controlFamily: machine.controlFamily }
+        ? {
+            equipmentId,
+            technology: machine.technology,
+            controlFamily: machine.controlFamily,
+            oemBuilder: machine.builder ?? "",
+          }
         : { equipmentId },
     );
   };
