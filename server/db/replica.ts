@@ -32,8 +32,10 @@ function isConnectionFailure(err: unknown): boolean {
   const name = (err as { name?: string } | null)?.name ?? "";
   // Sequelize's connection errors (refused, timed out, host gone) and a replica shut down mid-query (57P01..57P03).
   if (name.startsWith("SequelizeConnection") || name === "SequelizeHostNotReachableError") return true;
-  const code = (err as { parent?: { code?: string }; original?: { code?: string } }).parent?.code;
-  return typeof code === "string" && /^(57P0[1-3]|08)/.test(code);
+  const parent = (err as { parent?: { code?: string; message?: string } }).parent;
+  if (typeof parent?.code === "string" && /^(57P0[1-3]|08|ECONN)/.test(parent.code)) return true;
+  // pg reports a socket closed under an idle pooled connection by message only.
+  return /Connection terminated|ECONNRESET|ECONNREFUSED/.test(parent?.message ?? "");
 }
 
 /**
