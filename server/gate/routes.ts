@@ -8,7 +8,7 @@ import { createRoutes } from "../http/route.ts";
 import { isOwnSite } from "../sites/policy.ts";
 import { Site } from "../sites/model.ts";
 import { notFound } from "../http/app-error.ts";
-import { checkAtGate } from "./check.ts";
+import { checkAtGate, listGateChecks } from "./check.ts";
 import { BADGE_TOKEN_TTL_MS, issueBadgeToken, siteGateCode } from "./token.ts";
 
 export const gateRoutes = createRoutes("/api");
@@ -77,4 +77,9 @@ gateRoutes.get(
     });
     return { siteName: site.name, code, badgeUrl: badgeUrl.toString(), qrPng };
   },
+);
+
+// The shop sees the checks at its own sites only, never the same technician's checks at other shops.
+gateRoutes.get("/gate/checks", { allow: requireRole("provider_admin", "buyer") }, (req) =>
+  listGateChecks(req.user!),
 );
