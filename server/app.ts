@@ -24,6 +24,7 @@ import { serviceRequestRoutes } from "./service-requests/index.ts";
 import { companyRoutes } from "./companies/index.ts";
 import { geoRoutes } from "./geo/routes.ts";
 import { gateRoutes } from "./gate/routes.ts";
+import { calendarRoutes } from "./calendar/routes.ts";
 import { createStorage } from "./storage/index.ts";
 import { createAbuseLimits } from "./accounts/abuse-limits.ts";
 import { setRosterAlertLinkBase } from "./roster/index.ts";
@@ -49,6 +50,7 @@ const apiRouters = [
   companyRoutes,
   geoRoutes,
   gateRoutes,
+  calendarRoutes,
   ...buyerRouters,
 ];
 
