@@ -1,5 +1,6 @@
 import QRCode from "qrcode";
 import { z } from "zod";
+import { singleLineText } from "../../shared/api/text.ts";
 import { gateSecret, publicUrl } from "../config.ts";
 import { abuseLimit } from "../accounts/abuse-limits.ts";
 import { appConfig } from "../http/app-locals.ts";
@@ -13,9 +14,12 @@ import { BADGE_TOKEN_TTL_MS, issueBadgeToken, siteGateCode } from "./token.ts";
 
 export const gateRoutes = createRoutes("/api");
 
-const tokenText = z.string().trim().min(1, "Scan the badge again").max(200, "Not a badge code");
-const siteCodeText = z
-  .string()
+const tokenText = singleLineText()
+  .trim()
+  .min(1, "Scan the badge again")
+  .max(200, "Not a badge code")
+  .regex(/^[A-Za-z0-9._-]+$/, "Not a badge code");
+const siteCodeText = singleLineText()
   .trim()
   .regex(/^[0-9]{1,10}-[A-Za-z0-9_-]{10}$/, "Not a site code from a gate sign")
   .optional();
