@@ -31,7 +31,7 @@ export function Component() {
   if (search.get("site")) query.set("site", search.get("site")!);
   const check = useQuery({
     queryKey: ["gate-check", query.toString()],
-    queryFn: () => api.get(`/api/gate/check?${query.toString()}`, checkSchema),
+    queryFn: () => api.get(`/gate/check?${query.toString()}`, checkSchema),
     retry: false,
   });
   return (

@@ -18,7 +18,7 @@ const REFRESH_MS = 4 * 60_000;
 export function Component() {
   const [search] = useSearchParams();
   const site = search.get("site");
-  const path = site ? `/api/badge?site=${encodeURIComponent(site)}` : "/api/badge";
+  const path = site ? `/badge?site=${encodeURIComponent(site)}` : "/badge";
   const badge = useQuery({
     queryKey: ["badge", site],
     queryFn: () => api.get(path, badgeSchema),
