@@ -26,6 +26,7 @@ import { geoRoutes } from "./geo/routes.ts";
 import { gateRoutes } from "./gate/routes.ts";
 import { machineCatalogRoutes } from "./machines/catalog-routes.ts";
 import { machineRoutes } from "./machines/machine-routes.ts";
+import { calendarRoutes } from "./calendar/routes.ts";
 import { createStorage } from "./storage/index.ts";
 import { createAbuseLimits } from "./accounts/abuse-limits.ts";
 import { setRosterAlertLinkBase } from "./roster/index.ts";
@@ -51,6 +52,7 @@ const apiRouters = [
   companyRoutes,
   geoRoutes,
   gateRoutes,
+  calendarRoutes,
   ...buyerRouters,
   machineCatalogRoutes,
   machineRoutes,

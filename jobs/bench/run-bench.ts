@@ -125,6 +125,7 @@ try {
     {
       NODE_ENV: "production",
       SESSION_SECRET: "bench-session-secret-0123456789abcdef",
+      GATE_SECRET: "bench-gate-secret-0123456789abcdef012345",
       DATABASE_URL: largeUrl,
       UPLOADS_DIR: path.join(scratch, "uploads"),
       CLIENT_DIR: clientDir,

@@ -1,4 +1,5 @@
-import { Op } from "sequelize";
+import { Op, QueryTypes } from "sequelize";
+import { db } from "../db/sequelize.ts";
 import { Company } from "../companies/model.ts";
 import { RequirementSet } from "../standing/model.ts";
 import { readTechnicianStanding } from "../standing/technician-standing.ts";
@@ -47,8 +48,14 @@ export async function checkAtGate(
     (set ? standing.requirementSets.find((s) => s.requirementSetId === set.id) : undefined) ??
     standing.baseline;
   const workOrder = site ? await todaysWorkOrder(technician.id, site.id, site.companyId) : null;
+  const state = chosen?.standing === "cleared" || chosen?.standing === "lapsing" ? "cleared" : "not_cleared";
+  await db().query(
+    `INSERT INTO gate_checks (technician_id, service_company_id, site_id, shop_company_id, state, checked_at)
+     VALUES ($1, $2, $3, $4, $5, $6)`,
+    { bind: [technician.id, technician.companyId, site?.id ?? null, site?.companyId ?? null, state, now] },
+  );
   return {
-    state: chosen?.standing === "cleared" || chosen?.standing === "lapsing" ? "cleared" : "not_cleared",
+    state,
     checkedAt,
     technician: { name: technician.name, company: company?.name ?? "" },
     site: site ? { name: site.name } : null,
@@ -65,4 +72,33 @@ async function todaysWorkOrder(technicianId: number, siteId: number, shopCompany
     order: [["acceptedAt", "DESC"]],
   });
   return order ? { id: order.id, technology: order.technology } : null;
+}
+
+export interface GateCheckRecordDto {
+  technicianName: string;
+  siteName: string | null;
+  state: string;
+  checkedAt: string;
+}
+
+/** The checks a company may see: its own technicians' (service side) or those at its own sites (shop side). */
+export async function listGateChecks(user: Express.User): Promise<GateCheckRecordDto[]> {
+  const column = user.role === "buyer" ? "g.shop_company_id" : "g.service_company_id";
+  const rows = await db().query<{
+    technician_name: string;
+    site_name: string | null;
+    state: string;
+    checked_at: Date;
+  }>(
+    `SELECT t.name AS technician_name, s.name AS site_name, g.state, g.checked_at
+       FROM gate_checks g JOIN technicians t ON t.id = g.technician_id LEFT JOIN sites s ON s.id = g.site_id
+      WHERE ${column} = $1 ORDER BY g.checked_at DESC LIMIT 200`,
+    { bind: [user.companyId], type: QueryTypes.SELECT },
+  );
+  return rows.map((r) => ({
+    technicianName: r.technician_name,
+    siteName: r.site_name,
+    state: r.state,
+    checkedAt: new Date(r.checked_at).toISOString(),
+  }));
 }

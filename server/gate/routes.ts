@@ -1,5 +1,6 @@
 import QRCode from "qrcode";
 import { z } from "zod";
+import { singleLineText } from "../../shared/api/text.ts";
 import { gateSecret, publicUrl } from "../config.ts";
 import { abuseLimit } from "../accounts/abuse-limits.ts";
 import { appConfig } from "../http/app-locals.ts";
@@ -8,14 +9,17 @@ import { createRoutes } from "../http/route.ts";
 import { isOwnSite } from "../sites/policy.ts";
 import { Site } from "../sites/model.ts";
 import { notFound } from "../http/app-error.ts";
-import { checkAtGate } from "./check.ts";
+import { checkAtGate, listGateChecks } from "./check.ts";
 import { BADGE_TOKEN_TTL_MS, issueBadgeToken, siteGateCode } from "./token.ts";
 
 export const gateRoutes = createRoutes("/api");
 
-const tokenText = z.string().trim().min(1, "Scan the badge again").max(200, "Not a badge code");
-const siteCodeText = z
-  .string()
+const tokenText = singleLineText()
+  .trim()
+  .min(1, "Scan the badge again")
+  .max(200, "Not a badge code")
+  .regex(/^[A-Za-z0-9._-]+$/, "Not a badge code");
+const siteCodeText = singleLineText()
   .trim()
   .regex(/^[0-9]{1,10}-[A-Za-z0-9_-]{10}$/, "Not a site code from a gate sign")
   .optional();
@@ -77,4 +81,9 @@ gateRoutes.get(
     });
     return { siteName: site.name, code, badgeUrl: badgeUrl.toString(), qrPng };
   },
+);
+
+// The shop sees the checks at its own sites only, never the same technician's checks at other shops.
+gateRoutes.get("/gate/checks", { allow: requireRole("provider_admin", "buyer") }, (req) =>
+  listGateChecks(req.user!),
 );

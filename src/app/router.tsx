@@ -14,6 +14,7 @@ export const router = createBrowserRouter([
     ErrorBoundary: RouteError,
     children: [
       { index: true, lazy: () => import("./routes/landing.tsx") },
+      { path: paths.gateCheck, lazy: () => import("./routes/gate/check.tsx") },
       {
         lazy: () => import("./routes/auth/auth-layout.tsx"),
         children: [
@@ -94,6 +95,7 @@ export const router = createBrowserRouter([
                 path: paths.technician.uploadCard,
                 lazy: () => import("./routes/technician/upload-card.tsx"),
               },
+              { path: paths.technician.badge, lazy: () => import("./routes/technician/badge.tsx") },
             ],
           },
           {

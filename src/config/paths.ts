@@ -30,6 +30,7 @@ export const paths = {
   technician: {
     standing: "/technician",
     uploadCard: "/technician/upload-card",
+    badge: "/badge",
   },
   reviewer: {
     queue: "/review",
@@ -47,6 +48,8 @@ export const paths = {
     serviceRequestNew: "/buyer/service-requests/new",
     serviceRequest: "/buyer/service-requests/:requestId",
   },
+  /** Where a scanned gate badge opens; public. */
+  gateCheck: "/gate/check",
   /** One work order, for either side (the e-mails link here). */
   workOrder: "/work-orders/:workOrderId",
   admin: {

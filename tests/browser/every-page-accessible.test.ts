@@ -18,7 +18,11 @@ afterAll(async () => {
 
 // The main pages of each role, with a heading to wait for; the journeys cover the pages that need data first.
 const pagesByRole: { who: string; email: string | null; pages: string[] }[] = [
-  { who: "signed out", email: null, pages: ["/sign-in", "/sign-up", "/forgot-password"] },
+  {
+    who: "signed out",
+    email: null,
+    pages: ["/sign-in", "/sign-up", "/forgot-password", "/gate/check?token=1.abc.not-signed"],
+  },
   {
     who: "provider_admin",
     email: "office@kestrel-ridge.test",
@@ -36,7 +40,7 @@ const pagesByRole: { who: string; email: string | null; pages: string[] }[] = [
   {
     who: "technician",
     email: "tobias@kestrel-ridge.test",
-    pages: ["/technician", "/technician/upload-card"],
+    pages: ["/technician", "/technician/upload-card", "/badge"],
   },
   { who: "reviewer", email: "reviewer@clearbench.test", pages: ["/review"] },
   {

@@ -22,6 +22,7 @@ describe("session cookie and headers in production", () => {
     const prod = buildTestApp({
       NODE_ENV: "production",
       SESSION_SECRET: "a-production-secret-of-some-length",
+      GATE_SECRET: "a-production-gate-secret-of-32-or-more",
     });
     const { users } = await buildCompany("shop", ["buyer"]);
 
@@ -42,6 +43,15 @@ describe("session cookie and headers in production", () => {
 
   it("refuses to start in production with the demo session secret", () => {
     expect(() => loadConfig({ NODE_ENV: "production" })).toThrow(/SESSION_SECRET/);
+  });
+
+  it("refuses to start in production without its own gate secret", () => {
+    const env = { NODE_ENV: "production", SESSION_SECRET: "a-production-secret-of-some-length" };
+    expect(() => loadConfig(env)).toThrow(/GATE_SECRET/);
+    expect(() => loadConfig({ ...env, GATE_SECRET: "too-short" })).toThrow(/GATE_SECRET/);
+    expect(
+      loadConfig({ ...env, GATE_SECRET: "a-production-gate-secret-of-32-or-more" }).GATE_SECRET,
+    ).toBeDefined();
   });
 
   it("hashes passwords with a bcrypt cost of at least 12 by default", () => {

@@ -1,6 +1,4 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import jsQR from "jsqr";
-import { PNG } from "pngjs";
 import request from "supertest";
 import { buildTestApp, type TestApp } from "../../support/test-app.ts";
 import { buildCompany } from "../../support/build-company.ts";
@@ -11,20 +9,13 @@ import { Site } from "../../../server/sites/model.ts";
 import { gateSecret } from "../../../server/config.ts";
 import { issueBadgeToken } from "../../../server/gate/token.ts";
 import { signIn } from "../standing/sign-in-as.ts";
+import { readQr } from "../../support/read-qr.ts";
 
 let t: TestApp;
 beforeAll(() => {
   t = buildTestApp();
 });
 afterAll(() => t.close());
-
-/** Reads the QR back with a decoder independent of the encoder, as a phone camera would (ISO/IEC 18004). */
-function decodeQr(dataUrl: string): string {
-  const png = PNG.sync.read(Buffer.from(dataUrl.replace(/^data:image\/png;base64,/, ""), "base64"));
-  const code = jsQR(new Uint8ClampedArray(png.data), png.width, png.height);
-  if (!code) throw new Error("no QR code found in the badge image");
-  return code.data;
-}
 
 function pathOf(url: string): string {
   const u = new URL(url);
@@ -38,7 +29,7 @@ describe("gate check", () => {
 
     const badge = await technician.get("/api/badge");
     expect(badge.status).toBe(200);
-    const url = decodeQr(badge.body.qrPng);
+    const url = await readQr(badge.body.qrPng);
     expect(url).toBe(badge.body.url);
 
     const before = await request(t.app).get(pathOf(url));
@@ -90,6 +81,37 @@ describe("gate check", () => {
     );
   });
 
+  it("records each check for the technician's company and the site's shop, not for another shop", async () => {
+    const p = await buildClearedProvider({ glExpires: "2099-07-15", wcExpires: "2099-07-15" });
+    const shop = await buildCompany("shop", ["buyer"]);
+    const otherShop = await buildCompany("shop", ["buyer"]);
+    const site = await Site.create({
+      companyId: shop.company.id,
+      name: "South dock",
+      addressLine: "200 Sample Way",
+      postalCode: "60601",
+      timeZone: "America/Chicago",
+      latitude: 41.8858,
+      longitude: -87.6181,
+    });
+    const sign = await (await signIn(t.app, shop.users.buyer!.email)).get(`/api/sites/${site.id}/gate-sign`);
+    const badge = await (
+      await signIn(t.app, p.technicianUser.email)
+    )
+      .get("/api/badge")
+      .query({ site: sign.body.code });
+    await request(t.app).get(pathOf(badge.body.url)).expect(200);
+
+    const office = await (await signIn(t.app, p.admin.email)).get("/api/gate/checks");
+    const theShop = await (await signIn(t.app, shop.users.buyer!.email)).get("/api/gate/checks");
+    const another = await (await signIn(t.app, otherShop.users.buyer!.email)).get("/api/gate/checks");
+
+    const expected = { technicianName: p.technician.name, siteName: "South dock", state: "cleared" };
+    expect(office.body).toEqual([expect.objectContaining(expected)]);
+    expect(theShop.body).toEqual([expect.objectContaining(expected)]);
+    expect(another.body).toEqual([]);
+  });
+
   it("ties a scan to a site only through the code on that site's gate sign", async () => {
     const p = await buildClearedProvider({ glExpires: "2099-07-15", wcExpires: "2099-07-15" });
     const shop = await buildCompany("shop", ["buyer"]);
@@ -110,7 +132,7 @@ describe("gate check", () => {
     ).get(`/api/sites/${site.id}/gate-sign`);
     expect(sign.status).toBe(200);
     expect(foreign.status).toBe(404);
-    expect(decodeQr(sign.body.qrPng)).toBe(sign.body.badgeUrl);
+    expect(await readQr(sign.body.qrPng)).toBe(sign.body.badgeUrl);
 
     const badge = await (
       await signIn(t.app, p.technicianUser.email)
