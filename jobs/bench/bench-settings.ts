@@ -25,4 +25,12 @@ export const benchSettings = {
   database: "clearbench_large",
   resultsDir: path.join(root, "bench", "results"),
   uploads: positive("BENCH_UPLOADS", 30),
+  /**
+   * V8 flags for the production-mode server child, as a deployment would set them: a capped old space and small
+   * young-generation semi-spaces keep the resident set down under load (the default young generation alone grows to
+   * about 50 MB). BENCH_SERVER_NODE_FLAGS="" measures Node's defaults.
+   */
+  serverNodeFlags: (process.env.BENCH_SERVER_NODE_FLAGS ?? "--max-old-space-size=256 --max-semi-space-size=4")
+    .split(/\s+/)
+    .filter(Boolean),
 };

@@ -136,6 +136,7 @@ try {
       HASH_QUEUE: "32",
     },
     "/api/health",
+    benchSettings.serverNodeFlags,
   );
   stopAll.unshift(() => server.stop());
   const rss = sampleRss(server.pid, 100);
