@@ -25,4 +25,10 @@ export const benchSettings = {
   database: "clearbench_large",
   resultsDir: path.join(root, "bench", "results"),
   uploads: positive("BENCH_UPLOADS", 30),
+  /**
+   * V8 flags for the production-mode server child, as a deployment would set them, e.g.
+   * BENCH_SERVER_NODE_FLAGS="--max-old-space-size=256 --max-semi-space-size=4" to try a capped heap against the RSS
+   * target. Empty by default: on a loaded machine a capped heap has not yet been shown not to cost throughput.
+   */
+  serverNodeFlags: (process.env.BENCH_SERVER_NODE_FLAGS ?? "").split(/\s+/).filter(Boolean),
 };

@@ -22,14 +22,16 @@ export function freePort(): Promise<number> {
   });
 }
 
-/** Starts `node --import tsx <entry>` on a free port and waits until `healthPath` answers. */
+/** Starts `node [nodeFlags] --import tsx <entry>` on a free port and waits until `healthPath` answers. */
 export async function startChildServer(
   entry: string,
   env: Record<string, string>,
   healthPath: string,
+  nodeFlags: string[] = [],
 ): Promise<ChildServer> {
   const port = await freePort();
-  const child = spawn(process.execPath, ["--import", "tsx", path.resolve(benchSettings.root, entry)], {
+  const args = [...nodeFlags, "--import", "tsx", path.resolve(benchSettings.root, entry)];
+  const child = spawn(process.execPath, args, {
     cwd: benchSettings.root,
     env: { ...process.env, ...env, PORT: String(port), HOST: "127.0.0.1" },
     stdio: ["ignore", "ignore", "pipe"],
