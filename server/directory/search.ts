@@ -61,7 +61,7 @@ async function siteRequirementSet(
   siteId: number,
 ): Promise<{ id: number; name: string } | null> {
   const rows = await db().query<{ id: number; name: string }>(
-    "SELECT id, name FROM requirement_sets WHERE site_id = $1 AND company_id = $2 ORDER BY id LIMIT 1",
+    "SELECT id, name FROM requirement_sets WHERE site_id = $1 AND company_id = $2 AND active ORDER BY id LIMIT 1",
     { bind: [siteId, companyId], type: QueryTypes.SELECT },
   );
   return rows[0] ?? null;
