@@ -138,24 +138,6 @@ describe("loading the demo scenario", () => {
     ]);
   });
 
-  it("gives the Marlow buyer a site with a machine and that site's requirement set, with standings against it", async () => {
-    const sets = await rows<{ site: string; machines: number; standings: number; cleared: number }>(
-      `SELECT si.name AS site,
-              (SELECT count(*) FROM equipment e WHERE e.site_id = si.id)::int AS machines,
-              (SELECT count(*) FROM technician_standings s WHERE s.requirement_set_id = rs.id)::int AS standings,
-              (SELECT count(*) FROM technician_standings s
-                WHERE s.requirement_set_id = rs.id AND s.standing IN ('cleared','lapsing'))::int AS cleared
-         FROM requirement_sets rs JOIN sites si ON si.id = rs.site_id JOIN companies c ON c.id = rs.company_id
-        WHERE c.name = 'Marlow Precision Components'`,
-    );
-    expect(sets).toHaveLength(1);
-    expect(sets[0]!.site).toBe("Marlow Quarry Bend plant");
-    expect(sets[0]!.machines).toBe(1);
-    expect(sets[0]!.standings).toBeGreaterThan(0);
-    // The site's rules must leave someone to hire, or the first search would be empty.
-    expect(sets[0]!.cleared).toBeGreaterThan(0);
-  });
-
   it("does nothing when data is already there", async () => {
     const before = await count("credentials");
 

@@ -1,6 +1,5 @@
 import { User } from "../../accounts/model.ts";
 import { insertDemoServiceRequests } from "./service-requests.ts";
-import { insertDemoBuyerSite } from "./buyer-site.ts";
 import { hashPassword } from "../../accounts/passwords.ts";
 import { Company } from "../../companies/model.ts";
 import { refreshAllStandings } from "../../standing/index.ts";
@@ -45,7 +44,6 @@ export async function loadDemoScenarioOnce({
   try {
     await db().transaction(async (transaction) => {
       await insertDemoWorld(world, files, passwordHash, transaction);
-      await insertDemoBuyerSite(transaction);
       await afterDemoLoaded(today, transaction);
       await insertDemoServiceRequests(today, transaction);
     });
