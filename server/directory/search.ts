@@ -18,6 +18,7 @@ import { assumptions, estimateTrip, ratingSummary, SCORE_SOURCE } from "./estima
 import { buildFilters, DIRECTORY_FROM, distanceSql, type DirectoryCriteria } from "./search-filters.ts";
 import { SqlParams } from "./sql-params.ts";
 import { storedScoreIsCurrent } from "./stored-score.ts";
+import type { JudgedAgainstDto } from "../../shared/directory/schemas.ts";
 import { loadRequirementsMet } from "./requirements-met.ts";
 
 interface DirectoryRow {
@@ -42,15 +43,29 @@ interface DirectoryRow {
 // "Never lapses" sorts after every real lapse instant (seconds since 1970; year 33658).
 const NEVER_LAPSES_EPOCH = 1e12;
 
-async function ownRequirementSet(companyId: number, id: number): Promise<void> {
-  const rows = await db().query<{ id: number }>(
-    "SELECT id FROM requirement_sets WHERE id = $1 AND company_id = $2",
+async function ownRequirementSet(companyId: number, id: number): Promise<string> {
+  const rows = await db().query<{ id: number; name: string }>(
+    "SELECT id, name FROM requirement_sets WHERE id = $1 AND company_id = $2",
     {
       bind: [id, companyId],
       type: QueryTypes.SELECT,
     },
   );
-  if (rows.length === 0) throw new AppError("not_found", "That requirement set was not found");
+  const row = rows[0];
+  if (!row) throw new AppError("not_found", "That requirement set was not found");
+  return row.name;
+}
+
+/** The set the shop attached to this site (the lowest id when several were), if any. */
+async function siteRequirementSet(
+  companyId: number,
+  siteId: number,
+): Promise<{ id: number; name: string } | null> {
+  const rows = await db().query<{ id: number; name: string }>(
+    "SELECT id, name FROM requirement_sets WHERE site_id = $1 AND company_id = $2 AND active ORDER BY id LIMIT 1",
+    { bind: [siteId, companyId], type: QueryTypes.SELECT },
+  );
+  return rows[0] ?? null;
 }
 
 /** Resolves the shop's own site, set and machine (a foreign one answers 404 like a missing one). */
@@ -90,7 +105,16 @@ async function resolveCriteria(buyer: Express.User, query: DirectoryQuery, asOf:
     controlFamilyKeys:
       controlFamily !== undefined ? await catalogMatchKeys("control_family", controlFamily) : undefined,
   };
-  if (query.requirementSetId !== undefined) await ownRequirementSet(buyer.companyId, query.requirementSetId);
+  let judgedAgainst: JudgedAgainstDto = { kind: "baseline" };
+  if (query.requirementSetId !== undefined) {
+    const name = await ownRequirementSet(buyer.companyId, query.requirementSetId);
+    judgedAgainst = {
+      kind: "requirement_set",
+      requirementSetId: query.requirementSetId,
+      name,
+      fromSite: false,
+    };
+  }
   if (query.siteId !== undefined) {
     const site = await Site.findByPk(query.siteId, { attributes: ["companyId", "latitude", "longitude"] });
     if (!site || site.companyId !== buyer.companyId)
@@ -100,8 +124,16 @@ async function resolveCriteria(buyer: Express.User, query: DirectoryQuery, asOf:
       longitude: site.longitude,
       radiusKm: milesToKm(query.radiusMiles ?? DEFAULT_RADIUS_MILES),
     };
+    // The buyer decides for a site: its own rules apply unless another set was asked for.
+    if (query.requirementSetId === undefined) {
+      const set = await siteRequirementSet(buyer.companyId, query.siteId);
+      if (set) {
+        criteria.requirementSetId = set.id;
+        judgedAgainst = { kind: "requirement_set", requirementSetId: set.id, name: set.name, fromSite: true };
+      }
+    }
   }
-  return { criteria, fromEquipment };
+  return { criteria, fromEquipment, judgedAgainst };
 }
 
 function sortKeySql(sort: DirectorySort, distance: string | null, p: SqlParams, ratedOnly: boolean): string {
@@ -193,7 +225,7 @@ export async function searchDirectory(
   query: DirectoryQuery,
   asOf = new Date(),
 ): Promise<DirectoryPageDto> {
-  const { criteria, fromEquipment } = await resolveCriteria(buyer, query, asOf);
+  const { criteria, fromEquipment, judgedAgainst } = await resolveCriteria(buyer, query, asOf);
   const sort: DirectorySort = query.sort ?? (criteria.site ? "distance" : "score");
   if (sort === "distance" && !criteria.site) {
     throw new AppError("bad_request", "Sorting by distance needs a site", [
@@ -210,11 +242,19 @@ export async function searchDirectory(
   const after = cursor
     ? `WHERE (x.sort_key, x.id) > (${p.add(cursor.key)}::float8, ${p.add(cursor.id)}::int)`
     : "";
+  // Under a requirement set the badge shows that set's standing, never the baseline's (which may be wider).
+  const setParam = criteria.requirementSetId === undefined ? null : p.add(criteria.requirementSetId);
+  const setStanding = (col: string) =>
+    `(SELECT ss.${col} FROM technician_standings ss WHERE ss.technician_id = t.id AND ss.requirement_set_id = ${setParam}) AS ${col}`;
+  const standingCols =
+    setParam === null
+      ? "b.standing, b.earliest_lapse"
+      : `${setStanding("standing")}, ${setStanding("earliest_lapse")}`;
   const limit = p.add(query.limit + 1);
   const rows = await db().query<DirectoryRow>(
     `SELECT x.* FROM (
        SELECT t.id, t.name, t.company_id, c.name AS company_name, t.technologies, t.control_families, t.service_radius_km,
-              t.hourly_rate_cents, t.travel_rate_cents, t.mileage_rate_cents, b.standing, b.earliest_lapse,
+              t.hourly_rate_cents, t.travel_rate_cents, t.mileage_rate_cents, ${standingCols},
               coalesce(r.review_count, 0)::int AS review_count, coalesce(r.star_sum, 0)::int AS star_sum,
               ${distance ?? "NULL::float8"} AS distance_km, ${sortKey} AS sort_key
        ${DIRECTORY_FROM}${where}
@@ -247,5 +287,6 @@ export async function searchDirectory(
     fromEquipment,
     scoreSource: SCORE_SOURCE,
     assumptions: assumptions(query.onSiteHours),
+    judgedAgainst,
   };
 }

@@ -1,4 +1,4 @@
-import type { Transaction } from "sequelize";
+import { QueryTypes, type Transaction } from "sequelize";
 import type { RaiseWorkOrder } from "../../shared/work-orders/schemas.ts";
 import { isClearedNow, unmetRequirements } from "../../shared/work-orders/standing-snapshot.ts";
 import { preferredDateProblem } from "../../shared/work-orders/preferred-dates.ts";
@@ -57,6 +57,18 @@ async function resolveTargets(buyer: Express.User, input: RaiseWorkOrder) {
   return { site, technician, equipment, technology };
 }
 
+async function siteRequirementSetId(
+  companyId: number,
+  siteId: number,
+  transaction: Transaction,
+): Promise<number | null> {
+  const rows = await db().query<{ id: number }>(
+    "SELECT id FROM requirement_sets WHERE site_id = $1 AND company_id = $2 AND active ORDER BY id LIMIT 1",
+    { bind: [siteId, companyId], type: QueryTypes.SELECT, transaction },
+  );
+  return rows[0]?.id ?? null;
+}
+
 /**
  * Writes a work order inside the caller's transaction, after the standing check at this very instant (409 naming what
  * is unmet otherwise). Used by a buyer raising one directly and by an accepted service-request estimate, so both carry
@@ -73,13 +85,12 @@ export async function raiseWorkOrderWithin(
   const now = new Date();
   checkPreferredDates(input.preferredDates, now);
   const { site, technician, equipment, technology } = await resolveTargets(buyer, input);
-  const snapshot = await standingSnapshotNow(
-    technician.id,
-    input.requirementSetId ?? null,
-    now,
-    warningDays,
-    transaction,
-  );
+  // Left out (not null): the site's own rules decide, as they do in the directory.
+  const requirementSetId =
+    input.requirementSetId === undefined
+      ? await siteRequirementSetId(buyer.companyId, site.id, transaction)
+      : input.requirementSetId;
+  const snapshot = await standingSnapshotNow(technician.id, requirementSetId, now, warningDays, transaction);
   if (!isClearedNow(snapshot.standing)) {
     throw new AppError(
       "conflict",
@@ -94,7 +105,7 @@ export async function raiseWorkOrderWithin(
       equipmentId: equipment?.id ?? null,
       technicianId: technician.id,
       serviceCompanyId: technician.company_id,
-      requirementSetId: input.requirementSetId ?? null,
+      requirementSetId,
       technology,
       problem: input.problem,
       urgency: input.urgency,

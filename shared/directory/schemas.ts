@@ -142,7 +142,17 @@ export interface DirectoryPageDto {
   fromEquipment: { technology: string; controlFamily: string; builder?: string } | null;
   scoreSource: string;
   assumptions: DirectoryAssumptionsDto;
+  /**
+   * What the rows' standing was judged against: the shop's requirement set (asked for, or the chosen site's own
+   * set when none was asked for), or only the platform baseline, which covers the company's insurance and nothing
+   * the technician carries.
+   */
+  judgedAgainst: JudgedAgainstDto;
 }
+
+export type JudgedAgainstDto =
+  | { kind: "requirement_set"; requirementSetId: number; name: string; fromSite: boolean }
+  | { kind: "baseline" };
 
 export interface ProfileCredentialDto {
   id: number;

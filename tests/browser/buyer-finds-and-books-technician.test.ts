@@ -77,7 +77,7 @@ describe("a buyer finds a cleared technician and books the job", () => {
     await atPhoneWidth(buyer, "buyer-books-2-directory-390");
 
     expect(new URL(buyer.url()).searchParams.get("siteId")).not.toBeNull();
-    await expect(row.getByText("Cleared").count()).resolves.toBe(1);
+    await expect(row.getByText("Company insurance in force").count()).resolves.toBe(1);
     await expect(row.getByText("straight line").count()).resolves.toBe(1);
     // Distances read in miles, never kilometres.
     await expect(row.getByText(/\d miles?\b/).count()).resolves.toBeGreaterThan(0);

@@ -141,7 +141,7 @@ describe("the daily lapse job takes a technician out of the buyer's directory", 
     await technicianRow(buyer).waitFor();
     await screenshot(buyer, "lapse-1-listed");
 
-    await expect(technicianRow(buyer).getByText("Cleared").count()).resolves.toBe(1);
+    await expect(technicianRow(buyer).getByText("Company insurance in force").count()).resolves.toBe(1);
 
     // Step 2 (now): the buyer keeps the technician on the roster, to hear when they stop clearing.
     await technicianRow(buyer).getByRole("link", { name: TECHNICIAN }).click();
@@ -225,7 +225,7 @@ describe("the daily lapse job takes a technician out of the buyer's directory", 
     await technicianRow(buyer).waitFor();
     await screenshot(buyer, "lapse-5-renewed-now");
 
-    await expect(technicianRow(buyer).getByText("Cleared").count()).resolves.toBe(1);
+    await expect(technicianRow(buyer).getByText("Company insurance in force").count()).resolves.toBe(1);
 
     // Step 6 (asOf): the job again. The renewals now lapse within 60 days of asOf, so it warns about them and
     // recomputes Kestrel Ridge at asOf: still listed, and "lapsing" proves the standing was judged at asOf, not now.

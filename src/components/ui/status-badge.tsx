@@ -5,8 +5,9 @@ import { StatusMark } from "./status-mark.tsx";
 export type BadgeStatus = StatusMeaning;
 
 type StatusBadgeProps =
-  | { status: "lapsing"; daysLeft?: number | undefined }
-  | { status: Exclude<BadgeStatus, "lapsing">; daysLeft?: never };
+  | { status: "lapsing"; daysLeft?: number | undefined; word?: never }
+  // `word` narrows the status's wording where the rules judged were fewer than the word promises.
+  | { status: Exclude<BadgeStatus, "lapsing">; daysLeft?: never; word?: string | undefined };
 
 const lapsingWord = (daysLeft: number | undefined): string =>
   daysLeft === undefined
@@ -28,7 +29,7 @@ const background = (status: BadgeStatus) =>
   backgrounds[statusMarks[status].tone] ?? "border-ink-300 bg-white";
 
 export const statusWord = (props: StatusBadgeProps): string =>
-  props.status === "lapsing" ? lapsingWord(props.daysLeft) : statusMarks[props.status].word;
+  props.status === "lapsing" ? lapsingWord(props.daysLeft) : (props.word ?? statusMarks[props.status].word);
 
 export function StatusBadge(props: StatusBadgeProps) {
   return (

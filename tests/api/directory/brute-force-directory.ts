@@ -39,57 +39,65 @@ const same = (a: unknown, b: string) => typeof a === "string" && a.trim().toLowe
 
 /** The directory's rules written plainly over in-memory rows, independent of the SQL. */
 export function bruteForceDirectory(world: DirectoryWorld, f: DrawnFilters, now: Date): number[] {
-  return world.technicians
-    .filter((t) => t.active && (t.baseline === "cleared" || t.baseline === "lapsing"))
-    .filter((t) => (f.credentialTypes ?? []).every((code) => holds(t, code, now)))
-    .filter((t) =>
-      f.oemBuilder === undefined && f.controlFamily === undefined && f.minOemLevel === undefined
-        ? true
-        : holds(
-            t,
-            "oem_training",
-            now,
-            (x) =>
-              (f.oemBuilder === undefined || same(x.builder, f.oemBuilder)) &&
-              (f.controlFamily === undefined || same(x.controlFamily, f.controlFamily)) &&
-              (f.minOemLevel === undefined || Number(x.level) >= f.minOemLevel),
-          ),
-    )
-    .filter((t) => f.technology === undefined || t.technologies.includes(f.technology))
-    .filter((t) =>
-      f.minEachOccurrence === undefined && f.minAggregate === undefined
-        ? true
-        : holds(
-            t,
-            "general_liability",
-            now,
-            (x) =>
-              (f.minEachOccurrence === undefined || limit(x, "eachOccurrence") >= f.minEachOccurrence) &&
-              (f.minAggregate === undefined || limit(x, "generalAggregate") >= f.minAggregate),
-          ),
-    )
-    .filter(
-      (t) =>
-        f.minAutoCsl === undefined ||
-        holds(t, "auto_liability", now, (x) => limit(x, "combinedSingleLimit") >= f.minAutoCsl!),
-    )
-    .filter((t) => !f.requirementSet || t.setStanding === "cleared" || t.setStanding === "lapsing")
-    .filter((t) => {
-      if (f.radiusMiles === undefined) return true;
-      const km = greatCircleDistanceKm(
-        { lat: world.site.latitude, lon: world.site.longitude },
-        { lat: t.latitude, lon: t.longitude },
-      );
-      return km <= Math.min(t.serviceRadiusKm, milesToKm(f.radiusMiles));
-    })
-    .filter(
-      (t) => f.minRating === undefined || (t.ratingCount > 0 && t.starSum / t.ratingCount >= f.minRating),
-    )
-    .filter(
-      (t) => f.q === undefined || `${t.name}\n${t.companyName}`.toLowerCase().includes(f.q.toLowerCase()),
-    )
-    .map((t) => t.id)
-    .sort((a, b) => a - b);
+  return (
+    world.technicians
+      .filter((t) => t.active && (t.baseline === "cleared" || t.baseline === "lapsing"))
+      .filter((t) => (f.credentialTypes ?? []).every((code) => holds(t, code, now)))
+      .filter((t) =>
+        f.oemBuilder === undefined && f.controlFamily === undefined && f.minOemLevel === undefined
+          ? true
+          : holds(
+              t,
+              "oem_training",
+              now,
+              (x) =>
+                (f.oemBuilder === undefined || same(x.builder, f.oemBuilder)) &&
+                (f.controlFamily === undefined || same(x.controlFamily, f.controlFamily)) &&
+                (f.minOemLevel === undefined || Number(x.level) >= f.minOemLevel),
+            ),
+      )
+      .filter((t) => f.technology === undefined || t.technologies.includes(f.technology))
+      .filter((t) =>
+        f.minEachOccurrence === undefined && f.minAggregate === undefined
+          ? true
+          : holds(
+              t,
+              "general_liability",
+              now,
+              (x) =>
+                (f.minEachOccurrence === undefined || limit(x, "eachOccurrence") >= f.minEachOccurrence) &&
+                (f.minAggregate === undefined || limit(x, "generalAggregate") >= f.minAggregate),
+            ),
+      )
+      .filter(
+        (t) =>
+          f.minAutoCsl === undefined ||
+          holds(t, "auto_liability", now, (x) => limit(x, "combinedSingleLimit") >= f.minAutoCsl!),
+      )
+      // The world's set belongs to its site, so choosing the site applies that set too.
+      .filter(
+        (t) =>
+          (!f.requirementSet && f.radiusMiles === undefined) ||
+          t.setStanding === "cleared" ||
+          t.setStanding === "lapsing",
+      )
+      .filter((t) => {
+        if (f.radiusMiles === undefined) return true;
+        const km = greatCircleDistanceKm(
+          { lat: world.site.latitude, lon: world.site.longitude },
+          { lat: t.latitude, lon: t.longitude },
+        );
+        return km <= Math.min(t.serviceRadiusKm, milesToKm(f.radiusMiles));
+      })
+      .filter(
+        (t) => f.minRating === undefined || (t.ratingCount > 0 && t.starSum / t.ratingCount >= f.minRating),
+      )
+      .filter(
+        (t) => f.q === undefined || `${t.name}\n${t.companyName}`.toLowerCase().includes(f.q.toLowerCase()),
+      )
+      .map((t) => t.id)
+      .sort((a, b) => a - b)
+  );
 }
 
 /** The same search as a query string for GET /api/directory. */

@@ -78,11 +78,16 @@ function Results({ search, onSiteHours }: { search: string; onSiteHours: number 
         {first.assumptions.averageSpeedMph} mph on roads{" "}
         {Math.round((first.assumptions.roadFactor - 1) * 100)}% longer than the straight line.
       </p>
+      <p className="text-sm font-medium text-ink-900" data-testid="directory-judged-against">
+        {first.judgedAgainst.kind === "requirement_set"
+          ? `Judged against ${first.judgedAgainst.name}${first.judgedAgainst.fromSite ? ", this site's requirement set" : ""}.`
+          : "Judged against the platform baseline only: the company's insurance is in force; no card the technician holds was checked. Choose a site or a requirement set to apply your rules."}
+      </p>
       <div className="hidden md:block">
-        <DirectoryResultsTable rows={rows} onSiteHours={onSiteHours} />
+        <DirectoryResultsTable rows={rows} onSiteHours={onSiteHours} judgedAgainst={first.judgedAgainst} />
       </div>
       <div className="md:hidden">
-        <DirectoryResultCards rows={rows} onSiteHours={onSiteHours} />
+        <DirectoryResultCards rows={rows} onSiteHours={onSiteHours} judgedAgainst={first.judgedAgainst} />
       </div>
       {results.hasNextPage && (
         <Button

@@ -33,7 +33,20 @@ export function Component() {
   const { data: technician } = useSuspenseQuery(directoryTechnicianQuery(technicianId));
   const { data: sites } = useSuspenseQuery(sitesQuery());
   const { data: sets } = useSuspenseQuery(requirementSetsQuery());
-  const [siteId, setSiteId] = useState(sites.length === 1 ? String(sites[0]!.id) : "");
+  const siteSet = (id: string) => sets.find((s) => String(s.siteId) === id && id !== "");
+  const fromSearch = sites.find((s) => String(s.id) === search.get("siteId"));
+  const [siteId, setSiteId] = useState(
+    fromSearch ? String(fromSearch.id) : sites.length === 1 ? String(sites[0]!.id) : "",
+  );
+  const [requirementSetId, setRequirementSetId] = useState(() => {
+    const own = siteSet(siteId);
+    return own ? String(own.id) : "";
+  });
+  const chooseSite = (id: string) => {
+    setSiteId(id);
+    const own = siteSet(id);
+    setRequirementSetId(own ? String(own.id) : "");
+  };
   const equipment = useSiteEquipment(siteId ? Number(siteId) : null);
   const raise = useRaiseWorkOrder();
   return (
@@ -58,13 +71,15 @@ export function Component() {
         technicianName={technician.name}
         sites={sites.map((s) => ({ value: String(s.id), label: s.name }))}
         siteId={siteId}
-        onSiteChange={setSiteId}
+        onSiteChange={chooseSite}
         machines={(equipment.data ?? []).map((m) => ({
           id: m.id,
           label: `${m.builder} ${m.model} (${technologyLabels[m.technology as MachineTechnology] ?? m.technology}, ${m.controlFamily})`,
           technology: m.technology,
         }))}
         requirementSets={sets.map((s) => ({ value: String(s.id), label: s.name }))}
+        requirementSetId={requirementSetId}
+        onRequirementSetChange={setRequirementSetId}
         pending={raise.isPending}
         serverError={raise.error}
         onSubmit={(input) => raise.mutate(input, { onSuccess: (wo) => navigate(hrefs.workOrder(wo.id)) })}

@@ -1,6 +1,6 @@
 import type { ReactNode } from "react";
 import { useSuspenseQuery } from "@tanstack/react-query";
-import { Link, useParams, type LoaderFunctionArgs } from "react-router-dom";
+import { Link, useParams, useSearchParams, type LoaderFunctionArgs } from "react-router-dom";
 import { wholeMilesFromKm } from "@shared/geo/units.ts";
 import { technologyLabels, type MachineTechnology } from "@shared/technicians/schemas.ts";
 import { hrefs } from "@/config/paths.ts";
@@ -11,6 +11,7 @@ import { PageHeader } from "@/components/ui/page-header.tsx";
 import { SafetyCaution } from "@/components/ui/safety-caution.tsx";
 import { StatusKey } from "@/components/ui/status-key.tsx";
 import { directoryTechnicianQuery } from "@/features/directory/api/get-directory-technician.ts";
+import type { ProfileStanding } from "@/features/directory/api/directory-shapes.ts";
 import { DirectoryStandingBadge } from "@/features/directory/components/directory-standing-badge.tsx";
 import { ProfileCredentials } from "@/features/directory/components/profile-credentials.tsx";
 import { ProfileReviews } from "@/features/directory/components/profile-reviews.tsx";
@@ -65,9 +66,22 @@ function Section({ title, children }: { title: string; children: ReactNode }) {
   );
 }
 
+/** The set the buyer decides by: the chosen site's, else the first set tied to a site; none means baseline only. */
+function pickDecidingSet(
+  sets: readonly ProfileStanding[],
+  siteId: number | null,
+): ProfileStanding | undefined {
+  return (
+    (siteId !== null ? sets.find((s) => s.siteId === siteId) : undefined) ??
+    sets.find((s) => s.siteId !== null)
+  );
+}
+
 export function Component() {
   const id = technicianIdOf(useParams().technicianId);
   const { data: t } = useSuspenseQuery(directoryTechnicianQuery(id));
+  const [search] = useSearchParams();
+  const decidingSet = pickDecidingSet(t.requirementSets, Number(search.get("siteId")) || null);
   return (
     <>
       <PageHeader
@@ -84,7 +98,24 @@ export function Component() {
       />
       <div className="space-y-8">
         <div className="flex flex-wrap items-center gap-3">
-          <DirectoryStandingBadge standing={t.baseline.standing} earliestLapse={t.baseline.earliestLapse} />
+          {decidingSet ? (
+            <DirectoryStandingBadge
+              standing={decidingSet.standing}
+              earliestLapse={decidingSet.earliestLapse}
+              judgedAgainst={{
+                kind: "requirement_set",
+                requirementSetId: decidingSet.requirementSetId,
+                name: decidingSet.name,
+                fromSite: decidingSet.siteId !== null,
+              }}
+            />
+          ) : (
+            <DirectoryStandingBadge
+              standing={t.baseline.standing}
+              earliestLapse={t.baseline.earliestLapse}
+              judgedAgainst={{ kind: "baseline" }}
+            />
+          )}
           <span className="text-sm text-ink-800">
             {t.technologies.map((x) => technologyLabels[x as MachineTechnology] ?? x).join(", ") ||
               "No technologies listed"}

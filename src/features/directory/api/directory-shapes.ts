@@ -51,6 +51,17 @@ export const directoryRowSchema = z.object({
 });
 export type DirectoryRow = z.infer<typeof directoryRowSchema>;
 
+export const judgedAgainstSchema = z.discriminatedUnion("kind", [
+  z.object({
+    kind: z.literal("requirement_set"),
+    requirementSetId: z.number(),
+    name: z.string(),
+    fromSite: z.boolean(),
+  }),
+  z.object({ kind: z.literal("baseline") }),
+]);
+export type JudgedAgainst = z.infer<typeof judgedAgainstSchema>;
+
 export const directoryPageSchema = z.object({
   rows: z.array(directoryRowSchema),
   nextCursor: z.string().nullable(),
@@ -59,6 +70,7 @@ export const directoryPageSchema = z.object({
   fromEquipment: z.object({ technology: z.string(), controlFamily: z.string() }).nullable(),
   scoreSource: z.string(),
   assumptions: assumptionsSchema,
+  judgedAgainst: judgedAgainstSchema,
 });
 export type DirectoryPage = z.infer<typeof directoryPageSchema>;
 

@@ -1,4 +1,4 @@
-import type { DirectoryRow } from "../api/directory-shapes.ts";
+import type { DirectoryRow, JudgedAgainst } from "../api/directory-shapes.ts";
 import { CallOutEstimate } from "./call-out-estimate.tsx";
 import { DirectoryStandingBadge } from "./directory-standing-badge.tsx";
 import { DistanceText, RatesText, TechnicianLink } from "./directory-row-parts.tsx";
@@ -6,7 +6,15 @@ import { RatingSummary } from "./rating-summary.tsx";
 import { RequirementsMetLine } from "./requirements-met-line.tsx";
 
 /** Phone widths: one card per technician, with targets large enough for a thumb. */
-export function DirectoryResultCards({ rows, onSiteHours }: { rows: DirectoryRow[]; onSiteHours: number }) {
+export function DirectoryResultCards({
+  rows,
+  onSiteHours,
+  judgedAgainst,
+}: {
+  rows: DirectoryRow[];
+  onSiteHours: number;
+  judgedAgainst?: JudgedAgainst | undefined;
+}) {
   return (
     <ul className="space-y-3" aria-label="Cleared technicians">
       {rows.map((row) => (
@@ -16,7 +24,11 @@ export function DirectoryResultCards({ rows, onSiteHours }: { rows: DirectoryRow
               <TechnicianLink row={row} />
               <span className="block text-sm text-ink-700">{row.companyName}</span>
             </div>
-            <DirectoryStandingBadge standing={row.standing} earliestLapse={row.earliestLapse} />
+            <DirectoryStandingBadge
+              standing={row.standing}
+              earliestLapse={row.earliestLapse}
+              judgedAgainst={judgedAgainst}
+            />
           </div>
           <div className="grid grid-cols-2 gap-3">
             <DistanceText row={row} />

@@ -1,6 +1,6 @@
 import { useMemo } from "react";
 import { DataTable, dataTableColumns } from "@/components/ui/data-table.tsx";
-import type { DirectoryRow } from "../api/directory-shapes.ts";
+import type { DirectoryRow, JudgedAgainst } from "../api/directory-shapes.ts";
 import { CallOutEstimate } from "./call-out-estimate.tsx";
 import { DirectoryStandingBadge } from "./directory-standing-badge.tsx";
 import { DistanceText, RatesText, TechnicianLink } from "./directory-row-parts.tsx";
@@ -10,7 +10,15 @@ import { RequirementsMetLine } from "./requirements-met-line.tsx";
 const column = dataTableColumns<DirectoryRow>();
 
 /** Wide screens: one dense row per technician, in the server's order (the sort lives in the URL). */
-export function DirectoryResultsTable({ rows, onSiteHours }: { rows: DirectoryRow[]; onSiteHours: number }) {
+export function DirectoryResultsTable({
+  rows,
+  onSiteHours,
+  judgedAgainst,
+}: {
+  rows: DirectoryRow[];
+  onSiteHours: number;
+  judgedAgainst?: JudgedAgainst | undefined;
+}) {
   const columns = useMemo(
     () =>
       column.columns([
@@ -32,6 +40,7 @@ export function DirectoryResultsTable({ rows, onSiteHours }: { rows: DirectoryRo
               <DirectoryStandingBadge
                 standing={info.getValue()}
                 earliestLapse={info.row.original.earliestLapse}
+                judgedAgainst={judgedAgainst}
               />
               <RequirementsMetLine row={info.row.original} />
             </div>
@@ -69,7 +78,7 @@ export function DirectoryResultsTable({ rows, onSiteHours }: { rows: DirectoryRo
           cell: (info) => <RatesText row={info.row.original} />,
         }),
       ]),
-    [onSiteHours],
+    [onSiteHours, judgedAgainst],
   );
   return (
     <DataTable

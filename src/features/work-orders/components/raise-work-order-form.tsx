@@ -26,6 +26,9 @@ type RaiseWorkOrderFormProps = {
   onSiteChange: (siteId: string) => void;
   machines: readonly MachineChoice[];
   requirementSets: readonly SelectOption[];
+  /** Follows the site: its own set is chosen for it, and the buyer may pick another. */
+  requirementSetId: string;
+  onRequirementSetChange: (requirementSetId: string) => void;
   pending: boolean;
   serverError: unknown;
   onSubmit: (input: RaiseWorkOrder) => void;
@@ -73,6 +76,8 @@ export function RaiseWorkOrderForm(props: RaiseWorkOrderFormProps) {
     onSiteChange,
     machines,
     requirementSets,
+    requirementSetId,
+    onRequirementSetChange,
     pending,
     serverError,
     onSubmit,
@@ -160,8 +165,9 @@ export function RaiseWorkOrderForm(props: RaiseWorkOrderFormProps) {
           label={labels.requirementSetId}
           name="requirementSetId"
           options={requirementSets}
-          placeholder="Platform baseline only"
-          defaultValue=""
+          placeholder="Platform baseline only (company insurance)"
+          value={requirementSetId}
+          onChange={(e) => onRequirementSetChange(e.target.value)}
           error={errors.requirementSetId}
         />
       </div>
