@@ -261,10 +261,13 @@ const SECTION_LABELS = {
   effectiveDate: /\b(?:POLICY\s+)?(?:EFFECTIVE(?:\s+DATE)?|EFF\.?(?:\s+DATE)?|PERIOD\s+FROM|FROM)\s*[:.]?/i,
   expirationDate:
     /\b(?:POLICY\s+)?(?:EXPIRATION(?:\s+DATE)?|EXPIRES|EXPIRY(?:\s+DATE)?|EXP\.?(?:\s+DATE)?|TO)\s*[:.]?/i,
-  additionalInsured: /\bADD(?:ITIONA)?L\.?\s*INS(?:URED|D)?\b\s*[:.?]?/i,
-  waiverOfSubrogation: /\b(?:WAIVER\s+OF\s+SUBROGATION|SUBR(?:OGATION)?\.?\s*(?:WVD|WAIVED))\b\s*[:.?]?/i,
+  // The short forms "AI" and "WOS" only as a label: followed by a colon, a cell gap or a lone mark.
+  additionalInsured:
+    /\b(?:ADD(?:ITIONA)?L\.?\s*INS(?:URED|D)?\b|A\.?I\.?(?=\s*:|\s{3,}|\s+(?:Y|N|YES|NO|X)\s*$))\s*[:.?]?/i,
+  waiverOfSubrogation:
+    /\b(?:(?:WAIVER\s+OF\s+SUBROGATION|SUBR(?:OGATION)?\.?\s*(?:WVD|WAIVED))\b|W\.?O\.?S\.?(?=\s*:|\s{3,}|\s+(?:Y|N|YES|NO|X)\s*$))\s*[:.?]?/i,
   insurer:
-    /\b(?:INSURER(?:\s+AFFORDING\s+COVERAGE)?|CARRIER|WRITTEN\s+BY|INSURANCE\s+COMPANY)\b(?!\s+[A-F]\s*[:;.,])(?:\s*[:.]|(?=\s{3,})|\s*$)/i,
+    /\b(?:(?:INSURER|COMPANY)\s+AFFORDING\s+COVERAGE|INSURER|CARRIER|WRITTEN\s+BY|INSURANCE\s+COMPANY)\b(?!\s+[A-F]\s*[:;.,])(?:\s*[:.]|(?=\s{3,})|\s*$)/i,
   naic: /\bNAIC\s*(?:#|NO\.?|CODE)?\s*[:.]?\s*([\dOo]{5})\b/i,
 } as const;
 

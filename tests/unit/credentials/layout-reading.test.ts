@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { proposeCoverages, proposeFields } from "../../../shared/credentials/extract-fields.ts";
+import { layoutText } from "../../../shared/credentials/locate-values.ts";
 
 describe("reading certificates laid out one field per line", () => {
   const text = [
@@ -133,5 +134,52 @@ describe("reading training cards in other wordings", () => {
     const fields = proposeFields("arc_flash", "training", text).fields;
 
     expect(fields.course).toBe("Electrical Safety and Arc Flash Awareness for machine service technicians");
+  });
+});
+
+describe("reading two coverages printed side by side", () => {
+  // Common practice: certificates that are not the standard form often set coverage blocks in two columns.
+  const at = (text: string, x: number, y: number) => ({
+    page: 1,
+    text,
+    x,
+    y,
+    w: text.length * 0.006,
+    h: 0.012,
+  });
+  const rows: Array<[string, string, string, string]> = [
+    ["Insurer", "Fernhollow Mutual", "Insurer", "Ashcombe Casualty"],
+    ["Policy number", "GL-204411", "Policy number", "CA-771203"],
+    ["Effective date", "03/15/2026", "Effective date", "04/01/2026"],
+  ];
+  const items = [
+    at("Commercial General Liability", 0.05, 0.1),
+    at("Business Auto Liability", 0.55, 0.1),
+    ...rows.flatMap(([l1, v1, l2, v2], i) => [
+      at(l1, 0.05, 0.13 + i * 0.02),
+      at(v1, 0.25, 0.13 + i * 0.02),
+      at(l2, 0.55, 0.13 + i * 0.02),
+      at(v2, 0.75, 0.13 + i * 0.02),
+    ]),
+  ];
+
+  it("reads the left block to its end before the right one, so no value is joined to the other's labels", () => {
+    const text = layoutText(items);
+
+    expect(text.split("\n").slice(0, 4)).toEqual([
+      "Commercial General Liability",
+      "Insurer   Fernhollow Mutual",
+      "Policy number   GL-204411",
+      "Effective date   03/15/2026",
+    ]);
+    const auto = proposeFields("auto_liability", "insurance", text).fields;
+    expect(auto.policyNumber).toBe("CA-771203");
+    expect(auto.effectiveDate).toBe("2026-04-01");
+  });
+
+  it("keeps a label and value table that never repeats its label across a row as one column", () => {
+    const table = [at("Policy number", 0.05, 0.1), at("GL-204411", 0.55, 0.1)];
+
+    expect(layoutText(table)).toBe("Policy number   GL-204411");
   });
 });
