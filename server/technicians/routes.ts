@@ -9,6 +9,7 @@ import { createInvitedUser } from "../accounts/index.ts";
 import { Company } from "../companies/model.ts";
 import { singleFileUpload } from "../http/upload.ts";
 import { importTemplateCsv } from "../../shared/technicians/bulk-import.ts";
+import { singleLineText } from "../../shared/api/text.ts";
 import { previewImport, runImport } from "./bulk-import.ts";
 import {
   canEditTechnician,
@@ -31,7 +32,7 @@ technicianRoutes.get("", { allow: canListOwnTechnicians }, (req) =>
   listCompanyTechnicians(req.user!.companyId),
 );
 
-const importBodySchema = z.object({ mapping: z.string().max(5_000).optional() });
+const importBodySchema = z.object({ mapping: singleLineText().max(5_000).optional() });
 
 technicianRoutes.get("/import/template", { allow: canManageTechnicians }, (_req, res) => {
   res.type("text/csv").attachment("technicians-template.csv").send(importTemplateCsv());
