@@ -26,7 +26,7 @@ import {
 const canManageBroker = requireRole("provider_admin");
 const brokerLinkHolder = { ...anyone, name: "anyone holding an upload link" };
 
-/** Refuses a bad, spent or expired link before multer writes any of the file to disk. */
+/** Refuses a bad, spent or expired link before its input is read, and before multer writes any of a file to disk. */
 const linkStillOpen: RequestHandler = (req, _res, next) => {
   const parsed = brokerTokenParamsSchema.safeParse(req.params);
   if (!parsed.success) return next(new AppError("not_found", "This link was not found"));
@@ -57,7 +57,11 @@ brokerRoutes.post(
 
 brokerRoutes.get(
   "/broker-uploads/:token",
-  { allow: brokerLinkHolder, before: [abuseLimit("brokerLink")], params: brokerTokenParamsSchema },
+  {
+    allow: brokerLinkHolder,
+    before: [abuseLimit("brokerLink"), linkStillOpen],
+    params: brokerTokenParamsSchema,
+  },
   (_req, _res, { params }) => showBrokerUpload(params.token),
 );
 

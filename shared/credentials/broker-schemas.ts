@@ -33,8 +33,9 @@ export const requestBrokerCertificateSchema = z
   });
 export type RequestBrokerCertificate = z.infer<typeof requestBrokerCertificateSchema>;
 
-// Any short string is looked up (a malformed token answers 404 like an unknown one, with nothing to tell a guesser).
-export const brokerTokenParamsSchema = z.object({ token: z.string().min(1).max(100) });
+// Tokens are base64url. The route checks the link before this schema, so a malformed token answers 404 like an unknown
+// one, with nothing to tell a guesser.
+export const brokerTokenParamsSchema = z.object({ token: z.string().regex(/^[A-Za-z0-9_-]{1,100}$/) });
 
 export interface BrokerContactDto {
   id: number;

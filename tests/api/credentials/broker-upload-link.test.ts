@@ -103,7 +103,9 @@ describe("certificates straight from the broker", () => {
 
     const expired = await upload(token, bytes, "late.pdf");
     const unknown = await upload("A".repeat(43), bytes, "guess.pdf");
-    const malformed = await anonymous().get("/api/broker-uploads/x").set(CSRF_HEADER, CSRF_HEADER_VALUE);
+    const malformed = await anonymous()
+      .get("/api/broker-uploads/not%00a%20token")
+      .set(CSRF_HEADER, CSRF_HEADER_VALUE);
 
     expect(expired.status).toBe(410);
     expect(unknown.status).toBe(404);
