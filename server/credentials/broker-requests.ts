@@ -174,6 +174,17 @@ export async function requestBrokerCertificate(
       },
       transaction,
     );
+    if (created.credentialId !== null)
+      await recordAudit(
+        {
+          actorUserId: user.id,
+          action: "broker_request.sent",
+          subjectType: "credential",
+          subjectId: created.credentialId,
+          after: { requestId: created.id, brokerEmail: broker.email },
+        },
+        transaction,
+      );
     await enqueueMail(
       brokerRequestMail({
         to: broker.email,

@@ -11,6 +11,7 @@ import { CSRF_HEADER, CSRF_HEADER_VALUE } from "../../../shared/api/error-body.t
 import { Document } from "../../../server/credentials/model.ts";
 import { BrokerUploadRequest } from "../../../server/credentials/broker-model.ts";
 import { Notification } from "../../../server/notices/model.ts";
+import { remindBrokers } from "../../../server/credentials/broker-reminders.ts";
 
 let t: TestApp;
 let mail: Awaited<ReturnType<typeof startTestMailCatcher>>;
@@ -182,5 +183,46 @@ describe("certificates straight from the broker", () => {
     expect(mail.to(shop.user.email).map((m) => m.subject)).toEqual([
       expect.stringContaining(provider.company.name),
     ]);
+  });
+});
+
+describe("reminding the broker before the lapse", () => {
+  it("sends one reminder per threshold with a fresh link, shown on the coverage's trail, and none once the certificate arrived", async () => {
+    const provider = await buildProvider(t.app);
+    const brokerEmail = await recordBroker(provider);
+    const coverage = await submitLiabilityCertificate(provider.admin, 67);
+    await provider.admin.post("/api/broker-requests").send({ credentialId: coverage.id }).expect(201);
+    const firstToken = await tokenMailedTo(brokerEmail);
+    const { Credential } = await import("../../../server/credentials/model.ts");
+    // Set close to now so the request (sent now) precedes every reminder run below.
+    const lapsesAt = new Date(Date.now() + 60 * 24 * 3600 * 1000);
+    await Credential.update({ lapsesAt }, { where: { id: coverage.id } });
+    const daysBefore = (days: number) => new Date(lapsesAt.getTime() - days * 24 * 3600 * 1000);
+
+    const early = await remindBrokers(daysBefore(40), "http://clearbench.test");
+    const at20 = await remindBrokers(daysBefore(20), "http://clearbench.test");
+    const again = await remindBrokers(daysBefore(19), "http://clearbench.test");
+    const at10 = await remindBrokers(daysBefore(10), "http://clearbench.test");
+    const reminderToken = await tokenMailedTo(brokerEmail);
+    const oldLink = await anonymous()
+      .get(`/api/broker-uploads/${firstToken}`)
+      .set(CSRF_HEADER, CSRF_HEADER_VALUE);
+    const { bytes } = await buildCertificatePdf({ seed: 68 });
+    await upload(reminderToken, bytes, "renewed.pdf").expect(201);
+    const afterArrival = await remindBrokers(daysBefore(5), "http://clearbench.test");
+    const trail = await provider.admin.get(`/api/credentials/${coverage.id}`);
+
+    expect(early.reminded).toBe(0);
+    // Thresholds of 30, 14 and 7 days before expiry are common practice for renewal chasers.
+    expect(at20.reminded).toBe(1);
+    expect(again.reminded).toBe(0);
+    expect(at10.reminded).toBe(1);
+    expect(mail.to(brokerEmail).filter((m) => m.subject.startsWith("Reminder"))).toHaveLength(2);
+    expect(reminderToken).not.toBe(firstToken);
+    expect(oldLink.status).toBe(404);
+    expect(afterArrival.reminded).toBe(0);
+    expect(trail.body.audit.map((a: { action: string }) => a.action)).toEqual(
+      expect.arrayContaining(["broker_request.sent", "broker_request.reminded"]),
+    );
   });
 });
