@@ -265,6 +265,13 @@ export async function receiveBrokerUpload(
   const result = await uploadDocument(onBehalfOf, { typeCode: request.typeCode }, file, storage, {
     acceptOnly: ["application/pdf"],
     inTransaction: (document, transaction) => spendLink(request.id, document.id, transaction),
+    // The file never reached storage: the link is the broker's to use again.
+    onDiscard: async (document) => {
+      await BrokerUploadRequest.update(
+        { usedAt: null, documentId: null },
+        { where: { id: request.id, documentId: document.id } },
+      );
+    },
   });
   return { received: true, document: { name: result.document.name, sizeBytes: result.document.sizeBytes } };
 }

@@ -45,6 +45,8 @@ export interface UploadOptions {
   acceptOnly?: ExtractableMime[];
   /** Runs in the transaction that creates the row: if it throws, neither the row nor the file is kept. */
   inTransaction?: (document: Document, transaction: Transaction) => Promise<void>;
+  /** Undoes what `inTransaction` committed when the file cannot be moved into place and the row is removed. */
+  onDiscard?: (document: Document) => Promise<void>;
 }
 
 export interface UploadedFile {
@@ -186,6 +188,7 @@ export async function uploadDocument(
     try {
       await storage.commit(ready, sha256);
     } catch (err) {
+      await options.onDiscard?.(document);
       await document.destroy();
       throw err;
     }

@@ -142,11 +142,14 @@ describe("certificates straight from the broker", () => {
 
     const asPng = await upload(token, png, "certificate.png");
     const asText = await upload(token, plain, "certificate.pdf");
+    // One byte over the 10 MB limit the documents page has.
+    const tooLarge = await upload(token, Buffer.alloc(10 * 1024 * 1024 + 1, 0x25), "huge.pdf");
     const { bytes } = await buildCertificatePdf({ seed: 65 });
     const afterwards = await upload(token, bytes, "certificate.pdf");
 
     expect(asPng.status).toBe(415);
     expect(asText.status).toBe(415);
+    expect(tooLarge.status).toBe(413);
     expect(asPng.body.error.fields[0].path).toBe("file");
     expect(await filesNamedBy(t.config.UPLOADS_DIR, pngSha)).toBe(0);
     expect(afterwards.status).toBe(201);
