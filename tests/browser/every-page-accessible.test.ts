@@ -18,7 +18,11 @@ afterAll(async () => {
 
 // The main pages of each role, with a heading to wait for; the journeys cover the pages that need data first.
 const pagesByRole: { who: string; email: string | null; pages: string[] }[] = [
-  { who: "signed out", email: null, pages: ["/sign-in", "/sign-up", "/forgot-password"] },
+  {
+    who: "signed out",
+    email: null,
+    pages: ["/sign-in", "/sign-up", "/forgot-password", "/broker-upload/no-such-link"],
+  },
   {
     who: "provider_admin",
     email: "office@kestrel-ridge.test",
