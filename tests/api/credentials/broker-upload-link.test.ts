@@ -127,6 +127,35 @@ describe("certificates straight from the broker", () => {
     expect(await BrokerUploadRequest.count({ where: { companyId: outsider.company.id } })).toBe(0);
   });
 
+  it("sends a coverage with its own broker to that broker and the others to the company's", async () => {
+    const provider = await buildProvider(t.app);
+    const companyBroker = await recordBroker(provider);
+    const autoBroker = `auto-${provider.company.id}@fleet-cover.example.test`;
+    await provider.admin
+      .put("/api/broker-contacts")
+      .send({
+        typeCode: "auto_liability",
+        agency: "Fleetwise Cover",
+        contactName: "Ines Varga",
+        email: autoBroker,
+      })
+      .expect(200);
+    const noBroker = await buildProvider(t.app);
+
+    const auto = await provider.admin.post("/api/broker-requests").send({ typeCode: "auto_liability" });
+    const general = await provider.admin.post("/api/broker-requests").send({ typeCode: "general_liability" });
+    const none = await noBroker.admin.post("/api/broker-requests").send({ typeCode: "general_liability" });
+    const card = await provider.admin.post("/api/broker-requests").send({ typeCode: "osha_10" });
+    const contacts = await provider.admin.get("/api/broker-contacts");
+
+    expect(auto.body.brokerEmail).toBe(autoBroker);
+    expect(general.body.brokerEmail).toBe(companyBroker);
+    expect(none.status).toBe(422);
+    expect(none.body.error.fields[0].path).toBe("broker");
+    expect(card.status).toBe(422);
+    expect(contacts.body).toHaveLength(2);
+  });
+
   it("keeps no row and no file after a refused file type, and the link still works", async () => {
     const provider = await buildProvider(t.app);
     const brokerEmail = await recordBroker(provider);
