@@ -91,6 +91,19 @@ describe("certificates straight from the broker", () => {
     expect(document!.extractionMethod).toBe("pdf_text");
   });
 
+  it("keeps exactly one of two uploads racing on the same link", async () => {
+    const provider = await buildProvider(t.app);
+    const brokerEmail = await recordBroker(provider);
+    await provider.admin.post("/api/broker-requests").send({ typeCode: "general_liability" }).expect(201);
+    const token = await tokenMailedTo(brokerEmail);
+    const [a, b] = await Promise.all([buildCertificatePdf({ seed: 69 }), buildCertificatePdf({ seed: 70 })]);
+
+    const answers = await Promise.all([upload(token, a.bytes, "a.pdf"), upload(token, b.bytes, "b.pdf")]);
+
+    expect(answers.map((r) => r.status).sort()).toEqual([201, 410]);
+    expect(await Document.count({ where: { companyId: provider.company.id } })).toBe(1);
+  });
+
   it("refuses an expired link with 410 and an unknown one with a bare 404", async () => {
     const provider = await buildProvider(t.app);
     const brokerEmail = await recordBroker(provider);
