@@ -6,6 +6,7 @@ import { initModels } from "../server/db/associations.ts";
 import { createSmtpMailer } from "../server/mail/index.ts";
 import { checkStandingConsistency } from "../server/standing/index.ts";
 import { registerRosterAlerts, setRosterAlertLinkBase, sweepRosterAlerts } from "../server/roster/index.ts";
+import { remindBrokers } from "../server/credentials/broker-reminders.ts";
 import { runLapseJob } from "./lapse.ts";
 import { runReviewerDigest } from "./reviewer-digest.ts";
 import { runSendOutbox } from "./send-outbox.ts";
@@ -112,11 +113,18 @@ async function main(): Promise<number> {
     if (!values["no-send"]) await sendOutbox();
     return 0;
   }
+  if (command === "broker-reminders") {
+    const started = performance.now();
+    const result = await remindBrokers(asOf, publicUrl(config));
+    say(`broker reminders as of ${asOf.toISOString()}: ${result.reminded} sent (${ms(started)})`);
+    if (!values["no-send"]) await sendOutbox();
+    return 0;
+  }
   if (command === "outbox") {
     await sendOutbox();
     return 0;
   }
-  say(`Unknown job ${command}: use lapse, digest, follow-up or outbox`);
+  say(`Unknown job ${command}: use lapse, digest, follow-up, broker-reminders or outbox`);
   return 2;
 }
 

@@ -4,6 +4,7 @@ import { log } from "../server/log.ts";
 import { createSmtpMailer, type Mailer } from "../server/mail/index.ts";
 import { sweepRosterAlerts } from "../server/roster/index.ts";
 import { createStorage, type FileStorage } from "../server/storage/index.ts";
+import { remindBrokers } from "../server/credentials/broker-reminders.ts";
 import { runLapseJob } from "./lapse.ts";
 import { tickOf } from "./claim-tick.ts";
 import { retryDueTicks, runScheduledTick, type JobWork, type TickDeps } from "./run-tick.ts";
@@ -30,6 +31,8 @@ export function scheduledJobs(
       const result = await runLapseJob({ asOf });
       // Rostered technicians coming within 30 days of a lapse alert their buyers even without a standing change.
       await sweepRosterAlerts();
+      // Brokers are chased on the same daily round, so reminders go out with the lapse warnings they anticipate.
+      await remindBrokers(asOf, publicUrl(config));
       // The warnings leave now rather than at the outbox's next round.
       if (deps.mailer)
         await runSendOutbox({ asOf: new Date() }, { mailer: deps.mailer, from: config.MAIL_FROM });

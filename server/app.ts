@@ -18,6 +18,7 @@ import { technicianRoutes } from "./technicians/index.ts";
 import { standingApiRoutes } from "./standing/index.ts";
 import { credentialRoutes } from "./credentials/index.ts";
 import { buyerRouters } from "./directory/buyer-routers.ts";
+import { brokerRoutes } from "./credentials/broker-routes.ts";
 import { workOrderRoutes } from "./work-orders/index.ts";
 import { reviewRoutes } from "./reviews/index.ts";
 import { serviceRequestRoutes } from "./service-requests/index.ts";
@@ -56,6 +57,7 @@ const apiRouters = [
   ...buyerRouters,
   machineCatalogRoutes,
   machineRoutes,
+  brokerRoutes,
 ];
 
 export function createApp({ config, sessionPool, clientDir }: AppDeps): Express {

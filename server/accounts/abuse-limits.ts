@@ -42,7 +42,11 @@ function limiter(spec: LimitSpec): RequestHandler {
 }
 
 export type AbuseLimitName =
-  "signIn" | "signUp" | "passwordReset" | "setPassword" | "zipLookup" | "gateCheck";
+  "signIn" | "signUp" | "passwordReset" | "setPassword" | "zipLookup" | "gateCheck" | "brokerLink";
+
+// Common practice: a broker opens the page and uploads a handful of times; 30 in 15 minutes per address leaves room for
+// retries and stops a machine walking tokens.
+const BROKER_LINK_CALLS_PER_IP_PER_15_MIN = 30;
 
 // Common practice: the sign-up form asks once per ZIP typed; 30 a minute per address is plenty for people and too slow
 // to copy the ZIP table through it.
@@ -122,6 +126,15 @@ export function createAbuseLimits(config: Config): Record<AbuseLimitName, Reques
         key: byIp,
         failuresOnly: false,
         message: "Too many gate checks from this address; wait a minute and try again",
+      }),
+    ],
+    brokerLink: [
+      limiter({
+        windowMs: 15 * MINUTE,
+        limit: BROKER_LINK_CALLS_PER_IP_PER_15_MIN,
+        key: byIp,
+        failuresOnly: false,
+        message: `Too many uses of upload links from this address; ${wait(15)}`,
       }),
     ],
     setPassword: [

@@ -11,6 +11,7 @@ import { toDefinition } from "./catalogue.ts";
 import { checkNamedTechnicians, lapseInstantFor, parseFields } from "./field-validation.ts";
 import { Credential, CredentialType } from "./model.ts";
 import { toCredentialDto } from "./dto.ts";
+import { tellShopOfVerifiedCertificate } from "./broker-requests.ts";
 import { returnedMail, verifiedMail } from "./credential-emails.ts";
 
 const alreadyDecided = () =>
@@ -134,6 +135,7 @@ export async function verifyCredential(
     const name = await holderName(row, transaction);
     if (uploader)
       await enqueueMail(verifiedMail(uploader.email, type!.name, name, `${linkBase}/documents`), transaction);
+    await tellShopOfVerifiedCertificate(row, linkBase, transaction);
     await refreshStandingsForHolder(
       { companyId: row.companyId, technicianId: row.technicianId },
       transaction,

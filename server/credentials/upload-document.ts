@@ -1,4 +1,5 @@
 import { createHash } from "node:crypto";
+import type { Transaction } from "sequelize";
 import { READY_SUFFIX } from "../storage/index.ts";
 import { createReadStream } from "node:fs";
 import { readFile, rename, rm } from "node:fs/promises";
@@ -38,6 +39,15 @@ const UNREADABLE: Record<string, string> = {
   timeout: "The PDF took too long to read; upload a simpler copy (print to PDF, or a scan)",
   encrypted: "The PDF is password-protected; upload an unprotected copy",
 };
+
+/** What a caller other than the documents page adds: a narrower set of types, and work in the document's transaction. */
+export interface UploadOptions {
+  acceptOnly?: ExtractableMime[];
+  /** Runs in the transaction that creates the row: if it throws, neither the row nor the file is kept. */
+  inTransaction?: (document: Document, transaction: Transaction) => Promise<void>;
+  /** Undoes what `inTransaction` committed when the file cannot be moved into place and the row is removed. */
+  onDiscard?: (document: Document) => Promise<void>;
+}
 
 export interface UploadedFile {
   path: string;
@@ -102,6 +112,7 @@ export async function uploadDocument(
   input: UploadDocument,
   file: UploadedFile | undefined,
   storage: FileStorage,
+  options: UploadOptions = {},
 ) {
   let pending = file?.path;
   try {
@@ -113,6 +124,10 @@ export async function uploadDocument(
       throw new AppError("invalid_input", "The file is empty", [{ path: "file", message: "0 bytes" }]);
 
     const mime = await sniffUploadFile(file.path, file.originalname);
+    if (options.acceptOnly && !options.acceptOnly.includes(mime))
+      throw new AppError("unsupported_type", `Only ${options.acceptOnly.join(" or ")} is accepted here`, [
+        { path: "file", message: `${mime} is not accepted here` },
+      ]);
     const sha256 = await sha256OfFile(file.path);
     // Named by its hash before the row commits, so the start-up sweep can finish a move a crash interrupted.
     const ready = path.join(storage.incomingDir, `${sha256}.${randomUUID()}${READY_SUFFIX}`);
@@ -167,11 +182,13 @@ export async function uploadDocument(
         },
         transaction,
       );
+      await options.inTransaction?.(row, transaction);
       return row;
     });
     try {
       await storage.commit(ready, sha256);
     } catch (err) {
+      await options.onDiscard?.(document);
       await document.destroy();
       throw err;
     }

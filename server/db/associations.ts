@@ -5,6 +5,7 @@ import { initMailModels } from "../mail/model.ts";
 import { initAuditModel } from "../audit/model.ts";
 import { initTechnicianModel } from "../technicians/model.ts";
 import { initCredentialModels } from "../credentials/model.ts";
+import { initBrokerModels } from "../credentials/broker-model.ts";
 import { initSiteModels } from "../sites/model.ts";
 import { initWorkOrderModels } from "../work-orders/model.ts";
 import { initReviewModel } from "../reviews/model.ts";
@@ -18,6 +19,7 @@ export function initModels(sequelize: Sequelize): void {
   initAuditModel(sequelize);
   initTechnicianModel(sequelize);
   initCredentialModels(sequelize);
+  initBrokerModels(sequelize);
   initSiteModels(sequelize);
   initWorkOrderModels(sequelize);
   initReviewModel(sequelize);

@@ -10,6 +10,7 @@ export const errorCodes = [
   "forbidden",
   "not_found",
   "conflict",
+  "gone",
   "too_large",
   "unsupported_type",
   "invalid_input",

@@ -22,6 +22,7 @@ export const router = createBrowserRouter([
           { path: paths.auth.signUp, lazy: () => import("./routes/auth/sign-up.tsx") },
           { path: paths.auth.forgotPassword, lazy: () => import("./routes/auth/forgot-password.tsx") },
           { path: paths.auth.setPassword, lazy: () => import("./routes/auth/set-password.tsx") },
+          { path: paths.auth.brokerUpload, lazy: () => import("./routes/auth/broker-upload.tsx") },
         ],
       },
       {

@@ -6,6 +6,8 @@ export const paths = {
     signUp: "/sign-up",
     forgotPassword: "/forgot-password",
     setPassword: "/set-password",
+    /** The broker's one-time upload page, opened from the e-mailed link without an account. */
+    brokerUpload: "/broker-upload/:token",
   },
   account: "/account",
   company: "/company",

@@ -21,7 +21,13 @@ const pagesByRole: { who: string; email: string | null; pages: string[] }[] = [
   {
     who: "signed out",
     email: null,
-    pages: ["/sign-in", "/sign-up", "/forgot-password", "/gate/check?token=1.abc.not-signed"],
+    pages: [
+      "/sign-in",
+      "/sign-up",
+      "/forgot-password",
+      "/gate/check?token=1.abc.not-signed",
+      "/broker-upload/no-such-link",
+    ],
   },
   {
     who: "provider_admin",

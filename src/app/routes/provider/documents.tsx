@@ -12,6 +12,7 @@ import { statusWord } from "@/components/ui/status-badge.tsx";
 import type { Credential } from "@/features/credentials/api/credential-shapes.ts";
 import { credentialsQuery } from "@/features/credentials/api/get-credentials.ts";
 import { CredentialsTable } from "@/features/credentials/components/credentials-table.tsx";
+import { BrokerPanel } from "@/features/credentials/components/broker-panel.tsx";
 import { queryClient } from "@/lib/query-client.ts";
 
 const stateOf = (search: URLSearchParams) => {
@@ -86,6 +87,9 @@ export function Component() {
         }
       />
       <StatusKey statuses={["submitted", "returned", "verified", "superseded", "lapsed", "lapsing"]} />
+      <BrokerPanel
+        coverages={credentials.filter((c) => c.holder === "company" && c.category === "insurance")}
+      />
       <CautionNote className="mt-6" />
     </>
   );

@@ -15,4 +15,5 @@ export const credentialKeys = {
   detail: (id: number) => [...credentialKeys.all, "detail", id] as const,
   queues: () => [...credentialKeys.all, "queue"] as const,
   queue: (query: Partial<QueueQuery>) => [...credentialKeys.queues(), query] as const,
+  brokerUpload: (token: string) => [...credentialKeys.all, "broker-upload", token] as const,
 };

@@ -9,6 +9,8 @@ const actionWords: Record<string, string> = {
   "credential.superseded": "Superseded",
   "credential.lapsed": "Lapsed",
   "document.downloaded": "File downloaded",
+  "broker_request.sent": "Renewed certificate asked of the broker",
+  "broker_request.reminded": "Broker reminded",
 };
 
 const wordsFor = (action: string) =>

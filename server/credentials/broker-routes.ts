@@ -1,0 +1,78 @@
+import type { RequestHandler } from "express";
+import {
+  brokerTokenParamsSchema,
+  requestBrokerCertificateSchema,
+  saveBrokerContactSchema,
+} from "../../shared/credentials/broker-schemas.ts";
+import { createRoutes } from "../http/route.ts";
+import { AppError } from "../http/app-error.ts";
+import { anyone, requireRole } from "../http/policy.ts";
+import { singleFileUpload } from "../http/upload.ts";
+import { linkBase } from "../http/app-locals.ts";
+import { appStorage } from "../storage/index.ts";
+import { kickOutbox } from "../mail/outbox.ts";
+import { abuseLimit } from "../accounts/abuse-limits.ts";
+import {
+  listBrokerContacts,
+  listBrokerRequests,
+  openBrokerRequest,
+  receiveBrokerUpload,
+  requestBrokerCertificate,
+  saveBrokerContact,
+  showBrokerUpload,
+} from "./broker-requests.ts";
+
+// A company's insurance is handled by its office; the broker's own routes need no account, only the link.
+const canManageBroker = requireRole("provider_admin");
+const brokerLinkHolder = { ...anyone, name: "anyone holding an upload link" };
+
+/** Refuses a bad, spent or expired link before its input is read, and before multer writes any of a file to disk. */
+const linkStillOpen: RequestHandler = (req, _res, next) => {
+  const parsed = brokerTokenParamsSchema.safeParse(req.params);
+  if (!parsed.success) return next(new AppError("not_found", "This link was not found"));
+  openBrokerRequest(parsed.data.token).then(() => next(), next);
+};
+
+export const brokerRoutes = createRoutes("/api");
+
+brokerRoutes.get("/broker-contacts", { allow: canManageBroker }, (req) => listBrokerContacts(req.user!));
+
+brokerRoutes.put(
+  "/broker-contacts",
+  { allow: canManageBroker, body: saveBrokerContactSchema },
+  (req, _res, { body }) => saveBrokerContact(req.user!, body),
+);
+
+brokerRoutes.get("/broker-requests", { allow: canManageBroker }, (req) => listBrokerRequests(req.user!));
+
+brokerRoutes.post(
+  "/broker-requests",
+  { allow: canManageBroker, body: requestBrokerCertificateSchema },
+  async (req, res, { body }) => {
+    const dto = await requestBrokerCertificate(req.user!, body, linkBase(req));
+    kickOutbox(req.app.locals);
+    res.status(201).json(dto);
+  },
+);
+
+brokerRoutes.get(
+  "/broker-uploads/:token",
+  {
+    allow: brokerLinkHolder,
+    before: [abuseLimit("brokerLink"), linkStillOpen],
+    params: brokerTokenParamsSchema,
+  },
+  (_req, _res, { params }) => showBrokerUpload(params.token),
+);
+
+brokerRoutes.post(
+  "/broker-uploads/:token",
+  {
+    allow: brokerLinkHolder,
+    before: [abuseLimit("brokerLink"), linkStillOpen, singleFileUpload],
+    params: brokerTokenParamsSchema,
+  },
+  async (req, res, { params }) => {
+    res.status(201).json(await receiveBrokerUpload(params.token, req.file, appStorage(req)));
+  },
+);
