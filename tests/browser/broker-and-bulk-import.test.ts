@@ -68,7 +68,8 @@ describe("a service company's office imports technicians from a CSV", () => {
 
     await page.getByRole("link", { name: "Back to technicians" }).click();
     await page.getByRole("heading", { name: "Technicians" }).waitFor();
-    await expect(page.getByText("Thandiwe Okafor-Reyes").first().isVisible()).resolves.toBe(true);
+    // The list refetches after the import; wait for the imported name rather than reading the first paint.
+    await page.getByText("Thandiwe Okafor-Reyes").first().waitFor();
     await expect(page.getByText("Casimir Dunleavy-Oduya").count()).resolves.toBe(0);
     await context.close();
   }, 120_000);
