@@ -22,5 +22,5 @@ directoryRoutes.get(
     reads: "replica",
   },
   (req, _res, { params, query }) =>
-    findDirectoryTechnician(req.user!, params.technicianId, query.onSiteHours),
+    findDirectoryTechnician(req.user!, params.technicianId, query.onSiteHours, new Date(), query.siteId),
 );

@@ -38,6 +38,7 @@ interface DirectoryRow {
   star_sum: number;
   distance_km: number | null;
   sort_key: number;
+  on_roster: "technician" | "company" | null;
 }
 
 // "Never lapses" sorts after every real lapse instant (seconds since 1970; year 33658).
@@ -184,6 +185,7 @@ function toRowDto(
     standing: row.standing,
     earliestLapse: row.earliest_lapse ? new Date(row.earliest_lapse).toISOString() : null,
     requirementsMet,
+    onRoster: row.on_roster,
     ...rates,
   };
 }
@@ -250,13 +252,19 @@ export async function searchDirectory(
     setParam === null
       ? "b.standing, b.earliest_lapse"
       : `${setStanding("standing")}, ${setStanding("earliest_lapse")}`;
+  const shopParam = p.add(buyer.companyId);
+  // A company entry covers all its technicians; the technician's own entry is named first when both exist.
+  const onRoster = `(SELECT CASE WHEN bool_or(re.technician_id = t.id) THEN 'technician' ELSE 'company' END
+       FROM roster_entries re WHERE re.shop_company_id = ${shopParam}
+        AND (re.technician_id = t.id OR re.service_company_id = t.company_id)
+     HAVING count(*) > 0) AS on_roster`;
   const limit = p.add(query.limit + 1);
   const rows = await db().query<DirectoryRow>(
     `SELECT x.* FROM (
        SELECT t.id, t.name, t.company_id, c.name AS company_name, t.technologies, t.control_families, t.service_radius_km,
               t.hourly_rate_cents, t.travel_rate_cents, t.mileage_rate_cents, ${standingCols},
               coalesce(r.review_count, 0)::int AS review_count, coalesce(r.star_sum, 0)::int AS star_sum,
-              ${distance ?? "NULL::float8"} AS distance_km, ${sortKey} AS sort_key
+              ${distance ?? "NULL::float8"} AS distance_km, ${sortKey} AS sort_key, ${onRoster}
        ${DIRECTORY_FROM}${where}
      ) x ${after}
      ORDER BY x.sort_key, x.id

@@ -81,6 +81,8 @@ interface TechnicianRow {
   requirement_sets: RequirementSetRow[];
   reviews: ReviewRow[];
   sites: SiteRow[];
+  roster_technician_entry_id: number | null;
+  roster_company_entry_id: number | null;
 }
 
 /**
@@ -111,7 +113,11 @@ const PAGE_SQL = `
          ) AS reviews,
          (SELECT coalesce(json_agg(x ORDER BY x.name, x.id), '[]'::json) FROM (
             SELECT si.id, si.name, si.latitude, si.longitude FROM sites si WHERE si.company_id = $2 AND si.active) x
-         ) AS sites
+         ) AS sites,
+         (SELECT re.id FROM roster_entries re WHERE re.shop_company_id = $2 AND re.technician_id = t.id LIMIT 1)
+           AS roster_technician_entry_id,
+         (SELECT re.id FROM roster_entries re WHERE re.shop_company_id = $2 AND re.service_company_id = t.company_id LIMIT 1)
+           AS roster_company_entry_id
     FROM technicians t
     JOIN companies c ON c.id = t.company_id
     JOIN technician_standings b ON b.technician_id = t.id AND b.requirement_set_id IS NULL AND b.standing IN ('cleared','lapsing')
@@ -206,6 +212,7 @@ export async function findDirectoryTechnician(
   technicianId: number,
   onSiteHours: number,
   asOf = new Date(),
+  siteId?: number,
 ): Promise<DirectoryTechnicianDto> {
   const [t] = await select<TechnicianRow>(PAGE_SQL, [technicianId, buyer.companyId, asOf]);
   if (!t) throw new AppError("not_found", "That technician was not found");
@@ -237,6 +244,12 @@ export async function findDirectoryTechnician(
     estimates: toEstimates(t, onSiteHours),
     assumptions: assumptions(onSiteHours),
     companyMedianResponseMinutes: responseMedians.get(t.company_id) ?? null,
+    roster: {
+      technicianEntryId: t.roster_technician_entry_id,
+      companyEntryId: t.roster_company_entry_id,
+    },
+    // Only one of the shop's own active sites counts; any other id is ignored, never echoed.
+    chosenSiteId: t.sites.some((s) => s.id === siteId) ? (siteId ?? null) : null,
     caution: CERTIFICATE_CAUTION,
   };
 }

@@ -119,6 +119,8 @@ export interface DirectoryRowDto {
   earliestLapse: string | null;
   /** With a requirement set chosen: how each of its lines is met, from the stored standing; null without a set. */
   requirementsMet: RequirementMetDto[] | null;
+  /** On the caller's roster: by its own entry, through its company's entry, or not at all. */
+  onRoster: "technician" | "company" | null;
   hourlyRateCents: number;
   travelRateCents: number;
   mileageRateCents: number;
@@ -222,11 +224,16 @@ export interface DirectoryTechnicianDto {
   assumptions: DirectoryAssumptionsDto;
   /** The company's median minutes from a service-request invitation to its first answer, last 90 days. */
   companyMedianResponseMinutes: number | null;
+  /** The caller's roster entries that cover this technician: its own and its company's (null when absent). */
+  roster: { technicianEntryId: number | null; companyEntryId: number | null };
+  /** The site the estimates were asked for (carried from the directory), when it is one of the shop's sites. */
+  chosenSiteId: number | null;
   caution: string;
 }
 
 export const technicianProfileQuerySchema = z.object({
   onSiteHours: z.preprocess((v) => (v === "" ? undefined : v), z.coerce.number().min(0).max(24).default(2)),
+  siteId: optional(idParam),
 });
 
 /** Shown beside every certificate and estimate. */

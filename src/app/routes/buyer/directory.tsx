@@ -54,7 +54,15 @@ export async function loader({ request }: LoaderFunctionArgs) {
   return null;
 }
 
-function Results({ search, onSiteHours }: { search: string; onSiteHours: number }) {
+function Results({
+  search,
+  onSiteHours,
+  siteName,
+}: {
+  search: string;
+  onSiteHours: number;
+  siteName: string | null;
+}) {
   const results = useDirectorySearch(search);
   if (results.isPending) return <Spinner label="Searching" />;
   if (results.isError) return <FormError error={results.error} />;
@@ -84,10 +92,20 @@ function Results({ search, onSiteHours }: { search: string; onSiteHours: number 
           : "Judged against the platform baseline only: the company's insurance is in force; no card the technician holds was checked. Choose a site or a requirement set to apply your rules."}
       </p>
       <div className="hidden md:block">
-        <DirectoryResultsTable rows={rows} onSiteHours={onSiteHours} judgedAgainst={first.judgedAgainst} />
+        <DirectoryResultsTable
+          rows={rows}
+          onSiteHours={onSiteHours}
+          siteName={siteName}
+          judgedAgainst={first.judgedAgainst}
+        />
       </div>
       <div className="md:hidden">
-        <DirectoryResultCards rows={rows} onSiteHours={onSiteHours} judgedAgainst={first.judgedAgainst} />
+        <DirectoryResultCards
+          rows={rows}
+          onSiteHours={onSiteHours}
+          siteName={siteName}
+          judgedAgainst={first.judgedAgainst}
+        />
       </div>
       {results.hasNextPage && (
         <Button
@@ -168,7 +186,11 @@ function Search({ params }: { params: URLSearchParams }) {
         />
       </div>
       <p className="text-sm text-ink-800">{CLEARED_MEANS}</p>
-      <Results search={search} onSiteHours={onSiteHoursOf(draftFromSearch(params))} />
+      <Results
+        search={search}
+        onSiteHours={onSiteHoursOf(draftFromSearch(params))}
+        siteName={sites.find((s) => String(s.id) === params.get("siteId"))?.name ?? null}
+      />
       <StatusKey statuses={["cleared", "lapsing"]} />
       <SafetyCaution />
       <CautionNote />

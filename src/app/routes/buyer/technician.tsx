@@ -3,15 +3,18 @@ import { useSuspenseQuery } from "@tanstack/react-query";
 import { Link, useParams, useSearchParams, type LoaderFunctionArgs } from "react-router-dom";
 import { wholeMilesFromKm } from "@shared/geo/units.ts";
 import { technologyLabels, type MachineTechnology } from "@shared/technicians/schemas.ts";
-import { hrefs } from "@/config/paths.ts";
+import { hrefs, paths } from "@/config/paths.ts";
 import { Button } from "@/components/ui/button.tsx";
 import { buttonStyles } from "@/components/ui/button-styles.ts";
 import { CautionNote } from "@/components/ui/caution-note.tsx";
 import { PageHeader } from "@/components/ui/page-header.tsx";
 import { SafetyCaution } from "@/components/ui/safety-caution.tsx";
 import { StatusKey } from "@/components/ui/status-key.tsx";
-import { directoryTechnicianQuery } from "@/features/directory/api/get-directory-technician.ts";
-import type { ProfileStanding } from "@/features/directory/api/directory-shapes.ts";
+import {
+  directoryTechnicianQuery,
+  estimateInputsOf,
+} from "@/features/directory/api/get-directory-technician.ts";
+import type { DirectoryTechnician, ProfileStanding } from "@/features/directory/api/directory-shapes.ts";
 import { DirectoryStandingBadge } from "@/features/directory/components/directory-standing-badge.tsx";
 import { ProfileCredentials } from "@/features/directory/components/profile-credentials.tsx";
 import { ProfileReviews } from "@/features/directory/components/profile-reviews.tsx";
@@ -23,14 +26,26 @@ import { formatCents } from "@/lib/format-money.ts";
 import { queryClient } from "@/lib/query-client.ts";
 import { technicianIdOf } from "./technician-id.ts";
 
-export async function loader({ params }: LoaderFunctionArgs) {
-  await queryClient.ensureQueryData(directoryTechnicianQuery(technicianIdOf(params.technicianId)));
+export async function loader({ params, request }: LoaderFunctionArgs) {
+  const inputs = estimateInputsOf(new URL(request.url).searchParams);
+  await queryClient.ensureQueryData(directoryTechnicianQuery(technicianIdOf(params.technicianId), inputs));
   return null;
 }
 
-function AddToRoster({ technicianId }: { technicianId: number }) {
+function AddToRoster({ technician }: { technician: DirectoryTechnician }) {
   const add = useAddToRoster();
   const already = isApiError(add.error) && add.error.status === 409;
+  const { technicianEntryId, companyEntryId } = technician.roster;
+  if (!add.isSuccess && (technicianEntryId !== null || companyEntryId !== null))
+    return (
+      <p role="status" className="text-sm font-medium text-ink-900" data-testid="roster-state">
+        {technicianEntryId !== null ? "On your roster" : `On your roster through ${technician.companyName}`} ·{" "}
+        <Link to={paths.buyer.roster} className="underline underline-offset-2">
+          Open the roster
+        </Link>
+      </p>
+    );
+  const technicianId = technician.technicianId;
   return (
     <div className="flex flex-col items-start gap-1">
       <Button
@@ -79,9 +94,9 @@ function pickDecidingSet(
 
 export function Component() {
   const id = technicianIdOf(useParams().technicianId);
-  const { data: t } = useSuspenseQuery(directoryTechnicianQuery(id));
   const [search] = useSearchParams();
-  const decidingSet = pickDecidingSet(t.requirementSets, Number(search.get("siteId")) || null);
+  const { data: t } = useSuspenseQuery(directoryTechnicianQuery(id, estimateInputsOf(search)));
+  const decidingSet = pickDecidingSet(t.requirementSets, t.chosenSiteId);
   return (
     <>
       <PageHeader
@@ -89,7 +104,7 @@ export function Component() {
         description={t.companyName}
         actions={
           <>
-            <AddToRoster technicianId={t.technicianId} />
+            <AddToRoster technician={t} />
             <Link to={hrefs.workOrderNew(t.technicianId)} className={buttonStyles("primary")}>
               Raise a work order
             </Link>
@@ -134,7 +149,11 @@ export function Component() {
           <ProfileStandings standings={t.requirementSets} />
         </Section>
         <Section title="Estimate for each of your sites">
-          <SiteEstimates estimates={t.estimates} onSiteHours={t.assumptions.onSiteHours} />
+          <SiteEstimates
+            estimates={t.estimates}
+            onSiteHours={t.assumptions.onSiteHours}
+            chosenSiteId={t.chosenSiteId}
+          />
         </Section>
         <Section title="Verified credentials">
           <ProfileCredentials credentials={t.credentials} />

@@ -45,6 +45,7 @@ export const directoryRowSchema = z.object({
       z.object({ label: z.string(), metBy: z.string().nullable(), detail: z.string(), lapsing: z.boolean() }),
     )
     .nullable(),
+  onRoster: z.enum(["technician", "company"]).nullable(),
   hourlyRateCents: z.number(),
   travelRateCents: z.number(),
   mileageRateCents: z.number(),
@@ -151,6 +152,8 @@ export const directoryTechnicianSchema = z.object({
   ),
   estimates: z.array(siteEstimateSchema),
   assumptions: assumptionsSchema,
+  roster: z.object({ technicianEntryId: z.number().nullable(), companyEntryId: z.number().nullable() }),
+  chosenSiteId: z.number().nullable(),
   caution: z.string(),
 });
 export type DirectoryTechnician = z.infer<typeof directoryTechnicianSchema>;

@@ -3,14 +3,38 @@ import { api } from "@/lib/api-client.ts";
 import { directoryKeys } from "./directory-keys.ts";
 import { directoryTechnicianSchema } from "./directory-shapes.ts";
 
-export const getDirectoryTechnician = (id: number, onSiteHours: number) =>
-  api.get(`/directory/technicians/${id}?onSiteHours=${onSiteHours}`, directoryTechnicianSchema);
+/** The estimate inputs carried from the directory: hours on site and, when chosen, the site. */
+export interface EstimateInputs {
+  onSiteHours: number;
+  siteId: number | null;
+}
 
-export const directoryTechnicianQuery = (id: number, onSiteHours = 2) =>
+const DEFAULT_INPUTS: EstimateInputs = { onSiteHours: 2, siteId: null };
+
+/** Reads the carried inputs from a page address; anything unusable falls back to the directory's own default. */
+export function estimateInputsOf(search: URLSearchParams): EstimateInputs {
+  const hours = Number(search.get("onSiteHours"));
+  const siteId = Number(search.get("siteId"));
+  return {
+    onSiteHours:
+      search.get("onSiteHours") && Number.isFinite(hours) && hours >= 0 && hours <= 24
+        ? hours
+        : DEFAULT_INPUTS.onSiteHours,
+    siteId: Number.isInteger(siteId) && siteId > 0 ? siteId : null,
+  };
+}
+
+export const getDirectoryTechnician = (id: number, inputs: EstimateInputs) => {
+  const query = new URLSearchParams({ onSiteHours: String(inputs.onSiteHours) });
+  if (inputs.siteId !== null) query.set("siteId", String(inputs.siteId));
+  return api.get(`/directory/technicians/${id}?${query.toString()}`, directoryTechnicianSchema);
+};
+
+export const directoryTechnicianQuery = (id: number, inputs: EstimateInputs = DEFAULT_INPUTS) =>
   queryOptions({
-    queryKey: directoryKeys.technician(id, onSiteHours),
-    queryFn: () => getDirectoryTechnician(id, onSiteHours),
+    queryKey: directoryKeys.technician(id, inputs.onSiteHours, inputs.siteId),
+    queryFn: () => getDirectoryTechnician(id, inputs),
   });
 
-export const useDirectoryTechnician = (id: number, onSiteHours = 2) =>
-  useQuery(directoryTechnicianQuery(id, onSiteHours));
+export const useDirectoryTechnician = (id: number, inputs: EstimateInputs = DEFAULT_INPUTS) =>
+  useQuery(directoryTechnicianQuery(id, inputs));

@@ -9,10 +9,12 @@ import { RequirementsMetLine } from "./requirements-met-line.tsx";
 export function DirectoryResultCards({
   rows,
   onSiteHours,
+  siteName = null,
   judgedAgainst,
 }: {
   rows: DirectoryRow[];
   onSiteHours: number;
+  siteName?: string | null;
   judgedAgainst?: JudgedAgainst | undefined;
 }) {
   return (
@@ -34,7 +36,12 @@ export function DirectoryResultCards({
             <DistanceText row={row} />
             <RatingSummary rating={row.rating} />
             {row.callOut && (
-              <CallOutEstimate callOut={row.callOut} onSiteHours={onSiteHours} forWhom={row.name} />
+              <CallOutEstimate
+                callOut={row.callOut}
+                onSiteHours={onSiteHours}
+                forWhom={row.name}
+                siteName={siteName}
+              />
             )}
             <RatesText row={row} />
           </div>

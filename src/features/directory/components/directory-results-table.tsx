@@ -13,10 +13,12 @@ const column = dataTableColumns<DirectoryRow>();
 export function DirectoryResultsTable({
   rows,
   onSiteHours,
+  siteName = null,
   judgedAgainst,
 }: {
   rows: DirectoryRow[];
   onSiteHours: number;
+  siteName?: string | null;
   judgedAgainst?: JudgedAgainst | undefined;
 }) {
   const columns = useMemo(
@@ -61,6 +63,7 @@ export function DirectoryResultsTable({
                 callOut={info.row.original.callOut}
                 onSiteHours={onSiteHours}
                 forWhom={info.row.original.name}
+                siteName={siteName}
               />
             ) : (
               <span className="text-sm text-ink-700">Choose a site</span>
@@ -78,7 +81,7 @@ export function DirectoryResultsTable({
           cell: (info) => <RatesText row={info.row.original} />,
         }),
       ]),
-    [onSiteHours, judgedAgainst],
+    [onSiteHours, siteName, judgedAgainst],
   );
   return (
     <DataTable

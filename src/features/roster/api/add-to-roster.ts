@@ -1,6 +1,7 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import type { AddRosterEntry } from "@shared/roster/schemas.ts";
 import { api } from "@/lib/api-client.ts";
+import { directoryKeys } from "@/features/directory/api/directory-keys.ts";
 import { rosterKeys } from "./roster-keys.ts";
 import { rosterEntrySchema } from "./roster-shapes.ts";
 
@@ -10,6 +11,11 @@ export function useAddToRoster() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: addToRoster,
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: rosterKeys.all }),
+    // The directory and the technician's page both say who is on the roster.
+    onSuccess: () =>
+      Promise.all([
+        queryClient.invalidateQueries({ queryKey: rosterKeys.all }),
+        queryClient.invalidateQueries({ queryKey: directoryKeys.all }),
+      ]),
   });
 }
