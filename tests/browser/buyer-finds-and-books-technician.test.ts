@@ -69,6 +69,8 @@ describe("a buyer finds a cleared technician and books the job", () => {
     await buyer.goto(`${server.url}/directory`);
     await buyer.getByLabel("Site", { exact: true }).selectOption({ label: "Rockford main plant" });
     await buyer.getByLabel("Electrical safety (arc flash) training").check();
+    await buyer.getByText("Machine builder training, insurance limits and estimate").click();
+    await buyer.getByLabel("Expected hours on site").fill("4");
     await buyer.getByRole("button", { name: "Search" }).click();
     await buyer.waitForURL(/credentialTypes=arc_flash/);
     const row = buyer.getByRole("row", { name: new RegExp(TECHNICIAN) });
@@ -89,6 +91,14 @@ describe("a buyer finds a cleared technician and books the job", () => {
     ).resolves.toBeGreaterThan(0);
     await expect(buyer.getByTestId("status-key").count()).resolves.toBe(1);
     await expect(row.getByText("estimate before tax", { exact: true }).count()).resolves.toBe(1);
+    await expect(row.getByText("4 h on site, from Rockford main plant").count()).resolves.toBe(1);
+    const rowEstimate = await row
+      .getByTestId("estimate-inputs")
+      .locator("xpath=..")
+      .locator("span")
+      .first()
+      .textContent();
+    await expect(row.getByTestId("on-roster-marker").count()).resolves.toBe(0);
     await expect(seriousAccessibilityProblems(buyer)).resolves.toEqual([]);
 
     await row.getByRole("link", { name: TECHNICIAN }).click();
@@ -104,6 +114,25 @@ describe("a buyer finds a cleared technician and books the job", () => {
       buyer.getByRole("complementary", { name: "About certificates of insurance" }).count(),
     ).resolves.toBe(1);
     await expect(seriousAccessibilityProblems(buyer)).resolves.toEqual([]);
+
+    // The hours and the site came along from the directory, so the page's estimate for that site is the row's.
+    expect(new URL(buyer.url()).searchParams.get("onSiteHours")).toBe("4");
+    const chosen = buyer.getByRole("listitem").filter({ hasText: "the site you searched from" });
+    await expect(chosen.getByText("4 h on site, from Rockford main plant").count()).resolves.toBe(1);
+    await expect(
+      chosen.getByTestId("estimate-inputs").locator("xpath=..").locator("span").first().textContent(),
+    ).resolves.toBe(rowEstimate);
+
+    await buyer.getByRole("button", { name: "Add to roster" }).click();
+    await buyer.getByText("Added to your roster.").waitFor();
+    await buyer.reload();
+    await buyer.getByRole("heading", { level: 1, name: TECHNICIAN }).waitFor();
+    await buyer.getByTestId("roster-state").waitFor();
+    await expect(buyer.getByRole("button", { name: "Add to roster" }).count()).resolves.toBe(0);
+    await buyer.goBack();
+    await row.getByTestId("on-roster-marker").waitFor();
+    await buyer.goForward();
+    await buyer.getByRole("heading", { level: 1, name: TECHNICIAN }).waitFor();
 
     await buyer.getByRole("link", { name: "Raise a work order" }).click();
     await buyer.getByRole("heading", { level: 1, name: "Raise a work order" }).waitFor();
