@@ -6,12 +6,13 @@ import { RequirementSet } from "../standing/model.ts";
 import { readTechnicianStanding } from "../standing/technician-standing.ts";
 import { Site } from "../sites/model.ts";
 import { Technician } from "../technicians/model.ts";
+import { technicianPhotoDataUrl } from "./photo.ts";
 import { checkBadgeToken, siteFromGateCode } from "./token.ts";
 
 export interface GateCheckDto {
   state: "cleared" | "not_cleared" | "expired" | "invalid";
   checkedAt: string;
-  technician?: { name: string; company: string };
+  technician?: { name: string; company: string; photo?: string };
   site?: { name: string } | null;
   against?: string;
   lines?: { requirement: string; status: string }[];
@@ -48,6 +49,7 @@ export async function checkAtGate(
     (set ? standing.requirementSets.find((s) => s.requirementSetId === set.id) : undefined) ??
     standing.baseline;
   const workOrder = site ? await todaysWorkOrder(technician.id, site, now) : null;
+  const photo = await technicianPhotoDataUrl(technician.id);
   const state = chosen?.standing === "cleared" || chosen?.standing === "lapsing" ? "cleared" : "not_cleared";
   await db().query(
     `INSERT INTO gate_checks (technician_id, service_company_id, site_id, shop_company_id, state, checked_at)
@@ -57,7 +59,7 @@ export async function checkAtGate(
   return {
     state,
     checkedAt,
-    technician: { name: technician.name, company: company?.name ?? "" },
+    technician: { name: technician.name, company: company?.name ?? "", ...(photo ? { photo } : {}) },
     site: site ? { name: site.name } : null,
     against: chosen?.name ?? "Platform baseline",
     lines: (chosen?.results ?? []).map((r) => ({ requirement: r.requirement.label, status: r.status })),
