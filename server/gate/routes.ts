@@ -61,7 +61,7 @@ gateRoutes.get(
   (req, _res, { query }) => checkAtGate(gateSecret(appConfig(req)), query.token, query.site),
 );
 
-gateRoutes.put("/badge/photo", { allow: canShowOwnBadge, before: [singleFileUpload] }, (req) =>
+gateRoutes.post("/badge/photo", { allow: canShowOwnBadge, before: [singleFileUpload] }, (req) =>
   saveTechnicianPhoto(req.user!.technicianId!, req.file),
 );
 

@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Browser } from "playwright-core";
 import { startBrowserServer } from "../support/browser-server.ts";
 import { launchChromium, screenshot, signIn } from "../support/browser.ts";
+import { Jimp } from "jimp";
 import { readQr } from "../support/read-qr.ts";
 import { DEMO_PASSWORD } from "../../server/db/demo-scenario/index.ts";
 
@@ -73,5 +74,33 @@ describe("a shop's gate sign and lapse calendar screens", () => {
     await page.getByText("No subscription address yet.").waitFor();
     expect((await page.request.get(onServer(second))).status()).toBe(404);
     await context.close();
+  });
+});
+
+describe("the technician's photo at the gate", () => {
+  it("is added on the badge page and shown to the front desk after a scan", async () => {
+    const techContext = await browser.newContext({ viewport: { width: 390, height: 844 } });
+    const tech = await techContext.newPage();
+    await signIn(tech, server.url, "tobias@kestrel-ridge.test", DEMO_PASSWORD);
+    await tech.goto(`${server.url}/badge`);
+    const png = await new Jimp({ width: 900, height: 900, color: 0x884422ff }).getBuffer("image/png");
+    await tech
+      .getByLabel(/photo \(JPEG or PNG\)/)
+      .setInputFiles({ name: "me.png", mimeType: "image/png", buffer: png });
+    await tech.getByRole("button", { name: "Save photo" }).click();
+    await tech.getByRole("img", { name: "Your photo" }).waitFor();
+    const src = await tech.getByRole("img", { name: "Gate badge code to scan" }).getAttribute("src");
+    const url = new URL(await readQr(src!));
+    await techContext.close();
+
+    const deskContext = await browser.newContext();
+    const desk = await deskContext.newPage();
+    await desk.goto(`${server.url}${url.pathname}${url.search}`);
+    const photo = desk.getByRole("img", { name: /^Photo of / });
+    await photo.waitFor();
+    // The desk gets the stored JPEG, not the PNG that was sent (JPEG SOI marker, ISO/IEC 10918-1).
+    expect(await photo.getAttribute("src")).toMatch(/^data:image\/jpeg;base64,\/9j\//);
+    await screenshot(desk, "gate-check-photo");
+    await deskContext.close();
   });
 });

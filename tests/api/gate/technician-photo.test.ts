@@ -75,7 +75,7 @@ describe("technician photo", () => {
     expect(exifTags(upload).GPSLatitudeRef).toBe("N");
 
     const tech = await signIn(t.app, p.technicianUser.email);
-    const res = await tech.put("/api/badge/photo").attach("file", upload, "me.jpg");
+    const res = await tech.post("/api/badge/photo").attach("file", upload, "me.jpg");
     expect(res.status).toBe(200);
     expect(res.body).toEqual({ width: 512, height: 384 });
 
@@ -98,11 +98,13 @@ describe("technician photo", () => {
   it("refuses a file that is not an image by its bytes, whatever its name, and keeps nothing", async () => {
     const p = await buildClearedProvider({ glExpires: "2099-07-15", wcExpires: "2099-07-15" });
     const tech = await signIn(t.app, p.technicianUser.email);
-    const res = await tech.put("/api/badge/photo").attach("file", Buffer.from("%PDF-1.4\n%fake\n"), "me.jpg");
+    const res = await tech
+      .post("/api/badge/photo")
+      .attach("file", Buffer.from("%PDF-1.4\n%fake\n"), "me.jpg");
     expect(res.status).toBe(415);
     expect(res.body.error.fields).toEqual([expect.objectContaining({ path: "file" })]);
 
-    const missing = await tech.put("/api/badge/photo");
+    const missing = await tech.post("/api/badge/photo");
     expect(missing.status).toBe(422);
     expect(await photoBytes(p.technician.id)).toBeNull();
   });
@@ -110,7 +112,7 @@ describe("technician photo", () => {
   it("is the technician's own to set: an office admin gets 403", async () => {
     const p = await buildClearedProvider({ glExpires: "2099-07-15", wcExpires: "2099-07-15" });
     const admin = await signIn(t.app, p.admin.email);
-    const res = await admin.put("/api/badge/photo").attach("file", await cameraPhoto(10, 10), "me.jpg");
+    const res = await admin.post("/api/badge/photo").attach("file", await cameraPhoto(10, 10), "me.jpg");
     expect(res.status).toBe(403);
   });
 });
