@@ -10,6 +10,8 @@ import { isOwnSite } from "../sites/policy.ts";
 import { Site } from "../sites/model.ts";
 import { notFound } from "../http/app-error.ts";
 import { checkAtGate, listGateChecks } from "./check.ts";
+import { saveTechnicianPhoto, technicianPhotoDataUrl } from "./photo.ts";
+import { singleFileUpload } from "../http/upload.ts";
 import { BADGE_TOKEN_TTL_MS, issueBadgeToken, siteGateCode } from "./token.ts";
 
 export const gateRoutes = createRoutes("/api");
@@ -42,6 +44,7 @@ gateRoutes.get(
     return {
       url: url.toString(),
       qrPng: png,
+      photo: await technicianPhotoDataUrl(req.user!.technicianId!),
       issuedAt: issuedAt.toISOString(),
       expiresAt: new Date(issuedAt.getTime() + BADGE_TOKEN_TTL_MS).toISOString(),
     };
@@ -56,6 +59,10 @@ gateRoutes.get(
     query: z.object({ token: tokenText, site: siteCodeText }),
   },
   (req, _res, { query }) => checkAtGate(gateSecret(appConfig(req)), query.token, query.site),
+);
+
+gateRoutes.post("/badge/photo", { allow: canShowOwnBadge, before: [singleFileUpload] }, (req) =>
+  saveTechnicianPhoto(req.user!.technicianId!, req.file),
 );
 
 const canPrintGateSign = requireOwnership(

@@ -46,3 +46,15 @@ export function formatCalendarDate(isoDate: string): string {
   const noonUtc = new Date(Date.UTC(Number(match[1]), Number(match[2]) - 1, Number(match[3]), 12));
   return formatter("UTC", false).format(noonUtc);
 }
+
+/** The calendar date (YYYY-MM-DD) an instant falls on in a zone, e.g. "today" at a site, not on the server's clock. */
+export function calendarDateIn(instant: Date, timeZone: string): string {
+  const parts = new Intl.DateTimeFormat("en-US", {
+    timeZone,
+    year: "numeric",
+    month: "2-digit",
+    day: "2-digit",
+  }).formatToParts(instant);
+  const part = (type: string) => parts.find((p) => p.type === type)?.value ?? "";
+  return `${part("year")}-${part("month")}-${part("day")}`;
+}

@@ -114,6 +114,7 @@ export const router = createBrowserRouter([
               { path: paths.buyer.directory, lazy: () => import("./routes/buyer/directory.tsx") },
               { path: paths.buyer.roster, lazy: () => import("./routes/buyer/roster.tsx") },
               { path: paths.buyer.sites, lazy: () => import("./routes/buyer/sites.tsx") },
+              { path: paths.buyer.gateSign, lazy: () => import("./routes/buyer/gate-sign.tsx") },
               {
                 path: paths.buyer.requirementSets,
                 lazy: () => import("./routes/buyer/requirement-sets.tsx"),

@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser } from "playwright-core";
+import type { Browser, Page } from "playwright-core";
 import { startBrowserServer } from "../support/browser-server.ts";
 import { launchChromium, signIn } from "../support/browser.ts";
 import { seriousAccessibilityProblems } from "../support/axe.ts";
@@ -54,6 +54,7 @@ const pagesByRole: { who: string; email: string | null; pages: string[] }[] = [
     email: "buyer@marlow-precision.test",
     pages: ["/directory", "/roster", "/sites", "/requirement-sets", "/work-orders", "/company"],
   },
+  { who: "buyer with a site", email: "buyer@tamsin-gear.test", pages: ["/sites/:firstSiteId/gate-sign"] },
   {
     who: "admin",
     email: "admin@clearbench.test",
@@ -68,6 +69,14 @@ const pagesByRole: { who: string; email: string | null; pages: string[] }[] = [
   },
 ];
 
+// Pages of one record take the signed-in shop's first site, whatever id the seed gave it.
+const firstSiteId = async (page: Page): Promise<number> => {
+  const sites = await page.evaluate(async () => (await fetch("/api/sites")).json());
+  const id = (sites as { id: number }[])[0]?.id;
+  if (!id) throw new Error("The demo shop has no site to open");
+  return id;
+};
+
 describe("accessibility of every main page (axe-core, WCAG 2 A and AA)", () => {
   it.each(pagesByRole)(
     "has no serious or critical violation on the $who pages",
@@ -77,7 +86,10 @@ describe("accessibility of every main page (axe-core, WCAG 2 A and AA)", () => {
       if (email) await signIn(page, server.url, email, DEMO_PASSWORD);
       const problems: string[] = [];
 
-      for (const path of pages) {
+      for (const pattern of pages) {
+        const path = pattern.includes(":firstSiteId")
+          ? pattern.replace(":firstSiteId", String(await firstSiteId(page)))
+          : pattern;
         await page.goto(`${server.url}${path}`);
         await page.getByRole("heading", { level: 1 }).first().waitFor();
         await page.waitForLoadState("networkidle");

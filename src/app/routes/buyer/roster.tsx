@@ -7,6 +7,7 @@ import { FormError } from "@/components/ui/form-error.tsx";
 import { PageHeader } from "@/components/ui/page-header.tsx";
 import { SafetyCaution } from "@/components/ui/safety-caution.tsx";
 import { StatusKey } from "@/components/ui/status-key.tsx";
+import { CalendarFeedPanel } from "@/features/calendar/components/calendar-feed-panel.tsx";
 import { rosterQuery } from "@/features/roster/api/get-roster.ts";
 import { useRemoveFromRoster } from "@/features/roster/api/remove-from-roster.ts";
 import { rosterExportUrl } from "@/features/roster/api/roster-keys.ts";
@@ -56,6 +57,9 @@ export function Component() {
         />
       )}
       {rows.length > 0 && <StatusKey statuses={["cleared", "lapsing", "not_cleared", "not_checked"]} />}
+      <div className="mt-8 max-w-2xl">
+        <CalendarFeedPanel description="When your roster's technicians and vendors have credentials lapsing, as dates in your own calendar program." />
+      </div>
     </>
   );
 }

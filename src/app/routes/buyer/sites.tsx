@@ -1,7 +1,10 @@
 import { useState } from "react";
 import { useSuspenseQuery } from "@tanstack/react-query";
+import { Link } from "react-router-dom";
 import { Button } from "@/components/ui/button.tsx";
+import { buttonStyles } from "@/components/ui/button-styles.ts";
 import { EmptyState } from "@/components/ui/empty-state.tsx";
+import { hrefs } from "@/config/paths.ts";
 import { PageHeader } from "@/components/ui/page-header.tsx";
 import { usTimeZoneOptions } from "@/features/accounts/components/us-time-zones.ts";
 import { useArchiveSite } from "@/features/sites/api/archive-site.ts";
@@ -44,6 +47,13 @@ function SiteCard({ site }: { site: Site }) {
             </p>
           </div>
           <div className="flex gap-2">
+            <Link
+              to={hrefs.gateSign(site.id)}
+              className={buttonStyles("secondary")}
+              aria-label={`Print the gate sign for ${site.name}`}
+            >
+              Gate sign
+            </Link>
             <Button variant="secondary" onClick={() => setEditing(true)} aria-label={`Edit ${site.name}`}>
               Edit
             </Button>

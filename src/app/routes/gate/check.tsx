@@ -7,7 +7,7 @@ import { formatDateTime } from "@/lib/format-date-time.ts";
 const checkSchema = z.object({
   state: z.enum(["cleared", "not_cleared", "expired", "invalid"]),
   checkedAt: z.string(),
-  technician: z.object({ name: z.string(), company: z.string() }).optional(),
+  technician: z.object({ name: z.string(), company: z.string(), photo: z.string().optional() }).optional(),
   site: z.object({ name: z.string() }).nullable().optional(),
   against: z.string().optional(),
   lines: z.array(z.object({ requirement: z.string(), status: z.string() })).optional(),
@@ -47,6 +47,13 @@ export function Component() {
           >
             {headline[check.data.state]}
           </p>
+          {check.data.technician?.photo && (
+            <img
+              src={check.data.technician.photo}
+              alt={`Photo of ${check.data.technician.name}`}
+              className="h-40 w-40 rounded object-cover"
+            />
+          )}
           {check.data.technician && (
             <p>
               <span className="font-semibold">{check.data.technician.name}</span>,{" "}

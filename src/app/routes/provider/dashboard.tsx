@@ -9,6 +9,7 @@ import type { Credential } from "@/features/credentials/api/credential-shapes.ts
 import { credentialsQuery } from "@/features/credentials/api/get-credentials.ts";
 import { LapseTimelineChart } from "@/features/credentials/components/lapse-timeline-chart.tsx";
 import { byWeek, lapsingWithin } from "@/features/credentials/components/lapse-window.ts";
+import { CalendarFeedPanel } from "@/features/calendar/components/calendar-feed-panel.tsx";
 import { LapsingTable } from "@/features/credentials/components/lapsing-table.tsx";
 import { openReturns } from "@/features/credentials/components/open-returns.ts";
 import { openLapses } from "@/features/credentials/components/open-lapses.ts";
@@ -70,6 +71,7 @@ export function Component() {
             </h2>
             <ReturnedList credentials={returned} correctionHref={renewHref} />
           </section>
+          <CalendarFeedPanel description="Your company's lapse dates and warning dates in your own calendar program, updated on its own." />
         </div>
       </div>
       {showsInsurance && <CautionNote className="mt-8" />}

@@ -1,7 +1,10 @@
-import { useQuery } from "@tanstack/react-query";
+import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { useSearchParams } from "react-router-dom";
 import { z } from "zod";
+import { Button } from "@/components/ui/button.tsx";
+import { FormError } from "@/components/ui/form-error.tsx";
 import { PageHeader } from "@/components/ui/page-header.tsx";
+import { uploadWithProgress } from "@/lib/upload-with-progress.ts";
 import { api } from "@/lib/api-client.ts";
 import { formatDateTime } from "@/lib/format-date-time.ts";
 
@@ -10,7 +13,50 @@ const badgeSchema = z.object({
   qrPng: z.string(),
   issuedAt: z.string(),
   expiresAt: z.string(),
+  photo: z.string().nullable(),
 });
+
+function PhotoForm({ hasPhoto }: { hasPhoto: boolean }) {
+  const queryClient = useQueryClient();
+  const upload = useMutation({
+    mutationFn: (form: FormData) =>
+      uploadWithProgress({
+        path: "/badge/photo",
+        form,
+        schema: z.object({ width: z.number(), height: z.number() }),
+      }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: ["badge"] }),
+  });
+  return (
+    <form
+      className="mt-6 max-w-md space-y-2"
+      onSubmit={(event) => {
+        event.preventDefault();
+        upload.mutate(new FormData(event.currentTarget));
+      }}
+    >
+      <FormError error={upload.error} />
+      <label htmlFor="badge-photo" className="block text-sm font-semibold text-ink-900">
+        {hasPhoto ? "Replace your photo" : "Add your photo"} (JPEG or PNG)
+      </label>
+      <input
+        id="badge-photo"
+        name="file"
+        type="file"
+        accept="image/jpeg,image/png"
+        required
+        className="block"
+      />
+      <p className="text-sm text-ink-700">
+        The front desk sees it when they scan your badge. It is shrunk and its location and camera details are
+        removed.
+      </p>
+      <Button type="submit" variant="secondary" pending={upload.isPending}>
+        Save photo
+      </Button>
+    </form>
+  );
+}
 
 // A fresh code every 4 minutes while the page is open, before the server stops honoring the last one at 5.
 const REFRESH_MS = 4 * 60_000;
@@ -36,6 +82,9 @@ export function Component() {
       {badge.isError && <p role="alert">Your code could not be made. Check your connection and reload.</p>}
       {badge.data && (
         <figure className="flex flex-col items-start gap-2">
+          {badge.data.photo && (
+            <img src={badge.data.photo} alt="Your photo" className="h-32 w-32 rounded object-cover" />
+          )}
           <img src={badge.data.qrPng} alt="Gate badge code to scan" width={320} height={320} />
           <figcaption className="text-sm text-slate-700">
             Good until {formatDateTime(badge.data.expiresAt)}
@@ -45,6 +94,7 @@ export function Component() {
           </figcaption>
         </figure>
       )}
+      {badge.data && <PhotoForm hasPhoto={!!badge.data.photo} />}
     </>
   );
 }

@@ -1,0 +1,30 @@
+import { queryOptions, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { z } from "zod";
+import { api } from "@/lib/api-client.ts";
+
+const statusSchema = z.object({ active: z.boolean(), createdAt: z.string().nullable() });
+const createdSchema = z.object({ active: z.literal(true), url: z.string() });
+
+export const calendarFeedKeys = { status: ["calendar-feed"] as const };
+
+export const calendarFeedQuery = () =>
+  queryOptions({ queryKey: calendarFeedKeys.status, queryFn: () => api.get("/calendar-feed", statusSchema) });
+
+export const useCalendarFeed = () => useQuery(calendarFeedQuery());
+
+/** Creates the feed, or replaces its address; the answer is the only time the full address is shown. */
+export function useRotateCalendarFeed() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: () => api.post("/calendar-feed", {}, createdSchema),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: calendarFeedKeys.status }),
+  });
+}
+
+export function useStopCalendarFeed() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: () => api.send("DELETE", "/calendar-feed"),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: calendarFeedKeys.status }),
+  });
+}
