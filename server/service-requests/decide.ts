@@ -1,5 +1,5 @@
 import type { Transaction } from "sequelize";
-import { DateTime } from "luxon";
+import { calendarDateIn } from "../../shared/dates/local-time.ts";
 import { requestKindLabels } from "../../shared/service-requests/schemas.ts";
 import type { Urgency } from "../../shared/work-orders/schemas.ts";
 import { AppError } from "../http/app-error.ts";
@@ -65,7 +65,7 @@ export async function acceptEstimate(
       [request.site_id],
       transaction,
     );
-    const today = DateTime.now().setZone(site!.time_zone).toISODate()!;
+    const today = calendarDateIn(new Date(), site!.time_zone);
     if (revision!.valid_until < today) {
       throw new AppError(
         "conflict",

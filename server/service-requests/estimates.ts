@@ -1,5 +1,5 @@
 import type { Transaction } from "sequelize";
-import { DateTime } from "luxon";
+import { calendarDateIn } from "../../shared/dates/local-time.ts";
 import { greatCircleDistanceKm } from "../../shared/geo/great-circle-distance.ts";
 import { siteLocalToInstant } from "../../shared/service-requests/business-hours.ts";
 import { estimateTotal } from "../../shared/service-requests/estimate-total.ts";
@@ -123,7 +123,7 @@ async function writeRevision(
       { path: "body.earliestArrival", message: `not a time on the clock in ${site!.time_zone}` },
     ]);
   }
-  const today = DateTime.now().setZone(site!.time_zone).toISODate()!;
+  const today = calendarDateIn(new Date(), site!.time_zone);
   if (input.validUntil < today) {
     throw new AppError("invalid_input", "The estimate must be valid at least until today", [
       { path: "body.validUntil", message: `must be ${today} or later` },
