@@ -1,5 +1,5 @@
 import type { Sequelize, Transaction } from "sequelize";
-import { selectRows } from "../server/standing/index.ts";
+import { selectRows } from "../server/db/sql.ts";
 
 /** Fixed keys, one per job, so every server instance contends for the same lock (the bytes spell "clb" + job number). */
 export const JOB_LOCK_KEYS = {

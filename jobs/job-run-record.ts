@@ -1,5 +1,5 @@
 import type { Transaction } from "sequelize";
-import { runStatement, selectRows } from "../server/standing/index.ts";
+import { runStatement, selectRows } from "../server/db/sql.ts";
 
 /** Starts a job_runs row inside the run's transaction (a rolled-back run leaves no record of success). */
 export async function startJobRun(

@@ -7,12 +7,8 @@ import {
   queueNoticeMessages,
   type HolderCount,
 } from "../server/notices/index.ts";
-import {
-  countStatements,
-  refreshStandings,
-  selectRows,
-  type ChangedStanding,
-} from "../server/standing/index.ts";
+import { refreshStandings, type ChangedStanding } from "../server/standing/index.ts";
+import { countStatements, selectRows } from "../server/db/sql.ts";
 import { JOB_LOCK_KEYS, withAdvisoryLock } from "./advisory-lock.ts";
 import { finishJobRun, startJobRun } from "./job-run-record.ts";
 

@@ -2,7 +2,7 @@ import { DateTime } from "luxon";
 import type { Sequelize } from "sequelize";
 import { loadConfig, publicUrl } from "../server/config.ts";
 import { db } from "../server/db/sequelize.ts";
-import { countStatements, runStatement, selectRows } from "../server/standing/index.ts";
+import { countStatements, runStatement, selectRows } from "../server/db/sql.ts";
 import { JOB_LOCK_KEYS, withAdvisoryLock } from "./advisory-lock.ts";
 import { finishJobRun, startJobRun } from "./job-run-record.ts";
 

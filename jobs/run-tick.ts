@@ -3,7 +3,6 @@ import { log } from "../server/log.ts";
 import { User } from "../server/accounts/index.ts";
 import { Notification } from "../server/notices/index.ts";
 import { enqueueMail } from "../server/mail/index.ts";
-import { JobRun } from "../server/standing/model.ts";
 import {
   claimDueRetry,
   claimTick,
@@ -11,6 +10,7 @@ import {
   markTickFailed,
   markTickSucceeded,
 } from "./claim-tick.ts";
+import { JobRun } from "../server/db/models.ts";
 
 /** A scheduled job's work, judged as of an instant. */
 export type JobWork = (asOf: Date) => Promise<unknown>;

@@ -15,7 +15,8 @@ import { Readiness, refuseWhileStarting } from "./health/readiness.ts";
 import { authRoutes, adminUserRoutes } from "./accounts/index.ts";
 import { outboxRoutes } from "./mail/index.ts";
 import { technicianRoutes } from "./technicians/index.ts";
-import { standingApiRoutes } from "./standing/index.ts";
+import { standingRoutes } from "./standing/index.ts";
+import { noticeRoutes } from "./notices/index.ts";
 import { credentialRoutes } from "./credentials/index.ts";
 import { buyerRouters } from "./directory/buyer-routers.ts";
 import { brokerRoutes } from "./credentials/broker-routes.ts";
@@ -46,7 +47,8 @@ const apiRouters = [
   outboxRoutes,
   technicianRoutes,
   credentialRoutes,
-  standingApiRoutes,
+  standingRoutes,
+  noticeRoutes,
   workOrderRoutes,
   reviewRoutes,
   serviceRequestRoutes,

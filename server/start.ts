@@ -4,7 +4,7 @@ import path from "node:path";
 import { loadConfig, publicUrl } from "./config.ts";
 import { startEmbeddedPostgres, type EmbeddedPostgres } from "./db/embedded-postgres.ts";
 import { startSmtpCatcher, type SmtpCatcher } from "./mail/smtp-catcher.ts";
-import { CaughtMail } from "./mail/model.ts";
+import { CaughtMail } from "./db/models.ts";
 import { startServer, type RunningServer } from "./main.ts";
 import { loadDemoScenarioOnce, DEMO_PASSWORD, demoSignIns } from "./db/demo-scenario/index.ts";
 import { log } from "./log.ts";

@@ -1,6 +1,6 @@
 import type { CurrentUser } from "../../shared/accounts/schemas.ts";
 import type { User } from "./model.ts";
-import type { Company } from "../companies/model.ts";
+import { type Company } from "../db/models.ts";
 
 export function toCurrentUserDto(user: User, company: Company): CurrentUser {
   return {

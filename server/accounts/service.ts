@@ -3,7 +3,6 @@ import type { Config } from "../config.ts";
 import type { InviteUser, SetPassword, SignUp } from "../../shared/accounts/schemas.ts";
 import { db } from "../db/sequelize.ts";
 import { AppError } from "../http/app-error.ts";
-import { Company } from "../companies/model.ts";
 import { placeOfCompany } from "../companies/index.ts";
 import { enqueueMail } from "../mail/outbox.ts";
 import { recordAudit } from "../audit/index.ts";
@@ -19,6 +18,7 @@ import {
 import { endSessionsOfUser } from "./end-sessions.ts";
 import { inviteMail, resetMail } from "./emails.ts";
 import { toCurrentUserDto } from "./dto.ts";
+import { Company } from "../db/models.ts";
 
 const emailTaken = () =>
   new AppError("conflict", "An account with this e-mail already exists", [

@@ -8,7 +8,7 @@ import { Company } from "./model.ts";
 import type { Transaction } from "sequelize";
 import { loadCatalogue } from "../credentials/catalogue.ts";
 import { lapseInstantFor } from "../credentials/field-validation.ts";
-import { Credential } from "../credentials/model.ts";
+import { Credential } from "../db/models.ts";
 
 /** The place of a company's mailing address, with the zone its policy periods are read in; refused when unknown. */
 export function placeOfCompany(

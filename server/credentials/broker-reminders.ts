@@ -4,11 +4,11 @@ import { BROKER_LINK_DAYS, BROKER_REMINDER_DAYS } from "../../shared/credentials
 import { db } from "../db/sequelize.ts";
 import { recordAudit } from "../audit/index.ts";
 import { enqueueMail } from "../mail/index.ts";
-import { Company } from "../companies/model.ts";
 import { CredentialType } from "./model.ts";
 import { BrokerUploadRequest } from "./broker-model.ts";
 import { brokerReminderMail } from "./broker-emails.ts";
 import { brokerLinkUrl, digestOf, formatDay } from "./broker-requests.ts";
+import { Company } from "../db/models.ts";
 
 const DAY_MS = 24 * 60 * 60 * 1000;
 

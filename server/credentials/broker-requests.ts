@@ -12,14 +12,12 @@ import { AppError, notFound } from "../http/app-error.ts";
 import { db } from "../db/sequelize.ts";
 import { recordAudit } from "../audit/index.ts";
 import { enqueueMail } from "../mail/index.ts";
-import { Company } from "../companies/model.ts";
-import { User } from "../accounts/model.ts";
-import { Notification } from "../notices/model.ts";
 import type { FileStorage } from "../storage/index.ts";
 import { Credential, CredentialType } from "./model.ts";
 import { BrokerContact, BrokerUploadRequest } from "./broker-model.ts";
 import { brokerRequestMail, shopCertificateMail } from "./broker-emails.ts";
 import { uploadDocument, type UploadedFile } from "./upload-document.ts";
+import { Company, Notification, User } from "../db/models.ts";
 
 const DAY_MS = 24 * 60 * 60 * 1000;
 

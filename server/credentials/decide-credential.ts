@@ -3,9 +3,6 @@ import { AppError } from "../http/app-error.ts";
 import { db } from "../db/sequelize.ts";
 import { recordAudit } from "../audit/index.ts";
 import { enqueueMail } from "../mail/outbox.ts";
-import { Company } from "../companies/model.ts";
-import { User } from "../accounts/model.ts";
-import { Technician } from "../technicians/model.ts";
 import { refreshStandingsForHolder } from "../standing/index.ts";
 import { toDefinition } from "./catalogue.ts";
 import { checkNamedTechnicians, lapseInstantFor, parseFields } from "./field-validation.ts";
@@ -13,6 +10,7 @@ import { Credential, CredentialType } from "./model.ts";
 import { toCredentialDto } from "./dto.ts";
 import { tellShopOfVerifiedCertificate } from "./broker-requests.ts";
 import { returnedMail, verifiedMail } from "./credential-emails.ts";
+import { Company, Technician, User } from "../db/models.ts";
 
 const alreadyDecided = () =>
   new AppError("conflict", "This credential was already decided (by another reviewer, or earlier)");

@@ -1,7 +1,6 @@
 import type { CredentialDto } from "../../shared/credentials/schemas.ts";
-import { Company } from "../companies/model.ts";
-import { Technician } from "../technicians/model.ts";
 import { Credential, CredentialType, Document } from "./model.ts";
+import { Company, Technician } from "../db/models.ts";
 
 /** Maps rows to the wire shape; storage keys and extracted text never leave the server. */
 export async function toCredentialDtos(rows: Credential[]): Promise<CredentialDto[]> {

@@ -3,7 +3,7 @@ import type { CredentialTypeDefinition } from "../../shared/credentials/catalogu
 import { documentDateProblems } from "../../shared/credentials/document-dates.ts";
 import { credentialLapseInstant } from "../../shared/standing/lapse-instant.ts";
 import { AppError } from "../http/app-error.ts";
-import { Technician } from "../technicians/model.ts";
+import { Technician } from "../db/models.ts";
 
 /** Parses fields with the type's own schema; problems are reported under body.fields.<path>. */
 export function parseFields(

@@ -5,15 +5,13 @@ import { reviewerWarnings } from "../../shared/credentials/reviewer-checks.ts";
 import { db } from "../db/sequelize.ts";
 import { AppError } from "../http/app-error.ts";
 import { auditTrail } from "../audit/index.ts";
-import { User } from "../accounts/model.ts";
-import { Company } from "../companies/model.ts";
-import { Technician } from "../technicians/model.ts";
 import { Credential, CredentialType, Document } from "./model.ts";
 import { toCredentialDto, toCredentialDtos } from "./dto.ts";
 import { duplicateForOtherHolder } from "./upload-document.ts";
 import type { Evidence } from "../../shared/credentials/locate-values.ts";
 import { workStatesOf } from "./work-states.ts";
 import { fieldsForBuyers } from "../../shared/credentials/fields-for-buyers.ts";
+import { Company, Technician, User } from "../db/models.ts";
 
 /** The caller's credentials: the shared read scope narrowed by the filters, never widened by them. */
 export async function listOwnCredentials(

@@ -2,11 +2,11 @@ import type { SubmitCoverages } from "../../shared/credentials/schemas.ts";
 import { AppError } from "../http/app-error.ts";
 import { db } from "../db/sequelize.ts";
 import { recordAudit } from "../audit/index.ts";
-import { Company } from "../companies/model.ts";
 import { toDefinition } from "./catalogue.ts";
 import { lapseInstantFor, parseFields } from "./field-validation.ts";
 import { Credential, CredentialType, Document } from "./model.ts";
 import { toCredentialDtos } from "./dto.ts";
+import { Company } from "../db/models.ts";
 
 type FieldProblem = { path: string; message: string };
 

@@ -2,13 +2,13 @@ import type { SubmitCredential } from "../../shared/credentials/schemas.ts";
 import { AppError } from "../http/app-error.ts";
 import { db } from "../db/sequelize.ts";
 import { recordAudit } from "../audit/index.ts";
-import { Company } from "../companies/model.ts";
 import { activeType, toDefinition } from "./catalogue.ts";
 import { resolveHolder } from "./resolve-holder.ts";
 import { checkNamedTechnicians, lapseInstantFor, parseFields } from "./field-validation.ts";
 import { Credential, CredentialType, Document } from "./model.ts";
 import { documentAccessFor } from "./document-access.ts";
 import { toCredentialDto } from "./dto.ts";
+import { Company } from "../db/models.ts";
 
 const documentProblem = (message: string) =>
   new AppError("invalid_input", "That document cannot back this credential", [

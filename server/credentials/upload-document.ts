@@ -16,8 +16,6 @@ import { AppError } from "../http/app-error.ts";
 import { db } from "../db/sequelize.ts";
 import { recordAudit } from "../audit/index.ts";
 import type { FileStorage } from "../storage/index.ts";
-import { Company } from "../companies/model.ts";
-import { Technician } from "../technicians/model.ts";
 import { extractDocument, type ExtractableMime } from "./extraction/extract-document.ts";
 import { isOcrAvailable } from "./extraction/ocr.ts";
 import { refuseOversizedImage, refuseOversizedPages } from "./extraction/render-bounds.ts";
@@ -26,6 +24,7 @@ import { activeType } from "./catalogue.ts";
 import { resolveHolder } from "./resolve-holder.ts";
 import { Credential, CredentialType, Document } from "./model.ts";
 import { workStatesOf } from "./work-states.ts";
+import { Company, Technician } from "../db/models.ts";
 
 const EXTENSIONS: Record<ExtractableMime, string[]> = {
   "application/pdf": [".pdf"],

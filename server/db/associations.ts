@@ -9,7 +9,8 @@ import { initBrokerModels } from "../credentials/broker-model.ts";
 import { initSiteModels } from "../sites/model.ts";
 import { initWorkOrderModels } from "../work-orders/model.ts";
 import { initReviewModel } from "../reviews/model.ts";
-import { initStandingModels } from "../standing/index.ts";
+import { initStandingTables } from "../standing/model.ts";
+import { initNoticeModels } from "../notices/model.ts";
 
 /** Registers every model with the connection; associations between domains live here only. */
 export function initModels(sequelize: Sequelize): void {
@@ -23,5 +24,6 @@ export function initModels(sequelize: Sequelize): void {
   initSiteModels(sequelize);
   initWorkOrderModels(sequelize);
   initReviewModel(sequelize);
-  initStandingModels(sequelize);
+  initStandingTables(sequelize);
+  initNoticeModels(sequelize);
 }

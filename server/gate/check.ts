@@ -1,13 +1,10 @@
 import { QueryTypes } from "sequelize";
 import { calendarDateIn } from "../../shared/dates/local-time.ts";
 import { db } from "../db/sequelize.ts";
-import { Company } from "../companies/model.ts";
-import { RequirementSet } from "../standing/model.ts";
 import { readTechnicianStanding } from "../standing/technician-standing.ts";
-import { Site } from "../sites/model.ts";
-import { Technician } from "../technicians/model.ts";
 import { technicianPhotoDataUrl } from "./photo.ts";
 import { checkBadgeToken, siteFromGateCode } from "./token.ts";
+import { Company, RequirementSet, Site, Technician } from "../db/models.ts";
 
 export interface GateCheckDto {
   state: "cleared" | "not_cleared" | "expired" | "invalid";

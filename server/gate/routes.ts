@@ -7,12 +7,12 @@ import { appConfig } from "../http/app-locals.ts";
 import { anyone, requireOwnership, requireRole } from "../http/policy.ts";
 import { createRoutes } from "../http/route.ts";
 import { isOwnSite } from "../sites/policy.ts";
-import { Site } from "../sites/model.ts";
 import { notFound } from "../http/app-error.ts";
 import { checkAtGate, listGateChecks } from "./check.ts";
 import { saveTechnicianPhoto, technicianPhotoDataUrl } from "./photo.ts";
 import { singleFileUpload } from "../http/upload.ts";
 import { BADGE_TOKEN_TTL_MS, issueBadgeToken, siteGateCode } from "./token.ts";
+import { Site } from "../db/models.ts";
 
 export const gateRoutes = createRoutes("/api");
 

@@ -5,9 +5,9 @@ import connectPgSimple from "connect-pg-simple";
 import pg from "pg";
 import type { RequestHandler } from "express";
 import type { Config } from "../config.ts";
-import { User } from "../accounts/model.ts";
 import { findUserBySignIn } from "../accounts/service.ts";
 import { toSessionUser } from "../accounts/dto.ts";
+import { User } from "../db/models.ts";
 
 export const SESSION_COOKIE = "clearbench.sid";
 

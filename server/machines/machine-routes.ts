@@ -9,9 +9,9 @@ import { createRoutes } from "../http/route.ts";
 import { requireOwnership, requireRole } from "../http/policy.ts";
 import { db } from "../db/sequelize.ts";
 import { AppError } from "../http/app-error.ts";
-import { Equipment, Site } from "../sites/model.ts";
 import { toEquipmentDto } from "../sites/dto.ts";
 import { listCatalog } from "./catalog-service.ts";
+import { Equipment, Site } from "../db/models.ts";
 
 export const machineRoutes = createRoutes("/api/machines");
 

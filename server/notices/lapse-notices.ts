@@ -1,5 +1,5 @@
 import type { Transaction } from "sequelize";
-import { runStatement, selectRows } from "../standing/index.ts";
+import { runStatement, selectRows } from "../db/sql.ts";
 import { renderLapseNotice, type NoticeRecipient } from "./lapse-email.ts";
 
 export interface HolderCount {

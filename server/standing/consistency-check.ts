@@ -2,7 +2,7 @@ import type { Transaction } from "sequelize";
 import type { RequirementResult, Standing } from "../../shared/standing/standing-types.ts";
 import { computeStandings, type ComputedStanding } from "./compute-stored-standings.ts";
 import { loadStandingInputs } from "./standing-inputs.ts";
-import { selectRows } from "./sql.ts";
+import { selectRows } from "../db/sql.ts";
 
 export interface StandingDifference {
   technicianId: number;

@@ -3,7 +3,7 @@ import type { Standing } from "../../shared/standing/standing-types.ts";
 import { computeStandings, type ComputedStanding } from "./compute-stored-standings.ts";
 import { emitStandingsChanged, type ChangedStanding } from "./standing-hooks.ts";
 import { loadStandingInputs, loadTargets, type HolderSelection } from "./standing-inputs.ts";
-import { runStatement, selectRows } from "./sql.ts";
+import { runStatement, selectRows } from "../db/sql.ts";
 
 export type { ChangedStanding } from "./standing-hooks.ts";
 

@@ -14,7 +14,7 @@ import { loadCredentialTypes, toStandingCredential, type StandingCredentialRow }
 import { lapsingWindowDays } from "./standing-window.ts";
 import { countMeeting } from "../../shared/standing/count-meeting.ts";
 import type { StandingCredential } from "../../shared/standing/standing-types.ts";
-import { selectRows } from "./sql.ts";
+import { selectRows } from "../db/sql.ts";
 
 export async function listRequirementSets(user: SignedInUser, includeArchived: boolean) {
   const sets = await RequirementSet.findAll({

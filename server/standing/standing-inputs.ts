@@ -4,7 +4,7 @@ import { fieldSetSchemas } from "../../shared/credentials/credential-fields.ts";
 import type { Requirement } from "../../shared/standing/requirements.ts";
 import type { CredentialState, StandingCredential } from "../../shared/standing/standing-types.ts";
 import { log } from "../log.ts";
-import { selectRows } from "./sql.ts";
+import { selectRows } from "../db/sql.ts";
 
 export interface StandingTechnician {
   id: number;

@@ -5,7 +5,7 @@ import { db } from "../db/sequelize.ts";
 import { notFound } from "../http/app-error.ts";
 import { computeStandings } from "./compute-stored-standings.ts";
 import { loadStandingInputs } from "./standing-inputs.ts";
-import { selectRows } from "./sql.ts";
+import { selectRows } from "../db/sql.ts";
 
 interface StoredRow {
   requirement_set_id: number | null;

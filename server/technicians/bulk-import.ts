@@ -5,8 +5,6 @@ import { AppError } from "../http/app-error.ts";
 import { db } from "../db/sequelize.ts";
 import { recordAudit } from "../audit/index.ts";
 import { lookupPostalCode } from "../geo/index.ts";
-import { Company } from "../companies/model.ts";
-import { User } from "../accounts/model.ts";
 import { issueToken } from "../accounts/tokens.ts";
 import { inviteMail } from "../accounts/emails.ts";
 import { enqueueMail } from "../mail/outbox.ts";
@@ -20,6 +18,7 @@ import {
   type CheckedRow,
   type ColumnMapping,
 } from "../../shared/technicians/bulk-import.ts";
+import { Company, User } from "../db/models.ts";
 
 export const MAX_IMPORT_ROWS = 5_000;
 

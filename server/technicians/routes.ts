@@ -6,7 +6,6 @@ import { linkBase } from "../http/app-locals.ts";
 import { AppError } from "../http/app-error.ts";
 import { kickOutbox } from "../mail/outbox.ts";
 import { createInvitedUser } from "../accounts/index.ts";
-import { Company } from "../companies/model.ts";
 import { singleFileUpload } from "../http/upload.ts";
 import { importTemplateCsv } from "../../shared/technicians/bulk-import.ts";
 import { singleLineText } from "../../shared/api/text.ts";
@@ -25,6 +24,7 @@ import {
   listCompanyTechnicians,
   setTechnicianActive,
 } from "./service.ts";
+import { Company } from "../db/models.ts";
 
 export const technicianRoutes = createRoutes("/api/technicians");
 

@@ -3,12 +3,11 @@ import { AppError } from "../http/app-error.ts";
 import { db } from "../db/sequelize.ts";
 import { recordAudit } from "../audit/index.ts";
 import { lookupPostalCode } from "../geo/index.ts";
-import { Company } from "../companies/model.ts";
-import { User } from "../accounts/model.ts";
 import { Technician } from "./model.ts";
 import { toTechnicianDto } from "./dto.ts";
 import { viewLevelOf } from "./visibility.ts";
 import { pickTechnicianFields } from "../../shared/visibility/technician-visibility.ts";
+import { Company, User } from "../db/models.ts";
 
 // Default mileage: IRS business standard mileage rate for 2026, 72.5 cents/mi (Notice 2026-10), rounded up to whole cents.
 export const DEFAULT_MILEAGE_RATE_CENTS = 73;

@@ -1,7 +1,5 @@
-import { User } from "../../accounts/model.ts";
 import { insertDemoServiceRequests } from "./service-requests.ts";
 import { hashPassword } from "../../accounts/passwords.ts";
-import { Company } from "../../companies/model.ts";
 import { refreshAllStandings } from "../../standing/index.ts";
 import { createStorage } from "../../storage/index.ts";
 import { db } from "../sequelize.ts";
@@ -9,6 +7,7 @@ import { buildDemoWorld } from "./build-demo-world.ts";
 import { demoCompanies } from "./companies.ts";
 import { insertDemoWorld } from "./insert-demo-world.ts";
 import { commitStagedFiles, discardStagedFiles, stageDemoFiles } from "./stage-demo-files.ts";
+import { Company, User } from "../models.ts";
 
 export { buildDemoWorld } from "./build-demo-world.ts";
 

@@ -2,14 +2,11 @@ import type { InferCreationAttributes, Transaction } from "sequelize";
 import { credentialTypeByCode } from "../../../shared/credentials/catalogue.ts";
 import type { CredentialFields } from "../../../shared/credentials/credential-fields.ts";
 import { credentialLapseInstant } from "../../../shared/standing/lapse-instant.ts";
-import { User } from "../../accounts/model.ts";
 import { AuditEvent } from "../../audit/index.ts";
-import { Company } from "../../companies/model.ts";
-import { Credential, Document } from "../../credentials/model.ts";
 import { lookupPostalCode } from "../../geo/postal-codes.ts";
-import { Technician } from "../../technicians/model.ts";
 import type { DemoCredential, DemoWorld } from "./demo-world-types.ts";
 import type { StagedFile } from "./stage-demo-files.ts";
+import { Company, Credential, Document, Technician, User } from "../models.ts";
 
 type AuditRow = Omit<InferCreationAttributes<AuditEvent>, "id">;
 
