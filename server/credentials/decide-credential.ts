@@ -11,6 +11,7 @@ import { toCredentialDto } from "./dto.ts";
 import { tellShopOfVerifiedCertificate } from "./broker-requests.ts";
 import { returnedMail, verifiedMail } from "./credential-emails.ts";
 import { Company, Technician, User } from "../db/models.ts";
+import { sameCredentialKind } from "../../shared/credentials/credential-kind.ts";
 
 const alreadyDecided = () =>
   new AppError("conflict", "This credential was already decided (by another reviewer, or earlier)");
@@ -29,20 +30,15 @@ async function holderName(credential: Credential, transaction: Transaction) {
   return (await Company.findByPk(credential.companyId, { transaction }))?.name ?? "the company";
 }
 
-/** Credentials that a newly verified one replaces: same type and holder (and, for builder training, same control). */
+/** Verified credentials of the same type and holder; `sameCredentialKind` then narrows them to the ones replaced. */
 function supersedeScope(credential: Credential) {
-  const where: Record<string, unknown> = {
+  return {
     id: { [Op.ne]: credential.id },
     typeCode: credential.typeCode,
     companyId: credential.companyId,
     technicianId: credential.technicianId,
     state: "verified",
   };
-  if (credential.typeCode === "oem_training") {
-    where["fields.builder"] = credential.fields.builder;
-    where["fields.controlFamily"] = credential.fields.controlFamily;
-  }
-  return where;
 }
 
 async function applyFieldEdit(
@@ -113,7 +109,7 @@ export async function verifyCredential(
       transaction,
       lock: transaction.LOCK.UPDATE,
     });
-    for (const old of older) {
+    for (const old of older.filter((o) => sameCredentialKind(o, row))) {
       await old.update({ state: "superseded" }, { transaction });
       await recordAudit(
         {

@@ -1,11 +1,25 @@
 import type { CredentialDto } from "../../shared/credentials/schemas.ts";
+import { awaitsHolder, type FollowUpCandidate } from "../../shared/credentials/credential-kind.ts";
 import { Credential, CredentialType, Document } from "./model.ts";
 import { Company, Technician } from "../db/models.ts";
+
+/** The company's credentials that could answer a returned or lapsed one among `rows` (none asked when none is). */
+async function followUpCandidates(rows: Credential[]): Promise<FollowUpCandidate[]> {
+  const waiting = rows.filter((r) => r.state === "returned" || r.state === "lapsed");
+  if (waiting.length === 0) return [];
+  return Credential.findAll({
+    where: {
+      companyId: [...new Set(waiting.map((r) => r.companyId))],
+      typeCode: [...new Set(waiting.map((r) => r.typeCode))],
+    },
+    attributes: ["id", "typeCode", "companyId", "technicianId", "fields", "state", "submittedAt"],
+  });
+}
 
 /** Maps rows to the wire shape; storage keys and extracted text never leave the server. */
 export async function toCredentialDtos(rows: Credential[]): Promise<CredentialDto[]> {
   if (rows.length === 0) return [];
-  const [types, companies, technicians, documents] = await Promise.all([
+  const [types, companies, technicians, documents, candidates] = await Promise.all([
     CredentialType.findAll({ where: { code: [...new Set(rows.map((r) => r.typeCode))] } }),
     Company.findAll({
       where: { id: [...new Set(rows.map((r) => r.companyId))] },
@@ -19,6 +33,7 @@ export async function toCredentialDtos(rows: Credential[]): Promise<CredentialDt
       where: { id: [...new Set(rows.map((r) => r.documentId))] },
       attributes: ["id", "originalName", "mime"],
     }),
+    followUpCandidates(rows),
   ]);
   const type = new Map(types.map((t) => [t.code, t]));
   const company = new Map(companies.map((c) => [c.id, c.name]));
@@ -43,6 +58,7 @@ export async function toCredentialDtos(rows: Credential[]): Promise<CredentialDt
     submittedAt: r.submittedAt.toISOString(),
     decidedAt: r.decidedAt ? r.decidedAt.toISOString() : null,
     lapsesAt: r.lapsesAt ? r.lapsesAt.toISOString() : null,
+    awaitsHolder: awaitsHolder(r, candidates),
   }));
 }
 

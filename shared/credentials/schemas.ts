@@ -109,6 +109,8 @@ export interface CredentialDto {
   submittedAt: string;
   decidedAt: string | null;
   lapsesAt: string | null;
+  /** A returned or lapsed credential that nothing newer of the same kind has answered yet. */
+  awaitsHolder: boolean;
 }
 
 export interface QueueRowDto {

@@ -4,6 +4,12 @@ export const DEFAULT_WARNING_DAYS = [60, 30, 14, 7, 1] as const;
 /** A requirement is "lapsing" when its credential ends within the widest warning window. */
 export const LAPSING_WINDOW_DAYS = 60;
 
+/** How far ahead the office's overview looks: past the first warning, so what comes right after it shows too. */
+export const OFFICE_LOOK_AHEAD_DAYS = LAPSING_WINDOW_DAYS + 30;
+
+/** The "lapsing" window for a configured list of warning days: the widest of them. */
+export const lapsingWindowOf = (warningDays: readonly number[]): number => Math.max(...warningDays);
+
 export const MS_PER_DAY = 86_400_000;
 
 export type DueThreshold = number | "lapsed";

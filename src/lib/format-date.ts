@@ -18,12 +18,6 @@ export function formatInstantDate(iso: string | null | undefined): string {
   return Number.isNaN(date.getTime()) ? iso : instantDate.format(date);
 }
 
-const DAY_MS = 24 * 60 * 60 * 1000;
-
-/** Whole days from `now` until an instant (negative once it has passed). */
-export const daysUntil = (iso: string, now: Date): number =>
-  Math.ceil((new Date(iso).getTime() - now.getTime()) / DAY_MS);
-
 /** A wait in hours as people say it: "3 d 4 h", "5 h", "under 1 h". */
 export function formatWaiting(hours: number): string {
   const whole = Math.floor(hours);

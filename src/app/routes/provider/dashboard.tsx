@@ -8,17 +8,16 @@ import { PageHeader } from "@/components/ui/page-header.tsx";
 import type { Credential } from "@/features/credentials/api/credential-shapes.ts";
 import { credentialsQuery } from "@/features/credentials/api/get-credentials.ts";
 import { LapseTimelineChart } from "@/features/credentials/components/lapse-timeline-chart.tsx";
-import { byWeek, lapsingWithin } from "@/features/credentials/components/lapse-window.ts";
+import { byWeek } from "@/features/credentials/components/lapse-window.ts";
+import { lapsingSoon } from "@shared/standing/lapsing-soon.ts";
+import { OFFICE_LOOK_AHEAD_DAYS } from "@shared/standing/warning-windows.ts";
 import { CalendarFeedPanel } from "@/features/calendar/components/calendar-feed-panel.tsx";
 import { LapsingTable } from "@/features/credentials/components/lapsing-table.tsx";
-import { openReturns } from "@/features/credentials/components/open-returns.ts";
-import { openLapses } from "@/features/credentials/components/open-lapses.ts";
 import { LapsedList } from "@/features/credentials/components/lapsed-list.tsx";
 import { ReturnedList } from "@/features/credentials/components/returned-list.tsx";
 import { queryClient } from "@/lib/query-client.ts";
 
-// The horizon of "what lapses next": the first warning goes out 60 days ahead, so 90 shows what comes after it too.
-const HORIZON_DAYS = 90;
+const HORIZON_DAYS = OFFICE_LOOK_AHEAD_DAYS;
 const HORIZON_WEEKS = Math.ceil(HORIZON_DAYS / 7);
 
 export async function loader() {
@@ -32,10 +31,11 @@ const renewHref = (c: Credential) =>
 export function Component() {
   const { data: credentials } = useSuspenseQuery(credentialsQuery());
   const [now] = useState(() => new Date());
-  const lapsing = useMemo(() => lapsingWithin(credentials, now, HORIZON_DAYS), [credentials, now]);
+  const lapsing = useMemo(() => lapsingSoon(credentials, now, HORIZON_DAYS), [credentials, now]);
   const weeks = useMemo(() => byWeek(lapsing, now, HORIZON_WEEKS), [lapsing, now]);
-  const returned = useMemo(() => openReturns(credentials), [credentials]);
-  const lapsed = useMemo(() => openLapses(credentials), [credentials]);
+  // The server says which returned and lapsed credentials still wait for a new upload.
+  const returned = useMemo(() => credentials.filter((c) => c.state === "returned" && c.awaitsHolder), [credentials]);
+  const lapsed = useMemo(() => credentials.filter((c) => c.state === "lapsed" && c.awaitsHolder), [credentials]);
   const showsInsurance = credentials.some((c) => c.category === "insurance");
 
   return (

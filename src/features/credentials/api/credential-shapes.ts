@@ -51,6 +51,7 @@ export const credentialSchema = z.object({
   submittedAt: z.string(),
   decidedAt: z.string().nullable(),
   lapsesAt: z.string().nullable(),
+  awaitsHolder: z.boolean(),
 });
 export type Credential = z.infer<typeof credentialSchema>;
 

@@ -3,7 +3,8 @@ import { Link } from "react-router-dom";
 import { DataTable, dataTableColumns } from "@/components/ui/data-table.tsx";
 import { EmptyState } from "@/components/ui/empty-state.tsx";
 import { StatusBadge } from "@/components/ui/status-badge.tsx";
-import { daysUntil, formatInstantDate } from "@/lib/format-date.ts";
+import { formatInstantDate } from "@/lib/format-date.ts";
+import { OFFICE_LOOK_AHEAD_DAYS, daysUntil } from "@shared/standing/warning-windows.ts";
 import type { Credential } from "../api/credential-shapes.ts";
 
 type LapsingTableProps = {
@@ -24,7 +25,7 @@ export function LapsingTable({ credentials, now, renewHref }: LapsingTableProps)
         sortFn: "text",
         cell: (info) => formatInstantDate(info.row.original.lapsesAt),
       }),
-      column.accessor((c) => daysUntil(c.lapsesAt ?? "", now), {
+      column.accessor((c) => daysUntil(new Date(c.lapsesAt ?? ""), now), {
         id: "standing",
         header: "Status",
         sortFn: "basic",
@@ -52,13 +53,13 @@ export function LapsingTable({ credentials, now, renewHref }: LapsingTableProps)
   }, [now, renewHref]);
   return (
     <DataTable
-      caption="What lapses in the next 90 days"
+      caption={`What lapses in the next ${OFFICE_LOOK_AHEAD_DAYS} days`}
       hideCaption
       columns={columns}
       data={credentials}
       getRowId={(c) => String(c.id)}
       initialSorting={[{ id: "lapsesAt", desc: false }]}
-      empty={<EmptyState title="Nothing lapses in the next 90 days" />}
+      empty={<EmptyState title={`Nothing lapses in the next ${OFFICE_LOOK_AHEAD_DAYS} days`} />}
     />
   );
 }

@@ -1,5 +1,5 @@
 import { StatusBadge } from "@/components/ui/status-badge.tsx";
-import { daysUntil } from "@/lib/format-date.ts";
+import { daysUntil } from "@shared/standing/warning-windows.ts";
 import type { JudgedAgainst } from "../api/directory-shapes.ts";
 
 type DirectoryStandingBadgeProps = {
@@ -23,7 +23,7 @@ export function DirectoryStandingBadge({
   const baselineOnly = judgedAgainst?.kind === "baseline";
   const badge =
     standing === "lapsing" && earliestLapse ? (
-      <StatusBadge status="lapsing" daysLeft={daysUntil(earliestLapse, now)} />
+      <StatusBadge status="lapsing" daysLeft={daysUntil(new Date(earliestLapse), now)} />
     ) : standing === "not_cleared" ? (
       <StatusBadge status="not_cleared" />
     ) : (

@@ -4,7 +4,8 @@ import { hrefs } from "@/config/paths.ts";
 import { Button } from "@/components/ui/button.tsx";
 import { DataTable, dataTableColumns } from "@/components/ui/data-table.tsx";
 import { StatusBadge } from "@/components/ui/status-badge.tsx";
-import { daysUntil, formatInstantDate } from "@/lib/format-date.ts";
+import { formatInstantDate } from "@/lib/format-date.ts";
+import { daysUntil } from "@shared/standing/warning-windows.ts";
 import type { RosterEntry } from "../api/roster-shapes.ts";
 
 /** One line per technician; a company entry contributes all of its technicians. */
@@ -24,7 +25,7 @@ function RosterStanding({ row }: { row: RosterRow }) {
   // A standing never worked out is not "awaiting verification": nothing may be waiting for a reviewer.
   if (row.standing === null) return <StatusBadge status="not_checked" />;
   if (row.standing === "lapsing" && row.nextLapse)
-    return <StatusBadge status="lapsing" daysLeft={daysUntil(row.nextLapse, new Date())} />;
+    return <StatusBadge status="lapsing" daysLeft={daysUntil(new Date(row.nextLapse), new Date())} />;
   return <StatusBadge status={row.standing === "lapsing" ? "cleared" : row.standing} />;
 }
 

@@ -3,7 +3,8 @@ import { StatusBadge } from "@/components/ui/status-badge.tsx";
 import { credentialTypeByCode } from "@shared/credentials/catalogue.ts";
 import { lapseWords, readerTimeZone } from "@shared/standing/lapse-words.ts";
 import { onlyCompanyCanRenew } from "@shared/standing/who-renews.ts";
-import { daysUntil, formatInstantDate } from "@/lib/format-date.ts";
+import { formatInstantDate } from "@/lib/format-date.ts";
+import { daysUntil } from "@shared/standing/warning-windows.ts";
 import type {
   RequirementResultView,
   StandingAgainstView,
@@ -27,7 +28,7 @@ const reasonWords: Record<NonNullable<RequirementResultView["reason"]>, string> 
 
 function OverallBadge({ result, now }: { result: StandingAgainstView; now: Date }) {
   if (result.standing === "lapsing" && result.earliestLapse)
-    return <StatusBadge status="lapsing" daysLeft={daysUntil(result.earliestLapse, now)} />;
+    return <StatusBadge status="lapsing" daysLeft={daysUntil(new Date(result.earliestLapse), now)} />;
   return <StatusBadge status={result.standing === "lapsing" ? "cleared" : result.standing} />;
 }
 
@@ -68,7 +69,7 @@ function RequirementRow({
     result.status === "met" ? (
       <StatusBadge status="cleared" />
     ) : result.status === "lapsing" && result.lapsesAt ? (
-      <StatusBadge status="lapsing" daysLeft={daysUntil(result.lapsesAt, now)} />
+      <StatusBadge status="lapsing" daysLeft={daysUntil(new Date(result.lapsesAt), now)} />
     ) : (
       <StatusBadge status="not_cleared" />
     );
