@@ -16,7 +16,8 @@ const KIND_FIELDS: Record<string, readonly string[]> = { oem_training: ["builder
  * replaces the verified one of the same kind, and a newer upload of the same kind answers a returned or lapsed one.
  */
 export function sameCredentialKind(a: CredentialKindFields, b: CredentialKindFields): boolean {
-  if (a.typeCode !== b.typeCode || a.companyId !== b.companyId || a.technicianId !== b.technicianId) return false;
+  if (a.typeCode !== b.typeCode || a.companyId !== b.companyId || a.technicianId !== b.technicianId)
+    return false;
   return (KIND_FIELDS[a.typeCode] ?? []).every((key) => a.fields[key] === b.fields[key]);
 }
 
@@ -33,7 +34,10 @@ const submittedMs = (c: FollowUpCandidate) => new Date(c.submittedAt).getTime();
  * (for a lapse, nothing newer that is verified or awaiting verification; a newer one that was itself returned leaves
  * the lapse open). Every other state waits for nobody.
  */
-export function awaitsHolder(credential: FollowUpCandidate, sameCompany: readonly FollowUpCandidate[]): boolean {
+export function awaitsHolder(
+  credential: FollowUpCandidate,
+  sameCompany: readonly FollowUpCandidate[],
+): boolean {
   if (credential.state !== "returned" && credential.state !== "lapsed") return false;
   const answers = (other: FollowUpCandidate) =>
     credential.state === "returned" || other.state === "verified" || other.state === "submitted";

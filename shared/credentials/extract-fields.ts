@@ -15,6 +15,7 @@ import {
   parseDocumentDate,
   parseDocumentEndDate,
 } from "./date-formats.ts";
+import { LIMIT_LINES_BY_COVERAGE } from "./limit-lines.ts";
 
 /**
  * Reads proposed fields out of a document's text (a PDF text layer or OCR output). Everything here is a
@@ -72,29 +73,28 @@ const COVERAGE_MARKERS: Record<InsuranceCoverageCode, RegExp> = {
 
 // "(each occ.)" after rented premises is part of another label, hence the look-behind.
 const EACH_OCCURRENCE = /(?<!\(\s*)\bEACH\s*OCC(?:URRENCE|\.)?/i;
-const LIMIT_LABELS: Record<InsuranceCoverageCode, [LimitName, RegExp][]> = {
-  general_liability: [
-    ["eachOccurrence", EACH_OCCURRENCE],
-    ["damageToRentedPremises", /(?:DAMAGE\s+TO\s+)?RENTED\s+PREMISES/i],
-    ["medicalExpense", /MED(?:ICAL)?\.?\s*EXP(?:ENSE)?/i],
-    ["personalAdvertisingInjury", /PERSONAL\s*(?:&|AND)?\s*ADV(?:ERTISING)?\.?\s*INJ(?:URY)?/i],
-    ["generalAggregate", /GEN(?:ERAL|'L)?\.?\s*AGG(?:REGATE)?(?!\s*LIMIT\s+APPLIES)/i],
-    [
-      "productsCompletedOpsAggregate",
-      /PRODUCTS?\s*[-–—]?\s*COMP(?:LETED)?\s*[/I|l1]?\s*OP(?:ERATION)?S?\.?\s*AGG(?:REGATE)?/i,
-    ],
-  ],
-  auto_liability: [["combinedSingleLimit", /COMBINED\s*SINGLE\s*LIMIT/i]],
-  umbrella_liability: [
-    ["umbrellaEachOccurrence", EACH_OCCURRENCE],
-    ["umbrellaAggregate", /(?<!GEN\S*\s*)\bAGG(?:REGATE)?\b/i],
-  ],
-  workers_comp: [
-    ["employersLiabilityEachAccident", /E\.?\s*L\.?\s*EACH\s*ACCIDENT/i],
-    ["employersLiabilityDiseaseEachEmployee", /DISEASE\s*[-–—]?\s*EA(?:CH)?\.?\s*EMPLOYEE/i],
-    ["employersLiabilityDiseasePolicyLimit", /DISEASE\s*[-–—]?\s*POLICY\s*LIMIT/i],
-  ],
+// How each limit line's label may be printed; which lines a coverage prints comes from LIMIT_LINES_BY_COVERAGE.
+const LIMIT_PATTERNS: Record<LimitName, RegExp> = {
+  eachOccurrence: EACH_OCCURRENCE,
+  damageToRentedPremises: /(?:DAMAGE\s+TO\s+)?RENTED\s+PREMISES/i,
+  medicalExpense: /MED(?:ICAL)?\.?\s*EXP(?:ENSE)?/i,
+  personalAdvertisingInjury: /PERSONAL\s*(?:&|AND)?\s*ADV(?:ERTISING)?\.?\s*INJ(?:URY)?/i,
+  generalAggregate: /GEN(?:ERAL|'L)?\.?\s*AGG(?:REGATE)?(?!\s*LIMIT\s+APPLIES)/i,
+  productsCompletedOpsAggregate:
+    /PRODUCTS?\s*[-–—]?\s*COMP(?:LETED)?\s*[/I|l1]?\s*OP(?:ERATION)?S?\.?\s*AGG(?:REGATE)?/i,
+  combinedSingleLimit: /COMBINED\s*SINGLE\s*LIMIT/i,
+  umbrellaEachOccurrence: EACH_OCCURRENCE,
+  umbrellaAggregate: /(?<!GEN\S*\s*)\bAGG(?:REGATE)?\b/i,
+  employersLiabilityEachAccident: /E\.?\s*L\.?\s*EACH\s*ACCIDENT/i,
+  employersLiabilityDiseaseEachEmployee: /DISEASE\s*[-–—]?\s*EA(?:CH)?\.?\s*EMPLOYEE/i,
+  employersLiabilityDiseasePolicyLimit: /DISEASE\s*[-–—]?\s*POLICY\s*LIMIT/i,
 };
+const LIMIT_LABELS = Object.fromEntries(
+  insuranceCoverageCodes.map((code) => [
+    code,
+    LIMIT_LINES_BY_COVERAGE[code].map((name): [LimitName, RegExp] => [name, LIMIT_PATTERNS[name]]),
+  ]),
+) as Record<InsuranceCoverageCode, [LimitName, RegExp][]>;
 
 // An amount may sit a little after its label ("$", dots, OCR debris), never further than this.
 const AMOUNT_SEARCH_CHARS = 40;

@@ -1,18 +1,22 @@
 import type { LimitName } from "@shared/credentials/credential-fields.ts";
 import type { Requirement } from "@shared/standing/requirements.ts";
+import { limitLabelWithCoverage } from "@shared/credentials/limit-lines.ts";
 
 // The limit lines a minimum is usually set on (common practice); a stored minimum on any other line is kept as it is.
-export const offeredLimits = [
-  ["eachOccurrence", "General liability, each occurrence ($)"],
-  ["generalAggregate", "General liability, aggregate ($)"],
-  ["combinedSingleLimit", "Auto, combined single limit ($)"],
-  ["employersLiabilityEachAccident", "Employer's liability, each accident ($)"],
-  ["employersLiabilityDiseaseEachEmployee", "Employer's liability, disease, each employee ($)"],
-  ["employersLiabilityDiseasePolicyLimit", "Employer's liability, disease, policy limit ($)"],
-  ["umbrellaEachOccurrence", "Umbrella, each occurrence ($)"],
-] as const satisfies readonly (readonly [LimitName, string])[];
+const offeredLimitNames = [
+  "eachOccurrence",
+  "generalAggregate",
+  "combinedSingleLimit",
+  "employersLiabilityEachAccident",
+  "employersLiabilityDiseaseEachEmployee",
+  "employersLiabilityDiseasePolicyLimit",
+  "umbrellaEachOccurrence",
+] as const satisfies readonly LimitName[];
+export const offeredLimits = offeredLimitNames.map(
+  (name) => [name, `${limitLabelWithCoverage(name)} ($)`] as const,
+);
 
-type OfferedLimit = (typeof offeredLimits)[number][0];
+type OfferedLimit = (typeof offeredLimitNames)[number];
 
 /** One requirement (of a set or of the baseline) as the form holds it: numbers stay text until the schema reads them. */
 export type RequirementDraft = {

@@ -34,8 +34,14 @@ export function Component() {
   const lapsing = useMemo(() => lapsingSoon(credentials, now, HORIZON_DAYS), [credentials, now]);
   const weeks = useMemo(() => byWeek(lapsing, now, HORIZON_WEEKS), [lapsing, now]);
   // The server says which returned and lapsed credentials still wait for a new upload.
-  const returned = useMemo(() => credentials.filter((c) => c.state === "returned" && c.awaitsHolder), [credentials]);
-  const lapsed = useMemo(() => credentials.filter((c) => c.state === "lapsed" && c.awaitsHolder), [credentials]);
+  const returned = useMemo(
+    () => credentials.filter((c) => c.state === "returned" && c.awaitsHolder),
+    [credentials],
+  );
+  const lapsed = useMemo(
+    () => credentials.filter((c) => c.state === "lapsed" && c.awaitsHolder),
+    [credentials],
+  );
   const showsInsurance = credentials.some((c) => c.category === "insurance");
 
   return (

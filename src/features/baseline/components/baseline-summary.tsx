@@ -1,17 +1,17 @@
 import type { Requirement } from "@shared/standing/requirements.ts";
 import { formatDollars } from "@/lib/format-money.ts";
-import { offeredLimits } from "@/components/requirements/requirement-draft.ts";
+import type { LimitName } from "@shared/credentials/credential-fields.ts";
+import { LIMIT_LABELS, limitLabelWithCoverage } from "@shared/credentials/limit-lines.ts";
 
 type BaselineSummaryProps = {
   requirements: readonly Requirement[];
   typeNames: ReadonlyMap<string, string>;
 };
 
-const limitLabels = new Map<string, string>(
-  offeredLimits.map(([name, label]) => [name, label.replace(" ($)", "")]),
-);
-// Lines without a label of their own read as words: "productsCompletedOpsAggregate" → "products completed ops aggregate".
-const limitLabel = (name: string) => limitLabels.get(name) ?? name.replace(/([A-Z])/g, " $1").toLowerCase();
+const limitLabel = (name: string) =>
+  name in LIMIT_LABELS
+    ? limitLabelWithCoverage(name as LimitName)
+    : name.replace(/([A-Z])/g, " $1").toLowerCase();
 
 // What each line asks beyond holding the credential, in words.
 function conditionsOf(r: Requirement): string[] {

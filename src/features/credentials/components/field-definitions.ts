@@ -1,4 +1,5 @@
-import type { FieldSet, LimitName } from "@shared/credentials/credential-fields.ts";
+import type { FieldSet } from "@shared/credentials/credential-fields.ts";
+import { LIMIT_LABELS, limitLinesFor } from "@shared/credentials/limit-lines.ts";
 
 export type FieldKind = "text" | "date" | "dollars" | "checkbox" | "level" | "state" | "names";
 
@@ -10,44 +11,6 @@ export type FieldDefinition = {
   required?: boolean;
   hint?: string;
 };
-
-export const limitLabels: Record<LimitName, string> = {
-  eachOccurrence: "Each occurrence",
-  generalAggregate: "General aggregate",
-  productsCompletedOpsAggregate: "Products-completed operations aggregate",
-  personalAdvertisingInjury: "Personal and advertising injury",
-  damageToRentedPremises: "Damage to rented premises",
-  medicalExpense: "Medical expense (any one person)",
-  combinedSingleLimit: "Combined single limit (each accident)",
-  employersLiabilityEachAccident: "Employer's liability, each accident",
-  employersLiabilityDiseaseEachEmployee: "Employer's liability, disease, each employee",
-  employersLiabilityDiseasePolicyLimit: "Employer's liability, disease, policy limit",
-  umbrellaEachOccurrence: "Umbrella, each occurrence",
-  umbrellaAggregate: "Umbrella, aggregate",
-};
-
-// The limit lines each coverage prints on a certificate (common practice); other lines would only invite wrong entries.
-const limitsByType: Record<string, readonly LimitName[]> = {
-  general_liability: [
-    "eachOccurrence",
-    "generalAggregate",
-    "productsCompletedOpsAggregate",
-    "personalAdvertisingInjury",
-    "damageToRentedPremises",
-    "medicalExpense",
-  ],
-  auto_liability: ["combinedSingleLimit"],
-  workers_comp: [
-    "employersLiabilityEachAccident",
-    "employersLiabilityDiseaseEachEmployee",
-    "employersLiabilityDiseasePolicyLimit",
-  ],
-  umbrella_liability: ["umbrellaEachOccurrence", "umbrellaAggregate"],
-};
-
-const allLimits = Object.keys(limitLabels) as LimitName[];
-
-export const limitsFor = (typeCode: string): readonly LimitName[] => limitsByType[typeCode] ?? allLimits;
 
 const dateHint = "Leave empty if the document shows none.";
 
@@ -86,9 +49,9 @@ export function fieldDefinitionsFor(fieldSet: FieldSet, typeCode: string): Field
               },
             ]
           : []),
-        ...limitsFor(typeCode).map((name) => ({
+        ...limitLinesFor(typeCode).map((name) => ({
           path: `limits.${name}`,
-          label: limitLabels[name],
+          label: LIMIT_LABELS[name],
           kind: "dollars" as const,
           hint: "Whole dollars",
         })),

@@ -1,23 +1,10 @@
 import { credentialTypeByCode } from "@shared/credentials/catalogue.ts";
+import type { LimitName } from "@shared/credentials/credential-fields.ts";
+import { LIMIT_LABELS } from "@shared/credentials/limit-lines.ts";
 import { lapseWords, readerTimeZone } from "@shared/standing/lapse-words.ts";
 import { formatIsoDate } from "@/lib/format-date.ts";
 import { formatDollars } from "@/lib/format-money.ts";
 import type { ProfileCredential } from "../api/directory-shapes.ts";
-
-const limitWords: Record<string, string> = {
-  eachOccurrence: "Each occurrence",
-  generalAggregate: "General aggregate",
-  productsCompletedOpsAggregate: "Products-completed operations aggregate",
-  personalAdvertisingInjury: "Personal and advertising injury",
-  damageToRentedPremises: "Damage to rented premises",
-  medicalExpense: "Medical expense",
-  combinedSingleLimit: "Combined single limit",
-  employersLiabilityEachAccident: "Employer's liability, each accident",
-  employersLiabilityDiseaseEachEmployee: "Employer's liability, disease, each employee",
-  employersLiabilityDiseasePolicyLimit: "Employer's liability, disease, policy limit",
-  umbrellaEachOccurrence: "Umbrella, each occurrence",
-  umbrellaAggregate: "Umbrella, aggregate",
-};
 
 const text = (v: unknown): string | null => (typeof v === "string" && v.trim() ? v : null);
 
@@ -39,7 +26,7 @@ function factsOf(fields: Record<string, unknown>): [string, string][] {
   const limits =
     fields.limits && typeof fields.limits === "object" ? (fields.limits as Record<string, unknown>) : {};
   for (const [name, value] of Object.entries(limits))
-    if (typeof value === "number") add(limitWords[name] ?? name, formatDollars(value));
+    if (typeof value === "number") add(LIMIT_LABELS[name as LimitName] ?? name, formatDollars(value));
   if (typeof fields.additionalInsured === "boolean")
     add("Additional insured", fields.additionalInsured ? "Yes" : "No");
   if (typeof fields.waiverOfSubrogation === "boolean")
