@@ -1,4 +1,5 @@
 import { createHmac } from "node:crypto";
+import { DEFAULT_WARNING_DAYS } from "../shared/standing/warning-windows.ts";
 import { z } from "zod";
 
 // The only file that reads process.env. Demo defaults are built in so `npm start` just works;
@@ -44,7 +45,7 @@ const configSchema = z
     JOB_CRON: z.string().default("0 6 * * *"),
     WARNING_DAYS: z
       .string()
-      .default("60,30,14,7,1")
+      .default(DEFAULT_WARNING_DAYS.join(","))
       .transform((s) => s.split(",").map((d) => Number(d.trim())))
       .pipe(z.array(z.number().int().min(1).max(365)).min(1)),
     RUN_SCHEDULE: booleanText.default(true),

@@ -3,6 +3,7 @@ import pg from "pg";
 import { Sequelize } from "sequelize";
 import { runLapseJob } from "../lapse.ts";
 import { withDatabase } from "./bench-cluster.ts";
+import { DEFAULT_WARNING_DAYS } from "../../shared/standing/warning-windows.ts";
 
 export interface LapseBenchResult {
   asOf: string;
@@ -18,7 +19,7 @@ export interface LapseBenchResult {
   ratio: number;
 }
 
-const WARNING_DAYS = [60, 30, 14, 7, 1];
+const WARNING_DAYS = [...DEFAULT_WARNING_DAYS];
 
 async function copyDatabase(clusterUrl: string, template: string, name: string): Promise<string> {
   const admin = new pg.Client({ connectionString: withDatabase(clusterUrl, "postgres") });

@@ -18,13 +18,14 @@ import {
   workOrdersSql,
   ZIPS_TABLE_SQL,
 } from "./large-data-sql.ts";
+import { DEFAULT_WARNING_DAYS } from "../../shared/standing/warning-windows.ts";
 
 /** Bump when the generated data changes shape, so the bench reloads it. */
 export const SEED_VERSION = 1;
 export const LARGE_PASSWORD = "clearbench-large";
 // The production default cost (server/config.ts BCRYPT_COST), so the sign-in figure is the real one.
 const PASSWORD_COST = 12;
-const WARNING_DAYS = [60, 30, 14, 7, 1];
+const WARNING_DAYS = [...DEFAULT_WARNING_DAYS];
 
 export interface SeedInfo {
   anchor: Date;

@@ -1,5 +1,5 @@
 import { buildCertificatePdf } from "../../server/db/demo-scenario/documents/build-certificate-pdf.ts";
-import { MAX_UPLOAD_BYTES } from "../../server/http/upload.ts";
+import { MAX_UPLOAD_BYTES } from "../../shared/credentials/upload-limits.ts";
 import { readRssMb, sampleRss } from "./rss-sampler.ts";
 
 export interface UploadBenchResult {

@@ -25,12 +25,9 @@ import { resolveHolder } from "./resolve-holder.ts";
 import { Credential, CredentialType, Document } from "./model.ts";
 import { workStatesOf } from "./work-states.ts";
 import { Company, Technician } from "../db/models.ts";
+import { DOCUMENT_FILE_TYPES } from "../../shared/credentials/upload-limits.ts";
 
-const EXTENSIONS: Record<ExtractableMime, string[]> = {
-  "application/pdf": [".pdf"],
-  "image/png": [".png"],
-  "image/jpeg": [".jpg", ".jpeg"],
-};
+const EXTENSIONS: Record<ExtractableMime, readonly string[]> = DOCUMENT_FILE_TYPES;
 
 const UNREADABLE: Record<string, string> = {
   empty: "The PDF has no pages or no content",

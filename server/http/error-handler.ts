@@ -3,6 +3,7 @@ import { ZodError } from "zod";
 import { MulterError } from "multer";
 import { AppError } from "./app-error.ts";
 import { log } from "../log.ts";
+import { MAX_UPLOAD_SIZE_WORDS } from "../../shared/credentials/upload-limits.ts";
 
 function zodToAppError(err: ZodError, where: string): AppError {
   const fields = err.issues.map((i) => ({
@@ -49,8 +50,8 @@ export function toAppError(err: unknown): AppError | undefined {
   if (err instanceof ZodError) return zodToAppError(err, "body");
   if (err instanceof MulterError) {
     if (err.code === "LIMIT_FILE_SIZE")
-      return new AppError("too_large", "The file is larger than 10 MB", [
-        { path: "file", message: "larger than 10 MB" },
+      return new AppError("too_large", `The file is larger than ${MAX_UPLOAD_SIZE_WORDS}`, [
+        { path: "file", message: `larger than ${MAX_UPLOAD_SIZE_WORDS}` },
       ]);
     return new AppError("bad_request", `Upload refused: ${err.message}`, [
       { path: err.field ?? "file", message: err.message },

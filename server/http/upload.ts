@@ -3,8 +3,7 @@ import { randomUUID } from "node:crypto";
 import type { RequestHandler } from "express";
 import { appStorage } from "../storage/index.ts";
 import { utf8FileName } from "./file-names.ts";
-
-export const MAX_UPLOAD_BYTES = 10 * 1024 * 1024;
+import { MAX_UPLOAD_BYTES } from "../../shared/credentials/upload-limits.ts";
 
 /**
  * multer to disk, never to memory: the file streams into the storage's incoming folder under a random

@@ -40,11 +40,12 @@ import {
   sendThreadFile,
 } from "./files.ts";
 import { listFollowUps, logFollowUp } from "./follow-up.ts";
+import { lapsingWindowOf } from "../../shared/standing/warning-windows.ts";
 
 export const serviceRequestRoutes = createRoutes("/api/service-requests");
 
 // "Lapsing" means inside the widest warning window, as everywhere else.
-const warningDays = (req: Request) => Math.max(...appConfig(req).WARNING_DAYS);
+const warningDays = (req: Request) => lapsingWindowOf(appConfig(req).WARNING_DAYS);
 const kick = (req: Request) => kickOutbox(req.app.locals);
 
 serviceRequestRoutes.post(

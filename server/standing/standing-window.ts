@@ -1,4 +1,5 @@
 import { loadConfig } from "../config.ts";
+import { lapsingWindowOf } from "../../shared/standing/warning-windows.ts";
 
 let windowDays: number | undefined;
 
@@ -7,6 +8,6 @@ let windowDays: number | undefined;
  * e-mail and the "Lapsing" badge appear together. Read once: the server, the job and the check must all agree.
  */
 export function lapsingWindowDays(): number {
-  windowDays ??= Math.max(...loadConfig().WARNING_DAYS);
+  windowDays ??= lapsingWindowOf(loadConfig().WARNING_DAYS);
   return windowDays;
 }

@@ -21,11 +21,12 @@ import { findWorkOrder, listWorkOrders } from "./find-work-orders.ts";
 import { listMessages, postMessage, sendMessageFile } from "./work-order-messages.ts";
 import { removeUpload } from "./attachment-file.ts";
 import { sendStandingProof } from "./standing-proof.ts";
+import { lapsingWindowOf } from "../../shared/standing/warning-windows.ts";
 
 export const workOrderRoutes = createRoutes("/api/work-orders");
 
 // "Lapsing" means inside the widest warning window, as in the stored standings and the daily job.
-const warningDays = (req: Request) => Math.max(...appConfig(req).WARNING_DAYS);
+const warningDays = (req: Request) => lapsingWindowOf(appConfig(req).WARNING_DAYS);
 const linkTo = (req: Request) => (id: number) => `${linkBase(req)}/work-orders/${id}`;
 
 workOrderRoutes.post(

@@ -3,7 +3,7 @@ import { singleLineText } from "../api/text.ts";
 import { idParam } from "../credentials/schemas.ts";
 import { machineTechnologies } from "../technicians/schemas.ts";
 import type { Standing, UnmetReason, RequirementResult } from "../standing/standing-types.ts";
-import type { CallOutEstimate } from "./call-out-estimate.ts";
+import { DEFAULT_ON_SITE_HOURS, type CallOutEstimate } from "./call-out-estimate.ts";
 
 /** An empty query-string value ("?q=") means "no filter", not zero. */
 const optional = <T extends z.ZodType>(schema: T) =>
@@ -59,7 +59,10 @@ export const directoryQuerySchema = z.object({
     (v) => (v === "" ? undefined : v),
     z.coerce.number().int().min(1).max(MAX_PAGE_SIZE).default(20),
   ),
-  onSiteHours: z.preprocess((v) => (v === "" ? undefined : v), z.coerce.number().min(0).max(24).default(2)),
+  onSiteHours: z.preprocess(
+    (v) => (v === "" ? undefined : v),
+    z.coerce.number().min(0).max(24).default(DEFAULT_ON_SITE_HOURS),
+  ),
 });
 export type DirectoryQuery = z.infer<typeof directoryQuerySchema>;
 
@@ -232,7 +235,10 @@ export interface DirectoryTechnicianDto {
 }
 
 export const technicianProfileQuerySchema = z.object({
-  onSiteHours: z.preprocess((v) => (v === "" ? undefined : v), z.coerce.number().min(0).max(24).default(2)),
+  onSiteHours: z.preprocess(
+    (v) => (v === "" ? undefined : v),
+    z.coerce.number().min(0).max(24).default(DEFAULT_ON_SITE_HOURS),
+  ),
   siteId: optional(idParam),
 });
 

@@ -1,14 +1,14 @@
 /** Days before a lapse at which the daily job warns the holder, plus the lapse itself. */
 export const DEFAULT_WARNING_DAYS = [60, 30, 14, 7, 1] as const;
 
+/** The "lapsing" window for a configured list of warning days: the widest of them. */
+export const lapsingWindowOf = (warningDays: readonly number[]): number => Math.max(...warningDays);
+
 /** A requirement is "lapsing" when its credential ends within the widest warning window. */
-export const LAPSING_WINDOW_DAYS = 60;
+export const LAPSING_WINDOW_DAYS = lapsingWindowOf(DEFAULT_WARNING_DAYS);
 
 /** How far ahead the office's overview looks: past the first warning, so what comes right after it shows too. */
 export const OFFICE_LOOK_AHEAD_DAYS = LAPSING_WINDOW_DAYS + 30;
-
-/** The "lapsing" window for a configured list of warning days: the widest of them. */
-export const lapsingWindowOf = (warningDays: readonly number[]): number => Math.max(...warningDays);
 
 export const MS_PER_DAY = 86_400_000;
 

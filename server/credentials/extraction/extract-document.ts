@@ -12,9 +12,10 @@ import {
 } from "../../../shared/credentials/locate-values.ts";
 import { isOcrAvailable, ocrImageLayout, ocrPdfLayout, type OcrOptions } from "./ocr.ts";
 import { extractPdfText } from "./pdf-text.ts";
+import { DOCUMENT_MIMES, type DocumentMime } from "../../../shared/credentials/upload-limits.ts";
 
-export const extractableMimes = ["application/pdf", "image/png", "image/jpeg"] as const;
-export type ExtractableMime = (typeof extractableMimes)[number];
+export const extractableMimes = DOCUMENT_MIMES;
+export type ExtractableMime = DocumentMime;
 
 export interface ExtractDocumentInput {
   bytes: Uint8Array;

@@ -5,6 +5,7 @@ import { FormError } from "@/components/ui/form-error.tsx";
 import { isApiError } from "@/lib/api-client.ts";
 import { useBrokerUpload, useSendBrokerCertificate } from "@/features/credentials/api/broker-upload.ts";
 import { AuthCard } from "./auth-card.tsx";
+import { MAX_UPLOAD_SIZE_WORDS } from "@shared/credentials/upload-limits.ts";
 
 const formatDay = (iso: string) =>
   new Intl.DateTimeFormat("en-US", { dateStyle: "long" }).format(new Date(iso));
@@ -56,7 +57,7 @@ export function Component() {
         </p>
       )}
       <p className="mb-4 text-sm text-ink-700">
-        One PDF, up to 10 MB. The link works once, until {formatDay(page.data.expiresAt)}.
+        One PDF, up to {MAX_UPLOAD_SIZE_WORDS}. The link works once, until {formatDay(page.data.expiresAt)}.
       </p>
       <form onSubmit={onSubmit} noValidate className="space-y-4">
         <FormError error={send.error} labels={{ file: "Certificate (PDF)" }} />

@@ -28,6 +28,7 @@ import {
 import { useRaiseServiceRequest } from "@/features/service-requests/api/raise-service-request.ts";
 import { fieldErrorsOf } from "@/lib/field-errors.ts";
 import { queryClient } from "@/lib/query-client.ts";
+import { MAX_UPLOAD_SIZE_WORDS } from "@shared/credentials/upload-limits.ts";
 
 export async function loader() {
   await Promise.all([
@@ -206,7 +207,7 @@ export function Component() {
           type="file"
           multiple
           accept="image/png,image/jpeg,application/pdf,.xlsx,.csv"
-          hint="Photos (PNG, JPEG), PDFs or a maintenance log (.xlsx, .csv); 10 MB each at most, 2 MB for .csv."
+          hint={`Photos (PNG, JPEG), PDFs or a maintenance log (.xlsx, .csv); ${MAX_UPLOAD_SIZE_WORDS} each at most, 2 MB for .csv.`}
           onChange={(e) => setFiles([...((e.target as HTMLInputElement).files ?? [])])}
         />
         <div className="space-y-2 rounded-md border border-ink-100 bg-ink-50 p-3">

@@ -1,26 +1,36 @@
 import { useId, useState } from "react";
 import { useDropzone, type FileRejection } from "react-dropzone";
+import {
+  DOCUMENT_ACCEPT,
+  DOCUMENT_FILE_TYPES,
+  DOCUMENT_MIMES,
+  DOCUMENT_TYPES_WORDS,
+  MAX_UPLOAD_BYTES,
+  MAX_UPLOAD_SIZE_WORDS,
+} from "@shared/credentials/upload-limits.ts";
 
-// Limits the server enforces too (server/http/upload.ts); checked here so nobody waits for a refusal.
-const MAX_BYTES = 10 * 1024 * 1024;
-const accept = { "application/pdf": [".pdf"], "image/png": [".png"], "image/jpeg": [".jpg", ".jpeg"] };
-const allowedTypes = new Set(Object.keys(accept));
+// The server's limits, checked here too so nobody waits for a refusal.
+const accept = Object.fromEntries(
+  Object.entries(DOCUMENT_FILE_TYPES).map(([mime, ends]) => [mime, [...ends]]),
+);
+const allowedTypes = new Set<string>(DOCUMENT_MIMES);
+const tooLarge = `That file is larger than ${MAX_UPLOAD_SIZE_WORDS}. Scan at a lower resolution or send the PDF itself.`;
 
 const problemOf = (file: File): string | null =>
   file.size === 0
     ? "That file is empty."
-    : file.size > MAX_BYTES
-      ? "That file is larger than 10 MB. Scan at a lower resolution or send the PDF itself."
+    : file.size > MAX_UPLOAD_BYTES
+      ? tooLarge
       : file.type && !allowedTypes.has(file.type)
-        ? "Use a PDF, PNG or JPEG file."
+        ? `Use a ${DOCUMENT_TYPES_WORDS} file.`
         : null;
 
 const rejectionMessage = (rejection: FileRejection): string =>
   rejection.errors.some((e) => e.code === "file-too-large")
-    ? "That file is larger than 10 MB. Scan at a lower resolution or send the PDF itself."
+    ? tooLarge
     : rejection.errors.some((e) => e.code === "too-many-files")
       ? "Send one file at a time."
-      : "Use a PDF, PNG or JPEG file.";
+      : `Use a ${DOCUMENT_TYPES_WORDS} file.`;
 
 type FileDropProps = { onFile: (file: File) => void; disabled?: boolean; hint?: string };
 
@@ -35,7 +45,7 @@ export function FileDrop({ onFile, disabled = false, hint }: FileDropProps) {
   };
   const { getRootProps, getInputProps, isDragActive } = useDropzone({
     accept,
-    maxSize: MAX_BYTES,
+    maxSize: MAX_UPLOAD_BYTES,
     multiple: false,
     noClick: true,
     noKeyboard: true,
@@ -75,7 +85,7 @@ export function FileDrop({ onFile, disabled = false, hint }: FileDropProps) {
         <input
           id={inputId}
           type="file"
-          accept=".pdf,.png,.jpg,.jpeg,application/pdf,image/png,image/jpeg"
+          accept={DOCUMENT_ACCEPT}
           disabled={disabled}
           className="peer sr-only"
           onChange={(event) => {
@@ -85,7 +95,7 @@ export function FileDrop({ onFile, disabled = false, hint }: FileDropProps) {
           }}
         />
         <p className="text-sm text-ink-700">
-          {hint ?? "PDF, PNG or JPEG, up to 10 MB. A phone photo of a card works."}
+          {hint ?? `${DOCUMENT_TYPES_WORDS}, up to ${MAX_UPLOAD_SIZE_WORDS}. A phone photo of a card works.`}
         </p>
       </div>
       {problem && (

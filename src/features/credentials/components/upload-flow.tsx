@@ -18,6 +18,7 @@ import { ReviewerWarnings } from "./reviewer-warnings.tsx";
 import { UploadProgress } from "./upload-progress.tsx";
 import { TypeCaution } from "./type-caution.tsx";
 import { NamedTechniciansChecklist } from "./named-technicians-checklist.tsx";
+import { MAX_UPLOAD_SIZE_WORDS } from "@shared/credentials/upload-limits.ts";
 
 export type HolderOption = { id: number; name: string };
 
@@ -37,7 +38,7 @@ type UploadFlowProps = {
 
 const uploadProblem = (error: unknown): string => {
   if (!isApiError(error)) return "The upload failed. Try again.";
-  if (error.status === 413) return error.message || "That file is larger than 10 MB.";
+  if (error.status === 413) return error.message || `That file is larger than ${MAX_UPLOAD_SIZE_WORDS}.`;
   return error.message;
 };
 

@@ -2,6 +2,7 @@ import { queryOptions, useQuery } from "@tanstack/react-query";
 import { api } from "@/lib/api-client.ts";
 import { directoryKeys } from "./directory-keys.ts";
 import { directoryTechnicianSchema } from "./directory-shapes.ts";
+import { DEFAULT_ON_SITE_HOURS } from "@shared/directory/call-out-estimate.ts";
 
 /** The estimate inputs carried from the directory: hours on site and, when chosen, the site. */
 export interface EstimateInputs {
@@ -9,7 +10,7 @@ export interface EstimateInputs {
   siteId: number | null;
 }
 
-const DEFAULT_INPUTS: EstimateInputs = { onSiteHours: 2, siteId: null };
+const DEFAULT_INPUTS: EstimateInputs = { onSiteHours: DEFAULT_ON_SITE_HOURS, siteId: null };
 
 /** Reads the carried inputs from a page address; anything unusable falls back to the directory's own default. */
 export function estimateInputsOf(search: URLSearchParams): EstimateInputs {

@@ -1,3 +1,4 @@
+import { DEFAULT_ON_SITE_HOURS } from "@shared/directory/call-out-estimate.ts";
 /** The filter form as it is being edited; every value is the text of its URL parameter. */
 export type DirectoryDraft = {
   siteId: string;
@@ -60,5 +61,5 @@ export function searchFromDraft(draft: DirectoryDraft, sort: string): URLSearchP
 
 export const onSiteHoursOf = (draft: Pick<DirectoryDraft, "onSiteHours">): number => {
   const hours = Number(draft.onSiteHours);
-  return draft.onSiteHours !== "" && Number.isFinite(hours) && hours >= 0 ? hours : 2;
+  return draft.onSiteHours !== "" && Number.isFinite(hours) && hours >= 0 ? hours : DEFAULT_ON_SITE_HOURS;
 };

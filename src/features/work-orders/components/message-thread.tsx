@@ -6,6 +6,7 @@ import { fieldErrorsOf } from "@/lib/field-errors.ts";
 import { formatDateTime } from "@/lib/format-date-time.ts";
 import { usePostWorkOrderMessage } from "../api/post-work-order-message.ts";
 import type { WorkOrderMessage } from "../api/work-order-shapes.ts";
+import { DOCUMENT_ACCEPT } from "@shared/credentials/upload-limits.ts";
 
 type MessageThreadProps = {
   workOrderId: number;
@@ -107,7 +108,7 @@ export function MessageThread({ workOrderId, messages, sideNames }: MessageThrea
             name="file"
             type="file"
             data-field="file"
-            accept="application/pdf,image/png,image/jpeg,.pdf,.png,.jpg,.jpeg"
+            accept={DOCUMENT_ACCEPT}
             aria-describedby="message-file-hint"
             className="block min-h-11 w-full text-sm text-ink-900 file:mr-3 file:min-h-10 file:rounded-md file:border file:border-ink-300 file:bg-white file:px-3 file:text-sm file:font-semibold"
           />
