@@ -2,6 +2,12 @@ import type { CredentialDto } from "../../shared/credentials/schemas.ts";
 import { awaitsHolder, type FollowUpCandidate } from "../../shared/credentials/credential-kind.ts";
 import { Credential, CredentialType, Document } from "./model.ts";
 import { Company, Technician } from "../db/models.ts";
+import { reviewerWarnings, type ReviewerWarning } from "../../shared/credentials/reviewer-checks.ts";
+import type { CertificateProposal } from "../../shared/credentials/extract-fields.ts";
+import type { Evidence } from "../../shared/credentials/locate-values.ts";
+import { duplicateForOtherHolder } from "./duplicate-holder.ts";
+import type { UploadReading } from "./upload-reading.ts";
+import { workStatesOf } from "./work-states.ts";
 
 /** The company's credentials that could answer a returned or lapsed one among `rows` (none asked when none is). */
 async function followUpCandidates(rows: Credential[]): Promise<FollowUpCandidate[]> {
@@ -65,4 +71,89 @@ export async function toCredentialDtos(rows: Credential[]): Promise<CredentialDt
 export async function toCredentialDto(row: Credential): Promise<CredentialDto> {
   const [dto] = await toCredentialDtos([row]);
   return dto!;
+}
+
+interface UploadedDocumentParts {
+  user: Express.User;
+  type: CredentialType;
+  technicianId: number | null;
+  document: Document;
+  reading: UploadReading;
+}
+
+/**
+ * What the uploader sees after sending a file: the stored document, the fields read from it with where they were
+ * found, the reviewer's warnings about them, and for a certificate every coverage it lists.
+ */
+export async function toUploadedDocumentDto({
+  user,
+  type,
+  technicianId,
+  document,
+  reading,
+}: UploadedDocumentParts) {
+  const [company, technician, otherHolder] = await Promise.all([
+    Company.findByPk(user.companyId),
+    technicianId ? Technician.findByPk(technicianId) : null,
+    duplicateForOtherHolder(document.sha256, document.id, user.companyId, technicianId),
+  ]);
+  const fields = reading.proposal?.fields ?? {};
+  const workStates = type.fieldSet === "exemption" ? await workStatesOf(user.companyId) : [];
+  const warningsFor = (proposed: object) =>
+    reviewerWarnings({
+      fieldSet: type.fieldSet,
+      fields: proposed as never,
+      companyLegalName: company?.name ?? "",
+      technicianName: technician?.name,
+      duplicateOfOtherHolder: otherHolder,
+      workStates,
+    });
+  return {
+    document: {
+      id: document.id,
+      name: document.originalName,
+      mime: document.mime,
+      sizeBytes: document.sizeBytes,
+      sha256: document.sha256,
+    },
+    extraction: {
+      method: reading.method,
+      ocrAvailable: reading.ocrAvailable,
+      fields,
+      found: reading.proposal?.found ?? [],
+      evidence: reading.evidence?.[type.code] ?? {},
+    },
+    warnings: warningsFor(fields),
+    certificate: reading.certificate
+      ? await certificateCoverages(reading.certificate, warningsFor, reading.evidence ?? {})
+      : null,
+  };
+}
+
+/**
+ * Every coverage read from a certificate that the catalogue offers (an admin may retire a type), each with its own
+ * proposed fields and warnings, so the uploader confirms all of them on one form.
+ */
+async function certificateCoverages(
+  certificate: CertificateProposal,
+  warningsFor: (fields: object) => ReviewerWarning[],
+  evidence: Record<string, Evidence>,
+) {
+  const types = await CredentialType.findAll({
+    where: { code: certificate.coverages.map((c) => c.typeCode), active: true, fieldSet: "insurance" },
+  });
+  const name = new Map(types.map((t) => [t.code, t.name]));
+  return {
+    parties: certificate.parties,
+    coverages: certificate.coverages
+      .filter((coverage) => name.has(coverage.typeCode))
+      .map(({ typeCode, proposal }) => ({
+        typeCode,
+        typeName: name.get(typeCode) ?? typeCode,
+        fields: proposal.fields,
+        found: proposal.found,
+        evidence: evidence[typeCode] ?? {},
+        warnings: warningsFor(proposal.fields),
+      })),
+  };
 }

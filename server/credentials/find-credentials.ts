@@ -7,7 +7,7 @@ import { AppError } from "../http/app-error.ts";
 import { auditTrail } from "../audit/index.ts";
 import { Credential, CredentialType, Document } from "./model.ts";
 import { toCredentialDto, toCredentialDtos } from "./dto.ts";
-import { duplicateForOtherHolder } from "./upload-document.ts";
+import { duplicateForOtherHolder } from "./duplicate-holder.ts";
 import type { Evidence } from "../../shared/credentials/locate-values.ts";
 import { workStatesOf } from "./work-states.ts";
 import { fieldsForBuyers } from "../../shared/credentials/fields-for-buyers.ts";

@@ -1,4 +1,4 @@
 export { credentialRoutes } from "./routes.ts";
 export { Credential, CredentialType, Document, initCredentialModels } from "./model.ts";
 export { loadCatalogue } from "./catalogue.ts";
-export { safeFileName, sniffUpload } from "./upload-document.ts";
+export { safeFileName, sniffUpload } from "./upload-checks.ts";
