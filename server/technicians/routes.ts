@@ -3,9 +3,7 @@ import { technicianInputSchema, technicianParamsSchema } from "../../shared/tech
 import { emailSchema } from "../../shared/accounts/schemas.ts";
 import { createRoutes } from "../http/route.ts";
 import { linkBase } from "../http/app-locals.ts";
-import { AppError } from "../http/app-error.ts";
 import { kickOutbox } from "../mail/outbox.ts";
-import { createInvitedUser } from "../accounts/index.ts";
 import { singleFileUpload } from "../http/upload.ts";
 import { importTemplateCsv } from "../../shared/technicians/bulk-import.ts";
 import { singleLineText } from "../../shared/api/text.ts";
@@ -19,12 +17,11 @@ import {
 import {
   addTechnician,
   editTechnician,
-  findTechnician,
   findTechnicianFor,
+  inviteTechnicianAccount,
   listCompanyTechnicians,
   setTechnicianActive,
 } from "./service.ts";
-import { Company } from "../db/models.ts";
 
 export const technicianRoutes = createRoutes("/api/technicians");
 
@@ -91,15 +88,7 @@ technicianRoutes.post(
   "/:technicianId/account",
   { allow: canEditTechnician, params: technicianParamsSchema, body: z.object({ email: emailSchema }) },
   async (req, res, { params, body }) => {
-    const technician = await findTechnician(params.technicianId);
-    if (technician.hasAccount) throw new AppError("conflict", "This technician already has a sign-in");
-    const company = await Company.findByPk(req.user!.companyId);
-    const user = await createInvitedUser(
-      req.user!,
-      company!,
-      { email: body.email, name: technician.name, role: "technician", technicianId: technician.id },
-      linkBase(req),
-    );
+    const user = await inviteTechnicianAccount(req.user!, params.technicianId, body.email, linkBase(req));
     kickOutbox(req.app.locals);
     res.status(201).json(user);
   },

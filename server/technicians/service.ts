@@ -8,6 +8,7 @@ import { toTechnicianDto } from "./dto.ts";
 import { viewLevelOf } from "./visibility.ts";
 import { pickTechnicianFields } from "../../shared/visibility/technician-visibility.ts";
 import { Company, User } from "../db/models.ts";
+import { createInvitedUser } from "../accounts/index.ts";
 
 // Default mileage: IRS business standard mileage rate for 2026, 72.5 cents/mi (Notice 2026-10), rounded up to whole cents.
 export const DEFAULT_MILEAGE_RATE_CENTS = 73;
@@ -146,4 +147,22 @@ export async function setTechnicianActive(actor: Express.User, id: number, activ
     return t;
   });
   return toDto(technician);
+}
+
+/** Gives the technician a sign-in of their own, linked to this record, by an e-mailed one-time link. */
+export async function inviteTechnicianAccount(
+  actor: Express.User,
+  technicianId: number,
+  email: string,
+  linkBase: string,
+) {
+  const technician = await findTechnician(technicianId);
+  if (technician.hasAccount) throw new AppError("conflict", "This technician already has a sign-in");
+  const company = await Company.findByPk(actor.companyId);
+  return createInvitedUser(
+    actor,
+    company!,
+    { email, name: technician.name, role: "technician", technicianId: technician.id },
+    linkBase,
+  );
 }
