@@ -3,7 +3,14 @@ import { singleLineText, multiLineText } from "../api/text.ts";
 import { idParam } from "../credentials/schemas.ts";
 import { isoDateSchema } from "../credentials/credential-fields.ts";
 import type { StandingSnapshot } from "./standing-snapshot.ts";
-import { partsUsedSchema, problemAreas, workKinds } from "../machines/service-history.ts";
+import {
+  partsUsedSchema,
+  problemAreas,
+  workKinds,
+  type PartUsed,
+  type ProblemArea,
+  type WorkKind,
+} from "../machines/service-history.ts";
 
 export const workOrderStatuses = ["requested", "accepted", "declined", "completed", "confirmed"] as const;
 export type WorkOrderStatus = (typeof workOrderStatuses)[number];
@@ -114,6 +121,10 @@ export interface WorkOrderDto {
   hoursWorked: number | null;
   travelHours: number | null;
   completionNote: string | null;
+  /** For the machine's history: the kind of work, where the trouble was, and the parts fitted at completion. */
+  kind: WorkKind | null;
+  problemArea: ProblemArea | null;
+  partsUsed: PartUsed[];
   snapshotAccepted: StandingSnapshot | null;
   snapshotCompleted: StandingSnapshot | null;
   createdBy: { id: number; name: string };
