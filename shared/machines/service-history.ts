@@ -43,6 +43,27 @@ export type PartUsed = z.infer<typeof partUsedSchema>;
 export const MAX_PARTS_USED = 50;
 export const partsUsedSchema = z.array(partUsedSchema).max(MAX_PARTS_USED, `At most ${MAX_PARTS_USED} parts`);
 
+/**
+ * Parts typed one a line, as people write them on a job sheet: "2 × Way wiper, WW-220", "2x Way wiper" or just
+ * "Way wiper" (one). The result still goes through `partsUsedSchema`.
+ */
+export function readPartLines(
+  text: string,
+): { description: string; partNumber: string | null; quantity: number }[] {
+  return text
+    .split("\n")
+    .map((line) => line.trim())
+    .filter(Boolean)
+    .map((line) => {
+      const counted = /^(\d+)\s*[x×]\s*(.+)$/i.exec(line);
+      const rest = counted ? counted[2]! : line;
+      const comma = rest.lastIndexOf(",");
+      const description = (comma > 0 ? rest.slice(0, comma) : rest).trim();
+      const partNumber = comma > 0 ? rest.slice(comma + 1).trim() || null : null;
+      return { description, partNumber, quantity: counted ? Number(counted[1]) : 1 };
+    });
+}
+
 // Hours are kept to 2 decimals, like a work order's.
 const hoursSchema = z.number().min(0).max(999).multipleOf(0.01);
 

@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import {
   findRepeatFaults,
+  readPartLines,
   REPEAT_FAULT_WINDOW_DAYS,
   type FaultCandidate,
 } from "../../../shared/machines/service-history.ts";
@@ -57,5 +58,19 @@ describe("repeat faults on one machine", () => {
     expect(result.get("b")).toBe("a");
     expect(result.get("c")).toBe("b");
     expect(result.get("a")).toBeNull();
+  });
+});
+
+describe("parts typed one a line", () => {
+  it("reads a count, a description and a part number after the last comma", () => {
+    expect(readPartLines("2 × Way wiper, WW-220\n 3x Fuse, 5 A, F-5 \n\nSpindle seal kit")).toEqual([
+      { description: "Way wiper", partNumber: "WW-220", quantity: 2 },
+      { description: "Fuse, 5 A", partNumber: "F-5", quantity: 3 },
+      { description: "Spindle seal kit", partNumber: null, quantity: 1 },
+    ]);
+  });
+
+  it("reads nothing from blank text", () => {
+    expect(readPartLines("  \n ")).toEqual([]);
   });
 });

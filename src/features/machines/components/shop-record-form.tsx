@@ -2,6 +2,7 @@ import { useState, type FormEvent } from "react";
 import {
   problemAreaLabels,
   problemAreas,
+  readPartLines,
   recordShopServiceSchema,
   workKinds,
   type RecordShopService,
@@ -36,24 +37,6 @@ type ShopRecordFormProps = {
 
 const hoursOf = (v: string | undefined) => (v && v.trim() ? Number(v) : null);
 
-/** One part a line: "2 × Way wiper, WW-220" or just "Way wiper". */
-function partsOf(text: string | undefined) {
-  return (text ?? "")
-    .split("\n")
-    .map((line) => line.trim())
-    .filter(Boolean)
-    .map((line) => {
-      const m = /^(\d+)\s*[x×]\s*(.+)$/i.exec(line);
-      const rest = m ? m[2]! : line;
-      const [description, partNumber] = rest.split(",").map((s) => s.trim());
-      return {
-        description: description ?? rest,
-        partNumber: partNumber || null,
-        quantity: m ? Number(m[1]) : 1,
-      };
-    });
-}
-
 /** Work done outside the platform; it shows as "recorded by the shop" and never reaches a rating. */
 export function ShopRecordForm({ pending, serverError, onSubmit, onCancel }: ShopRecordFormProps) {
   const [invalid, setInvalid] = useState<unknown>(null);
@@ -72,7 +55,7 @@ export function ShopRecordForm({ pending, serverError, onSubmit, onCancel }: Sho
       hoursOnSite: hoursOf(v.hoursOnSite),
       travelHours: hoursOf(v.travelHours),
       note: v.note,
-      partsUsed: partsOf(v.partsUsed),
+      partsUsed: readPartLines(v.partsUsed ?? ""),
     });
     if (!parsed.success) {
       setInvalid(parsed.error);
