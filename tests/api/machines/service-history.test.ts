@@ -94,6 +94,29 @@ describe("a machine's service history", () => {
     expect(entry.attachments.map((a: { name: string }) => a.name)).toEqual(["spring.pdf"]);
   });
 
+  it("keeps kind, problem area and parts on the work order, and refuses a nameless part with 422", async () => {
+    const world = await buildWorkOrderWorld(t.app);
+    const raised = await world.shop.agent
+      .post("/api/work-orders")
+      .send(raiseBody(world, { kind: "repair", problemArea: "tool_changer" }))
+      .expect(201);
+    const id = raised.body.id as number;
+    await world.provider.admin.post(`/api/work-orders/${id}/accept`).send({}).expect(200);
+
+    const nameless = await world.provider.tech
+      .post(`/api/work-orders/${id}/complete`)
+      .send({ hoursWorked: 2, travelHours: 1, partsUsed: [{ description: " ", quantity: 1 }] });
+    const done = await world.provider.tech
+      .post(`/api/work-orders/${id}/complete`)
+      .send({ hoursWorked: 2, travelHours: 1, partsUsed: [{ description: "Gripper finger", quantity: 4 }] });
+
+    expect(raised.body).toMatchObject({ kind: "repair", problemArea: "tool_changer", partsUsed: [] });
+    expect(nameless.status).toBe(422);
+    expect(JSON.stringify(nameless.body)).toContain("body.partsUsed.0.description");
+    expect(done.status).toBe(200);
+    expect(done.body.partsUsed).toEqual([{ description: "Gripper finger", quantity: 4 }]);
+  });
+
   it("leaves out work orders that are not confirmed", async () => {
     const world = await buildWorkOrderWorld(t.app);
     const raised = await world.shop.agent.post("/api/work-orders").send(raiseBody(world)).expect(201);
