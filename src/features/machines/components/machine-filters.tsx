@@ -7,6 +7,7 @@ import { SelectField } from "@/components/ui/select-field.tsx";
 import { TextField } from "@/components/ui/text-field.tsx";
 import { readForm } from "@/lib/read-form.ts";
 import type { MachineFilters as Filters } from "../api/machine-keys.ts";
+import { useBuilderCatalog } from "../api/get-builder-catalog.ts";
 
 type MachineFiltersProps = {
   sites: { id: number; name: string }[];
@@ -19,6 +20,7 @@ const stateOptions = machineStates.map((s) => ({ value: s, label: machineStateLa
 
 /** Site, technology and state apply at once; the builder (any catalog name or alias) on "Apply". */
 export function MachineFilters({ sites, filters, onChange }: MachineFiltersProps) {
+  const builders = useBuilderCatalog();
   const apply = (form: HTMLFormElement) => {
     const v = readForm(form);
     onChange({
@@ -51,9 +53,17 @@ export function MachineFilters({ sites, filters, onChange }: MachineFiltersProps
       <TextField
         label="Builder"
         name="builder"
+        list="machine-builders"
+        autoComplete="off"
         defaultValue={filters.builder ?? ""}
-        hint="Name or short name"
       />
+      <datalist id="machine-builders">
+        {(builders.data ?? [])
+          .filter((b) => b.active)
+          .map((b) => (
+            <option key={b.id} value={b.name} />
+          ))}
+      </datalist>
       <SelectField
         label="Technology"
         name="technology"
