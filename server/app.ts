@@ -28,6 +28,7 @@ import { geoRoutes } from "./geo/routes.ts";
 import { gateRoutes } from "./gate/routes.ts";
 import { machineCatalogRoutes } from "./machines/catalog-routes.ts";
 import { machineRoutes } from "./machines/machine-routes.ts";
+import { machineHistoryRoutes } from "./machines/history-routes.ts";
 import { calendarRoutes } from "./calendar/routes.ts";
 import { createStorage } from "./storage/index.ts";
 import { createAbuseLimits } from "./accounts/abuse-limits.ts";
@@ -59,6 +60,7 @@ const apiRouters = [
   ...buyerRouters,
   machineCatalogRoutes,
   machineRoutes,
+  machineHistoryRoutes,
   brokerRoutes,
 ];
 

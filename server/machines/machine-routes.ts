@@ -24,14 +24,14 @@ const listQuerySchema = z.object({
 const machineParamsSchema = z.object({ machineId: idParam });
 
 /** The machine stands at a site of the buyer's shop; anyone else's answers 404 like a missing one. */
-async function ownMachine(companyId: number, machineId: number) {
+export async function ownMachine(companyId: number, machineId: number) {
   const e = await Equipment.findByPk(machineId);
   if (!e) return null;
   const site = await Site.findByPk(e.siteId, { attributes: ["companyId", "name"] });
   return site?.companyId === companyId ? { machine: e, siteName: site.name } : null;
 }
 
-const canOpenMachine = requireOwnership(
+export const canOpenMachine = requireOwnership(
   requireRole("buyer"),
   "a machine at a site of the buyer's shop",
   async (user, params) => (await ownMachine(user.companyId, Number(params.machineId))) !== null,

@@ -1,6 +1,7 @@
 import { registerRosterAlerts } from "./alerts.ts";
 
 export { rosterRoutes } from "./routes.ts";
+export { formulaStart } from "./csv-export.ts";
 export {
   alertRosteredShops,
   alertOnBaselineChanges,

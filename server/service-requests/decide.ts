@@ -86,6 +86,7 @@ export async function acceptEstimate(
         preferredDates: [request.window_start, request.window_end]
           .flatMap((d) => (d && d >= new Date().toISOString().slice(0, 10) ? [d] : []))
           .slice(0, 1),
+        kind: request.kind,
       },
       warningDays,
       (id) => `${linkBase}/work-orders/${id}`,

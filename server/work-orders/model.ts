@@ -8,6 +8,7 @@ import {
 } from "sequelize";
 import type { Urgency, WorkOrderSide, WorkOrderStatus } from "../../shared/work-orders/schemas.ts";
 import type { StandingSnapshot } from "../../shared/work-orders/standing-snapshot.ts";
+import type { PartUsed, ProblemArea, WorkKind } from "../../shared/machines/service-history.ts";
 
 export class WorkOrder extends Model<InferAttributes<WorkOrder>, InferCreationAttributes<WorkOrder>> {
   declare id: CreationOptional<number>;
@@ -29,6 +30,9 @@ export class WorkOrder extends Model<InferAttributes<WorkOrder>, InferCreationAt
   declare completionNote: CreationOptional<string | null>;
   declare snapshotAccepted: CreationOptional<StandingSnapshot | null>;
   declare snapshotCompleted: CreationOptional<StandingSnapshot | null>;
+  declare workKind: CreationOptional<WorkKind | null>;
+  declare problemArea: CreationOptional<ProblemArea | null>;
+  declare partsUsed: CreationOptional<PartUsed[]>;
   declare createdBy: number;
   declare acceptedAt: CreationOptional<Date | null>;
   declare declinedAt: CreationOptional<Date | null>;
@@ -72,6 +76,9 @@ export function initWorkOrderModels(sequelize: Sequelize) {
       completionNote: { type: DataTypes.TEXT, allowNull: true },
       snapshotAccepted: { type: DataTypes.JSONB, allowNull: true },
       snapshotCompleted: { type: DataTypes.JSONB, allowNull: true },
+      workKind: { type: DataTypes.STRING(24), allowNull: true },
+      problemArea: { type: DataTypes.STRING(24), allowNull: true },
+      partsUsed: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
       createdBy: { type: DataTypes.INTEGER, allowNull: false },
       acceptedAt: { type: DataTypes.DATE, allowNull: true },
       declinedAt: { type: DataTypes.DATE, allowNull: true },

@@ -20,6 +20,7 @@ type Changes = Partial<
     | "completionNote"
     | "snapshotAccepted"
     | "snapshotCompleted"
+    | "partsUsed"
   >
 >;
 
@@ -166,6 +167,7 @@ export function completeWorkOrder(
         hoursWorked: input.hoursWorked.toFixed(2),
         travelHours: input.travelHours.toFixed(2),
         completionNote: input.note ?? null,
+        partsUsed: input.partsUsed,
         snapshotCompleted: await standingSnapshotNow(
           row.technicianId,
           row.requirementSetId,

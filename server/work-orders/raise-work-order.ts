@@ -110,6 +110,8 @@ export async function raiseWorkOrderWithin(
       problem: input.problem,
       urgency: input.urgency,
       preferredDates: input.preferredDates,
+      workKind: input.kind ?? null,
+      problemArea: input.problemArea ?? null,
       createdBy: buyer.id,
     },
     { transaction },

@@ -3,6 +3,14 @@ import { singleLineText, multiLineText } from "../api/text.ts";
 import { idParam } from "../credentials/schemas.ts";
 import { isoDateSchema } from "../credentials/credential-fields.ts";
 import type { StandingSnapshot } from "./standing-snapshot.ts";
+import {
+  partsUsedSchema,
+  problemAreas,
+  workKinds,
+  type PartUsed,
+  type ProblemArea,
+  type WorkKind,
+} from "../machines/service-history.ts";
 
 export const workOrderStatuses = ["requested", "accepted", "declined", "completed", "confirmed"] as const;
 export type WorkOrderStatus = (typeof workOrderStatuses)[number];
@@ -37,6 +45,9 @@ export const raiseWorkOrderSchema = z.object({
     .array(isoDateSchema)
     .max(MAX_PREFERRED_DATES, `At most ${MAX_PREFERRED_DATES} dates`)
     .default([]),
+  /** For the machine's history: the kind of work and where the trouble is (repeat faults are matched on it). */
+  kind: z.enum(workKinds).optional(),
+  problemArea: z.enum(problemAreas).optional(),
 });
 export type RaiseWorkOrder = z.infer<typeof raiseWorkOrderSchema>;
 
@@ -51,6 +62,7 @@ export const completeWorkOrderSchema = z.object({
   hoursWorked: hoursSchema.refine((h) => h > 0, "Hours worked must be more than 0"),
   travelHours: hoursSchema,
   note: multiLineText().trim().max(5000).optional(),
+  partsUsed: partsUsedSchema.default([]),
 });
 export type CompleteWorkOrder = z.infer<typeof completeWorkOrderSchema>;
 
@@ -109,6 +121,10 @@ export interface WorkOrderDto {
   hoursWorked: number | null;
   travelHours: number | null;
   completionNote: string | null;
+  /** For the machine's history: the kind of work, where the trouble was, and the parts fitted at completion. */
+  kind: WorkKind | null;
+  problemArea: ProblemArea | null;
+  partsUsed: PartUsed[];
   snapshotAccepted: StandingSnapshot | null;
   snapshotCompleted: StandingSnapshot | null;
   createdBy: { id: number; name: string };

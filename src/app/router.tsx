@@ -134,6 +134,8 @@ export const router = createBrowserRouter([
                 lazy: () => import("./routes/buyer/service-request-new.tsx"),
               },
               { path: paths.buyer.serviceRequest, lazy: () => import("./routes/buyer/service-request.tsx") },
+              { path: paths.buyer.machines, lazy: () => import("./routes/buyer/machines.tsx") },
+              { path: paths.buyer.machine, lazy: () => import("./routes/buyer/machine.tsx") },
             ],
           },
           {

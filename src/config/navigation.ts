@@ -27,6 +27,7 @@ export const navigationByRole: Record<Role, readonly NavItem[]> = {
     { label: "Requirement sets", to: paths.buyer.requirementSets },
     { label: "Work orders", to: paths.buyer.workOrders },
     { label: "Service requests", to: paths.buyer.serviceRequests },
+    { label: "Machines", to: paths.buyer.machines },
     { label: "Company", to: paths.company },
   ],
   admin: [

@@ -10,6 +10,7 @@ import { initModels } from "../../server/db/associations.ts";
 import { buildDemoWorld, loadDemoScenarioOnce } from "../../server/db/demo-scenario/index.ts";
 import { migrate } from "../../server/db/migrate.ts";
 import { connectDatabase } from "../../server/db/sequelize.ts";
+import { listMachineHistory } from "../../server/machines/service-history.ts";
 
 // The demo loads into an empty database only, so it gets a throw-away database of its own in the suite's cluster.
 const databaseName = `demo_check_${randomUUID().slice(0, 8)}`;
@@ -136,6 +137,18 @@ describe("loading the demo scenario", () => {
       { company: "Copperline Field Technicians Co.", standing: "not_cleared" },
       { company: "Kestrel Ridge Machine Service LLC", standing: "cleared" },
     ]);
+  });
+
+  it("gives the demo shop's mill a history: a work order on the platform and a shop record, the repeat flagged", async () => {
+    const [machine] = await rows<{ id: number }>(
+      "SELECT id FROM equipment WHERE serial_number = 'VM40-2209'",
+    );
+
+    const history = await listMachineHistory(machine!.id);
+
+    expect(history.entries.map((e) => e.source)).toEqual(["platform", "shop_record"]);
+    expect(history.entries[0]!.repeatOf).toBe(history.entries[1]!.key);
+    expect(history.entries[0]!.standingSnapshot).not.toBeNull();
   });
 
   it("does nothing when data is already there", async () => {

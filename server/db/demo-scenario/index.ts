@@ -1,4 +1,5 @@
 import { insertDemoServiceRequests } from "./service-requests.ts";
+import { insertDemoMachineHistory } from "./machine-history.ts";
 import { hashPassword } from "../../accounts/passwords.ts";
 import { refreshAllStandings } from "../../standing/index.ts";
 import { createStorage } from "../../storage/index.ts";
@@ -45,6 +46,7 @@ export async function loadDemoScenarioOnce({
       await insertDemoWorld(world, files, passwordHash, transaction);
       await afterDemoLoaded(today, transaction);
       await insertDemoServiceRequests(today, transaction);
+      await insertDemoMachineHistory(today, transaction);
     });
   } catch (err) {
     await discardStagedFiles(files.values());

@@ -1,6 +1,8 @@
 import { useSuspenseQuery } from "@tanstack/react-query";
 import { Link, useParams, type LoaderFunctionArgs } from "react-router-dom";
 import { technologyLabels, type MachineTechnology } from "@shared/technicians/schemas.ts";
+import { problemAreaLabels } from "@shared/machines/service-history.ts";
+import { requestKindLabels } from "@shared/service-requests/schemas.ts";
 import { paths } from "@/config/paths.ts";
 import { PageHeader } from "@/components/ui/page-header.tsx";
 import { SafetyCaution } from "@/components/ui/safety-caution.tsx";
@@ -64,6 +66,15 @@ function Facts({ workOrder }: { workOrder: WorkOrder }) {
   if (workOrder.hoursWorked !== null)
     rows.push(["Hours", `${workOrder.hoursWorked} h on site, ${workOrder.travelHours ?? 0} h travel`]);
   if (workOrder.completionNote) rows.push(["Completion note", workOrder.completionNote]);
+  if (workOrder.kind) rows.push(["Kind of work", requestKindLabels[workOrder.kind]]);
+  if (workOrder.problemArea) rows.push(["Problem area", problemAreaLabels[workOrder.problemArea]]);
+  if (workOrder.partsUsed?.length)
+    rows.push([
+      "Parts used",
+      workOrder.partsUsed
+        .map((p) => `${p.quantity} × ${p.description}${p.partNumber ? ` (${p.partNumber})` : ""}`)
+        .join("; "),
+    ]);
   return (
     <section aria-label="Details" className="rounded-lg border border-ink-100 bg-white p-4">
       <p className="mb-3 whitespace-pre-line text-ink-900">{workOrder.problem}</p>

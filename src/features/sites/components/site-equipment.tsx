@@ -1,5 +1,7 @@
 import { useState } from "react";
+import { Link } from "react-router-dom";
 import { technologyLabels } from "@shared/technicians/schemas.ts";
+import { hrefs } from "@/config/paths.ts";
 import { Button } from "@/components/ui/button.tsx";
 import { Spinner } from "@/components/ui/spinner.tsx";
 import { useSiteEquipment } from "../api/get-site-equipment.ts";
@@ -40,9 +42,9 @@ export function SiteEquipment({ siteId, siteName }: { siteId: number; siteName: 
               ) : (
                 <div className="flex flex-wrap items-center justify-between gap-2">
                   <span className="text-sm text-ink-900">
-                    <span className="font-medium">
+                    <Link to={hrefs.machine(m.id)} className="font-medium underline underline-offset-2">
                       {m.builder} {m.model}
-                    </span>{" "}
+                    </Link>{" "}
                     · {technologyLabels[m.technology]} · {m.controlFamily}
                     {m.serialNumber && <span className="text-ink-700"> · serial {m.serialNumber}</span>}
                   </span>

@@ -1,3 +1,4 @@
+import { problemAreas, workKinds } from "@shared/machines/service-history.ts";
 import { z } from "zod";
 import { requirementStatuses, standings, unmetReasons } from "@shared/standing/standing-types.ts";
 import {
@@ -84,6 +85,17 @@ export const workOrderSchema = z.object({
   hoursWorked: z.number().nullable(),
   travelHours: z.number().nullable(),
   completionNote: z.string().nullable(),
+  kind: z.enum(workKinds).nullable().optional(),
+  problemArea: z.enum(problemAreas).nullable().optional(),
+  partsUsed: z
+    .array(
+      z.object({
+        description: z.string(),
+        partNumber: z.string().nullable().optional(),
+        quantity: z.number(),
+      }),
+    )
+    .optional(),
   snapshotAccepted: snapshotSchema.nullable(),
   snapshotCompleted: snapshotSchema.nullable(),
   createdBy: z.object({ id: z.number(), name: z.string() }),

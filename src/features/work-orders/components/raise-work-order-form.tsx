@@ -10,6 +10,8 @@ import { TextField } from "@/components/ui/text-field.tsx";
 import { isApiError } from "@/lib/api-client.ts";
 import { fieldErrorsOf } from "@/lib/field-errors.ts";
 import { preferredDateWindow } from "@shared/work-orders/preferred-dates.ts";
+import { problemAreaLabels, problemAreas, workKinds } from "@shared/machines/service-history.ts";
+import { requestKindLabels } from "@shared/service-requests/schemas.ts";
 
 import { urgencyWords } from "./work-order-words.ts";
 
@@ -42,6 +44,8 @@ const labels = {
   urgency: "Urgency",
   preferredDates: "Preferred dates",
   requirementSetId: "Requirement set to check",
+  kind: "Kind of work",
+  problemArea: "Problem area",
 };
 const plainWords = { siteId: "Choose the site", technology: "Choose the technology or a machine" };
 const DATE_INPUTS = 3;
@@ -104,6 +108,8 @@ export function RaiseWorkOrderForm(props: RaiseWorkOrderFormProps) {
       problem: text("problem"),
       urgency: text("urgency") || undefined,
       preferredDates: data.getAll("preferredDates").map(String).filter(Boolean),
+      kind: text("kind") || undefined,
+      problemArea: text("problemArea") || undefined,
     });
     if (!parsed.success) {
       setInvalid(parsed.error);
@@ -169,6 +175,22 @@ export function RaiseWorkOrderForm(props: RaiseWorkOrderFormProps) {
           value={requirementSetId}
           onChange={(e) => onRequirementSetChange(e.target.value)}
           error={errors.requirementSetId}
+        />
+        <SelectField
+          label={labels.kind}
+          name="kind"
+          options={workKinds.map((k) => ({ value: k, label: requestKindLabels[k] }))}
+          placeholder="Not stated"
+          hint="Kept in the machine's service history"
+          error={errors.kind}
+        />
+        <SelectField
+          label={labels.problemArea}
+          name="problemArea"
+          options={problemAreas.map((a) => ({ value: a, label: problemAreaLabels[a] }))}
+          placeholder="Not stated"
+          hint="Repeat faults on a machine are matched on this"
+          error={errors.problemArea}
         />
       </div>
       <TextAreaField label={labels.problem} name="problem" rows={5} error={errors.problem} />

@@ -1,7 +1,9 @@
 import { useState, type FormEvent } from "react";
 import { completeWorkOrderSchema, declineWorkOrderSchema } from "@shared/work-orders/schemas.ts";
+import { readPartLines } from "@shared/machines/service-history.ts";
 import { Button } from "@/components/ui/button.tsx";
 import { FormError } from "@/components/ui/form-error.tsx";
+import { TextAreaField } from "@/components/ui/text-area-field.tsx";
 import { TextField } from "@/components/ui/text-field.tsx";
 import { fieldErrorsOf } from "@/lib/field-errors.ts";
 import { useMoveWorkOrder } from "../api/move-work-order.ts";
@@ -11,6 +13,7 @@ const completeLabels = {
   hoursWorked: "Hours worked on site",
   travelHours: "Travel hours, both ways",
   note: "Note for the shop",
+  partsUsed: "Parts used",
 };
 const plainWords = {
   hoursWorked: "Enter the hours, e.g. 3.5",
@@ -47,6 +50,7 @@ export function WorkOrderActions({ workOrder }: { workOrder: WorkOrder }) {
       hoursWorked: hoursOf(String(data.get("hoursWorked") ?? "")),
       travelHours: hoursOf(String(data.get("travelHours") ?? "")),
       ...(note ? { note } : {}),
+      partsUsed: readPartLines(String(data.get("partsUsed") ?? "")),
     });
     if (!parsed.success) return setInvalid(parsed.error);
     setInvalid(null);
@@ -115,6 +119,13 @@ export function WorkOrderActions({ workOrder }: { workOrder: WorkOrder }) {
             />
           </div>
           <TextField label={completeLabels.note} name="note" hint="Optional" error={errors.note} />
+          <TextAreaField
+            label={completeLabels.partsUsed}
+            name="partsUsed"
+            rows={2}
+            hint="Optional; one part a line, e.g. 2 × Way wiper, WW-220"
+            error={errors.partsUsed}
+          />
           <div className="flex gap-2">
             <Button type="submit" pending={move.isPending} pendingLabel="Saving">
               Record completion
