@@ -27,6 +27,7 @@ import { geoRoutes } from "./geo/routes.ts";
 import { gateRoutes } from "./gate/routes.ts";
 import { machineCatalogRoutes } from "./machines/catalog-routes.ts";
 import { machineRoutes } from "./machines/machine-routes.ts";
+import { machinePhotoRoutes } from "./machines/photo-routes.ts";
 import { calendarRoutes } from "./calendar/routes.ts";
 import { createStorage } from "./storage/index.ts";
 import { createAbuseLimits } from "./accounts/abuse-limits.ts";
@@ -57,6 +58,7 @@ const apiRouters = [
   ...buyerRouters,
   machineCatalogRoutes,
   machineRoutes,
+  machinePhotoRoutes,
   brokerRoutes,
 ];
 
