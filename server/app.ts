@@ -28,6 +28,7 @@ import { gateRoutes } from "./gate/routes.ts";
 import { machineCatalogRoutes } from "./machines/catalog-routes.ts";
 import { machineRoutes } from "./machines/machine-routes.ts";
 import { machinePhotoRoutes } from "./machines/photo-routes.ts";
+import { machineTransferRoutes, machineTransferStartRoutes } from "./machines/transfer-routes.ts";
 import { calendarRoutes } from "./calendar/routes.ts";
 import { createStorage } from "./storage/index.ts";
 import { createAbuseLimits } from "./accounts/abuse-limits.ts";
@@ -59,6 +60,8 @@ const apiRouters = [
   machineCatalogRoutes,
   machineRoutes,
   machinePhotoRoutes,
+  machineTransferStartRoutes,
+  machineTransferRoutes,
   brokerRoutes,
 ];
 

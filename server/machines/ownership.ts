@@ -1,5 +1,6 @@
 import { QueryTypes, type Transaction } from "sequelize";
 import type { OwnershipPeriod } from "../../shared/machines/ownership-periods.ts";
+import type { OwnershipView } from "../../shared/machines/transfers.ts";
 import { db } from "../db/sequelize.ts";
 
 /** The shop whose site the machine stands at now, or null when there is no such machine. */
@@ -56,4 +57,19 @@ export async function handOver(machineId: number, toCompanyId: number, at: Date,
     bind: [machineId, toCompanyId, at],
     transaction,
   });
+}
+
+/**
+ * The periods a shop may see: the current owner sees every period's dates (its carried history is dated by them), a
+ * former owner only its own, so it learns nothing of where the machine went after it.
+ */
+export async function ownershipView(companyId: number, machineId: number): Promise<OwnershipView> {
+  const periods = await ownershipPeriods(machineId);
+  const current = periods.some((p) => p.companyId === companyId && p.to === null);
+  return {
+    current,
+    periods: periods
+      .filter((p) => current || p.companyId === companyId)
+      .map((p) => ({ from: p.from, to: p.to, yours: p.companyId === companyId })),
+  };
 }
