@@ -107,3 +107,11 @@ export const ownershipViewSchema = z.object({
   periods: z.array(z.object({ from: z.string(), to: z.string().nullable(), yours: z.boolean() })),
 });
 export type OwnershipView = z.infer<typeof ownershipViewSchema>;
+
+/** Each state's mark on screen: the shapes of the shared status table, worded for a transfer. */
+export const transferStatusMarks = {
+  open: { status: "requested", word: "Waiting" },
+  accepted: { status: "accepted", word: "Taken over" },
+  declined: { status: "declined", word: "Declined" },
+  withdrawn: { status: "withdrawn", word: "Withdrawn" },
+} as const satisfies Record<TransferState, { status: string; word: string }>;

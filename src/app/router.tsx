@@ -134,6 +134,15 @@ export const router = createBrowserRouter([
                 lazy: () => import("./routes/buyer/service-request-new.tsx"),
               },
               { path: paths.buyer.serviceRequest, lazy: () => import("./routes/buyer/service-request.tsx") },
+              {
+                path: paths.buyer.machineTransfer,
+                lazy: () => import("./routes/buyer/machine-transfer.tsx"),
+              },
+              {
+                path: paths.buyer.machineTransfers,
+                lazy: () => import("./routes/buyer/machine-transfers.tsx"),
+              },
+              { path: paths.buyer.machinesImport, lazy: () => import("./routes/buyer/machines-import.tsx") },
             ],
           },
           {

@@ -28,6 +28,7 @@ export const navigationByRole: Record<Role, readonly NavItem[]> = {
     { label: "Work orders", to: paths.buyer.workOrders },
     { label: "Service requests", to: paths.buyer.serviceRequests },
     { label: "Company", to: paths.company },
+    { label: "Machine transfers", to: paths.buyer.machineTransfers },
   ],
   admin: [
     { label: "Users", to: paths.admin.users },

@@ -50,6 +50,9 @@ export const paths = {
     serviceRequests: "/buyer/service-requests",
     serviceRequestNew: "/buyer/service-requests/new",
     serviceRequest: "/buyer/service-requests/:requestId",
+    machineTransfer: "/machines/:machineId/transfer",
+    machineTransfers: "/machine-transfers",
+    machinesImport: "/machines/import",
   },
   /** Where a scanned gate badge opens; public. */
   gateCheck: "/gate/check",
@@ -76,6 +79,7 @@ export const hrefs = {
   gateSign: (siteId: number) => `/sites/${siteId}/gate-sign`,
   buyerServiceRequest: (id: number) => `/buyer/service-requests/${id}`,
   providerServiceRequest: (id: number) => `/provider/service-requests/${id}`,
+  machineTransfer: (machineId: number) => `/machines/${machineId}/transfer`,
   workOrderNew: (technicianId: number) => `/work-orders/new?technicianId=${technicianId}`,
   /** The upload flow with the type and holder chosen already (a renewal, or a corrected returned document). */
   documentNew: (preset: { typeCode?: string | undefined; technicianId?: number | null | undefined } = {}) => {
