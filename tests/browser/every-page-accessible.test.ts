@@ -52,7 +52,16 @@ const pagesByRole: { who: string; email: string | null; pages: string[] }[] = [
   {
     who: "buyer",
     email: "buyer@marlow-precision.test",
-    pages: ["/directory", "/roster", "/sites", "/requirement-sets", "/work-orders", "/company"],
+    pages: [
+      "/directory",
+      "/roster",
+      "/sites",
+      "/requirement-sets",
+      "/work-orders",
+      "/company",
+      "/machine-transfers",
+      "/machines/import",
+    ],
   },
   { who: "buyer with a site", email: "buyer@tamsin-gear.test", pages: ["/sites/:firstSiteId/gate-sign"] },
   {
