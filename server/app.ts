@@ -29,6 +29,9 @@ import { gateRoutes } from "./gate/routes.ts";
 import { machineCatalogRoutes } from "./machines/catalog-routes.ts";
 import { machineRoutes } from "./machines/machine-routes.ts";
 import { machineHistoryRoutes } from "./machines/history-routes.ts";
+import { machinePhotoRoutes } from "./machines/photo-routes.ts";
+import { machineImportRoutes } from "./machines/import-routes.ts";
+import { machineTransferRoutes, machineTransferStartRoutes } from "./machines/transfer-routes.ts";
 import { calendarRoutes } from "./calendar/routes.ts";
 import { createStorage } from "./storage/index.ts";
 import { createAbuseLimits } from "./accounts/abuse-limits.ts";
@@ -59,8 +62,13 @@ const apiRouters = [
   calendarRoutes,
   ...buyerRouters,
   machineCatalogRoutes,
+  // Before the machine routes, so "/api/machines/import" is never read as a machine id.
+  machineImportRoutes,
   machineRoutes,
   machineHistoryRoutes,
+  machinePhotoRoutes,
+  machineTransferStartRoutes,
+  machineTransferRoutes,
   brokerRoutes,
 ];
 

@@ -13,6 +13,7 @@ const STATUS: Record<ErrorCode, number> = {
   too_many_requests: 429,
   unavailable: 503,
   internal: 500,
+  transfer_required: 409,
 };
 
 export class AppError extends Error {

@@ -188,13 +188,15 @@ export async function refuseTakenSerial(
     { bind: [builderKey, serialKey, selfId], type: QueryTypes.SELECT, transaction },
   );
   if (!taken) return;
-  const message =
-    taken.companyId === companyId
-      ? "One of your machines already has this builder and serial number"
-      : "Another shop holds a machine with this builder and serial number: ask that shop to start a transfer to you instead of adding it again";
-  throw new AppError("conflict", message, [
-    { path: "body.serialNumber", message: "already on the platform" },
-  ]);
+  if (taken.companyId === companyId)
+    throw new AppError("conflict", "One of your machines already has this builder and serial number", [
+      { path: "body.serialNumber", message: "already on your machines" },
+    ]);
+  throw new AppError(
+    "transfer_required",
+    "Another shop holds a machine with this builder and serial number: ask that shop to start a transfer to you instead of adding it again",
+    [{ path: "body.serialNumber", message: "held by another shop: ask for a transfer" }],
+  );
 }
 
 export async function addEquipment(actor: Express.User, siteId: number, input: EquipmentInput) {

@@ -1,7 +1,7 @@
-import { readFile, rm } from "node:fs/promises";
 import Papa from "papaparse";
 import { Op, fn, col, where as sqlWhere } from "sequelize";
 import { AppError } from "../http/app-error.ts";
+import { readCsvText, type UploadedFile } from "../http/csv-upload.ts";
 import { db } from "../db/sequelize.ts";
 import { recordAudit } from "../audit/index.ts";
 import { lookupPostalCode } from "../geo/index.ts";
@@ -21,41 +21,6 @@ import {
 import { Company, User } from "../db/models.ts";
 
 export const MAX_IMPORT_ROWS = 5_000;
-
-interface UploadedFile {
-  path: string;
-  originalname: string;
-  mimetype: string;
-}
-
-const csvMimes = new Set([
-  "text/csv",
-  "text/plain",
-  "application/csv",
-  "application/vnd.ms-excel",
-  "application/octet-stream",
-]);
-
-/** The file's text when it is a CSV, judged from its name, declared type and bytes (a spreadsheet's binary is not). */
-async function readCsvText(file: UploadedFile | undefined): Promise<string> {
-  if (!file)
-    throw new AppError("invalid_input", "Choose a CSV file", [{ path: "file", message: "required" }]);
-  // The file is only read, never kept: it leaves the incoming folder whatever the outcome.
-  const bytes = await readFile(file.path).finally(() => rm(file.path, { force: true }));
-  const looksBinary = bytes.includes(0) || (bytes[0] === 0x50 && bytes[1] === 0x4b);
-  if (!/\.csv$/i.test(file.originalname) || !csvMimes.has(file.mimetype) || looksBinary)
-    throw new AppError(
-      "unsupported_type",
-      "Only CSV files can be imported; save the spreadsheet as CSV (comma-separated) first",
-      [{ path: "file", message: "not a CSV file" }],
-    );
-  const text = bytes.toString("utf8");
-  if (text.includes("\uFFFD"))
-    throw new AppError("unsupported_type", "The file is not UTF-8 text", [
-      { path: "file", message: "not UTF-8 text" },
-    ]);
-  return text.replace(/^\uFEFF/, "");
-}
 
 function parseMapping(raw: string | undefined, headers: string[]): ColumnMapping {
   if (raw === undefined || raw === "") return guessMapping(headers);

@@ -17,6 +17,8 @@ export const errorCodes = [
   "too_many_requests",
   "unavailable",
   "internal",
+  /** A 409 for a machine another shop holds: the answer is a transfer from that shop, not a second record. */
+  "transfer_required",
 ] as const;
 export type ErrorCode = (typeof errorCodes)[number];
 

@@ -8,12 +8,15 @@ export const standingStatuses = ["cleared", "lapsing", "not_cleared", "not_check
 export const requirementStatuses = ["met", "lapsing", "unmet"] as const;
 export const credentialStatuses = ["submitted", "returned", "verified", "superseded", "lapsed"] as const;
 export const workOrderStatuses = ["requested", "accepted", "declined", "completed", "confirmed"] as const;
+/** A machine transfer waits, is accepted or declined like a work order, or is called back: only that last is its own. */
+export const machineTransferOnlyStatuses = ["withdrawn"] as const;
 
 export type StatusMeaning =
   | (typeof standingStatuses)[number]
   | (typeof requirementStatuses)[number]
   | (typeof credentialStatuses)[number]
-  | (typeof workOrderStatuses)[number];
+  | (typeof workOrderStatuses)[number]
+  | (typeof machineTransferOnlyStatuses)[number];
 
 /** One SVG element of a 16 x 16 mark. `"tone"` stands for the mark's colour, so screens and print share geometry. */
 export interface MarkElement {
@@ -258,6 +261,18 @@ export const statusMarks: Record<StatusMeaning, StatusMark> = {
     tone: GREEN,
     shape: "filled circle with a tick",
     elements: [{ tag: "circle", attrs: { cx: 8, cy: 8, r: 6.5, fill: "tone" } }, check],
+  },
+  withdrawn: {
+    word: "Withdrawn",
+    explains: "The sending shop called the transfer back before it was answered; nothing moved",
+    tone: BLUE,
+    shape: "open triangle",
+    elements: [
+      {
+        tag: "path",
+        attrs: { d: "M8 2.25 13.75 13.25H2.25z", fill: "none", stroke: "tone", "stroke-width": 1.5 },
+      },
+    ],
   },
 };
 

@@ -136,6 +136,15 @@ export const router = createBrowserRouter([
               { path: paths.buyer.serviceRequest, lazy: () => import("./routes/buyer/service-request.tsx") },
               { path: paths.buyer.machines, lazy: () => import("./routes/buyer/machines.tsx") },
               { path: paths.buyer.machine, lazy: () => import("./routes/buyer/machine.tsx") },
+              {
+                path: paths.buyer.machineTransfer,
+                lazy: () => import("./routes/buyer/machine-transfer.tsx"),
+              },
+              {
+                path: paths.buyer.machineTransfers,
+                lazy: () => import("./routes/buyer/machine-transfers.tsx"),
+              },
+              { path: paths.buyer.machinesImport, lazy: () => import("./routes/buyer/machines-import.tsx") },
             ],
           },
           {

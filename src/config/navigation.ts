@@ -29,6 +29,7 @@ export const navigationByRole: Record<Role, readonly NavItem[]> = {
     { label: "Service requests", to: paths.buyer.serviceRequests },
     { label: "Machines", to: paths.buyer.machines },
     { label: "Company", to: paths.company },
+    { label: "Machine transfers", to: paths.buyer.machineTransfers },
   ],
   admin: [
     { label: "Users", to: paths.admin.users },

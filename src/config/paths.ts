@@ -52,6 +52,9 @@ export const paths = {
     serviceRequest: "/buyer/service-requests/:requestId",
     machines: "/machines",
     machine: "/machines/:machineId",
+    machineTransfer: "/machines/:machineId/transfer",
+    machineTransfers: "/machine-transfers",
+    machinesImport: "/machines/import",
   },
   /** Where a scanned gate badge opens; public. */
   gateCheck: "/gate/check",
@@ -79,6 +82,7 @@ export const hrefs = {
   buyerServiceRequest: (id: number) => `/buyer/service-requests/${id}`,
   providerServiceRequest: (id: number) => `/provider/service-requests/${id}`,
   machine: (id: number) => `/machines/${id}`,
+  machineTransfer: (machineId: number) => `/machines/${machineId}/transfer`,
   workOrderNew: (technicianId: number) => `/work-orders/new?technicianId=${technicianId}`,
   /** The upload flow with the type and holder chosen already (a renewal, or a corrected returned document). */
   documentNew: (preset: { typeCode?: string | undefined; technicianId?: number | null | undefined } = {}) => {

@@ -9,6 +9,7 @@ import type { Role } from "../../shared/accounts/schemas.ts";
 import { CSRF_HEADER, CSRF_HEADER_VALUE } from "../../shared/api/error-body.ts";
 import { atLeast, technicianViewLevel } from "../../shared/visibility/technician-visibility.ts";
 import { sequelize } from "../support/test-app.ts";
+import { signedInAgent } from "../support/build-provider.ts";
 import { QueryTypes } from "sequelize";
 
 let t: TestApp;
@@ -57,6 +58,13 @@ beforeAll(async () => {
   const estimate = await owner.provider.admin
     .post(`/api/service-requests/${requestId}/estimates`)
     .send(estimateBody({ technician: owner.provider.technician } as Parameters<typeof estimateBody>[0]));
+  const photo = await owner.shop.agent
+    .post(`/api/machines/${owner.equipmentId}/photos`)
+    .attach("file", tinyPng(), "nameplate.png");
+  const buyingShop = await signedInAgent(t.app, "shop", "buyer");
+  const transfer = await owner.shop.agent
+    .post(`/api/machines/${owner.equipmentId}/transfers`)
+    .send({ email: buyingShop.user.email });
   Object.assign(ids, {
     notificationId: String(notification!.id),
     requestId: String(requestId),
@@ -74,6 +82,8 @@ beforeAll(async () => {
     workOrderId: String(workOrderId),
     messageId: String(message.body.id),
     reviewId: String(review.body.id),
+    photoId: String(photo.body.id),
+    transferId: String(transfer.body.id),
     page: "1",
   });
 }, 120_000);
@@ -140,7 +150,7 @@ describe("another company's records", () => {
       }
     }
 
-    expect(Object.keys(ids).length).toBe(17);
+    expect(Object.keys(ids).length).toBe(19);
     expect(walked.some((r) => r.policy.roles === "signed_in")).toBe(true);
     expect(checked).toBeGreaterThan(40);
     expect(wrong).toEqual([]);

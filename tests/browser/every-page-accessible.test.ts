@@ -52,7 +52,17 @@ const pagesByRole: { who: string; email: string | null; pages: string[] }[] = [
   {
     who: "buyer",
     email: "buyer@marlow-precision.test",
-    pages: ["/directory", "/roster", "/sites", "/requirement-sets", "/work-orders", "/company", "/machines"],
+    pages: [
+      "/directory",
+      "/roster",
+      "/sites",
+      "/requirement-sets",
+      "/work-orders",
+      "/company",
+      "/machine-transfers",
+      "/machines/import",
+      "/machines",
+    ],
   },
   { who: "buyer with a site", email: "buyer@tamsin-gear.test", pages: ["/sites/:firstSiteId/gate-sign"] },
   {

@@ -6,6 +6,7 @@ import { buildTestApp, type TestApp } from "../../support/test-app.ts";
 import { buildClearedProvider } from "../../fixtures/build-credential-row.ts";
 import { db } from "../../../server/db/sequelize.ts";
 import { signIn } from "../standing/sign-in-as.ts";
+import { cameraPhoto } from "../../fixtures/build-camera-photo.ts";
 
 // An EXIF reader independent of the image library that re-encodes the photo.
 const ExifParser = createRequire(import.meta.url)("exif-parser") as {
@@ -18,46 +19,6 @@ beforeAll(() => {
   t = buildTestApp();
 });
 afterAll(() => t.close());
-
-/**
- * An APP1 "Exif" segment holding a GPS IFD with a latitude (CIPA DC-008 EXIF 2.3 §4.6.6, tags 0x8825, 0x0001,
- * 0x0002; TIFF 6.0 IFD layout), placed right after the JPEG's SOI marker (ISO/IEC 10918-1 Annex B).
- */
-function withGpsExif(jpeg: Buffer): Buffer {
-  const tiff = Buffer.alloc(80);
-  tiff.write("II", 0, "latin1");
-  tiff.writeUInt16LE(42, 2);
-  tiff.writeUInt32LE(8, 4);
-  tiff.writeUInt16LE(1, 8); // IFD0: one entry, the GPS IFD pointer
-  tiff.writeUInt16LE(0x8825, 10);
-  tiff.writeUInt16LE(4, 12);
-  tiff.writeUInt32LE(1, 14);
-  tiff.writeUInt32LE(26, 18);
-  tiff.writeUInt32LE(0, 22);
-  tiff.writeUInt16LE(2, 26); // GPS IFD: latitude reference and latitude
-  tiff.writeUInt16LE(0x0001, 28);
-  tiff.writeUInt16LE(2, 30);
-  tiff.writeUInt32LE(2, 32);
-  tiff.write("N\0", 36, "latin1");
-  tiff.writeUInt16LE(0x0002, 40);
-  tiff.writeUInt16LE(5, 42);
-  tiff.writeUInt32LE(3, 44);
-  tiff.writeUInt32LE(56, 48);
-  tiff.writeUInt32LE(0, 52);
-  [41, 52, 30].forEach((v, i) => {
-    tiff.writeUInt32LE(v, 56 + i * 8);
-    tiff.writeUInt32LE(1, 60 + i * 8);
-  });
-  const payload = Buffer.concat([Buffer.from("Exif\0\0", "latin1"), tiff]);
-  const header = Buffer.from([0xff, 0xe1, 0, 0]);
-  header.writeUInt16BE(payload.length + 2, 2);
-  return Buffer.concat([jpeg.subarray(0, 2), header, payload, jpeg.subarray(2)]);
-}
-
-async function cameraPhoto(width: number, height: number): Promise<Buffer> {
-  const image = new Jimp({ width, height, color: 0x3366aaff });
-  return withGpsExif(await image.getBuffer("image/jpeg"));
-}
 
 const photoBytes = async (technicianId: number) => {
   const [row] = (await db().query("SELECT jpeg FROM technician_photos WHERE technician_id = $1", {

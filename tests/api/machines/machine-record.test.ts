@@ -81,9 +81,11 @@ describe("machine record", () => {
       .send({ ...machine(` ${serial.toLowerCase()} `), builder: "vantor   machine works" });
 
     expect(res.status).toBe(409);
-    expect(res.body.message ?? JSON.stringify(res.body)).toMatch(/transfer/);
+    expect(res.body.error.code).toBe("transfer_required");
+    expect(res.body.error.message).toMatch(/transfer/);
     const again = await first.agent.post(`/api/sites/${first.siteId}/equipment`).send(machine(serial));
     expect(again.status).toBe(409);
+    expect(again.body.error.code).toBe("conflict");
     // Another builder may use the same serial: uniqueness is per builder.
     await second.agent
       .post(`/api/sites/${second.siteId}/equipment`)

@@ -3,6 +3,7 @@ import path from "node:path";
 import { describe, expect, it } from "vitest";
 import {
   credentialStatuses,
+  machineTransferOnlyStatuses,
   markSvg,
   requirementStatuses,
   standingStatuses,
@@ -29,6 +30,7 @@ describe("status marks", () => {
       ...requirementStatuses,
       ...credentialStatuses,
       ...workOrderStatuses,
+      ...machineTransferOnlyStatuses,
     ]);
 
     expect(new Set(meanings)).toEqual(all);

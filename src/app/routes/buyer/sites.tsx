@@ -4,7 +4,7 @@ import { Link } from "react-router-dom";
 import { Button } from "@/components/ui/button.tsx";
 import { buttonStyles } from "@/components/ui/button-styles.ts";
 import { EmptyState } from "@/components/ui/empty-state.tsx";
-import { hrefs } from "@/config/paths.ts";
+import { hrefs, paths } from "@/config/paths.ts";
 import { PageHeader } from "@/components/ui/page-header.tsx";
 import { usTimeZoneOptions } from "@/features/accounts/components/us-time-zones.ts";
 import { useArchiveSite } from "@/features/sites/api/archive-site.ts";
@@ -87,7 +87,14 @@ export function Component() {
       <PageHeader
         title="Sites"
         description="Your shop's sites and the machines at each; picking a machine fills the directory's filters."
-        actions={add}
+        actions={
+          <>
+            {add}
+            <Link to={paths.buyer.machinesImport} className={buttonStyles("secondary")}>
+              Import machines from CSV
+            </Link>
+          </>
+        }
       />
       {adding && (
         <section aria-label="New site" className="mb-6 rounded-lg border border-ink-100 bg-white p-4">
