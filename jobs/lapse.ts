@@ -13,6 +13,7 @@ import {
   selectRows,
   type ChangedStanding,
 } from "../server/standing/index.ts";
+import { remindMaintenanceDue } from "../server/machines/maintenance-reminders.ts";
 import { JOB_LOCK_KEYS, withAdvisoryLock } from "./advisory-lock.ts";
 import { finishJobRun, startJobRun } from "./job-run-record.ts";
 
@@ -31,6 +32,9 @@ export interface LapseJobReport {
   lapsed: number;
   noticesCreated: number;
   emailsQueued: number;
+  /** Maintenance plans reminded 30 or 7 days before they fall due, and the e-mails queued for them. */
+  maintenanceReminders: number;
+  maintenanceEmails: number;
   changedStandings: ChangedStanding[];
   /** SQL statements the run issued, BEGIN and COMMIT included. */
   statements: number;
@@ -163,11 +167,15 @@ export async function runLapseJob(
       const changedStandings = await timed("standings", () =>
         refreshStandings(holdersOf([...lapsed, ...warned, ...starting], unstored), transaction, asOf),
       );
+      const maintenance = await timed("maintenance", () =>
+        remindMaintenanceDue(transaction, { asOf, jobRunId, publicUrl: base }),
+      );
       const noticesCreated = (lapsed[0]?.noticed ?? 0) + sum(warned);
       const counts = {
         lapsed: sum(lapsed),
         noticesCreated,
         emailsQueued: queued.emails,
+        ...maintenance,
         changedStandings: changedStandings.length,
         statements: counter.count + 1 + TRANSACTION_STATEMENTS,
         timings,
@@ -178,6 +186,7 @@ export async function runLapseJob(
         lapsed: counts.lapsed,
         noticesCreated,
         emailsQueued: queued.emails,
+        ...maintenance,
         changedStandings,
         finishedAt,
         timings,

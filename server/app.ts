@@ -27,6 +27,7 @@ import { geoRoutes } from "./geo/routes.ts";
 import { gateRoutes } from "./gate/routes.ts";
 import { machineCatalogRoutes } from "./machines/catalog-routes.ts";
 import { machineRoutes } from "./machines/machine-routes.ts";
+import { maintenanceRoutes } from "./machines/maintenance-routes.ts";
 import { calendarRoutes } from "./calendar/routes.ts";
 import { createStorage } from "./storage/index.ts";
 import { createAbuseLimits } from "./accounts/abuse-limits.ts";
@@ -58,6 +59,7 @@ const apiRouters = [
   machineCatalogRoutes,
   machineRoutes,
   brokerRoutes,
+  maintenanceRoutes,
 ];
 
 export function createApp({ config, sessionPool, clientDir }: AppDeps): Express {

@@ -57,6 +57,14 @@ beforeAll(async () => {
   const estimate = await owner.provider.admin
     .post(`/api/service-requests/${requestId}/estimates`)
     .send(estimateBody({ technician: owner.provider.technician } as Parameters<typeof estimateBody>[0]));
+  const plan = await owner.shop.agent
+    .post(`/api/machines/${owner.equipmentId}/maintenance-plans`)
+    .send({
+      name: "Annual inspection",
+      intervalKind: "months",
+      intervalMonths: 12,
+      lastDoneOn: "2026-01-15",
+    });
   Object.assign(ids, {
     notificationId: String(notification!.id),
     requestId: String(requestId),
@@ -75,6 +83,7 @@ beforeAll(async () => {
     messageId: String(message.body.id),
     reviewId: String(review.body.id),
     page: "1",
+    planId: String(plan.body.id),
   });
 }, 120_000);
 afterAll(() => t.close());
@@ -140,7 +149,7 @@ describe("another company's records", () => {
       }
     }
 
-    expect(Object.keys(ids).length).toBe(17);
+    expect(Object.keys(ids).length).toBe(18);
     expect(walked.some((r) => r.policy.roles === "signed_in")).toBe(true);
     expect(checked).toBeGreaterThan(40);
     expect(wrong).toEqual([]);
