@@ -7,6 +7,7 @@ import type {
   MaintenancePlanInput,
   MaintenancePlanListDto,
 } from "../../shared/machines/maintenance-schemas.ts";
+import { startOfDateInstant } from "../../shared/standing/training-validity.ts";
 import { db } from "../db/sequelize.ts";
 import { recordAudit } from "../audit/index.ts";
 import { AppError } from "../http/app-error.ts";
@@ -128,12 +129,18 @@ export async function listPlans(
   const reading = latest[0];
   return {
     machineId,
+    machine: {
+      builder: machine.builder,
+      model: machine.model,
+      serialNumber: machine.serial_number,
+      siteName: machine.site_name,
+    },
     today,
     siteTimeZone: machine.time_zone,
     latestReading: reading
       ? { hours: reading.hours, readOn: reading.read_on, recordedAt: reading.created_at.toISOString() }
       : null,
-    plans: plans.map((p) => toPlanDto(p, readings, today, requests)),
+    plans: plans.map((p) => toPlanDto(p, readings, today, requests, machine.time_zone)),
   };
 }
 
@@ -142,6 +149,7 @@ function toPlanDto(
   readings: HourReading[],
   today: string,
   requests: OpenRequestRow[],
+  timeZone: string,
 ): MaintenancePlanDto {
   const due = planDue(planFacts(row), readings, today);
   const open = requests.find((r) => r.plan_id === row.id && r.due_key === due.dueKey);
@@ -155,6 +163,7 @@ function toPlanDto(
     lastDoneOn: row.last_done_on,
     lastDoneHours: row.last_done_hours,
     due,
+    dueStartsAt: due.dueOn ? startOfDateInstant(due.dueOn, timeZone).toISOString() : null,
     openRequest: open
       ? {
           serviceRequestId: open.service_request_id,

@@ -61,43 +61,66 @@ export const maintenanceRequestInputSchema = z
   });
 export type MaintenanceRequestInput = z.infer<typeof maintenanceRequestInputSchema>;
 
-export interface MaintenanceRequestRefDto {
-  serviceRequestId: number;
-  status: string;
-  windowStart: string;
-  windowEnd: string;
-  createdAt: string;
-}
+// Response shapes, declared once: the server's types and the client's parsing both come from these.
+export const planDueSchema = z.object({
+  dueOn: z.string().nullable(),
+  estimated: z.boolean(),
+  dueHours: z.number().nullable(),
+  currentHours: z.number().nullable(),
+  daysUntil: z.number().nullable(),
+  state: z.enum(["scheduled", "coming_due", "due_soon", "due_now", "overdue"]),
+  dueKey: z.string(),
+}) satisfies z.ZodType<PlanDue>;
 
-export interface MaintenancePlanDto {
-  id: number;
-  machineId: number;
-  name: string;
-  intervalKind: MaintenanceIntervalKind;
-  intervalMonths: number | null;
-  intervalHours: number | null;
-  lastDoneOn: string | null;
-  lastDoneHours: number | null;
-  due: PlanDue;
+export const maintenanceRequestRefSchema = z.object({
+  serviceRequestId: z.number(),
+  status: z.string(),
+  windowStart: z.string(),
+  windowEnd: z.string(),
+  createdAt: z.string(),
+});
+export type MaintenanceRequestRefDto = z.infer<typeof maintenanceRequestRefSchema>;
+
+export const maintenancePlanSchema = z.object({
+  id: z.number(),
+  machineId: z.number(),
+  name: z.string(),
+  intervalKind: z.enum(maintenanceIntervalKinds),
+  intervalMonths: z.number().nullable(),
+  intervalHours: z.number().nullable(),
+  lastDoneOn: z.string().nullable(),
+  lastDoneHours: z.number().nullable(),
+  due: planDueSchema,
+  /** The instant the due date begins at the machine's site, for a reader in another zone. */
+  dueStartsAt: z.string().nullable(),
   /** The request raised for the current due occurrence and not yet done, if any. */
-  openRequest: MaintenanceRequestRefDto | null;
-  updatedAt: string;
-}
+  openRequest: maintenanceRequestRefSchema.nullable(),
+  updatedAt: z.string(),
+});
+export type MaintenancePlanDto = z.infer<typeof maintenancePlanSchema>;
 
-export interface MaintenancePlanListDto {
-  machineId: number;
+export const maintenancePlanListSchema = z.object({
+  machineId: z.number(),
+  machine: z.object({
+    builder: z.string(),
+    model: z.string(),
+    serialNumber: z.string().nullable(),
+    siteName: z.string(),
+  }),
   /** The site's calendar date the due days are counted from. */
-  today: string;
-  siteTimeZone: string;
-  latestReading: { hours: number; readOn: string; recordedAt: string } | null;
-  plans: MaintenancePlanDto[];
-}
+  today: z.string(),
+  siteTimeZone: z.string(),
+  latestReading: z.object({ hours: z.number(), readOn: z.string(), recordedAt: z.string() }).nullable(),
+  plans: z.array(maintenancePlanSchema),
+});
+export type MaintenancePlanListDto = z.infer<typeof maintenancePlanListSchema>;
 
-export interface RaisedMaintenanceRequestDto {
-  serviceRequestId: number;
-  windowStart: string;
-  windowEnd: string;
-}
+export const raisedMaintenanceRequestSchema = z.object({
+  serviceRequestId: z.number(),
+  windowStart: z.string(),
+  windowEnd: z.string(),
+});
+export type RaisedMaintenanceRequestDto = z.infer<typeof raisedMaintenanceRequestSchema>;
 
 export const dueStateWords: Record<PlanDue["state"], string> = {
   scheduled: "Scheduled",

@@ -134,6 +134,10 @@ export const router = createBrowserRouter([
                 lazy: () => import("./routes/buyer/service-request-new.tsx"),
               },
               { path: paths.buyer.serviceRequest, lazy: () => import("./routes/buyer/service-request.tsx") },
+              {
+                path: paths.buyer.machineMaintenance,
+                lazy: () => import("./routes/buyer/machine-maintenance.tsx"),
+              },
             ],
           },
           {

@@ -50,6 +50,7 @@ export const paths = {
     serviceRequests: "/buyer/service-requests",
     serviceRequestNew: "/buyer/service-requests/new",
     serviceRequest: "/buyer/service-requests/:requestId",
+    machineMaintenance: "/machines/:machineId/maintenance",
   },
   /** Where a scanned gate badge opens; public. */
   gateCheck: "/gate/check",
@@ -75,6 +76,7 @@ export const hrefs = {
   workOrder: (id: number) => `/work-orders/${id}`,
   gateSign: (siteId: number) => `/sites/${siteId}/gate-sign`,
   buyerServiceRequest: (id: number) => `/buyer/service-requests/${id}`,
+  machineMaintenance: (machineId: number) => `/machines/${machineId}/maintenance`,
   providerServiceRequest: (id: number) => `/provider/service-requests/${id}`,
   workOrderNew: (technicianId: number) => `/work-orders/new?technicianId=${technicianId}`,
   /** The upload flow with the type and holder chosen already (a renewal, or a corrected returned document). */
