@@ -1,5 +1,6 @@
 import { User } from "../../accounts/model.ts";
 import { insertDemoServiceRequests } from "./service-requests.ts";
+import { insertDemoMaintenancePlans } from "./maintenance-plans.ts";
 import { hashPassword } from "../../accounts/passwords.ts";
 import { Company } from "../../companies/model.ts";
 import { refreshAllStandings } from "../../standing/index.ts";
@@ -46,6 +47,7 @@ export async function loadDemoScenarioOnce({
       await insertDemoWorld(world, files, passwordHash, transaction);
       await afterDemoLoaded(today, transaction);
       await insertDemoServiceRequests(today, transaction);
+      await insertDemoMaintenancePlans(today, transaction);
     });
   } catch (err) {
     await discardStagedFiles(files.values());
