@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { buildTestApp, type TestApp } from "../support/test-app.ts";
 import { startTestMailCatcher } from "../support/mail-catcher.ts";
-import { buildShop, type Shop } from "../fixtures/build-service-request-world.ts";
+import { buildClearedCompany, buildShop, type Shop } from "../fixtures/build-service-request-world.ts";
 import { runLapseJob } from "../../jobs/lapse.ts";
 import { JOB_DEPS, rows, runJobCli } from "./job-support.ts";
 
@@ -141,6 +141,26 @@ describe("maintenance reminders in the daily job", () => {
     expect(await remindersOf(planId)).toEqual([{ threshold_days: 7, due_key: "hours:5400" }]);
     const bell = await bellOf(shop.user.id);
     expect(bell[0]!.title).toContain("projected for Jun 10, 2027");
+  }, 60_000);
+
+  it("owes no reminder while a request raised from the plan for this due date is open", async () => {
+    const shop = await buildShop(t.app);
+    await buildClearedCompany(t.app);
+    const planId = await planOn(shop, {
+      name: "Ballbar test",
+      intervalKind: "months",
+      intervalMonths: 12,
+      lastDoneOn: "2026-01-10",
+    });
+    const raised = await shop.agent
+      .post(`/api/machines/${shop.equipmentId}/maintenance-plans/${planId}/service-request`)
+      .send({});
+
+    await runAt("2026-12-20T18:00:00Z");
+
+    expect(raised.status).toBe(201);
+    expect(await remindersOf(planId)).toEqual([]);
+    expect(await bellOf(shop.user.id)).toEqual([]);
   }, 60_000);
 
   it("sends each reminder once when two job processes run at the same instant", async () => {
