@@ -1,6 +1,6 @@
-import { useState, type FormEvent } from "react";
+import { useEffect, useRef, useState, type FormEvent } from "react";
 import { useQuery } from "@tanstack/react-query";
-import { Link, useNavigate } from "react-router-dom";
+import { Link, useNavigate, useSearchParams } from "react-router-dom";
 import {
   dueStateWords,
   hourReadingInputSchema,
@@ -55,8 +55,15 @@ const stateStyles: Record<MaintenancePlanDto["due"]["state"], string> = {
   overdue: "border-red-700 bg-red-50 text-red-800",
 };
 
-function PlanCard({ plan, list }: { plan: MaintenancePlanDto; list: MaintenancePlanListDto }) {
+type PlanCardProps = { plan: MaintenancePlanDto; list: MaintenancePlanListDto; named: boolean };
+
+function PlanCard({ plan, list, named }: PlanCardProps) {
   const [editing, setEditing] = useState(false);
+  const cardRef = useRef<HTMLLIElement>(null);
+  // A reminder links to its plan (?plan=12): bring that one into view.
+  useEffect(() => {
+    if (named) cardRef.current?.scrollIntoView({ block: "center" });
+  }, [named]);
   const [confirmingDelete, setConfirmingDelete] = useState(false);
   const save = useSaveMaintenancePlan(plan.machineId);
   const remove = useRemoveMaintenancePlan(plan.machineId);
@@ -83,7 +90,12 @@ function PlanCard({ plan, list }: { plan: MaintenancePlanDto; list: MaintenanceP
     );
 
   return (
-    <li className="space-y-3 rounded-lg border border-ink-100 bg-white p-4" aria-label={plan.name}>
+    <li
+      ref={cardRef}
+      className={`space-y-3 rounded-lg border bg-white p-4 ${named ? "border-ink-700 ring-2 ring-ink-700/30" : "border-ink-100"}`}
+      aria-label={plan.name}
+      aria-current={named || undefined}
+    >
       <div className="flex flex-wrap items-start justify-between gap-2">
         <div className="min-w-0">
           <h3 className="font-semibold break-words text-ink-900">{plan.name}</h3>
@@ -227,6 +239,8 @@ export function MaintenancePlansPanel({ machineId }: { machineId: number }) {
   const { data: list, isPending, error } = useQuery(maintenancePlansQuery(machineId));
   const [adding, setAdding] = useState(false);
   const save = useSaveMaintenancePlan(machineId);
+  const [search] = useSearchParams();
+  const namedPlanId = Number(search.get("plan"));
 
   if (isPending) return <Spinner label="Loading maintenance plans" />;
   if (error || !list) return <FormError error={error} />;
@@ -266,7 +280,7 @@ export function MaintenancePlansPanel({ machineId }: { machineId: number }) {
         ) : (
           <ul className="space-y-3">
             {list.plans.map((plan) => (
-              <PlanCard key={plan.id} plan={plan} list={list} />
+              <PlanCard key={plan.id} plan={plan} list={list} named={plan.id === namedPlanId} />
             ))}
           </ul>
         )}
