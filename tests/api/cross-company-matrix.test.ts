@@ -57,14 +57,12 @@ beforeAll(async () => {
   const estimate = await owner.provider.admin
     .post(`/api/service-requests/${requestId}/estimates`)
     .send(estimateBody({ technician: owner.provider.technician } as Parameters<typeof estimateBody>[0]));
-  const plan = await owner.shop.agent
-    .post(`/api/machines/${owner.equipmentId}/maintenance-plans`)
-    .send({
-      name: "Annual inspection",
-      intervalKind: "months",
-      intervalMonths: 12,
-      lastDoneOn: "2026-01-15",
-    });
+  const plan = await owner.shop.agent.post(`/api/machines/${owner.equipmentId}/maintenance-plans`).send({
+    name: "Annual inspection",
+    intervalKind: "months",
+    intervalMonths: 12,
+    lastDoneOn: "2026-01-15",
+  });
   Object.assign(ids, {
     notificationId: String(notification!.id),
     requestId: String(requestId),
