@@ -274,4 +274,39 @@ describe("requesting the planned service", () => {
     );
     expect(link[0]?.done_work_order_id).toBe(workOrderId);
   });
+
+  it("restarts a running-hours plan from the latest meter reading once its work is confirmed", async () => {
+    const shop = await buildShop(t.app);
+    const company = await buildClearedCompany(t.app);
+    const base = `/api/machines/${shop.equipmentId}`;
+    await shop.agent.post(`${base}/hour-readings`).send({ hours: 11_990 }).expect(201);
+    const plan = await addPlan(shop, {
+      name: "Spindle bearing check",
+      intervalKind: "hours",
+      intervalHours: 2_000,
+      lastDoneHours: 10_000,
+    });
+    const requestId = (await raise(shop, plan.id)).body.serviceRequestId as number;
+    const estimate = await company.admin
+      .post(`/api/service-requests/${requestId}/estimates`)
+      .send(estimateBody(company));
+    const accepted = await shop.agent.post(
+      `/api/service-requests/${requestId}/estimates/${estimate.body.estimates[0].id}/accept`,
+    );
+    const workOrderId = accepted.body.workOrderId as number;
+    await company.admin
+      .post(`/api/work-orders/${workOrderId}/complete`)
+      .send({ hoursWorked: 4, travelHours: 1 })
+      .expect(200);
+    await shop.agent.post(`${base}/hour-readings`).send({ hours: 12_004 }).expect(201);
+
+    await shop.agent.post(`/api/work-orders/${workOrderId}/confirm`).send({}).expect(200);
+    const after = await shop.agent.get(`${base}/maintenance-plans`);
+
+    expect(after.body.plans[0]).toMatchObject({
+      lastDoneHours: 12_004,
+      due: expect.objectContaining({ dueHours: 14_004, currentHours: 12_004, dueKey: "hours:14004" }),
+      openRequest: null,
+    });
+  });
 });
