@@ -133,6 +133,8 @@ function PlanCard({ plan, list, named }: PlanCardProps) {
       <div className="flex flex-wrap gap-2">
         {!plan.openRequest && (
           <Button
+            // The accent marks the one thing to do next: only on plans that are coming due.
+            variant={plan.due.state === "scheduled" ? "secondary" : "primary"}
             pending={raise.isPending}
             pendingLabel="Raising the request"
             onClick={() =>
