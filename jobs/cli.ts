@@ -91,6 +91,9 @@ async function main(): Promise<number> {
     );
     const rosterAlerts = await sweepRosterAlerts();
     say(`  ${rosterAlerts} roster alerts to buyers`);
+    say(
+      `  ${result.maintenanceReminders} maintenance reminders, ${result.maintenanceEmails} e-mails queued for them`,
+    );
     if (!values["no-send"]) await sendOutbox();
     return 0;
   }

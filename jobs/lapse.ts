@@ -9,6 +9,7 @@ import {
 } from "../server/notices/index.ts";
 import { refreshStandings, type ChangedStanding } from "../server/standing/index.ts";
 import { countStatements, selectRows } from "../server/db/sql.ts";
+import { remindMaintenanceDue } from "../server/machines/maintenance-reminders.ts";
 import { JOB_LOCK_KEYS, withAdvisoryLock } from "./advisory-lock.ts";
 import { finishJobRun, startJobRun } from "./job-run-record.ts";
 
@@ -27,6 +28,9 @@ export interface LapseJobReport {
   lapsed: number;
   noticesCreated: number;
   emailsQueued: number;
+  /** Maintenance plans reminded 30 or 7 days before they fall due, and the e-mails queued for them. */
+  maintenanceReminders: number;
+  maintenanceEmails: number;
   changedStandings: ChangedStanding[];
   /** SQL statements the run issued, BEGIN and COMMIT included. */
   statements: number;
@@ -159,11 +163,15 @@ export async function runLapseJob(
       const changedStandings = await timed("standings", () =>
         refreshStandings(holdersOf([...lapsed, ...warned, ...starting], unstored), transaction, asOf),
       );
+      const maintenance = await timed("maintenance", () =>
+        remindMaintenanceDue(transaction, { asOf, jobRunId, publicUrl: base }),
+      );
       const noticesCreated = (lapsed[0]?.noticed ?? 0) + sum(warned);
       const counts = {
         lapsed: sum(lapsed),
         noticesCreated,
         emailsQueued: queued.emails,
+        ...maintenance,
         changedStandings: changedStandings.length,
         statements: counter.count + 1 + TRANSACTION_STATEMENTS,
         timings,
@@ -174,6 +182,7 @@ export async function runLapseJob(
         lapsed: counts.lapsed,
         noticesCreated,
         emailsQueued: queued.emails,
+        ...maintenance,
         changedStandings,
         finishedAt,
         timings,

@@ -32,6 +32,7 @@ import { machineHistoryRoutes } from "./machines/history-routes.ts";
 import { machinePhotoRoutes } from "./machines/photo-routes.ts";
 import { machineImportRoutes } from "./machines/import-routes.ts";
 import { machineTransferRoutes, machineTransferStartRoutes } from "./machines/transfer-routes.ts";
+import { maintenanceRoutes } from "./machines/maintenance-routes.ts";
 import { calendarRoutes } from "./calendar/routes.ts";
 import { createStorage } from "./storage/index.ts";
 import { createAbuseLimits } from "./accounts/abuse-limits.ts";
@@ -70,6 +71,7 @@ const apiRouters = [
   machineTransferStartRoutes,
   machineTransferRoutes,
   brokerRoutes,
+  maintenanceRoutes,
 ];
 
 export function createApp({ config, sessionPool, clientDir }: AppDeps): Express {

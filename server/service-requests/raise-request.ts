@@ -136,8 +136,16 @@ export function siteArea(postalCode: string) {
   return { city: place?.city ?? "", state: place?.state ?? "", postalCode };
 }
 
-/** Raises the request and invites every company of the plan in one transaction; refused additions are a 422. */
-export async function raiseServiceRequest(buyer: Express.User, input: RaiseServiceRequest, linkBase: string) {
+/**
+ * Raises the request and invites every company of the plan in one transaction; refused additions are a 422. `alongside`
+ * writes the caller's own rows (a maintenance plan's link) in that same transaction, so neither exists without the other.
+ */
+export async function raiseServiceRequest(
+  buyer: Express.User,
+  input: RaiseServiceRequest,
+  linkBase: string,
+  alongside?: (requestId: number, transaction: Transaction) => Promise<void>,
+) {
   const targets = await resolveRequestTargets(buyer, input);
   return db().transaction(async (transaction) => {
     const asOf = new Date();
@@ -221,6 +229,7 @@ export async function raiseServiceRequest(buyer: Express.User, input: RaiseServi
       },
       transaction,
     );
+    if (alongside) await alongside(id, transaction);
     return { id, invited: plan.count };
   });
 }

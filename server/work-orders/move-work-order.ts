@@ -10,6 +10,7 @@ import { sideOf } from "./policy.ts";
 import { standingSnapshotNow } from "./standing-now.ts";
 import { mailOtherSide, type WorkOrderNews } from "./work-order-emails.ts";
 import { toWorkOrderDto } from "./dto.ts";
+import { movePlanForConfirmedWork } from "../machines/maintenance-completion.ts";
 
 type Changes = Partial<
   Pick<
@@ -199,7 +200,11 @@ export function confirmWorkOrder(actor: Express.User, id: number, link: string) 
     id,
     "confirm",
     {
-      changes: () => ({}),
+      // Confirmed preventive maintenance moves its plan to the next due date in the same transaction.
+      changes: async (row, _now, transaction) => {
+        await movePlanForConfirmedWork(row, actor.id, transaction);
+        return {};
+      },
       news: (row, who) => ({
         subject: "confirmed",
         lines: [`${who.name} confirmed that work order #${row.id} is complete.`],

@@ -145,6 +145,10 @@ export const router = createBrowserRouter([
                 lazy: () => import("./routes/buyer/machine-transfers.tsx"),
               },
               { path: paths.buyer.machinesImport, lazy: () => import("./routes/buyer/machines-import.tsx") },
+              {
+                path: paths.buyer.machineMaintenance,
+                lazy: () => import("./routes/buyer/machine-maintenance.tsx"),
+              },
             ],
           },
           {

@@ -55,6 +55,7 @@ export const paths = {
     machineTransfer: "/machines/:machineId/transfer",
     machineTransfers: "/machine-transfers",
     machinesImport: "/machines/import",
+    machineMaintenance: "/machines/:machineId/maintenance",
   },
   /** Where a scanned gate badge opens; public. */
   gateCheck: "/gate/check",
@@ -80,6 +81,7 @@ export const hrefs = {
   workOrder: (id: number) => `/work-orders/${id}`,
   gateSign: (siteId: number) => `/sites/${siteId}/gate-sign`,
   buyerServiceRequest: (id: number) => `/buyer/service-requests/${id}`,
+  machineMaintenance: (machineId: number) => `/machines/${machineId}/maintenance`,
   providerServiceRequest: (id: number) => `/provider/service-requests/${id}`,
   machine: (id: number) => `/machines/${id}`,
   machineTransfer: (machineId: number) => `/machines/${machineId}/transfer`,

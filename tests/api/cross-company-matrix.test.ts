@@ -65,6 +65,12 @@ beforeAll(async () => {
   const transfer = await owner.shop.agent
     .post(`/api/machines/${owner.equipmentId}/transfers`)
     .send({ email: buyingShop.user.email });
+  const plan = await owner.shop.agent.post(`/api/machines/${owner.equipmentId}/maintenance-plans`).send({
+    name: "Annual inspection",
+    intervalKind: "months",
+    intervalMonths: 12,
+    lastDoneOn: "2026-01-15",
+  });
   Object.assign(ids, {
     notificationId: String(notification!.id),
     requestId: String(requestId),
@@ -85,6 +91,7 @@ beforeAll(async () => {
     photoId: String(photo.body.id),
     transferId: String(transfer.body.id),
     page: "1",
+    planId: String(plan.body.id),
   });
 }, 120_000);
 afterAll(() => t.close());
@@ -150,7 +157,7 @@ describe("another company's records", () => {
       }
     }
 
-    expect(Object.keys(ids).length).toBe(19);
+    expect(Object.keys(ids).length).toBe(20);
     expect(walked.some((r) => r.policy.roles === "signed_in")).toBe(true);
     expect(checked).toBeGreaterThan(40);
     expect(wrong).toEqual([]);

@@ -11,6 +11,7 @@ import { buildDemoWorld, loadDemoScenarioOnce } from "../../server/db/demo-scena
 import { migrate } from "../../server/db/migrate.ts";
 import { connectDatabase } from "../../server/db/sequelize.ts";
 import { listMachineHistory } from "../../server/machines/service-history.ts";
+import { planDue, reminderThresholdFor } from "../../shared/machines/maintenance-due.ts";
 
 // The demo loads into an empty database only, so it gets a throw-away database of its own in the suite's cluster.
 const databaseName = `demo_check_${randomUUID().slice(0, 8)}`;
@@ -149,6 +150,29 @@ describe("loading the demo scenario", () => {
     expect(history.entries.map((e) => e.source)).toEqual(["platform", "shop_record"]);
     expect(history.entries[0]!.repeatOf).toBe(history.entries[1]!.key);
     expect(history.entries[0]!.standingSnapshot).not.toBeNull();
+  });
+
+  it("has a maintenance plan coming due that the next daily run reminds the shop of", async () => {
+    const plans = await rows<{ name: string; last_done_on: string; interval_months: number }>(
+      "SELECT name, last_done_on::text, interval_months FROM maintenance_plans WHERE interval_kind = 'months'",
+    );
+
+    const owed = plans.filter(
+      (p) =>
+        reminderThresholdFor(
+          planDue(
+            {
+              interval: { kind: "months", months: p.interval_months },
+              lastDoneOn: p.last_done_on,
+              lastDoneHours: null,
+            },
+            [],
+            "2026-12-02",
+          ).daysUntil,
+        ) === 30,
+    );
+
+    expect(owed.map((p) => p.name)).toEqual(["Annual inspection"]);
   });
 
   it("does nothing when data is already there", async () => {

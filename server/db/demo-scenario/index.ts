@@ -1,5 +1,6 @@
 import { insertDemoServiceRequests } from "./service-requests.ts";
 import { insertDemoMachineHistory } from "./machine-history.ts";
+import { insertDemoMaintenancePlans } from "./maintenance-plans.ts";
 import { hashPassword } from "../../accounts/passwords.ts";
 import { refreshAllStandings } from "../../standing/index.ts";
 import { createStorage } from "../../storage/index.ts";
@@ -47,6 +48,7 @@ export async function loadDemoScenarioOnce({
       await afterDemoLoaded(today, transaction);
       await insertDemoServiceRequests(today, transaction);
       await insertDemoMachineHistory(today, transaction);
+      await insertDemoMaintenancePlans(today, transaction);
     });
   } catch (err) {
     await discardStagedFiles(files.values());
