@@ -4,7 +4,7 @@ import { calendarDateIn } from "../../shared/dates/local-time.ts";
 import { AppError } from "../http/app-error.ts";
 import { db } from "../db/sequelize.ts";
 import { recordAudit } from "../audit/index.ts";
-import { Site, type Equipment } from "../sites/model.ts";
+import { Site, type Equipment } from "../db/models.ts";
 
 /**
  * The shop writes down work done outside the platform. It is kept apart from work orders, with names as plain text
