@@ -2,7 +2,7 @@ import { Op, type Transaction } from "sequelize";
 import { AppError } from "../http/app-error.ts";
 import { db } from "../db/sequelize.ts";
 import { recordAudit } from "../audit/index.ts";
-import { enqueueMail } from "../mail/outbox.ts";
+import { tellPerson } from "../notices/index.ts";
 import { Company } from "../companies/model.ts";
 import { User } from "../accounts/model.ts";
 import { Technician } from "../technicians/model.ts";
@@ -134,7 +134,11 @@ export async function verifyCredential(
     const uploader = await User.findByPk(row.submittedBy, { transaction });
     const name = await holderName(row, transaction);
     if (uploader)
-      await enqueueMail(verifiedMail(uploader.email, type!.name, name, `${linkBase}/documents`), transaction);
+      await tellPerson(
+        verifiedMail(uploader.email, type!.name, name, `${linkBase}/documents`),
+        { kind: "credential_verified" },
+        transaction,
+      );
     await tellShopOfVerifiedCertificate(row, linkBase, transaction);
     await refreshStandingsForHolder(
       { companyId: row.companyId, technicianId: row.technicianId },
@@ -169,7 +173,11 @@ export async function returnCredential(reviewer: Express.User, id: number, reaso
     const name = await holderName(row, transaction);
     const link = `${linkBase}/documents/new?type=${row.typeCode}${row.technicianId ? `&technicianId=${row.technicianId}` : ""}`;
     if (uploader)
-      await enqueueMail(returnedMail(uploader.email, type!.name, name, reason, link), transaction);
+      await tellPerson(
+        returnedMail(uploader.email, type!.name, name, reason, link),
+        { kind: "credential_returned" },
+        transaction,
+      );
     await refreshStandingsForHolder(
       { companyId: row.companyId, technicianId: row.technicianId },
       transaction,

@@ -15,6 +15,8 @@ import { openReturns } from "@/features/credentials/components/open-returns.ts";
 import { openLapses } from "@/features/credentials/components/open-lapses.ts";
 import { LapsedList } from "@/features/credentials/components/lapsed-list.tsx";
 import { ReturnedList } from "@/features/credentials/components/returned-list.tsx";
+import { workOrdersQuery } from "@/features/work-orders/api/get-work-orders.ts";
+import { WorkOrdersToAnswer } from "@/features/work-orders/components/work-orders-to-answer.tsx";
 import { queryClient } from "@/lib/query-client.ts";
 
 // The horizon of "what lapses next": the first warning goes out 60 days ahead, so 90 shows what comes after it too.
@@ -22,7 +24,10 @@ const HORIZON_DAYS = 90;
 const HORIZON_WEEKS = Math.ceil(HORIZON_DAYS / 7);
 
 export async function loader() {
-  await queryClient.ensureQueryData(credentialsQuery());
+  await Promise.all([
+    queryClient.ensureQueryData(credentialsQuery()),
+    queryClient.ensureQueryData(workOrdersQuery("requested")),
+  ]);
   return null;
 }
 
@@ -31,6 +36,7 @@ const renewHref = (c: Credential) =>
 
 export function Component() {
   const { data: credentials } = useSuspenseQuery(credentialsQuery());
+  const { data: toAnswer } = useSuspenseQuery(workOrdersQuery("requested"));
   const [now] = useState(() => new Date());
   const lapsing = useMemo(() => lapsingWithin(credentials, now, HORIZON_DAYS), [credentials, now]);
   const weeks = useMemo(() => byWeek(lapsing, now, HORIZON_WEEKS), [lapsing, now]);
@@ -42,13 +48,20 @@ export function Component() {
     <>
       <PageHeader
         title="Dashboard"
-        description="What has lapsed, what lapses next and what was returned to you, soonest first."
+        description="What waits for the office: work orders to answer, what has lapsed, what lapses next and what was returned to you."
         actions={
           <Link to={hrefs.documentNew()} className={buttonStyles("primary")}>
             Upload a document
           </Link>
         }
       />
+      <section aria-labelledby="to-answer-heading" className="mb-8 space-y-3">
+        <h2 id="to-answer-heading" className="text-lg font-semibold text-ink-900">
+          Work orders to answer{" "}
+          <span className="text-base font-normal text-ink-700">({toAnswer.length})</span>
+        </h2>
+        <WorkOrdersToAnswer workOrders={toAnswer} />
+      </section>
       <div className="grid items-start gap-8 lg:grid-cols-[minmax(0,1fr)_22rem]">
         <section aria-labelledby="lapsing-heading" className="space-y-4">
           <h2 id="lapsing-heading" className="text-lg font-semibold text-ink-900">
