@@ -1,8 +1,9 @@
-import { Op, type Transaction } from "sequelize";
+import type { Transaction } from "sequelize";
 import { AppError } from "../http/app-error.ts";
 import { db } from "../db/sequelize.ts";
 import { recordAudit } from "../audit/index.ts";
 import { tellPerson } from "../notices/index.ts";
+import { sameCredentialScope } from "./same-credential-scope.ts";
 import { Company } from "../companies/model.ts";
 import { User } from "../accounts/model.ts";
 import { Technician } from "../technicians/model.ts";
@@ -32,20 +33,7 @@ async function holderName(credential: Credential, transaction: Transaction) {
 }
 
 /** Credentials that a newly verified one replaces: same type and holder (and, for builder training, same control). */
-function supersedeScope(credential: Credential) {
-  const where: Record<string, unknown> = {
-    id: { [Op.ne]: credential.id },
-    typeCode: credential.typeCode,
-    companyId: credential.companyId,
-    technicianId: credential.technicianId,
-    state: "verified",
-  };
-  if (credential.typeCode === "oem_training") {
-    where["fields.builder"] = credential.fields.builder;
-    where["fields.controlFamily"] = credential.fields.controlFamily;
-  }
-  return where;
-}
+const supersedeScope = (credential: Credential) => sameCredentialScope(credential, ["verified"]);
 
 async function applyFieldEdit(
   reviewer: Express.User,
