@@ -3,7 +3,6 @@ import { useSuspenseQuery } from "@tanstack/react-query";
 import { Link } from "react-router-dom";
 import { hrefs } from "@/config/paths.ts";
 import { buttonStyles } from "@/components/ui/button-styles.ts";
-import { CautionNote } from "@/components/ui/caution-note.tsx";
 import { PageHeader } from "@/components/ui/page-header.tsx";
 import type { Credential } from "@/features/credentials/api/credential-shapes.ts";
 import { credentialsQuery } from "@/features/credentials/api/get-credentials.ts";
@@ -42,7 +41,6 @@ export function Component() {
   const weeks = useMemo(() => byWeek(lapsing, now, HORIZON_WEEKS), [lapsing, now]);
   const returned = useMemo(() => openReturns(credentials), [credentials]);
   const lapsed = useMemo(() => openLapses(credentials), [credentials]);
-  const showsInsurance = credentials.some((c) => c.category === "insurance");
 
   return (
     <>
@@ -87,7 +85,6 @@ export function Component() {
           <CalendarFeedPanel description="Your company's lapse dates and warning dates in your own calendar program, updated on its own." />
         </div>
       </div>
-      {showsInsurance && <CautionNote className="mt-8" />}
     </>
   );
 }

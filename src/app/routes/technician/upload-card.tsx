@@ -2,7 +2,6 @@ import { useSuspenseQuery } from "@tanstack/react-query";
 import { useLoaderData, useNavigate, useSearchParams } from "react-router-dom";
 import { paths } from "@/config/paths.ts";
 import { PageHeader } from "@/components/ui/page-header.tsx";
-import { SafetyCaution } from "@/components/ui/safety-caution.tsx";
 import { credentialTypesQuery } from "@/features/credentials/api/get-credential-types.ts";
 import { UploadFlow } from "@/features/credentials/components/upload-flow.tsx";
 import { queryClient } from "@/lib/query-client.ts";
@@ -28,7 +27,6 @@ export function Component() {
         title="Upload a card"
         description="Take a photo of the card or choose a PDF. Check what we read from it, then send it."
       />
-      <SafetyCaution className="mb-6" />
       <UploadFlow
         types={types.filter((t) => t.active && t.holder === "technician" && ownCardSets.has(t.fieldSet))}
         technicians={[]}
