@@ -5,19 +5,20 @@ import { sameCredentialScope } from "./same-credential-scope.ts";
 
 export interface PreviousVersionDto {
   id: number;
-  state: "verified" | "superseded";
+  state: "verified" | "superseded" | "lapsed";
   decidedAt: string | null;
   changes: FieldChange[];
 }
 
 /**
- * The version the reviewer measures this one against: the latest verified (or since superseded) version of the same
- * policy or card submitted before it. A first upload has none.
+ * The version the reviewer measures this one against: the latest verified version of the same policy or card submitted
+ * before it, whether still in force, since replaced or since lapsed (a renewal often arrives after the lapse). A first
+ * upload has none.
  */
 export async function previousVerifiedVersion(row: Credential): Promise<PreviousVersionDto | null> {
   const previous = await Credential.findOne({
     where: {
-      ...sameCredentialScope(row, ["verified", "superseded"]),
+      ...sameCredentialScope(row, ["verified", "superseded", "lapsed"]),
       submittedAt: { [Op.lte]: row.submittedAt },
     },
     order: [

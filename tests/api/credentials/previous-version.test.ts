@@ -3,6 +3,7 @@ import { buildTestApp, type TestApp } from "../../support/test-app.ts";
 import { buildProvider, signedInAgent } from "../../support/build-provider.ts";
 import { certificateFields, submitLiabilityCertificate } from "../../support/submit-credential.ts";
 import { buildCertificatePdf } from "../../fixtures/build-certificate-pdf.ts";
+import { Credential } from "../../../server/credentials/model.ts";
 
 let t: TestApp;
 beforeAll(() => {
@@ -43,6 +44,20 @@ describe("the reviewer's comparison with the previous verified version", () => {
     const occurrence = changes.find((c) => c.path === "limits.eachOccurrence");
     expect(occurrence?.after).toBe(2_000_000);
     expect(changes.map((c) => c.path)).not.toContain("policyNumber");
+  });
+
+  it("compares a renewal that arrives after the lapse with the lapsed policy", async () => {
+    const provider = await buildProvider(t.app);
+    const { agent: reviewer } = await signedInAgent(t.app, "platform", "reviewer");
+    const lapsed = await submitLiabilityCertificate(provider.admin, 87);
+    await reviewer.post(`/api/credentials/${lapsed.id}/verify`).send({});
+    await Credential.update({ state: "lapsed" }, { where: { id: lapsed.id } });
+    const renewal = await submitLiabilityCertificate(provider.admin, 88);
+
+    const seen = await reviewer.get(`/api/credentials/${renewal.id}`);
+
+    expect(seen.body.previousVersion).toMatchObject({ id: lapsed.id, state: "lapsed" });
+    expect(seen.body.previousVersion.changes.map((c: { path: string }) => c.path)).toContain("policyNumber");
   });
 
   it("compares only within the same holder: another company's verified policy is never the previous version", async () => {

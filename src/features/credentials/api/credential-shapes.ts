@@ -75,7 +75,7 @@ const fieldValueSchema = z.union([z.string(), z.number(), z.boolean()]).nullable
 
 export const previousVersionSchema = z.object({
   id: z.number(),
-  state: z.enum(["verified", "superseded"]),
+  state: z.enum(["verified", "superseded", "lapsed"]),
   decidedAt: z.string().nullable(),
   changes: z.array(z.object({ path: z.string(), before: fieldValueSchema, after: fieldValueSchema })),
 });

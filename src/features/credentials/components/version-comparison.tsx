@@ -41,7 +41,12 @@ export function VersionComparison({ previous, fieldSet, typeCode }: VersionCompa
       </h2>
       <p className="mt-1 text-sm text-ink-700">
         The version verified {when}
-        {previous.state === "superseded" ? " (since replaced)" : ""}.{" "}
+        {previous.state === "superseded"
+          ? " (since replaced)"
+          : previous.state === "lapsed"
+            ? " (since lapsed)"
+            : ""}
+        .{" "}
         {previous.changes.length === 0
           ? "No field differs."
           : `${previous.changes.length} field${previous.changes.length === 1 ? "" : "s"} changed.`}

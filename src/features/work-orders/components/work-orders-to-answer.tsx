@@ -27,9 +27,9 @@ export function WorkOrdersToAnswer({ workOrders }: { workOrders: WorkOrderSummar
             >
               Work order #{w.id}
             </Link>
-            <span className="text-sm text-ink-700">· {urgencyWords[w.urgency]}</span>
           </div>
-          <p className="mt-1 text-sm text-ink-900 break-words">
+          <p className="mt-1 text-sm font-medium text-ink-900">{urgencyWords[w.urgency]}</p>
+          <p className="text-sm text-ink-900 break-words">
             {w.shopName}, {w.siteName} · {w.technicianName}
           </p>
           <p className="text-sm text-ink-700">Raised {formatDateTime(w.createdAt)}</p>
