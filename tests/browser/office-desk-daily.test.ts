@@ -17,6 +17,7 @@ const BUYER = "buyer@marlow-precision.test";
 const OFFICE = "office@kestrel-ridge.test";
 const REVIEWER = "reviewer@clearbench.test";
 const TECHNICIAN = "Tobias Wren";
+const TECHNICIAN_SIGN_IN = "tobias@kestrel-ridge.test";
 const SAFETY = "Cleared is about documents, not safety or skill";
 const CERTIFICATE = "About certificates of insurance";
 // A desktop office screen and a 390 px phone (a common phone width: common practice).
@@ -189,6 +190,25 @@ describe("the service office's daily desk", () => {
       expect(await office.getByRole("img", { name: /^Page 2 of/ }).count()).toBe(0);
       await screenshot(office, `office-desk-${name}-4-upload-preview`);
       await fitsAndIsClean(office, viewport);
+    }, 240_000);
+
+    it(`keeps a technician's own card in their name, with the name on the card started from it (${name})`, async () => {
+      const card = path.join(process.env.TMPDIR ?? "/tmp", `own-card-${name}.pdf`);
+      await writeFile(card, await buildSizedPdf([[612, 792]]));
+      const technician = await signedInPage(TECHNICIAN_SIGN_IN, viewport);
+
+      await technician.goto(`${server.url}/technician/upload-card`);
+      await technician.getByLabel("Type of document").selectOption({ label: "First aid / CPR / AED" });
+      await technician.getByLabel("Choose a file").setInputFiles(card);
+      await technician.getByRole("form", { name: "Check the fields" }).waitFor();
+
+      await expect(technician.getByTestId("upload-holder").textContent()).resolves.toBe(
+        `Held by ${TECHNICIAN}`,
+      );
+      await expect(technician.getByLabel("Name on the card").inputValue()).resolves.toBe(TECHNICIAN);
+      await technician.getByRole("img", { name: /^Page 1 of own-card/ }).waitFor();
+      await screenshot(technician, `office-desk-${name}-6-own-card`);
+      await fitsAndIsClean(technician, viewport);
     }, 240_000);
 
     it(`offers ready-made return reasons and shows what changed since the verified policy (${name})`, async () => {
