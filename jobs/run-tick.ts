@@ -1,8 +1,7 @@
 import { db } from "../server/db/sequelize.ts";
 import { log } from "../server/log.ts";
 import { User } from "../server/accounts/index.ts";
-import { Notification } from "../server/notices/index.ts";
-import { enqueueMail } from "../server/mail/index.ts";
+import { tellPerson } from "../server/notices/index.ts";
 import {
   claimDueRetry,
   claimTick,
@@ -61,16 +60,13 @@ async function notifyAdmins(
   const admins = await User.findAll({ where: { role: "admin", active: true }, attributes: ["id", "email"] });
   await db().transaction(async (transaction) => {
     for (const admin of admins) {
-      await Notification.create(
-        { userId: admin.id, kind: "job_failed", title, body, link, noticeId: null },
-        { transaction },
-      );
-      await enqueueMail(
+      await tellPerson(
         {
           to: admin.email,
           subject: `Clearbench: ${title}`,
           text: `${body}\n\nJob runs: ${deps.publicUrl}${link}\n`,
         },
+        { kind: "job_failed", title, body, link },
         transaction,
       );
     }

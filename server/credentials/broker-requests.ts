@@ -12,12 +12,13 @@ import { AppError, notFound } from "../http/app-error.ts";
 import { db } from "../db/sequelize.ts";
 import { recordAudit } from "../audit/index.ts";
 import { enqueueMail } from "../mail/index.ts";
+import { tellPerson } from "../notices/index.ts";
 import type { FileStorage } from "../storage/index.ts";
 import { Credential, CredentialType } from "./model.ts";
 import { BrokerContact, BrokerUploadRequest } from "./broker-model.ts";
 import { brokerRequestMail, shopCertificateMail } from "./broker-emails.ts";
 import { uploadDocument, type UploadedFile } from "./upload-document.ts";
-import { Company, Notification, User } from "../db/models.ts";
+import { Company, User } from "../db/models.ts";
 
 const DAY_MS = 24 * 60 * 60 * 1000;
 
@@ -314,18 +315,16 @@ export async function tellShopOfVerifiedCertificate(
       User.findAll({ where: { companyId: request.shopCompanyId!, role: "buyer" }, transaction }),
     ]);
     for (const buyer of buyers) {
-      await Notification.create(
+      await tellPerson(
+        shopCertificateMail(buyer.email, company!.name, type!.name, linkBase),
         {
-          userId: buyer.id,
           kind: "broker_certificate_verified",
           title: `${company!.name}: ${type!.name} certificate verified`,
           body: `The certificate naming your shop as certificate holder came from ${company!.name}'s broker and was verified.`,
           link: "/",
-          noticeId: null,
         },
-        { transaction },
+        transaction,
       );
-      await enqueueMail(shopCertificateMail(buyer.email, company!.name, type!.name, linkBase), transaction);
     }
     await request.update({ shopToldAt: new Date() }, { transaction });
   }

@@ -1,8 +1,9 @@
-import { Op, type Transaction } from "sequelize";
+import type { Transaction } from "sequelize";
 import { AppError } from "../http/app-error.ts";
 import { db } from "../db/sequelize.ts";
 import { recordAudit } from "../audit/index.ts";
-import { enqueueMail } from "../mail/outbox.ts";
+import { tellPerson } from "../notices/index.ts";
+import { sameCredentialScope } from "./same-credential-scope.ts";
 import { refreshStandingsForHolder } from "../standing/index.ts";
 import { toDefinition } from "./catalogue.ts";
 import { checkNamedTechnicians, lapseInstantFor, parseFields } from "./field-validation.ts";
@@ -11,7 +12,6 @@ import { toCredentialDto } from "./dto.ts";
 import { tellShopOfVerifiedCertificate } from "./broker-requests.ts";
 import { returnedMail, verifiedMail } from "./credential-emails.ts";
 import { Company, Technician, User } from "../db/models.ts";
-import { sameCredentialKind } from "../../shared/credentials/credential-kind.ts";
 
 const alreadyDecided = () =>
   new AppError("conflict", "This credential was already decided (by another reviewer, or earlier)");
@@ -30,16 +30,8 @@ async function holderName(credential: Credential, transaction: Transaction) {
   return (await Company.findByPk(credential.companyId, { transaction }))?.name ?? "the company";
 }
 
-/** Verified credentials of the same type and holder; `sameCredentialKind` then narrows them to the ones replaced. */
-function supersedeScope(credential: Credential) {
-  return {
-    id: { [Op.ne]: credential.id },
-    typeCode: credential.typeCode,
-    companyId: credential.companyId,
-    technicianId: credential.technicianId,
-    state: "verified",
-  };
-}
+/** Credentials that a newly verified one replaces: same type and holder (and, for builder training, same control). */
+const supersedeScope = (credential: Credential) => sameCredentialScope(credential, ["verified"]);
 
 async function applyFieldEdit(
   reviewer: Express.User,
@@ -109,7 +101,7 @@ export async function verifyCredential(
       transaction,
       lock: transaction.LOCK.UPDATE,
     });
-    for (const old of older.filter((o) => sameCredentialKind(o, row))) {
+    for (const old of older) {
       await old.update({ state: "superseded" }, { transaction });
       await recordAudit(
         {
@@ -128,7 +120,11 @@ export async function verifyCredential(
     const uploader = await User.findByPk(row.submittedBy, { transaction });
     const name = await holderName(row, transaction);
     if (uploader)
-      await enqueueMail(verifiedMail(uploader.email, type!.name, name, `${linkBase}/documents`), transaction);
+      await tellPerson(
+        verifiedMail(uploader.email, type!.name, name, `${linkBase}/documents`),
+        { kind: "credential_verified" },
+        transaction,
+      );
     await tellShopOfVerifiedCertificate(row, linkBase, transaction);
     await refreshStandingsForHolder(
       { companyId: row.companyId, technicianId: row.technicianId },
@@ -163,7 +159,11 @@ export async function returnCredential(reviewer: Express.User, id: number, reaso
     const name = await holderName(row, transaction);
     const link = `${linkBase}/documents/new?type=${row.typeCode}${row.technicianId ? `&technicianId=${row.technicianId}` : ""}`;
     if (uploader)
-      await enqueueMail(returnedMail(uploader.email, type!.name, name, reason, link), transaction);
+      await tellPerson(
+        returnedMail(uploader.email, type!.name, name, reason, link),
+        { kind: "credential_returned" },
+        transaction,
+      );
     await refreshStandingsForHolder(
       { companyId: row.companyId, technicianId: row.technicianId },
       transaction,

@@ -12,6 +12,7 @@ import type { Evidence } from "../../shared/credentials/locate-values.ts";
 import { workStatesOf } from "./work-states.ts";
 import { fieldsForBuyers } from "../../shared/credentials/fields-for-buyers.ts";
 import { Company, Technician, User } from "../db/models.ts";
+import { previousVerifiedVersion, type PreviousVersionDto } from "./previous-version.ts";
 
 /** The caller's credentials: the shared read scope narrowed by the filters, never widened by them. */
 export async function listOwnCredentials(
@@ -45,6 +46,7 @@ export async function findCredential(user: Express.User, id: number) {
       warnings: [],
       sameDocument: [],
       evidence: {},
+      previousVersion: null,
     };
   }
   const events = await auditTrail("credential", id);
@@ -55,7 +57,9 @@ export async function findCredential(user: Express.User, id: number) {
   const actorName = new Map(actors.map((a) => [a.id, a.name]));
   let warnings: { code: string; message: string }[] = [];
   let evidence: Evidence = {};
+  let previousVersion: PreviousVersionDto | null = null;
   if (user.role === "reviewer" || user.role === "admin") {
+    previousVersion = await previousVerifiedVersion(row);
     const [type, company, technician, document] = await Promise.all([
       CredentialType.findByPk(row.typeCode),
       Company.findByPk(row.companyId),
@@ -87,6 +91,7 @@ export async function findCredential(user: Express.User, id: number) {
       after: e.after,
     })),
     warnings,
+    previousVersion,
   };
 }
 

@@ -44,5 +44,12 @@ export function composeMail(content: MailContent): MailDraft {
     ...after.map((p) => `<p><small>${escapeHtml(p)}</small></p>`),
     "<p>Clearbench</p>",
   ].join("\n");
-  return { to: content.to, subject: content.subject, text, html };
+  return {
+    to: content.to,
+    subject: content.subject,
+    text,
+    html,
+    summary: content.paragraphs.join(" "),
+    link: content.next.url,
+  };
 }

@@ -9,6 +9,9 @@ export interface MailDraft {
   subject: string;
   text: string;
   html?: string;
+  /** What happened in a sentence or two, and the mail's one link: what the bell shows of it (server/notices/tell-person.ts). */
+  summary?: string;
+  link?: string;
 }
 
 /** Queues a message in the caller's transaction: if the use case rolls back, no mail goes out. */

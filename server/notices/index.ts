@@ -7,3 +7,4 @@ export {
   type HolderCount,
 } from "./lapse-notices.ts";
 export { renderLapseNotice, formatLapseInstant, type NoticeRecipient } from "./lapse-email.ts";
+export { tellPerson, type BellWords } from "./tell-person.ts";

@@ -6,7 +6,8 @@ import { formatLocalDateTime } from "../../shared/dates/local-time.ts";
 import { isListed } from "../../shared/visibility/technician-visibility.ts";
 import { loadConfig, publicUrl } from "../config.ts";
 import { db } from "../db/sequelize.ts";
-import { composeMail, enqueueMail } from "../mail/index.ts";
+import { composeMail } from "../mail/index.ts";
+import { tellPerson } from "../notices/index.ts";
 import { onStandingsChanged, type ChangedStanding } from "../standing/index.ts";
 
 interface RosteredRow {
@@ -117,20 +118,14 @@ async function deliverAlert(alert: Alert): Promise<boolean> {
       { bind: [alert.shopId], type: QueryTypes.SELECT, transaction },
     );
     for (const buyer of buyers) {
-      await db().query(
-        "INSERT INTO notifications (user_id, kind, title, body, link) VALUES ($1, $2, $3, $4, $5)",
-        {
-          bind: [buyer.id, `roster_${alert.event}`, alert.title.slice(0, 300), alert.body, "/roster"],
-          transaction,
-        },
-      );
-      await enqueueMail(
+      await tellPerson(
         composeMail({
           to: buyer.email,
           subject: alert.title.slice(0, 300),
           paragraphs: [alert.body],
           next: { sentence: alert.next, label: "See your roster", url: rosterUrl() },
         }),
+        { kind: `roster_${alert.event}`, link: "/roster" },
         transaction,
       );
     }

@@ -1,6 +1,5 @@
 import type { Transaction } from "sequelize";
-import { enqueueMail } from "../mail/index.ts";
-import { Notification } from "../notices/index.ts";
+import { tellPerson } from "../notices/index.ts";
 import { select } from "./sql.ts";
 
 export interface News {
@@ -18,24 +17,14 @@ const escapeHtml = (s: string) =>
 
 async function tell(users: { id: number; email: string }[], news: News, transaction: Transaction) {
   for (const user of users) {
-    await Notification.create(
-      {
-        userId: user.id,
-        kind: news.kind,
-        title: news.title,
-        body: news.lines.join("\n"),
-        link: news.link,
-        noticeId: null,
-      },
-      { transaction },
-    );
-    await enqueueMail(
+    await tellPerson(
       {
         to: user.email,
         subject: news.title,
         text: `${news.lines.join("\n\n")}\n\nOpen it: ${news.link}\n\nClearbench`,
         html: `${news.lines.map((l) => `<p>${escapeHtml(l)}</p>`).join("")}<p><a href="${escapeHtml(news.link)}">Open it</a></p>`,
       },
+      { kind: news.kind, body: news.lines.join("\n"), link: news.link },
       transaction,
     );
   }

@@ -5,6 +5,7 @@ import { safeFileName, sniffUpload } from "../credentials/index.ts";
 import { AppError } from "../http/app-error.ts";
 import { contentDisposition } from "../http/file-names.ts";
 import type { FileStorage } from "../storage/index.ts";
+import { makeThumbnail, type Thumbnail } from "./attachment-thumbnail.ts";
 
 export interface UploadedFile {
   path: string;
@@ -18,6 +19,7 @@ export interface CheckedAttachment {
   mime: string;
   sizeBytes: number;
   name: string;
+  thumbnail: Thumbnail | null;
 }
 
 export async function checkAttachment(
@@ -36,6 +38,7 @@ export async function checkAttachment(
     mime,
     sizeBytes: file.size,
     name: safeFileName(file.originalname),
+    thumbnail: await makeThumbnail(bytes, mime),
   };
 }
 

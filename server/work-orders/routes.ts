@@ -18,7 +18,7 @@ import { canListWorkOrders, canRaiseWorkOrders, canSeeWorkOrder } from "./policy
 import { raiseWorkOrder } from "./raise-work-order.ts";
 import { acceptWorkOrder, completeWorkOrder, confirmWorkOrder, declineWorkOrder } from "./move-work-order.ts";
 import { findWorkOrder, listWorkOrders } from "./find-work-orders.ts";
-import { listMessages, postMessage, sendMessageFile } from "./work-order-messages.ts";
+import { listMessages, postMessage, sendMessageFile, sendMessageThumbnail } from "./work-order-messages.ts";
 import { removeUpload } from "./attachment-file.ts";
 import { sendStandingProof } from "./standing-proof.ts";
 import { lapsingWindowOf } from "../../shared/standing/warning-windows.ts";
@@ -148,4 +148,10 @@ workOrderRoutes.get(
   { allow: canSeeWorkOrder, params: messageFileParamsSchema },
   (req, res, { params }) =>
     sendMessageFile(req.user!, params.workOrderId, params.messageId, appStorage(req), res),
+);
+
+workOrderRoutes.get(
+  "/:workOrderId/messages/:messageId/thumbnail",
+  { allow: canSeeWorkOrder, params: messageFileParamsSchema },
+  (req, res, { params }) => sendMessageThumbnail(req.user!, params.workOrderId, params.messageId, res),
 );

@@ -1,7 +1,8 @@
 import type { Transaction } from "sequelize";
 import { Op } from "sequelize";
 import type { WorkOrderSide } from "../../shared/work-orders/schemas.ts";
-import { composeMail, enqueueMail } from "../mail/index.ts";
+import { composeMail } from "../mail/index.ts";
+import { tellPerson } from "../notices/index.ts";
 import { User } from "../accounts/index.ts";
 import type { WorkOrder } from "./model.ts";
 
@@ -39,7 +40,7 @@ export interface WorkOrderNews {
   next: { sentence: string; label: string };
 }
 
-/** Queues one e-mail per person of the other side, in the caller's transaction. */
+/** Queues one e-mail per person of the other side, each also in that person's bell, in the caller's transaction. */
 export async function mailOtherSide(
   workOrder: WorkOrder,
   to: WorkOrderSide,
@@ -49,8 +50,9 @@ export async function mailOtherSide(
 ) {
   const subject = `Work order #${workOrder.id}: ${news.subject}`;
   for (const address of await recipients(workOrder, to, transaction)) {
-    await enqueueMail(
+    await tellPerson(
       composeMail({ to: address, subject, paragraphs: news.lines, next: { ...news.next, url: link } }),
+      { kind: "work_order" },
       transaction,
     );
   }

@@ -9,6 +9,7 @@ import { WorkOrderMessage } from "./model.ts";
 import { loadForSide } from "./find-work-orders.ts";
 import { checkAttachment, sendAttachment, type UploadedFile } from "./attachment-file.ts";
 import { mailOtherSide } from "./work-order-emails.ts";
+import { saveThumbnail, thumbnailJpeg, thumbnailSizes } from "./attachment-thumbnail.ts";
 import type { Response } from "express";
 
 async function toMessageDtos(rows: WorkOrderMessage[]): Promise<WorkOrderMessageDto[]> {
@@ -24,8 +25,11 @@ async function toMessageDtos(rows: WorkOrderMessage[]): Promise<WorkOrderMessage
   ]);
   const author = new Map(authors.map((a) => [a.id, a.name]));
   const document = new Map(documents.map((d) => [d.id, d]));
+  const thumbnails = await thumbnailSizes(documents.map((d) => d.id));
   return rows.map((r) => {
     const d = r.documentId ? document.get(r.documentId) : undefined;
+    const thumbnail = d ? thumbnails.get(d.id) : undefined;
+    const fileUrl = `/api/work-orders/${r.workOrderId}/messages/${r.id}/file`;
     return {
       id: r.id,
       workOrderId: r.workOrderId,
@@ -38,7 +42,10 @@ async function toMessageDtos(rows: WorkOrderMessage[]): Promise<WorkOrderMessage
             name: d.originalName,
             mime: d.mime,
             sizeBytes: d.sizeBytes,
-            url: `/api/work-orders/${r.workOrderId}/messages/${r.id}/file`,
+            url: fileUrl,
+            thumbnail: thumbnail
+              ? { url: `/api/work-orders/${r.workOrderId}/messages/${r.id}/thumbnail`, ...thumbnail }
+              : null,
           }
         : null,
       createdAt: r.createdAt.toISOString(),
@@ -98,6 +105,7 @@ export async function postMessage(
           transaction,
         );
         documentId = document.id;
+        if (attachment.thumbnail) await saveThumbnail(document.id, attachment.thumbnail, transaction);
       }
       const row = await WorkOrderMessage.create(
         { workOrderId, authorUserId: user.id, side, body, documentId },
@@ -155,4 +163,25 @@ export async function sendMessageFile(
     subjectId: document.id,
   });
   await sendAttachment(res, storage, document);
+}
+
+/**
+ * The thumbnail of an image attachment, to the same two parties as the file. Not audited as a download: it is shown
+ * each time the thread is read, and it is a reduced copy made by the server, not the file itself.
+ */
+export async function sendMessageThumbnail(
+  user: Express.User,
+  workOrderId: number,
+  messageId: number,
+  res: Response,
+) {
+  await loadForSide(user, workOrderId);
+  const message = await WorkOrderMessage.findOne({ where: { id: messageId, workOrderId } });
+  const jpeg = message?.documentId ? await thumbnailJpeg(message.documentId) : null;
+  if (!jpeg) throw new AppError("not_found", "That thumbnail was not found");
+  res.setHeader("Content-Type", "image/jpeg");
+  res.setHeader("X-Content-Type-Options", "nosniff");
+  res.setHeader("Content-Security-Policy", "default-src 'none'; sandbox");
+  res.setHeader("Cache-Control", "private, max-age=3600");
+  res.end(jpeg);
 }

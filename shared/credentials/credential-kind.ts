@@ -11,6 +11,9 @@ export interface CredentialKindFields {
 // Builder training is held per builder and control family: a card on one control does not stand in for another.
 const KIND_FIELDS: Record<string, readonly string[]> = { oem_training: ["builder", "controlFamily"] };
 
+/** The fields beyond type and holder that tell two credentials of this type apart. */
+export const kindFieldsOf = (typeCode: string): readonly string[] => KIND_FIELDS[typeCode] ?? [];
+
 /**
  * Same type, same holder (and, for builder training, same builder and control family). A newly verified credential
  * replaces the verified one of the same kind, and a newer upload of the same kind answers a returned or lapsed one.
@@ -18,7 +21,7 @@ const KIND_FIELDS: Record<string, readonly string[]> = { oem_training: ["builder
 export function sameCredentialKind(a: CredentialKindFields, b: CredentialKindFields): boolean {
   if (a.typeCode !== b.typeCode || a.companyId !== b.companyId || a.technicianId !== b.technicianId)
     return false;
-  return (KIND_FIELDS[a.typeCode] ?? []).every((key) => a.fields[key] === b.fields[key]);
+  return kindFieldsOf(a.typeCode).every((key) => a.fields[key] === b.fields[key]);
 }
 
 export interface FollowUpCandidate extends CredentialKindFields {

@@ -39,3 +39,10 @@ export const RIGGING_CAUTION =
 
 export const EXEMPTION_CAUTION =
   "An exemption covers only the persons it names, never employees; whether it is accepted is up to the state and the site's insurer or broker (common practice; rules vary by state).";
+
+// The certificate's own wording (ACORD 25 heading, from memory): it neither amends nor extends the policies it lists;
+// additional insured status and waivers come by endorsement (common practice).
+export const INSURANCE_CAUTION_DETAIL = [
+  "It does not amend, extend or alter the coverage of the policies it lists; only the policies themselves do.",
+  "Additional insured status and waiver of subrogation need an endorsement on the policy; a box ticked on the certificate is not one.",
+] as const;

@@ -142,7 +142,15 @@ export interface WorkOrderMessageDto {
   author: { id: number; name: string };
   side: WorkOrderSide;
   body: string;
-  attachment: { documentId: number; name: string; mime: string; sizeBytes: number; url: string } | null;
+  attachment: {
+    documentId: number;
+    name: string;
+    mime: string;
+    sizeBytes: number;
+    url: string;
+    /** A small picture made at upload for an image attachment, with its pixel size so the page does not jump. */
+    thumbnail: { url: string; width: number; height: number } | null;
+  } | null;
   createdAt: string;
 }
 

@@ -105,9 +105,10 @@ describe("a buyer finds a cleared technician and books the job", () => {
     await buyer.getByRole("heading", { level: 1, name: TECHNICIAN }).waitFor();
     await screenshot(buyer, "buyer-books-3-technician");
     await atPhoneWidth(buyer, "buyer-books-3-technician-390");
+    // The safety caution stands where work is decided (raising the work order), not on every page that shows a badge.
     await expect(
-      buyer.getByRole("heading", { name: "Cleared is about documents, not safety or skill" }).count(),
-    ).resolves.toBe(1);
+      buyer.getByRole("complementary", { name: "Cleared is about documents, not safety or skill" }).count(),
+    ).resolves.toBe(0);
 
     await expect(buyer.getByText("Rockford main plant").count()).resolves.toBeGreaterThan(0);
     await expect(
@@ -136,6 +137,11 @@ describe("a buyer finds a cleared technician and books the job", () => {
 
     await buyer.getByRole("link", { name: "Raise a work order" }).click();
     await buyer.getByRole("heading", { level: 1, name: "Raise a work order" }).waitFor();
+    for (const caution of [
+      "Cleared is about documents, not safety or skill",
+      "About certificates of insurance",
+    ])
+      await expect(buyer.getByRole("complementary", { name: caution }).count()).resolves.toBe(1);
     await buyer.getByLabel("Machine", { exact: true }).selectOption({ index: 1 });
     await buyer
       .getByLabel("What is wrong")

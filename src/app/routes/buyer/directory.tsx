@@ -6,11 +6,9 @@ import { CLEARED_MEANS } from "@shared/safety/cautions.ts";
 import { technologyLabels, type MachineTechnology } from "@shared/technicians/schemas.ts";
 import { paths } from "@/config/paths.ts";
 import { Button } from "@/components/ui/button.tsx";
-import { CautionNote } from "@/components/ui/caution-note.tsx";
 import { EmptyState } from "@/components/ui/empty-state.tsx";
 import { FormError } from "@/components/ui/form-error.tsx";
 import { PageHeader } from "@/components/ui/page-header.tsx";
-import { SafetyCaution } from "@/components/ui/safety-caution.tsx";
 import { StatusKey } from "@/components/ui/status-key.tsx";
 import { SelectField } from "@/components/ui/select-field.tsx";
 import { Spinner } from "@/components/ui/spinner.tsx";
@@ -192,8 +190,6 @@ function Search({ params }: { params: URLSearchParams }) {
         siteName={sites.find((s) => String(s.id) === params.get("siteId"))?.name ?? null}
       />
       <StatusKey statuses={["cleared", "lapsing"]} />
-      <SafetyCaution />
-      <CautionNote />
     </div>
   );
 }

@@ -4,6 +4,7 @@ import { Link, useNavigate, useSearchParams, type LoaderFunctionArgs } from "rea
 import { technologyLabels, type MachineTechnology } from "@shared/technicians/schemas.ts";
 import { hrefs } from "@/config/paths.ts";
 import { CautionNote } from "@/components/ui/caution-note.tsx";
+import { SafetyCaution } from "@/components/ui/safety-caution.tsx";
 import { PageHeader } from "@/components/ui/page-header.tsx";
 import { directoryTechnicianQuery } from "@/features/directory/api/get-directory-technician.ts";
 import { requirementSetsQuery } from "@/features/requirement-sets/api/get-requirement-sets.ts";
@@ -84,6 +85,7 @@ export function Component() {
         serverError={raise.error}
         onSubmit={(input) => raise.mutate(input, { onSuccess: (wo) => navigate(hrefs.workOrder(wo.id)) })}
       />
+      <SafetyCaution className="mt-6" />
       <CautionNote className="mt-6" />
     </>
   );

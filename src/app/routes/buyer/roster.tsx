@@ -5,7 +5,6 @@ import { buttonStyles } from "@/components/ui/button-styles.ts";
 import { EmptyState } from "@/components/ui/empty-state.tsx";
 import { FormError } from "@/components/ui/form-error.tsx";
 import { PageHeader } from "@/components/ui/page-header.tsx";
-import { SafetyCaution } from "@/components/ui/safety-caution.tsx";
 import { StatusKey } from "@/components/ui/status-key.tsx";
 import { CalendarFeedPanel } from "@/features/calendar/components/calendar-feed-panel.tsx";
 import { rosterQuery } from "@/features/roster/api/get-roster.ts";
@@ -36,7 +35,6 @@ export function Component() {
           )
         }
       />
-      <SafetyCaution className="mb-6" />
       <FormError error={remove.error} />
       {rows.length === 0 ? (
         <EmptyState

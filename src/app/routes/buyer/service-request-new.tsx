@@ -10,7 +10,6 @@ import {
 } from "@shared/service-requests/schemas.ts";
 import { hrefs } from "@/config/paths.ts";
 import { Button } from "@/components/ui/button.tsx";
-import { CautionNote } from "@/components/ui/caution-note.tsx";
 import { FormError } from "@/components/ui/form-error.tsx";
 import { PageHeader } from "@/components/ui/page-header.tsx";
 import { SelectField } from "@/components/ui/select-field.tsx";
@@ -267,7 +266,6 @@ export function Component() {
           Send request
         </Button>
       </form>
-      <CautionNote className="mt-6" />
     </>
   );
 }

@@ -8,7 +8,6 @@ import { Button } from "@/components/ui/button.tsx";
 import { buttonStyles } from "@/components/ui/button-styles.ts";
 import { CautionNote } from "@/components/ui/caution-note.tsx";
 import { PageHeader } from "@/components/ui/page-header.tsx";
-import { SafetyCaution } from "@/components/ui/safety-caution.tsx";
 import { StatusKey } from "@/components/ui/status-key.tsx";
 import {
   directoryTechnicianQuery,
@@ -142,7 +141,6 @@ export function Component() {
             base
           </span>
         </div>
-        <SafetyCaution />
         <CautionNote />
         <StatusKey statuses={["cleared", "lapsing", "not_cleared", "met", "unmet"]} />
         <Section title="Standing against your requirement sets">

@@ -3,7 +3,6 @@ import { useSuspenseQuery } from "@tanstack/react-query";
 import { Link } from "react-router-dom";
 import { hrefs } from "@/config/paths.ts";
 import { buttonStyles } from "@/components/ui/button-styles.ts";
-import { CautionNote } from "@/components/ui/caution-note.tsx";
 import { PageHeader } from "@/components/ui/page-header.tsx";
 import type { Credential } from "@/features/credentials/api/credential-shapes.ts";
 import { credentialsQuery } from "@/features/credentials/api/get-credentials.ts";
@@ -15,13 +14,18 @@ import { CalendarFeedPanel } from "@/features/calendar/components/calendar-feed-
 import { LapsingTable } from "@/features/credentials/components/lapsing-table.tsx";
 import { LapsedList } from "@/features/credentials/components/lapsed-list.tsx";
 import { ReturnedList } from "@/features/credentials/components/returned-list.tsx";
+import { workOrdersQuery } from "@/features/work-orders/api/get-work-orders.ts";
+import { WorkOrdersToAnswer } from "@/features/work-orders/components/work-orders-to-answer.tsx";
 import { queryClient } from "@/lib/query-client.ts";
 
 const HORIZON_DAYS = OFFICE_LOOK_AHEAD_DAYS;
 const HORIZON_WEEKS = Math.ceil(HORIZON_DAYS / 7);
 
 export async function loader() {
-  await queryClient.ensureQueryData(credentialsQuery());
+  await Promise.all([
+    queryClient.ensureQueryData(credentialsQuery()),
+    queryClient.ensureQueryData(workOrdersQuery("requested")),
+  ]);
   return null;
 }
 
@@ -30,6 +34,7 @@ const renewHref = (c: Credential) =>
 
 export function Component() {
   const { data: credentials } = useSuspenseQuery(credentialsQuery());
+  const { data: toAnswer } = useSuspenseQuery(workOrdersQuery("requested"));
   const [now] = useState(() => new Date());
   const lapsing = useMemo(() => lapsingSoon(credentials, now, HORIZON_DAYS), [credentials, now]);
   const weeks = useMemo(() => byWeek(lapsing, now, HORIZON_WEEKS), [lapsing, now]);
@@ -42,20 +47,26 @@ export function Component() {
     () => credentials.filter((c) => c.state === "lapsed" && c.awaitsHolder),
     [credentials],
   );
-  const showsInsurance = credentials.some((c) => c.category === "insurance");
 
   return (
     <>
       <PageHeader
         title="Dashboard"
-        description="What has lapsed, what lapses next and what was returned to you, soonest first."
+        description="What waits for the office: work orders to answer, what has lapsed, what lapses next and what was returned to you."
         actions={
           <Link to={hrefs.documentNew()} className={buttonStyles("primary")}>
             Upload a document
           </Link>
         }
       />
-      <div className="grid items-start gap-8 lg:grid-cols-[minmax(0,1fr)_22rem]">
+      <section aria-labelledby="to-answer-heading" className="mb-8 space-y-3">
+        <h2 id="to-answer-heading" className="text-lg font-semibold text-ink-900">
+          Work orders to answer{" "}
+          <span className="text-base font-normal text-ink-700">({toAnswer.length})</span>
+        </h2>
+        <WorkOrdersToAnswer workOrders={toAnswer} />
+      </section>
+      <div className="grid grid-cols-[minmax(0,1fr)] items-start gap-8 lg:grid-cols-[minmax(0,1fr)_22rem]">
         <section aria-labelledby="lapsing-heading" className="space-y-4">
           <h2 id="lapsing-heading" className="text-lg font-semibold text-ink-900">
             What lapses next{" "}
@@ -80,7 +91,6 @@ export function Component() {
           <CalendarFeedPanel description="Your company's lapse dates and warning dates in your own calendar program, updated on its own." />
         </div>
       </div>
-      {showsInsurance && <CautionNote className="mt-8" />}
     </>
   );
 }

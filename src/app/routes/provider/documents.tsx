@@ -3,7 +3,6 @@ import { Link, useLocation, useSearchParams } from "react-router-dom";
 import { credentialStates } from "@shared/credentials/schemas.ts";
 import { hrefs } from "@/config/paths.ts";
 import { buttonStyles } from "@/components/ui/button-styles.ts";
-import { CautionNote } from "@/components/ui/caution-note.tsx";
 import { EmptyState } from "@/components/ui/empty-state.tsx";
 import { PageHeader } from "@/components/ui/page-header.tsx";
 import { StatusKey } from "@/components/ui/status-key.tsx";
@@ -90,7 +89,6 @@ export function Component() {
       <BrokerPanel
         coverages={credentials.filter((c) => c.holder === "company" && c.category === "insurance")}
       />
-      <CautionNote className="mt-6" />
     </>
   );
 }

@@ -3,7 +3,6 @@ import { useSuspenseQuery } from "@tanstack/react-query";
 import { Link, useParams, type LoaderFunctionArgs } from "react-router-dom";
 import { hrefs } from "@/config/paths.ts";
 import { Button } from "@/components/ui/button.tsx";
-import { CautionNote } from "@/components/ui/caution-note.tsx";
 import { FormError } from "@/components/ui/form-error.tsx";
 import { PageHeader } from "@/components/ui/page-header.tsx";
 import { TextField } from "@/components/ui/text-field.tsx";
@@ -127,7 +126,6 @@ export function Component() {
           readOnly={!can("message")}
         />
       </div>
-      <CautionNote className="mt-6" />
     </>
   );
 }

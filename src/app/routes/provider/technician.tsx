@@ -6,7 +6,6 @@ import { Button } from "@/components/ui/button.tsx";
 import { buttonStyles } from "@/components/ui/button-styles.ts";
 import { EmptyState } from "@/components/ui/empty-state.tsx";
 import { PageHeader } from "@/components/ui/page-header.tsx";
-import { SafetyCaution } from "@/components/ui/safety-caution.tsx";
 import { StatusKey, technicianPageStatuses } from "@/components/ui/status-key.tsx";
 import type { Credential } from "@/features/credentials/api/credential-shapes.ts";
 import { credentialsQuery } from "@/features/credentials/api/get-credentials.ts";
@@ -101,7 +100,6 @@ export function Component() {
       )}
       <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,1fr)_20rem]">
         <div className="space-y-8">
-          <SafetyCaution />
           <StandingSection technicianId={id} loadingLabel="Loading standing" />
           <section aria-labelledby="cards-heading">
             <h2 id="cards-heading" className="mb-3 text-lg font-semibold text-ink-900">

@@ -13,6 +13,7 @@ import { AuditTrail } from "@/features/credentials/components/audit-trail.tsx";
 import { DocumentViewer } from "@/features/credentials/components/document-viewer.tsx";
 import { ReviewPanel } from "@/features/credentials/components/review-panel.tsx";
 import { SameDocumentList } from "@/features/credentials/components/same-document-list.tsx";
+import { VersionComparison } from "@/features/credentials/components/version-comparison.tsx";
 import { formatDateTime } from "@/lib/format-date-time.ts";
 import { queryClient } from "@/lib/query-client.ts";
 
@@ -80,6 +81,11 @@ export function Component() {
         <div className="space-y-5">
           {credential.category === "insurance" && <CautionNote />}
           <SameDocumentList current={credential.id} rows={credential.sameDocument} />
+          <VersionComparison
+            previous={credential.previousVersion}
+            fieldSet={fieldSet}
+            typeCode={credential.typeCode}
+          />
           <ReviewPanel
             key={credential.id}
             credential={credential}

@@ -4,7 +4,6 @@ import { hrefs, paths } from "@/config/paths.ts";
 import { buttonStyles } from "@/components/ui/button-styles.ts";
 import { EmptyState } from "@/components/ui/empty-state.tsx";
 import { PageHeader } from "@/components/ui/page-header.tsx";
-import { SafetyCaution } from "@/components/ui/safety-caution.tsx";
 import { StatusKey, technicianPageStatuses } from "@/components/ui/status-key.tsx";
 import type { Credential } from "@/features/credentials/api/credential-shapes.ts";
 import { credentialsQuery } from "@/features/credentials/api/get-credentials.ts";
@@ -46,7 +45,6 @@ export function Component() {
         </p>
       )}
       <div className="space-y-8">
-        <SafetyCaution />
         <StandingSection
           technicianId={technicianId}
           loadingLabel="Loading your standing"

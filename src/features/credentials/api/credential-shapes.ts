@@ -72,6 +72,16 @@ export const sameDocumentRowSchema = z.object({
   state: z.enum(credentialStates),
 });
 
+const fieldValueSchema = z.union([z.string(), z.number(), z.boolean()]).nullable();
+
+export const previousVersionSchema = z.object({
+  id: z.number(),
+  state: z.enum(["verified", "superseded", "lapsed"]),
+  decidedAt: z.string().nullable(),
+  changes: z.array(z.object({ path: z.string(), before: fieldValueSchema, after: fieldValueSchema })),
+});
+export type PreviousVersion = z.infer<typeof previousVersionSchema>;
+
 export const credentialDetailSchema = credentialSchema.extend({
   audit: z.array(auditEventSchema).default([]),
   warnings: z.array(reviewerWarningSchema).default([]),
@@ -79,6 +89,8 @@ export const credentialDetailSchema = credentialSchema.extend({
   sameDocument: z.array(sameDocumentRowSchema).default([]),
   /** Where each field was read on the page and how sure the reader was. */
   evidence: evidenceSchema,
+  /** The verified version of the same policy or card before this one, and what changed since (reviewers only). */
+  previousVersion: previousVersionSchema.nullable().default(null),
 });
 export type CredentialDetail = z.infer<typeof credentialDetailSchema>;
 

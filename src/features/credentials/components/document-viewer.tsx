@@ -11,6 +11,8 @@ type DocumentViewerProps = {
   mime: string;
   /** The box of the value in focus on the review form, as fractions of its page. */
   highlight?: PageBox | undefined;
+  /** Pages to show at most: the upload page's preview needs only the first. */
+  pageLimit?: number;
 };
 
 /**
@@ -18,7 +20,13 @@ type DocumentViewerProps = {
  * itself is never embedded, so a hostile file cannot run in the reviewer's browser. Pages load one after
  * another until the server answers 404 for the next one.
  */
-export function DocumentViewer({ documentId, name, mime, highlight }: DocumentViewerProps) {
+export function DocumentViewer({
+  documentId,
+  name,
+  mime,
+  highlight,
+  pageLimit = MAX_PAGES,
+}: DocumentViewerProps) {
   const [shown, setShown] = useState(1);
   const marked = useRef<HTMLDivElement>(null);
   useEffect(() => {
@@ -54,7 +62,7 @@ export function DocumentViewer({ documentId, name, mime, highlight }: DocumentVi
                   alt={`Page ${page} of ${name}`}
                   className="h-auto w-full rounded-md border border-ink-100 bg-white"
                   onLoad={() => {
-                    if (page === shown && page < MAX_PAGES) setShown(page + 1);
+                    if (page === shown && page < Math.min(pageLimit, MAX_PAGES)) setShown(page + 1);
                   }}
                   onError={() => setEnded((current) => (current === null || page < current ? page : current))}
                 />

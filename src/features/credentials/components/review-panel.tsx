@@ -1,7 +1,6 @@
 import { useMemo, useRef, useState } from "react";
 import type { FieldSet } from "@shared/credentials/credential-fields.ts";
 import { LOW_CONFIDENCE } from "@shared/credentials/locate-values.ts";
-import { returnCredentialSchema } from "@shared/credentials/schemas.ts";
 import { isApiError } from "@/lib/api-client.ts";
 import { Button } from "@/components/ui/button.tsx";
 import { FormError } from "@/components/ui/form-error.tsx";
@@ -14,6 +13,7 @@ import { CredentialFieldsForm } from "./credential-fields-form.tsx";
 import { fieldDefinitionsFor } from "./field-definitions.ts";
 import { credentialFieldErrorsOf, labelsOf, problemsAsError } from "./field-problems.ts";
 import { parseFieldValues, toFieldValues, type FieldValues } from "./field-values.ts";
+import { ReturnReasonForm } from "./return-reason-form.tsx";
 import { ReviewerWarnings } from "./reviewer-warnings.tsx";
 import { useReviewShortcuts } from "./use-review-shortcuts.ts";
 
@@ -49,8 +49,7 @@ export function ReviewPanel({ credential, fieldSet, onDecided, onFocusField }: R
   );
   const [problems, setProblems] = useState<Record<string, string>>({});
   const [summary, setSummary] = useState<unknown>(null);
-  const [reason, setReason] = useState("");
-  const [reasonProblem, setReasonProblem] = useState<string | null>(null);
+  const [conflict, setConflict] = useState(false);
   const reasonRef = useRef<HTMLTextAreaElement>(null);
   const verify = useVerifyCredential();
   const giveBack = useReturnCredential();
@@ -71,8 +70,9 @@ export function ReviewPanel({ credential, fieldSet, onDecided, onFocusField }: R
   };
 
   const showError = (error: unknown) => {
-    if (isApiError(error) && error.status === 409) {
-      setSummary(new Error(conflictWords));
+    if (isApiError(error) && error.code === "conflict") {
+      setConflict(true);
+      setSummary(null);
       return;
     }
     const mapped = credentialFieldErrorsOf(error);
@@ -90,20 +90,10 @@ export function ReviewPanel({ credential, fieldSet, onDecided, onFocusField }: R
     verify.mutate({ id: credential.id, fields }, { onSuccess: onDecided, onError: showError });
   };
 
-  const decideReturn = () => {
+  const decideReturn = (reason: string) => {
     if (!open || busy) return;
     setSummary(null);
-    const parsed = returnCredentialSchema.safeParse({ reason });
-    if (!parsed.success) {
-      setReasonProblem(parsed.error.issues[0]?.message ?? "Say what the uploader must fix");
-      reasonRef.current?.focus();
-      return;
-    }
-    setReasonProblem(null);
-    giveBack.mutate(
-      { id: credential.id, reason: parsed.data.reason },
-      { onSuccess: onDecided, onError: showError },
-    );
+    giveBack.mutate({ id: credential.id, reason }, { onSuccess: onDecided, onError: showError });
   };
 
   const saveFields = () => {
@@ -113,8 +103,6 @@ export function ReviewPanel({ credential, fieldSet, onDecided, onFocusField }: R
   };
 
   useReviewShortcuts(open, { verify: decideVerify, focusReturn: () => reasonRef.current?.focus() });
-
-  const conflict = summary instanceof Error && summary.message === conflictWords;
 
   return (
     <div className="space-y-5">
@@ -197,44 +185,13 @@ export function ReviewPanel({ credential, fieldSet, onDecided, onFocusField }: R
           >
             Verify
           </Button>
-          <div className="space-y-1 border-t border-ink-100 pt-4">
-            <label htmlFor="return-reason" className="block text-sm font-medium text-ink-900">
-              Reason for returning
-            </label>
-            <p id="return-reason-hint" className="text-sm text-ink-700">
-              The uploader sees this; say what to fix.
-            </p>
-            <textarea
-              id="return-reason"
-              ref={reasonRef}
-              value={reason}
-              onChange={(event) => setReason(event.currentTarget.value)}
-              rows={3}
-              required
-              aria-invalid={reasonProblem ? true : undefined}
-              aria-describedby={["return-reason-hint", reasonProblem ? "return-reason-error" : ""]
-                .filter(Boolean)
-                .join(" ")}
-              className={`block w-full rounded-md border bg-white px-3 py-2 text-base text-ink-900 focus-visible:outline-2 focus-visible:outline-offset-1 focus-visible:outline-ink-700 ${
-                reasonProblem ? "border-red-700" : "border-ink-300"
-              }`}
-            />
-            {reasonProblem && (
-              <p id="return-reason-error" className="text-sm font-medium text-red-800">
-                {reasonProblem}
-              </p>
-            )}
-            <Button
-              variant="danger"
-              onClick={decideReturn}
-              pending={giveBack.isPending}
-              pendingLabel="Returning…"
-              disabled={busy}
-              className="mt-2"
-            >
-              Return to uploader
-            </Button>
-          </div>
+          <ReturnReasonForm
+            fieldSet={fieldSet}
+            disabled={busy}
+            pending={giveBack.isPending}
+            reasonRef={reasonRef}
+            onReturn={decideReturn}
+          />
         </section>
       )}
     </div>

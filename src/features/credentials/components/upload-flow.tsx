@@ -13,9 +13,11 @@ import { ExtractionNote } from "./extraction-note.tsx";
 import { fieldDefinitionsFor } from "./field-definitions.ts";
 import { credentialFieldErrorsOf, labelsOf, problemsAsError } from "./field-problems.ts";
 import { parseFieldValues, toFieldValues, type FieldValues } from "./field-values.ts";
+import { DocumentViewer } from "./document-viewer.tsx";
 import { FileDrop } from "./file-drop.tsx";
 import { ReviewerWarnings } from "./reviewer-warnings.tsx";
 import { UploadProgress } from "./upload-progress.tsx";
+import { formatFileSize } from "@/lib/format-file-size.ts";
 import { TypeCaution } from "./type-caution.tsx";
 import { NamedTechniciansChecklist } from "./named-technicians-checklist.tsx";
 import { MAX_UPLOAD_SIZE_WORDS } from "@shared/credentials/upload-limits.ts";
@@ -71,6 +73,14 @@ export function UploadFlow({
   const holderId = fixedTechnicianId ?? (technicianId ? Number(technicianId) : undefined);
   const definitions = useMemo(() => (type ? fieldDefinitionsFor(type.fieldSet, type.code) : []), [type]);
   const found = useMemo(() => new Set(uploaded?.extraction.found ?? []), [uploaded]);
+  const holderName = heldByTechnician ? technicians.find((t) => t.id === holderId)?.name : undefined;
+
+  // A card names its holder: when the reader found no name, the chosen technician's own stands in, to be checked.
+  const prefilled = (fields: Record<string, unknown>): FieldValues => {
+    const read = toFieldValues(definitions, fields);
+    const takesName = definitions.some((d) => d.path === "holderName");
+    return takesName && holderName && !read.holderName ? { ...read, holderName } : read;
+  };
 
   const sendFile = (file: File) => {
     const missing: Record<string, string> = {};
@@ -89,7 +99,7 @@ export function UploadFlow({
       {
         onSuccess: (result) => {
           setUploaded(result);
-          setValues(toFieldValues(definitions, result.extraction.fields));
+          setValues(prefilled(result.extraction.fields));
           setProblems({});
           setSummary(null);
         },
@@ -196,8 +206,11 @@ export function UploadFlow({
     <div className="flex flex-wrap items-center justify-between gap-3 rounded-lg border border-ink-100 bg-white px-4 py-3">
       <div className="min-w-0 text-sm">
         <p className="font-semibold text-ink-900">{type?.name}</p>
+        <p className="text-ink-900" data-testid="upload-holder">
+          {heldByTechnician ? `Held by ${holderName ?? "the technician"}` : "Held by your company"}
+        </p>
         <p className="truncate text-ink-700">
-          File: {uploaded.document.name} ({Math.max(1, Math.round(uploaded.document.sizeBytes / 1024))} kB)
+          File: {uploaded.document.name} ({formatFileSize(uploaded.document.sizeBytes)})
         </p>
       </div>
       <Button variant="secondary" onClick={startOver} disabled={submit.isPending}>
@@ -206,52 +219,70 @@ export function UploadFlow({
     </div>
   );
 
+  const preview = (
+    <div className="lg:sticky lg:top-4">
+      <DocumentViewer
+        key={uploaded.document.id}
+        documentId={uploaded.document.id}
+        name={uploaded.document.name}
+        mime={uploaded.document.mime}
+        pageLimit={1}
+      />
+    </div>
+  );
+
   const certificate = uploaded.certificate;
   if (certificate && certificate.coverages.length > 0) {
     return (
-      <div className="max-w-3xl space-y-5">
-        {fileBar}
-        <CertificateCoveragesForm
-          uploaded={{ ...uploaded, certificate }}
-          onSubmitted={(credentials) =>
-            onCoveragesSubmitted ? onCoveragesSubmitted(credentials) : onSubmitted(credentials[0]!)
-          }
-        />
+      <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,2fr)_minmax(0,3fr)]">
+        {preview}
+        <div className="min-w-0 space-y-5">
+          {fileBar}
+          <CertificateCoveragesForm
+            uploaded={{ ...uploaded, certificate }}
+            onSubmitted={(credentials) =>
+              onCoveragesSubmitted ? onCoveragesSubmitted(credentials) : onSubmitted(credentials[0]!)
+            }
+          />
+        </div>
       </div>
     );
   }
 
   return (
-    <form noValidate onSubmit={send} className="max-w-3xl space-y-5" aria-label="Check the fields">
-      {fileBar}
-      <ExtractionNote
-        extraction={uploaded.extraction}
-        readCount={definitions.filter((d) => found.has(d.path)).length}
-      />
-      <ReviewerWarnings warnings={uploaded.warnings} title="The reviewer will look at these" />
-      <FormError error={summary} labels={labelsOf(definitions)} />
-      <CredentialFieldsForm
-        definitions={definitions}
-        values={values}
-        onChange={(path, value) => setValues((current) => ({ ...current, [path]: value }))}
-        errors={problems}
-        found={found}
-        disabled={submit.isPending}
-      />
-      {type?.fieldSet === "exemption" && fixedTechnicianId === undefined && (
-        <NamedTechniciansChecklist
-          technicians={technicians}
-          checked={namedTechnicianIds}
-          onChange={setNamedTechnicianIds}
-          error={problems.technicianIds}
+    <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,2fr)_minmax(0,3fr)]">
+      {preview}
+      <form noValidate onSubmit={send} className="min-w-0 space-y-5" aria-label="Check the fields">
+        {fileBar}
+        <ExtractionNote
+          extraction={uploaded.extraction}
+          readCount={definitions.filter((d) => found.has(d.path)).length}
+        />
+        <ReviewerWarnings warnings={uploaded.warnings} title="The reviewer will look at these" />
+        <FormError error={summary} labels={labelsOf(definitions)} />
+        <CredentialFieldsForm
+          definitions={definitions}
+          values={values}
+          onChange={(path, value) => setValues((current) => ({ ...current, [path]: value }))}
+          errors={problems}
+          found={found}
           disabled={submit.isPending}
         />
-      )}
-      <div className="flex flex-wrap gap-3 border-t border-ink-100 pt-4">
-        <Button type="submit" pending={submit.isPending} pendingLabel="Sending…" className="min-h-12">
-          Send for verification
-        </Button>
-      </div>
-    </form>
+        {type?.fieldSet === "exemption" && fixedTechnicianId === undefined && (
+          <NamedTechniciansChecklist
+            technicians={technicians}
+            checked={namedTechnicianIds}
+            onChange={setNamedTechnicianIds}
+            error={problems.technicianIds}
+            disabled={submit.isPending}
+          />
+        )}
+        <div className="flex flex-wrap gap-3 border-t border-ink-100 pt-4">
+          <Button type="submit" pending={submit.isPending} pendingLabel="Sending…" className="min-h-12">
+            Send for verification
+          </Button>
+        </div>
+      </form>
+    </div>
   );
 }

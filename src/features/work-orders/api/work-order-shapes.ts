@@ -119,6 +119,10 @@ export const workOrderMessageSchema = z.object({
       mime: z.string(),
       sizeBytes: z.number(),
       url: z.string(),
+      thumbnail: z
+        .object({ url: z.string(), width: z.number(), height: z.number() })
+        .nullable()
+        .default(null),
     })
     .nullable(),
   createdAt: z.string(),

@@ -4,6 +4,7 @@ import { Button } from "@/components/ui/button.tsx";
 import { FormError } from "@/components/ui/form-error.tsx";
 import { fieldErrorsOf } from "@/lib/field-errors.ts";
 import { formatDateTime } from "@/lib/format-date-time.ts";
+import { formatFileSize } from "@/lib/format-file-size.ts";
 import { usePostWorkOrderMessage } from "../api/post-work-order-message.ts";
 import type { WorkOrderMessage } from "../api/work-order-shapes.ts";
 import { DOCUMENT_ACCEPT } from "@shared/credentials/upload-limits.ts";
@@ -15,8 +16,38 @@ type MessageThreadProps = {
   sideNames: { shop: string; service: string };
 };
 
-const sizeWords = (bytes: number) =>
-  bytes < 1024 * 1024 ? `${Math.ceil(bytes / 1024)} KB` : `${(bytes / 1024 / 1024).toFixed(1)} MB`;
+type Attachment = NonNullable<WorkOrderMessage["attachment"]>;
+
+const kindWords = (mime: string) =>
+  mime === "application/pdf" ? "PDF" : mime.startsWith("image/") ? "Image" : "File";
+
+/** The file of a message: its picture when the server made one (sized up front), its name, kind and size. */
+function AttachmentLink({ attachment }: { attachment: Attachment }) {
+  const size = formatFileSize(attachment.sizeBytes);
+  return (
+    <a
+      href={attachment.url}
+      className="mt-2 flex max-w-full min-h-11 items-center gap-3 text-sm text-ink-900 underline underline-offset-2"
+    >
+      {attachment.thumbnail && (
+        <img
+          src={attachment.thumbnail.url}
+          width={attachment.thumbnail.width}
+          height={attachment.thumbnail.height}
+          alt=""
+          loading="lazy"
+          className="h-auto max-h-32 w-auto max-w-32 shrink-0 rounded border border-ink-100 bg-white object-contain"
+        />
+      )}
+      <span className="min-w-0 break-words">
+        {attachment.name}{" "}
+        <span className="text-ink-700 no-underline">
+          ({kindWords(attachment.mime)}, {size})
+        </span>
+      </span>
+    </a>
+  );
+}
 
 /** Append-only: messages are never edited or removed, each stamped with who and when. */
 export function MessageThread({ workOrderId, messages, sideNames }: MessageThreadProps) {
@@ -66,14 +97,7 @@ export function MessageThread({ workOrderId, messages, sideNames }: MessageThrea
                 <time dateTime={m.createdAt}>{formatDateTime(m.createdAt)}</time>
               </p>
               <p className="mt-1 whitespace-pre-line text-ink-900">{m.body}</p>
-              {m.attachment && (
-                <a
-                  href={m.attachment.url}
-                  className="mt-1 inline-flex min-h-11 items-center text-sm text-ink-900 underline underline-offset-2"
-                >
-                  {m.attachment.name} ({sizeWords(m.attachment.sizeBytes)})
-                </a>
-              )}
+              {m.attachment && <AttachmentLink attachment={m.attachment} />}
             </li>
           ))}
         </ol>
