@@ -18,6 +18,9 @@ export class Site extends Model<InferAttributes<Site>, InferCreationAttributes<S
   declare timeZone: string;
   declare latitude: number;
   declare longitude: number;
+  declare contactName: CreationOptional<string | null>;
+  declare contactPhone: CreationOptional<string | null>;
+  declare safetyInductionNote: CreationOptional<string | null>;
   declare active: CreationOptional<boolean>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -52,6 +55,9 @@ export function initSiteModels(sequelize: Sequelize) {
       timeZone: { type: DataTypes.STRING(64), allowNull: false },
       latitude: { type: DataTypes.DOUBLE, allowNull: false },
       longitude: { type: DataTypes.DOUBLE, allowNull: false },
+      contactName: { type: DataTypes.STRING(120), allowNull: true },
+      contactPhone: { type: DataTypes.STRING(40), allowNull: true },
+      safetyInductionNote: { type: DataTypes.TEXT, allowNull: true },
       active: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,

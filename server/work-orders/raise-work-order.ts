@@ -80,7 +80,7 @@ export async function raiseWorkOrderWithin(
   warningDays: number,
   link: (id: number) => string,
   transaction: Transaction,
-  options: { mailServiceSide?: boolean } = {},
+  options: { mailServiceSide?: boolean; copiedFromId?: number } = {},
 ) {
   const now = new Date();
   checkPreferredDates(input.preferredDates, now);
@@ -110,6 +110,13 @@ export async function raiseWorkOrderWithin(
       problem: input.problem,
       urgency: input.urgency,
       preferredDates: input.preferredDates,
+      // Left out: the site's own contact and induction note, as the site's page records them.
+      siteContactName: input.siteContactName ?? site.contact_name,
+      siteContactPhone: input.siteContactPhone ?? site.contact_phone,
+      poNumber: input.poNumber ?? null,
+      notToExceedCents: input.notToExceedCents ?? null,
+      safetyInductionNote: input.safetyInductionNote ?? site.safety_induction_note,
+      copiedFromId: options.copiedFromId ?? null,
       createdBy: buyer.id,
     },
     { transaction },

@@ -3,6 +3,7 @@ import { Op } from "sequelize";
 import type { WorkOrderSide } from "../../shared/work-orders/schemas.ts";
 import { composeMail, enqueueMail } from "../mail/index.ts";
 import { User } from "../accounts/index.ts";
+import { Notification } from "../notices/index.ts";
 import type { WorkOrder } from "./model.ts";
 
 /** The people of one side: the buyer who raised it, or the service company's admins and the technician. */
@@ -10,18 +11,17 @@ async function recipients(
   workOrder: WorkOrder,
   side: WorkOrderSide,
   transaction: Transaction,
-): Promise<string[]> {
+): Promise<{ id: number; email: string }[]> {
   if (side === "shop") {
     const author = await User.findOne({ where: { id: workOrder.createdBy, active: true }, transaction });
-    if (author) return [author.email];
+    if (author) return [author];
     // The author has left: the shop's other buyers pick the work order up.
-    const buyers = await User.findAll({
+    return User.findAll({
       where: { companyId: workOrder.shopCompanyId, role: "buyer", active: true },
       transaction,
     });
-    return buyers.map((u) => u.email);
   }
-  const users = await User.findAll({
+  return User.findAll({
     where: {
       companyId: workOrder.serviceCompanyId,
       active: true,
@@ -29,7 +29,6 @@ async function recipients(
     },
     transaction,
   });
-  return users.map((u) => u.email);
 }
 
 export interface WorkOrderNews {
@@ -37,6 +36,10 @@ export interface WorkOrderNews {
   lines: string[];
   /** What the reader should do now, in one sentence, and the words of the link that does it. */
   next: { sentence: string; label: string };
+  /** Lines after the link, in small print (cautions). */
+  after?: string[];
+  /** Also put it in each reader's bell under this kind ("work_order.cancelled"), for news that changes their plans. */
+  bell?: string;
 }
 
 /** Queues one e-mail per person of the other side, in the caller's transaction. */
@@ -48,10 +51,29 @@ export async function mailOtherSide(
   transaction: Transaction,
 ) {
   const subject = `Work order #${workOrder.id}: ${news.subject}`;
-  for (const address of await recipients(workOrder, to, transaction)) {
+  for (const user of await recipients(workOrder, to, transaction)) {
     await enqueueMail(
-      composeMail({ to: address, subject, paragraphs: news.lines, next: { ...news.next, url: link } }),
+      composeMail({
+        to: user.email,
+        subject,
+        paragraphs: news.lines,
+        next: { ...news.next, url: link },
+        ...(news.after ? { after: news.after } : {}),
+      }),
       transaction,
     );
+    if (news.bell) {
+      await Notification.create(
+        {
+          userId: user.id,
+          kind: news.bell,
+          title: subject,
+          body: news.lines.join("\n"),
+          link,
+          noticeId: null,
+        },
+        { transaction },
+      );
+    }
   }
 }
