@@ -7,7 +7,15 @@
 export const standingStatuses = ["cleared", "lapsing", "not_cleared", "not_checked"] as const;
 export const requirementStatuses = ["met", "lapsing", "unmet"] as const;
 export const credentialStatuses = ["submitted", "returned", "verified", "superseded", "lapsed"] as const;
-export const workOrderStatuses = ["requested", "accepted", "declined", "completed", "confirmed"] as const;
+export const workOrderStatuses = [
+  "requested",
+  "accepted",
+  "declined",
+  "completed",
+  "disputed",
+  "confirmed",
+  "cancelled",
+] as const;
 
 export type StatusMeaning =
   | (typeof standingStatuses)[number]
@@ -258,6 +266,35 @@ export const statusMarks: Record<StatusMeaning, StatusMark> = {
     tone: GREEN,
     shape: "filled circle with a tick",
     elements: [{ tag: "circle", attrs: { cx: 8, cy: 8, r: 6.5, fill: "tone" } }, check],
+  },
+  disputed: {
+    word: "Disputed",
+    explains: "The shop does not accept the completion yet; the two sides settle it in the messages",
+    tone: BROWN,
+    shape: "triangle with a bar",
+    elements: [
+      {
+        tag: "path",
+        attrs: { d: "M8 2 14.25 13.5H1.75z", fill: "none", stroke: "tone", "stroke-width": 1.5 },
+      },
+      { tag: "path", attrs: { d: "M8 6.25v4", fill: "none", stroke: "tone", "stroke-width": 1.75 } },
+    ],
+  },
+  cancelled: {
+    word: "Cancelled",
+    explains: "The shop called the job off; nobody should travel for it",
+    tone: RED,
+    shape: "square with a cross",
+    elements: [
+      {
+        tag: "rect",
+        attrs: { x: 2.5, y: 2.5, width: 11, height: 11, fill: "none", stroke: "tone", "stroke-width": 1.5 },
+      },
+      {
+        tag: "path",
+        attrs: { d: "m5.25 5.25 5.5 5.5m0-5.5-5.5 5.5", fill: "none", stroke: "tone", "stroke-width": 1.5 },
+      },
+    ],
   },
 };
 

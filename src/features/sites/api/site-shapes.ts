@@ -13,6 +13,10 @@ export const siteSchema = z.object({
   timeZone: z.string(),
   latitude: z.number(),
   longitude: z.number(),
+  // Older answers (and other shapes) may leave these out.
+  contactName: z.string().nullable().optional(),
+  contactPhone: z.string().nullable().optional(),
+  safetyInductionNote: z.string().nullable().optional(),
   active: z.boolean(),
   equipmentCount: z.number(),
 });

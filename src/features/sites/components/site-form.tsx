@@ -3,6 +3,7 @@ import { siteInputSchema, type SiteInput } from "@shared/sites/schemas.ts";
 import { Button } from "@/components/ui/button.tsx";
 import { FormError } from "@/components/ui/form-error.tsx";
 import { SelectField, type SelectOption } from "@/components/ui/select-field.tsx";
+import { TextAreaField } from "@/components/ui/text-area-field.tsx";
 import { TextField } from "@/components/ui/text-field.tsx";
 import { fieldErrorsOf } from "@/lib/field-errors.ts";
 import { readForm } from "@/lib/read-form.ts";
@@ -14,6 +15,9 @@ const labels = {
   addressLine: "Street address",
   postalCode: "ZIP code",
   timeZone: "Time zone",
+  contactName: "On-site contact",
+  contactPhone: "Contact's phone",
+  safetyInductionNote: "Site safety induction",
 };
 
 type SiteFormProps = {
@@ -100,7 +104,31 @@ export function SiteForm({ site, timeZoneOptions, pending, serverError, onSubmit
           hint={suggested ? `Suggested for this ZIP code: ${suggested}` : undefined}
           error={fields.timeZone}
         />
+        <TextField
+          label={labels.contactName}
+          name="contactName"
+          defaultValue={site?.contactName ?? ""}
+          hint="Optional; new work orders start from it"
+          error={fields.contactName}
+        />
+        <TextField
+          label={labels.contactPhone}
+          name="contactPhone"
+          type="tel"
+          autoComplete="tel"
+          defaultValue={site?.contactPhone ?? ""}
+          hint="Optional"
+          error={fields.contactPhone}
+        />
       </div>
+      <TextAreaField
+        label={labels.safetyInductionNote}
+        name="safetyInductionNote"
+        rows={2}
+        defaultValue={site?.safetyInductionNote ?? ""}
+        hint="Optional: what a visiting technician must do before work (gate, induction, PPE). Sent only once a job is accepted."
+        error={fields.safetyInductionNote}
+      />
       <div className="flex flex-wrap gap-2">
         <Button type="submit" pending={pending} pendingLabel="Saving">
           {site ? "Save site" : "Add site"}
