@@ -86,7 +86,11 @@ function snapshotFor(side: WorkOrderSide, snapshot: StandingSnapshot | null): St
 }
 
 /** Where to go and whom to ask for, with what the shop will pay; the caller decides whether this side may read it. */
-export function onSiteDetailsOf(r: WorkOrder, addressLine: string, postalCode: string | null): OnSiteDetailsDto {
+export function onSiteDetailsOf(
+  r: WorkOrder,
+  addressLine: string,
+  postalCode: string | null,
+): OnSiteDetailsDto {
   const place = postalCode ? lookupPostalCode(postalCode) : undefined;
   return {
     addressLine,

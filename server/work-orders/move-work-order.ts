@@ -317,7 +317,8 @@ export function disputeWorkOrder(actor: Express.User, id: number, reason: string
         subject: "disputed",
         lines: [`${who.name} disputed the completion of work order #${row.id}.`, `Reason: ${reason}`],
         next: {
-          sentence: "Answer in the work order's messages; record the completion again once the open point is done.",
+          sentence:
+            "Answer in the work order's messages; record the completion again once the open point is done.",
           label: "Open the work order",
         },
         bell: "work_order.disputed",

@@ -82,12 +82,7 @@ workOrderRoutes.post(
   "/:workOrderId/decline",
   { allow: canSeeWorkOrder, params: workOrderParamsSchema, body: declineWorkOrderSchema },
   async (req, _res, { params, body }) => {
-    const dto = await declineWorkOrder(
-      req.user!,
-      params.workOrderId,
-      body,
-      linkTo(req)(params.workOrderId),
-    );
+    const dto = await declineWorkOrder(req.user!, params.workOrderId, body, linkTo(req)(params.workOrderId));
     kickOutbox(req.app.locals);
     return dto;
   },

@@ -22,7 +22,10 @@ export async function sendAgain(
   const { row: original, side } = await loadForSide(buyer, id);
   if (side !== "shop") throw new AppError("forbidden", "Only the shop that raised it may send the job on");
   if (!canSendAgain(original.status, side))
-    throw new AppError("conflict", `This work order is ${original.status}; only a declined job can be sent on`);
+    throw new AppError(
+      "conflict",
+      `This work order is ${original.status}; only a declined job can be sent on`,
+    );
   const today = new Date().toISOString().slice(0, 10);
   const copy: RaiseWorkOrder = {
     technicianId: input.technicianId,

@@ -37,7 +37,11 @@ async function one<T extends object>(
 }
 
 export const findSite = (id: number, t?: Transaction) =>
-  one<SiteRow>("SELECT id, company_id, name, contact_name, contact_phone, safety_induction_note FROM sites WHERE id = $1", id, t);
+  one<SiteRow>(
+    "SELECT id, company_id, name, contact_name, contact_phone, safety_induction_note FROM sites WHERE id = $1",
+    id,
+    t,
+  );
 export const findEquipment = (id: number, t?: Transaction) =>
   one<EquipmentRow>("SELECT id, site_id, technology FROM equipment WHERE id = $1", id, t);
 export const findRequirementSet = (id: number, t?: Transaction) =>

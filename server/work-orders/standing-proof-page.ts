@@ -71,7 +71,9 @@ function jobSheet(subject: ProofSubject): string {
       : []),
     ...subject.onSite,
   ]
-    .map(([label, value]) => `<tr><th scope="row">${escapeHtml(label)}</th><td>${escapeHtml(value)}</td></tr>`)
+    .map(
+      ([label, value]) => `<tr><th scope="row">${escapeHtml(label)}</th><td>${escapeHtml(value)}</td></tr>`,
+    )
     .join("");
   return `<section><h2>On site</h2><table><tbody>${rows}</tbody></table></section>`;
 }

@@ -37,7 +37,10 @@ export const MAX_NOT_TO_EXCEED_CENTS = 1_000_000_000;
 export const phoneSchema = singleLineText()
   .trim()
   .max(40)
-  .regex(/^\+?[0-9(][0-9 ().-]{5,30}[0-9](\s*(x|ext\.?)\s*[0-9]{1,6})?$/i, "Enter a phone number, e.g. (312) 555-0142");
+  .regex(
+    /^\+?[0-9(][0-9 ().-]{5,30}[0-9](\s*(x|ext\.?)\s*[0-9]{1,6})?$/i,
+    "Enter a phone number, e.g. (312) 555-0142",
+  );
 
 /**
  * What the technician needs to show up: where, whom to ask for, what the shop will pay up to and on which PO, and the

@@ -3,7 +3,12 @@ import request from "supertest";
 import { QueryTypes } from "sequelize";
 import { buildTestApp, sequelize, type TestApp } from "../../support/test-app.ts";
 import { buildProvider, signedInAgent } from "../../support/build-provider.ts";
-import { buildWorkOrderWorld, raiseBody, workOrderAt, acceptBody } from "../../fixtures/build-work-order-world.ts";
+import {
+  buildWorkOrderWorld,
+  raiseBody,
+  workOrderAt,
+  acceptBody,
+} from "../../fixtures/build-work-order-world.ts";
 import { WorkOrder } from "../../../server/work-orders/model.ts";
 
 let t: TestApp;

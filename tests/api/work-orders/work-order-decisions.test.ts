@@ -45,7 +45,10 @@ describe("the buyer cancels", () => {
         where: { subjectType: "work_order", subjectId: id, action: "work_order.cancelled" },
       });
       const mails = await OutboxMessage.findAll({
-        where: { toAddress: world.provider.techUser.email, subject: `Work order #${id}: cancelled by the shop` },
+        where: {
+          toAddress: world.provider.techUser.email,
+          subject: `Work order #${id}: cancelled by the shop`,
+        },
       });
       const bell = await bellOf(world.provider.techUser.id);
       const adminBell = await bellOf(world.provider.adminUser.id);

@@ -220,7 +220,9 @@ export function RaiseWorkOrderForm(props: RaiseWorkOrderFormProps) {
         </div>
       </fieldset>
       <fieldset key={siteId} className="space-y-3">
-        <legend className="mb-1 text-sm font-medium text-ink-900">On site (sent once the job is accepted)</legend>
+        <legend className="mb-1 text-sm font-medium text-ink-900">
+          On site (sent once the job is accepted)
+        </legend>
         <p className="text-sm text-ink-700">
           The technician sees these, with the site&apos;s street address, only after accepting. Contact and
           induction start from the site.
