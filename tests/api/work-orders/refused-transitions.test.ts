@@ -36,6 +36,28 @@ describe("transitions refused for the wrong status", () => {
     },
   );
 
+  it.each([
+    ["cancel", "confirmed", "shop", { reason: "Too late to call it off" }],
+    ["cancel", "declined", "shop", { reason: "Too late to call it off" }],
+    ["cancel", "cancelled", "shop", { reason: "Cancelling it twice" }],
+    ["confirm", "cancelled", "shop", {}],
+    ["dispute", "confirmed", "shop", { reason: "Changed our minds later" }],
+    ["accept", "cancelled", "admin", acceptBody()],
+    ["complete", "cancelled", "admin", { hoursWorked: 2, travelHours: 1 }],
+  ] as const)(
+    "answers 409 to %s on a %s work order (the state machine in shared/work-orders) and leaves it unchanged",
+    async (action, status, who, body) => {
+      const world = await buildWorkOrderWorld(t.app);
+      const id = await workOrderAt(world, status);
+      const agent = who === "shop" ? world.shop.agent : world.provider.admin;
+
+      const res = await agent.post(`/api/work-orders/${id}/${action}`).send(body);
+
+      expect(res.status).toBe(409);
+      expect((await WorkOrder.findByPk(id))!.status).toBe(status);
+    },
+  );
+
   it("answers 409 to confirming a work order that is not completed yet", async () => {
     const world = await buildWorkOrderWorld(t.app);
     const id = await workOrderAt(world, "accepted");
