@@ -120,6 +120,13 @@ export function WorkOrderActions({ workOrder }: { workOrder: WorkOrder }) {
         Next step
       </h2>
       <FormError error={problem} labels={labels} plainWords={plainWords} />
+      {workOrder.status === "disputed" && (
+        <p className="text-sm text-ink-700">
+          {workOrder.yourSide === "shop"
+            ? "You disputed this completion. Confirm once the open point is settled; the rating waits until then."
+            : "The shop disputed this completion. Settle it in the messages, then record the completion again."}
+        </p>
+      )}
       {actions.includes("confirm") && <CompletionSummary workOrder={workOrder} />}
       {open === null && (
         <div className="flex flex-wrap gap-2">
