@@ -18,6 +18,8 @@ export function toSiteDto(site: Site, equipmentCount: number): SiteDto {
     contactName: site.contactName ?? null,
     contactPhone: site.contactPhone ?? null,
     safetyInductionNote: site.safetyInductionNote ?? null,
+    defaultPoNumber: site.defaultPoNumber ?? null,
+    defaultNotToExceedCents: site.defaultNotToExceedCents ?? null,
     active: site.active,
     equipmentCount,
     createdAt: site.createdAt.toISOString(),

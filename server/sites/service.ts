@@ -78,6 +78,8 @@ const siteDefaults = (input: SiteInput) =>
       contactName: orNull(input.contactName),
       contactPhone: orNull(input.contactPhone),
       safetyInductionNote: orNull(input.safetyInductionNote),
+      defaultPoNumber: orNull(input.defaultPoNumber),
+      defaultNotToExceedCents: input.defaultNotToExceedCents,
     }).filter(([, v]) => v !== undefined),
   );
 

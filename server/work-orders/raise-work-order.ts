@@ -110,11 +110,11 @@ export async function raiseWorkOrderWithin(
       problem: input.problem,
       urgency: input.urgency,
       preferredDates: input.preferredDates,
-      // Left out: the site's own contact and induction note, as the site's page records them.
+      // Left out: the site's own contact, induction note, PO and cap, as the site's page records them.
       siteContactName: input.siteContactName ?? site.contact_name,
       siteContactPhone: input.siteContactPhone ?? site.contact_phone,
-      poNumber: input.poNumber ?? null,
-      notToExceedCents: input.notToExceedCents ?? null,
+      poNumber: input.poNumber ?? site.default_po_number,
+      notToExceedCents: input.notToExceedCents ?? site.default_not_to_exceed_cents,
       safetyInductionNote: input.safetyInductionNote ?? site.safety_induction_note,
       copiedFromId: options.copiedFromId ?? null,
       createdBy: buyer.id,

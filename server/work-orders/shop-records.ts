@@ -9,6 +9,8 @@ export interface SiteRow {
   contact_name: string | null;
   contact_phone: string | null;
   safety_induction_note: string | null;
+  default_po_number: string | null;
+  default_not_to_exceed_cents: number | null;
 }
 export interface EquipmentRow {
   id: number;
@@ -38,7 +40,7 @@ async function one<T extends object>(
 
 export const findSite = (id: number, t?: Transaction) =>
   one<SiteRow>(
-    "SELECT id, company_id, name, contact_name, contact_phone, safety_induction_note FROM sites WHERE id = $1",
+    "SELECT id, company_id, name, contact_name, contact_phone, safety_induction_note, default_po_number, default_not_to_exceed_cents FROM sites WHERE id = $1",
     id,
     t,
   );

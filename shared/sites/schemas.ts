@@ -3,7 +3,7 @@ import { multiLineText, singleLineText } from "../api/text.ts";
 import { isoDateSchema } from "../credentials/credential-fields.ts";
 import { postalCodeSchema, timeZoneSchema } from "../accounts/schemas.ts";
 import { idParam } from "../credentials/schemas.ts";
-import { phoneSchema } from "../work-orders/schemas.ts";
+import { onSiteDetailsInputSchema, phoneSchema } from "../work-orders/schemas.ts";
 import { machineTechnologies, type MachineTechnology } from "../technicians/schemas.ts";
 
 export const siteParamsSchema = z.object({ siteId: idParam });
@@ -20,6 +20,8 @@ export const siteInputSchema = z.object({
   contactName: singleLineText().trim().max(120).nullable().optional(),
   contactPhone: phoneSchema.or(z.literal("")).nullable().optional(),
   safetyInductionNote: multiLineText().trim().max(2000).nullable().optional(),
+  defaultPoNumber: singleLineText().trim().max(40).nullable().optional(),
+  defaultNotToExceedCents: onSiteDetailsInputSchema.shape.notToExceedCents.nullable(),
 });
 export type SiteInput = z.infer<typeof siteInputSchema>;
 
@@ -79,6 +81,8 @@ export interface SiteDto {
   contactName: string | null;
   contactPhone: string | null;
   safetyInductionNote: string | null;
+  defaultPoNumber: string | null;
+  defaultNotToExceedCents: number | null;
   active: boolean;
   equipmentCount: number;
   createdAt: string;

@@ -7,7 +7,9 @@ export async function up({ sequelize }: MigrationContext) {
     ALTER TABLE sites
       ADD COLUMN contact_name varchar(120) NULL,
       ADD COLUMN contact_phone varchar(40) NULL,
-      ADD COLUMN safety_induction_note text NULL;
+      ADD COLUMN safety_induction_note text NULL,
+      ADD COLUMN default_po_number varchar(40) NULL,
+      ADD COLUMN default_not_to_exceed_cents integer NULL CHECK (default_not_to_exceed_cents > 0);
     ALTER TABLE work_orders
       ADD COLUMN site_contact_name varchar(120) NULL,
       ADD COLUMN site_contact_phone varchar(40) NULL,
@@ -22,6 +24,7 @@ export async function down({ sequelize }: MigrationContext) {
   await sequelize.query(`
     ALTER TABLE work_orders DROP COLUMN site_contact_name, DROP COLUMN site_contact_phone, DROP COLUMN po_number,
       DROP COLUMN not_to_exceed_cents, DROP COLUMN safety_induction_note;
-    ALTER TABLE sites DROP COLUMN contact_name, DROP COLUMN contact_phone, DROP COLUMN safety_induction_note;
+    ALTER TABLE sites DROP COLUMN contact_name, DROP COLUMN contact_phone, DROP COLUMN safety_induction_note,
+      DROP COLUMN default_po_number, DROP COLUMN default_not_to_exceed_cents;
   `);
 }

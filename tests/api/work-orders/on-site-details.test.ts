@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { Op } from "sequelize";
-import { buildTestApp, sequelize, type TestApp } from "../../support/test-app.ts";
+import { buildTestApp, type TestApp } from "../../support/test-app.ts";
 import {
   acceptBody,
   buildWorkOrderWorld,
@@ -116,12 +116,20 @@ describe("what the technician needs to show up", () => {
     expect(proof.text).toContain("Marisol Okafor");
   });
 
-  it("starts the contact and induction note from the site when the buyer leaves them out", async () => {
+  it("starts the contact, induction note, PO and cap from the site when the buyer leaves them out", async () => {
     const world = await buildWorkOrderWorld(t.app);
-    await sequelize().query(
-      "UPDATE sites SET contact_name = 'Teodor Lindqvist', contact_phone = '815-555-0199', safety_induction_note = 'Steel-toe boots and glasses past the yellow line.' WHERE id = $1",
-      { bind: [world.siteId] },
-    );
+    const saved = await world.shop.agent.put(`/api/sites/${world.siteId}`).send({
+      name: "Bellwether Works, Plant 2",
+      addressLine: "400 Foundry Row",
+      postalCode: "60601",
+      contactName: "Teodor Lindqvist",
+      contactPhone: "815-555-0199",
+      safetyInductionNote: "Steel-toe boots and glasses past the yellow line.",
+      defaultPoNumber: "PO-SITE-9",
+      defaultNotToExceedCents: 150_000,
+    });
+    expect(saved.status).toBe(200);
+    expect(saved.body).toMatchObject({ defaultPoNumber: "PO-SITE-9", defaultNotToExceedCents: 150_000 });
     const id = await raised(world, { poNumber: "PO-7" });
 
     const res = await world.shop.agent.get(`/api/work-orders/${id}`);
@@ -130,8 +138,9 @@ describe("what the technician needs to show up", () => {
       siteContactName: "Teodor Lindqvist",
       siteContactPhone: "815-555-0199",
       safetyInductionNote: "Steel-toe boots and glasses past the yellow line.",
+      // The buyer's own PO wins over the site's; the cap left out comes from the site.
       poNumber: "PO-7",
-      notToExceedCents: null,
+      notToExceedCents: 150_000,
     });
   });
 

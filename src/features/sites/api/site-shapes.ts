@@ -17,6 +17,8 @@ export const siteSchema = z.object({
   contactName: z.string().nullable().optional(),
   contactPhone: z.string().nullable().optional(),
   safetyInductionNote: z.string().nullable().optional(),
+  defaultPoNumber: z.string().nullable().optional(),
+  defaultNotToExceedCents: z.number().nullable().optional(),
   active: z.boolean(),
   equipmentCount: z.number(),
 });

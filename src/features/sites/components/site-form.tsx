@@ -7,6 +7,7 @@ import { TextAreaField } from "@/components/ui/text-area-field.tsx";
 import { TextField } from "@/components/ui/text-field.tsx";
 import { fieldErrorsOf } from "@/lib/field-errors.ts";
 import { readForm } from "@/lib/read-form.ts";
+import { centsToInput, inputToCents } from "@/lib/format-money.ts";
 import { usePostalPlace } from "../api/look-up-postal-code.ts";
 import type { Site } from "../api/site-shapes.ts";
 
@@ -18,6 +19,8 @@ const labels = {
   contactName: "On-site contact",
   contactPhone: "Contact's phone",
   safetyInductionNote: "Site safety induction",
+  defaultPoNumber: "PO number for new work orders",
+  defaultNotToExceedCents: "Not to exceed for new work orders (dollars)",
 };
 
 type SiteFormProps = {
@@ -47,8 +50,12 @@ export function SiteForm({ site, timeZoneOptions, pending, serverError, onSubmit
 
   const submit = (event: FormEvent<HTMLFormElement>) => {
     event.preventDefault();
-    const values = readForm(event.currentTarget);
-    const parsed = siteInputSchema.safeParse({ ...values, timeZone: values.timeZone || undefined });
+    const { defaultNotToExceed, ...values } = readForm(event.currentTarget);
+    const parsed = siteInputSchema.safeParse({
+      ...values,
+      timeZone: values.timeZone || undefined,
+      defaultNotToExceedCents: defaultNotToExceed ? inputToCents(String(defaultNotToExceed)) : null,
+    });
     if (!parsed.success) {
       setInvalid(parsed.error);
       return;
@@ -119,6 +126,21 @@ export function SiteForm({ site, timeZoneOptions, pending, serverError, onSubmit
           defaultValue={site?.contactPhone ?? ""}
           hint="Optional"
           error={fields.contactPhone}
+        />
+        <TextField
+          label={labels.defaultPoNumber}
+          name="defaultPoNumber"
+          defaultValue={site?.defaultPoNumber ?? ""}
+          hint="Optional"
+          error={fields.defaultPoNumber}
+        />
+        <TextField
+          label={labels.defaultNotToExceedCents}
+          name="defaultNotToExceed"
+          inputMode="decimal"
+          defaultValue={centsToInput(site?.defaultNotToExceedCents)}
+          hint="Optional"
+          error={fields.defaultNotToExceedCents}
         />
       </div>
       <TextAreaField

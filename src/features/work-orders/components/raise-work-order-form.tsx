@@ -9,7 +9,7 @@ import { TextAreaField } from "@/components/ui/text-area-field.tsx";
 import { TextField } from "@/components/ui/text-field.tsx";
 import { isApiError } from "@/lib/api-client.ts";
 import { fieldErrorsOf } from "@/lib/field-errors.ts";
-import { inputToCents } from "@/lib/format-money.ts";
+import { centsToInput, inputToCents } from "@/lib/format-money.ts";
 import { preferredDateWindow } from "@shared/work-orders/preferred-dates.ts";
 
 import { urgencyWords } from "./work-order-words.ts";
@@ -22,6 +22,8 @@ export type SiteDefaults = {
   contactName?: string | null | undefined;
   contactPhone?: string | null | undefined;
   safetyInductionNote?: string | null | undefined;
+  defaultPoNumber?: string | null | undefined;
+  defaultNotToExceedCents?: number | null | undefined;
 };
 
 export type MachineChoice = { id: number; label: string; technology: string };
@@ -224,8 +226,8 @@ export function RaiseWorkOrderForm(props: RaiseWorkOrderFormProps) {
           On site (sent once the job is accepted)
         </legend>
         <p className="text-sm text-ink-700">
-          The technician sees these, with the site&apos;s street address, only after accepting. Contact and
-          induction start from the site.
+          The technician sees these, with the site&apos;s street address, only after accepting. Contact,
+          induction, PO and limit start from the site.
         </p>
         <div className="grid gap-4 sm:grid-cols-2">
           <TextField
@@ -241,11 +243,18 @@ export function RaiseWorkOrderForm(props: RaiseWorkOrderFormProps) {
             defaultValue={siteDefaults?.contactPhone ?? ""}
             error={errors.siteContactPhone}
           />
-          <TextField label={labels.poNumber} name="poNumber" hint="Optional" error={errors.poNumber} />
+          <TextField
+            label={labels.poNumber}
+            name="poNumber"
+            hint="Optional"
+            defaultValue={siteDefaults?.defaultPoNumber ?? ""}
+            error={errors.poNumber}
+          />
           <TextField
             label={labels.notToExceedCents}
             name="notToExceed"
             inputMode="decimal"
+            defaultValue={centsToInput(siteDefaults?.defaultNotToExceedCents)}
             hint="Optional; the technician asks before going past it"
             error={errors.notToExceedCents}
           />
