@@ -18,6 +18,11 @@ export class Site extends Model<InferAttributes<Site>, InferCreationAttributes<S
   declare timeZone: string;
   declare latitude: number;
   declare longitude: number;
+  declare contactName: CreationOptional<string | null>;
+  declare contactPhone: CreationOptional<string | null>;
+  declare safetyInductionNote: CreationOptional<string | null>;
+  declare defaultPoNumber: CreationOptional<string | null>;
+  declare defaultNotToExceedCents: CreationOptional<number | null>;
   declare active: CreationOptional<boolean>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -52,6 +57,11 @@ export function initSiteModels(sequelize: Sequelize) {
       timeZone: { type: DataTypes.STRING(64), allowNull: false },
       latitude: { type: DataTypes.DOUBLE, allowNull: false },
       longitude: { type: DataTypes.DOUBLE, allowNull: false },
+      contactName: { type: DataTypes.STRING(120), allowNull: true },
+      contactPhone: { type: DataTypes.STRING(40), allowNull: true },
+      safetyInductionNote: { type: DataTypes.TEXT, allowNull: true },
+      defaultPoNumber: { type: DataTypes.STRING(40), allowNull: true },
+      defaultNotToExceedCents: { type: DataTypes.INTEGER, allowNull: true },
       active: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,

@@ -70,6 +70,19 @@ export async function findSite(siteId: number) {
   return toSiteDto(site, counts.get(site.id) ?? 0);
 }
 
+// Left out = unchanged on an edit; an empty value clears it.
+const orNull = (v: string | null | undefined) => (v === undefined ? undefined : v || null);
+const siteDefaults = (input: SiteInput) =>
+  Object.fromEntries(
+    Object.entries({
+      contactName: orNull(input.contactName),
+      contactPhone: orNull(input.contactPhone),
+      safetyInductionNote: orNull(input.safetyInductionNote),
+      defaultPoNumber: orNull(input.defaultPoNumber),
+      defaultNotToExceedCents: input.defaultNotToExceedCents,
+    }).filter(([, v]) => v !== undefined),
+  );
+
 export async function addSite(actor: Express.User, input: SiteInput) {
   const place = placeOfSite(input.postalCode);
   const site = await db().transaction(async (transaction) => {
@@ -82,6 +95,7 @@ export async function addSite(actor: Express.User, input: SiteInput) {
         timeZone: zoneFor(input, place),
         latitude: place.latitude,
         longitude: place.longitude,
+        ...siteDefaults(input),
       },
       { transaction },
     );
@@ -114,6 +128,7 @@ export async function editSite(actor: Express.User, siteId: number, input: SiteI
         timeZone: zoneFor(input, place),
         latitude: place.latitude,
         longitude: place.longitude,
+        ...siteDefaults(input),
       },
       { transaction },
     );

@@ -1,15 +1,26 @@
 import { QueryTypes } from "sequelize";
-import type { WorkOrderDto, WorkOrderSide, WorkOrderSummaryDto } from "../../shared/work-orders/schemas.ts";
-import { availableActions } from "../../shared/work-orders/work-order-transitions.ts";
+import type {
+  OnSiteDetailsDto,
+  WorkOrderDto,
+  WorkOrderSide,
+  WorkOrderSummaryDto,
+} from "../../shared/work-orders/schemas.ts";
+import {
+  availableActions,
+  canSendAgain,
+  seesOnSiteDetails,
+} from "../../shared/work-orders/work-order-transitions.ts";
 import type { StandingSnapshot } from "../../shared/work-orders/standing-snapshot.ts";
 import { snapshotForBuyer } from "../../shared/visibility/technician-visibility.ts";
 import { db } from "../db/sequelize.ts";
+import { lookupPostalCode } from "../geo/index.ts";
 import type { WorkOrder } from "./model.ts";
 
 interface NamesRow {
   id: number;
   shop_name: string;
   site_name: string;
+  site_address_line: string;
   site_postal_code: string | null;
   site_time_zone: string | null;
   technician_name: string;
@@ -27,7 +38,7 @@ interface NamesRow {
 async function loadNames(ids: number[]): Promise<Map<number, NamesRow>> {
   if (ids.length === 0) return new Map();
   const rows = await db().query<NamesRow>(
-    `SELECT wo.id, shop.name AS shop_name, s.name AS site_name, s.postal_code AS site_postal_code, s.time_zone AS site_time_zone,
+    `SELECT wo.id, shop.name AS shop_name, s.name AS site_name, s.address_line AS site_address_line, s.postal_code AS site_postal_code, s.time_zone AS site_time_zone,
             t.name AS technician_name, svc.name AS service_company_name, rs.name AS requirement_set_name, u.name AS created_by_name,
             e.builder AS e_builder, e.control_family AS e_control_family, e.technology AS e_technology, e.model AS e_model,
             e.serial_number AS e_serial_number
@@ -74,8 +85,40 @@ function snapshotFor(side: WorkOrderSide, snapshot: StandingSnapshot | null): St
   return side === "shop" ? snapshotForBuyer(snapshot) : snapshot;
 }
 
+/** Where to go and whom to ask for, with what the shop will pay; the caller decides whether this side may read it. */
+export function onSiteDetailsOf(
+  r: WorkOrder,
+  addressLine: string,
+  postalCode: string | null,
+): OnSiteDetailsDto {
+  const place = postalCode ? lookupPostalCode(postalCode) : undefined;
+  return {
+    addressLine,
+    city: place?.city ?? null,
+    state: place?.state ?? null,
+    postalCode,
+    siteContactName: r.siteContactName,
+    siteContactPhone: r.siteContactPhone,
+    poNumber: r.poNumber,
+    notToExceedCents: r.notToExceedCents,
+    safetyInductionNote: r.safetyInductionNote,
+  };
+}
+
+/** The copies a shop sent on after a decline; the first service side never learns where the job went. */
+async function copiesOf(id: number): Promise<number[]> {
+  const rows = await db().query<{ id: number }>(
+    "SELECT id FROM work_orders WHERE copied_from_id = $1 ORDER BY id",
+    { bind: [id], type: QueryTypes.SELECT },
+  );
+  return rows.map((row) => row.id);
+}
+
 export async function toWorkOrderDto(r: WorkOrder, side: WorkOrderSide): Promise<WorkOrderDto> {
   const n = (await loadNames([r.id])).get(r.id)!;
+  const onSite = seesOnSiteDetails(side, r.acceptedAt)
+    ? { onSite: onSiteDetailsOf(r, n.site_address_line, n.site_postal_code) }
+    : {};
   return {
     id: r.id,
     status: r.status,
@@ -106,7 +149,15 @@ export async function toWorkOrderDto(r: WorkOrder, side: WorkOrderSide): Promise
     },
     requirementSet:
       r.requirementSetId === null ? null : { id: r.requirementSetId, name: n.requirement_set_name ?? "" },
+    ...onSite,
     declineReason: r.declineReason,
+    proposedDate: r.proposedDate,
+    arrivalAt: iso(r.arrivalAt),
+    cancelReason: r.cancelReason,
+    disputeReason: r.disputeReason,
+    copiedFromId: side === "shop" ? r.copiedFromId : null,
+    copies: side === "shop" ? await copiesOf(r.id) : [],
+    canSendAgain: canSendAgain(r.status, side),
     hoursWorked: hours(r.hoursWorked),
     travelHours: hours(r.travelHours),
     completionNote: r.completionNote,
@@ -121,6 +172,8 @@ export async function toWorkOrderDto(r: WorkOrder, side: WorkOrderSide): Promise
     declinedAt: iso(r.declinedAt),
     completedAt: iso(r.completedAt),
     confirmedAt: iso(r.confirmedAt),
+    cancelledAt: iso(r.cancelledAt),
+    disputedAt: iso(r.disputedAt),
     updatedAt: r.updatedAt.toISOString(),
   };
 }

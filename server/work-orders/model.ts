@@ -22,8 +22,18 @@ export class WorkOrder extends Model<InferAttributes<WorkOrder>, InferCreationAt
   declare problem: string;
   declare urgency: Urgency;
   declare preferredDates: string[];
+  declare siteContactName: CreationOptional<string | null>;
+  declare siteContactPhone: CreationOptional<string | null>;
+  declare poNumber: CreationOptional<string | null>;
+  declare notToExceedCents: CreationOptional<number | null>;
+  declare safetyInductionNote: CreationOptional<string | null>;
   declare status: CreationOptional<WorkOrderStatus>;
   declare declineReason: CreationOptional<string | null>;
+  declare proposedDate: CreationOptional<string | null>;
+  declare arrivalAt: CreationOptional<Date | null>;
+  declare cancelReason: CreationOptional<string | null>;
+  declare disputeReason: CreationOptional<string | null>;
+  declare copiedFromId: CreationOptional<number | null>;
   // numeric columns arrive from pg as text; dto.ts turns them into numbers.
   declare hoursWorked: CreationOptional<string | null>;
   declare travelHours: CreationOptional<string | null>;
@@ -38,6 +48,8 @@ export class WorkOrder extends Model<InferAttributes<WorkOrder>, InferCreationAt
   declare declinedAt: CreationOptional<Date | null>;
   declare completedAt: CreationOptional<Date | null>;
   declare confirmedAt: CreationOptional<Date | null>;
+  declare cancelledAt: CreationOptional<Date | null>;
+  declare disputedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -69,8 +81,18 @@ export function initWorkOrderModels(sequelize: Sequelize) {
       problem: { type: DataTypes.TEXT, allowNull: false },
       urgency: { type: DataTypes.STRING(8), allowNull: false },
       preferredDates: { type: DataTypes.JSONB, allowNull: false },
+      siteContactName: { type: DataTypes.STRING(120), allowNull: true },
+      siteContactPhone: { type: DataTypes.STRING(40), allowNull: true },
+      poNumber: { type: DataTypes.STRING(40), allowNull: true },
+      notToExceedCents: { type: DataTypes.INTEGER, allowNull: true },
+      safetyInductionNote: { type: DataTypes.TEXT, allowNull: true },
       status: { type: DataTypes.STRING(12), allowNull: false, defaultValue: "requested" },
       declineReason: { type: DataTypes.TEXT, allowNull: true },
+      proposedDate: { type: DataTypes.DATEONLY, allowNull: true },
+      arrivalAt: { type: DataTypes.DATE, allowNull: true },
+      cancelReason: { type: DataTypes.TEXT, allowNull: true },
+      disputeReason: { type: DataTypes.TEXT, allowNull: true },
+      copiedFromId: { type: DataTypes.INTEGER, allowNull: true },
       hoursWorked: { type: DataTypes.DECIMAL(6, 2), allowNull: true },
       travelHours: { type: DataTypes.DECIMAL(6, 2), allowNull: true },
       completionNote: { type: DataTypes.TEXT, allowNull: true },
@@ -84,6 +106,8 @@ export function initWorkOrderModels(sequelize: Sequelize) {
       declinedAt: { type: DataTypes.DATE, allowNull: true },
       completedAt: { type: DataTypes.DATE, allowNull: true },
       confirmedAt: { type: DataTypes.DATE, allowNull: true },
+      cancelledAt: { type: DataTypes.DATE, allowNull: true },
+      disputedAt: { type: DataTypes.DATE, allowNull: true },
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,
     },

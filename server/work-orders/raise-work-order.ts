@@ -80,7 +80,7 @@ export async function raiseWorkOrderWithin(
   warningDays: number,
   link: (id: number) => string,
   transaction: Transaction,
-  options: { mailServiceSide?: boolean } = {},
+  options: { mailServiceSide?: boolean; copiedFromId?: number } = {},
 ) {
   const now = new Date();
   checkPreferredDates(input.preferredDates, now);
@@ -112,6 +112,13 @@ export async function raiseWorkOrderWithin(
       preferredDates: input.preferredDates,
       workKind: input.kind ?? null,
       problemArea: input.problemArea ?? null,
+      // Left out: the site's own contact, induction note, PO and cap, as the site's page records them.
+      siteContactName: input.siteContactName ?? site.contact_name,
+      siteContactPhone: input.siteContactPhone ?? site.contact_phone,
+      poNumber: input.poNumber ?? site.default_po_number,
+      notToExceedCents: input.notToExceedCents ?? site.default_not_to_exceed_cents,
+      safetyInductionNote: input.safetyInductionNote ?? site.safety_induction_note,
+      copiedFromId: options.copiedFromId ?? null,
       createdBy: buyer.id,
     },
     { transaction },

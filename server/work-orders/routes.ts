@@ -1,4 +1,8 @@
 import {
+  acceptWorkOrderSchema,
+  cancelWorkOrderSchema,
+  disputeWorkOrderSchema,
+  sendAgainSchema,
   completeWorkOrderSchema,
   declineWorkOrderSchema,
   listWorkOrdersQuerySchema,
@@ -16,7 +20,15 @@ import { appStorage } from "../storage/index.ts";
 import { kickOutbox } from "../mail/index.ts";
 import { canListWorkOrders, canRaiseWorkOrders, canSeeWorkOrder } from "./policy.ts";
 import { raiseWorkOrder } from "./raise-work-order.ts";
-import { acceptWorkOrder, completeWorkOrder, confirmWorkOrder, declineWorkOrder } from "./move-work-order.ts";
+import {
+  acceptWorkOrder,
+  cancelWorkOrder,
+  completeWorkOrder,
+  confirmWorkOrder,
+  declineWorkOrder,
+  disputeWorkOrder,
+} from "./move-work-order.ts";
+import { sendAgain } from "./send-again.ts";
 import { findWorkOrder, listWorkOrders } from "./find-work-orders.ts";
 import { listMessages, postMessage, sendMessageFile, sendMessageThumbnail } from "./work-order-messages.ts";
 import { removeUpload } from "./attachment-file.ts";
@@ -53,11 +65,12 @@ workOrderRoutes.get(
 
 workOrderRoutes.post(
   "/:workOrderId/accept",
-  { allow: canSeeWorkOrder, params: workOrderParamsSchema },
-  async (req, _res, { params }) => {
+  { allow: canSeeWorkOrder, params: workOrderParamsSchema, body: acceptWorkOrderSchema },
+  async (req, _res, { params, body }) => {
     const dto = await acceptWorkOrder(
       req.user!,
       params.workOrderId,
+      body,
       warningDays(req),
       linkTo(req)(params.workOrderId),
     );
@@ -70,12 +83,7 @@ workOrderRoutes.post(
   "/:workOrderId/decline",
   { allow: canSeeWorkOrder, params: workOrderParamsSchema, body: declineWorkOrderSchema },
   async (req, _res, { params, body }) => {
-    const dto = await declineWorkOrder(
-      req.user!,
-      params.workOrderId,
-      body.reason,
-      linkTo(req)(params.workOrderId),
-    );
+    const dto = await declineWorkOrder(req.user!, params.workOrderId, body, linkTo(req)(params.workOrderId));
     kickOutbox(req.app.locals);
     return dto;
   },
@@ -104,6 +112,47 @@ workOrderRoutes.post(
     const dto = await confirmWorkOrder(req.user!, params.workOrderId, linkTo(req)(params.workOrderId));
     kickOutbox(req.app.locals);
     return dto;
+  },
+);
+
+workOrderRoutes.post(
+  "/:workOrderId/dispute",
+  { allow: canSeeWorkOrder, params: workOrderParamsSchema, body: disputeWorkOrderSchema },
+  async (req, _res, { params, body }) => {
+    const dto = await disputeWorkOrder(
+      req.user!,
+      params.workOrderId,
+      body.reason,
+      linkTo(req)(params.workOrderId),
+    );
+    kickOutbox(req.app.locals);
+    return dto;
+  },
+);
+
+workOrderRoutes.post(
+  "/:workOrderId/cancel",
+  { allow: canSeeWorkOrder, params: workOrderParamsSchema, body: cancelWorkOrderSchema },
+  async (req, _res, { params, body }) => {
+    const dto = await cancelWorkOrder(
+      req.user!,
+      params.workOrderId,
+      body.reason,
+      linkTo(req)(params.workOrderId),
+    );
+    kickOutbox(req.app.locals);
+    return dto;
+  },
+);
+
+// The copy is a new work order (201); the declined one stays as it was, pointing at its copies.
+workOrderRoutes.post(
+  "/:workOrderId/send-again",
+  { allow: canSeeWorkOrder, params: workOrderParamsSchema, body: sendAgainSchema },
+  async (req, res, { params, body }) => {
+    const dto = await sendAgain(req.user!, params.workOrderId, body, warningDays(req), linkTo(req));
+    kickOutbox(req.app.locals);
+    res.status(201).json(dto);
   },
 );
 

@@ -6,6 +6,11 @@ export interface SiteRow {
   id: number;
   company_id: number;
   name: string;
+  contact_name: string | null;
+  contact_phone: string | null;
+  safety_induction_note: string | null;
+  default_po_number: string | null;
+  default_not_to_exceed_cents: number | null;
 }
 export interface EquipmentRow {
   id: number;
@@ -34,7 +39,11 @@ async function one<T extends object>(
 }
 
 export const findSite = (id: number, t?: Transaction) =>
-  one<SiteRow>("SELECT id, company_id, name FROM sites WHERE id = $1", id, t);
+  one<SiteRow>(
+    "SELECT id, company_id, name, contact_name, contact_phone, safety_induction_note, default_po_number, default_not_to_exceed_cents FROM sites WHERE id = $1",
+    id,
+    t,
+  );
 export const findEquipment = (id: number, t?: Transaction) =>
   one<EquipmentRow>("SELECT id, site_id, technology FROM equipment WHERE id = $1", id, t);
 export const findRequirementSet = (id: number, t?: Transaction) =>

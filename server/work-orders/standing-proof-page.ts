@@ -27,6 +27,9 @@ export interface ProofSubject {
   technology: string;
   /** The site's zone: every time on the page is local to where the work is done, with the zone named. */
   timeZone: string;
+  /** The job sheet, only for a reader allowed to see it (the shop, or the service side once accepted). */
+  onSite?: [string, string][];
+  arrivalAt?: string | null;
 }
 
 const technologyWords = (code: string) => technologyLabels[code as MachineTechnology] ?? code;
@@ -60,6 +63,21 @@ const legend = (): string =>
     .map((m) => `<li>${status(m)}: ${escapeHtml(statusMarks[m].explains)}</li>`)
     .join("")}</ul>`;
 
+function jobSheet(subject: ProofSubject): string {
+  if (!subject.onSite) return "";
+  const rows = [
+    ...(subject.arrivalAt
+      ? [["Arrival", formatLocalDateTime(subject.arrivalAt, subject.timeZone)] as [string, string]]
+      : []),
+    ...subject.onSite,
+  ]
+    .map(
+      ([label, value]) => `<tr><th scope="row">${escapeHtml(label)}</th><td>${escapeHtml(value)}</td></tr>`,
+    )
+    .join("");
+  return `<section><h2>On site</h2><table><tbody>${rows}</tbody></table></section>`;
+}
+
 /** A printable page of the standing snapshots: every value is escaped, and the page loads nothing from anywhere. */
 export function renderStandingProof(
   subject: ProofSubject,
@@ -82,6 +100,7 @@ table{border-collapse:collapse;width:100%;margin-bottom:1rem}th,td{border:1px so
 <h1>Proof of standing: work order #${number}</h1>
 <p>${escapeHtml(first?.technicianName ?? "")}${first ? ` of ${escapeHtml(first.companyName)}` : ""}, for ${escapeHtml(subject.shopName)} at ${escapeHtml(subject.siteName)} (${escapeHtml(technologyWords(subject.technology))}). Times are local to the site.</p>
 <div class="caution"><strong>${escapeHtml(SAFETY_CAUTION_TITLE)}.</strong> ${escapeHtml(CLEARED_MEANS)}<ul>${SAFETY_CAUTIONS.map((s) => `<li>${escapeHtml(s)}</li>`).join("")}<li>${escapeHtml(LICENSE_CAUTION)}</li></ul></div>
+${jobSheet(subject)}
 ${body}
 ${legend()}
 <p><small>Computed by Clearbench from verified credentials on file at the moment shown. ${escapeHtml(INSURANCE_CAUTION)} Follow local codes, site safety rules and licensed practice.</small></p>

@@ -2,6 +2,7 @@ import type { Response } from "express";
 import { AppError } from "../http/app-error.ts";
 import { findWorkOrder } from "./find-work-orders.ts";
 import { renderStandingProof } from "./standing-proof-page.ts";
+import { onSiteLines } from "../../shared/work-orders/on-site-lines.ts";
 
 /** The printable proof: both snapshots, or only the one asked for. */
 export async function sendStandingProof(
@@ -35,6 +36,7 @@ export async function sendStandingProof(
         technology: wo.technology,
         // A site always has a zone; UTC (named as such) only if its row is gone.
         timeZone: wo.site.timeZone ?? "UTC",
+        ...(wo.onSite ? { onSite: onSiteLines(wo.onSite), arrivalAt: wo.arrivalAt } : {}),
       },
       snapshots,
     ),

@@ -11,18 +11,17 @@ async function recipients(
   workOrder: WorkOrder,
   side: WorkOrderSide,
   transaction: Transaction,
-): Promise<string[]> {
+): Promise<{ id: number; email: string }[]> {
   if (side === "shop") {
     const author = await User.findOne({ where: { id: workOrder.createdBy, active: true }, transaction });
-    if (author) return [author.email];
+    if (author) return [author];
     // The author has left: the shop's other buyers pick the work order up.
-    const buyers = await User.findAll({
+    return User.findAll({
       where: { companyId: workOrder.shopCompanyId, role: "buyer", active: true },
       transaction,
     });
-    return buyers.map((u) => u.email);
   }
-  const users = await User.findAll({
+  return User.findAll({
     where: {
       companyId: workOrder.serviceCompanyId,
       active: true,
@@ -30,7 +29,6 @@ async function recipients(
     },
     transaction,
   });
-  return users.map((u) => u.email);
 }
 
 export interface WorkOrderNews {
@@ -38,6 +36,10 @@ export interface WorkOrderNews {
   lines: string[];
   /** What the reader should do now, in one sentence, and the words of the link that does it. */
   next: { sentence: string; label: string };
+  /** Lines after the link, in small print (cautions). */
+  after?: string[];
+  /** The bell kind for news that changes the reader's plans ("work_order.cancelled"); other news rings as "work_order". */
+  bell?: string;
 }
 
 /** Queues one e-mail per person of the other side, each also in that person's bell, in the caller's transaction. */
@@ -51,8 +53,14 @@ export async function mailOtherSide(
   const subject = `Work order #${workOrder.id}: ${news.subject}`;
   for (const address of await recipients(workOrder, to, transaction)) {
     await tellPerson(
-      composeMail({ to: address, subject, paragraphs: news.lines, next: { ...news.next, url: link } }),
-      { kind: "work_order" },
+      composeMail({
+        to: address.email,
+        subject,
+        paragraphs: news.lines,
+        next: { ...news.next, url: link },
+        ...(news.after ? { after: news.after } : {}),
+      }),
+      { kind: news.bell ?? "work_order" },
       transaction,
     );
   }

@@ -3,6 +3,7 @@ import { multiLineText, singleLineText } from "../api/text.ts";
 import { isoDateSchema } from "../credentials/credential-fields.ts";
 import { postalCodeSchema, timeZoneSchema } from "../accounts/schemas.ts";
 import { idParam } from "../credentials/schemas.ts";
+import { onSiteDetailsInputSchema, phoneSchema } from "../work-orders/schemas.ts";
 import { machineTechnologies, type MachineTechnology } from "../technicians/schemas.ts";
 
 export const siteParamsSchema = z.object({ siteId: idParam });
@@ -15,6 +16,12 @@ export const siteInputSchema = z.object({
   addressLine: singleLineText().trim().min(3, "Enter the street address").max(200),
   postalCode: postalCodeSchema,
   timeZone: timeZoneSchema.optional(),
+  // What a new work order for this site starts from; the buyer may change it on each one.
+  contactName: singleLineText().trim().max(120).nullable().optional(),
+  contactPhone: phoneSchema.or(z.literal("")).nullable().optional(),
+  safetyInductionNote: multiLineText().trim().max(2000).nullable().optional(),
+  defaultPoNumber: singleLineText().trim().max(40).nullable().optional(),
+  defaultNotToExceedCents: onSiteDetailsInputSchema.shape.notToExceedCents.nullable(),
 });
 export type SiteInput = z.infer<typeof siteInputSchema>;
 
@@ -71,6 +78,11 @@ export interface SiteDto {
   timeZone: string;
   latitude: number;
   longitude: number;
+  contactName: string | null;
+  contactPhone: string | null;
+  safetyInductionNote: string | null;
+  defaultPoNumber: string | null;
+  defaultNotToExceedCents: number | null;
   active: boolean;
   equipmentCount: number;
   createdAt: string;

@@ -7,7 +7,15 @@
 export const standingStatuses = ["cleared", "lapsing", "not_cleared", "not_checked"] as const;
 export const requirementStatuses = ["met", "lapsing", "unmet"] as const;
 export const credentialStatuses = ["submitted", "returned", "verified", "superseded", "lapsed"] as const;
-export const workOrderStatuses = ["requested", "accepted", "declined", "completed", "confirmed"] as const;
+export const workOrderStatuses = [
+  "requested",
+  "accepted",
+  "declined",
+  "completed",
+  "disputed",
+  "confirmed",
+  "cancelled",
+] as const;
 /** A machine transfer waits, is accepted or declined like a work order, or is called back: only that last is its own. */
 export const machineTransferOnlyStatuses = ["withdrawn"] as const;
 
@@ -271,6 +279,35 @@ export const statusMarks: Record<StatusMeaning, StatusMark> = {
       {
         tag: "path",
         attrs: { d: "M8 2.25 13.75 13.25H2.25z", fill: "none", stroke: "tone", "stroke-width": 1.5 },
+      },
+    ],
+  },
+  disputed: {
+    word: "Disputed",
+    explains: "The shop does not accept the completion yet; the two sides settle it in the messages",
+    tone: BROWN,
+    shape: "triangle with a bar",
+    elements: [
+      {
+        tag: "path",
+        attrs: { d: "M8 2 14.25 13.5H1.75z", fill: "none", stroke: "tone", "stroke-width": 1.5 },
+      },
+      { tag: "path", attrs: { d: "M8 6.25v4", fill: "none", stroke: "tone", "stroke-width": 1.75 } },
+    ],
+  },
+  cancelled: {
+    word: "Cancelled",
+    explains: "The shop called the job off; nobody should travel for it",
+    tone: RED,
+    shape: "square with a cross",
+    elements: [
+      {
+        tag: "rect",
+        attrs: { x: 2.5, y: 2.5, width: 11, height: 11, fill: "none", stroke: "tone", "stroke-width": 1.5 },
+      },
+      {
+        tag: "path",
+        attrs: { d: "m5.25 5.25 5.5 5.5m0-5.5-5.5 5.5", fill: "none", stroke: "tone", "stroke-width": 1.5 },
       },
     ],
   },

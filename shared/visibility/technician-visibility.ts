@@ -18,6 +18,7 @@ export type TechnicianViewLevel = (typeof technicianViewLevels)[number];
 export const ENGAGED_WORK_ORDER_STATUSES = [
   "accepted",
   "completed",
+  "disputed",
   "confirmed",
 ] as const satisfies readonly WorkOrderStatus[];
 

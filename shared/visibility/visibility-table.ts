@@ -24,7 +24,7 @@ const SCENARIOS: Record<Role, Scenario[]> = {
   buyer: [
     { label: "any shop", viewer: nobody },
     {
-      label: "a shop whose work order the technician accepted (completed, confirmed)",
+      label: "a shop whose work order the technician accepted (completed, disputed, confirmed)",
       viewer: { ...nobody, engaged: true },
     },
   ],

@@ -12,7 +12,15 @@ import {
   type WorkKind,
 } from "../machines/service-history.ts";
 
-export const workOrderStatuses = ["requested", "accepted", "declined", "completed", "confirmed"] as const;
+export const workOrderStatuses = [
+  "requested",
+  "accepted",
+  "declined",
+  "completed",
+  "disputed",
+  "confirmed",
+  "cancelled",
+] as const;
 export type WorkOrderStatus = (typeof workOrderStatuses)[number];
 
 // "down" = the machine is down: production has stopped, the most urgent call-out.
@@ -22,13 +30,42 @@ export type Urgency = (typeof urgencies)[number];
 export const workOrderSides = ["shop", "service"] as const;
 export type WorkOrderSide = (typeof workOrderSides)[number];
 
-export const workOrderActions = ["accept", "decline", "complete", "confirm"] as const;
+export const workOrderActions = ["accept", "decline", "complete", "confirm", "dispute", "cancel"] as const;
 export type WorkOrderAction = (typeof workOrderActions)[number];
 
 export const workOrderParamsSchema = z.object({ workOrderId: idParam });
 export const messageFileParamsSchema = z.object({ workOrderId: idParam, messageId: idParam });
 
 export const MAX_PREFERRED_DATES = 5;
+
+// Not-to-exceed caps in whole cents; ten million dollars is far past any one call-out.
+export const MAX_NOT_TO_EXCEED_CENTS = 1_000_000_000;
+
+/** Digits with the usual separators and an optional extension ("(312) 555-0142 x12", "+1 312 555 0142"). */
+export const phoneSchema = singleLineText()
+  .trim()
+  .max(40)
+  .regex(
+    /^\+?[0-9(][0-9 ().-]{5,30}[0-9](\s*(x|ext\.?)\s*[0-9]{1,6})?$/i,
+    "Enter a phone number, e.g. (312) 555-0142",
+  );
+
+/**
+ * What the technician needs to show up: where, whom to ask for, what the shop will pay up to and on which PO, and the
+ * site's safety induction. The service side reads it only once it has accepted the job.
+ */
+export const onSiteDetailsInputSchema = z.object({
+  siteContactName: singleLineText().trim().min(2, "Name the person on site").max(120).optional(),
+  siteContactPhone: phoneSchema.optional(),
+  poNumber: singleLineText().trim().min(1).max(40).optional(),
+  notToExceedCents: z
+    .number()
+    .int("Whole cents only")
+    .min(1, "Enter an amount above $0")
+    .max(MAX_NOT_TO_EXCEED_CENTS, "At most $10,000,000")
+    .optional(),
+  safetyInductionNote: multiLineText().trim().max(2000).optional(),
+});
 
 /** What a buyer sends to raise a work order; the shop, the service company and the author come from the session and the rows. */
 export const raiseWorkOrderSchema = z.object({
@@ -48,12 +85,40 @@ export const raiseWorkOrderSchema = z.object({
   /** For the machine's history: the kind of work and where the trouble is (repeat faults are matched on it). */
   kind: z.enum(workKinds).optional(),
   problemArea: z.enum(problemAreas).optional(),
+  ...onSiteDetailsInputSchema.shape,
 });
 export type RaiseWorkOrder = z.infer<typeof raiseWorkOrderSchema>;
 
+const reasonSchema = multiLineText().trim().min(5, "Say why (at least 5 characters)").max(1000);
+
+/** A wall-clock time at the site ("2027-03-15T08:30"), read in the site's zone; the server stores the instant. */
+export const localDateTimeSchema = singleLineText().regex(
+  /^\d{4}-(0[1-9]|1[0-2])-(0[1-9]|[12]\d|3[01])T([01]\d|2[0-3]):[0-5]\d$/,
+  "Enter a date and time, e.g. 2027-03-15T08:30",
+);
+
+export const acceptWorkOrderSchema = z.object({ arrivalLocal: localDateTimeSchema });
+export type AcceptWorkOrder = z.infer<typeof acceptWorkOrderSchema>;
+
 export const declineWorkOrderSchema = z.object({
-  reason: multiLineText().trim().min(5, "Say why (at least 5 characters)").max(1000),
+  reason: reasonSchema,
+  /** A day the technician could come instead; the shop may take it with one click. */
+  proposedDate: isoDateSchema.optional(),
 });
+export type DeclineWorkOrder = z.infer<typeof declineWorkOrderSchema>;
+
+export const cancelWorkOrderSchema = z.object({ reason: reasonSchema });
+export const disputeWorkOrderSchema = z.object({ reason: reasonSchema });
+
+/** The same job again, for a technician the buyer picks (or the same one, on the date they proposed). */
+export const sendAgainSchema = z.object({
+  technicianId: idParam,
+  preferredDates: z
+    .array(isoDateSchema)
+    .max(MAX_PREFERRED_DATES, `At most ${MAX_PREFERRED_DATES} dates`)
+    .optional(),
+});
+export type SendAgain = z.infer<typeof sendAgainSchema>;
 
 // Hours are recorded to the quarter hour or finer; 2 decimals is what the column keeps.
 const hoursSchema = z.number().min(0).max(999).multipleOf(0.01);
@@ -102,6 +167,18 @@ export interface WorkOrderEquipmentDto {
   serialNumber: string | null;
 }
 
+export interface OnSiteDetailsDto {
+  addressLine: string;
+  city: string | null;
+  state: string | null;
+  postalCode: string | null;
+  siteContactName: string | null;
+  siteContactPhone: string | null;
+  poNumber: string | null;
+  notToExceedCents: number | null;
+  safetyInductionNote: string | null;
+}
+
 export interface WorkOrderDto {
   id: number;
   status: WorkOrderStatus;
@@ -117,7 +194,17 @@ export interface WorkOrderDto {
   equipment: WorkOrderEquipmentDto | null;
   technician: { id: number; name: string; companyId: number; companyName: string };
   requirementSet: { id: number; name: string } | null;
+  /** Left out for the service side until it has accepted the job. */
+  onSite?: OnSiteDetailsDto;
   declineReason: string | null;
+  proposedDate: string | null;
+  arrivalAt: string | null;
+  cancelReason: string | null;
+  disputeReason: string | null;
+  /** The job this one was copied from, and (shop side only) the copies sent on after a decline. */
+  copiedFromId: number | null;
+  copies: number[];
+  canSendAgain: boolean;
   hoursWorked: number | null;
   travelHours: number | null;
   completionNote: string | null;
@@ -133,6 +220,8 @@ export interface WorkOrderDto {
   declinedAt: string | null;
   completedAt: string | null;
   confirmedAt: string | null;
+  cancelledAt: string | null;
+  disputedAt: string | null;
   updatedAt: string;
 }
 

@@ -22,6 +22,12 @@ async function atPhoneWidth(page: Page, name: string) {
   await page.setViewportSize({ width: 1280, height: 900 });
 }
 
+/** 8:30 tomorrow as a date-time field takes it; a day ahead is in the future in every US zone. */
+function arrivalTomorrow(): string {
+  const d = new Date(Date.now() + 36 * 3_600_000);
+  return `${d.toISOString().slice(0, 10)}T08:30`;
+}
+
 let server: Awaited<ReturnType<typeof startBrowserServer>>;
 let browser: Browser;
 const contexts: BrowserContext[] = [];
@@ -159,7 +165,9 @@ describe("a buyer finds a cleared technician and books the job", () => {
 
     const provider = await signedInPage(PROVIDER);
     await provider.goto(workOrderUrl);
-    await provider.getByRole("button", { name: "Accept", exact: true }).click();
+    await provider.getByRole("button", { name: "Accept…" }).click();
+    await provider.getByLabel("Arrival at the site").fill(arrivalTomorrow());
+    await provider.getByRole("button", { name: "Accept with this arrival" }).click();
     await provider.getByRole("button", { name: "Mark completed…" }).click();
     await provider.getByLabel("Hours worked on site").fill("3.5");
     await provider.getByLabel("Travel hours, both ways").fill("3");

@@ -12,7 +12,10 @@ afterAll(() => t.close());
 const awaiting = async (agent: Awaited<ReturnType<typeof buildProvider>>["admin"]) => {
   const res = await agent.get("/api/credentials");
   expect(res.status).toBe(200);
-  const rows = (Array.isArray(res.body) ? res.body : res.body.items) as { id: number; awaitsHolder: boolean }[];
+  const rows = (Array.isArray(res.body) ? res.body : res.body.items) as {
+    id: number;
+    awaitsHolder: boolean;
+  }[];
   return new Map(rows.map((r) => [r.id, r.awaitsHolder]));
 };
 

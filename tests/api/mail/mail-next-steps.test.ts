@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { Op } from "sequelize";
 import { buildTestApp, type TestApp } from "../../support/test-app.ts";
-import { buildWorkOrderWorld, raiseBody } from "../../fixtures/build-work-order-world.ts";
+import { buildWorkOrderWorld, raiseBody, acceptBody } from "../../fixtures/build-work-order-world.ts";
 import { OutboxMessage } from "../../../server/mail/model.ts";
 import { inviteMail } from "../../../server/accounts/emails.ts";
 import { composeMail } from "../../../server/mail/index.ts";
@@ -42,7 +42,7 @@ describe("work-order e-mails say what to do next", () => {
     const first = await world.shop.agent.post("/api/work-orders").send(raiseBody(world));
     const second = await world.shop.agent.post("/api/work-orders").send(raiseBody(world));
 
-    await world.provider.admin.post(`/api/work-orders/${first.body.id}/accept`).send({});
+    await world.provider.admin.post(`/api/work-orders/${first.body.id}/accept`).send(acceptBody());
     await world.provider.admin
       .post(`/api/work-orders/${second.body.id}/decline`)
       .send({ reason: "No one free" });
@@ -52,7 +52,7 @@ describe("work-order e-mails say what to do next", () => {
     expectActionable(accepted!);
     expectActionable(declined!);
     expect(accepted!.textBody).toMatch(/lockout\/tagout/);
-    expect(declined!.textBody).toContain("Search the directory for another cleared technician");
+    expect(declined!.textBody).toContain("Send the same job to another cleared technician");
   });
 });
 

@@ -8,6 +8,7 @@ import {
   raiseBody,
   workOrderAt,
   type WorkOrderWorld,
+  acceptBody,
 } from "../../fixtures/build-work-order-world.ts";
 import { Technician } from "../../../server/technicians/model.ts";
 import { Credential, Document } from "../../../server/credentials/model.ts";
@@ -221,7 +222,10 @@ describe("standing snapshots as the shop reads them", () => {
       .post("/api/work-orders")
       .send(raiseBody(world, { requirementSetId: set.body.id }));
     expect(raised.status).toBe(201);
-    await world.provider.admin.post(`/api/work-orders/${raised.body.id}/accept`).send({}).expect(200);
+    await world.provider.admin
+      .post(`/api/work-orders/${raised.body.id}/accept`)
+      .send(acceptBody())
+      .expect(200);
     const policyNumber = (world.generalLiability.fields as { policyNumber: string }).policyNumber;
 
     const shopView = await world.shop.agent.get(`/api/work-orders/${raised.body.id}`);

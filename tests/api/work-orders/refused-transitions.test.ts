@@ -3,7 +3,12 @@ import request from "supertest";
 import { QueryTypes } from "sequelize";
 import { buildTestApp, sequelize, type TestApp } from "../../support/test-app.ts";
 import { buildProvider, signedInAgent } from "../../support/build-provider.ts";
-import { buildWorkOrderWorld, raiseBody, workOrderAt } from "../../fixtures/build-work-order-world.ts";
+import {
+  buildWorkOrderWorld,
+  raiseBody,
+  workOrderAt,
+  acceptBody,
+} from "../../fixtures/build-work-order-world.ts";
 import { WorkOrder } from "../../../server/work-orders/model.ts";
 
 let t: TestApp;
@@ -14,7 +19,7 @@ afterAll(() => t.close());
 
 describe("transitions refused for the wrong status", () => {
   it.each([
-    ["accept", "accepted", {}],
+    ["accept", "accepted", acceptBody()],
     ["decline", "accepted", { reason: "Changed my mind" }],
     ["complete", "requested", { hoursWorked: 2, travelHours: 1 }],
     ["complete", "confirmed", { hoursWorked: 2, travelHours: 1 }],
@@ -25,6 +30,28 @@ describe("transitions refused for the wrong status", () => {
       const id = await workOrderAt(world, status);
 
       const res = await world.provider.admin.post(`/api/work-orders/${id}/${action}`).send(body);
+
+      expect(res.status).toBe(409);
+      expect((await WorkOrder.findByPk(id))!.status).toBe(status);
+    },
+  );
+
+  it.each([
+    ["cancel", "confirmed", "shop", { reason: "Too late to call it off" }],
+    ["cancel", "declined", "shop", { reason: "Too late to call it off" }],
+    ["cancel", "cancelled", "shop", { reason: "Cancelling it twice" }],
+    ["confirm", "cancelled", "shop", {}],
+    ["dispute", "confirmed", "shop", { reason: "Changed our minds later" }],
+    ["accept", "cancelled", "admin", acceptBody()],
+    ["complete", "cancelled", "admin", { hoursWorked: 2, travelHours: 1 }],
+  ] as const)(
+    "answers 409 to %s on a %s work order (the state machine in shared/work-orders) and leaves it unchanged",
+    async (action, status, who, body) => {
+      const world = await buildWorkOrderWorld(t.app);
+      const id = await workOrderAt(world, status);
+      const agent = who === "shop" ? world.shop.agent : world.provider.admin;
+
+      const res = await agent.post(`/api/work-orders/${id}/${action}`).send(body);
 
       expect(res.status).toBe(409);
       expect((await WorkOrder.findByPk(id))!.status).toBe(status);
@@ -45,7 +72,7 @@ describe("transitions refused for the wrong status", () => {
     const id = await workOrderAt(world, "requested");
 
     const results = await Promise.all([
-      world.provider.admin.post(`/api/work-orders/${id}/accept`).send({}),
+      world.provider.admin.post(`/api/work-orders/${id}/accept`).send(acceptBody()),
       world.provider.tech.post(`/api/work-orders/${id}/decline`).send({ reason: "Too far this week" }),
     ]);
 
@@ -59,7 +86,7 @@ describe("transitions refused for the wrong side", () => {
     const requested = await workOrderAt(world, "requested");
     const accepted = await workOrderAt(world, "accepted");
 
-    const accept = await world.shop.agent.post(`/api/work-orders/${requested}/accept`).send({});
+    const accept = await world.shop.agent.post(`/api/work-orders/${requested}/accept`).send(acceptBody());
     const complete = await world.shop.agent
       .post(`/api/work-orders/${accepted}/complete`)
       .send({ hoursWorked: 1, travelHours: 1 });
@@ -85,7 +112,7 @@ describe("transitions refused for the wrong side", () => {
 
     const responses = await Promise.all([
       otherShop.agent.get(`/api/work-orders/${id}`),
-      otherProvider.admin.post(`/api/work-orders/${id}/accept`).send({}),
+      otherProvider.admin.post(`/api/work-orders/${id}/accept`).send(acceptBody()),
       otherProvider.tech.get(`/api/work-orders/${id}/messages`),
       world.shop.agent.get("/api/work-orders/2147483000"),
     ]);

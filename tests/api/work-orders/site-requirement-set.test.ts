@@ -5,6 +5,7 @@ import {
   buildWorkOrderWorld,
   raiseBody,
   type WorkOrderWorld,
+  acceptBody,
 } from "../../fixtures/build-work-order-world.ts";
 
 let t: TestApp;
@@ -33,7 +34,10 @@ describe("work order: the site's requirement set is carried", () => {
     const raised = await world.shop.agent.post("/api/work-orders").send(raiseBody(world));
     expect(raised.status, JSON.stringify(raised.body)).toBe(201);
     expect(raised.body.requirementSet).toEqual({ id: setId, name: "Plant floor rules" });
-    await world.provider.admin.post(`/api/work-orders/${raised.body.id}/accept`).send({}).expect(200);
+    await world.provider.admin
+      .post(`/api/work-orders/${raised.body.id}/accept`)
+      .send(acceptBody())
+      .expect(200);
     const proof = await world.shop.agent.get(`/api/work-orders/${raised.body.id}/standing-proof`);
     expect(proof.status).toBe(200);
     expect(proof.text).toContain("Plant floor rules");

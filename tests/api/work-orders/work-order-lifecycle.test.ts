@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { Op } from "sequelize";
 import { buildTestApp, type TestApp } from "../../support/test-app.ts";
-import { buildWorkOrderWorld, raiseBody } from "../../fixtures/build-work-order-world.ts";
+import { buildWorkOrderWorld, raiseBody, acceptBody } from "../../fixtures/build-work-order-world.ts";
 import { OutboxMessage } from "../../../server/mail/model.ts";
 import { AuditEvent } from "../../../server/audit/model.ts";
 import { Technician } from "../../../server/technicians/model.ts";
@@ -28,7 +28,7 @@ describe("a work order from request to confirmation", () => {
     const raised = await shop.agent.post("/api/work-orders").send(raiseBody(world));
     const id = raised.body.id as number;
     const beforeAccept = Date.now();
-    const accepted = await provider.admin.post(`/api/work-orders/${id}/accept`).send({});
+    const accepted = await provider.admin.post(`/api/work-orders/${id}/accept`).send(acceptBody());
     const completed = await provider.tech
       .post(`/api/work-orders/${id}/complete`)
       .send({ hoursWorked: 3.5, travelHours: 2, note: "Replaced the drawbar spring." });
@@ -41,7 +41,7 @@ describe("a work order from request to confirmation", () => {
       yourSide: "shop",
       technology: "mill",
       urgency: "down",
-      actions: [],
+      actions: ["cancel"],
     });
     expect(raised.body.equipment).toMatchObject({
       builder: "Corvane Machine Co.",
@@ -76,8 +76,9 @@ describe("a work order from request to confirmation", () => {
         policyEndInstant(glFields.expirationDate, "America/Chicago").toISOString(),
       );
     }
-    expect(await mailsFor(provider.adminUser.email, id)).toHaveLength(2); // raised, confirmed
-    expect(await mailsFor(provider.techUser.email, id)).toHaveLength(2);
+    // raised, the job sheet once accepted, confirmed
+    expect(await mailsFor(provider.adminUser.email, id)).toHaveLength(3);
+    expect(await mailsFor(provider.techUser.email, id)).toHaveLength(3);
     expect(await mailsFor(shop.user.email, id)).toHaveLength(2); // accepted, completed
     const actions = (
       await AuditEvent.findAll({
@@ -118,7 +119,7 @@ describe("a work order from request to confirmation", () => {
       { where: { id: world.provider.technician.id } },
     );
     const raised = await world.shop.agent.post("/api/work-orders").send(raiseBody(world));
-    await world.provider.admin.post(`/api/work-orders/${raised.body.id}/accept`).send({});
+    await world.provider.admin.post(`/api/work-orders/${raised.body.id}/accept`).send(acceptBody());
 
     const page = await world.shop.agent.get(`/api/work-orders/${raised.body.id}/standing-proof`);
 
@@ -137,7 +138,7 @@ describe("lists of work orders", () => {
     const other = await buildWorkOrderWorld(t.app);
     const first = await world.shop.agent.post("/api/work-orders").send(raiseBody(world));
     const second = await world.shop.agent.post("/api/work-orders").send(raiseBody(world));
-    await world.provider.admin.post(`/api/work-orders/${second.body.id}/accept`).send({});
+    await world.provider.admin.post(`/api/work-orders/${second.body.id}/accept`).send(acceptBody());
     await other.shop.agent.post("/api/work-orders").send(raiseBody(other));
 
     const shopAll = await world.shop.agent.get("/api/work-orders");

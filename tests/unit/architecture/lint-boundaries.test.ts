@@ -13,7 +13,8 @@ async function rulesBroken(code: string, file: string): Promise<string[]> {
 
 describe("lint boundaries", () => {
   it("refuses an import circle: the SQL helpers may not reach back into a domain that uses them", async () => {
-    const code = 'import { refreshStandings } from "../standing/index.ts";\nexport const again = refreshStandings;\n';
+    const code =
+      'import { refreshStandings } from "../standing/index.ts";\nexport const again = refreshStandings;\n';
     expect(await rulesBroken(code, "server/db/sql.ts")).toContain("import-x/no-cycle");
   }, 60_000);
 

@@ -46,10 +46,12 @@ describe("a returned or lapsed credential waits for its holder until a newer one
     const oem = (builder: string, submittedAt: string, state: FollowUpCandidate["state"]) =>
       card({ typeCode: "oem_training", state, submittedAt, fields: { builder, controlFamily: "Series 9" } });
     const lapsed = oem("Vantor Machine Works", "2026-10-01T12:00:00Z", "lapsed");
-    expect(awaitsHolder(lapsed, [lapsed, oem("Brackwell Tool", "2026-11-05T12:00:00Z", "verified")])).toBe(true);
-    expect(awaitsHolder(lapsed, [lapsed, oem("Vantor Machine Works", "2026-11-05T12:00:00Z", "verified")])).toBe(
-      false,
+    expect(awaitsHolder(lapsed, [lapsed, oem("Brackwell Tool", "2026-11-05T12:00:00Z", "verified")])).toBe(
+      true,
     );
+    expect(
+      awaitsHolder(lapsed, [lapsed, oem("Vantor Machine Works", "2026-11-05T12:00:00Z", "verified")]),
+    ).toBe(false);
   });
 
   it("waits for nobody in any other state", () => {

@@ -72,6 +72,7 @@ export function Component() {
         technicianName={technician.name}
         sites={sites.map((s) => ({ value: String(s.id), label: s.name }))}
         siteId={siteId}
+        siteDefaults={sites.find((s) => String(s.id) === siteId) ?? null}
         onSiteChange={chooseSite}
         machines={(equipment.data ?? []).map((m) => ({
           id: m.id,

@@ -1,9 +1,10 @@
 import { useSuspenseQuery } from "@tanstack/react-query";
-import { Link, useParams, type LoaderFunctionArgs } from "react-router-dom";
+import { Link, useNavigate, useParams, type LoaderFunctionArgs } from "react-router-dom";
+import { onSiteLines } from "@shared/work-orders/on-site-lines.ts";
 import { technologyLabels, type MachineTechnology } from "@shared/technicians/schemas.ts";
 import { problemAreaLabels } from "@shared/machines/service-history.ts";
 import { requestKindLabels } from "@shared/service-requests/schemas.ts";
-import { paths } from "@/config/paths.ts";
+import { hrefs, paths } from "@/config/paths.ts";
 import { PageHeader } from "@/components/ui/page-header.tsx";
 import { SafetyCaution } from "@/components/ui/safety-caution.tsx";
 import { StatusKey } from "@/components/ui/status-key.tsx";
@@ -18,6 +19,8 @@ import { workOrderQuery } from "@/features/work-orders/api/get-work-order.ts";
 import type { WorkOrder } from "@/features/work-orders/api/work-order-shapes.ts";
 import { MessageThread } from "@/features/work-orders/components/message-thread.tsx";
 import { StandingSnapshotView } from "@/features/work-orders/components/standing-snapshot-view.tsx";
+import { useDirectorySearch } from "@/features/directory/api/search-directory.ts";
+import { SendAgainPanel } from "@/features/work-orders/components/send-again-panel.tsx";
 import { WorkOrderActions } from "@/features/work-orders/components/work-order-actions.tsx";
 import { WorkOrderStatusBadge } from "@/features/work-orders/components/work-order-status-badge.tsx";
 import { urgencyWords } from "@/features/work-orders/components/work-order-words.ts";
@@ -62,7 +65,16 @@ function Facts({ workOrder }: { workOrder: WorkOrder }) {
     ],
     ["Raised", `${formatDateTime(workOrder.createdAt)} by ${workOrder.createdBy.name}`],
   ];
+  if (workOrder.arrivalAt) rows.push(["Arrival", formatDateTime(workOrder.arrivalAt)]);
   if (workOrder.declineReason) rows.push(["Reason for declining", workOrder.declineReason]);
+  if (workOrder.proposedDate) rows.push(["Proposed instead", formatIsoDate(workOrder.proposedDate)]);
+  if (workOrder.cancelReason)
+    rows.push([
+      "Cancelled",
+      `${workOrder.cancelledAt ? `${formatDateTime(workOrder.cancelledAt)}: ` : ""}${workOrder.cancelReason}`,
+    ]);
+  if (workOrder.disputeReason && workOrder.status === "disputed")
+    rows.push(["Disputed", workOrder.disputeReason]);
   if (workOrder.hoursWorked !== null)
     rows.push(["Hours", `${workOrder.hoursWorked} h on site, ${workOrder.travelHours ?? 0} h travel`]);
   if (workOrder.completionNote) rows.push(["Completion note", workOrder.completionNote]);
@@ -87,6 +99,48 @@ function Facts({ workOrder }: { workOrder: WorkOrder }) {
         ))}
       </dl>
     </section>
+  );
+}
+
+/** The job sheet; the service side receives it only once it has accepted (the server leaves it out before). */
+function OnSiteDetails({ workOrder }: { workOrder: WorkOrder }) {
+  if (!workOrder.onSite) {
+    return (
+      <p className="rounded-lg border border-ink-100 bg-white p-4 text-sm text-ink-700">
+        The street address, on-site contact, PO number, not-to-exceed amount and site induction arrive here
+        once you accept.
+      </p>
+    );
+  }
+  return (
+    <section aria-labelledby="on-site" className="rounded-lg border border-ink-100 bg-white p-4">
+      <h2 id="on-site" className="mb-2 font-semibold text-ink-900">
+        On site
+      </h2>
+      <dl className="grid gap-x-6 gap-y-2 text-sm sm:grid-cols-[max-content_1fr]">
+        {onSiteLines(workOrder.onSite).map(([term, value]) => (
+          <div key={term} className="contents">
+            <dt className="font-medium text-ink-700">{term}</dt>
+            <dd className="whitespace-pre-line break-words text-ink-900">{value}</dd>
+          </div>
+        ))}
+      </dl>
+    </section>
+  );
+}
+
+/** Other cleared technicians for the same site and technology, as the directory lists them to this shop. */
+function SendAgain({ workOrder }: { workOrder: WorkOrder }) {
+  const navigate = useNavigate();
+  const search = new URLSearchParams({ siteId: String(workOrder.site.id), technology: workOrder.technology });
+  if (workOrder.requirementSet) search.set("requirementSetId", String(workOrder.requirementSet.id));
+  const directory = useDirectorySearch(search.toString());
+  const rows = directory.data?.pages.flatMap((p) => p.rows) ?? [];
+  const choices = rows
+    .filter((r) => r.technicianId !== workOrder.technician.id)
+    .map((r) => ({ value: String(r.technicianId), label: `${r.name} (${r.companyName})` }));
+  return (
+    <SendAgainPanel workOrder={workOrder} choices={choices} onSent={(id) => navigate(hrefs.workOrder(id))} />
   );
 }
 
@@ -144,7 +198,32 @@ export function Component() {
         <div className="space-y-6">
           <SafetyCaution />
           <Facts workOrder={workOrder} />
+          {workOrder.copiedFromId !== null && (
+            <p className="text-sm text-ink-700">
+              Copied from{" "}
+              <Link to={hrefs.workOrder(workOrder.copiedFromId)} className="underline underline-offset-2">
+                work order #{workOrder.copiedFromId}
+              </Link>
+              .
+            </p>
+          )}
+          {workOrder.copies.length > 0 && (
+            <p className="text-sm text-ink-700">
+              Sent on as{" "}
+              {workOrder.copies.map((copy, i) => (
+                <span key={copy}>
+                  {i > 0 && ", "}
+                  <Link to={hrefs.workOrder(copy)} className="underline underline-offset-2">
+                    work order #{copy}
+                  </Link>
+                </span>
+              ))}
+              .
+            </p>
+          )}
+          <OnSiteDetails workOrder={workOrder} />
           <WorkOrderActions workOrder={workOrder} />
+          {workOrder.canSendAgain && <SendAgain workOrder={workOrder} />}
           {(workOrder.snapshotAccepted || workOrder.snapshotCompleted) && (
             <section aria-labelledby="proof" className="space-y-3">
               <h2 id="proof" className="text-lg font-semibold text-ink-900">
@@ -172,7 +251,9 @@ export function Component() {
               "accepted",
               "declined",
               "completed",
+              "disputed",
               "confirmed",
+              "cancelled",
               "cleared",
               "lapsing",
               "not_cleared",

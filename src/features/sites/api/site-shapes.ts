@@ -13,6 +13,12 @@ export const siteSchema = z.object({
   timeZone: z.string(),
   latitude: z.number(),
   longitude: z.number(),
+  // Older answers (and other shapes) may leave these out.
+  contactName: z.string().nullable().optional(),
+  contactPhone: z.string().nullable().optional(),
+  safetyInductionNote: z.string().nullable().optional(),
+  defaultPoNumber: z.string().nullable().optional(),
+  defaultNotToExceedCents: z.number().nullable().optional(),
   active: z.boolean(),
   equipmentCount: z.number(),
 });

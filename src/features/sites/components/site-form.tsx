@@ -3,9 +3,11 @@ import { siteInputSchema, type SiteInput } from "@shared/sites/schemas.ts";
 import { Button } from "@/components/ui/button.tsx";
 import { FormError } from "@/components/ui/form-error.tsx";
 import { SelectField, type SelectOption } from "@/components/ui/select-field.tsx";
+import { TextAreaField } from "@/components/ui/text-area-field.tsx";
 import { TextField } from "@/components/ui/text-field.tsx";
 import { fieldErrorsOf } from "@/lib/field-errors.ts";
 import { readForm } from "@/lib/read-form.ts";
+import { centsToInput, inputToCents } from "@/lib/format-money.ts";
 import { usePostalPlace } from "../api/look-up-postal-code.ts";
 import type { Site } from "../api/site-shapes.ts";
 
@@ -14,6 +16,11 @@ const labels = {
   addressLine: "Street address",
   postalCode: "ZIP code",
   timeZone: "Time zone",
+  contactName: "On-site contact",
+  contactPhone: "Contact's phone",
+  safetyInductionNote: "Site safety induction",
+  defaultPoNumber: "PO number for new work orders",
+  defaultNotToExceedCents: "Not to exceed for new work orders (dollars)",
 };
 
 type SiteFormProps = {
@@ -43,8 +50,12 @@ export function SiteForm({ site, timeZoneOptions, pending, serverError, onSubmit
 
   const submit = (event: FormEvent<HTMLFormElement>) => {
     event.preventDefault();
-    const values = readForm(event.currentTarget);
-    const parsed = siteInputSchema.safeParse({ ...values, timeZone: values.timeZone || undefined });
+    const { defaultNotToExceed, ...values } = readForm(event.currentTarget);
+    const parsed = siteInputSchema.safeParse({
+      ...values,
+      timeZone: values.timeZone || undefined,
+      defaultNotToExceedCents: defaultNotToExceed ? inputToCents(String(defaultNotToExceed)) : null,
+    });
     if (!parsed.success) {
       setInvalid(parsed.error);
       return;
@@ -100,7 +111,46 @@ export function SiteForm({ site, timeZoneOptions, pending, serverError, onSubmit
           hint={suggested ? `Suggested for this ZIP code: ${suggested}` : undefined}
           error={fields.timeZone}
         />
+        <TextField
+          label={labels.contactName}
+          name="contactName"
+          defaultValue={site?.contactName ?? ""}
+          hint="Optional; new work orders start from it"
+          error={fields.contactName}
+        />
+        <TextField
+          label={labels.contactPhone}
+          name="contactPhone"
+          type="tel"
+          autoComplete="tel"
+          defaultValue={site?.contactPhone ?? ""}
+          hint="Optional"
+          error={fields.contactPhone}
+        />
+        <TextField
+          label={labels.defaultPoNumber}
+          name="defaultPoNumber"
+          defaultValue={site?.defaultPoNumber ?? ""}
+          hint="Optional"
+          error={fields.defaultPoNumber}
+        />
+        <TextField
+          label={labels.defaultNotToExceedCents}
+          name="defaultNotToExceed"
+          inputMode="decimal"
+          defaultValue={centsToInput(site?.defaultNotToExceedCents)}
+          hint="Optional"
+          error={fields.defaultNotToExceedCents}
+        />
       </div>
+      <TextAreaField
+        label={labels.safetyInductionNote}
+        name="safetyInductionNote"
+        rows={2}
+        defaultValue={site?.safetyInductionNote ?? ""}
+        hint="Optional: what a visiting technician must do before work (gate, induction, PPE). Sent only once a job is accepted."
+        error={fields.safetyInductionNote}
+      />
       <div className="flex flex-wrap gap-2">
         <Button type="submit" pending={pending} pendingLabel="Saving">
           {site ? "Save site" : "Add site"}

@@ -1,18 +1,20 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import type { CompleteWorkOrder } from "@shared/work-orders/schemas.ts";
+import type { AcceptWorkOrder, CompleteWorkOrder, DeclineWorkOrder } from "@shared/work-orders/schemas.ts";
 import { api } from "@/lib/api-client.ts";
 import { workOrderKeys } from "./work-order-keys.ts";
 import { workOrderSchema } from "./work-order-shapes.ts";
 
 /** One step of the work order's life; the server decides whether the caller's side may take it. */
 export type WorkOrderMove =
-  | { action: "accept" }
-  | { action: "decline"; reason: string }
+  | { action: "accept"; input: AcceptWorkOrder }
+  | { action: "decline"; input: DeclineWorkOrder }
   | { action: "complete"; input: CompleteWorkOrder }
-  | { action: "confirm" };
+  | { action: "confirm" }
+  | { action: "dispute"; reason: string }
+  | { action: "cancel"; reason: string };
 
 const bodyOf = (move: WorkOrderMove) =>
-  move.action === "decline" ? { reason: move.reason } : move.action === "complete" ? move.input : {};
+  "input" in move ? move.input : "reason" in move ? { reason: move.reason } : {};
 
 export const moveWorkOrder = (id: number, move: WorkOrderMove) =>
   api.post(`/work-orders/${id}/${move.action}`, bodyOf(move), workOrderSchema);

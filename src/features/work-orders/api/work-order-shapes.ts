@@ -81,7 +81,28 @@ export const workOrderSchema = z.object({
     .nullable(),
   technician: z.object({ id: z.number(), name: z.string(), companyId: z.number(), companyName: z.string() }),
   requirementSet: z.object({ id: z.number(), name: z.string() }).nullable(),
+  // Absent for the service side until it has accepted the job.
+  onSite: z
+    .object({
+      addressLine: z.string(),
+      city: z.string().nullable(),
+      state: z.string().nullable(),
+      postalCode: z.string().nullable(),
+      siteContactName: z.string().nullable(),
+      siteContactPhone: z.string().nullable(),
+      poNumber: z.string().nullable(),
+      notToExceedCents: z.number().nullable(),
+      safetyInductionNote: z.string().nullable(),
+    })
+    .optional(),
   declineReason: z.string().nullable(),
+  proposedDate: z.string().nullable(),
+  arrivalAt: z.string().nullable(),
+  cancelReason: z.string().nullable(),
+  disputeReason: z.string().nullable(),
+  copiedFromId: z.number().nullable(),
+  copies: z.array(z.number()),
+  canSendAgain: z.boolean(),
   hoursWorked: z.number().nullable(),
   travelHours: z.number().nullable(),
   completionNote: z.string().nullable(),
@@ -104,6 +125,8 @@ export const workOrderSchema = z.object({
   declinedAt: z.string().nullable(),
   completedAt: z.string().nullable(),
   confirmedAt: z.string().nullable(),
+  cancelledAt: z.string().nullable(),
+  disputedAt: z.string().nullable(),
 });
 export type WorkOrder = z.infer<typeof workOrderSchema>;
 

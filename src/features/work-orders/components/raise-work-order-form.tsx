@@ -9,6 +9,7 @@ import { TextAreaField } from "@/components/ui/text-area-field.tsx";
 import { TextField } from "@/components/ui/text-field.tsx";
 import { isApiError } from "@/lib/api-client.ts";
 import { fieldErrorsOf } from "@/lib/field-errors.ts";
+import { centsToInput, inputToCents } from "@/lib/format-money.ts";
 import { preferredDateWindow } from "@shared/work-orders/preferred-dates.ts";
 import { problemAreaLabels, problemAreas, workKinds } from "@shared/machines/service-history.ts";
 import { requestKindLabels } from "@shared/service-requests/schemas.ts";
@@ -18,6 +19,15 @@ import { urgencyWords } from "./work-order-words.ts";
 const localIsoDate = (d: Date) =>
   `${d.getFullYear()}-${String(d.getMonth() + 1).padStart(2, "0")}-${String(d.getDate()).padStart(2, "0")}`;
 
+/** What the chosen site records for a visiting technician; a new work order starts from it. */
+export type SiteDefaults = {
+  contactName?: string | null | undefined;
+  contactPhone?: string | null | undefined;
+  safetyInductionNote?: string | null | undefined;
+  defaultPoNumber?: string | null | undefined;
+  defaultNotToExceedCents?: number | null | undefined;
+};
+
 export type MachineChoice = { id: number; label: string; technology: string };
 
 type RaiseWorkOrderFormProps = {
@@ -25,6 +35,7 @@ type RaiseWorkOrderFormProps = {
   technicianName: string;
   sites: readonly SelectOption[];
   siteId: string;
+  siteDefaults: SiteDefaults | null;
   onSiteChange: (siteId: string) => void;
   machines: readonly MachineChoice[];
   requirementSets: readonly SelectOption[];
@@ -46,8 +57,17 @@ const labels = {
   requirementSetId: "Requirement set to check",
   kind: "Kind of work",
   problemArea: "Problem area",
+  siteContactName: "On-site contact",
+  siteContactPhone: "Contact's phone",
+  poNumber: "PO number",
+  notToExceedCents: "Not to exceed (dollars)",
+  safetyInductionNote: "Site safety induction",
 };
-const plainWords = { siteId: "Choose the site", technology: "Choose the technology or a machine" };
+const plainWords = {
+  siteId: "Choose the site",
+  technology: "Choose the technology or a machine",
+  notToExceedCents: "Enter dollars and cents, e.g. 2450.00",
+};
 const DATE_INPUTS = 3;
 const technologyOptions = machineTechnologies.map((t) => ({ value: t, label: technologyLabels[t] }));
 
@@ -77,6 +97,7 @@ export function RaiseWorkOrderForm(props: RaiseWorkOrderFormProps) {
     technicianName,
     sites,
     siteId,
+    siteDefaults,
     onSiteChange,
     machines,
     requirementSets,
@@ -110,6 +131,11 @@ export function RaiseWorkOrderForm(props: RaiseWorkOrderFormProps) {
       preferredDates: data.getAll("preferredDates").map(String).filter(Boolean),
       kind: text("kind") || undefined,
       problemArea: text("problemArea") || undefined,
+      siteContactName: text("siteContactName") || undefined,
+      siteContactPhone: text("siteContactPhone") || undefined,
+      poNumber: text("poNumber") || undefined,
+      notToExceedCents: text("notToExceed") ? inputToCents(text("notToExceed")) : undefined,
+      safetyInductionNote: text("safetyInductionNote") || undefined,
     });
     if (!parsed.success) {
       setInvalid(parsed.error);
@@ -216,6 +242,52 @@ export function RaiseWorkOrderForm(props: RaiseWorkOrderFormProps) {
             />
           ))}
         </div>
+      </fieldset>
+      <fieldset key={siteId} className="space-y-3">
+        <legend className="mb-1 text-sm font-medium text-ink-900">
+          On site (sent once the job is accepted)
+        </legend>
+        <p className="text-sm text-ink-700">
+          The technician sees these, with the site&apos;s street address, only after accepting. Contact,
+          induction, PO and limit start from the site.
+        </p>
+        <div className="grid gap-4 sm:grid-cols-2">
+          <TextField
+            label={labels.siteContactName}
+            name="siteContactName"
+            defaultValue={siteDefaults?.contactName ?? ""}
+            error={errors.siteContactName}
+          />
+          <TextField
+            label={labels.siteContactPhone}
+            name="siteContactPhone"
+            type="tel"
+            defaultValue={siteDefaults?.contactPhone ?? ""}
+            error={errors.siteContactPhone}
+          />
+          <TextField
+            label={labels.poNumber}
+            name="poNumber"
+            hint="Optional"
+            defaultValue={siteDefaults?.defaultPoNumber ?? ""}
+            error={errors.poNumber}
+          />
+          <TextField
+            label={labels.notToExceedCents}
+            name="notToExceed"
+            inputMode="decimal"
+            defaultValue={centsToInput(siteDefaults?.defaultNotToExceedCents)}
+            hint="Optional; the technician asks before going past it"
+            error={errors.notToExceedCents}
+          />
+        </div>
+        <TextAreaField
+          label={labels.safetyInductionNote}
+          name="safetyInductionNote"
+          rows={2}
+          defaultValue={siteDefaults?.safetyInductionNote ?? ""}
+          error={errors.safetyInductionNote}
+        />
       </fieldset>
       <Button type="submit" pending={pending} pendingLabel="Sending">
         Send work order

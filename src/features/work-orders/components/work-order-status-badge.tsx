@@ -7,7 +7,9 @@ export const workOrderStatusWords: Record<WorkOrderStatus, string> = {
   accepted: statusMarks.accepted.word,
   declined: statusMarks.declined.word,
   completed: statusMarks.completed.word,
+  disputed: statusMarks.disputed.word,
   confirmed: statusMarks.confirmed.word,
+  cancelled: statusMarks.cancelled.word,
 };
 
 /** A work order's status: its own shapes, none shared with a credential's or a technician's standing. */
