@@ -4,6 +4,7 @@ import request from "supertest";
 import { buildTestApp, sequelize, type TestApp } from "../../support/test-app.ts";
 import { signedInAgent } from "../../support/build-provider.ts";
 import {
+  acceptBody,
   buildWorkOrderWorld,
   raiseBody,
   type WorkOrderWorld,
@@ -25,7 +26,7 @@ async function confirmedOnMachine(world: WorkOrderWorld, extra: Record<string, u
     .send(raiseBody(world, { kind: "repair", problemArea: "spindle", ...extra }))
     .expect(201);
   const id = raised.body.id as number;
-  await world.provider.admin.post(`/api/work-orders/${id}/accept`).send({}).expect(200);
+  await world.provider.admin.post(`/api/work-orders/${id}/accept`).send(acceptBody()).expect(200);
   await world.provider.tech
     .post(`/api/work-orders/${id}/complete`)
     .send({
@@ -101,7 +102,7 @@ describe("a machine's service history", () => {
       .send(raiseBody(world, { kind: "repair", problemArea: "tool_changer" }))
       .expect(201);
     const id = raised.body.id as number;
-    await world.provider.admin.post(`/api/work-orders/${id}/accept`).send({}).expect(200);
+    await world.provider.admin.post(`/api/work-orders/${id}/accept`).send(acceptBody()).expect(200);
 
     const nameless = await world.provider.tech
       .post(`/api/work-orders/${id}/complete`)
@@ -120,7 +121,7 @@ describe("a machine's service history", () => {
   it("leaves out work orders that are not confirmed", async () => {
     const world = await buildWorkOrderWorld(t.app);
     const raised = await world.shop.agent.post("/api/work-orders").send(raiseBody(world)).expect(201);
-    await world.provider.admin.post(`/api/work-orders/${raised.body.id}/accept`).send({}).expect(200);
+    await world.provider.admin.post(`/api/work-orders/${raised.body.id}/accept`).send(acceptBody()).expect(200);
     await world.provider.tech
       .post(`/api/work-orders/${raised.body.id}/complete`)
       .send({ hoursWorked: 2, travelHours: 1 })

@@ -4,7 +4,7 @@ import type request from "supertest";
 import { buildTestApp, type TestApp } from "../../support/test-app.ts";
 import { signedInAgent } from "../../support/build-provider.ts";
 import { submitLiabilityCertificate } from "../../support/submit-credential.ts";
-import { buildWorkOrderWorld, raiseBody } from "../../fixtures/build-work-order-world.ts";
+import { acceptBody, buildWorkOrderWorld, raiseBody } from "../../fixtures/build-work-order-world.ts";
 import { db } from "../../../server/db/sequelize.ts";
 
 let t: TestApp;
@@ -41,7 +41,7 @@ describe("every event that sends an e-mail also lands in the bell", () => {
     const id = raised.body.id as number;
     const officeAfterRaise = await bellTitles(provider.admin);
     const techAfterRaise = await bellTitles(provider.tech);
-    await provider.admin.post(`/api/work-orders/${id}/accept`).send({});
+    await provider.admin.post(`/api/work-orders/${id}/accept`).send(acceptBody());
     const buyerAfterAccept = await bellTitles(shop.agent);
     await provider.tech
       .post(`/api/work-orders/${id}/complete`)
