@@ -19,6 +19,7 @@ import { standingApiRoutes } from "./standing/index.ts";
 import { credentialRoutes } from "./credentials/index.ts";
 import { buyerRouters } from "./directory/buyer-routers.ts";
 import { brokerRoutes } from "./credentials/broker-routes.ts";
+import { adminJobRoutes } from "./admin/index.ts";
 import { workOrderRoutes } from "./work-orders/index.ts";
 import { reviewRoutes } from "./reviews/index.ts";
 import { serviceRequestRoutes } from "./service-requests/index.ts";
@@ -58,6 +59,7 @@ const apiRouters = [
   machineCatalogRoutes,
   machineRoutes,
   brokerRoutes,
+  adminJobRoutes,
 ];
 
 export function createApp({ config, sessionPool, clientDir }: AppDeps): Express {

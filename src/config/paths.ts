@@ -63,6 +63,8 @@ export const paths = {
     jobRuns: "/admin/job-runs",
     reportedReviews: "/admin/reviews",
     followUp: "/admin/follow-up",
+    companies: "/admin/companies",
+    machineCatalog: "/admin/machine-catalog",
   },
 } as const;
 
