@@ -29,29 +29,33 @@ function suggestionsFor(entries: readonly CatalogEntry[], typed: string): Catalo
   return (exact ? [exact, ...partial] : partial).slice(0, MAX_SHOWN);
 }
 
+type ControlProps = {
+  id: string;
+  name: string;
+  className: string;
+  disabled?: boolean | undefined;
+  required?: boolean | undefined;
+  "aria-invalid"?: true | undefined;
+  "aria-describedby"?: string | undefined;
+  "data-field"?: string;
+};
+
+type CatalogComboboxInputProps = {
+  kind: CatalogKind;
+  /** Names the suggestion list for assistive technology. */
+  label: string;
+  control: ControlProps;
+  value: string;
+  onChange: (value: string) => void;
+};
+
 /**
  * A text input that suggests builders or control families from the admin's catalog (WAI-ARIA combobox with a list
  * popup). Typing an alias in any case or spacing and leaving the field writes the catalog's own name, so records and
- * searches agree; a name the catalog lacks is kept as typed.
+ * searches agree; a name the catalog lacks is kept as typed. For forms that lay out their own label.
  */
-export function CatalogCombobox({
-  kind,
-  label,
-  name,
-  defaultValue,
-  value: controlled,
-  onChange,
-  error,
-  hint,
-  className,
-}: CatalogComboboxProps) {
+export function CatalogComboboxInput({ kind, label, control, value, onChange }: CatalogComboboxInputProps) {
   const entries = useCatalogChoices(kind);
-  const [own, setOwn] = useState(defaultValue ?? "");
-  const value = controlled ?? own;
-  const setValue = (next: string) => {
-    if (controlled === undefined) setOwn(next);
-    onChange?.(next);
-  };
   const [open, setOpen] = useState(false);
   const [active, setActive] = useState(-1);
   const listId = `${useId()}-list`;
@@ -59,7 +63,7 @@ export function CatalogCombobox({
   const expanded = open && shown.length > 0;
 
   const choose = (entry: CatalogEntry) => {
-    setValue(entry.name);
+    onChange(entry.name);
     setOpen(false);
     setActive(-1);
   };
@@ -82,63 +86,90 @@ export function CatalogCombobox({
   const onBlur = () => {
     setOpen(false);
     const entry = findCatalogEntry(entries, value);
-    if (entry && entry.name !== value) setValue(entry.name);
+    if (entry && entry.name !== value) onChange(entry.name);
   };
+  const typedKey = catalogKey(value);
 
+  return (
+    <div className="relative">
+      <input
+        {...control}
+        type="text"
+        role="combobox"
+        autoComplete="off"
+        aria-autocomplete="list"
+        aria-expanded={expanded}
+        aria-controls={listId}
+        aria-activedescendant={expanded && active >= 0 ? `${listId}-${active}` : undefined}
+        value={value}
+        onChange={(event) => {
+          onChange(event.currentTarget.value);
+          setOpen(true);
+          setActive(-1);
+        }}
+        onFocus={() => setOpen(true)}
+        onBlur={onBlur}
+        onKeyDown={onKeyDown}
+      />
+      <ul
+        id={listId}
+        role="listbox"
+        aria-label={`${label} suggestions`}
+        hidden={!expanded}
+        className="absolute z-20 mt-1 max-h-64 w-full overflow-auto rounded-md border border-ink-300 bg-white py-1 shadow-lg"
+      >
+        {shown.map((entry, i) => {
+          const alias =
+            typedKey === ""
+              ? undefined
+              : entry.aliases.find(
+                  (a) => catalogKey(a).includes(typedKey) && !catalogKey(entry.name).includes(typedKey),
+                );
+          return (
+            <li
+              key={entry.id}
+              id={`${listId}-${i}`}
+              role="option"
+              aria-selected={i === active}
+              // mousedown, not click: the input's blur would close the list before a click lands.
+              onMouseDown={(event) => {
+                event.preventDefault();
+                choose(entry);
+              }}
+              className={`cursor-pointer px-3 py-2 text-sm text-ink-900 ${i === active ? "bg-ink-100" : ""}`}
+            >
+              {entry.name}
+              {alias && <span className="text-ink-700"> (also “{alias}”)</span>}
+            </li>
+          );
+        })}
+      </ul>
+    </div>
+  );
+}
+
+/** The catalog picker with its own label, hint and error. */
+export function CatalogCombobox({
+  kind,
+  label,
+  name,
+  defaultValue,
+  value: controlled,
+  onChange,
+  error,
+  hint,
+  className,
+}: CatalogComboboxProps) {
+  const [own, setOwn] = useState(defaultValue ?? "");
+  const value = controlled ?? own;
+  const setValue = (next: string) => {
+    if (controlled === undefined) setOwn(next);
+    onChange?.(next);
+  };
   return (
     <Field label={label} name={name} error={error} hint={hint} className={className}>
       {(control) => (
-        <div className="relative">
-          <input
-            {...control}
-            type="text"
-            role="combobox"
-            autoComplete="off"
-            aria-autocomplete="list"
-            aria-expanded={expanded}
-            aria-controls={listId}
-            aria-activedescendant={expanded && active >= 0 ? `${listId}-${active}` : undefined}
-            value={value}
-            onChange={(event) => {
-              setValue(event.currentTarget.value);
-              setOpen(true);
-              setActive(-1);
-            }}
-            onFocus={() => setOpen(true)}
-            onBlur={onBlur}
-            onKeyDown={onKeyDown}
-          />
-          <ul
-            id={listId}
-            role="listbox"
-            aria-label={`${label} suggestions`}
-            hidden={!expanded}
-            className="absolute z-20 mt-1 max-h-64 w-full overflow-auto rounded-md border border-ink-300 bg-white py-1 shadow-lg"
-          >
-            {shown.map((entry, i) => {
-              const alias = entry.aliases.find((a) => catalogKey(a).includes(catalogKey(value)));
-              return (
-                <li
-                  key={entry.id}
-                  id={`${listId}-${i}`}
-                  role="option"
-                  aria-selected={i === active}
-                  // mousedown, not click: the input's blur would close the list before a click lands.
-                  onMouseDown={(event) => {
-                    event.preventDefault();
-                    choose(entry);
-                  }}
-                  className={`cursor-pointer px-3 py-2 text-sm ${i === active ? "bg-ink-100" : ""} text-ink-900`}
-                >
-                  {entry.name}
-                  {alias && catalogKey(value) !== "" && catalogKey(alias) !== catalogKey(entry.name) && (
-                    <span className="text-ink-700"> (also “{alias}”)</span>
-                  )}
-                </li>
-              );
-            })}
-          </ul>
-        </div>
+        <CatalogComboboxInput kind={kind} label={label} control={control} value={value} onChange={setValue} />
       )}
     </Field>
   );

@@ -1,4 +1,5 @@
 import type { FieldSet, LimitName } from "@shared/credentials/credential-fields.ts";
+import type { CatalogKind } from "@shared/machines/catalog.ts";
 
 export type FieldKind = "text" | "date" | "dollars" | "checkbox" | "level" | "state" | "names";
 
@@ -9,6 +10,8 @@ export type FieldDefinition = {
   kind: FieldKind;
   required?: boolean;
   hint?: string;
+  /** A text field picked from the machine catalog (builders, control families). */
+  catalog?: CatalogKind;
 };
 
 export const limitLabels: Record<LimitName, string> = {
@@ -99,8 +102,14 @@ export function fieldDefinitionsFor(fieldSet: FieldSet, typeCode: string): Field
       return cardFields;
     case "oem":
       return [
-        { path: "builder", label: "Machine builder", kind: "text", required: true },
-        { path: "controlFamily", label: "Control family", kind: "text", required: true },
+        { path: "builder", label: "Machine builder", kind: "text", required: true, catalog: "builder" },
+        {
+          path: "controlFamily",
+          label: "Control family",
+          kind: "text",
+          required: true,
+          catalog: "control_family",
+        },
         { path: "level", label: "Level", kind: "level", required: true },
         ...cardFields,
       ];
