@@ -20,7 +20,7 @@ export function Component() {
         title="Machine catalog"
         description="The machine builders and control families every machine form, card and directory search picks from. An alias is another spelling that means the same entry; matching ignores case and spacing."
       />
-      <div className="grid items-start gap-8 lg:grid-cols-[minmax(0,1fr)_22rem]">
+      <div className="grid grid-cols-1 items-start gap-8 lg:grid-cols-[minmax(0,1fr)_22rem]">
         <div className="space-y-8">
           <CatalogList kind="builder" title="Machine builders" entries={entries} />
           <CatalogList kind="control_family" title="Control families" entries={entries} />

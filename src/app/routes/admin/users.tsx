@@ -26,7 +26,7 @@ export function Component() {
         title="Users"
         description="Everyone who can sign in, by company, and whether they are invited, active or deactivated. Invite people; they choose their own password. Deactivating someone signs them out everywhere at once."
       />
-      <div className="grid items-start gap-8 lg:grid-cols-[minmax(0,1fr)_22rem]">
+      <div className="grid grid-cols-1 items-start gap-8 lg:grid-cols-[minmax(0,1fr)_22rem]">
         <section aria-labelledby="users-heading">
           <h2 id="users-heading" className="mb-3 text-lg font-semibold text-ink-900">
             All users <span className="text-base font-normal text-ink-700">({users.length})</span>
