@@ -37,8 +37,7 @@ export const navigationByRole: Record<Role, readonly NavItem[]> = {
     { label: "Job runs", to: paths.admin.jobRuns },
     { label: "Reported ratings", to: paths.admin.reportedReviews },
     { label: "Follow-up", to: paths.admin.followUp },
-    { label: "Companies", to: paths.admin.companies },
-    { label: "Machine catalog", to: paths.admin.machineCatalog },
+    { label: "Machines", to: paths.admin.machineCatalog },
   ],
 };
 

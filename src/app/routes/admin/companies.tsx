@@ -1,5 +1,8 @@
 import { useSuspenseQuery } from "@tanstack/react-query";
+import { Link } from "react-router-dom";
+import { buttonStyles } from "@/components/ui/button-styles.ts";
 import { PageHeader } from "@/components/ui/page-header.tsx";
+import { paths } from "@/config/paths.ts";
 import { companiesQuery } from "@/features/admin/api/get-companies.ts";
 import { CompaniesTable } from "@/features/admin/components/companies-table.tsx";
 import { queryClient } from "@/lib/query-client.ts";
@@ -18,6 +21,11 @@ export function Component() {
       <PageHeader
         title="Companies"
         description={`${shops} shops and ${services} service companies, with how many users, technicians and active sites each has.`}
+        actions={
+          <Link to={paths.admin.users} className={buttonStyles("secondary")}>
+            Users
+          </Link>
+        }
       />
       <CompaniesTable companies={companies} />
     </>

@@ -1,5 +1,8 @@
 import { useSuspenseQuery } from "@tanstack/react-query";
+import { Link } from "react-router-dom";
+import { buttonStyles } from "@/components/ui/button-styles.ts";
 import { PageHeader } from "@/components/ui/page-header.tsx";
+import { paths } from "@/config/paths.ts";
 import { companiesQuery } from "@/features/admin/api/get-companies.ts";
 import { usersQuery } from "@/features/admin/api/get-users.ts";
 import { InviteUserForm } from "@/features/admin/components/invite-user-form.tsx";
@@ -25,6 +28,11 @@ export function Component() {
       <PageHeader
         title="Users"
         description="Everyone who can sign in, by company, and whether they are invited, active or deactivated. Invite people; they choose their own password. Deactivating someone signs them out everywhere at once."
+        actions={
+          <Link to={paths.admin.companies} className={buttonStyles("secondary")}>
+            Companies ({companies.length})
+          </Link>
+        }
       />
       <div className="grid grid-cols-1 items-start gap-8 lg:grid-cols-[minmax(0,1fr)_22rem]">
         <section aria-labelledby="users-heading">
