@@ -42,8 +42,6 @@ type ControlProps = {
 
 type CatalogComboboxInputProps = {
   kind: CatalogKind;
-  /** Names the suggestion list for assistive technology. */
-  label: string;
   control: ControlProps;
   value: string;
   onChange: (value: string) => void;
@@ -54,7 +52,7 @@ type CatalogComboboxInputProps = {
  * popup). Typing an alias in any case or spacing and leaving the field writes the catalog's own name, so records and
  * searches agree; a name the catalog lacks is kept as typed. For forms that lay out their own label.
  */
-export function CatalogComboboxInput({ kind, label, control, value, onChange }: CatalogComboboxInputProps) {
+export function CatalogComboboxInput({ kind, control, value, onChange }: CatalogComboboxInputProps) {
   const entries = useCatalogChoices(kind);
   const [open, setOpen] = useState(false);
   const [active, setActive] = useState(-1);
@@ -114,7 +112,7 @@ export function CatalogComboboxInput({ kind, label, control, value, onChange }: 
       <ul
         id={listId}
         role="listbox"
-        aria-label={`${label} suggestions`}
+        aria-label="Catalog suggestions"
         hidden={!expanded}
         className="absolute z-20 mt-1 max-h-64 w-full overflow-auto rounded-md border border-ink-300 bg-white py-1 shadow-lg"
       >
@@ -168,9 +166,7 @@ export function CatalogCombobox({
   };
   return (
     <Field label={label} name={name} error={error} hint={hint} className={className}>
-      {(control) => (
-        <CatalogComboboxInput kind={kind} label={label} control={control} value={value} onChange={setValue} />
-      )}
+      {(control) => <CatalogComboboxInput kind={kind} control={control} value={value} onChange={setValue} />}
     </Field>
   );
 }

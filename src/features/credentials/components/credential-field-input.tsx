@@ -91,13 +91,7 @@ export function CredentialFieldInput({
         </p>
       )}
       {definition.catalog ? (
-        <CatalogComboboxInput
-          kind={definition.catalog}
-          label={definition.label}
-          control={common}
-          value={text}
-          onChange={onChange}
-        />
+        <CatalogComboboxInput kind={definition.catalog} control={common} value={text} onChange={onChange} />
       ) : definition.kind === "level" ? (
         <select {...common} value={text} onChange={(event) => onChange(event.currentTarget.value)}>
           <option value="">Choose a level</option>
