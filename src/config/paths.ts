@@ -78,7 +78,9 @@ export const hrefs = {
   gateSign: (siteId: number) => `/sites/${siteId}/gate-sign`,
   buyerServiceRequest: (id: number) => `/buyer/service-requests/${id}`,
   providerServiceRequest: (id: number) => `/provider/service-requests/${id}`,
-  workOrderNew: (technicianId: number) => `/work-orders/new?technicianId=${technicianId}`,
+  /** With the site the buyer searched from, so the work order starts on that site and its requirement set. */
+  workOrderNew: (technicianId: number, siteId?: number | null) =>
+    `/work-orders/new?technicianId=${technicianId}${siteId ? `&siteId=${siteId}` : ""}`,
   /** The upload flow with the type and holder chosen already (a renewal, or a corrected returned document). */
   documentNew: (preset: { typeCode?: string | undefined; technicianId?: number | null | undefined } = {}) => {
     const query = new URLSearchParams();
