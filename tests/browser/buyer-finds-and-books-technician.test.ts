@@ -55,7 +55,10 @@ describe("a buyer finds a cleared technician and books the job", () => {
     await buyer.getByLabel("Site name").fill("Rockford main plant");
     await buyer.getByLabel("Street address").fill("400 Millrace Avenue");
     await buyer.getByLabel("ZIP code").fill(SITE_ZIP);
-    await buyer.getByRole("region", { name: "New site" }).getByText(/Rockford, IL/).waitFor();
+    await buyer
+      .getByRole("region", { name: "New site" })
+      .getByText(/Rockford, IL/)
+      .waitFor();
     await buyer.getByRole("button", { name: "Add site", exact: true }).click();
     await buyer.getByRole("heading", { name: "Rockford main plant" }).waitFor();
     // The demo shop has a plant already; the machine goes to the new site's own form. The builder is typed by its
