@@ -7,11 +7,12 @@ export async function startJobRun(
   job: string,
   asOf: Date,
   startedAt: Date,
+  startedBy: number | null = null,
 ): Promise<number> {
   const [row] = await selectRows<{ id: number }>(
     transaction,
-    "INSERT INTO job_runs (job, as_of, started_at) VALUES ($1, $2, $3) RETURNING id",
-    [job, asOf, startedAt],
+    "INSERT INTO job_runs (job, as_of, started_at, started_by) VALUES ($1, $2, $3, $4) RETURNING id",
+    [job, asOf, startedAt, startedBy],
   );
   return row!.id;
 }
@@ -28,4 +29,19 @@ export async function finishJobRun(
     JSON.stringify(counts),
   ]);
   return finishedAt;
+}
+
+/** The audit event of a run an admin started by hand, written in the run's transaction so a rolled-back run leaves none. */
+export async function recordManualRun(
+  transaction: Transaction,
+  adminId: number,
+  jobRunId: number,
+  asOf: Date,
+): Promise<void> {
+  await runStatement(
+    transaction,
+    `INSERT INTO audit_events (actor_user_id, action, subject_type, subject_id, before, after)
+     VALUES ($1, 'job.run_manually', 'job_run', $2, NULL, jsonb_build_object('job', 'lapse', 'asOf', $3::timestamptz))`,
+    [adminId, jobRunId, asOf],
+  );
 }

@@ -11,7 +11,7 @@ import { refreshStandings, type ChangedStanding } from "../server/standing/index
 import { countStatements, selectRows } from "../server/db/sql.ts";
 import { remindMaintenanceDue } from "../server/machines/maintenance-reminders.ts";
 import { JOB_LOCK_KEYS, withAdvisoryLock } from "./advisory-lock.ts";
-import { finishJobRun, startJobRun } from "./job-run-record.ts";
+import { finishJobRun, recordManualRun, startJobRun } from "./job-run-record.ts";
 
 export interface LapseJobDeps {
   /** Connection to run on (tests race two pools); defaults to the app's. */
@@ -20,6 +20,8 @@ export interface LapseJobDeps {
   warningDays?: readonly number[];
   /** Base of the links in the e-mails (config PUBLIC_URL). */
   publicUrl?: string;
+  /** The admin who started this run by hand; the run is recorded as theirs and audited in its own transaction. */
+  startedBy?: number;
 }
 
 export interface LapseJobReport {
@@ -149,7 +151,8 @@ export async function runLapseJob(
         timings[step] = Math.round(performance.now() - start);
         return value;
       };
-      const jobRunId = await startJobRun(transaction, "lapse", asOf, startedAt);
+      const jobRunId = await startJobRun(transaction, "lapse", asOf, startedAt, deps.startedBy ?? null);
+      if (deps.startedBy !== undefined) await recordManualRun(transaction, deps.startedBy, jobRunId, asOf);
       const lapsed = await timed("lapse", () => lapseCredentials(transaction, asOf, jobRunId));
       const warned = await timed("warn", () =>
         createWarningNotices(transaction, { asOf, thresholds: warningDays, jobRunId }),

@@ -20,6 +20,7 @@ import { noticeRoutes } from "./notices/index.ts";
 import { credentialRoutes } from "./credentials/index.ts";
 import { buyerRouters } from "./directory/buyer-routers.ts";
 import { brokerRoutes } from "./credentials/broker-routes.ts";
+import { adminJobRoutes } from "./admin/index.ts";
 import { workOrderRoutes } from "./work-orders/index.ts";
 import { reviewRoutes } from "./reviews/index.ts";
 import { serviceRequestRoutes } from "./service-requests/index.ts";
@@ -72,6 +73,7 @@ const apiRouters = [
   machineTransferRoutes,
   brokerRoutes,
   maintenanceRoutes,
+  adminJobRoutes,
 ];
 
 export function createApp({ config, sessionPool, clientDir }: AppDeps): Express {

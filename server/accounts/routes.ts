@@ -1,6 +1,7 @@
 import type { NextFunction, Request, Response } from "express";
 import {
   inviteUserSchema,
+  userParamsSchema,
   requestPasswordResetSchema,
   setPasswordSchema,
   signInSchema,
@@ -16,11 +17,10 @@ import { kickOutbox } from "../mail/outbox.ts";
 import { canManageUsers } from "./policy.ts";
 import { abuseLimit } from "./abuse-limits.ts";
 import { toSessionUser } from "./dto.ts";
+import { listCompanies, listUsers, setUserActive } from "./user-status.ts";
 import {
   findCurrentUser,
   inviteUser,
-  listCompanies,
-  listUsers,
   requestPasswordReset,
   setPasswordWithToken,
   signUpCompany,
@@ -106,4 +106,16 @@ adminUserRoutes.post(
     kickOutbox(req.app.locals);
     res.status(201).json(invited);
   },
+);
+
+adminUserRoutes.post(
+  "/users/:userId/deactivate",
+  { allow: canManageUsers, params: userParamsSchema },
+  (req, _res, { params }) => setUserActive(req.user!, params.userId, false),
+);
+
+adminUserRoutes.post(
+  "/users/:userId/reactivate",
+  { allow: canManageUsers, params: userParamsSchema },
+  (req, _res, { params }) => setUserActive(req.user!, params.userId, true),
 );

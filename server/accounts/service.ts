@@ -204,23 +204,3 @@ export async function createInvitedUser(
     throw err;
   }
 }
-
-export async function listUsers() {
-  const [users, companies] = await Promise.all([User.findAll({ order: [["id", "ASC"]] }), Company.findAll()]);
-  const names = new Map(companies.map((c) => [c.id, c.name]));
-  return users.map((u) => ({
-    id: u.id,
-    email: u.email,
-    name: u.name,
-    role: u.role,
-    companyId: u.companyId,
-    companyName: names.get(u.companyId) ?? "",
-    active: u.active,
-    invited: u.passwordHash === null,
-  }));
-}
-
-export async function listCompanies() {
-  const companies = await Company.findAll({ order: [["name", "ASC"]] });
-  return companies.map((c) => ({ id: c.id, name: c.name, kind: c.kind }));
-}

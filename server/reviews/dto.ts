@@ -13,7 +13,12 @@ async function namesFor(rows: JobReview[]) {
     Company.findAll({ where: { id: ids((r) => r.shopCompanyId) }, attributes: ["id", "name"] }),
     User.findAll({
       where: {
-        id: [...ids((r) => r.authorUserId), ...ids((r) => r.reportedBy), ...ids((r) => r.excludedBy)],
+        id: [
+          ...ids((r) => r.authorUserId),
+          ...ids((r) => r.reportedBy),
+          ...ids((r) => r.excludedBy),
+          ...ids((r) => r.keptBy),
+        ],
       },
       attributes: ["id", "name"],
     }),
@@ -65,6 +70,7 @@ export async function toReportedReviewDtos(rows: JobReview[]): Promise<ReportedR
           by: names.user.get(r.excludedBy ?? 0) ?? "",
         }
       : null,
+    kept: r.keptAt ? { at: r.keptAt.toISOString(), by: names.user.get(r.keptBy ?? 0) ?? "" } : null,
     reportedBy: { id: r.reportedBy ?? 0, name: names.user.get(r.reportedBy ?? 0) ?? "" },
     technicianName: names.technician.get(r.technicianId) ?? "",
   }));

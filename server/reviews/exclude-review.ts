@@ -5,7 +5,7 @@ import { JobReview } from "./model.ts";
 import { toReportedReviewDtos } from "./dto.ts";
 
 /**
- * Leaves a review flagged as possible self-rating out of the technician's score. The review stays (reviews are never
+ * Leaves a reported review, or one flagged as possible self-rating, out of the technician's score. The review stays (reviews are never
  * deleted); the running totals lose its stars in the same transaction, so the stored ranking score (computed from
  * them) recomputes at once.
  */
@@ -13,15 +13,15 @@ export async function excludeReviewFromScore(admin: Express.User, reviewId: numb
   const review = await db().transaction(async (transaction) => {
     const row = await JobReview.findByPk(reviewId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!row) throw new AppError("not_found", "That review was not found");
-    if (row.selfRatingSignals.length === 0)
+    if (row.selfRatingSignals.length === 0 && row.reportedAt === null)
       throw new AppError(
         "conflict",
-        "Only a review flagged as possible self-rating can be left out of the score",
+        "Only a reported review, or one flagged as possible self-rating, can be left out of the score",
       );
     if (row.excludedAt !== null)
       throw new AppError("conflict", "This review is already left out of the score");
     await row.update(
-      { excludedAt: new Date(), excludedBy: admin.id, exclusionReason: reason },
+      { excludedAt: new Date(), excludedBy: admin.id, exclusionReason: reason, keptAt: null, keptBy: null },
       { transaction },
     );
     await db().query(
@@ -38,6 +38,35 @@ export async function excludeReviewFromScore(admin: Express.User, reviewId: numb
         subjectId: row.id,
         before: { excluded: false },
         after: { excluded: true, reason, signals: row.selfRatingSignals },
+      },
+      transaction,
+    );
+    return row;
+  });
+  return (await toReportedReviewDtos([review]))[0]!;
+}
+
+/**
+ * Settles a report by keeping the review counted as it is. Nothing about the review changes; the decision is recorded
+ * so the queue shows it settled, and audited. A review already left out of the score is not put back this way.
+ */
+export async function keepReportedReview(admin: Express.User, reviewId: number) {
+  const review = await db().transaction(async (transaction) => {
+    const row = await JobReview.findByPk(reviewId, { transaction, lock: transaction.LOCK.UPDATE });
+    if (!row) throw new AppError("not_found", "That review was not found");
+    if (row.selfRatingSignals.length === 0 && row.reportedAt === null)
+      throw new AppError("conflict", "Only a reported or flagged review awaits a decision");
+    if (row.excludedAt !== null)
+      throw new AppError("conflict", "This review is already left out of the score");
+    if (row.keptAt !== null) throw new AppError("conflict", "This review has been kept already");
+    await row.update({ keptAt: new Date(), keptBy: admin.id }, { transaction });
+    await recordAudit(
+      {
+        actorUserId: admin.id,
+        action: "review.kept",
+        subjectType: "job_review",
+        subjectId: row.id,
+        after: { kept: true, reportReason: row.reportReason, signals: row.selfRatingSignals },
       },
       transaction,
     );

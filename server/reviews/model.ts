@@ -25,6 +25,8 @@ export class JobReview extends Model<InferAttributes<JobReview>, InferCreationAt
   declare excludedAt: CreationOptional<Date | null>;
   declare excludedBy: CreationOptional<number | null>;
   declare exclusionReason: CreationOptional<string | null>;
+  declare keptAt: CreationOptional<Date | null>;
+  declare keptBy: CreationOptional<number | null>;
   declare createdAt: CreationOptional<Date>;
 }
 
@@ -48,6 +50,8 @@ export function initReviewModel(sequelize: Sequelize) {
       excludedAt: { type: DataTypes.DATE, allowNull: true },
       excludedBy: { type: DataTypes.INTEGER, allowNull: true },
       exclusionReason: { type: DataTypes.TEXT, allowNull: true },
+      keptAt: { type: DataTypes.DATE, allowNull: true },
+      keptBy: { type: DataTypes.INTEGER, allowNull: true },
       createdAt: DataTypes.DATE,
     },
     { sequelize, tableName: "job_reviews", underscored: true, updatedAt: false },

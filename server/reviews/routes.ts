@@ -18,7 +18,7 @@ import {
   canWriteReview,
 } from "./policy.ts";
 import { writeReview } from "./write-review.ts";
-import { excludeReviewFromScore } from "./exclude-review.ts";
+import { excludeReviewFromScore, keepReportedReview } from "./exclude-review.ts";
 import { replyToReview, reportReview } from "./answer-review.ts";
 import { findWorkOrderReview, listReportedReviews, listTechnicianReviews } from "./find-reviews.ts";
 
@@ -56,6 +56,12 @@ reviewRoutes.post(
   "/admin/reviews/:reviewId/exclude",
   { allow: canModerateReviews, params: reviewParamsSchema, body: excludeReviewSchema },
   (req, _res, { params, body }) => excludeReviewFromScore(req.user!, params.reviewId, body.reason),
+);
+
+reviewRoutes.post(
+  "/admin/reviews/:reviewId/keep",
+  { allow: canModerateReviews, params: reviewParamsSchema },
+  (req, _res, { params }) => keepReportedReview(req.user!, params.reviewId),
 );
 
 reviewRoutes.get(

@@ -14,7 +14,7 @@ export function toRequirementSetDto(set: RequirementSet): RequirementSetDto {
   };
 }
 
-export function toJobRunDto(run: JobRun): JobRunDto {
+export function toJobRunDto(run: JobRun, starterNames: Map<number, string> = new Map()): JobRunDto {
   return {
     id: run.id,
     job: run.job,
@@ -24,5 +24,7 @@ export function toJobRunDto(run: JobRun): JobRunDto {
     counts: run.counts,
     attempt: run.attempt,
     error: run.error,
+    startedBy:
+      run.startedBy === null ? null : { id: run.startedBy, name: starterNames.get(run.startedBy) ?? "" },
   };
 }

@@ -1,3 +1,4 @@
+import { User } from "../accounts/index.ts";
 import { toJobRunDto } from "./dto.ts";
 import { JobRun } from "./model.ts";
 
@@ -9,5 +10,10 @@ export async function listJobRuns(limit = 50) {
     ],
     limit,
   });
-  return runs.map(toJobRunDto);
+  const starterIds = [...new Set(runs.flatMap((r) => (r.startedBy === null ? [] : [r.startedBy])))];
+  const starters = starterIds.length
+    ? await User.findAll({ where: { id: starterIds }, attributes: ["id", "name"] })
+    : [];
+  const names = new Map(starters.map((u) => [u.id, u.name]));
+  return runs.map((run) => toJobRunDto(run, names));
 }

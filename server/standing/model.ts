@@ -41,6 +41,7 @@ export class JobRun extends Model<InferAttributes<JobRun>, InferCreationAttribut
   declare counts: Record<string, unknown>;
   declare attempt: CreationOptional<number>;
   declare error: CreationOptional<string | null>;
+  declare startedBy: CreationOptional<number | null>;
 }
 
 export function initStandingTables(sequelize: Sequelize) {
@@ -76,6 +77,7 @@ export function initStandingTables(sequelize: Sequelize) {
       counts: { type: DataTypes.JSONB, allowNull: false, defaultValue: {} },
       attempt: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
       error: { type: DataTypes.TEXT, allowNull: true },
+      startedBy: { type: DataTypes.INTEGER, allowNull: true },
     },
     { sequelize, tableName: "job_runs", underscored: true, timestamps: false },
   );

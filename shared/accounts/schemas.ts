@@ -101,6 +101,34 @@ export const inviteUserSchema = z.object({
 });
 export type InviteUser = z.infer<typeof inviteUserSchema>;
 
+export const userParamsSchema = z.object({
+  userId: z.coerce.number().int().positive().max(2_147_483_647),
+});
+
+/** Invited: has not chosen a password yet. Deactivated: may not sign in, and every session of theirs has ended. */
+export const userStatuses = ["invited", "active", "deactivated"] as const;
+export type UserStatus = (typeof userStatuses)[number];
+
+export interface AdminUserDto {
+  id: number;
+  email: string;
+  name: string;
+  role: Role;
+  companyId: number;
+  companyName: string;
+  status: UserStatus;
+}
+
+export interface AdminCompanyDto {
+  id: number;
+  name: string;
+  kind: CompanyKind;
+  createdAt: string;
+  users: number;
+  technicians: number;
+  sites: number;
+}
+
 export const currentUserSchema = z.object({
   id: z.number(),
   email: z.string(),

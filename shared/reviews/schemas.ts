@@ -68,6 +68,8 @@ export interface ReportedReviewDto extends ReviewDto {
   reportedAt: string | null;
   selfRatingSignals: SelfRatingSignal[];
   excluded: { at: string; reason: string; by: string } | null;
+  /** An admin read the report and kept the review counted as it is. */
+  kept: { at: string; by: string } | null;
   reportReason: string;
   reportedBy: { id: number; name: string };
   technicianName: string;

@@ -75,4 +75,6 @@ export interface JobRunDto {
   attempt: number;
   /** Why the run failed; null for a run that finished. */
   error: string | null;
+  /** The admin who ran it by hand ("Run the daily job now"); null for a scheduled run. */
+  startedBy: { id: number; name: string } | null;
 }

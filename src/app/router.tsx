@@ -165,6 +165,11 @@ export const router = createBrowserRouter([
                 lazy: () => import("./routes/admin/reported-reviews.tsx"),
               },
               { path: paths.admin.followUp, lazy: () => import("./routes/admin/follow-up.tsx") },
+              { path: paths.admin.companies, lazy: () => import("./routes/admin/companies.tsx") },
+              {
+                path: paths.admin.machineCatalog,
+                lazy: () => import("./routes/admin/machine-catalog.tsx"),
+              },
             ],
           },
         ],

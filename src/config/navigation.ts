@@ -39,6 +39,7 @@ export const navigationByRole: Record<Role, readonly NavItem[]> = {
     { label: "Job runs", to: paths.admin.jobRuns },
     { label: "Reported ratings", to: paths.admin.reportedReviews },
     { label: "Follow-up", to: paths.admin.followUp },
+    { label: "Machines", to: paths.admin.machineCatalog },
   ],
 };
 

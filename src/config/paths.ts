@@ -69,6 +69,8 @@ export const paths = {
     jobRuns: "/admin/job-runs",
     reportedReviews: "/admin/reviews",
     followUp: "/admin/follow-up",
+    companies: "/admin/companies",
+    machineCatalog: "/admin/machine-catalog",
   },
 } as const;
 
@@ -85,7 +87,9 @@ export const hrefs = {
   providerServiceRequest: (id: number) => `/provider/service-requests/${id}`,
   machine: (id: number) => `/machines/${id}`,
   machineTransfer: (machineId: number) => `/machines/${machineId}/transfer`,
-  workOrderNew: (technicianId: number) => `/work-orders/new?technicianId=${technicianId}`,
+  /** With the site the buyer searched from, so the work order starts on that site and its requirement set. */
+  workOrderNew: (technicianId: number, siteId?: number | null) =>
+    `/work-orders/new?technicianId=${technicianId}${siteId ? `&siteId=${siteId}` : ""}`,
   /** The upload flow with the type and holder chosen already (a renewal, or a corrected returned document). */
   documentNew: (preset: { typeCode?: string | undefined; technicianId?: number | null | undefined } = {}) => {
     const query = new URLSearchParams();

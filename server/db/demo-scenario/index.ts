@@ -8,6 +8,7 @@ import { db } from "../sequelize.ts";
 import { buildDemoWorld } from "./build-demo-world.ts";
 import { demoCompanies } from "./companies.ts";
 import { insertDemoWorld } from "./insert-demo-world.ts";
+import { insertDemoBuyerSite } from "./buyer-site.ts";
 import { commitStagedFiles, discardStagedFiles, stageDemoFiles } from "./stage-demo-files.ts";
 import { Company, User } from "../models.ts";
 
@@ -45,6 +46,7 @@ export async function loadDemoScenarioOnce({
   try {
     await db().transaction(async (transaction) => {
       await insertDemoWorld(world, files, passwordHash, transaction);
+      await insertDemoBuyerSite(transaction);
       await afterDemoLoaded(today, transaction);
       await insertDemoServiceRequests(today, transaction);
       await insertDemoMachineHistory(today, transaction);

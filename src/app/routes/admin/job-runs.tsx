@@ -1,8 +1,11 @@
 import { useSuspenseQuery } from "@tanstack/react-query";
 import { Button } from "@/components/ui/button.tsx";
+import { FormError } from "@/components/ui/form-error.tsx";
 import { PageHeader } from "@/components/ui/page-header.tsx";
 import { jobRunsQuery } from "@/features/job-runs/api/get-job-runs.ts";
+import { useRunDailyJob } from "@/features/job-runs/api/run-daily-job.ts";
 import { JobRunsTable } from "@/features/job-runs/components/job-runs-table.tsx";
+import { formatDateTime } from "@/lib/format-date-time.ts";
 import { queryClient } from "@/lib/query-client.ts";
 
 export async function loader() {
@@ -12,6 +15,7 @@ export async function loader() {
 
 export function Component() {
   const { data: runs, refetch, isFetching } = useSuspenseQuery(jobRunsQuery());
+  const runNow = useRunDailyJob();
   return (
     <>
       <PageHeader
@@ -28,6 +32,30 @@ export function Component() {
           </Button>
         }
       />
+      <section
+        aria-labelledby="run-now-heading"
+        className="mb-6 space-y-2 rounded-lg border border-ink-100 bg-white p-4"
+      >
+        <h2 id="run-now-heading" className="font-semibold text-ink-900">
+          Run the daily job now
+        </h2>
+        <p className="text-sm text-ink-700">
+          Lapses what has ended, sends the due warnings and refreshes standings, as of this moment. Only today
+          can be judged: a past or future date would lapse or warn on the wrong day. The run is listed below
+          as yours.
+        </p>
+        <FormError error={runNow.error} />
+        <Button pending={runNow.isPending} pendingLabel="Running…" onClick={() => runNow.mutate()}>
+          Run the daily job now
+        </Button>
+        {runNow.data && (
+          <p role="status" className="text-sm text-ink-900">
+            Ran as of {formatDateTime(runNow.data.asOf)}: {runNow.data.lapsed} lapsed,{" "}
+            {runNow.data.noticesCreated} notices, {runNow.data.emailsQueued} e-mails queued,{" "}
+            {runNow.data.changedStandings} standings changed.
+          </p>
+        )}
+      </section>
       <JobRunsTable runs={runs} />
     </>
   );

@@ -21,8 +21,8 @@ export function Component() {
       <p className="mb-4 rounded-md border border-ink-100 bg-ink-50 px-4 py-3 text-sm text-ink-900">
         <span className="font-semibold">Reviews are never deleted,</span> so there is no delete button here. A
         rating is part of a technician&apos;s record of confirmed work; read the report and take it up with
-        the shop or the service company directly. A rating flagged as possible self-rating can be left out of
-        the score, with a reason; it stays on the record.
+        the shop or the service company directly. Keep a reported rating in the score, or leave it out of the
+        score with a reason; either way it stays on the record.
       </p>
       {reviews.length === 0 ? (
         <EmptyState title="No reported ratings">

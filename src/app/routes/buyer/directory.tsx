@@ -1,6 +1,6 @@
 import { useState } from "react";
 import { useSuspenseQuery } from "@tanstack/react-query";
-import { Link, useSearchParams, type LoaderFunctionArgs } from "react-router-dom";
+import { Link, redirect, useSearchParams, type LoaderFunctionArgs } from "react-router-dom";
 import { directoryQuerySchema, directorySorts, type DirectorySort } from "@shared/directory/schemas.ts";
 import { CLEARED_MEANS } from "@shared/safety/cautions.ts";
 import { technologyLabels, type MachineTechnology } from "@shared/technicians/schemas.ts";
@@ -16,6 +16,7 @@ import { credentialTypesQuery } from "@/features/credentials/api/get-credential-
 import { directorySearchQuery, useDirectorySearch } from "@/features/directory/api/search-directory.ts";
 import { filterWords } from "@/features/directory/components/directory-format.ts";
 import {
+  activeFilterCount,
   draftFromSearch,
   onSiteHoursOf,
   searchFromDraft,
@@ -40,8 +41,33 @@ const sortLabels: Record<DirectorySort, string> = {
 const normalSearch = (params: URLSearchParams) =>
   searchFromDraft(draftFromSearch(params), params.get("sort") ?? "").toString();
 
+/** Set when the buyer asked for every location, so an empty search is not sent back to the default site. */
+const EVERYWHERE = "everywhere";
+
+/**
+ * The site a buyer decides for when they name none: the first site with its own requirement set, else their only
+ * site. Opening the directory plainly starts there, so the first search already applies the site's rules.
+ */
+function defaultSiteId(
+  sites: readonly { id: number; active: boolean }[],
+  sets: readonly { siteId: number | null; active: boolean }[],
+): number | null {
+  const open = sites.filter((s) => s.active);
+  const ruled = open.find((site) => sets.some((set) => set.active && set.siteId === site.id));
+  return ruled?.id ?? (open.length === 1 ? open[0]!.id : null);
+}
+
 export async function loader({ request }: LoaderFunctionArgs) {
-  const search = normalSearch(new URL(request.url).searchParams);
+  const url = new URL(request.url);
+  if (url.search === "") {
+    const [sites, sets] = await Promise.all([
+      queryClient.ensureQueryData(sitesQuery()),
+      queryClient.ensureQueryData(requirementSetsQuery()),
+    ]);
+    const siteId = defaultSiteId(sites, sets);
+    if (siteId !== null) return redirect(`${url.pathname}?siteId=${siteId}`);
+  }
+  const search = normalSearch(url.searchParams);
   await Promise.all([
     queryClient.ensureQueryData(sitesQuery()),
     queryClient.ensureQueryData(requirementSetsQuery()),
@@ -136,10 +162,11 @@ function Search({ params }: { params: URLSearchParams }) {
     const parsed = directoryQuerySchema.safeParse(Object.fromEntries(query));
     if (!parsed.success) {
       setInvalid(parsed.error);
-      return;
+      return false;
     }
     setInvalid(null);
-    setSearchParams(query);
+    setSearchParams(query.size === 0 ? new URLSearchParams({ [EVERYWHERE]: "1" }) : query);
+    return true;
   };
 
   return (
@@ -148,7 +175,7 @@ function Search({ params }: { params: URLSearchParams }) {
         draft={draft}
         onChange={setDraft}
         onSubmit={() => apply(draft, sort)}
-        onClear={() => setSearchParams(new URLSearchParams())}
+        onClear={() => setSearchParams(new URLSearchParams({ [EVERYWHERE]: "1" }))}
         sites={sites.map((s) => ({ value: String(s.id), label: s.name }))}
         machines={(equipment.data ?? []).map((m) => ({
           id: m.id,
@@ -160,6 +187,7 @@ function Search({ params }: { params: URLSearchParams }) {
         requirementSets={sets.map((s) => ({ value: String(s.id), label: s.name }))}
         credentialTypes={types.filter((t) => t.active).map((t) => ({ code: t.code, name: t.name }))}
         error={invalid}
+        activeCount={activeFilterCount(draftFromSearch(params))}
       />
       {sites.length === 0 && (
         <p className="text-sm text-ink-700">

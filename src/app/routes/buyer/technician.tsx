@@ -104,7 +104,7 @@ export function Component() {
         actions={
           <>
             <AddToRoster technician={t} />
-            <Link to={hrefs.workOrderNew(t.technicianId)} className={buttonStyles("primary")}>
+            <Link to={hrefs.workOrderNew(t.technicianId, t.chosenSiteId)} className={buttonStyles("primary")}>
               Raise a work order
             </Link>
           </>

@@ -66,7 +66,7 @@ export function Component() {
         </h2>
         <WorkOrdersToAnswer workOrders={toAnswer} />
       </section>
-      <div className="grid grid-cols-[minmax(0,1fr)] items-start gap-8 lg:grid-cols-[minmax(0,1fr)_22rem]">
+      <div className="grid grid-cols-1 items-start gap-8 lg:grid-cols-[minmax(0,1fr)_22rem]">
         <section aria-labelledby="lapsing-heading" className="space-y-4">
           <h2 id="lapsing-heading" className="text-lg font-semibold text-ink-900">
             What lapses next{" "}

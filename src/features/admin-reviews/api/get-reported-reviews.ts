@@ -25,6 +25,7 @@ export const reportedReviewSchema = z.object({
   reportedBy: z.object({ id: z.number(), name: z.string() }),
   selfRatingSignals: z.array(z.enum(["email_domain", "phone", "address"])),
   excluded: z.object({ at: z.string(), reason: z.string(), by: z.string() }).nullable(),
+  kept: z.object({ at: z.string(), by: z.string() }).nullable(),
 });
 export type ReportedReview = z.infer<typeof reportedReviewSchema>;
 

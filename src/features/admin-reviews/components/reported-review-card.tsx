@@ -1,5 +1,8 @@
 import { formatDateTime } from "@/lib/format-date-time.ts";
 import type { ReportedReview } from "../api/get-reported-reviews.ts";
+import { Button } from "@/components/ui/button.tsx";
+import { FormError } from "@/components/ui/form-error.tsx";
+import { useKeepReview } from "../api/keep-review.ts";
 import { ExcludeReviewForm } from "./exclude-review-form.tsx";
 
 const MAX_STARS = 5;
@@ -68,18 +71,47 @@ export function ReportedReviewCard({ review }: { review: ReportedReview }) {
             Possible self-rating: the shop and the service company share{" "}
             {review.selfRatingSignals.map((s) => SIGNAL_WORDS[s]).join(", ")}.
           </p>
-          {review.excluded ? (
-            <p className="text-sm text-ink-900">
-              <span className="font-semibold">Left out of the score</span> by{" "}
-              {review.excluded.by || "an admin"} ·{" "}
-              <time dateTime={review.excluded.at}>{formatDateTime(review.excluded.at)}</time>:{" "}
-              {review.excluded.reason}
-            </p>
-          ) : (
-            <ExcludeReviewForm reviewId={review.id} />
-          )}
         </div>
       )}
+      <ReviewDecision review={review} />
     </article>
+  );
+}
+
+/** Keep it counted, or leave it out of the score with a reason; either way the review stays on the record. */
+function ReviewDecision({ review }: { review: ReportedReview }) {
+  const keep = useKeepReview();
+  if (review.excluded)
+    return (
+      <p className="text-sm text-ink-900">
+        <span aria-hidden="true">✕ </span>
+        <span className="font-semibold">Left out of the score</span> by {review.excluded.by || "an admin"} ·{" "}
+        <time dateTime={review.excluded.at}>{formatDateTime(review.excluded.at)}</time>:{" "}
+        {review.excluded.reason}
+      </p>
+    );
+  return (
+    <div className="space-y-3 border-t border-ink-100 pt-3">
+      {review.kept ? (
+        <p className="text-sm text-ink-900">
+          <span aria-hidden="true">✓ </span>
+          <span className="font-semibold">Kept in the score</span> by {review.kept.by || "an admin"} ·{" "}
+          <time dateTime={review.kept.at}>{formatDateTime(review.kept.at)}</time>
+        </p>
+      ) : (
+        <div className="space-y-1">
+          <FormError error={keep.error} />
+          <Button
+            variant="secondary"
+            pending={keep.isPending}
+            pendingLabel="Saving"
+            onClick={() => keep.mutate(review.id)}
+          >
+            Keep in the score
+          </Button>
+        </div>
+      )}
+      <ExcludeReviewForm reviewId={review.id} />
+    </div>
   );
 }

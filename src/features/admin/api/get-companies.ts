@@ -4,8 +4,16 @@ import { companyKinds } from "@shared/accounts/schemas.ts";
 import { api } from "@/lib/api-client.ts";
 import { adminKeys } from "./admin-keys.ts";
 
-// Shape of GET /api/admin/companies; shared/ has no schema for it yet.
-export const adminCompanySchema = z.object({ id: z.number(), name: z.string(), kind: z.enum(companyKinds) });
+// Run-time check of shared/accounts/schemas.ts AdminCompanyDto.
+export const adminCompanySchema = z.object({
+  id: z.number(),
+  name: z.string(),
+  kind: z.enum(companyKinds),
+  createdAt: z.string(),
+  users: z.number(),
+  technicians: z.number(),
+  sites: z.number(),
+});
 export type AdminCompany = z.infer<typeof adminCompanySchema>;
 
 export const getCompanies = () => api.get("/admin/companies", z.array(adminCompanySchema));

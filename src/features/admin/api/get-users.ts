@@ -1,10 +1,10 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
 import { z } from "zod";
-import { roleSchema } from "@shared/accounts/schemas.ts";
+import { roleSchema, userStatuses } from "@shared/accounts/schemas.ts";
 import { api } from "@/lib/api-client.ts";
 import { adminKeys } from "./admin-keys.ts";
 
-// Shape of GET /api/admin/users; shared/ has no schema for it yet.
+// Run-time check of shared/accounts/schemas.ts AdminUserDto.
 export const adminUserSchema = z.object({
   id: z.number(),
   email: z.string(),
@@ -12,6 +12,7 @@ export const adminUserSchema = z.object({
   role: roleSchema,
   companyId: z.number(),
   companyName: z.string(),
+  status: z.enum(userStatuses),
 });
 export type AdminUser = z.infer<typeof adminUserSchema>;
 

@@ -1,4 +1,5 @@
 import { useId } from "react";
+import { CatalogComboboxInput } from "@/components/ui/catalog-combobox.tsx";
 import { fieldInputStyles } from "@/components/ui/field-styles.ts";
 import type { FieldDefinition } from "./field-definitions.ts";
 import { ReadMarker } from "./read-marker.tsx";
@@ -89,7 +90,9 @@ export function CredentialFieldInput({
           {definition.hint}
         </p>
       )}
-      {definition.kind === "level" ? (
+      {definition.catalog ? (
+        <CatalogComboboxInput kind={definition.catalog} control={common} value={text} onChange={onChange} />
+      ) : definition.kind === "level" ? (
         <select {...common} value={text} onChange={(event) => onChange(event.currentTarget.value)}>
           <option value="">Choose a level</option>
           <option value="1">1 — operator</option>

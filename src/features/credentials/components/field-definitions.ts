@@ -1,5 +1,6 @@
 import type { FieldSet } from "@shared/credentials/credential-fields.ts";
 import { LIMIT_LABELS, limitLinesFor } from "@shared/credentials/limit-lines.ts";
+import type { CatalogKind } from "@shared/machines/catalog.ts";
 
 export type FieldKind = "text" | "date" | "dollars" | "checkbox" | "level" | "state" | "names";
 
@@ -10,6 +11,8 @@ export type FieldDefinition = {
   kind: FieldKind;
   required?: boolean;
   hint?: string;
+  /** A text field picked from the machine catalog (builders, control families). */
+  catalog?: CatalogKind;
 };
 
 const dateHint = "Leave empty if the document shows none.";
@@ -62,8 +65,14 @@ export function fieldDefinitionsFor(fieldSet: FieldSet, typeCode: string): Field
       return cardFields;
     case "oem":
       return [
-        { path: "builder", label: "Machine builder", kind: "text", required: true },
-        { path: "controlFamily", label: "Control family", kind: "text", required: true },
+        { path: "builder", label: "Machine builder", kind: "text", required: true, catalog: "builder" },
+        {
+          path: "controlFamily",
+          label: "Control family",
+          kind: "text",
+          required: true,
+          catalog: "control_family",
+        },
         { path: "level", label: "Level", kind: "level", required: true },
         ...cardFields,
       ];

@@ -63,3 +63,9 @@ export const onSiteHoursOf = (draft: Pick<DirectoryDraft, "onSiteHours">): numbe
   const hours = Number(draft.onSiteHours);
   return draft.onSiteHours !== "" && Number.isFinite(hours) && hours >= 0 ? hours : DEFAULT_ON_SITE_HOURS;
 };
+
+/** Filters the applied search narrows by (each ticked credential type counts); the estimate's hours are not a filter. */
+export function activeFilterCount(draft: DirectoryDraft): number {
+  const set = textKeys.filter((key) => key !== "onSiteHours" && draft[key].trim() !== "").length;
+  return set + draft.credentialTypes.length;
+}

@@ -49,11 +49,13 @@ export function ProfileCredentials({ credentials }: { credentials: readonly Prof
               ? lapseWords(c.lapsesAt, credentialTypeByCode.get(c.typeCode)?.fieldSet, readerTimeZone())
               : "does not lapse"}
           </p>
-          <dl className="mt-2 grid grid-cols-[minmax(0,3fr)_minmax(0,2fr)] gap-x-3 gap-y-0.5 text-sm">
+          {/* Each fact on one line when it fits; a long value (an insurer's name) drops below its term whole rather
+              than being squeezed into a narrow column, one word a line, on a phone. */}
+          <dl className="mt-2 space-y-0.5 text-sm">
             {factsOf(c.fields).map(([term, value]) => (
-              <div key={term} className="contents">
-                <dt className="text-ink-700">{term}</dt>
-                <dd className="break-words text-ink-900">{value}</dd>
+              <div key={term} className="flex flex-wrap items-baseline justify-between gap-x-3">
+                <dt className="min-w-0 text-ink-700">{term}</dt>
+                <dd className="min-w-0 break-words text-ink-900">{value}</dd>
               </div>
             ))}
           </dl>

@@ -17,6 +17,7 @@ export const jobRunSchema = z.object({
   counts: z.record(z.string(), z.unknown()),
   attempt: z.number(),
   error: z.string().nullable(),
+  startedBy: z.object({ id: z.number(), name: z.string() }).nullable(),
 });
 export type JobRun = z.infer<typeof jobRunSchema>;
 

@@ -77,6 +77,11 @@ const columns = column.columns([
     sortFn: "text",
     cell: (info) => <span className="font-medium">{jobNames[info.getValue()] ?? info.getValue()}</span>,
   }),
+  column.accessor((run) => (run.startedBy ? `Manual, ${run.startedBy.name}` : "Scheduled"), {
+    id: "trigger",
+    header: "Started by",
+    sortFn: "text",
+  }),
   column.accessor("asOf", {
     header: "As of",
     sortFn: "text",

@@ -2,6 +2,7 @@ import { useState, type FormEvent } from "react";
 import { equipmentInputSchema, type EquipmentInput } from "@shared/sites/schemas.ts";
 import { machineTechnologies, technologyLabels } from "@shared/technicians/schemas.ts";
 import { Button } from "@/components/ui/button.tsx";
+import { CatalogCombobox } from "@/components/ui/catalog-combobox.tsx";
 import { FormError } from "@/components/ui/form-error.tsx";
 import { SelectField } from "@/components/ui/select-field.tsx";
 import { TextField } from "@/components/ui/text-field.tsx";
@@ -30,6 +31,8 @@ type EquipmentFormProps = {
 /** One machine at a site; what it says fills the directory's technology and control-family filters. */
 export function EquipmentForm({ equipment, pending, serverError, onSubmit, onCancel }: EquipmentFormProps) {
   const [invalid, setInvalid] = useState<unknown>(null);
+  // A new key after each added machine starts the fields afresh (the pickers keep their own state).
+  const [round, setRound] = useState(0);
   const problem = invalid ?? serverError;
   const fields = fieldErrorsOf(problem);
 
@@ -47,7 +50,10 @@ export function EquipmentForm({ equipment, pending, serverError, onSubmit, onCan
     }
     setInvalid(null);
     onSubmit(parsed.data);
-    if (!equipment) form.reset();
+    if (!equipment) {
+      form.reset();
+      setRound((r) => r + 1);
+    }
   };
 
   return (
@@ -58,14 +64,16 @@ export function EquipmentForm({ equipment, pending, serverError, onSubmit, onCan
       aria-label={equipment ? "Edit machine" : "Add a machine"}
     >
       <FormError error={problem} labels={labels} />
-      <div className="grid gap-3 sm:grid-cols-3">
-        <TextField
+      <div key={round} className="grid gap-3 sm:grid-cols-3">
+        <CatalogCombobox
+          kind="builder"
           label={labels.builder}
           name="builder"
           defaultValue={equipment?.builder}
           error={fields.builder}
         />
-        <TextField
+        <CatalogCombobox
+          kind="control_family"
           label={labels.controlFamily}
           name="controlFamily"
           defaultValue={equipment?.controlFamily}

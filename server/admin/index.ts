@@ -1,0 +1,1 @@
+export { adminJobRoutes } from "./routes.ts";

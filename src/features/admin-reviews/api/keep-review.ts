@@ -1,0 +1,15 @@
+import { useMutation, useQueryClient } from "@tanstack/react-query";
+import { api } from "@/lib/api-client.ts";
+import { reportedReviewKeys, reportedReviewSchema } from "./get-reported-reviews.ts";
+
+/** Settles a report by keeping the review counted as it is. */
+export const keepReview = (reviewId: number) =>
+  api.post(`/admin/reviews/${reviewId}/keep`, {}, reportedReviewSchema);
+
+export function useKeepReview() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: keepReview,
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: reportedReviewKeys.all }),
+  });
+}
