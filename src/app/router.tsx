@@ -65,6 +65,7 @@ export const router = createBrowserRouter([
                 path: paths.provider.serviceRequest,
                 lazy: () => import("./routes/provider/service-request.tsx"),
               },
+              { path: paths.provider.gateChecks, lazy: () => import("./routes/provider/gate-checks.tsx") },
             ],
           },
           {
@@ -134,6 +135,7 @@ export const router = createBrowserRouter([
                 lazy: () => import("./routes/buyer/service-request-new.tsx"),
               },
               { path: paths.buyer.serviceRequest, lazy: () => import("./routes/buyer/service-request.tsx") },
+              { path: paths.buyer.gateChecks, lazy: () => import("./routes/buyer/gate-checks.tsx") },
             ],
           },
           {

@@ -13,6 +13,7 @@ export const navigationByRole: Record<Role, readonly NavItem[]> = {
     { label: "Work orders", to: paths.provider.workOrders },
     { label: "Service requests", to: paths.provider.serviceRequests },
     { label: "Company", to: paths.company },
+    { label: "Gate checks", to: paths.provider.gateChecks },
   ],
   technician: [
     { label: "My standing", to: paths.technician.standing, end: true },
@@ -28,6 +29,7 @@ export const navigationByRole: Record<Role, readonly NavItem[]> = {
     { label: "Work orders", to: paths.buyer.workOrders },
     { label: "Service requests", to: paths.buyer.serviceRequests },
     { label: "Company", to: paths.company },
+    { label: "Gate checks", to: paths.buyer.gateChecks },
   ],
   admin: [
     { label: "Users", to: paths.admin.users },

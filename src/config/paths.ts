@@ -28,6 +28,7 @@ export const paths = {
     workOrders: "/provider/work-orders",
     serviceRequests: "/provider/service-requests",
     serviceRequest: "/provider/service-requests/:requestId",
+    gateChecks: "/provider/gate-checks",
   },
   technician: {
     standing: "/technician",
@@ -50,6 +51,7 @@ export const paths = {
     serviceRequests: "/buyer/service-requests",
     serviceRequestNew: "/buyer/service-requests/new",
     serviceRequest: "/buyer/service-requests/:requestId",
+    gateChecks: "/gate-checks",
   },
   /** Where a scanned gate badge opens; public. */
   gateCheck: "/gate/check",

@@ -41,6 +41,7 @@ const pagesByRole: { who: string; email: string | null; pages: string[] }[] = [
       "/provider/work-orders",
       "/account",
       "/company",
+      "/provider/gate-checks",
     ],
   },
   {
@@ -52,7 +53,15 @@ const pagesByRole: { who: string; email: string | null; pages: string[] }[] = [
   {
     who: "buyer",
     email: "buyer@marlow-precision.test",
-    pages: ["/directory", "/roster", "/sites", "/requirement-sets", "/work-orders", "/company"],
+    pages: [
+      "/directory",
+      "/roster",
+      "/sites",
+      "/requirement-sets",
+      "/work-orders",
+      "/company",
+      "/gate-checks",
+    ],
   },
   { who: "buyer with a site", email: "buyer@tamsin-gear.test", pages: ["/sites/:firstSiteId/gate-sign"] },
   {
