@@ -1,5 +1,3 @@
-import { readFile, rm } from "node:fs/promises";
-import Papa from "papaparse";
 import { Op, fn, col, where as sqlWhere } from "sequelize";
 import { AppError } from "../http/app-error.ts";
 import { db } from "../db/sequelize.ts";
@@ -10,6 +8,7 @@ import { User } from "../accounts/model.ts";
 import { issueToken } from "../accounts/tokens.ts";
 import { inviteMail } from "../accounts/emails.ts";
 import { enqueueMail } from "../mail/outbox.ts";
+import { readUploadedSpreadsheet, rowsToRecords } from "../imports/read-spreadsheet.ts";
 import { Technician } from "./model.ts";
 import { DEFAULT_MILEAGE_RATE_CENTS } from "./service.ts";
 import {
@@ -27,35 +26,6 @@ interface UploadedFile {
   path: string;
   originalname: string;
   mimetype: string;
-}
-
-const csvMimes = new Set([
-  "text/csv",
-  "text/plain",
-  "application/csv",
-  "application/vnd.ms-excel",
-  "application/octet-stream",
-]);
-
-/** The file's text when it is a CSV, judged from its name, declared type and bytes (a spreadsheet's binary is not). */
-async function readCsvText(file: UploadedFile | undefined): Promise<string> {
-  if (!file)
-    throw new AppError("invalid_input", "Choose a CSV file", [{ path: "file", message: "required" }]);
-  // The file is only read, never kept: it leaves the incoming folder whatever the outcome.
-  const bytes = await readFile(file.path).finally(() => rm(file.path, { force: true }));
-  const looksBinary = bytes.includes(0) || (bytes[0] === 0x50 && bytes[1] === 0x4b);
-  if (!/\.csv$/i.test(file.originalname) || !csvMimes.has(file.mimetype) || looksBinary)
-    throw new AppError(
-      "unsupported_type",
-      "Only CSV files can be imported; save the spreadsheet as CSV (comma-separated) first",
-      [{ path: "file", message: "not a CSV file" }],
-    );
-  const text = bytes.toString("utf8");
-  if (text.includes("\uFFFD"))
-    throw new AppError("unsupported_type", "The file is not UTF-8 text", [
-      { path: "file", message: "not UTF-8 text" },
-    ]);
-  return text.replace(/^\uFEFF/, "");
 }
 
 function parseMapping(raw: string | undefined, headers: string[]): ColumnMapping {
@@ -90,17 +60,12 @@ export interface ImportPreview {
 }
 
 async function checkFile(companyId: number, file: UploadedFile | undefined, mappingRaw: string | undefined) {
-  const text = await readCsvText(file);
-  // RFC 4180 reading (quoted fields, embedded commas and line breaks) by papaparse.
-  const parsed = Papa.parse<Record<string, string>>(text, { header: true, skipEmptyLines: "greedy" });
-  const headers = (parsed.meta.fields ?? []).filter((h) => h.trim() !== "");
+  // The file's bytes decide between CSV and .xlsx; the row limit is checked before any row is judged.
+  const { rows: table } = await readUploadedSpreadsheet(file, { maxRows: MAX_IMPORT_ROWS });
+  const { headers, records } = rowsToRecords(table);
   if (headers.length === 0)
     throw new AppError("invalid_input", "The file has no header row", [
       { path: "file", message: "no header row" },
-    ]);
-  if (parsed.data.length > MAX_IMPORT_ROWS)
-    throw new AppError("too_large", `At most ${MAX_IMPORT_ROWS} rows per import`, [
-      { path: "file", message: `more than ${MAX_IMPORT_ROWS} rows` },
     ]);
   const mapping = parseMapping(mappingRaw, headers);
   const missing = importFields.filter((f) => f.required && mapping[f.key] === undefined);
@@ -111,7 +76,7 @@ async function checkFile(companyId: number, file: UploadedFile | undefined, mapp
       missing.map((f) => ({ path: `body.mapping.${f.key}`, message: "no column chosen" })),
     );
 
-  const rows = parsed.data.map((record, i) =>
+  const rows = records.map((record, i) =>
     checkRow(i + 2, record, mapping, (zip) => lookupPostalCode(zip) !== undefined),
   );
 
