@@ -1,5 +1,6 @@
 import type { RequestHandler } from "express";
 import {
+  askForCertificateSchema,
   brokerTokenParamsSchema,
   requestBrokerCertificateSchema,
   saveBrokerContactSchema,
@@ -21,6 +22,7 @@ import {
   saveBrokerContact,
   showBrokerUpload,
 } from "./broker-requests.ts";
+import { askForCertificate, listShopCertificateRequests } from "./shop-certificate-requests.ts";
 
 // A company's insurance is handled by its office; the broker's own routes need no account, only the link.
 const canManageBroker = requireRole("provider_admin");
@@ -74,5 +76,22 @@ brokerRoutes.post(
   },
   async (req, res, { params }) => {
     res.status(201).json(await receiveBrokerUpload(params.token, req.file, appStorage(req)));
+  },
+);
+
+// A shop asks through the platform; it never sees the broker's contact or the link, only how its request stands.
+const canAskForCertificate = requireRole("buyer");
+
+brokerRoutes.get("/certificate-requests", { allow: canAskForCertificate }, (req) =>
+  listShopCertificateRequests(req.user!),
+);
+
+brokerRoutes.post(
+  "/certificate-requests",
+  { allow: canAskForCertificate, body: askForCertificateSchema },
+  async (req, res, { body }) => {
+    const dto = await askForCertificate(req.user!, body, linkBase(req));
+    kickOutbox(req.app.locals);
+    res.status(201).json(dto);
   },
 );
