@@ -136,6 +136,10 @@ export const router = createBrowserRouter([
               },
               { path: paths.buyer.serviceRequest, lazy: () => import("./routes/buyer/service-request.tsx") },
               { path: paths.buyer.gateChecks, lazy: () => import("./routes/buyer/gate-checks.tsx") },
+              {
+                path: paths.buyer.certificateRequests,
+                lazy: () => import("./routes/buyer/certificate-requests.tsx"),
+              },
             ],
           },
           {

@@ -30,6 +30,7 @@ export const navigationByRole: Record<Role, readonly NavItem[]> = {
     { label: "Service requests", to: paths.buyer.serviceRequests },
     { label: "Company", to: paths.company },
     { label: "Gate checks", to: paths.buyer.gateChecks },
+    { label: "Certificates", to: paths.buyer.certificateRequests },
   ],
   admin: [
     { label: "Users", to: paths.admin.users },

@@ -52,6 +52,7 @@ export const paths = {
     serviceRequestNew: "/buyer/service-requests/new",
     serviceRequest: "/buyer/service-requests/:requestId",
     gateChecks: "/gate-checks",
+    certificateRequests: "/certificate-requests",
   },
   /** Where a scanned gate badge opens; public. */
   gateCheck: "/gate/check",
