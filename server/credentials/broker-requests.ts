@@ -131,6 +131,25 @@ export async function saveBrokerContact(
   });
 }
 
+/** Drops a coverage's own broker, so its requests go to the company's broker again. */
+export async function removeCoverageBroker(user: Express.User, typeCode: string): Promise<void> {
+  await db().transaction(async (transaction) => {
+    const row = await BrokerContact.findOne({ where: { companyId: user.companyId, typeCode }, transaction });
+    if (!row) throw notFound("That coverage's broker");
+    await row.destroy({ transaction });
+    await recordAudit(
+      {
+        actorUserId: user.id,
+        action: "broker_contact.removed",
+        subjectType: "broker_contact",
+        subjectId: row.id,
+        after: { typeCode },
+      },
+      transaction,
+    );
+  });
+}
+
 /** The coverage's own broker when one is recorded, else the company's. */
 export async function brokerFor(companyId: number, typeCode: string): Promise<BrokerContact> {
   const rows = await BrokerContact.findAll({

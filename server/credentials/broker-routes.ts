@@ -1,4 +1,6 @@
 import type { RequestHandler } from "express";
+import { z } from "zod";
+import { typeCodeSchema } from "../../shared/credentials/schemas.ts";
 import {
   askForCertificateSchema,
   brokerTokenParamsSchema,
@@ -16,12 +18,14 @@ import { abuseLimit } from "../accounts/abuse-limits.ts";
 import {
   listBrokerContacts,
   listBrokerRequests,
+  removeCoverageBroker,
   openBrokerRequest,
   receiveBrokerUpload,
   requestBrokerCertificate,
   saveBrokerContact,
   showBrokerUpload,
 } from "./broker-requests.ts";
+import { listBrokerCoverages } from "./broker-coverages.ts";
 import { askForCertificate, listShopCertificateRequests } from "./shop-certificate-requests.ts";
 
 // A company's insurance is handled by its office; the broker's own routes need no account, only the link.
@@ -45,7 +49,15 @@ brokerRoutes.put(
   (req, _res, { body }) => saveBrokerContact(req.user!, body),
 );
 
+brokerRoutes.delete(
+  "/broker-contacts/:typeCode",
+  { allow: canManageBroker, params: z.object({ typeCode: typeCodeSchema }) },
+  (req, _res, { params }) => removeCoverageBroker(req.user!, params.typeCode),
+);
+
 brokerRoutes.get("/broker-requests", { allow: canManageBroker }, (req) => listBrokerRequests(req.user!));
+
+brokerRoutes.get("/broker-coverages", { allow: canManageBroker }, (req) => listBrokerCoverages(req.user!));
 
 brokerRoutes.post(
   "/broker-requests",

@@ -119,6 +119,17 @@ export interface ShopCertificateRequestsDto {
   coverages: { code: string; name: string }[];
 }
 
+/** One coverage on the office's broker screen: who its broker is, the policy on file, and every request for it. */
+export interface BrokerCoverageDto {
+  typeCode: string;
+  coverageName: string;
+  /** The broker a request for this coverage goes to: its own, else the company's, else none yet. */
+  broker: { source: "coverage" | "company"; agency: string; contactName: string; email: string } | null;
+  /** The latest policy on file for this coverage, if any (a request from here renews it). */
+  coverage: { credentialId: number; state: string; lapsesAt: string | null } | null;
+  requests: BrokerRequestDto[];
+}
+
 /** What the broker's page shows: only what the link was made for. */
 export interface BrokerUploadPageDto {
   companyName: string;
