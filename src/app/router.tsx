@@ -66,6 +66,7 @@ export const router = createBrowserRouter([
                 lazy: () => import("./routes/provider/service-request.tsx"),
               },
               { path: paths.provider.gateChecks, lazy: () => import("./routes/provider/gate-checks.tsx") },
+              { path: paths.provider.brokers, lazy: () => import("./routes/provider/brokers.tsx") },
             ],
           },
           {

@@ -14,6 +14,7 @@ export const navigationByRole: Record<Role, readonly NavItem[]> = {
     { label: "Service requests", to: paths.provider.serviceRequests },
     { label: "Company", to: paths.company },
     { label: "Gate checks", to: paths.provider.gateChecks },
+    { label: "Brokers", to: paths.provider.brokers },
   ],
   technician: [
     { label: "My standing", to: paths.technician.standing, end: true },

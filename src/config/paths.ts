@@ -29,6 +29,7 @@ export const paths = {
     serviceRequests: "/provider/service-requests",
     serviceRequest: "/provider/service-requests/:requestId",
     gateChecks: "/provider/gate-checks",
+    brokers: "/provider/brokers",
   },
   technician: {
     standing: "/technician",

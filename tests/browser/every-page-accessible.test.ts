@@ -42,6 +42,7 @@ const pagesByRole: { who: string; email: string | null; pages: string[] }[] = [
       "/account",
       "/company",
       "/provider/gate-checks",
+      "/provider/brokers",
     ],
   },
   {

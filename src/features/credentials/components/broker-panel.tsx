@@ -16,8 +16,8 @@ import {
 const day = (iso: string) => new Intl.DateTimeFormat("en-US", { dateStyle: "medium" }).format(new Date(iso));
 
 function requestState(r: BrokerRequest): string {
-  if (r.usedAt) return `received ${day(r.usedAt)}`;
-  if (new Date(r.expiresAt) <= new Date()) return "link expired";
+  if (r.linkState === "used") return `received ${day(r.usedAt!)}`;
+  if (r.linkState === "expired") return "link expired";
   return `waiting, link open until ${day(r.expiresAt)}`;
 }
 
