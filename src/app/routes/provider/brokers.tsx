@@ -13,11 +13,11 @@ export function Component() {
         description="Who issues each of your coverages' certificates. A request sends that broker a one-time upload link; reminders follow before the lapse if nothing arrives."
       />
       <div className="space-y-4">
+        <BrokerPanel coverages={[]} />
         {coverages.isPending && <p role="status">Loading coverages…</p>}
         {coverages.data?.map((row) => (
           <CoverageBrokerCard key={row.typeCode} row={row} />
         ))}
-        <BrokerPanel coverages={[]} />
         <CautionNote />
       </div>
     </>

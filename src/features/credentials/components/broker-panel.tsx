@@ -112,8 +112,7 @@ export function BrokerPanel({ coverages }: { coverages: readonly Credential[] })
         <ul className="mt-4 space-y-1 text-sm text-ink-900">
           {requests.data!.slice(0, 10).map((r) => (
             <li key={r.id}>
-              {r.typeCode.replace(/_/g, " ")} from {r.contactName} ({r.agency}), sent {day(r.createdAt)}:{" "}
-              {requestState(r)}
+              {r.coverageName} from {r.contactName} ({r.agency}), sent {day(r.createdAt)}: {requestState(r)}
             </li>
           ))}
         </ul>
