@@ -105,7 +105,7 @@ export async function askForCertificate(
           kind: "broker_request_from_shop",
           title: `${shop.name} asked for a ${type.name} certificate`,
           body: `Your broker (${broker.agency}) was sent a one-time upload link for a certificate naming ${shop.name}. It arrives in your documents for you to submit.`,
-          link: "/provider/documents",
+          link: "/provider/brokers",
           noticeId: null,
         },
         { transaction },
