@@ -1,3 +1,4 @@
+import type { HolderRole } from "../../shared/credentials/broker-schemas.ts";
 import { composeMail, type MailDraft } from "../mail/index.ts";
 
 export interface BrokerMailFacts {
@@ -6,12 +7,18 @@ export interface BrokerMailFacts {
   companyName: string;
   coverageName: string;
   certificateHolder: string | null;
+  holderRole?: HolderRole;
   expiresAt: string;
   link: string;
 }
 
-const holderSentence = (holder: string | null) =>
-  holder ? `Please name ${holder} as certificate holder on it.` : undefined;
+// Additional insured status comes from an endorsement to the policy; the certificate can only report it.
+const holderSentence = (holder: string | null, role: HolderRole = "certificate_holder") =>
+  !holder
+    ? undefined
+    : role === "additional_insured"
+      ? `Please name ${holder} as certificate holder and show it as additional insured, with the endorsement that grants it.`
+      : `Please name ${holder} as certificate holder on it.`;
 
 export function brokerRequestMail(f: BrokerMailFacts): MailDraft {
   return composeMail({
@@ -20,7 +27,7 @@ export function brokerRequestMail(f: BrokerMailFacts): MailDraft {
     greetName: f.contactName,
     paragraphs: [
       `${f.companyName} asks you, as its insurance broker, for a current certificate of insurance for its ${f.coverageName}.`,
-      ...[holderSentence(f.certificateHolder)].filter((s): s is string => Boolean(s)),
+      ...[holderSentence(f.certificateHolder, f.holderRole)].filter((s): s is string => Boolean(s)),
     ],
     next: {
       sentence: `Upload the certificate as one PDF through this link; no account is needed. The link works once and until ${f.expiresAt}.`,
@@ -40,7 +47,7 @@ export function brokerReminderMail(f: BrokerMailFacts & { lapsesOn: string }): M
     greetName: f.contactName,
     paragraphs: [
       `${f.companyName}'s ${f.coverageName} on file lapses ${f.lapsesOn}, and no renewed certificate has arrived yet.`,
-      ...[holderSentence(f.certificateHolder)].filter((s): s is string => Boolean(s)),
+      ...[holderSentence(f.certificateHolder, f.holderRole)].filter((s): s is string => Boolean(s)),
     ],
     next: {
       sentence: `Upload the renewed certificate as one PDF; the link works once and until ${f.expiresAt}.`,
@@ -55,12 +62,15 @@ export function shopCertificateMail(
   companyName: string,
   coverageName: string,
   link: string,
+  role: HolderRole = "certificate_holder",
 ): MailDraft {
+  const naming =
+    role === "additional_insured" ? "certificate holder and additional insured" : "certificate holder";
   return composeMail({
     to,
     subject: `Verified: ${coverageName} certificate from ${companyName}`,
     paragraphs: [
-      `The certificate of insurance you asked ${companyName} for (${coverageName}, naming your shop as certificate holder) came from their broker and a compliance reviewer verified it.`,
+      `The certificate of insurance ${companyName} was asked for (${coverageName}, naming your shop as ${naming}) came from their broker and a compliance reviewer verified it.`,
       "Confirm the terms with your own insurer or broker if your contract asks for more than the certificate shows.",
     ],
     next: {

@@ -6,6 +6,7 @@ import {
   type InferCreationAttributes,
   type Sequelize,
 } from "sequelize";
+import type { BrokerRequestOrigin, HolderRole } from "../../shared/credentials/broker-schemas.ts";
 
 export class BrokerContact extends Model<
   InferAttributes<BrokerContact>,
@@ -39,6 +40,8 @@ export class BrokerUploadRequest extends Model<
   declare documentId: CreationOptional<number | null>;
   declare shopToldAt: CreationOptional<Date | null>;
   declare requestedBy: number;
+  declare holderRole: CreationOptional<HolderRole>;
+  declare origin: CreationOptional<BrokerRequestOrigin>;
   declare createdAt: CreationOptional<Date>;
 }
 
@@ -82,6 +85,8 @@ export function initBrokerModels(sequelize: Sequelize) {
       documentId: { type: DataTypes.INTEGER, allowNull: true },
       shopToldAt: { type: DataTypes.DATE, allowNull: true },
       requestedBy: { type: DataTypes.INTEGER, allowNull: false },
+      holderRole: { type: DataTypes.STRING(24), allowNull: false, defaultValue: "certificate_holder" },
+      origin: { type: DataTypes.STRING(16), allowNull: false, defaultValue: "office" },
       createdAt: DataTypes.DATE,
     },
     { sequelize, tableName: "broker_upload_requests", underscored: true, updatedAt: false },

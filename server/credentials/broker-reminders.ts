@@ -76,6 +76,7 @@ export async function remindBrokers(asOf: Date, linkBase: string): Promise<Broke
           companyName: company!.name,
           coverageName: type!.name,
           certificateHolder: shop?.name ?? null,
+          holderRole: request.holderRole,
           expiresAt: formatDay(expiresAt, company!.timeZone),
           lapsesOn: formatDay(lapsesAt, company!.timeZone),
           link: brokerLinkUrl(linkBase, token),

@@ -2,6 +2,10 @@ import { createHash, randomBytes } from "node:crypto";
 import { Op, type Transaction } from "sequelize";
 import {
   BROKER_LINK_DAYS,
+  brokerLinkState,
+  holderRoleLabels,
+  type BrokerRequestOrigin,
+  type HolderRole,
   type BrokerContactDto,
   type BrokerRequestDto,
   type BrokerUploadPageDto,
@@ -15,12 +19,14 @@ import { enqueueMail } from "../mail/index.ts";
 import { tellPerson } from "../notices/index.ts";
 import type { FileStorage } from "../storage/index.ts";
 import { Credential, CredentialType } from "./model.ts";
-import { BrokerContact, BrokerUploadRequest } from "./broker-model.ts";
+import { BrokerContact, BrokerRequestReminder, BrokerUploadRequest } from "./broker-model.ts";
 import { brokerRequestMail, shopCertificateMail } from "./broker-emails.ts";
 import { uploadDocument, type UploadedFile } from "./upload-document.ts";
 import { Company, User } from "../db/models.ts";
 
 const DAY_MS = 24 * 60 * 60 * 1000;
+/** The shop's list of certificates it asked for (the client's route of the same path). */
+export const SHOP_REQUESTS_PAGE = "/certificate-requests";
 
 export const digestOf = (token: string) => createHash("sha256").update(token).digest("hex");
 
@@ -34,8 +40,29 @@ function toContactDto(c: BrokerContact): BrokerContactDto {
   return { id: c.id, typeCode: c.typeCode, agency: c.agency, contactName: c.contactName, email: c.email };
 }
 
-function toRequestDto(r: BrokerUploadRequest): BrokerRequestDto {
-  return {
+/** The office's view of its requests, with the coverage and shop by name and each reminder sent on the link. */
+export async function toRequestDtos(
+  rows: BrokerUploadRequest[],
+  asOf = new Date(),
+): Promise<BrokerRequestDto[]> {
+  if (rows.length === 0) return [];
+  const [types, shops, reminders] = await Promise.all([
+    CredentialType.findAll({
+      where: { code: [...new Set(rows.map((r) => r.typeCode))] },
+      attributes: ["code", "name"],
+    }),
+    Company.findAll({
+      where: { id: [...new Set(rows.flatMap((r) => (r.shopCompanyId ? [r.shopCompanyId] : [])))] },
+      attributes: ["id", "name"],
+    }),
+    BrokerRequestReminder.findAll({
+      where: { requestId: rows.map((r) => r.id) },
+      order: [["sentAt", "ASC"]],
+    }),
+  ]);
+  const typeName = new Map(types.map((t) => [t.code, t.name]));
+  const shopName = new Map(shops.map((c) => [c.id, c.name]));
+  return rows.map((r) => ({
     id: r.id,
     typeCode: r.typeCode,
     credentialId: r.credentialId,
@@ -47,7 +74,15 @@ function toRequestDto(r: BrokerUploadRequest): BrokerRequestDto {
     usedAt: r.usedAt?.toISOString() ?? null,
     documentId: r.documentId,
     createdAt: r.createdAt.toISOString(),
-  };
+    coverageName: typeName.get(r.typeCode) ?? r.typeCode,
+    holderRole: r.holderRole,
+    origin: r.origin,
+    shopName: r.shopCompanyId ? (shopName.get(r.shopCompanyId) ?? null) : null,
+    linkState: brokerLinkState(r, asOf),
+    reminders: reminders
+      .filter((m) => m.requestId === r.id)
+      .map((m) => ({ daysBefore: m.daysBefore, sentAt: m.sentAt.toISOString() })),
+  }));
 }
 
 export async function listBrokerContacts(user: Express.User): Promise<BrokerContactDto[]> {
@@ -55,7 +90,7 @@ export async function listBrokerContacts(user: Express.User): Promise<BrokerCont
   return rows.map(toContactDto);
 }
 
-async function insuranceType(code: string): Promise<CredentialType> {
+export async function insuranceType(code: string): Promise<CredentialType> {
   const type = await CredentialType.findByPk(code);
   if (!type || !type.active || type.fieldSet !== "insurance" || type.holder !== "company")
     throw new AppError("invalid_input", "Choose a coverage held by the company", [
@@ -95,8 +130,27 @@ export async function saveBrokerContact(
   });
 }
 
+/** Drops a coverage's own broker, so its requests go to the company's broker again. */
+export async function removeCoverageBroker(user: Express.User, typeCode: string): Promise<void> {
+  await db().transaction(async (transaction) => {
+    const row = await BrokerContact.findOne({ where: { companyId: user.companyId, typeCode }, transaction });
+    if (!row) throw notFound("That coverage's broker");
+    await row.destroy({ transaction });
+    await recordAudit(
+      {
+        actorUserId: user.id,
+        action: "broker_contact.removed",
+        subjectType: "broker_contact",
+        subjectId: row.id,
+        after: { typeCode },
+      },
+      transaction,
+    );
+  });
+}
+
 /** The coverage's own broker when one is recorded, else the company's. */
-async function brokerFor(companyId: number, typeCode: string): Promise<BrokerContact> {
+export async function brokerFor(companyId: number, typeCode: string): Promise<BrokerContact> {
   const rows = await BrokerContact.findAll({
     where: { companyId, typeCode: { [Op.or]: [typeCode, null] } },
   });
@@ -141,64 +195,107 @@ export async function requestBrokerCertificate(
     Company.findByPk(user.companyId),
   ]);
 
-  const token = randomBytes(32).toString("base64url");
-  const expiresAt = new Date(Date.now() + BROKER_LINK_DAYS * DAY_MS);
-  const row = await db().transaction(async (transaction) => {
-    const created = await BrokerUploadRequest.create(
+  const row = await db().transaction((transaction) =>
+    sendBrokerLink(
       {
-        companyId: user.companyId,
-        typeCode: type.code,
+        company: company!,
+        type,
+        broker,
         credentialId: input.credentialId ?? null,
-        shopCompanyId: shop?.id ?? null,
-        agency: broker.agency,
-        contactName: broker.contactName,
-        brokerEmail: broker.email,
-        tokenSha256: digestOf(token),
-        expiresAt,
+        shop,
+        holderRole: input.holderRole ?? "certificate_holder",
+        origin: "office",
         requestedBy: user.id,
       },
-      { transaction },
-    );
+      linkBase,
+      transaction,
+    ),
+  );
+  const [dto] = await toRequestDtos([row]);
+  return dto!;
+}
+
+export interface BrokerLinkFacts {
+  company: Company;
+  type: CredentialType;
+  broker: BrokerContact;
+  credentialId: number | null;
+  shop: Company | null;
+  holderRole: HolderRole;
+  origin: BrokerRequestOrigin;
+  requestedBy: number;
+}
+
+/**
+ * Creates a one-time upload link for the broker and queues the e-mail that carries it, in the caller's transaction.
+ * The token itself is only in the e-mail; the table keeps its SHA-256, so reading the database does not yield a
+ * working link.
+ */
+export async function sendBrokerLink(
+  f: BrokerLinkFacts,
+  linkBase: string,
+  transaction: Transaction,
+): Promise<BrokerUploadRequest> {
+  const token = randomBytes(32).toString("base64url");
+  const expiresAt = new Date(Date.now() + BROKER_LINK_DAYS * DAY_MS);
+  const created = await BrokerUploadRequest.create(
+    {
+      companyId: f.company.id,
+      typeCode: f.type.code,
+      credentialId: f.credentialId,
+      shopCompanyId: f.shop?.id ?? null,
+      agency: f.broker.agency,
+      contactName: f.broker.contactName,
+      brokerEmail: f.broker.email,
+      tokenSha256: digestOf(token),
+      expiresAt,
+      requestedBy: f.requestedBy,
+      holderRole: f.holderRole,
+      origin: f.origin,
+    },
+    { transaction },
+  );
+  await recordAudit(
+    {
+      actorUserId: f.requestedBy,
+      action: "broker_request.sent",
+      subjectType: "broker_upload_request",
+      subjectId: created.id,
+      after: {
+        typeCode: f.type.code,
+        credentialId: created.credentialId,
+        shopCompanyId: created.shopCompanyId,
+        holderRole: f.holderRole,
+        origin: f.origin,
+      },
+    },
+    transaction,
+  );
+  if (created.credentialId !== null)
     await recordAudit(
       {
-        actorUserId: user.id,
+        actorUserId: f.requestedBy,
         action: "broker_request.sent",
-        subjectType: "broker_upload_request",
-        subjectId: created.id,
-        after: {
-          typeCode: type.code,
-          credentialId: created.credentialId,
-          shopCompanyId: created.shopCompanyId,
-        },
+        subjectType: "credential",
+        subjectId: created.credentialId,
+        after: { requestId: created.id, brokerEmail: f.broker.email },
       },
       transaction,
     );
-    if (created.credentialId !== null)
-      await recordAudit(
-        {
-          actorUserId: user.id,
-          action: "broker_request.sent",
-          subjectType: "credential",
-          subjectId: created.credentialId,
-          after: { requestId: created.id, brokerEmail: broker.email },
-        },
-        transaction,
-      );
-    await enqueueMail(
-      brokerRequestMail({
-        to: broker.email,
-        contactName: broker.contactName,
-        companyName: company!.name,
-        coverageName: type.name,
-        certificateHolder: shop?.name ?? null,
-        expiresAt: formatDay(expiresAt, company!.timeZone),
-        link: brokerLinkUrl(linkBase, token),
-      }),
-      transaction,
-    );
-    return created;
-  });
-  return toRequestDto(row);
+  await enqueueMail(
+    brokerRequestMail({
+      to: f.broker.email,
+      contactName: f.broker.contactName,
+      companyName: f.company.name,
+      coverageName: f.type.name,
+      certificateHolder: f.shop?.name ?? null,
+      holderRole: f.holderRole,
+      expiresAt: formatDay(expiresAt, f.company.timeZone),
+      link: brokerLinkUrl(linkBase, token),
+    }),
+    transaction,
+  );
+  return created;
 }
 
 export async function listBrokerRequests(user: Express.User): Promise<BrokerRequestDto[]> {
@@ -207,7 +304,7 @@ export async function listBrokerRequests(user: Express.User): Promise<BrokerRequ
     order: [["id", "DESC"]],
     limit: 100,
   });
-  return rows.map(toRequestDto);
+  return toRequestDtos(rows);
 }
 
 // The same answer for a token we never made and one of another kind: nothing to tell a guesser.
@@ -236,6 +333,7 @@ export async function showBrokerUpload(token: string): Promise<BrokerUploadPageD
     companyName: company!.name,
     coverageName: type!.name,
     certificateHolder: shop?.name ?? null,
+    holderRole: row.holderRole,
     expiresAt: row.expiresAt.toISOString(),
   };
 }
@@ -251,8 +349,8 @@ export async function receiveBrokerUpload(
   storage: FileStorage,
 ) {
   const request = await openBrokerRequest(token);
-  const requester = await User.findByPk(request.requestedBy);
-  if (!requester || requester.companyId !== request.companyId) throw unknownLink();
+  const requester = await uploaderFor(request);
+  if (!requester) throw unknownLink();
   const onBehalfOf: Express.User = {
     id: requester.id,
     email: requester.email,
@@ -273,6 +371,20 @@ export async function receiveBrokerUpload(
     },
   });
   return { received: true, document: { name: result.document.name, sizeBytes: result.document.sizeBytes } };
+}
+
+/**
+ * Whose upload the broker's file counts as: the office user who asked, or for a shop's request the company's first
+ * office admin, since the document belongs to the company and never to the shop that asked.
+ */
+async function uploaderFor(request: BrokerUploadRequest): Promise<User | null> {
+  if (request.origin === "shop")
+    return User.findOne({
+      where: { companyId: request.companyId, role: "provider_admin" },
+      order: [["id", "ASC"]],
+    });
+  const requester = await User.findByPk(request.requestedBy);
+  return requester && requester.companyId === request.companyId ? requester : null;
 }
 
 async function spendLink(requestId: number, documentId: number, transaction: Transaction) {
@@ -316,12 +428,18 @@ export async function tellShopOfVerifiedCertificate(
     ]);
     for (const buyer of buyers) {
       await tellPerson(
-        shopCertificateMail(buyer.email, company!.name, type!.name, linkBase),
+        shopCertificateMail(
+          buyer.email,
+          company!.name,
+          type!.name,
+          `${linkBase}${SHOP_REQUESTS_PAGE}`,
+          request.holderRole,
+        ),
         {
           kind: "broker_certificate_verified",
           title: `${company!.name}: ${type!.name} certificate verified`,
-          body: `The certificate naming your shop as certificate holder came from ${company!.name}'s broker and was verified.`,
-          link: "/",
+          body: `The certificate naming your shop as ${holderRoleLabels[request.holderRole as HolderRole].toLowerCase()} came from ${company!.name}'s broker and was verified.`,
+          link: SHOP_REQUESTS_PAGE,
         },
         transaction,
       );

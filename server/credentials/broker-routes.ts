@@ -1,5 +1,8 @@
 import type { RequestHandler } from "express";
+import { z } from "zod";
+import { typeCodeSchema } from "../../shared/credentials/schemas.ts";
 import {
+  askForCertificateSchema,
   brokerTokenParamsSchema,
   requestBrokerCertificateSchema,
   saveBrokerContactSchema,
@@ -15,12 +18,15 @@ import { abuseLimit } from "../accounts/abuse-limits.ts";
 import {
   listBrokerContacts,
   listBrokerRequests,
+  removeCoverageBroker,
   openBrokerRequest,
   receiveBrokerUpload,
   requestBrokerCertificate,
   saveBrokerContact,
   showBrokerUpload,
 } from "./broker-requests.ts";
+import { listBrokerCoverages } from "./broker-coverages.ts";
+import { askForCertificate, listShopCertificateRequests } from "./shop-certificate-requests.ts";
 
 // A company's insurance is handled by its office; the broker's own routes need no account, only the link.
 const canManageBroker = requireRole("provider_admin");
@@ -43,7 +49,15 @@ brokerRoutes.put(
   (req, _res, { body }) => saveBrokerContact(req.user!, body),
 );
 
+brokerRoutes.delete(
+  "/broker-contacts/:typeCode",
+  { allow: canManageBroker, params: z.object({ typeCode: typeCodeSchema }) },
+  (req, _res, { params }) => removeCoverageBroker(req.user!, params.typeCode),
+);
+
 brokerRoutes.get("/broker-requests", { allow: canManageBroker }, (req) => listBrokerRequests(req.user!));
+
+brokerRoutes.get("/broker-coverages", { allow: canManageBroker }, (req) => listBrokerCoverages(req.user!));
 
 brokerRoutes.post(
   "/broker-requests",
@@ -74,5 +88,22 @@ brokerRoutes.post(
   },
   async (req, res, { params }) => {
     res.status(201).json(await receiveBrokerUpload(params.token, req.file, appStorage(req)));
+  },
+);
+
+// A shop asks through the platform; it never sees the broker's contact or the link, only how its request stands.
+const canAskForCertificate = requireRole("buyer");
+
+brokerRoutes.get("/certificate-requests", { allow: canAskForCertificate }, (req) =>
+  listShopCertificateRequests(req.user!),
+);
+
+brokerRoutes.post(
+  "/certificate-requests",
+  { allow: canAskForCertificate, body: askForCertificateSchema },
+  async (req, res, { body }) => {
+    const dto = await askForCertificate(req.user!, body, linkBase(req));
+    kickOutbox(req.app.locals);
+    res.status(201).json(dto);
   },
 );

@@ -79,32 +79,3 @@ async function todaysWorkOrder(technicianId: number, site: Site, now: Date) {
   );
   return order ? { id: order.id, technology: order.technology } : null;
 }
-
-export interface GateCheckRecordDto {
-  technicianName: string;
-  siteName: string | null;
-  state: string;
-  checkedAt: string;
-}
-
-/** The checks a company may see: its own technicians' (service side) or those at its own sites (shop side). */
-export async function listGateChecks(user: Express.User): Promise<GateCheckRecordDto[]> {
-  const column = user.role === "buyer" ? "g.shop_company_id" : "g.service_company_id";
-  const rows = await db().query<{
-    technician_name: string;
-    site_name: string | null;
-    state: string;
-    checked_at: Date;
-  }>(
-    `SELECT t.name AS technician_name, s.name AS site_name, g.state, g.checked_at
-       FROM gate_checks g JOIN technicians t ON t.id = g.technician_id LEFT JOIN sites s ON s.id = g.site_id
-      WHERE ${column} = $1 ORDER BY g.checked_at DESC LIMIT 200`,
-    { bind: [user.companyId], type: QueryTypes.SELECT },
-  );
-  return rows.map((r) => ({
-    technicianName: r.technician_name,
-    siteName: r.site_name,
-    state: r.state,
-    checkedAt: new Date(r.checked_at).toISOString(),
-  }));
-}

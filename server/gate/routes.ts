@@ -8,7 +8,9 @@ import { anyone, requireOwnership, requireRole } from "../http/policy.ts";
 import { createRoutes } from "../http/route.ts";
 import { isOwnSite } from "../sites/policy.ts";
 import { notFound } from "../http/app-error.ts";
-import { checkAtGate, listGateChecks } from "./check.ts";
+import { checkAtGate } from "./check.ts";
+import { listGateChecks } from "./check-log.ts";
+import { gateCheckLogQuerySchema } from "../../shared/gate/check-log.ts";
 import { saveTechnicianPhoto, technicianPhotoDataUrl } from "./photo.ts";
 import { singleFileUpload } from "../http/upload.ts";
 import { BADGE_TOKEN_TTL_MS, issueBadgeToken, siteGateCode } from "./token.ts";
@@ -91,6 +93,8 @@ gateRoutes.get(
 );
 
 // The shop sees the checks at its own sites only, never the same technician's checks at other shops.
-gateRoutes.get("/gate/checks", { allow: requireRole("provider_admin", "buyer") }, (req) =>
-  listGateChecks(req.user!),
+gateRoutes.get(
+  "/gate/checks",
+  { allow: requireRole("provider_admin", "buyer"), query: gateCheckLogQuerySchema },
+  (req, _res, { query }) => listGateChecks(req.user!, query),
 );

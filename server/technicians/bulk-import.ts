@@ -1,13 +1,12 @@
-import Papa from "papaparse";
 import { Op, fn, col, where as sqlWhere } from "sequelize";
 import { AppError } from "../http/app-error.ts";
-import { readCsvText, type UploadedFile } from "../http/csv-upload.ts";
 import { db } from "../db/sequelize.ts";
 import { recordAudit } from "../audit/index.ts";
 import { lookupPostalCode } from "../geo/index.ts";
 import { issueToken } from "../accounts/tokens.ts";
 import { inviteMail } from "../accounts/emails.ts";
 import { enqueueMail } from "../mail/outbox.ts";
+import { readUploadedSpreadsheet, rowsToRecords } from "../imports/read-spreadsheet.ts";
 import { Technician } from "./model.ts";
 import { DEFAULT_MILEAGE_RATE_CENTS } from "./service.ts";
 import {
@@ -21,6 +20,12 @@ import {
 import { Company, User } from "../db/models.ts";
 
 export const MAX_IMPORT_ROWS = 5_000;
+
+interface UploadedFile {
+  path: string;
+  originalname: string;
+  mimetype: string;
+}
 
 function parseMapping(raw: string | undefined, headers: string[]): ColumnMapping {
   if (raw === undefined || raw === "") return guessMapping(headers);
@@ -54,17 +59,12 @@ export interface ImportPreview {
 }
 
 async function checkFile(companyId: number, file: UploadedFile | undefined, mappingRaw: string | undefined) {
-  const text = await readCsvText(file);
-  // RFC 4180 reading (quoted fields, embedded commas and line breaks) by papaparse.
-  const parsed = Papa.parse<Record<string, string>>(text, { header: true, skipEmptyLines: "greedy" });
-  const headers = (parsed.meta.fields ?? []).filter((h) => h.trim() !== "");
+  // The file's bytes decide between CSV and .xlsx; the row limit is checked before any row is judged.
+  const { rows: table } = await readUploadedSpreadsheet(file, { maxRows: MAX_IMPORT_ROWS });
+  const { headers, records } = rowsToRecords(table);
   if (headers.length === 0)
     throw new AppError("invalid_input", "The file has no header row", [
       { path: "file", message: "no header row" },
-    ]);
-  if (parsed.data.length > MAX_IMPORT_ROWS)
-    throw new AppError("too_large", `At most ${MAX_IMPORT_ROWS} rows per import`, [
-      { path: "file", message: `more than ${MAX_IMPORT_ROWS} rows` },
     ]);
   const mapping = parseMapping(mappingRaw, headers);
   const missing = importFields.filter((f) => f.required && mapping[f.key] === undefined);
@@ -75,7 +75,7 @@ async function checkFile(companyId: number, file: UploadedFile | undefined, mapp
       missing.map((f) => ({ path: `body.mapping.${f.key}`, message: "no column chosen" })),
     );
 
-  const rows = parsed.data.map((record, i) =>
+  const rows = records.map((record, i) =>
     checkRow(i + 2, record, mapping, (zip) => lookupPostalCode(zip) !== undefined),
   );
 

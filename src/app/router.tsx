@@ -65,6 +65,8 @@ export const router = createBrowserRouter([
                 path: paths.provider.serviceRequest,
                 lazy: () => import("./routes/provider/service-request.tsx"),
               },
+              { path: paths.provider.gateChecks, lazy: () => import("./routes/provider/gate-checks.tsx") },
+              { path: paths.provider.brokers, lazy: () => import("./routes/provider/brokers.tsx") },
             ],
           },
           {
@@ -148,6 +150,11 @@ export const router = createBrowserRouter([
               {
                 path: paths.buyer.machineMaintenance,
                 lazy: () => import("./routes/buyer/machine-maintenance.tsx"),
+              },
+              { path: paths.buyer.gateChecks, lazy: () => import("./routes/buyer/gate-checks.tsx") },
+              {
+                path: paths.buyer.certificateRequests,
+                lazy: () => import("./routes/buyer/certificate-requests.tsx"),
               },
             ],
           },

@@ -13,6 +13,8 @@ export const navigationByRole: Record<Role, readonly NavItem[]> = {
     { label: "Work orders", to: paths.provider.workOrders },
     { label: "Service requests", to: paths.provider.serviceRequests },
     { label: "Company", to: paths.company },
+    { label: "Gate checks", to: paths.provider.gateChecks },
+    { label: "Brokers", to: paths.provider.brokers },
   ],
   technician: [
     { label: "My standing", to: paths.technician.standing, end: true },
@@ -30,6 +32,8 @@ export const navigationByRole: Record<Role, readonly NavItem[]> = {
     { label: "Machines", to: paths.buyer.machines },
     { label: "Company", to: paths.company },
     { label: "Machine transfers", to: paths.buyer.machineTransfers },
+    { label: "Gate checks", to: paths.buyer.gateChecks },
+    { label: "Certificates", to: paths.buyer.certificateRequests },
   ],
   admin: [
     { label: "Users", to: paths.admin.users },

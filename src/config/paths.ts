@@ -28,6 +28,8 @@ export const paths = {
     workOrders: "/provider/work-orders",
     serviceRequests: "/provider/service-requests",
     serviceRequest: "/provider/service-requests/:requestId",
+    gateChecks: "/provider/gate-checks",
+    brokers: "/provider/brokers",
   },
   technician: {
     standing: "/technician",
@@ -56,6 +58,8 @@ export const paths = {
     machineTransfers: "/machine-transfers",
     machinesImport: "/machines/import",
     machineMaintenance: "/machines/:machineId/maintenance",
+    gateChecks: "/gate-checks",
+    certificateRequests: "/certificate-requests",
   },
   /** Where a scanned gate badge opens; public. */
   gateCheck: "/gate/check",

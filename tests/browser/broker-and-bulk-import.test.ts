@@ -37,7 +37,7 @@ describe("a service company's office imports technicians from a CSV", () => {
     await page.goto(`${server.url}/provider/technicians`);
     await page.getByRole("link", { name: "Import from CSV" }).click();
     await page.getByRole("heading", { name: "Import technicians" }).waitFor();
-    await page.getByLabel("CSV file").setInputFiles({
+    await page.getByLabel("Spreadsheet (.xlsx or CSV)").setInputFiles({
       name: "roster.csv",
       mimeType: "text/csv",
       buffer: Buffer.from(csv),

@@ -41,6 +41,8 @@ const pagesByRole: { who: string; email: string | null; pages: string[] }[] = [
       "/provider/work-orders",
       "/account",
       "/company",
+      "/provider/gate-checks",
+      "/provider/brokers",
     ],
   },
   {
@@ -62,6 +64,7 @@ const pagesByRole: { who: string; email: string | null; pages: string[] }[] = [
       "/machine-transfers",
       "/machines/import",
       "/machines",
+      "/gate-checks",
     ],
   },
   { who: "buyer with a site", email: "buyer@tamsin-gear.test", pages: ["/sites/:firstSiteId/gate-sign"] },

@@ -121,7 +121,10 @@ describe("a machine's service history", () => {
   it("leaves out work orders that are not confirmed", async () => {
     const world = await buildWorkOrderWorld(t.app);
     const raised = await world.shop.agent.post("/api/work-orders").send(raiseBody(world)).expect(201);
-    await world.provider.admin.post(`/api/work-orders/${raised.body.id}/accept`).send(acceptBody()).expect(200);
+    await world.provider.admin
+      .post(`/api/work-orders/${raised.body.id}/accept`)
+      .send(acceptBody())
+      .expect(200);
     await world.provider.tech
       .post(`/api/work-orders/${raised.body.id}/complete`)
       .send({ hoursWorked: 2, travelHours: 1 })

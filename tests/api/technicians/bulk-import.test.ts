@@ -161,7 +161,7 @@ describe("a service company imports its technicians from a CSV", () => {
     expect(unmapped.body.error.fields.map((f: { path: string }) => f.path)).toContain("body.mapping.name");
   });
 
-  it("refuses a spreadsheet binary with 415 and a file over 10 MB with 413, keeping nothing", async () => {
+  it("refuses a zip that is not a workbook with 415 and a file over 10 MB with 413, keeping nothing", async () => {
     const provider = await buildProvider(t.app);
     const uploadsBefore = (await countStored(t.config.UPLOADS_DIR)).incoming;
     // An .xlsx is a ZIP container: local file header signature PK\x03\x04 (PKWARE APPNOTE.TXT §4.3.7).

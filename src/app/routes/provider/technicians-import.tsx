@@ -82,7 +82,7 @@ export function Component() {
     <>
       <PageHeader
         title="Import technicians"
-        description="Bring your roster in from a spreadsheet saved as CSV. Match its columns, check every row, then import the rows without problems. Those with an e-mail get an invitation to sign in."
+        description="Bring your roster in from a spreadsheet: an Excel workbook (.xlsx) or a CSV file. Match its columns, check every row, then import the rows without problems. Those with an e-mail get an invitation to sign in."
         actions={
           <a
             href={`${env.VITE_API_BASE}/technicians/import/template`}
@@ -95,10 +95,10 @@ export function Component() {
       />
       <div className="space-y-6">
         <label className="block text-sm font-medium text-ink-900">
-          CSV file
+          Spreadsheet (.xlsx or CSV)
           <input
             type="file"
-            accept=".csv,text/csv"
+            accept=".xlsx,.csv,text/csv,application/vnd.openxmlformats-officedocument.spreadsheetml.sheet"
             className="mt-1 block text-sm"
             onChange={(e) => void choose(e.target.files?.[0] ?? null)}
           />

@@ -16,8 +16,8 @@ import {
 const day = (iso: string) => new Intl.DateTimeFormat("en-US", { dateStyle: "medium" }).format(new Date(iso));
 
 function requestState(r: BrokerRequest): string {
-  if (r.usedAt) return `received ${day(r.usedAt)}`;
-  if (new Date(r.expiresAt) <= new Date()) return "link expired";
+  if (r.linkState === "used") return `received ${day(r.usedAt!)}`;
+  if (r.linkState === "expired") return "link expired";
   return `waiting, link open until ${day(r.expiresAt)}`;
 }
 
@@ -112,8 +112,7 @@ export function BrokerPanel({ coverages }: { coverages: readonly Credential[] })
         <ul className="mt-4 space-y-1 text-sm text-ink-900">
           {requests.data!.slice(0, 10).map((r) => (
             <li key={r.id}>
-              {r.typeCode.replace(/_/g, " ")} from {r.contactName} ({r.agency}), sent {day(r.createdAt)}:{" "}
-              {requestState(r)}
+              {r.coverageName} from {r.contactName} ({r.agency}), sent {day(r.createdAt)}: {requestState(r)}
             </li>
           ))}
         </ul>
