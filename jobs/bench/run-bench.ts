@@ -28,6 +28,7 @@ import { LARGE_PASSWORD, readSeedInfo, seedLargeDataSet } from "./seed-large-dat
 import { BEHIND_TLS_PROXY, signIn } from "./session-client.ts";
 import { benchUploads } from "./upload-bench.ts";
 import { prepareComparison, routingRequestBody } from "./service-request-bench.ts";
+import { runPlansOnly } from "./plans-mode.ts";
 
 // `npm run bench`: its own PostgreSQL cluster, the large data set (loaded when absent), the server in production mode
 // as a child process, and every figure in one run. Writes bench/results/latest.json and latest.md.
@@ -37,6 +38,12 @@ configureLog("warn");
 mkdirSync(benchSettings.resultsDir, { recursive: true });
 const out = (name: string) => path.join(benchSettings.resultsDir, name);
 const DAY = 86_400_000;
+
+if (process.argv.includes("--plans")) {
+  // `npm run bench -- --plans`: the directory statements' plans and one-connection timings only, no HTTP load.
+  await runPlansOnly(say, out("plans-directory.txt"));
+  process.exit(0);
+}
 
 const cluster = await startBenchCluster(say);
 // An unexpected crash still stops the cluster and the child servers.
