@@ -1,4 +1,5 @@
-import { catalogMatchKeys } from "../machines/catalog-service.ts";
+import { listCatalog } from "../machines/catalog-service.ts";
+import { matchKeysFor } from "../../shared/machines/catalog.ts";
 import { QueryTypes } from "sequelize";
 import {
   DEFAULT_RADIUS_MILES,
@@ -12,7 +13,7 @@ import { milesToKm } from "../../shared/geo/units.ts";
 import { DEFAULT_PRIOR } from "../../shared/ranking/rating-score.ts";
 import { db } from "../db/sequelize.ts";
 import { AppError } from "../http/app-error.ts";
-import { findShopEquipment, Site } from "../sites/index.ts";
+import { findShopEquipment } from "../sites/index.ts";
 import { decodeCursor, encodeCursor } from "./cursor.ts";
 import { assumptions, estimateTrip, ratingSummary, SCORE_SOURCE } from "./estimates.ts";
 import {
@@ -64,13 +65,22 @@ async function ownRequirementSet(companyId: number, id: number): Promise<string>
   return row.name;
 }
 
-/** The set the shop attached to this site (the lowest id when several were), if any. */
-async function siteRequirementSet(
-  companyId: number,
-  siteId: number,
-): Promise<{ id: number; name: string } | null> {
-  const rows = await db().query<{ id: number; name: string }>(
-    "SELECT id, name FROM requirement_sets WHERE site_id = $1 AND company_id = $2 AND active ORDER BY id LIMIT 1",
+/**
+ * The shop's site and the set the shop attached to it (the lowest id when several were), in one statement; null when
+ * the site is missing or another company's.
+ */
+async function siteWithRequirementSet(companyId: number, siteId: number) {
+  const rows = await db().query<{
+    latitude: number;
+    longitude: number;
+    set_id: number | null;
+    set_name: string | null;
+  }>(
+    `SELECT s.latitude, s.longitude, rs.id AS set_id, rs.name AS set_name
+       FROM sites s
+       LEFT JOIN LATERAL (SELECT id, name FROM requirement_sets
+                           WHERE site_id = s.id AND company_id = $2 AND active ORDER BY id LIMIT 1) rs ON true
+      WHERE s.id = $1 AND s.company_id = $2`,
     { bind: [siteId, companyId], type: QueryTypes.SELECT },
   );
   return rows[0] ?? null;
@@ -105,13 +115,21 @@ async function resolveCriteria(buyer: Express.User, query: DirectoryQuery, asOf:
   }
   let builder = query.oemBuilder;
   if (fromEquipment) builder ??= fromEquipmentBuilder;
+  // One read of the catalog for both names.
+  const catalog = builder !== undefined || controlFamily !== undefined ? await listCatalog() : [];
+  const keysOf = (kind: "builder" | "control_family", typed: string | undefined) =>
+    typed === undefined
+      ? undefined
+      : matchKeysFor(
+          catalog.filter((e) => e.kind === kind),
+          typed,
+        );
   criteria.oem = {
     builder,
     controlFamily,
     minLevel: query.minOemLevel,
-    builderKeys: builder !== undefined ? await catalogMatchKeys("builder", builder) : undefined,
-    controlFamilyKeys:
-      controlFamily !== undefined ? await catalogMatchKeys("control_family", controlFamily) : undefined,
+    builderKeys: keysOf("builder", builder),
+    controlFamilyKeys: keysOf("control_family", controlFamily),
   };
   let judgedAgainst: JudgedAgainstDto = { kind: "baseline" };
   if (query.requirementSetId !== undefined) {
@@ -124,21 +142,22 @@ async function resolveCriteria(buyer: Express.User, query: DirectoryQuery, asOf:
     };
   }
   if (query.siteId !== undefined) {
-    const site = await Site.findByPk(query.siteId, { attributes: ["companyId", "latitude", "longitude"] });
-    if (!site || site.companyId !== buyer.companyId)
-      throw new AppError("not_found", "That site was not found");
+    const site = await siteWithRequirementSet(buyer.companyId, query.siteId);
+    if (!site) throw new AppError("not_found", "That site was not found");
     criteria.site = {
       latitude: site.latitude,
       longitude: site.longitude,
       radiusKm: milesToKm(query.radiusMiles ?? DEFAULT_RADIUS_MILES),
     };
     // The buyer decides for a site: its own rules apply unless another set was asked for.
-    if (query.requirementSetId === undefined) {
-      const set = await siteRequirementSet(buyer.companyId, query.siteId);
-      if (set) {
-        criteria.requirementSetId = set.id;
-        judgedAgainst = { kind: "requirement_set", requirementSetId: set.id, name: set.name, fromSite: true };
-      }
+    if (query.requirementSetId === undefined && site.set_id !== null) {
+      criteria.requirementSetId = site.set_id;
+      judgedAgainst = {
+        kind: "requirement_set",
+        requirementSetId: site.set_id,
+        name: site.set_name ?? "",
+        fromSite: true,
+      };
     }
   }
   return { criteria, fromEquipment, judgedAgainst };
