@@ -9,6 +9,7 @@ import {
 } from "../server/notices/index.ts";
 import {
   countStatements,
+  lapsingWindowDays,
   refreshStandings,
   selectRows,
   type ChangedStanding,
@@ -110,6 +111,23 @@ async function holdersComingIntoForce(
   );
 }
 
+/**
+ * Technicians whose stored standing says "cleared" although one of its requirements now lapses inside the lapsing
+ * window: the only standings that time alone changes (cleared -> lapsing) besides a lapse or a credential coming into
+ * force, which the other steps return. A warning for a credential already inside the window (30, 14, 7 or 1 days)
+ * changes nothing, so warned holders are not recomputed as such; the stored earliest lapse decides, which also covers
+ * a run that was missed for a day or more.
+ */
+async function techniciansEnteringWindow(transaction: Transaction, asOf: Date): Promise<number[]> {
+  const rows = await selectRows<{ technician_id: number }>(
+    transaction,
+    `SELECT DISTINCT technician_id FROM technician_standings
+      WHERE standing = 'cleared' AND earliest_lapse <= $1::timestamptz + make_interval(days => $2::int)`,
+    [asOf, lapsingWindowDays()],
+  );
+  return rows.map((r) => r.technician_id);
+}
+
 function holdersOf(counts: HolderCount[], extraTechnicianIds: number[]) {
   const companyIds = new Set<number>();
   const technicianIds = new Set<number>(extraTechnicianIds);
@@ -160,8 +178,9 @@ export async function runLapseJob(
       );
       const unstored = await timed("unstored", () => techniciansWithoutStanding(transaction));
       const starting = await timed("starting", () => holdersComingIntoForce(transaction, asOf, jobRunId));
+      const entering = await timed("entering", () => techniciansEnteringWindow(transaction, asOf));
       const changedStandings = await timed("standings", () =>
-        refreshStandings(holdersOf([...lapsed, ...warned, ...starting], unstored), transaction, asOf),
+        refreshStandings(holdersOf([...lapsed, ...starting], [...unstored, ...entering]), transaction, asOf),
       );
       const noticesCreated = (lapsed[0]?.noticed ?? 0) + sum(warned);
       const counts = {

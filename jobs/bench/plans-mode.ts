@@ -10,7 +10,7 @@ import { initModels } from "../../server/db/associations.ts";
 import { captureDirectoryStatements, type CapturedStatement } from "./directory-searches.ts";
 
 /** Mean and worst of `runs` sequential executions of one statement on one connection (no concurrency). */
-async function timeStatement(client: pg.Client, s: CapturedStatement, runs: number) {
+export async function timeStatement(client: pg.Client, s: CapturedStatement, runs: number) {
   const times: number[] = [];
   for (let i = 0; i < runs; i++) {
     const t0 = performance.now();
