@@ -112,17 +112,19 @@ async function holdersComingIntoForce(
 }
 
 /**
- * Technicians whose stored standing says "cleared" although one of its requirements now lapses inside the lapsing
- * window: the only standings that time alone changes (cleared -> lapsing) besides a lapse or a credential coming into
- * force, which the other steps return. A warning for a credential already inside the window (30, 14, 7 or 1 days)
- * changes nothing, so warned holders are not recomputed as such; the stored earliest lapse decides, which also covers
- * a run that was missed for a day or more.
+ * Technicians whose stored standing time alone has made stale: "cleared" with a requirement now lapsing inside the
+ * lapsing window, or "lapsing" past the instant the engine gave for that lapse (its own instant, from the fields,
+ * whatever the credential row's lapses_at says). With a lapse or a credential coming into force, which the other steps
+ * return, these are the only standings that change overnight; a warning for a credential already inside the window
+ * changes nothing, so warned holders are not recomputed as such. Read from the stored instants, so a missed run is
+ * covered too; the slack (days counted in the company's zone) only recomputes a holder too many, which is harmless.
  */
 async function techniciansEnteringWindow(transaction: Transaction, asOf: Date): Promise<number[]> {
   const rows = await selectRows<{ technician_id: number }>(
     transaction,
     `SELECT DISTINCT technician_id FROM technician_standings
-      WHERE standing = 'cleared' AND earliest_lapse <= $1::timestamptz + make_interval(days => $2::int)`,
+      WHERE (standing = 'cleared' AND earliest_lapse <= $1::timestamptz + make_interval(days => $2::int + 2))
+         OR (standing = 'lapsing' AND earliest_lapse <= $1::timestamptz + interval '1 day')`,
     [asOf, lapsingWindowDays()],
   );
   return rows.map((r) => r.technician_id);
