@@ -7,7 +7,7 @@ import {
   queueNoticeMessages,
   type HolderCount,
 } from "../server/notices/index.ts";
-import { refreshStandings, type ChangedStanding } from "../server/standing/index.ts";
+import { lapsingWindowDays, refreshStandings, type ChangedStanding } from "../server/standing/index.ts";
 import { countStatements, selectRows } from "../server/db/sql.ts";
 import { remindMaintenanceDue } from "../server/machines/maintenance-reminders.ts";
 import { JOB_LOCK_KEYS, withAdvisoryLock } from "./advisory-lock.ts";
@@ -112,6 +112,25 @@ async function holdersComingIntoForce(
   );
 }
 
+/**
+ * Technicians whose stored standing time alone has made stale: "cleared" with a requirement now lapsing inside the
+ * lapsing window, or "lapsing" past the instant the engine gave for that lapse (its own instant, from the fields,
+ * whatever the credential row's lapses_at says). With a lapse or a credential coming into force, which the other steps
+ * return, these are the only standings that change overnight; a warning for a credential already inside the window
+ * changes nothing, so warned holders are not recomputed as such. Read from the stored instants, so a missed run is
+ * covered too; the slack (days counted in the company's zone) only recomputes a holder too many, which is harmless.
+ */
+async function techniciansEnteringWindow(transaction: Transaction, asOf: Date): Promise<number[]> {
+  const rows = await selectRows<{ technician_id: number }>(
+    transaction,
+    `SELECT DISTINCT technician_id FROM technician_standings
+      WHERE (standing = 'cleared' AND earliest_lapse <= $1::timestamptz + make_interval(days => $2::int + 2))
+         OR (standing = 'lapsing' AND earliest_lapse <= $1::timestamptz + interval '1 day')`,
+    [asOf, lapsingWindowDays()],
+  );
+  return rows.map((r) => r.technician_id);
+}
+
 function holdersOf(counts: HolderCount[], extraTechnicianIds: number[]) {
   const companyIds = new Set<number>();
   const technicianIds = new Set<number>(extraTechnicianIds);
@@ -163,8 +182,9 @@ export async function runLapseJob(
       );
       const unstored = await timed("unstored", () => techniciansWithoutStanding(transaction));
       const starting = await timed("starting", () => holdersComingIntoForce(transaction, asOf, jobRunId));
+      const entering = await timed("entering", () => techniciansEnteringWindow(transaction, asOf));
       const changedStandings = await timed("standings", () =>
-        refreshStandings(holdersOf([...lapsed, ...warned, ...starting], unstored), transaction, asOf),
+        refreshStandings(holdersOf([...lapsed, ...starting], [...unstored, ...entering]), transaction, asOf),
       );
       const maintenance = await timed("maintenance", () =>
         remindMaintenanceDue(transaction, { asOf, jobRunId, publicUrl: base }),

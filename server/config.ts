@@ -37,6 +37,8 @@ const configSchema = z
     PASSWORD_RESETS_PER_EMAIL_PER_HOUR: z.coerce.number().int().min(1).default(10),
     SET_PASSWORD_FAILURES_PER_IP_PER_15_MIN: z.coerce.number().int().min(1).default(20),
     SET_PASSWORD_FAILURES_PER_LINK_PER_15_MIN: z.coerce.number().int().min(1).default(5),
+    // Common practice: a front desk scans a few badges a minute; 60 a minute per address stops guessing tokens.
+    GATE_CHECKS_PER_IP_PER_MINUTE: z.coerce.number().int().min(1).default(60),
     RESET_EMAIL_INTERVAL_MINUTES: z.coerce.number().int().min(0).max(1440).default(5),
     HASH_CONCURRENCY: z.coerce.number().int().min(1).max(64).default(2),
     HASH_QUEUE: z.coerce.number().int().min(0).max(10_000).default(16),

@@ -1,6 +1,7 @@
 import { readFileSync } from "node:fs";
 import express from "express";
 import pg from "pg";
+import { PLANNER_OPTIONS } from "../../server/db/sequelize.ts";
 
 // The two ceilings, as a child process like the real server: B0 a bare Express route with a constant JSON body; B1 the
 // directory's own SQL (captured from the server's search code) through one route with pg alone, no session, no ORM.
@@ -19,7 +20,7 @@ if (process.env.DATABASE_URL && process.env.DIRECTORY_SQL_FILE) {
     { sql: string; bind: unknown[] }
   >;
   // The same pool size as the app's Sequelize pool (server/db/sequelize.ts).
-  const pool = new pg.Pool({ connectionString: process.env.DATABASE_URL, max: 10 });
+  const pool = new pg.Pool({ connectionString: process.env.DATABASE_URL, max: 10, options: PLANNER_OPTIONS });
   app.get("/directory/:name", async (req, res) => {
     const statement = statements[req.params.name];
     if (!statement) {

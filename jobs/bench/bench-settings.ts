@@ -10,6 +10,17 @@ function positive(name: string, fallback: number): number {
   return value;
 }
 
+/** `--scale 0.3` (or BENCH_SCALE): the large data set's provider side times this factor; 1 is the usual set. */
+function scaleOf(): number {
+  const i = process.argv.indexOf("--scale");
+  const raw = i >= 0 ? process.argv[i + 1] : process.env.BENCH_SCALE;
+  const value = Number(raw ?? 1);
+  if (!Number.isFinite(value) || value <= 0 || value > 10)
+    throw new Error("--scale must be a number in (0, 10]");
+  return value;
+}
+const scale = scaleOf();
+
 export const benchSettings = {
   root,
   /** Seconds of load per HTTP scenario (15 s by default); BENCH_SECONDS=3 for a quick run. */
@@ -22,7 +33,9 @@ export const benchSettings = {
   pgRoot: process.env.BENCH_PG_ROOT ?? path.join(tmpdir(), "clearbench-bench-pg"),
   /** A cluster to seed into instead of starting one (seed:large only); the database is always clearbench_large. */
   databaseUrl: process.env.DATABASE_URL,
-  database: "clearbench_large",
+  scale,
+  /** One database per scale, so the growth mode can keep all of them: clearbench_large, clearbench_large_x0_3, ... */
+  database: scale === 1 ? "clearbench_large" : `clearbench_large_x${String(scale).replace(".", "_")}`,
   resultsDir: path.join(root, "bench", "results"),
   uploads: positive("BENCH_UPLOADS", 30),
   /**

@@ -8,16 +8,23 @@ import {
   SHOP_SUFFIXES,
   sqlTextArray,
 } from "./large-data-names.ts";
+import { benchSettings } from "./bench-settings.ts";
 
-/** Sizes of the large data set. */
+const scaled = (n: number) => Math.max(10, Math.round(n * benchSettings.scale));
+
+/**
+ * Sizes of the large data set. `--scale` multiplies the provider side (companies, technicians, credentials, work and
+ * reviews); the shops and their sites stay as they are, so each search, route and page asks the same question of more
+ * data.
+ */
 export const LARGE = {
-  serviceCompanies: 3_000,
-  technicians: 30_000,
-  credentials: 300_000,
+  serviceCompanies: scaled(3_000),
+  technicians: scaled(30_000),
+  credentials: scaled(300_000),
   shops: 500,
   sites: 1_000,
-  workOrders: 60_000,
-  reviews: 40_000,
+  workOrders: scaled(60_000),
+  reviews: scaled(40_000),
 } as const;
 
 // Company-held credentials per service company: current and prior general liability, current and prior workers'
@@ -34,7 +41,8 @@ export const IDS = {
   platformCompany: S + P + 1,
   reviewerUser: S + P + 1,
   adminUser: S + P + 2,
-  firstTechnicianUser: 10_001,
+  // Above every office, buyer and staff id at any scale (10,001 at scale 1 and below).
+  firstTechnicianUser: Math.max(10_001, S + P + 3),
   shopCompany: (ordinal: number) => S + ordinal,
   buyerUser: (ordinal: number) => S + ordinal,
 };

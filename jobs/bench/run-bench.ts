@@ -28,6 +28,9 @@ import { LARGE_PASSWORD, readSeedInfo, seedLargeDataSet } from "./seed-large-dat
 import { BEHIND_TLS_PROXY, signIn } from "./session-client.ts";
 import { benchUploads } from "./upload-bench.ts";
 import { prepareComparison, routingRequestBody } from "./service-request-bench.ts";
+import { runPlansOnly } from "./plans-mode.ts";
+import { runGrowth } from "./growth.ts";
+import { issueBadgeToken, siteGateCode } from "../../server/gate/token.ts";
 
 // `npm run bench`: its own PostgreSQL cluster, the large data set (loaded when absent), the server in production mode
 // as a child process, and every figure in one run. Writes bench/results/latest.json and latest.md.
@@ -37,6 +40,18 @@ configureLog("warn");
 mkdirSync(benchSettings.resultsDir, { recursive: true });
 const out = (name: string) => path.join(benchSettings.resultsDir, name);
 const DAY = 86_400_000;
+
+if (process.argv.includes("--plans")) {
+  // `npm run bench -- --plans`: the directory statements' plans and one-connection timings only, no HTTP load.
+  await runPlansOnly(say, out("plans-directory.txt"));
+  process.exit(0);
+}
+if (process.argv.includes("--growth")) {
+  // `npm run bench -- --growth`: the directory, routing, queue and lapse job at each scale, and how each grows.
+  mkdirSync(benchSettings.resultsDir, { recursive: true });
+  await runGrowth(say, benchSettings.resultsDir);
+  process.exit(0);
+}
 
 const cluster = await startBenchCluster(say);
 // An unexpected crash still stops the cluster and the child servers.
@@ -138,6 +153,8 @@ try {
       // All load comes from one address: a shed sign-in (503) counts as a failure, and the address limit would then
       // refuse the browser's own sign-in later in the run. Non-2xx answers are still counted per scenario.
       SIGN_IN_FAILURES_PER_IP_PER_15_MIN: "1000000",
+      // The same for the gate check's per-address limit: the load is one machine standing in for many gates.
+      GATE_CHECKS_PER_IP_PER_MINUTE: "100000000",
     },
     "/api/health",
     benchSettings.serverNodeFlags,
@@ -185,6 +202,18 @@ try {
     name: `estimates comparison API (${comparison.estimates} estimates, ${comparison.invited} invited)`,
     url: `${server.url}/api/service-requests/${comparison.requestId}/comparison`,
     headers: buyer,
+  });
+  // The anonymous gate check: fresh badge codes (they live five minutes) of the first page's technicians, scanned at
+  // the bench site's gate sign.
+  const gateSecret = "bench-gate-secret-0123456789abcdef012345";
+  const gateSite = siteGateCode(gateSecret, BENCH_BUYER.siteId);
+  await measure({
+    name: "anonymous gate check API",
+    url: server.url,
+    paths: firstPage.rows.map(
+      (r) =>
+        `/api/gate/check?token=${encodeURIComponent(issueBadgeToken(gateSecret, r.technicianId))}&site=${gateSite}`,
+    ),
   });
   await measure({
     name: "sign-in (bcrypt cost 12)",

@@ -51,8 +51,6 @@ const BROKER_LINK_CALLS_PER_IP_PER_15_MIN = 30;
 // Common practice: the sign-up form asks once per ZIP typed; 30 a minute per address is plenty for people and too slow
 // to copy the ZIP table through it.
 const ZIP_LOOKUPS_PER_IP_PER_MINUTE = 30;
-// Common practice: a front desk scans a few badges a minute; 60 a minute per address stops guessing tokens.
-const GATE_CHECKS_PER_IP_PER_MINUTE = 60;
 
 /**
  * Per address and per account limits of the four anonymous account routes, built once per app (counts are kept in
@@ -122,7 +120,7 @@ export function createAbuseLimits(config: Config): Record<AbuseLimitName, Reques
     gateCheck: [
       limiter({
         windowMs: MINUTE,
-        limit: GATE_CHECKS_PER_IP_PER_MINUTE,
+        limit: config.GATE_CHECKS_PER_IP_PER_MINUTE,
         key: byIp,
         failuresOnly: false,
         message: "Too many gate checks from this address; wait a minute and try again",

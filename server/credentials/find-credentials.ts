@@ -157,10 +157,15 @@ export async function findQueue(q: QueueQuery, now = new Date()) {
         COALESCE(tech.name, co.name) AS holder_name, c.submitted_at ${from} ORDER BY ${order} LIMIT :limit OFFSET :offset`,
       { replacements, type: QueryTypes.SELECT },
     ),
-    db().query<{ total: number }>(`SELECT count(*)::int AS total ${from}`, {
-      replacements,
-      type: QueryTypes.SELECT,
-    }),
+    // Every credential has its type and company (foreign keys, not null), so the joins cannot change the count; without
+    // them the count is read from credentials_queue_cover_idx alone.
+    db().query<{ total: number }>(
+      `SELECT count(*)::int AS total FROM credentials c WHERE ${where.join(" AND ")}`,
+      {
+        replacements,
+        type: QueryTypes.SELECT,
+      },
+    ),
   ]);
   return {
     rows: rows.map((r) => ({

@@ -9,6 +9,16 @@ pg.types.setTypeParser(pg.types.builtins.INT8, (v: string) => Number(v));
 
 let instance: Sequelize | undefined;
 
+/**
+ * Planner settings of every app connection (and of the bench's bare-pg ceiling, so both run alike). No JIT: the app
+ * sends short statements whose planned cost can be high (a nearest-first walk is costed as if it read the whole
+ * index, though its LIMIT stops it after a page), and compiling one costs more than running it. random_page_cost 1.1:
+ * the hot tables sit in memory or on SSD, where a random read costs about what a sequential one does (PostgreSQL
+ * manual, "Planner Cost Constants"); at the default 4 the planner sorts a whole radius rather than walking the
+ * GiST index nearest first.
+ */
+export const PLANNER_OPTIONS = "-c jit=off -c random_page_cost=1.1";
+
 /** Set only while a read-only request runs on the replica (server/db/replica.ts); db() then hands that out. */
 export const readConnection = new AsyncLocalStorage<Sequelize>();
 
@@ -18,7 +28,7 @@ export function newSequelize(url: string, options: { poolMax?: number } = {}): S
     logging: false,
     define: { underscored: true },
     pool: { max: options.poolMax ?? 10, acquire: 5_000, idle: 10_000 },
-    dialectOptions: { connectionTimeoutMillis: 3_000 },
+    dialectOptions: { connectionTimeoutMillis: 3_000, options: PLANNER_OPTIONS },
   });
 }
 

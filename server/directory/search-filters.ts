@@ -31,24 +31,27 @@ export interface FilterClause {
 }
 
 // Base rows: active technicians whose stored baseline standing lists them. Aliases: t technician, c company,
-// b baseline standing, r rating summary.
+// b baseline standing, r rating summary. `cleared_sets @> '{0}'` is the same fact kept on the technician's row (by a
+// trigger on technician_standings), written literally so the planner can use technicians_listed_point_idx.
 export const DIRECTORY_FROM = `FROM technicians t
   JOIN companies c ON c.id = t.company_id
   JOIN technician_standings b ON b.technician_id = t.id AND b.requirement_set_id IS NULL AND b.standing IN ('cleared','lapsing')
   LEFT JOIN technician_ratings r ON r.technician_id = t.id
-  WHERE t.active`;
+  WHERE t.active AND t.cleared_sets @> '{0}'::integer[]`;
 
 /**
  * A verified credential in force at asOf, held by the technician or, for company-held types (insurance), by the
  * technician's company. Two EXISTS rather than one OR so each uses its own index (credentials_technician_idx,
- * credentials_company_idx).
+ * credentials_company_held_idx).
  */
 function heldInForce(p: SqlParams, typeCode: string, asOf: Date, extra = ""): string {
   const type = p.add(typeCode);
   const now = p.add(asOf);
   const inForce = `cr.type_code = ${type} AND cr.state = 'verified' AND (cr.lapses_at IS NULL OR cr.lapses_at > ${now})${extra}`;
-  return `(EXISTS (SELECT 1 FROM credentials cr WHERE cr.technician_id = t.id AND ${inForce})
-    OR EXISTS (SELECT 1 FROM credentials cr WHERE cr.company_id = t.company_id AND cr.technician_id IS NULL AND ${inForce}))`;
+  // OFFSET 0 keeps each EXISTS a per-row index probe: in a nearest-first walk the planner cannot know how few rows it
+  // will test, and would otherwise hash every company's insurance up front.
+  return `(EXISTS (SELECT 1 FROM credentials cr WHERE cr.technician_id = t.id AND ${inForce} OFFSET 0)
+    OR EXISTS (SELECT 1 FROM credentials cr WHERE cr.company_id = t.company_id AND cr.technician_id IS NULL AND ${inForce} OFFSET 0))`;
 }
 
 /** Haversine in SQL with the same mean Earth radius as shared/geo/great-circle-distance.ts. */
@@ -61,33 +64,33 @@ export function distanceSql(p: SqlParams, site: { latitude: number; longitude: n
     + cos(radians(${lat}::float8)) * cos(radians(t.latitude)) * power(sin(radians(t.longitude - ${lon}::float8) / 2), 2)))))`;
 }
 
-const DEGREES = 180 / Math.PI;
+/**
+ * The site as a point on the unit sphere, computed by the same expression as the technicians.sphere_point column, so
+ * both ends of a chord come from the same arithmetic.
+ */
+export function sitePointSql(p: SqlParams, site: { latitude: number; longitude: number }): string {
+  const lat = p.add(site.latitude);
+  const lon = p.add(site.longitude);
+  return `cube(ARRAY[cos(radians(${lat}::float8)) * cos(radians(${lon}::float8)),
+    cos(radians(${lat}::float8)) * sin(radians(${lon}::float8)), sin(radians(${lat}::float8))])`;
+}
 
 /**
- * A latitude/longitude box that contains every point within `radiusKm` of the site (J. P. Matuschek, "Finding Points
- * Within a Distance of a Latitude/Longitude Using Bounding Coordinates"): Δlat = r, Δlon = asin(sin r / cos lat).
- * The longitude bound is dropped near a pole or across the antimeridian, where the box would wrap.
+ * Sort key of "nearest first": the chord to the site on the unit sphere. It grows with the great-circle distance
+ * (chord = 2·sin(d / 2R)), so the order is the distance order, and it is the `<->` the GiST index returns in order.
  */
-function boundingBoxSql(
-  p: SqlParams,
-  site: { latitude: number; longitude: number; radiusKm: number },
-): string {
-  const angular = site.radiusKm / EARTH_MEAN_RADIUS_KM;
-  const margin = 1e-6; // degrees: the exact haversine test follows, so a hair of slack costs nothing
-  const dLat = angular * DEGREES + margin;
-  const clauses = [
-    `t.latitude BETWEEN ${p.add(site.latitude - dLat)}::float8 AND ${p.add(site.latitude + dLat)}::float8`,
-  ];
-  const latRad = site.latitude / DEGREES;
-  if (Math.abs(site.latitude) + dLat < 89 && angular < Math.PI / 2) {
-    const dLon = Math.asin(Math.min(1, Math.sin(angular) / Math.cos(latRad))) * DEGREES + margin;
-    if (site.longitude - dLon >= -180 && site.longitude + dLon <= 180) {
-      clauses.push(
-        `t.longitude BETWEEN ${p.add(site.longitude - dLon)}::float8 AND ${p.add(site.longitude + dLon)}::float8`,
-      );
-    }
-  }
-  return clauses.join(" AND ");
+export function chordSql(p: SqlParams, site: { latitude: number; longitude: number }): string {
+  return `(t.sphere_point <-> ${sitePointSql(p, site)})`;
+}
+
+/**
+ * A cube around the site that holds every point of the sphere within `radiusKm` (its half-side is the chord of that
+ * distance, plus a hair): the GiST index's prefilter before the exact haversine test.
+ */
+function radiusBoxSql(p: SqlParams, site: { latitude: number; longitude: number; radiusKm: number }): string {
+  const angular = Math.min(Math.PI, site.radiusKm / EARTH_MEAN_RADIUS_KM);
+  const halfSide = 2 * Math.sin(angular / 2) + 1e-9;
+  return `t.sphere_point <@ cube_enlarge(${sitePointSql(p, site)}, ${p.add(halfSide)}::float8, 3)`;
 }
 
 /** One SQL condition per filter the search uses, each named for the empty state. */
@@ -138,15 +141,15 @@ export function buildFilters(p: SqlParams, criteria: DirectoryCriteria): FilterC
   if (criteria.requirementSetId !== undefined) {
     filters.push({
       name: "requirementSetId",
-      sql: `EXISTS (SELECT 1 FROM technician_standings s WHERE s.technician_id = t.id
-        AND s.requirement_set_id = ${p.add(criteria.requirementSetId)} AND s.standing IN ('cleared','lapsing'))`,
+      // The stored fact on the technician's row: the set's standing lists them (cleared or lapsing).
+      sql: `t.cleared_sets @> ARRAY[${p.add(criteria.requirementSetId)}::integer]`,
     });
   }
   if (criteria.site) {
     // Inside the technician's own service radius AND the buyer's search radius.
     filters.push({
       name: "distance",
-      sql: `${boundingBoxSql(p, criteria.site)}
+      sql: `${radiusBoxSql(p, criteria.site)}
         AND ${distanceSql(p, criteria.site)} <= least(t.service_radius_km::float8, ${p.add(criteria.site.radiusKm)}::float8)`,
     });
   }

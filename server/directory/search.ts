@@ -1,4 +1,5 @@
-import { catalogMatchKeys } from "../machines/catalog-service.ts";
+import { listCatalog } from "../machines/catalog-service.ts";
+import { matchKeysFor } from "../../shared/machines/catalog.ts";
 import { QueryTypes } from "sequelize";
 import {
   DEFAULT_RADIUS_MILES,
@@ -12,10 +13,17 @@ import { milesToKm } from "../../shared/geo/units.ts";
 import { DEFAULT_PRIOR } from "../../shared/ranking/rating-score.ts";
 import { db } from "../db/sequelize.ts";
 import { AppError } from "../http/app-error.ts";
-import { findShopEquipment, Site } from "../sites/index.ts";
+import { findShopEquipment } from "../sites/index.ts";
 import { decodeCursor, encodeCursor } from "./cursor.ts";
 import { assumptions, estimateTrip, ratingSummary, SCORE_SOURCE } from "./estimates.ts";
-import { buildFilters, DIRECTORY_FROM, distanceSql, type DirectoryCriteria } from "./search-filters.ts";
+import {
+  buildFilters,
+  chordSql,
+  DIRECTORY_FROM,
+  distanceSql,
+  sitePointSql,
+  type DirectoryCriteria,
+} from "./search-filters.ts";
 import { SqlParams } from "./sql-params.ts";
 import { storedScoreIsCurrent } from "./stored-score.ts";
 import type { JudgedAgainstDto } from "../../shared/directory/schemas.ts";
@@ -57,13 +65,22 @@ async function ownRequirementSet(companyId: number, id: number): Promise<string>
   return row.name;
 }
 
-/** The set the shop attached to this site (the lowest id when several were), if any. */
-async function siteRequirementSet(
-  companyId: number,
-  siteId: number,
-): Promise<{ id: number; name: string } | null> {
-  const rows = await db().query<{ id: number; name: string }>(
-    "SELECT id, name FROM requirement_sets WHERE site_id = $1 AND company_id = $2 AND active ORDER BY id LIMIT 1",
+/**
+ * The shop's site and the set the shop attached to it (the lowest id when several were), in one statement; null when
+ * the site is missing or another company's.
+ */
+async function siteWithRequirementSet(companyId: number, siteId: number) {
+  const rows = await db().query<{
+    latitude: number;
+    longitude: number;
+    set_id: number | null;
+    set_name: string | null;
+  }>(
+    `SELECT s.latitude, s.longitude, rs.id AS set_id, rs.name AS set_name
+       FROM sites s
+       LEFT JOIN LATERAL (SELECT id, name FROM requirement_sets
+                           WHERE site_id = s.id AND company_id = $2 AND active ORDER BY id LIMIT 1) rs ON true
+      WHERE s.id = $1 AND s.company_id = $2`,
     { bind: [siteId, companyId], type: QueryTypes.SELECT },
   );
   return rows[0] ?? null;
@@ -98,13 +115,21 @@ async function resolveCriteria(buyer: Express.User, query: DirectoryQuery, asOf:
   }
   let builder = query.oemBuilder;
   if (fromEquipment) builder ??= fromEquipmentBuilder;
+  // One read of the catalog for both names.
+  const catalog = builder !== undefined || controlFamily !== undefined ? await listCatalog() : [];
+  const keysOf = (kind: "builder" | "control_family", typed: string | undefined) =>
+    typed === undefined
+      ? undefined
+      : matchKeysFor(
+          catalog.filter((e) => e.kind === kind),
+          typed,
+        );
   criteria.oem = {
     builder,
     controlFamily,
     minLevel: query.minOemLevel,
-    builderKeys: builder !== undefined ? await catalogMatchKeys("builder", builder) : undefined,
-    controlFamilyKeys:
-      controlFamily !== undefined ? await catalogMatchKeys("control_family", controlFamily) : undefined,
+    builderKeys: keysOf("builder", builder),
+    controlFamilyKeys: keysOf("control_family", controlFamily),
   };
   let judgedAgainst: JudgedAgainstDto = { kind: "baseline" };
   if (query.requirementSetId !== undefined) {
@@ -117,30 +142,31 @@ async function resolveCriteria(buyer: Express.User, query: DirectoryQuery, asOf:
     };
   }
   if (query.siteId !== undefined) {
-    const site = await Site.findByPk(query.siteId, { attributes: ["companyId", "latitude", "longitude"] });
-    if (!site || site.companyId !== buyer.companyId)
-      throw new AppError("not_found", "That site was not found");
+    const site = await siteWithRequirementSet(buyer.companyId, query.siteId);
+    if (!site) throw new AppError("not_found", "That site was not found");
     criteria.site = {
       latitude: site.latitude,
       longitude: site.longitude,
       radiusKm: milesToKm(query.radiusMiles ?? DEFAULT_RADIUS_MILES),
     };
     // The buyer decides for a site: its own rules apply unless another set was asked for.
-    if (query.requirementSetId === undefined) {
-      const set = await siteRequirementSet(buyer.companyId, query.siteId);
-      if (set) {
-        criteria.requirementSetId = set.id;
-        judgedAgainst = { kind: "requirement_set", requirementSetId: set.id, name: set.name, fromSite: true };
-      }
+    if (query.requirementSetId === undefined && site.set_id !== null) {
+      criteria.requirementSetId = site.set_id;
+      judgedAgainst = {
+        kind: "requirement_set",
+        requirementSetId: site.set_id,
+        name: site.set_name ?? "",
+        fromSite: true,
+      };
     }
   }
   return { criteria, fromEquipment, judgedAgainst };
 }
 
-function sortKeySql(sort: DirectorySort, distance: string | null, p: SqlParams, ratedOnly: boolean): string {
+function sortKeySql(sort: DirectorySort, chord: string | null, p: SqlParams, ratedOnly: boolean): string {
   switch (sort) {
     case "distance":
-      return distance ?? "0";
+      return chord ?? "0";
     case "score": {
       // Highest score first: the key is the negated Bayesian average, so every sort pages ascending on (key, id).
       // With a minimum rating every row has a ratings row, so the key is the stored score itself, which
@@ -155,6 +181,36 @@ function sortKeySql(sort: DirectorySort, distance: string | null, p: SqlParams, 
     case "soonestLapse":
       return `coalesce(extract(epoch FROM b.earliest_lapse)::float8, ${NEVER_LAPSES_EPOCH}::float8)`;
   }
+}
+
+/**
+ * Nearest first without sorting the whole radius. PostgreSQL 15 walks a GiST index in distance order (KNN) only for
+ * an ORDER BY of the distance alone, while the page is keyset-ordered by (distance, id). So the walk takes the first
+ * `limit` matching rows nearest first (technicians_listed_point_idx, inside the radius box), and adds any other
+ * matching row at exactly the distance of the last one (a tie the walk may have cut, e.g. two technicians at one ZIP
+ * centroid); the page is those rows sorted by (distance, id), the same page a full sort would give. The filters are
+ * tested once, in the walk; the page query only joins what it shows.
+ */
+function nearestFirst(
+  p: SqlParams,
+  where: string,
+  site: { latitude: number; longitude: number },
+  cursor: { key: number; id: number } | null,
+  limit: string,
+): { with: string; where: string } {
+  const chord = chordSql(p, site);
+  const after = cursor
+    ? ` AND (${chord}, t.id) > (${p.add(cursor.key)}::float8, ${p.add(cursor.id)}::int)`
+    : "";
+  const margin = p.add(1e-9);
+  return {
+    with: `WITH walk AS MATERIALIZED (SELECT t.id, ${chord} AS key ${DIRECTORY_FROM}${where}${after} ORDER BY 2 LIMIT ${limit}),
+     nearest_ids AS (SELECT id FROM walk UNION SELECT t.id ${DIRECTORY_FROM}${where}${after}
+        AND t.sphere_point <@ cube_enlarge(${sitePointSql(p, site)}, (SELECT max(key) FROM walk) + ${margin}::float8, 3)
+        AND ${chord} = (SELECT max(key) FROM walk))
+     `,
+    where: " AND t.id IN (SELECT id FROM nearest_ids)",
+  };
 }
 
 function toRowDto(
@@ -238,7 +294,8 @@ export async function searchDirectory(
 
   const p = new SqlParams();
   const distance = criteria.site ? distanceSql(p, criteria.site) : null;
-  const sortKey = sortKeySql(sort, distance, p, criteria.minRating !== undefined);
+  const chord = sort === "distance" && criteria.site ? chordSql(p, criteria.site) : null;
+  const sortKey = sortKeySql(sort, chord, p, criteria.minRating !== undefined);
   const filters = buildFilters(p, criteria);
   const where = filters.map((f) => ` AND (${f.sql})`).join("");
   const after = cursor
@@ -259,13 +316,15 @@ export async function searchDirectory(
         AND (re.technician_id = t.id OR re.service_company_id = t.company_id)
      HAVING count(*) > 0) AS on_roster`;
   const limit = p.add(query.limit + 1);
+  const nearest =
+    sort === "distance" && criteria.site ? nearestFirst(p, where, criteria.site, cursor, limit) : null;
   const rows = await db().query<DirectoryRow>(
-    `SELECT x.* FROM (
+    `${nearest?.with ?? ""}SELECT x.* FROM (
        SELECT t.id, t.name, t.company_id, c.name AS company_name, t.technologies, t.control_families, t.service_radius_km,
               t.hourly_rate_cents, t.travel_rate_cents, t.mileage_rate_cents, ${standingCols},
               coalesce(r.review_count, 0)::int AS review_count, coalesce(r.star_sum, 0)::int AS star_sum,
               ${distance ?? "NULL::float8"} AS distance_km, ${sortKey} AS sort_key, ${onRoster}
-       ${DIRECTORY_FROM}${where}
+       ${DIRECTORY_FROM}${nearest?.where ?? where}
      ) x ${after}
      ORDER BY x.sort_key, x.id
      LIMIT ${limit}`,

@@ -14,7 +14,7 @@ import { AppError } from "../http/app-error.ts";
 import { assumptions, estimateTrip, ratingSummary, SCORE_SOURCE } from "./estimates.ts";
 import { computeStandingNow } from "./live-standing.ts";
 import { fieldsForBuyers } from "../../shared/credentials/fields-for-buyers.ts";
-import { companyResponseMedians } from "../service-requests/index.ts";
+import { invitationsInWindowSql, medianOfInvitations } from "../service-requests/index.ts";
 import { buyerMayDownload } from "../../shared/visibility/technician-visibility.ts";
 
 const select = <T extends object>(sql: string, bind: unknown[]) =>
@@ -83,12 +83,14 @@ interface TechnicianRow {
   sites: SiteRow[];
   roster_technician_entry_id: number | null;
   roster_company_entry_id: number | null;
+  invitations: { invited_at: string; first_answer_at: string | null }[];
 }
 
 /**
  * The whole page in one round trip: the listed technician ($1) with, as JSON arrays, the verified credentials in force
  * at $3 (their own and their company's), the standing against each active requirement set of the shop ($2), the
- * latest 100 reviews and the shop's active sites, each in the order the page shows them.
+ * latest 100 reviews, the shop's active sites, each in the order the page shows them, and the company's invitations of
+ * the response-time window (its median response, by the shared rule).
  */
 const PAGE_SQL = `
   SELECT t.id, t.name, t.company_id, c.name AS company_name, c.time_zone, t.technologies, t.control_families,
@@ -117,7 +119,8 @@ const PAGE_SQL = `
          (SELECT re.id FROM roster_entries re WHERE re.shop_company_id = $2 AND re.technician_id = t.id LIMIT 1)
            AS roster_technician_entry_id,
          (SELECT re.id FROM roster_entries re WHERE re.shop_company_id = $2 AND re.service_company_id = t.company_id LIMIT 1)
-           AS roster_company_entry_id
+           AS roster_company_entry_id,
+         ${invitationsInWindowSql("t.company_id", "$3")} AS invitations
     FROM technicians t
     JOIN companies c ON c.id = t.company_id
     JOIN technician_standings b ON b.technician_id = t.id AND b.requirement_set_id IS NULL AND b.standing IN ('cleared','lapsing')
@@ -217,10 +220,7 @@ export async function findDirectoryTechnician(
   const [t] = await select<TechnicianRow>(PAGE_SQL, [technicianId, buyer.companyId, asOf]);
   if (!t) throw new AppError("not_found", "That technician was not found");
   // A set the standing job has not stored yet is computed now (one more query, only then).
-  const [requirementSets, responseMedians] = await Promise.all([
-    toStandings(t, asOf),
-    companyResponseMedians([t.company_id], asOf),
-  ]);
+  const requirementSets = await toStandings(t, asOf);
   return {
     technicianId: t.id,
     name: t.name,
@@ -243,7 +243,7 @@ export async function findDirectoryTechnician(
     reviews: toReviews(t.reviews),
     estimates: toEstimates(t, onSiteHours),
     assumptions: assumptions(onSiteHours),
-    companyMedianResponseMinutes: responseMedians.get(t.company_id) ?? null,
+    companyMedianResponseMinutes: medianOfInvitations(t.invitations, asOf),
     roster: {
       technicianEntryId: t.roster_technician_entry_id,
       companyEntryId: t.roster_company_entry_id,

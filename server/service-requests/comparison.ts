@@ -1,7 +1,7 @@
 import type { ComparisonDto, ComparisonRowDto } from "../../shared/service-requests/schemas.ts";
 import { ratingSummary } from "../directory/estimates.ts";
 import { AppError } from "../http/app-error.ts";
-import { standingSnapshotNow } from "../work-orders/standing-now.ts";
+import { standingSnapshotsNow } from "../work-orders/standing-now.ts";
 import { findRequest } from "./records.ts";
 import { acceptedEstimateCounts, companyResponseMedians } from "./response-times.ts";
 import { select, selectOne } from "./sql.ts";
@@ -37,14 +37,12 @@ export async function compareEstimates(
       [technicianIds],
     ),
   ]);
+  // Every estimate's technician at once: three statements for the page, not three per estimate.
+  const snapshots = await standingSnapshotsNow(technicianIds, request.requirement_set_id, asOf, warningDays);
   const rows: ComparisonRowDto[] = [];
   for (const e of estimates) {
-    const snapshot = await standingSnapshotNow(
-      e.current.technicianId,
-      request.requirement_set_id,
-      asOf,
-      warningDays,
-    );
+    const snapshot = snapshots.get(e.current.technicianId);
+    if (!snapshot) throw new Error(`No technician ${e.current.technicianId}`);
     const rating = ratings.find((r) => r.technician_id === e.current.technicianId);
     rows.push({
       estimateId: e.id,

@@ -23,16 +23,38 @@ export async function companyResponseMedians(
     [[...companyIds], asOf, RESPONSE_WINDOW_DAYS],
     transaction,
   );
-  for (const id of companyIds) {
-    const own = rows
-      .filter((r) => r.company_id === id)
-      .map((r) => ({
-        invitedAt: new Date(r.invited_at),
-        firstAnswerAt: r.first_answer_at ? new Date(r.first_answer_at) : null,
-      }));
-    result.set(id, medianResponseMinutes(answersInWindow(own, asOf)));
-  }
+  for (const id of companyIds)
+    result.set(
+      id,
+      medianOfInvitations(
+        rows.filter((r) => r.company_id === id),
+        asOf,
+      ),
+    );
   return result;
+}
+
+/**
+ * The companies' invitations of the window, as a correlated subquery for a statement that reads the company anyway
+ * (the technician page): `company` is the SQL of its id, `asOf` the placeholder of the instant.
+ */
+export function invitationsInWindowSql(company: string, asOf: string): string {
+  return `(SELECT coalesce(json_agg(json_build_object('invited_at', i.invited_at, 'first_answer_at', i.first_answer_at)), '[]'::json)
+      FROM service_request_invitations i
+     WHERE i.company_id = ${company} AND i.invited_at > ${asOf}::timestamptz - make_interval(days => ${RESPONSE_WINDOW_DAYS})
+       AND i.invited_at <= ${asOf}::timestamptz)`;
+}
+
+/** The median response, by the shared rule, of one company's invitations (rows of either query above). */
+export function medianOfInvitations(
+  rows: readonly { invited_at: Date | string; first_answer_at: Date | string | null }[],
+  asOf: Date,
+): number | null {
+  const own = rows.map((r) => ({
+    invitedAt: new Date(r.invited_at),
+    firstAnswerAt: r.first_answer_at ? new Date(r.first_answer_at) : null,
+  }));
+  return medianResponseMinutes(answersInWindow(own, asOf));
 }
 
 /** How many of each company's estimates were accepted, ever. */

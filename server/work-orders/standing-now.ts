@@ -47,20 +47,48 @@ export async function standingSnapshotNow(
   warningDays: number,
   transaction?: Transaction,
 ): Promise<StandingSnapshot> {
-  const [technician] = await select<TechnicianRow>(
-    `SELECT t.id, t.name, t.company_id, co.name AS company_name, co.time_zone,
-            (SELECT count(*)::int FROM technicians x WHERE x.company_id = t.company_id AND x.active) AS headcount
-       FROM technicians t JOIN companies co ON co.id = t.company_id WHERE t.id = $1`,
+  const snapshots = await standingSnapshotsNow(
     [technicianId],
+    requirementSetId,
+    asOf,
+    warningDays,
     transaction,
   );
-  if (!technician) throw new Error(`No technician ${technicianId}`);
+  const snapshot = snapshots.get(technicianId);
+  if (!snapshot) throw new Error(`No technician ${technicianId}`);
+  return snapshot;
+}
+
+/**
+ * standingSnapshotNow for several technicians against one set, in the same three statements whatever their number
+ * (the estimate comparison shows one per estimate). Technicians that do not exist are absent from the map.
+ */
+export async function standingSnapshotsNow(
+  technicianIds: readonly number[],
+  requirementSetId: number | null,
+  asOf: Date,
+  warningDays: number,
+  transaction?: Transaction,
+): Promise<Map<number, StandingSnapshot>> {
+  const out = new Map<number, StandingSnapshot>();
+  const ids = [...new Set(technicianIds)];
+  if (ids.length === 0) return out;
   // Superseded credentials never count; lapsed and returned ones stay so the engine can say why a requirement is unmet.
-  const [rows, types, targets] = await Promise.all([
-    select<CredentialRow>(
-      `SELECT id, type_code, technician_id, state, fields FROM credentials
-        WHERE state <> 'superseded' AND ((technician_id IS NULL AND company_id = $1) OR technician_id = $2)`,
-      [technician.company_id, technicianId],
+  const [technicians, rows, types, targets] = await Promise.all([
+    select<TechnicianRow>(
+      `SELECT t.id, t.name, t.company_id, co.name AS company_name, co.time_zone,
+              (SELECT count(*)::int FROM technicians x WHERE x.company_id = t.company_id AND x.active) AS headcount
+         FROM technicians t JOIN companies co ON co.id = t.company_id WHERE t.id = ANY($1::int[])`,
+      [ids],
+      transaction,
+    ),
+    select<CredentialRow & { company_id: number }>(
+      `SELECT c.id, c.type_code, c.technician_id, c.company_id, c.state, c.fields FROM credentials c
+        WHERE c.state <> 'superseded'
+          AND (c.technician_id = ANY($1::int[])
+            OR (c.technician_id IS NULL AND c.company_id IN (SELECT company_id FROM technicians WHERE id = ANY($1::int[]))))
+        ORDER BY c.id`,
+      [ids],
       transaction,
     ),
     loadCatalogue(),
@@ -74,44 +102,65 @@ export async function standingSnapshotNow(
     ),
   ]);
 
-  const companyCredentials: StandingCredential[] = [];
-  const technicianCredentials: StandingCredential[] = [];
-  const sources = new Map<number, SnapshotCredentialSource>();
+  // Each row parsed once; a credential whose fields no longer parse cannot count, exactly as in the stored standings.
+  const parsedRows: {
+    row: CredentialRow & { company_id: number };
+    credential: StandingCredential;
+    source: SnapshotCredentialSource;
+  }[] = [];
   for (const row of rows) {
     const type = types.get(row.type_code);
     const parsed = type ? fieldSetSchemas[type.fieldSet].safeParse(row.fields) : undefined;
-    // A credential whose fields no longer parse cannot count, exactly as in the stored standings.
     if (!parsed?.success) continue;
-    const credential: StandingCredential = {
-      id: row.id,
-      typeCode: row.type_code,
-      state: row.state,
-      fields: parsed.data,
-      holder: row.technician_id === null ? "company" : "technician",
-    };
-    (row.technician_id === null ? companyCredentials : technicianCredentials).push(credential);
-    sources.set(row.id, { id: row.id, typeCode: row.type_code, fields: parsed.data });
+    parsedRows.push({
+      row,
+      credential: {
+        id: row.id,
+        typeCode: row.type_code,
+        state: row.state,
+        fields: parsed.data,
+        holder: row.technician_id === null ? "company" : "technician",
+      },
+      source: { id: row.id, typeCode: row.type_code, fields: parsed.data },
+    });
   }
+  const typeNames = new Map([...types.values()].map((t) => [t.code, t.name]));
 
-  return buildStandingSnapshot({
-    takenAt: asOf,
-    technician: { id: technician.id, name: technician.name, companyName: technician.company_name },
-    targets: targets.map((target) => ({
-      requirementSetId: target.id,
-      name: target.name,
-      result: computeTechnicianStanding({
-        companyCredentials,
-        technicianCredentials,
-        requirements: target.requirements,
-        companyTimeZone: technician.time_zone,
-        technician: { id: technician.id, name: technician.name },
-        companyHeadcount: technician.headcount,
-        asOf,
-        warningDays,
-        types,
+  for (const technician of technicians) {
+    const companyCredentials: StandingCredential[] = [];
+    const technicianCredentials: StandingCredential[] = [];
+    const sources = new Map<number, SnapshotCredentialSource>();
+    for (const { row, credential, source } of parsedRows) {
+      if (row.technician_id === technician.id) technicianCredentials.push(credential);
+      else if (row.technician_id === null && row.company_id === technician.company_id)
+        companyCredentials.push(credential);
+      else continue;
+      sources.set(row.id, source);
+    }
+    out.set(
+      technician.id,
+      buildStandingSnapshot({
+        takenAt: asOf,
+        technician: { id: technician.id, name: technician.name, companyName: technician.company_name },
+        targets: targets.map((target) => ({
+          requirementSetId: target.id,
+          name: target.name,
+          result: computeTechnicianStanding({
+            companyCredentials,
+            technicianCredentials,
+            requirements: target.requirements,
+            companyTimeZone: technician.time_zone,
+            technician: { id: technician.id, name: technician.name },
+            companyHeadcount: technician.headcount,
+            asOf,
+            warningDays,
+            types,
+          }),
+        })),
+        credentials: sources,
+        typeNames,
       }),
-    })),
-    credentials: sources,
-    typeNames: new Map([...types.values()].map((t) => [t.code, t.name])),
-  });
+    );
+  }
+  return out;
 }
