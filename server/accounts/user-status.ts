@@ -3,9 +3,9 @@ import type { AdminCompanyDto, AdminUserDto, UserStatus } from "../../shared/acc
 import { db } from "../db/sequelize.ts";
 import { AppError } from "../http/app-error.ts";
 import { recordAudit } from "../audit/index.ts";
-import { Company } from "../companies/model.ts";
 import { User } from "./model.ts";
 import { endSessionsOfUser } from "./end-sessions.ts";
+import { Company } from "../db/models.ts";
 
 export function statusOf(user: Pick<User, "active" | "passwordHash">): UserStatus {
   if (!user.active) return "deactivated";

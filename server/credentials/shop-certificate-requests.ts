@@ -7,12 +7,10 @@ import {
 } from "../../shared/credentials/broker-schemas.ts";
 import { AppError, notFound } from "../http/app-error.ts";
 import { db } from "../db/sequelize.ts";
-import { Company } from "../companies/model.ts";
-import { User } from "../accounts/model.ts";
-import { Notification } from "../notices/model.ts";
 import { CredentialType } from "./model.ts";
 import { BrokerUploadRequest } from "./broker-model.ts";
 import { brokerFor, insuranceType, sendBrokerLink } from "./broker-requests.ts";
+import { Company, User, Notification } from "../db/models.ts";
 
 /**
  * The service companies a shop works with: on its roster (the company, or one of its technicians) or party to one of

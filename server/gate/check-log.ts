@@ -6,7 +6,7 @@ import {
   type GateCheckRecord,
 } from "../../shared/gate/check-log.ts";
 import { db } from "../db/sequelize.ts";
-import { Company } from "../companies/model.ts";
+import { Company } from "../db/models.ts";
 
 interface Row {
   id: number;

@@ -2,7 +2,8 @@ import { useState } from "react";
 import { useSuspenseQuery } from "@tanstack/react-query";
 import { Link, useParams, type LoaderFunctionArgs } from "react-router-dom";
 import { machineStateLabels } from "@shared/machines/machine-states.ts";
-import { paths } from "@/config/paths.ts";
+import { hrefs, paths } from "@/config/paths.ts";
+import { buttonStyles } from "@/components/ui/button-styles.ts";
 import { Button } from "@/components/ui/button.tsx";
 import { PageHeader } from "@/components/ui/page-header.tsx";
 import { StatusKey } from "@/components/ui/status-key.tsx";
@@ -14,6 +15,7 @@ import { MachineRecord } from "@/features/machines/components/machine-record.tsx
 import { MachineRecordForm } from "@/features/machines/components/machine-record-form.tsx";
 import { ServiceHistory } from "@/features/machines/components/service-history.tsx";
 import { ShopRecordForm } from "@/features/machines/components/shop-record-form.tsx";
+import { MachinePhotos } from "@/features/machines/components/machine-photos.tsx";
 import { queryClient } from "@/lib/query-client.ts";
 import { machineIdOf } from "./machine-id.ts";
 
@@ -71,8 +73,15 @@ export function Component() {
           ) : (
             <MachineRecord machine={machine} />
           )}
-          {/* Further machine panels (photos, transfer, maintenance plans, downtime) render here. */}
-          <div data-slot="machine-panels" />
+          <nav aria-label="More for this machine" className="flex flex-wrap gap-2">
+            <Link to={hrefs.machineMaintenance(machine.id)} className={buttonStyles("secondary")}>
+              Maintenance plans
+            </Link>
+            <Link to={hrefs.machineTransfer(machine.id)} className={buttonStyles("secondary")}>
+              Sell or transfer
+            </Link>
+          </nav>
+          <MachinePhotos machineId={machine.id} />
         </div>
         <div className="min-w-0 space-y-4">
           <ServiceHistory history={history} />
