@@ -3,6 +3,8 @@ import { z } from "zod";
 import { idParam } from "../../shared/credentials/schemas.ts";
 import { recordShopServiceSchema } from "../../shared/machines/service-history.ts";
 import { createRoutes } from "../http/route.ts";
+import { requireOwnership, requireRole } from "../http/policy.ts";
+import { hasOwnedMachine } from "./ownership.ts";
 import { AppError } from "../http/app-error.ts";
 import { toEquipmentDto } from "../sites/dto.ts";
 import { canOpenMachine, ownMachine } from "./machine-routes.ts";
@@ -13,6 +15,13 @@ import { historyToCsv, renderHistoryPage } from "./history-export.ts";
 export const machineHistoryRoutes = createRoutes("/api/machines");
 
 const machineParamsSchema = z.object({ machineId: idParam });
+
+// A seller keeps a read-only copy of the history up to the day it handed the machine over.
+const canReadMachineHistory = requireOwnership(
+  requireRole("buyer"),
+  "a machine the buyer's shop holds or once held",
+  (user, params) => hasOwnedMachine(user.companyId, params.machineId),
+);
 
 async function machineOf(user: Express.User, machineId: number) {
   const found = await ownMachine(user.companyId, machineId);
@@ -25,8 +34,8 @@ const fileName = (serial: string | null, id: number) =>
 
 machineHistoryRoutes.get(
   "/:machineId/history",
-  { allow: canOpenMachine, params: machineParamsSchema },
-  (_req, _res, { params }) => listMachineHistory(params.machineId),
+  { allow: canReadMachineHistory, params: machineParamsSchema },
+  (req, _res, { params }) => listMachineHistory(params.machineId, req.user!.companyId),
 );
 
 machineHistoryRoutes.post(
@@ -35,7 +44,7 @@ machineHistoryRoutes.post(
   async (req, res, { params, body }) => {
     const { machine } = await machineOf(req.user!, params.machineId);
     const { key } = await recordShopService(req.user!, machine, body);
-    const history = await listMachineHistory(machine.id);
+    const history = await listMachineHistory(machine.id, req.user!.companyId);
     res.status(201).json(history.entries.find((e) => e.key === key));
   },
 );
@@ -45,7 +54,7 @@ machineHistoryRoutes.get(
   { allow: canOpenMachine, params: machineParamsSchema },
   async (req, res, { params }) => {
     const { machine } = await machineOf(req.user!, params.machineId);
-    const csv = historyToCsv(await listMachineHistory(machine.id));
+    const csv = historyToCsv(await listMachineHistory(machine.id, req.user!.companyId));
     res
       .type("text/csv; charset=utf-8")
       .attachment(`${fileName(machine.serialNumber, machine.id)}.csv`)
@@ -67,7 +76,7 @@ machineHistoryRoutes.get(
   { allow: canOpenMachine, params: machineParamsSchema },
   async (req, res, { params }) => {
     const { machine, siteName } = await machineOf(req.user!, params.machineId);
-    const history = await listMachineHistory(machine.id);
+    const history = await listMachineHistory(machine.id, req.user!.companyId);
     sendPrintable(res, renderHistoryPage({ ...toEquipmentDto(machine), siteName }, history));
   },
 );

@@ -12,6 +12,8 @@ import { calendarDateIn } from "../../shared/dates/local-time.ts";
 import { snapshotForBuyer } from "../../shared/visibility/technician-visibility.ts";
 import type { StandingSnapshot } from "../../shared/work-orders/standing-snapshot.ts";
 import { db } from "../db/sequelize.ts";
+import { historyAccess } from "../../shared/machines/ownership-periods.ts";
+import { ownershipPeriods } from "./ownership.ts";
 
 interface WorkOrderRow {
   id: number;
@@ -144,14 +146,55 @@ function shopEntry(r: ShopRecordRow): HistoryEntryDto {
   };
 }
 
-/** A machine's history, newest first: its confirmed work orders and the shop's own records, repeat faults marked. */
-export async function listMachineHistory(machineId: number): Promise<MachineHistoryDto> {
-  const [orders, records] = await Promise.all([confirmedWorkOrders(machineId), shopRecords(machineId)]);
+/**
+ * What follows the machine to a shop that did not hold it at the time: the date, the kind of work and where, the
+ * company, what was done and the parts. The people, hours, the problem in the other shop's words, the files and the
+ * standing snapshot stay with the shop that owned it then.
+ */
+function carriedForm(entry: HistoryEntryDto): HistoryEntryDto {
+  return {
+    ...entry,
+    workOrderId: null,
+    technicianName: null,
+    hoursOnSite: null,
+    travelHours: null,
+    problem: null,
+    attachments: [],
+    standingSnapshot: null,
+  };
+}
+
+// A shop's own record carries a calendar day, not an instant: midday UTC keeps it on that day in every US zone.
+const recordInstant = (r: ShopRecordRow) => new Date(`${r.performed_on}T12:00:00Z`);
+
+/**
+ * A machine's history as one shop may read it, newest first: its confirmed work orders and the shops' own records,
+ * repeat faults marked. Entries from another owner's time come in their carried form; a former owner reads only up
+ * to the day it handed the machine over.
+ */
+export async function listMachineHistory(
+  machineId: number,
+  readerCompanyId: number,
+): Promise<MachineHistoryDto> {
+  const [orders, records, periods] = await Promise.all([
+    confirmedWorkOrders(machineId),
+    shopRecords(machineId),
+    ownershipPeriods(machineId),
+  ]);
+  // Work dated before the first recorded period (done before the machine was entered here) is the first owner's.
+  if (periods[0]) periods[0] = { ...periods[0], from: new Date(0).toISOString() };
   const attachments = await attachmentsOf(orders.map((o) => o.id));
-  const entries = [
-    ...orders.map((o) => platformEntry(o, attachments.get(o.id) ?? [])),
-    ...records.map(shopEntry),
+  const dated = [
+    ...orders.map((o) => ({
+      at: o.completed_at ?? o.confirmed_at,
+      entry: platformEntry(o, attachments.get(o.id) ?? []),
+    })),
+    ...records.map((r) => ({ at: recordInstant(r), entry: shopEntry(r) })),
   ];
+  const entries = dated.flatMap(({ at, entry }) => {
+    const access = historyAccess(readerCompanyId, periods, new Date(at));
+    return access === "none" ? [] : [access === "own" ? entry : carriedForm(entry)];
+  });
   const repeats = findRepeatFaults(entries);
   const marked = entries.map((e) => ({ ...e, repeatOf: repeats.get(e.key) ?? null }));
   marked.sort((a, b) => b.date.localeCompare(a.date) || b.key.localeCompare(a.key));

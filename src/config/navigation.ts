@@ -31,7 +31,6 @@ export const navigationByRole: Record<Role, readonly NavItem[]> = {
     { label: "Service requests", to: paths.buyer.serviceRequests },
     { label: "Machines", to: paths.buyer.machines },
     { label: "Company", to: paths.company },
-    { label: "Machine transfers", to: paths.buyer.machineTransfers },
     { label: "Gate checks", to: paths.buyer.gateChecks },
     { label: "Certificates", to: paths.buyer.certificateRequests },
   ],

@@ -65,7 +65,7 @@ describe("a maintenance manager reads a machine's service history", () => {
       await expect(history.getByText("Angular contact bearing pair", { exact: false }).count()).resolves.toBe(
         1,
       );
-      await expect(page.locator('[data-slot="machine-panels"]').count()).resolves.toBe(1);
+      await expect(page.getByRole("link", { name: "Maintenance plans" }).count()).resolves.toBe(1);
       expect(csv.status()).toBe(200);
       expect(csv.headers()["content-type"]).toContain("text/csv");
       const text = await csv.text();

@@ -141,11 +141,11 @@ describe("loading the demo scenario", () => {
   });
 
   it("gives the demo shop's mill a history: a work order on the platform and a shop record, the repeat flagged", async () => {
-    const [machine] = await rows<{ id: number }>(
-      "SELECT id FROM equipment WHERE serial_number = 'VM40-2209'",
+    const [machine] = await rows<{ id: number; company_id: number }>(
+      "SELECT e.id, s.company_id FROM equipment e JOIN sites s ON s.id = e.site_id WHERE e.serial_number = 'VM40-2209'",
     );
 
-    const history = await listMachineHistory(machine!.id);
+    const history = await listMachineHistory(machine!.id, machine!.company_id);
 
     expect(history.entries.map((e) => e.source)).toEqual(["platform", "shop_record"]);
     expect(history.entries[0]!.repeatOf).toBe(history.entries[1]!.key);

@@ -182,6 +182,29 @@ describe("machine transfer", () => {
     expect((await receiver.agent.get(`/api/work-orders/${workOrderId}`)).status).toBe(404);
     expect((await receiver.agent.get(`/api/work-orders/${workOrderId}/messages`)).status).toBe(404);
     expect((await world.shop.agent.get(`/api/work-orders/${workOrderId}`)).status).toBe(200);
+
+    // The machine's history as each shop reads it through the API.
+    type Entry = {
+      key: string;
+      workOrderId: number | null;
+      technicianName: string | null;
+      hoursOnSite: number | null;
+    };
+    const entryOf = async (agent: typeof receiver.agent) => {
+      const res = await agent.get(`/api/machines/${world.equipmentId}/history`).expect(200);
+      return (res.body.entries as Entry[]).find((e) => e.key === `wo-${workOrderId}`);
+    };
+    const carried = await entryOf(receiver.agent);
+    expect(carried).toMatchObject({ workOrderId: null, technicianName: null, hoursOnSite: null });
+    expect(carried).toMatchObject({
+      serviceCompanyName: expect.any(String),
+      attachments: [],
+      standingSnapshot: null,
+    });
+    const sellersCopy = await entryOf(world.shop.agent);
+    expect(sellersCopy).toMatchObject({ workOrderId, technicianName: expect.any(String) });
+    const stranger = await buildMachineShop(t.app, { machine: false });
+    expect((await stranger.agent.get(`/api/machines/${world.equipmentId}/history`)).status).toBe(404);
   });
 
   it("refuses a second acceptance, a withdrawal and a decline after acceptance with 409, changing nothing", async () => {

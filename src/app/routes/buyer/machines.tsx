@@ -51,9 +51,14 @@ export function Component() {
         title="Machines"
         description="Every machine of your shop across its sites: open one for its record and service history."
         actions={
-          <Link to={paths.buyer.sites} className={buttonStyles("secondary")}>
-            Add machines at a site
-          </Link>
+          <div className="flex flex-wrap gap-2">
+            <Link to={paths.buyer.sites} className={buttonStyles("secondary")}>
+              Add machines at a site
+            </Link>
+            <Link to={paths.buyer.machineTransfers} className={buttonStyles("secondary")}>
+              Machine transfers
+            </Link>
+          </div>
         }
       />
       <MachineFilters key={params.toString()} sites={sites} filters={filters} onChange={change} />
