@@ -16,34 +16,15 @@ import { AppError } from "../http/app-error.ts";
 import { readCsvText, type UploadedFile } from "../http/csv-upload.ts";
 import { recordAudit } from "../audit/index.ts";
 import { listCatalog } from "./catalog-service.ts";
+import { parseColumnMapping } from "../imports/column-mapping.ts";
 
 export interface ImportOptions {
   mapping?: string | undefined;
   defaultSiteId?: number | undefined;
 }
 
-function parseMapping(raw: string | undefined, headers: string[]): MachineColumnMapping {
-  if (raw === undefined || raw === "") return guessMachineMapping(headers);
-  let json: unknown;
-  try {
-    json = JSON.parse(raw);
-  } catch {
-    throw new AppError("bad_request", "The column mapping is not valid JSON", [
-      { path: "body.mapping", message: "not JSON" },
-    ]);
-  }
-  const parsed = machineColumnMappingSchema.safeParse(json);
-  if (!parsed.success)
-    throw new AppError("invalid_input", "The column mapping names an unknown field", [
-      { path: "body.mapping", message: parsed.error.issues[0]?.message ?? "invalid" },
-    ]);
-  for (const [key, header] of Object.entries(parsed.data))
-    if (header !== undefined && !headers.includes(header))
-      throw new AppError("invalid_input", `The column "${header}" is not in the file`, [
-        { path: `body.mapping.${key}`, message: "no such column in the file" },
-      ]);
-  return parsed.data;
-}
+const parseMapping = (raw: string | undefined, headers: string[]): MachineColumnMapping =>
+  parseColumnMapping(raw, headers, machineColumnMappingSchema, guessMachineMapping);
 
 /** Who holds each builder+serial on the platform now (the same keys as the one-serial-per-builder check). */
 async function holdersOf(keys: string[], transaction?: Transaction) {

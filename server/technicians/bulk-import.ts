@@ -18,6 +18,7 @@ import {
   type ColumnMapping,
 } from "../../shared/technicians/bulk-import.ts";
 import { Company, User } from "../db/models.ts";
+import { parseColumnMapping } from "../imports/column-mapping.ts";
 
 export const MAX_IMPORT_ROWS = 5_000;
 
@@ -27,28 +28,8 @@ interface UploadedFile {
   mimetype: string;
 }
 
-function parseMapping(raw: string | undefined, headers: string[]): ColumnMapping {
-  if (raw === undefined || raw === "") return guessMapping(headers);
-  let json: unknown;
-  try {
-    json = JSON.parse(raw);
-  } catch {
-    throw new AppError("bad_request", "The column mapping is not valid JSON", [
-      { path: "body.mapping", message: "not JSON" },
-    ]);
-  }
-  const parsed = columnMappingSchema.safeParse(json);
-  if (!parsed.success)
-    throw new AppError("invalid_input", "The column mapping names an unknown field", [
-      { path: "body.mapping", message: parsed.error.issues[0]?.message ?? "invalid" },
-    ]);
-  for (const [key, header] of Object.entries(parsed.data))
-    if (header !== undefined && !headers.includes(header))
-      throw new AppError("invalid_input", `The column "${header}" is not in the file`, [
-        { path: `body.mapping.${key}`, message: "no such column in the file" },
-      ]);
-  return parsed.data;
-}
+const parseMapping = (raw: string | undefined, headers: string[]): ColumnMapping =>
+  parseColumnMapping(raw, headers, columnMappingSchema, guessMapping);
 
 export interface ImportPreview {
   headers: string[];
