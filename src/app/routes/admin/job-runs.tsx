@@ -2,9 +2,9 @@ import { useSuspenseQuery } from "@tanstack/react-query";
 import { Button } from "@/components/ui/button.tsx";
 import { FormError } from "@/components/ui/form-error.tsx";
 import { PageHeader } from "@/components/ui/page-header.tsx";
-import { jobRunsQuery } from "@/features/job-runs/api/get-job-runs.ts";
-import { useRunDailyJob } from "@/features/job-runs/api/run-daily-job.ts";
-import { JobRunsTable } from "@/features/job-runs/components/job-runs-table.tsx";
+import { jobRunsQuery } from "@/features/admin/api/get-job-runs.ts";
+import { useRunDailyJob } from "@/features/admin/api/run-daily-job.ts";
+import { JobRunsTable } from "@/features/admin/components/job-runs-table.tsx";
 import { formatDateTime } from "@/lib/format-date-time.ts";
 import { queryClient } from "@/lib/query-client.ts";
 

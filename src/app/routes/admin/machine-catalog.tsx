@@ -1,8 +1,8 @@
 import { useSuspenseQuery } from "@tanstack/react-query";
 import { PageHeader } from "@/components/ui/page-header.tsx";
-import { useAddCatalogEntry } from "@/features/machine-catalog/api/save-catalog-entry.ts";
-import { CatalogEntryForm } from "@/features/machine-catalog/components/catalog-entry-form.tsx";
-import { CatalogList } from "@/features/machine-catalog/components/catalog-list.tsx";
+import { useAddCatalogEntry } from "@/features/machines/api/save-catalog-entry.ts";
+import { CatalogEntryForm } from "@/features/machines/components/catalog-entry-form.tsx";
+import { CatalogList } from "@/features/machines/components/catalog-list.tsx";
 import { machineCatalogQuery } from "@/lib/machine-catalog.ts";
 import { queryClient } from "@/lib/query-client.ts";
 

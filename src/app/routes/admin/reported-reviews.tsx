@@ -1,8 +1,8 @@
 import { useSuspenseQuery } from "@tanstack/react-query";
 import { EmptyState } from "@/components/ui/empty-state.tsx";
 import { PageHeader } from "@/components/ui/page-header.tsx";
-import { reportedReviewsQuery } from "@/features/admin-reviews/api/get-reported-reviews.ts";
-import { ReportedReviewCard } from "@/features/admin-reviews/components/reported-review-card.tsx";
+import { reportedReviewsQuery } from "@/features/reviews/api/get-reported-reviews.ts";
+import { ReportedReviewCard } from "@/features/reviews/components/reported-review-card.tsx";
 import { queryClient } from "@/lib/query-client.ts";
 
 export async function loader() {

@@ -7,7 +7,7 @@ import { CautionNote } from "@/components/ui/caution-note.tsx";
 import { SafetyCaution } from "@/components/ui/safety-caution.tsx";
 import { PageHeader } from "@/components/ui/page-header.tsx";
 import { directoryTechnicianQuery } from "@/features/directory/api/get-directory-technician.ts";
-import { requirementSetsQuery } from "@/features/requirement-sets/api/get-requirement-sets.ts";
+import { requirementSetsQuery } from "@/features/standing/api/get-requirement-sets.ts";
 import { useSiteEquipment } from "@/features/sites/api/get-site-equipment.ts";
 import { sitesQuery } from "@/features/sites/api/get-sites.ts";
 import { useRaiseWorkOrder } from "@/features/work-orders/api/raise-work-order.ts";

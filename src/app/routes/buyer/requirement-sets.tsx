@@ -4,11 +4,11 @@ import { Button } from "@/components/ui/button.tsx";
 import { EmptyState } from "@/components/ui/empty-state.tsx";
 import { PageHeader } from "@/components/ui/page-header.tsx";
 import { credentialTypesQuery } from "@/features/credentials/api/get-credential-types.ts";
-import { useArchiveRequirementSet } from "@/features/requirement-sets/api/archive-requirement-set.ts";
-import { requirementSetsQuery } from "@/features/requirement-sets/api/get-requirement-sets.ts";
-import { useSaveRequirementSet } from "@/features/requirement-sets/api/save-requirement-set.ts";
-import { RequirementSetEditor } from "@/features/requirement-sets/components/requirement-set-editor.tsx";
-import { RequirementSetSummary } from "@/features/requirement-sets/components/requirement-set-summary.tsx";
+import { useArchiveRequirementSet } from "@/features/standing/api/archive-requirement-set.ts";
+import { requirementSetsQuery } from "@/features/standing/api/get-requirement-sets.ts";
+import { useSaveRequirementSet } from "@/features/standing/api/save-requirement-set.ts";
+import { RequirementSetEditor } from "@/features/standing/components/requirement-set-editor.tsx";
+import { RequirementSetSummary } from "@/features/standing/components/requirement-set-summary.tsx";
 import { sitesQuery } from "@/features/sites/api/get-sites.ts";
 import { queryClient } from "@/lib/query-client.ts";
 
