@@ -1,10 +1,9 @@
 import { QueryTypes } from "sequelize";
-import { calendarDateIn } from "../../shared/dates/local-time.ts";
 import { db } from "../db/sequelize.ts";
-import { readTechnicianStanding } from "../standing/technician-standing.ts";
-import { technicianPhotoDataUrl } from "./photo.ts";
+import { computeStandings } from "../standing/compute-stored-standings.ts";
+import { loadStandingInputs, loadTargets } from "../standing/standing-inputs.ts";
+import type { StandingResult } from "../../shared/standing/standing-types.ts";
 import { checkBadgeToken, siteFromGateCode } from "./token.ts";
-import { Company, RequirementSet, Site, Technician } from "../db/models.ts";
 
 export interface GateCheckDto {
   state: "cleared" | "not_cleared" | "expired" | "invalid";
@@ -16,9 +15,55 @@ export interface GateCheckDto {
   workOrder?: { id: number; technology: string } | null;
 }
 
+interface GateRow {
+  technician_id: number;
+  technician_name: string;
+  company_id: number;
+  company_name: string;
+  site_id: number | null;
+  site_name: string | null;
+  shop_company_id: number | null;
+  set_id: number | null;
+  set_name: string | null;
+  standing: string | null;
+  results: StandingResult["results"] | null;
+  work_order: { id: number; technology: string } | null;
+  jpeg: Buffer | null;
+}
+
+/**
+ * Everything the gate shows, in one statement: the technician and company, the site with its active set, the stored
+ * standing against that set (or the baseline when the site has none), the accepted order with the site's today among
+ * its dates, and the photo. "Today" is the site's calendar date, so a check at 7 a.m. in Chicago is not matched against
+ * the date already begun in UTC.
+ */
+const GATE_SQL = `
+  WITH site AS (
+    SELECT s.id, s.name, s.company_id, s.time_zone, rs.id AS set_id, rs.name AS set_name
+      FROM sites s
+      LEFT JOIN LATERAL (SELECT id, name FROM requirement_sets
+                          WHERE site_id = s.id AND active ORDER BY id LIMIT 1) rs ON true
+     WHERE s.id = $2::int)
+  SELECT t.id AS technician_id, t.name AS technician_name, t.company_id, c.name AS company_name,
+         site.id AS site_id, site.name AS site_name, site.company_id AS shop_company_id,
+         site.set_id, site.set_name, st.standing, st.results,
+         (SELECT jsonb_build_object('id', w.id, 'technology', w.technology) FROM work_orders w
+           WHERE w.technician_id = t.id AND w.site_id = site.id AND w.shop_company_id = site.company_id
+             AND w.status = 'accepted'
+             AND w.preferred_dates @> jsonb_build_array(to_char($3::timestamptz AT TIME ZONE site.time_zone, 'YYYY-MM-DD'))
+           ORDER BY w.accepted_at DESC, w.id DESC LIMIT 1) AS work_order,
+         (SELECT p.jpeg FROM technician_photos p WHERE p.technician_id = t.id) AS jpeg
+    FROM technicians t
+    JOIN companies c ON c.id = t.company_id
+    LEFT JOIN site ON true
+    LEFT JOIN technician_standings st
+      ON st.technician_id = t.id AND coalesce(st.requirement_set_id, 0) = coalesce(site.set_id, 0)
+   WHERE t.id = $1::int`;
+
 /**
  * What the front desk sees for a scanned badge: who, for which company, and whether cleared at this instant against the
  * site's requirement set (or the platform baseline). Nothing else about the technician, the company or other shops.
+ * One read and the INSERT of the check record; a standing not stored yet is computed for that one target only.
  */
 export async function checkAtGate(
   secret: string,
@@ -29,53 +74,43 @@ export async function checkAtGate(
   const checkedAt = now.toISOString();
   const verdict = checkBadgeToken(secret, token, now);
   if (verdict.state !== "valid") return { state: verdict.state, checkedAt };
-  const technician = await Technician.findByPk(verdict.technicianId, {
-    attributes: ["id", "name", "companyId"],
-  });
-  if (!technician) return { state: "invalid", checkedAt };
-  const company = await Company.findByPk(technician.companyId, { attributes: ["name"] });
   const siteId = siteCode ? siteFromGateCode(secret, siteCode) : null;
-  const site = siteId
-    ? await Site.findByPk(siteId, { attributes: ["id", "name", "companyId", "active", "timeZone"] })
-    : null;
-  const set = site
-    ? await RequirementSet.findOne({ where: { siteId: site.id, active: true }, attributes: ["id"] })
-    : null;
-  const standing = await readTechnicianStanding(technician.id);
-  const chosen =
-    (set ? standing.requirementSets.find((s) => s.requirementSetId === set.id) : undefined) ??
-    standing.baseline;
-  const workOrder = site ? await todaysWorkOrder(technician.id, site, now) : null;
-  const photo = await technicianPhotoDataUrl(technician.id);
+  const [row] = await db().query<GateRow>(GATE_SQL, {
+    bind: [verdict.technicianId, siteId, now],
+    type: QueryTypes.SELECT,
+  });
+  if (!row) return { state: "invalid", checkedAt };
+  const chosen = row.standing
+    ? { standing: row.standing, results: row.results ?? [] }
+    : await computeOneStanding(row.technician_id, row.set_id, now);
   const state = chosen?.standing === "cleared" || chosen?.standing === "lapsing" ? "cleared" : "not_cleared";
   await db().query(
     `INSERT INTO gate_checks (technician_id, service_company_id, site_id, shop_company_id, state, checked_at)
      VALUES ($1, $2, $3, $4, $5, $6)`,
-    { bind: [technician.id, technician.companyId, site?.id ?? null, site?.companyId ?? null, state, now] },
+    { bind: [row.technician_id, row.company_id, row.site_id, row.shop_company_id, state, now] },
   );
+  const photo = row.jpeg ? `data:image/jpeg;base64,${Buffer.from(row.jpeg).toString("base64")}` : null;
   return {
     state,
     checkedAt,
-    technician: { name: technician.name, company: company?.name ?? "", ...(photo ? { photo } : {}) },
-    site: site ? { name: site.name } : null,
-    against: chosen?.name ?? "Platform baseline",
+    technician: { name: row.technician_name, company: row.company_name, ...(photo ? { photo } : {}) },
+    site: row.site_id !== null ? { name: row.site_name ?? "" } : null,
+    against: row.set_name ?? "Platform baseline",
     lines: (chosen?.results ?? []).map((r) => ({ requirement: r.requirement.label, status: r.status })),
-    workOrder,
+    workOrder: row.work_order,
   };
 }
 
-/**
- * The accepted order that has this site's today among its dates. "Today" is the site's calendar date, so a check at
- * 7 a.m. in Chicago is not matched against the date already begun in UTC; an order for another day is not expected.
- */
-async function todaysWorkOrder(technicianId: number, site: Site, now: Date) {
-  const today = calendarDateIn(now, site.timeZone);
-  const [order] = await db().query<{ id: number; technology: string }>(
-    `SELECT id, technology FROM work_orders
-      WHERE technician_id = $1 AND site_id = $2 AND shop_company_id = $3 AND status = 'accepted'
-        AND preferred_dates @> jsonb_build_array($4::text)
-      ORDER BY accepted_at DESC, id DESC LIMIT 1`,
-    { bind: [technicianId, site.id, site.companyId, today], type: QueryTypes.SELECT },
-  );
-  return order ? { id: order.id, technology: order.technology } : null;
+/** A technician or set newer than the last refresh has no stored row yet: the engine answers for that one target. */
+async function computeOneStanding(technicianId: number, setId: number | null, now: Date) {
+  return db().transaction(async (transaction) => {
+    const targets = (await loadTargets(transaction, setId === null ? undefined : [setId])).filter(
+      (t) => t.id === setId,
+    );
+    const inputs = await loadStandingInputs({ companyIds: [], technicianIds: [technicianId] }, transaction, {
+      targets,
+    });
+    const [computed] = computeStandings(inputs, now);
+    return computed ? { standing: computed.standing, results: computed.results } : null;
+  });
 }

@@ -6,6 +6,8 @@ import { buildClearedProvider, buildProvider } from "../../fixtures/build-creden
 import { runLapseJob } from "../../../jobs/lapse.ts";
 import { JOB_DEPS } from "../../jobs/job-support.ts";
 import { Site } from "../../../server/sites/model.ts";
+import { RequirementSet } from "../../../server/standing/model.ts";
+import type { Requirement } from "../../../shared/standing/requirements.ts";
 import { gateSecret } from "../../../server/config.ts";
 import { issueBadgeToken } from "../../../server/gate/token.ts";
 import { signIn } from "../standing/sign-in-as.ts";
@@ -147,6 +149,53 @@ describe("gate check", () => {
       .get("/api/gate/check")
       .query({ token: new URL(badge.body.url).searchParams.get("token"), site: madeUp });
     expect(guessed.body.site).toBeNull();
+  });
+
+  it("checks against the site's own set, computing it when no standing is stored for it yet", async () => {
+    const p = await buildClearedProvider({ glExpires: "2099-07-15", wcExpires: "2099-07-15" });
+    const shop = await buildCompany("shop", ["buyer"]);
+    const site = await Site.create({
+      companyId: shop.company.id,
+      name: "Press line",
+      addressLine: "300 Sample Way",
+      postalCode: "60601",
+      timeZone: "America/Chicago",
+      latitude: 41.8858,
+      longitude: -87.6181,
+    });
+    // Written straight to the table, so no refresh has stored a standing against it: the check must compute one.
+    await RequirementSet.create({
+      companyId: shop.company.id,
+      siteId: site.id,
+      name: "Press line entry",
+      requirements: [{ label: "Arc-flash training", typeCodes: ["arc_flash"] }] as unknown as Requirement[],
+    });
+    const buyerAgent = await signIn(t.app, shop.users.buyer!.email);
+    const sign = await buyerAgent.get(`/api/sites/${site.id}/gate-sign`);
+    const badge = await (
+      await signIn(t.app, p.technicianUser.email)
+    )
+      .get("/api/badge")
+      .query({ site: sign.body.code });
+
+    const atSite = await request(t.app).get(pathOf(badge.body.url));
+    const token = new URL(badge.body.url).searchParams.get("token");
+    const noSite = await request(t.app).get("/api/gate/check").query({ token });
+
+    // Cleared for the baseline, but without the arc-flash card the site's own set is not met (common practice: a requirement with no credential on file is unmet).
+    expect(atSite.body).toMatchObject({
+      state: "not_cleared",
+      against: "Press line entry",
+      site: { name: "Press line" },
+    });
+    expect(atSite.body.lines).toEqual([
+      { requirement: "Arc-flash training", status: expect.not.stringMatching(/^met$/) },
+    ]);
+    expect(noSite.body).toMatchObject({ state: "cleared", against: "Platform baseline", site: null });
+    const log = await buyerAgent.get("/api/gate/checks");
+    expect(log.body.checks).toEqual([
+      expect.objectContaining({ siteName: "Press line", state: "not_cleared" }),
+    ]);
   });
 
   it("shows the badge to the technician only", async () => {
