@@ -143,30 +143,31 @@ export async function findQueue(q: QueueQuery, now = new Date()) {
   const from = `FROM credentials c JOIN credential_types t ON t.code = c.type_code JOIN companies co ON co.id = c.company_id
     LEFT JOIN technicians tech ON tech.id = c.technician_id WHERE ${where.join(" AND ")}`;
   const order = `${SORT_SQL[q.sort]} ${q.dir === "desc" ? "DESC" : "ASC"}, c.id ASC`;
-  const [rows, totals] = await Promise.all([
-    db().query<{
-      id: number;
-      type_code: string;
-      type_name: string;
-      company_id: number;
-      company_name: string;
-      holder_name: string;
-      submitted_at: Date;
-    }>(
-      `SELECT c.id, c.type_code, t.name AS type_name, c.company_id, co.name AS company_name,
-        COALESCE(tech.name, co.name) AS holder_name, c.submitted_at ${from} ORDER BY ${order} LIMIT :limit OFFSET :offset`,
-      { replacements, type: QueryTypes.SELECT },
-    ),
-    // Every credential has its type and company (foreign keys, not null), so the joins cannot change the count; without
-    // them the count is read from credentials_queue_cover_idx alone.
-    db().query<{ total: number }>(
-      `SELECT count(*)::int AS total FROM credentials c WHERE ${where.join(" AND ")}`,
-      {
-        replacements,
-        type: QueryTypes.SELECT,
-      },
-    ),
-  ]);
+  // One statement: the page and the count (the count without the joins: every credential has its type and company,
+  // foreign keys, not null, so it is read from credentials_queue_cover_idx alone). The count row is kept by the LEFT
+  // JOIN when the page is past the end.
+  const found = await db().query<{
+    total: number;
+    id: number | null;
+    type_code: string;
+    type_name: string;
+    company_id: number;
+    company_name: string;
+    holder_name: string;
+    submitted_at: Date;
+  }>(
+    `WITH page AS (
+       SELECT c.id, c.type_code, t.name AS type_name, c.company_id, co.name AS company_name,
+              COALESCE(tech.name, co.name) AS holder_name, c.submitted_at,
+              row_number() OVER (ORDER BY ${order}) AS position
+         ${from} ORDER BY ${order} LIMIT :limit OFFSET :offset)
+     SELECT n.total, page.* FROM (SELECT count(*)::int AS total FROM credentials c WHERE ${where.join(" AND ")}) n
+       LEFT JOIN page ON true
+      ORDER BY page.position`,
+    { replacements, type: QueryTypes.SELECT },
+  );
+  const rows = found.filter((r) => r.id !== null);
+  const totals = found.slice(0, 1);
   return {
     rows: rows.map((r) => ({
       id: r.id,

@@ -205,4 +205,20 @@ describe("files are never served to the wrong party", () => {
 
     expect(downloads).toBe(1);
   });
+
+  it("pages one at a time and keeps the total on a page past the end", async () => {
+    const provider = await buildProvider(t.app);
+    const { agent: reviewer } = await signedInAgent(t.app, "platform", "reviewer");
+    const a = await submitLiabilityCertificate(provider.admin, 41);
+    const b = await submitLiabilityCertificate(provider.admin, 42);
+    const q = `/api/review/queue?companyId=${provider.company.id}&pageSize=1`;
+
+    const first = await reviewer.get(`${q}&page=1`);
+    const second = await reviewer.get(`${q}&page=2`);
+    const past = await reviewer.get(`${q}&page=3`);
+
+    expect(first.body).toMatchObject({ total: 2, page: 1, rows: [expect.objectContaining({ id: a.id })] });
+    expect(second.body).toMatchObject({ total: 2, page: 2, rows: [expect.objectContaining({ id: b.id })] });
+    expect(past.body).toMatchObject({ total: 2, page: 3, rows: [] });
+  });
 });
