@@ -1,6 +1,6 @@
 import { readFile, rm } from "node:fs/promises";
 import { fileTypeFromBuffer } from "file-type";
-import { Jimp } from "jimp";
+import { loadJimp } from "./jimp.ts";
 import { AppError } from "./app-error.ts";
 
 export interface CleanPhoto {
@@ -31,7 +31,7 @@ export async function readCleanPhoto(
       ]);
     let image;
     try {
-      image = await Jimp.read(bytes);
+      image = await (await loadJimp()).read(bytes);
     } catch {
       throw new AppError("invalid_input", "The photo could not be read", [
         { path: "file", message: "damaged or incomplete image" },

@@ -1,5 +1,5 @@
 import { readFile, rm } from "node:fs/promises";
-import ExcelJS from "exceljs";
+import type ExcelJS from "exceljs";
 import Papa from "papaparse";
 import { AppError } from "../http/app-error.ts";
 
@@ -113,7 +113,9 @@ function cellText(value: CellValue, numFmt: string | undefined, date1904: boolea
 async function readXlsx(bytes: Buffer, maxRows: number): Promise<string[][]> {
   if (zipParts(bytes).unpackedBytes > MAX_UNPACKED_XLSX_BYTES)
     throw tooLarge("The workbook unpacks to more than a roster could hold", "unpacks too large");
-  const workbook = new ExcelJS.Workbook();
+  // Loaded on the first spreadsheet import, not at start-up: most server processes never read one.
+  const { default: Excel } = await import("exceljs");
+  const workbook = new Excel.Workbook();
   try {
     // exceljs's declared Buffer type predates Node's generic Buffer.
     await workbook.xlsx.load(bytes as unknown as ExcelJS.Buffer);

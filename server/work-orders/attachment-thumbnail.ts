@@ -1,4 +1,4 @@
-import { Jimp } from "jimp";
+import { loadJimp } from "../http/jimp.ts";
 import { QueryTypes, type Transaction } from "sequelize";
 import { imageDimensionsFromHeader } from "../credentials/index.ts";
 import { db } from "../db/sequelize.ts";
@@ -25,7 +25,7 @@ export async function makeThumbnail(bytes: Buffer, mime: string): Promise<Thumbn
   const declared = imageDimensionsFromHeader(bytes);
   if (!declared || declared.width * declared.height > THUMBNAIL_SOURCE_MAX_PIXELS) return null;
   try {
-    const image = await Jimp.read(bytes);
+    const image = await (await loadJimp()).read(bytes);
     if (image.width > THUMBNAIL_MAX_PX || image.height > THUMBNAIL_MAX_PX)
       image.scaleToFit({ w: THUMBNAIL_MAX_PX, h: THUMBNAIL_MAX_PX });
     const jpeg = await image.getBuffer("image/jpeg", { quality: 80 });

@@ -2,7 +2,7 @@ import { access, mkdtemp, rm, writeFile } from "node:fs/promises";
 import { constants } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
-import { Jimp } from "jimp";
+import { loadJimp } from "../../http/jimp.ts";
 import { imageDimensionsOfFile } from "./image-dimensions.ts";
 import { layoutText, type PositionedText } from "../../../shared/credentials/locate-values.ts";
 import {
@@ -99,7 +99,7 @@ async function turned(path: string, degrees: number, out: string): Promise<strin
   const declared = await imageDimensionsOfFile(path);
   if (!declared || declared.width * declared.height > MAX_OCR_PIXELS)
     throw new DocumentUnreadableError("corrupt", "image too large to read");
-  const image = await Jimp.read(path);
+  const image = await (await loadJimp()).read(path);
   if (image.bitmap.width * image.bitmap.height > MAX_OCR_PIXELS)
     throw new DocumentUnreadableError("corrupt", "image too large to read");
   image.background = 0xffffffff;
