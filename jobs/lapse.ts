@@ -47,14 +47,8 @@ export type LapseJobResult = LapseJobReport | { skipped: true };
 // BEGIN and COMMIT, issued by the transaction itself rather than through the counted helpers.
 const TRANSACTION_STATEMENTS = 2;
 
-/**
- * Marks every verified credential whose lapse instant is at or before `asOf` as lapsed, with one audit event each, and
- * a lapse notice (threshold 0) each, in one set-based statement.
- */
-async function lapseCredentials(transaction: Transaction, asOf: Date, jobRunId: number) {
-  return selectRows<HolderCount & { noticed: number }>(
-    transaction,
-    `WITH lapsed AS (
+/** The lapse step as one statement ($1 as of, $2 the run); the bench's floor runs the same text. */
+export const LAPSE_CREDENTIALS_SQL = `WITH lapsed AS (
        UPDATE credentials SET state = 'lapsed', updated_at = CURRENT_TIMESTAMP
         WHERE state = 'verified' AND lapses_at <= $1::timestamptz
        RETURNING id, company_id, technician_id, lapses_at
@@ -70,9 +64,14 @@ async function lapseCredentials(transaction: Transaction, asOf: Date, jobRunId: 
        RETURNING id
      )
      SELECT company_id, technician_id, count(*)::int AS count, (SELECT count(*)::int FROM noticed) AS noticed
-       FROM lapsed GROUP BY company_id, technician_id`,
-    [asOf, jobRunId],
-  );
+       FROM lapsed GROUP BY company_id, technician_id`;
+
+/**
+ * Marks every verified credential whose lapse instant is at or before `asOf` as lapsed, with one audit event each, and
+ * a lapse notice (threshold 0) each, in one set-based statement.
+ */
+async function lapseCredentials(transaction: Transaction, asOf: Date, jobRunId: number) {
+  return selectRows<HolderCount & { noticed: number }>(transaction, LAPSE_CREDENTIALS_SQL, [asOf, jobRunId]);
 }
 
 /** Technicians lacking a stored standing against the baseline or an active set (e.g. added since): the run fills them in. */

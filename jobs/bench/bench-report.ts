@@ -148,7 +148,13 @@ export function renderMarkdown(r: BenchResults): string {
         .map(([k, v]) => `${k} ${v}`)
         .join(
           ", ",
-        )}); floor (one UPDATE, ${r.lapse.floorRows} rows) ${r.lapse.floorMs} ms; ratio ${r.lapse.ratio}x.`,
+        )}); floor (${r.lapse.floor.statements} statements, BEGIN and COMMIT included: lapse, warn, queue, standings; steps ms: ${Object.entries(
+        r.lapse.floor.steps,
+      )
+        .map(([k, v]) => `${k} ${v}`)
+        .join(", ")}; rows: ${Object.entries(r.lapse.floor.rows)
+        .map(([k, v]) => `${k} ${v}`)
+        .join(", ")}) ${r.lapse.floorMs} ms; ratio ${r.lapse.ratio}x.`,
     `Upload and extract (two-page certificate, ${r.upload.uploads} uploads one at a time): p50 ${r.upload.p50} ms, p95 ${r.upload.p95} ms. ` +
       `A ${(r.upload.bigFileBytes / 1024 / 1024).toFixed(2)} MB upload (answer ${r.upload.bigFileStatus}): server RSS ${r.upload.rssBeforeMb} MB -> peak ${r.upload.rssPeakMb} MB (+${r.upload.rssGrowthMb} MB).`,
     `Client: sign-in route JS ${r.client.signInRouteGzipKb} KB gzip (${r.client.signInFiles.length} files), all JS ${r.client.allJsGzipKb} KB gzip. ` +

@@ -4,6 +4,7 @@ import { Sequelize } from "sequelize";
 import { runLapseJob } from "../lapse.ts";
 import { withDatabase } from "./bench-cluster.ts";
 import { DEFAULT_WARNING_DAYS } from "../../shared/standing/warning-windows.ts";
+import { measureLapseFloor, type LapseFloorResult } from "./lapse-floor.ts";
 
 export interface LapseBenchResult {
   asOf: string;
@@ -16,6 +17,8 @@ export interface LapseBenchResult {
   jobSteps: Record<string, number>;
   floorMs: number;
   floorRows: number;
+  /** The floor's steps (ms) and rows written per step; floorRows is the lapsed count, as before. */
+  floor: LapseFloorResult;
   ratio: number;
 }
 
@@ -38,10 +41,6 @@ async function dropDatabase(clusterUrl: string, name: string): Promise<void> {
   await admin.connect();
   await admin.query(`DROP DATABASE IF EXISTS "${name}" WITH (FORCE)`).finally(() => admin.end());
 }
-
-/** The set-based floor: one hand-written UPDATE doing the same marking, nothing else. */
-const FLOOR_SQL =
-  "UPDATE credentials SET state = 'lapsed', updated_at = CURRENT_TIMESTAMP WHERE state = 'verified' AND lapses_at <= $1";
 
 /**
  * The daily job over the 300,000 credentials against its floor, each on a fresh copy of the large database (CREATE
@@ -85,13 +84,18 @@ export async function benchLapseJob(
       `  lapse job: ${report.lapsed} lapsed, ${report.noticesCreated} notices, ${report.emailsQueued} e-mails, ${report.changedStandings.length} standings changed in ${Math.round(jobMs)} ms`,
     );
 
-    const floor = new pg.Client({ connectionString: floorUrl });
-    await floor.connect();
-    const f0 = performance.now();
-    const floorResult = await floor.query(FLOOR_SQL, [asOf]);
-    const floorMs = performance.now() - f0;
-    await floor.end();
-    say(`  floor (one UPDATE): ${floorResult.rowCount} rows in ${Math.round(floorMs)} ms`);
+    const floorClient = new pg.Client({ connectionString: floorUrl });
+    await floorClient.connect();
+    const floor = await measureLapseFloor(floorClient, {
+      asOf,
+      warningDays: WARNING_DAYS,
+      publicUrl: "http://127.0.0.1",
+      changed: report.changedStandings,
+    }).finally(() => floorClient.end());
+    const floorMs = floor.ms;
+    say(
+      `  floor (${floor.statements} statements: lapse, warn, queue, standings): ${floorMs} ms (steps ms: ${JSON.stringify(floor.steps)}; rows: ${JSON.stringify(floor.rows)})`,
+    );
 
     await explainReplay(explainUrl!, statements, explainPath);
     return {
@@ -104,7 +108,8 @@ export async function benchLapseJob(
       jobMs: Math.round(jobMs),
       jobSteps: report.timings,
       floorMs: Math.round(floorMs),
-      floorRows: floorResult.rowCount ?? 0,
+      floorRows: floor.rows.lapsed ?? 0,
+      floor,
       ratio: Math.round((jobMs / floorMs) * 10) / 10,
     };
   } finally {

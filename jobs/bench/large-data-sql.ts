@@ -266,6 +266,10 @@ export function workOrdersSql(): string {
            CASE WHEN status = 'confirmed' THEN created + interval '4 days' END, created, created
       FROM gen JOIN sites si ON si.id = gen.site_id JOIN technicians te ON te.id = gen.tech;
     SELECT setval('work_orders_id_seq', (SELECT max(id) FROM work_orders));
+    -- Each order is for one of its site's two machines, so a machine's history page has its confirmed orders to show.
+    UPDATE work_orders w SET equipment_id = e.id
+      FROM (SELECT id, site_id, row_number() OVER (PARTITION BY site_id ORDER BY id) - 1 AS k FROM equipment) e
+     WHERE e.site_id = w.site_id AND e.k = w.id % 2;
     INSERT INTO job_reviews (work_order_id, technician_id, shop_company_id, author_user_id, stars, body, created_at)
     SELECT w.id, w.technician_id, w.shop_company_id, w.created_by,
            CASE WHEN r < 0.55 THEN 5 WHEN r < 0.83 THEN 4 WHEN r < 0.93 THEN 3 WHEN r < 0.97 THEN 2 ELSE 1 END,

@@ -30,6 +30,7 @@ import { benchUploads } from "./upload-bench.ts";
 import { prepareComparison, routingRequestBody } from "./service-request-bench.ts";
 import { runPlansOnly } from "./plans-mode.ts";
 import { runGrowth } from "./growth.ts";
+import { busiestMachine } from "./machine-history-bench.ts";
 import { issueBadgeToken, siteGateCode } from "../../server/gate/token.ts";
 
 // `npm run bench`: its own PostgreSQL cluster, the large data set (loaded when absent), the server in production mode
@@ -214,6 +215,13 @@ try {
       (r) =>
         `/api/gate/check?token=${encodeURIComponent(issueBadgeToken(gateSecret, r.technicianId))}&site=${gateSite}`,
     ),
+  });
+  // A machine's history page: the bench buyer's machine with the most confirmed work orders.
+  const machine = await busiestMachine(largeUrl, BENCH_BUYER.email);
+  await measure({
+    name: `machine history API (${machine.confirmed} confirmed work orders)`,
+    url: `${server.url}/api/machines/${machine.id}/history`,
+    headers: buyer,
   });
   await measure({
     name: "sign-in (bcrypt cost 12)",

@@ -13,14 +13,8 @@ export interface HolderCount {
  * threshold, the smallest window we are inside (the same rule as shared dueThreshold: remaining time <= N days of 24 h),
  * so a missed run still sends the one notice that matters. The unique constraint, not code, stops a second copy.
  */
-export async function createWarningNotices(
-  transaction: Transaction,
-  options: { asOf: Date; thresholds: readonly number[]; jobRunId: number },
-): Promise<HolderCount[]> {
-  const widest = Math.max(...options.thresholds);
-  return selectRows<HolderCount>(
-    transaction,
-    `WITH due AS (
+/** The warning step as one statement ($1 as of, $2 thresholds > 0, $3 the widest, $4 the run); the bench's floor runs it too. */
+export const WARNING_NOTICES_SQL = `WITH due AS (
        SELECT c.id, c.company_id, c.technician_id, c.lapses_at,
               (SELECT min(d) FROM unnest($2::int[]) AS d WHERE c.lapses_at <= $1::timestamptz + d * interval '24 hours') AS threshold_days
          FROM credentials c
@@ -33,9 +27,19 @@ export async function createWarningNotices(
      )
      SELECT d.company_id, d.technician_id, count(*)::int AS count
        FROM due d JOIN noticed n ON n.credential_id = d.id
-      GROUP BY d.company_id, d.technician_id`,
-    [options.asOf, options.thresholds.filter((d) => d > 0), widest, options.jobRunId],
-  );
+      GROUP BY d.company_id, d.technician_id`;
+
+export async function createWarningNotices(
+  transaction: Transaction,
+  options: { asOf: Date; thresholds: readonly number[]; jobRunId: number },
+): Promise<HolderCount[]> {
+  const widest = Math.max(...options.thresholds);
+  return selectRows<HolderCount>(transaction, WARNING_NOTICES_SQL, [
+    options.asOf,
+    options.thresholds.filter((d) => d > 0),
+    widest,
+    options.jobRunId,
+  ]);
 }
 
 interface RecipientRow {
