@@ -1,4 +1,7 @@
 import type { ReactNode } from "react";
+import { env } from "@/config/env.ts";
+import { buttonStyles } from "@/components/ui/button-styles.ts";
+import { PageHeader } from "@/components/ui/page-header.tsx";
 
 const XLSX_OR_CSV = ".xlsx,.csv,text/csv,application/vnd.openxmlformats-officedocument.spreadsheetml.sheet";
 
@@ -38,5 +41,28 @@ export function ImportStep({
       </h2>
       {children}
     </section>
+  );
+}
+
+/** An import page's title, with the template the server serves (its columns are the ones the import reads). */
+export function ImportPageHeader({
+  title,
+  description,
+  templatePath,
+}: {
+  title: string;
+  description: string;
+  templatePath: string;
+}) {
+  return (
+    <PageHeader
+      title={title}
+      description={description}
+      actions={
+        <a href={`${env.VITE_API_BASE}${templatePath}`} className={buttonStyles("secondary")} download>
+          Download template
+        </a>
+      }
+    />
   );
 }

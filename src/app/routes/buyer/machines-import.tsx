@@ -9,14 +9,12 @@ import {
   type MachineImportReport,
 } from "@shared/machines/machine-import.ts";
 import { paths } from "@/config/paths.ts";
-import { env } from "@/config/env.ts";
 import { Button } from "@/components/ui/button.tsx";
 import { buttonStyles } from "@/components/ui/button-styles.ts";
 import { FormError } from "@/components/ui/form-error.tsx";
-import { PageHeader } from "@/components/ui/page-header.tsx";
 import { SelectField } from "@/components/ui/select-field.tsx";
 import { ColumnMappingFields } from "@/components/imports/column-mapping-fields.tsx";
-import { ImportStep, SpreadsheetFileInput } from "@/components/imports/import-step.tsx";
+import { ImportPageHeader, ImportStep, SpreadsheetFileInput } from "@/components/imports/import-step.tsx";
 import { useSpreadsheetImport } from "@/components/imports/use-spreadsheet-import.ts";
 import { sitesQuery } from "@/features/sites/api/get-sites.ts";
 import { commitMachineImport, previewMachineImport } from "@/features/machines/api/import-machines.ts";
@@ -26,21 +24,10 @@ export function Component() {
   const sites = useQuery(sitesQuery());
   const activeSites = (sites.data ?? []).filter((s) => s.active);
   const [siteId, setSiteId] = useState("");
-  const {
-    headers,
-    mapping,
-    setMapping,
-    preview,
-    setPreview,
-    report,
-    setReport,
-    error,
-    pending,
-    choose,
-    run,
-  } = useSpreadsheetImport<MachineColumnMapping, MachineImportPreview, MachineImportReport>(
+  const flow = useSpreadsheetImport<MachineColumnMapping, MachineImportPreview, MachineImportReport>(
     guessMachineMapping,
   );
+  const { preview, report } = flow;
 
   const sender =
     <T,>(send: typeof previewMachineImport | typeof commitMachineImport, skip = false) =>
@@ -53,9 +40,9 @@ export function Component() {
       }) as Promise<T>;
 
   async function commit(skip: boolean) {
-    const result = await run(sender<MachineImportReport>(commitMachineImport, skip));
+    const result = await flow.run(sender<MachineImportReport>(commitMachineImport, skip));
     if (result) {
-      setReport(result);
+      flow.setReport(result);
       void queryClient.invalidateQueries();
     }
   }
@@ -63,25 +50,17 @@ export function Component() {
   const problems = preview?.rows.flatMap((r) => r.problems) ?? [];
   return (
     <>
-      <PageHeader
+      <ImportPageHeader
         title="Import machines"
         description="Bring your machine list in from a spreadsheet: an Excel workbook (.xlsx) or a CSV file. Match its columns, check every row, then import. Builders and controls are matched to the catalog; a machine another shop already holds is found by its builder and serial number."
-        actions={
-          <a
-            href={`${env.VITE_API_BASE}/machines/import/template`}
-            className={buttonStyles("secondary")}
-            download
-          >
-            Download template
-          </a>
-        }
+        templatePath="/machines/import/template"
       />
       <div className="space-y-6">
         <SpreadsheetFileInput
-          onChoose={(chosen) => void choose(chosen, sender<MachineImportPreview>(previewMachineImport))}
+          onChoose={(chosen) => void flow.choose(chosen, sender<MachineImportPreview>(previewMachineImport))}
         />
 
-        {headers.length > 0 && (
+        {flow.headers.length > 0 && (
           <ImportStep id="mapping" title="Match the columns">
             <SelectField
               label="Site for rows without one"
@@ -91,21 +70,21 @@ export function Component() {
               value={siteId}
               onChange={(e) => {
                 setSiteId(e.target.value);
-                setPreview(null);
+                flow.setPreview(null);
               }}
             />
             <ColumnMappingFields
               fields={machineImportFields}
-              headers={headers}
-              mapping={mapping ?? {}}
-              onChange={setMapping}
+              headers={flow.headers}
+              mapping={flow.mapping ?? {}}
+              onChange={flow.setMapping}
             />
             <Button
-              pending={pending}
+              pending={flow.pending}
               pendingLabel="Checking…"
               onClick={async () => {
-                const result = await run(sender<MachineImportPreview>(previewMachineImport));
-                if (result) setPreview(result);
+                const result = await flow.run(sender<MachineImportPreview>(previewMachineImport));
+                if (result) flow.setPreview(result);
               }}
             >
               Check rows
@@ -113,7 +92,7 @@ export function Component() {
           </ImportStep>
         )}
 
-        <FormError error={error} />
+        <FormError error={flow.error} />
 
         {preview && !report && (
           <ImportStep id="preview" title="Preview">
@@ -153,7 +132,7 @@ export function Component() {
             {preview.badCount === 0 ? (
               <Button
                 disabled={preview.goodCount === 0}
-                pending={pending}
+                pending={flow.pending}
                 pendingLabel="Importing…"
                 onClick={() => void commit(false)}
               >
@@ -167,7 +146,7 @@ export function Component() {
                 </p>
                 <Button
                   disabled={preview.goodCount === 0}
-                  pending={pending}
+                  pending={flow.pending}
                   pendingLabel="Importing…"
                   onClick={() => void commit(true)}
                 >

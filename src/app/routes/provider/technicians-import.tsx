@@ -2,13 +2,11 @@ import { Link } from "react-router-dom";
 import { z } from "zod";
 import { useQueryClient } from "@tanstack/react-query";
 import { paths } from "@/config/paths.ts";
-import { env } from "@/config/env.ts";
 import { Button } from "@/components/ui/button.tsx";
 import { buttonStyles } from "@/components/ui/button-styles.ts";
 import { FormError } from "@/components/ui/form-error.tsx";
-import { PageHeader } from "@/components/ui/page-header.tsx";
 import { ColumnMappingFields } from "@/components/imports/column-mapping-fields.tsx";
-import { ImportStep, SpreadsheetFileInput } from "@/components/imports/import-step.tsx";
+import { ImportPageHeader, ImportStep, SpreadsheetFileInput } from "@/components/imports/import-step.tsx";
 import { useSpreadsheetImport } from "@/components/imports/use-spreadsheet-import.ts";
 import { uploadWithProgress } from "@/lib/upload-with-progress.ts";
 import {
@@ -56,55 +54,38 @@ const sender =
 
 export function Component() {
   const queryClient = useQueryClient();
-  const {
-    headers,
-    mapping,
-    setMapping,
-    preview,
-    setPreview,
-    report,
-    setReport,
-    error,
-    pending,
-    choose,
-    run,
-  } = useSpreadsheetImport<ColumnMapping, Preview, Report>(guessMapping);
+  const flow = useSpreadsheetImport<ColumnMapping, Preview, Report>(guessMapping);
+  const { preview, report } = flow;
 
   const problemRows = preview?.rows.filter((r) => r.problems.length > 0) ?? [];
   return (
     <>
-      <PageHeader
+      <ImportPageHeader
         title="Import technicians"
         description="Bring your roster in from a spreadsheet: an Excel workbook (.xlsx) or a CSV file. Match its columns, check every row, then import the rows without problems. Those with an e-mail get an invitation to sign in."
-        actions={
-          <a
-            href={`${env.VITE_API_BASE}/technicians/import/template`}
-            className={buttonStyles("secondary")}
-            download
-          >
-            Download template
-          </a>
-        }
+        templatePath="/technicians/import/template"
       />
       <div className="space-y-6">
         <SpreadsheetFileInput
-          onChoose={(chosen) => void choose(chosen, sender("/technicians/import/preview", previewSchema))}
+          onChoose={(chosen) =>
+            void flow.choose(chosen, sender("/technicians/import/preview", previewSchema))
+          }
         />
 
-        {headers.length > 0 && (
+        {flow.headers.length > 0 && (
           <ImportStep id="mapping" title="Match the columns">
             <ColumnMappingFields
               fields={importFields}
-              headers={headers}
-              mapping={mapping ?? {}}
-              onChange={setMapping}
+              headers={flow.headers}
+              mapping={flow.mapping ?? {}}
+              onChange={flow.setMapping}
             />
             <Button
-              pending={pending}
+              pending={flow.pending}
               pendingLabel="Checking…"
               onClick={async () => {
-                const result = await run(sender("/technicians/import/preview", previewSchema));
-                if (result) setPreview(result);
+                const result = await flow.run(sender("/technicians/import/preview", previewSchema));
+                if (result) flow.setPreview(result);
               }}
             >
               Check rows
@@ -112,7 +93,7 @@ export function Component() {
           </ImportStep>
         )}
 
-        <FormError error={error} />
+        <FormError error={flow.error} />
 
         {preview && !report && (
           <ImportStep id="preview" title="Preview">
@@ -146,12 +127,12 @@ export function Component() {
             )}
             <Button
               disabled={preview.goodCount === 0}
-              pending={pending}
+              pending={flow.pending}
               pendingLabel="Importing…"
               onClick={async () => {
-                const result = await run(sender("/technicians/import", reportSchema));
+                const result = await flow.run(sender("/technicians/import", reportSchema));
                 if (result) {
-                  setReport(result);
+                  flow.setReport(result);
                   void queryClient.invalidateQueries();
                 }
               }}
