@@ -2,6 +2,9 @@ import { readFile, rm } from "node:fs/promises";
 import type ExcelJS from "exceljs";
 import Papa from "papaparse";
 import { AppError } from "../http/app-error.ts";
+import { ZIP_LOCAL_HEADER, zipParts } from "./xlsx-bytes.ts";
+
+export { isXlsxBytes } from "./xlsx-bytes.ts";
 
 /** A roster or machine list as people keep it fits well under this; bigger files are refused before they are read. */
 export const MAX_SPREADSHEET_BYTES = 5 * 1024 * 1024;
@@ -25,36 +28,6 @@ const refuse = (message: string, reason: string) =>
   new AppError("unsupported_type", message, [{ path: "file", message: reason }]);
 const tooLarge = (message: string, reason: string) =>
   new AppError("too_large", message, [{ path: "file", message: reason }]);
-
-const ZIP_LOCAL_HEADER = Buffer.from([0x50, 0x4b, 0x03, 0x04]);
-const ZIP_CENTRAL_HEADER = Buffer.from([0x50, 0x4b, 0x01, 0x02]);
-const WORKBOOK_PART = Buffer.from("xl/workbook.xml");
-
-/**
- * Reads the zip's central directory (PKWARE APPNOTE §4.3.12): the names of the parts and their unpacked sizes. An
- * Office Open XML spreadsheet always holds xl/workbook.xml (ECMA-376 Part 1 §12.3.23, by its usual part name).
- */
-function zipParts(bytes: Buffer): { namesWorkbook: boolean; unpackedBytes: number } {
-  let namesWorkbook = false;
-  let unpackedBytes = 0;
-  for (
-    let at = bytes.indexOf(ZIP_CENTRAL_HEADER);
-    at !== -1;
-    at = bytes.indexOf(ZIP_CENTRAL_HEADER, at + 4)
-  ) {
-    if (at + 46 > bytes.length) break;
-    const size = bytes.readUInt32LE(at + 24);
-    // 0xFFFFFFFF defers the size to a Zip64 field: no roster needs parts of 4 GB.
-    unpackedBytes += size === 0xffffffff ? Number.POSITIVE_INFINITY : size;
-    const nameLength = bytes.readUInt16LE(at + 28);
-    if (bytes.subarray(at + 46, at + 46 + nameLength).equals(WORKBOOK_PART)) namesWorkbook = true;
-  }
-  return { namesWorkbook, unpackedBytes };
-}
-
-export function isXlsxBytes(bytes: Buffer): boolean {
-  return bytes.subarray(0, 4).equals(ZIP_LOCAL_HEADER) && zipParts(bytes).namesWorkbook;
-}
 
 const DAY_MS = 24 * 60 * 60 * 1000;
 const pad = (n: number, width = 2) => String(n).padStart(width, "0");

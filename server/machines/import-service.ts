@@ -1,4 +1,3 @@
-import Papa from "papaparse";
 import { QueryTypes, type Transaction } from "sequelize";
 import {
   MAX_MACHINE_IMPORT_ROWS,
@@ -13,18 +12,32 @@ import {
 } from "../../shared/machines/machine-import.ts";
 import { db } from "../db/sequelize.ts";
 import { AppError } from "../http/app-error.ts";
-import { readCsvText, type UploadedFile } from "../http/csv-upload.ts";
+import { readImportTable } from "../imports/import-table.ts";
+import type { UploadedSpreadsheet } from "../imports/read-spreadsheet.ts";
 import { recordAudit } from "../audit/index.ts";
 import { listCatalog } from "./catalog-service.ts";
-import { parseColumnMapping } from "../imports/column-mapping.ts";
 
 export interface ImportOptions {
   mapping?: string | undefined;
   defaultSiteId?: number | undefined;
 }
 
-const parseMapping = (raw: string | undefined, headers: string[]): MachineColumnMapping =>
-  parseColumnMapping(raw, headers, machineColumnMappingSchema, guessMachineMapping);
+const machineTable = {
+  maxRows: MAX_MACHINE_IMPORT_ROWS,
+  fields: machineImportFields,
+  mappingSchema: machineColumnMappingSchema,
+  guess: guessMachineMapping,
+};
+
+interface ImportTable {
+  headers: string[];
+  records: Record<string, string>[];
+  mapping: MachineColumnMapping;
+}
+
+/** The file read once (its temporary copy leaves the incoming folder on reading, whatever the outcome). */
+const readMachineTable = (file: UploadedSpreadsheet | undefined, options: ImportOptions) =>
+  readImportTable(file, options.mapping, machineTable);
 
 /** Who holds each builder+serial on the platform now (the same keys as the one-serial-per-builder check). */
 async function holdersOf(keys: string[], transaction?: Transaction) {
@@ -40,26 +53,13 @@ async function holdersOf(keys: string[], transaction?: Transaction) {
   return new Map(rows.map((r) => [r.key, r.companyId]));
 }
 
-async function checkText(companyId: number, text: string, options: ImportOptions, transaction?: Transaction) {
-  // RFC 4180 reading (quoted fields, embedded commas and line breaks) by papaparse.
-  const parsed = Papa.parse<Record<string, string>>(text, { header: true, skipEmptyLines: "greedy" });
-  const headers = (parsed.meta.fields ?? []).filter((h) => h.trim() !== "");
-  if (headers.length === 0)
-    throw new AppError("invalid_input", "The file has no header row", [
-      { path: "file", message: "no header row" },
-    ]);
-  if (parsed.data.length > MAX_MACHINE_IMPORT_ROWS)
-    throw new AppError("too_large", `At most ${MAX_MACHINE_IMPORT_ROWS} rows per import`, [
-      { path: "file", message: `more than ${MAX_MACHINE_IMPORT_ROWS} rows` },
-    ]);
-  const mapping = parseMapping(options.mapping, headers);
-  const missing = machineImportFields.filter((f) => f.required && mapping[f.key] === undefined);
-  if (missing.length > 0)
-    throw new AppError(
-      "invalid_input",
-      `Choose a column for ${missing.map((f) => f.header).join(", ")}`,
-      missing.map((f) => ({ path: `body.mapping.${f.key}`, message: "no column chosen" })),
-    );
+async function checkTable(
+  companyId: number,
+  table: ImportTable,
+  options: ImportOptions,
+  transaction?: Transaction,
+) {
+  const { headers, records, mapping } = table;
   const sites = await db().query<{ id: number; name: string }>(
     "SELECT id, name FROM sites WHERE company_id = $1 AND active ORDER BY id",
     { bind: [companyId], type: QueryTypes.SELECT, transaction },
@@ -76,7 +76,7 @@ async function checkText(companyId: number, text: string, options: ImportOptions
     controls: catalog.filter((e) => e.kind === "control_family" && e.active),
     currentYear: new Date().getUTCFullYear(),
   };
-  const rows = parsed.data.map((record, i) => checkMachineRow(i + 2, record, mapping, ctx));
+  const rows = records.map((record, i) => checkMachineRow(i + 2, record, mapping, ctx));
 
   // Duplicates by builder and serial: twice in the file, already one of this shop's machines, or another shop's.
   const keyed = rows.flatMap((r) => (r.key ? [{ row: r, key: r.key }] : []));
@@ -121,10 +121,14 @@ function summarize(
 
 export async function previewMachineImport(
   actor: Express.User,
-  file: UploadedFile | undefined,
+  file: UploadedSpreadsheet | undefined,
   options: ImportOptions,
 ): Promise<MachineImportPreview> {
-  const { headers, mapping, rows } = await checkText(actor.companyId, await readCsvText(file), options);
+  const { headers, mapping, rows } = await checkTable(
+    actor.companyId,
+    await readMachineTable(file, options),
+    options,
+  );
   return summarize(headers, mapping, rows);
 }
 
@@ -134,11 +138,10 @@ export async function previewMachineImport(
  */
 export async function commitMachineImport(
   actor: Express.User,
-  file: UploadedFile | undefined,
+  file: UploadedSpreadsheet | undefined,
   options: ImportOptions & { skipRowsWithProblems: boolean },
 ): Promise<MachineImportReport> {
-  // The file is read once: its temporary copy leaves the incoming folder on reading, whatever the outcome.
-  const text = await readCsvText(file);
+  const table = await readMachineTable(file, options);
   return db().transaction(async (transaction) => {
     await db().query("SELECT pg_advisory_xact_lock(hashtext('machine-import'), $1)", {
       bind: [actor.companyId],
@@ -146,12 +149,12 @@ export async function commitMachineImport(
     });
     // The same per-serial locks as the machine form (taken in order, so two imports cannot deadlock), then the rows
     // are checked again: a machine added meanwhile under one of these serials cannot slip past the check.
-    const first = (await checkText(actor.companyId, text, options, transaction)).rows;
+    const first = (await checkTable(actor.companyId, table, options, transaction)).rows;
     const locks = first.flatMap((r) => (r.key ? [`machine-serial:${r.key.replace("|", ":")}`] : []));
     for (const key of [...new Set(locks)].sort())
       await db().query("SELECT pg_advisory_xact_lock(hashtext($1))", { bind: [key], transaction });
     const checked =
-      locks.length > 0 ? (await checkText(actor.companyId, text, options, transaction)).rows : first;
+      locks.length > 0 ? (await checkTable(actor.companyId, table, options, transaction)).rows : first;
     const bad = checked.filter((r) => !r.input);
     if (bad.length > 0 && !options.skipRowsWithProblems)
       throw new AppError(

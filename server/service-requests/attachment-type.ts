@@ -2,6 +2,7 @@ import path from "node:path";
 import { fileTypeFromBuffer } from "file-type";
 import { sniffUpload } from "../credentials/index.ts";
 import { AppError } from "../http/app-error.ts";
+import { isXlsxBytes } from "../imports/xlsx-bytes.ts";
 
 export const XLSX_MIME = "application/vnd.openxmlformats-officedocument.spreadsheetml.sheet";
 export const CSV_MIME = "text/csv";
@@ -10,18 +11,6 @@ export const MAX_CSV_BYTES = 2 * 1024 * 1024;
 
 const refuse = (message: string, reason: string) =>
   new AppError("unsupported_type", message, [{ path: "file", message: reason }]);
-
-/** The zip's central directory names every part; a workbook always has xl/workbook.xml. */
-function zipNamesWorkbook(bytes: Buffer): boolean {
-  const name = Buffer.from("xl/workbook.xml");
-  const signature = Buffer.from([0x50, 0x4b, 0x01, 0x02]);
-  for (let at = bytes.indexOf(signature); at !== -1; at = bytes.indexOf(signature, at + 4)) {
-    if (at + 46 > bytes.length) break;
-    const nameLength = bytes.readUInt16LE(at + 28);
-    if (bytes.subarray(at + 46, at + 46 + nameLength).equals(name)) return true;
-  }
-  return false;
-}
 
 /**
  * Service-request files: the photo and PDF types of credential documents, plus a maintenance-history spreadsheet
@@ -45,7 +34,7 @@ export async function sniffRequestAttachment(bytes: Buffer, originalName: string
   }
   if (ext === ".xlsx") {
     const detected = await fileTypeFromBuffer(bytes);
-    if (detected?.mime !== XLSX_MIME || !zipNamesWorkbook(bytes))
+    if (detected?.mime !== XLSX_MIME || !isXlsxBytes(bytes))
       throw refuse(
         "The file's name says .xlsx but its content is not an Excel workbook; re-save it from the spreadsheet",
         "not an .xlsx workbook",

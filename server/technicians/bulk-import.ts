@@ -6,7 +6,7 @@ import { lookupPostalCode } from "../geo/index.ts";
 import { issueToken } from "../accounts/tokens.ts";
 import { inviteMail } from "../accounts/emails.ts";
 import { enqueueMail } from "../mail/outbox.ts";
-import { readUploadedSpreadsheet, rowsToRecords } from "../imports/read-spreadsheet.ts";
+import { readImportTable } from "../imports/import-table.ts";
 import { Technician } from "./model.ts";
 import { DEFAULT_MILEAGE_RATE_CENTS } from "./service.ts";
 import {
@@ -18,7 +18,6 @@ import {
   type ColumnMapping,
 } from "../../shared/technicians/bulk-import.ts";
 import { Company, User } from "../db/models.ts";
-import { parseColumnMapping } from "../imports/column-mapping.ts";
 
 export const MAX_IMPORT_ROWS = 5_000;
 
@@ -27,9 +26,6 @@ interface UploadedFile {
   originalname: string;
   mimetype: string;
 }
-
-const parseMapping = (raw: string | undefined, headers: string[]): ColumnMapping =>
-  parseColumnMapping(raw, headers, columnMappingSchema, guessMapping);
 
 export interface ImportPreview {
   headers: string[];
@@ -40,22 +36,12 @@ export interface ImportPreview {
 }
 
 async function checkFile(companyId: number, file: UploadedFile | undefined, mappingRaw: string | undefined) {
-  // The file's bytes decide between CSV and .xlsx; the row limit is checked before any row is judged.
-  const { rows: table } = await readUploadedSpreadsheet(file, { maxRows: MAX_IMPORT_ROWS });
-  const { headers, records } = rowsToRecords(table);
-  if (headers.length === 0)
-    throw new AppError("invalid_input", "The file has no header row", [
-      { path: "file", message: "no header row" },
-    ]);
-  const mapping = parseMapping(mappingRaw, headers);
-  const missing = importFields.filter((f) => f.required && mapping[f.key] === undefined);
-  if (missing.length > 0)
-    throw new AppError(
-      "invalid_input",
-      `Choose a column for ${missing.map((f) => f.header).join(", ")}`,
-      missing.map((f) => ({ path: `body.mapping.${f.key}`, message: "no column chosen" })),
-    );
-
+  const { headers, records, mapping } = await readImportTable(file, mappingRaw, {
+    maxRows: MAX_IMPORT_ROWS,
+    fields: importFields,
+    mappingSchema: columnMappingSchema,
+    guess: guessMapping,
+  });
   const rows = records.map((record, i) =>
     checkRow(i + 2, record, mapping, (zip) => lookupPostalCode(zip) !== undefined),
   );

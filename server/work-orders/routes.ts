@@ -40,6 +40,14 @@ export const workOrderRoutes = createRoutes("/api/work-orders");
 // "Lapsing" means inside the widest warning window, as in the stored standings and the daily job.
 const warningDays = (req: Request) => lapsingWindowOf(appConfig(req).WARNING_DAYS);
 const linkTo = (req: Request) => (id: number) => `${linkBase(req)}/work-orders/${id}`;
+const linkToThis = (req: Request, params: { workOrderId: number }) => linkTo(req)(params.workOrderId);
+
+/** Every move of a work order queues its mail in the move's transaction; the outbox is woken once it has committed. */
+async function thenSend<T>(req: Request, move: Promise<T>): Promise<T> {
+  const dto = await move;
+  kickOutbox(req.app.locals);
+  return dto;
+}
 
 workOrderRoutes.post(
   "",
@@ -66,83 +74,49 @@ workOrderRoutes.get(
 workOrderRoutes.post(
   "/:workOrderId/accept",
   { allow: canSeeWorkOrder, params: workOrderParamsSchema, body: acceptWorkOrderSchema },
-  async (req, _res, { params, body }) => {
-    const dto = await acceptWorkOrder(
-      req.user!,
-      params.workOrderId,
-      body,
-      warningDays(req),
-      linkTo(req)(params.workOrderId),
-    );
-    kickOutbox(req.app.locals);
-    return dto;
-  },
+  (req, _res, { params, body }) =>
+    thenSend(
+      req,
+      acceptWorkOrder(req.user!, params.workOrderId, body, warningDays(req), linkToThis(req, params)),
+    ),
 );
 
 workOrderRoutes.post(
   "/:workOrderId/decline",
   { allow: canSeeWorkOrder, params: workOrderParamsSchema, body: declineWorkOrderSchema },
-  async (req, _res, { params, body }) => {
-    const dto = await declineWorkOrder(req.user!, params.workOrderId, body, linkTo(req)(params.workOrderId));
-    kickOutbox(req.app.locals);
-    return dto;
-  },
+  (req, _res, { params, body }) =>
+    thenSend(req, declineWorkOrder(req.user!, params.workOrderId, body, linkToThis(req, params))),
 );
 
 workOrderRoutes.post(
   "/:workOrderId/complete",
   { allow: canSeeWorkOrder, params: workOrderParamsSchema, body: completeWorkOrderSchema },
-  async (req, _res, { params, body }) => {
-    const dto = await completeWorkOrder(
-      req.user!,
-      params.workOrderId,
-      body,
-      warningDays(req),
-      linkTo(req)(params.workOrderId),
-    );
-    kickOutbox(req.app.locals);
-    return dto;
-  },
+  (req, _res, { params, body }) =>
+    thenSend(
+      req,
+      completeWorkOrder(req.user!, params.workOrderId, body, warningDays(req), linkToThis(req, params)),
+    ),
 );
 
 workOrderRoutes.post(
   "/:workOrderId/confirm",
   { allow: canSeeWorkOrder, params: workOrderParamsSchema },
-  async (req, _res, { params }) => {
-    const dto = await confirmWorkOrder(req.user!, params.workOrderId, linkTo(req)(params.workOrderId));
-    kickOutbox(req.app.locals);
-    return dto;
-  },
+  (req, _res, { params }) =>
+    thenSend(req, confirmWorkOrder(req.user!, params.workOrderId, linkToThis(req, params))),
 );
 
 workOrderRoutes.post(
   "/:workOrderId/dispute",
   { allow: canSeeWorkOrder, params: workOrderParamsSchema, body: disputeWorkOrderSchema },
-  async (req, _res, { params, body }) => {
-    const dto = await disputeWorkOrder(
-      req.user!,
-      params.workOrderId,
-      body.reason,
-      linkTo(req)(params.workOrderId),
-    );
-    kickOutbox(req.app.locals);
-    return dto;
-  },
+  (req, _res, { params, body }) =>
+    thenSend(req, disputeWorkOrder(req.user!, params.workOrderId, body.reason, linkToThis(req, params))),
 );
 
 workOrderRoutes.post(
   "/:workOrderId/cancel",
   { allow: canSeeWorkOrder, params: workOrderParamsSchema, body: cancelWorkOrderSchema },
-  async (req, _res, { params, body }) => {
-    const dto = await cancelWorkOrder(
-      req.user!,
-      params.workOrderId,
-      body.reason,
-      linkTo(req)(params.workOrderId),
-    );
-    kickOutbox(req.app.locals);
-    return dto;
-  },
+  (req, _res, { params, body }) =>
+    thenSend(req, cancelWorkOrder(req.user!, params.workOrderId, body.reason, linkToThis(req, params))),
 );
 
 // The copy is a new work order (201); the declined one stays as it was, pointing at its copies.

@@ -1,6 +1,5 @@
 import { useState } from "react";
 import { Link } from "react-router-dom";
-import Papa from "papaparse";
 import { useQuery, useQueryClient } from "@tanstack/react-query";
 import {
   guessMachineMapping,
@@ -10,12 +9,13 @@ import {
   type MachineImportReport,
 } from "@shared/machines/machine-import.ts";
 import { paths } from "@/config/paths.ts";
-import { env } from "@/config/env.ts";
 import { Button } from "@/components/ui/button.tsx";
 import { buttonStyles } from "@/components/ui/button-styles.ts";
 import { FormError } from "@/components/ui/form-error.tsx";
-import { PageHeader } from "@/components/ui/page-header.tsx";
 import { SelectField } from "@/components/ui/select-field.tsx";
+import { ColumnMappingFields } from "@/components/imports/column-mapping-fields.tsx";
+import { ImportPageHeader, ImportStep, SpreadsheetFileInput } from "@/components/imports/import-step.tsx";
+import { useSpreadsheetImport } from "@/components/imports/use-spreadsheet-import.ts";
 import { sitesQuery } from "@/features/sites/api/get-sites.ts";
 import { commitMachineImport, previewMachineImport } from "@/features/machines/api/import-machines.ts";
 
@@ -23,53 +23,26 @@ export function Component() {
   const queryClient = useQueryClient();
   const sites = useQuery(sitesQuery());
   const activeSites = (sites.data ?? []).filter((s) => s.active);
-  const [file, setFile] = useState<File | null>(null);
-  const [headers, setHeaders] = useState<string[]>([]);
-  const [mapping, setMapping] = useState<MachineColumnMapping>({});
   const [siteId, setSiteId] = useState("");
-  const [preview, setPreview] = useState<MachineImportPreview | null>(null);
-  const [report, setReport] = useState<MachineImportReport | null>(null);
-  const [error, setError] = useState<unknown>(null);
-  const [pending, setPending] = useState(false);
+  const flow = useSpreadsheetImport<MachineColumnMapping, MachineImportPreview, MachineImportReport>(
+    guessMachineMapping,
+  );
+  const { preview, report } = flow;
 
-  async function choose(chosen: File | null) {
-    setFile(chosen);
-    setPreview(null);
-    setReport(null);
-    setError(null);
-    if (!chosen) return;
-    // Only the header row is read here, to offer the columns; the server reads and checks the whole file.
-    const firstLine = (await chosen.slice(0, 64 * 1024).text()).replace(/^\uFEFF/, "");
-    const found = (Papa.parse<string[]>(firstLine, { preview: 1 }).data[0] ?? []).filter(
-      (h) => h.trim() !== "",
-    );
-    setHeaders(found);
-    setMapping(guessMachineMapping(found));
-  }
-
-  async function run<T>(send: typeof previewMachineImport | typeof commitMachineImport, skip = false) {
-    if (!file) return undefined;
-    setPending(true);
-    setError(null);
-    try {
-      return (await send({
+  const sender =
+    <T,>(send: typeof previewMachineImport | typeof commitMachineImport, skip = false) =>
+    (file: File, used: MachineColumnMapping | null) =>
+      send({
         file,
-        mapping,
+        mapping: used,
         defaultSiteId: siteId === "" ? null : Number(siteId),
         skipRowsWithProblems: skip,
-      })) as T;
-    } catch (err) {
-      setError(err);
-      return undefined;
-    } finally {
-      setPending(false);
-    }
-  }
+      }) as Promise<T>;
 
   async function commit(skip: boolean) {
-    const result = await run<MachineImportReport>(commitMachineImport, skip);
+    const result = await flow.run(sender<MachineImportReport>(commitMachineImport, skip));
     if (result) {
-      setReport(result);
+      flow.setReport(result);
       void queryClient.invalidateQueries();
     }
   }
@@ -77,35 +50,18 @@ export function Component() {
   const problems = preview?.rows.flatMap((r) => r.problems) ?? [];
   return (
     <>
-      <PageHeader
+      <ImportPageHeader
         title="Import machines"
-        description="Bring your machine list in from a spreadsheet saved as CSV. Match its columns, check every row, then import. Builders and controls are matched to the catalog; a machine another shop already holds is found by its builder and serial number."
-        actions={
-          <a
-            href={`${env.VITE_API_BASE}/machines/import/template`}
-            className={buttonStyles("secondary")}
-            download
-          >
-            Download template
-          </a>
-        }
+        description="Bring your machine list in from a spreadsheet: an Excel workbook (.xlsx) or a CSV file. Match its columns, check every row, then import. Builders and controls are matched to the catalog; a machine another shop already holds is found by its builder and serial number."
+        templatePath="/machines/import/template"
       />
       <div className="space-y-6">
-        <label className="block text-sm font-medium text-ink-900">
-          CSV file
-          <input
-            type="file"
-            accept=".csv,text/csv"
-            className="mt-1 block w-full max-w-full text-sm"
-            onChange={(e) => void choose(e.target.files?.[0] ?? null)}
-          />
-        </label>
+        <SpreadsheetFileInput
+          onChoose={(chosen) => void flow.choose(chosen, sender<MachineImportPreview>(previewMachineImport))}
+        />
 
-        {headers.length > 0 && (
-          <section aria-labelledby="mapping-heading" className="space-y-3">
-            <h2 id="mapping-heading" className="text-lg font-semibold text-ink-900">
-              Match the columns
-            </h2>
+        {flow.headers.length > 0 && (
+          <ImportStep id="mapping" title="Match the columns">
             <SelectField
               label="Site for rows without one"
               name="defaultSiteId"
@@ -114,48 +70,32 @@ export function Component() {
               value={siteId}
               onChange={(e) => {
                 setSiteId(e.target.value);
-                setPreview(null);
+                flow.setPreview(null);
               }}
             />
-            <div className="grid gap-3 sm:grid-cols-2">
-              {machineImportFields.map((field) => (
-                <SelectField
-                  key={field.key}
-                  label={`${field.header}${field.required ? "" : " (optional)"}`}
-                  name={`mapping.${field.key}`}
-                  placeholder="Not in this file"
-                  options={headers.map((h) => ({ value: h, label: h }))}
-                  value={mapping[field.key] ?? ""}
-                  onChange={(e) => {
-                    const next = { ...mapping };
-                    if (e.target.value === "") delete next[field.key];
-                    else next[field.key] = e.target.value;
-                    setMapping(next);
-                    setPreview(null);
-                  }}
-                />
-              ))}
-            </div>
+            <ColumnMappingFields
+              fields={machineImportFields}
+              headers={flow.headers}
+              mapping={flow.mapping ?? {}}
+              onChange={flow.setMapping}
+            />
             <Button
-              pending={pending}
+              pending={flow.pending}
               pendingLabel="Checking…"
               onClick={async () => {
-                const result = await run<MachineImportPreview>(previewMachineImport);
-                if (result) setPreview(result);
+                const result = await flow.run(sender<MachineImportPreview>(previewMachineImport));
+                if (result) flow.setPreview(result);
               }}
             >
               Check rows
             </Button>
-          </section>
+          </ImportStep>
         )}
 
-        <FormError error={error} />
+        <FormError error={flow.error} />
 
         {preview && !report && (
-          <section aria-labelledby="preview-heading" className="space-y-3">
-            <h2 id="preview-heading" className="text-lg font-semibold text-ink-900">
-              Preview
-            </h2>
+          <ImportStep id="preview" title="Preview">
             <p className="text-sm text-ink-800">
               {preview.goodCount} {preview.goodCount === 1 ? "row is" : "rows are"} ready; {preview.badCount}{" "}
               {preview.badCount === 1 ? "row has" : "rows have"} problems.
@@ -192,7 +132,7 @@ export function Component() {
             {preview.badCount === 0 ? (
               <Button
                 disabled={preview.goodCount === 0}
-                pending={pending}
+                pending={flow.pending}
                 pendingLabel="Importing…"
                 onClick={() => void commit(false)}
               >
@@ -206,7 +146,7 @@ export function Component() {
                 </p>
                 <Button
                   disabled={preview.goodCount === 0}
-                  pending={pending}
+                  pending={flow.pending}
                   pendingLabel="Importing…"
                   onClick={() => void commit(true)}
                 >
@@ -215,14 +155,11 @@ export function Component() {
                 </Button>
               </div>
             )}
-          </section>
+          </ImportStep>
         )}
 
         {report && (
-          <section aria-labelledby="report-heading" className="space-y-2" role="status">
-            <h2 id="report-heading" className="text-lg font-semibold text-ink-900">
-              Import report
-            </h2>
+          <ImportStep id="report" title="Import report" status className="space-y-2">
             <p className="text-sm text-ink-800">
               Imported {report.imported} {report.imported === 1 ? "machine" : "machines"}, left out{" "}
               {report.skipped.length}.
@@ -230,7 +167,7 @@ export function Component() {
             <Link to={paths.buyer.sites} className={buttonStyles("secondary")}>
               Back to sites
             </Link>
-          </section>
+          </ImportStep>
         )}
       </div>
     </>

@@ -7,14 +7,15 @@ import { uploadWithProgress } from "@/lib/upload-with-progress.ts";
 
 type ImportForm = {
   file: File;
-  mapping: MachineColumnMapping;
+  /** None: the server guesses the mapping from the file's headers. */
+  mapping: MachineColumnMapping | null;
   defaultSiteId: number | null;
   skipRowsWithProblems?: boolean;
 };
 
 function formFor({ file, mapping, defaultSiteId, skipRowsWithProblems }: ImportForm) {
   const form = new FormData();
-  form.append("mapping", JSON.stringify(mapping));
+  if (mapping !== null) form.append("mapping", JSON.stringify(mapping));
   if (defaultSiteId !== null) form.append("defaultSiteId", String(defaultSiteId));
   if (skipRowsWithProblems) form.append("skipRowsWithProblems", "true");
   form.append("file", file);
