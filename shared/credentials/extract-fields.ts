@@ -489,6 +489,27 @@ const anyCardLabel = (text: string): boolean =>
   });
 
 /**
+ * A line that is a label (alone, or followed by a colon or a wide gap), not a value that happens to open with a
+ * label's word: "Control of Hazardous Energy" under "Training" is a course title, not the "Control" label.
+ */
+const isLabelLine = (text: string): boolean =>
+  Object.values(CARD_LABELS).some((re) => {
+    const match = re.exec(text);
+    if (match === null || match.index >= 2) return false;
+    const after = text.slice(match.index + match[0].length);
+    return after.trim() === "" || /^\s*[:#.]/.test(after) || /^\s{2,}/.test(after);
+  });
+
+// Without a colon or a gap, a label joined to its value by one space is trusted only where the value has the shape
+// its field always has: an identifier with digits (card numbers the trade prints: "TC-40213", "QW 81551" reads as its
+// first part) or a person's name filling the rest of the cell.
+const SPACED_VALUE: Partial<Record<CardLabel, RegExp>> = {
+  cardNumber: /^(?=[A-Z0-9-]*\d{3})[A-Z0-9][A-Z0-9-]{3,19}$/i,
+  licenseNumber: /^(?=[A-Z0-9-]*\d{3})[A-Z0-9][A-Z0-9-]{3,19}$/i,
+  trainer: /^[A-Z][a-z'.-]+(?:\s+[A-Z][a-z'.-]+){1,3}$/,
+};
+
+/**
  * The value after a label: on the same line ("Label: value", or a wide gap without a colon), up to the next known
  * label or wide gap; or, when the label stands alone at the end of its line, the line below it.
  */
@@ -503,10 +524,15 @@ function* labelledValues(lines: string[], key: CardLabel): Generator<string> {
     const standsAlone = after.trim() === "" || /^\s*[:#.]\s*$/.test(after);
     if (standsAlone) {
       const below = (lines[index + 1] ?? "").split(/\s{3,}/)[0]?.trim() ?? "";
-      if (below !== "" && !anyCardLabel(below)) yield below.replace(/\s+/g, " ");
+      if (below !== "" && !isLabelLine(below)) yield below.replace(/\s+/g, " ");
       continue;
     }
-    if (!/^\s*[:#.]/.test(after) && !/^\s{2,}/.test(after)) continue;
+    if (!/^\s*[:#.]/.test(after) && !/^\s{2,}/.test(after)) {
+      const shape = SPACED_VALUE[key];
+      const cell = after.split(/\s{3,}/)[0]?.trim() ?? "";
+      if (shape && /^ \S/.test(after) && shape.test(cell)) yield cell;
+      continue;
+    }
     let value = after.replace(/^[\s:#.]+/, "").split(/\s{3,}/)[0] ?? "";
     for (const other of others) {
       const cut = other.exec(value);

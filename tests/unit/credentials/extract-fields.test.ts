@@ -212,6 +212,35 @@ describe("proposing training card fields", () => {
     expect(proposal.found).toContain("issueDate");
   });
 
+  // Common practice on wallet cards: labels printed without a colon, one space before the value.
+  it("reads a card number and trainer joined to their labels by one space, but not a sentence", () => {
+    const text =
+      "Qualified Operator\nThis certifies that Tamsin Quarrington has\ncompleted Forklift Evaluation.\nIssued 3/21/26\nID No. QW-81551\nTrainer Brannock Thistlewood\nCard number pending renewal";
+
+    const proposal = proposeFields("lockout_tagout", "training", text);
+
+    expect(proposal.fields.cardNumber).toBe("QW-81551");
+    expect(proposal.fields.trainer).toBe("Brannock Thistlewood");
+
+    const noNumber = proposeFields(
+      "lockout_tagout",
+      "training",
+      "Card number pending renewal\nTrainer was absent",
+    );
+    expect(noNumber.found).not.toContain("cardNumber");
+    expect(noNumber.found).not.toContain("trainer");
+  });
+
+  it("reads a course under its label even when the title opens with another label's word", () => {
+    const text =
+      "Participant\nYsolde Ashgrove\nTraining\nControl of Hazardous Energy (Lockout/Tagout)\nCertificate No.\nQW-94628";
+
+    const proposal = proposeFields("lockout_tagout", "training", text);
+
+    expect(proposal.fields.course).toBe("Control of Hazardous Energy (Lockout/Tagout)");
+    expect(proposal.fields.cardNumber).toBe("QW-94628");
+  });
+
   it("reads a license's number and issuing authority", () => {
     const text =
       "STATE BOARD OF ELECTRICAL EXAMINERS\nLicensee: Priya Halloran\nLicense No: EL-55102\nIssued by: Board of Electrical Examiners\nIssue Date: 04/02/2025   Expires: 04/01/2027";
