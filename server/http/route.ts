@@ -16,7 +16,12 @@ export type RouteInput<P extends Maybe, Q extends Maybe, B extends Maybe> = {
   body: Parsed<B>;
 };
 
-export interface RouteOptions<P extends Maybe, Q extends Maybe, B extends Maybe> {
+export interface RouteOptions<
+  P extends Maybe,
+  Q extends Maybe,
+  B extends Maybe,
+  R extends Maybe = undefined,
+> {
   /** Who may call it: declared beside the route so a missing rule stands out. */
   allow: Policy;
   /** Middleware that must run before validation, e.g. the multer upload parser. */
@@ -29,13 +34,19 @@ export interface RouteOptions<P extends Maybe, Q extends Maybe, B extends Maybe>
    * session wrote within READ_YOUR_WRITES_SECONDS. The handler must only read, and only through db().
    */
   reads?: "replica";
+  /**
+   * The JSON answer's shape, declared once in shared/ and parsed by the client with the same schema; the handler's
+   * return type is checked against it, and a test parses every GET answer on the demo data with it.
+   */
+  response?: R;
 }
 
-type Handler<P extends Maybe, Q extends Maybe, B extends Maybe> = (
+type Answer<R extends Maybe> = R extends z.ZodType ? z.input<R> : unknown;
+type Handler<P extends Maybe, Q extends Maybe, B extends Maybe, R extends Maybe = undefined> = (
   req: Request & { user?: SignedInUser },
   res: Response,
   input: RouteInput<P, Q, B>,
-) => Promise<unknown> | unknown;
+) => Promise<Answer<R>> | Answer<R>;
 
 export interface RouteEntry {
   method: "get" | "post" | "put" | "patch" | "delete";
@@ -43,6 +54,8 @@ export interface RouteEntry {
   policy: Policy;
   schemas: Schemas;
   upload: boolean;
+  /** The declared JSON answer, when the route answers JSON. */
+  response?: z.ZodType;
 }
 
 /** Every route of the API, so tests can walk it and check each against its policy. */
@@ -67,11 +80,11 @@ function parsePart(schema: z.ZodType | undefined, value: unknown, where: string)
 export function createRoutes(prefix: string) {
   const router = Router();
 
-  function add<P extends Maybe, Q extends Maybe, B extends Maybe>(
+  function add<P extends Maybe, Q extends Maybe, B extends Maybe, R extends Maybe>(
     method: RouteEntry["method"],
     path: string,
-    options: RouteOptions<P, Q, B>,
-    handler: Handler<P, Q, B>,
+    options: RouteOptions<P, Q, B, R>,
+    handler: Handler<P, Q, B, R>,
   ) {
     routeTable.push({
       method,
@@ -79,6 +92,7 @@ export function createRoutes(prefix: string) {
       policy: options.allow,
       schemas: { params: options.params, query: options.query, body: options.body },
       upload: Boolean(options.before?.length),
+      response: options.response,
     });
     // Role, then ownership of the object named in the path, before any upload is parsed or any input read: a
     // foreign id answers exactly like a missing one, whatever the body says.
@@ -129,30 +143,55 @@ export function createRoutes(prefix: string) {
 
   return {
     router,
-    get: <P extends Maybe = undefined, Q extends Maybe = undefined, B extends Maybe = undefined>(
+    get: <
+      P extends Maybe = undefined,
+      Q extends Maybe = undefined,
+      B extends Maybe = undefined,
+      R extends Maybe = undefined,
+    >(
       path: string,
-      o: RouteOptions<P, Q, B>,
-      h: Handler<P, Q, B>,
+      o: RouteOptions<P, Q, B, R>,
+      h: Handler<P, Q, B, R>,
     ) => add("get", path, o, h),
-    post: <P extends Maybe = undefined, Q extends Maybe = undefined, B extends Maybe = undefined>(
+    post: <
+      P extends Maybe = undefined,
+      Q extends Maybe = undefined,
+      B extends Maybe = undefined,
+      R extends Maybe = undefined,
+    >(
       path: string,
-      o: RouteOptions<P, Q, B>,
-      h: Handler<P, Q, B>,
+      o: RouteOptions<P, Q, B, R>,
+      h: Handler<P, Q, B, R>,
     ) => add("post", path, o, h),
-    put: <P extends Maybe = undefined, Q extends Maybe = undefined, B extends Maybe = undefined>(
+    put: <
+      P extends Maybe = undefined,
+      Q extends Maybe = undefined,
+      B extends Maybe = undefined,
+      R extends Maybe = undefined,
+    >(
       path: string,
-      o: RouteOptions<P, Q, B>,
-      h: Handler<P, Q, B>,
+      o: RouteOptions<P, Q, B, R>,
+      h: Handler<P, Q, B, R>,
     ) => add("put", path, o, h),
-    patch: <P extends Maybe = undefined, Q extends Maybe = undefined, B extends Maybe = undefined>(
+    patch: <
+      P extends Maybe = undefined,
+      Q extends Maybe = undefined,
+      B extends Maybe = undefined,
+      R extends Maybe = undefined,
+    >(
       path: string,
-      o: RouteOptions<P, Q, B>,
-      h: Handler<P, Q, B>,
+      o: RouteOptions<P, Q, B, R>,
+      h: Handler<P, Q, B, R>,
     ) => add("patch", path, o, h),
-    delete: <P extends Maybe = undefined, Q extends Maybe = undefined, B extends Maybe = undefined>(
+    delete: <
+      P extends Maybe = undefined,
+      Q extends Maybe = undefined,
+      B extends Maybe = undefined,
+      R extends Maybe = undefined,
+    >(
       path: string,
-      o: RouteOptions<P, Q, B>,
-      h: Handler<P, Q, B>,
+      o: RouteOptions<P, Q, B, R>,
+      h: Handler<P, Q, B, R>,
     ) => add("delete", path, o, h),
   };
 }

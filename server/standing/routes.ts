@@ -1,5 +1,11 @@
+import { z } from "zod";
 import {
+  baselineDtoSchema,
   baselineInputSchema,
+  jobRunDtoSchema,
+  requirementSetDtoSchema,
+  requirementSetPreviewDtoSchema,
+  technicianStandingDtoSchema,
   listRequirementSetsQuerySchema,
   requirementSetInputSchema,
   requirementSetParamsSchema,
@@ -29,19 +35,27 @@ import { readTechnicianStanding } from "./technician-standing.ts";
 
 export const standingRoutes = createRoutes("/api");
 
-standingRoutes.get("/baseline", { allow: canReadBaseline }, () => readBaseline());
+standingRoutes.get("/baseline", { allow: canReadBaseline, response: baselineDtoSchema }, () =>
+  readBaseline(),
+);
 
 standingRoutes.put(
   "/admin/baseline",
-  { allow: canEditBaseline, body: baselineInputSchema },
+  { allow: canEditBaseline, body: baselineInputSchema, response: baselineDtoSchema },
   (req, _res, { body }) => reviseBaseline(req.user!, body),
 );
 
-standingRoutes.get("/admin/job-runs", { allow: canReadJobRuns }, () => listJobRuns());
+standingRoutes.get("/admin/job-runs", { allow: canReadJobRuns, response: z.array(jobRunDtoSchema) }, () =>
+  listJobRuns(),
+);
 
 standingRoutes.get(
   "/requirement-sets",
-  { allow: canListRequirementSets, query: listRequirementSetsQuerySchema },
+  {
+    allow: canListRequirementSets,
+    query: listRequirementSetsQuerySchema,
+    response: z.array(requirementSetDtoSchema),
+  },
   (req, _res, { query }) => listRequirementSets(req.user!, query.includeArchived),
 );
 
@@ -55,19 +69,28 @@ standingRoutes.post(
 
 standingRoutes.post(
   "/requirement-sets/preview",
-  { allow: canListRequirementSets, body: requirementSetInputSchema },
+  {
+    allow: canListRequirementSets,
+    body: requirementSetInputSchema,
+    response: requirementSetPreviewDtoSchema,
+  },
   (_req, _res, { body }) => previewUnsavedRequirementSet(body),
 );
 
 standingRoutes.get(
   "/requirement-sets/:requirementSetId",
-  { allow: canManageRequirementSet, params: requirementSetParamsSchema },
+  { allow: canManageRequirementSet, params: requirementSetParamsSchema, response: requirementSetDtoSchema },
   (req, _res, { params }) => findRequirementSet(req.user!, params.requirementSetId),
 );
 
 standingRoutes.put(
   "/requirement-sets/:requirementSetId",
-  { allow: canManageRequirementSet, params: requirementSetParamsSchema, body: requirementSetInputSchema },
+  {
+    allow: canManageRequirementSet,
+    params: requirementSetParamsSchema,
+    body: requirementSetInputSchema,
+    response: requirementSetDtoSchema,
+  },
   (req, _res, { params, body }) => reviseRequirementSet(req.user!, params.requirementSetId, body),
 );
 
@@ -79,12 +102,20 @@ standingRoutes.delete(
 
 standingRoutes.get(
   "/requirement-sets/:requirementSetId/preview",
-  { allow: canManageRequirementSet, params: requirementSetParamsSchema },
+  {
+    allow: canManageRequirementSet,
+    params: requirementSetParamsSchema,
+    response: requirementSetPreviewDtoSchema,
+  },
   (req, _res, { params }) => previewRequirementSet(req.user!, params.requirementSetId),
 );
 
 standingRoutes.get(
   "/technicians/:technicianId/standing",
-  { allow: canViewTechnicianStanding, params: technicianStandingParamsSchema },
+  {
+    allow: canViewTechnicianStanding,
+    params: technicianStandingParamsSchema,
+    response: technicianStandingDtoSchema,
+  },
   (req, _res, { params }) => readTechnicianStanding(params.technicianId, req.user),
 );

@@ -1,9 +1,9 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import type { BaselineInput } from "@shared/standing/schemas.ts";
 import { api } from "@/lib/api-client.ts";
-import { baselineSchema } from "./get-baseline.ts";
+import { baselineDtoSchema } from "@shared/standing/schemas.ts";
 
-export const saveBaseline = (input: BaselineInput) => api.put("/admin/baseline", input, baselineSchema);
+export const saveBaseline = (input: BaselineInput) => api.put("/admin/baseline", input, baselineDtoSchema);
 
 export function useSaveBaseline() {
   const queryClient = useQueryClient();

@@ -2,15 +2,15 @@ import { useMutation, useQueryClient } from "@tanstack/react-query";
 import type { RequirementSetInput } from "@shared/standing/schemas.ts";
 import { api } from "@/lib/api-client.ts";
 import { requirementSetKeys } from "./requirement-set-keys.ts";
-import { requirementSetSchema } from "./requirement-set-shapes.ts";
+import { requirementSetDtoSchema } from "@shared/standing/schemas.ts";
 
 type SaveRequirementSet = { requirementSetId?: number | undefined; input: RequirementSetInput };
 
 /** Defines a new set, or revises one when `requirementSetId` is given. */
 export const saveRequirementSet = ({ requirementSetId, input }: SaveRequirementSet) =>
   requirementSetId
-    ? api.put(`/requirement-sets/${requirementSetId}`, input, requirementSetSchema)
-    : api.post("/requirement-sets", input, requirementSetSchema);
+    ? api.put(`/requirement-sets/${requirementSetId}`, input, requirementSetDtoSchema)
+    : api.post("/requirement-sets", input, requirementSetDtoSchema);
 
 export function useSaveRequirementSet() {
   const queryClient = useQueryClient();

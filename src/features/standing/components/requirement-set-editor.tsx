@@ -16,7 +16,7 @@ import { SelectField, type SelectOption } from "@/components/ui/select-field.tsx
 import { TextField } from "@/components/ui/text-field.tsx";
 import { fieldErrorsOf } from "@/lib/field-errors.ts";
 import { useRequirementSetPreview } from "../api/preview-requirement-set.ts";
-import type { RequirementSetView } from "../api/requirement-set-shapes.ts";
+import type { RequirementSetDto as RequirementSetView } from "@shared/standing/schemas.ts";
 import { useDebouncedValue } from "./use-debounced-value.ts";
 
 type RequirementSetEditorProps = {

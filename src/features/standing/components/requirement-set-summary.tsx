@@ -1,4 +1,4 @@
-import type { RequirementSetView } from "../api/requirement-set-shapes.ts";
+import type { RequirementSetDto as RequirementSetView } from "@shared/standing/schemas.ts";
 import { offeredLimits } from "@/components/requirements/requirement-draft.ts";
 
 const limitWords = new Map<string, string>(

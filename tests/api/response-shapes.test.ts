@@ -1,0 +1,193 @@
+import { mkdtempSync, rmSync } from "node:fs";
+import { tmpdir } from "node:os";
+import path from "node:path";
+import { QueryTypes } from "sequelize";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import type { Role } from "../../shared/accounts/schemas.ts";
+import { db } from "../../server/db/sequelize.ts";
+import { migrate } from "../../server/db/migrate.ts";
+import { DEMO_PASSWORD, demoSignIns, loadDemoScenarioOnce } from "../../server/db/demo-scenario/index.ts";
+import { routeTable, type RouteEntry } from "../../server/http/route.ts";
+import { agentFor, buildTestApp, type TestApp } from "../support/test-app.ts";
+import { createTestDatabase } from "../support/test-database.ts";
+
+// Answers that are not JSON, so no response schema applies: files, CSV, ICS, print pages, redirects.
+const notJson = new Set([
+  "get /api/technicians/import/template", // XLSX workbook
+  "get /api/machines/import/template", // XLSX workbook
+  "get /api/documents/:documentId/file", // the uploaded PDF or image
+  "get /api/documents/:documentId/pages/:page", // a page image
+  "get /api/roster/export.csv", // CSV
+  "get /api/machines/:machineId/history.csv", // CSV
+  "get /api/machines/:machineId/history/print", // HTML print page
+  "get /api/machines/:machineId/photos/:photoId", // image
+  "get /api/work-orders/:workOrderId/messages/:messageId/file", // attachment
+  "get /api/work-orders/:workOrderId/messages/:messageId/thumbnail", // image
+  "get /api/service-requests/:requestId/attachments/:attachmentId", // attachment
+  "get /api/service-requests/:requestId/threads/:companyId/messages/:messageId/file", // attachment
+  "get /api/calendar/:secret.ics", // ICS
+  "get /api/sites/:siteId/gate-sign", // printable sign
+  "get /api/badge", // printable badge
+]);
+
+// JSON answers whose shape is still declared only as a TypeScript interface; each leaves this list when its domain
+// declares its response schema in shared/. A new route cannot join it silently: the list is closed.
+const notYetDeclared = new Set<string>([
+  "get /api/company/",
+  "get /api/admin/outbox",
+  "get /api/health",
+  "get /api/health/ready",
+  "get /api/health/live",
+  "get /api/auth/me",
+  "get /api/admin/users",
+  "get /api/admin/companies",
+  "get /api/technicians",
+  "get /api/technicians/:technicianId",
+  "get /api/notifications",
+  "get /api/credential-types",
+  "get /api/credentials",
+  "get /api/credentials/:credentialId",
+  "get /api/review/queue",
+  "get /api/sites",
+  "get /api/sites/:siteId",
+  "get /api/sites/:siteId/equipment",
+  "get /api/postal-codes/:code",
+  "get /api/roster",
+  "get /api/work-orders",
+  "get /api/work-orders/:workOrderId",
+  "get /api/work-orders/:workOrderId/standing-proof",
+  "get /api/work-orders/:workOrderId/messages",
+  "get /api/service-requests",
+  "get /api/service-requests/follow-up",
+  "get /api/service-requests/:requestId",
+  "get /api/service-requests/:requestId/comparison",
+  "get /api/service-requests/:requestId/threads/:companyId",
+  "get /api/directory",
+  "get /api/directory/technicians/:technicianId",
+  "get /api/broker-contacts",
+  "get /api/broker-requests",
+  "get /api/broker-coverages",
+  "get /api/broker-uploads/:token",
+  "get /api/certificate-requests",
+  "get /api/work-orders/:workOrderId/review",
+  "get /api/admin/reviews/reported",
+  "get /api/technicians/:technicianId/reviews",
+  "get /api/geo/zip/:zip",
+  "get /api/gate/check",
+  "get /api/gate/checks",
+  "get /api/machine-catalog",
+  "get /api/machines",
+  "get /api/machines/:machineId",
+  "get /api/machines/:machineId/history",
+  "get /api/machines/:machineId/photos",
+  "get /api/machines/:machineId/transfers",
+  "get /api/machines/:machineId/ownership",
+  "get /api/machine-transfers",
+  "get /api/machine-transfers/:transferId",
+  "get /api/machines/:machineId/maintenance-plans",
+  "get /api/calendar-feed",
+]);
+
+const key = (r: RouteEntry) => `${r.method} ${r.path}`;
+
+let t: TestApp;
+let uploadsDir: string;
+const agents = new Map<Role, ReturnType<typeof agentFor>[]>();
+
+const ids = async (sql: string) =>
+  (await db().query<{ id: number | string }>(sql, { type: QueryTypes.SELECT })).map((r) => String(r.id));
+
+// Real values from the demo data for each path parameter; the caller's own rows are found by trying them.
+let candidates: Record<string, string[]>;
+
+beforeAll(async () => {
+  const { url } = await createTestDatabase("shapes");
+  uploadsDir = mkdtempSync(path.join(tmpdir(), "clearbench-shapes-uploads-"));
+  t = buildTestApp({ DATABASE_URL: url, UPLOADS_DIR: uploadsDir });
+  await migrate(db());
+  expect(await loadDemoScenarioOnce({ uploadsDir, today: new Date() })).toBe(true);
+  // One signed-in agent per demo account, so each role is tried from every company it belongs to.
+  for (const { role, email } of demoSignIns) {
+    const agent = agentFor(t.app);
+    await agent.post("/api/auth/sign-in").send({ email, password: DEMO_PASSWORD }).expect(200);
+    agents.set(role, [...(agents.get(role) ?? []), agent]);
+  }
+  candidates = {
+    technicianId: await ids("SELECT id FROM technicians ORDER BY id"),
+    requirementSetId: await ids("SELECT id FROM requirement_sets ORDER BY id"),
+    credentialId: await ids("SELECT id FROM credentials ORDER BY id LIMIT 40"),
+    siteId: await ids("SELECT id FROM sites ORDER BY id"),
+    workOrderId: await ids("SELECT id FROM work_orders ORDER BY id"),
+    requestId: await ids("SELECT id FROM service_requests ORDER BY id"),
+    machineId: await ids("SELECT id FROM equipment ORDER BY id"),
+    transferId: await ids("SELECT id FROM machine_transfers ORDER BY id"),
+    code: await ids("SELECT DISTINCT postal_code AS id FROM sites"),
+    zip: await ids("SELECT DISTINCT postal_code AS id FROM sites"),
+  };
+}, 240_000);
+
+afterAll(async () => {
+  await t?.close();
+  if (uploadsDir) rmSync(uploadsDir, { recursive: true, force: true });
+});
+
+/** Every concrete path for a route, filling each parameter with each real value. */
+function concretePaths(route: string): string[] {
+  const names = [...route.matchAll(/:([A-Za-z]+)/g)].map((m) => m[1]!);
+  let paths = [route];
+  for (const name of names) {
+    const values = candidates[name] ?? [];
+    paths = paths.flatMap((p) => values.map((v) => p.replace(`:${name}`, encodeURIComponent(v))));
+  }
+  return paths;
+}
+
+const rolesOf = (r: RouteEntry): readonly Role[] =>
+  r.policy.roles === "anyone" || r.policy.roles === "signed_in" ? [...agents.keys()] : r.policy.roles;
+
+describe("response shapes on the demo data", () => {
+  it("declares a response schema for every JSON route (the rest are listed as files, pages or not yet declared)", () => {
+    const gets = routeTable.filter((r) => r.method === "get");
+    const missing = gets.filter((r) => !r.response && !notJson.has(key(r)) && !notYetDeclared.has(key(r)));
+    const stale = [...notYetDeclared].filter((k) => gets.some((r) => key(r) === k && r.response));
+    const unknown = [...notJson, ...notYetDeclared].filter((k) => !gets.some((r) => key(r) === k));
+
+    expect(missing.map(key)).toEqual([]);
+    expect(stale).toEqual([]);
+    expect(unknown).toEqual([]);
+  });
+
+  it("answers every declared GET route, for each role it allows, with exactly its schema's shape", async () => {
+    const wrong: string[] = [];
+    const answered = new Set<string>();
+    const declared = routeTable.filter((r) => r.method === "get" && r.response);
+    for (const route of declared) {
+      for (const role of rolesOf(route)) {
+        for (const agent of agents.get(role) ?? []) {
+          for (const concrete of concretePaths(route.path)) {
+            const res = await agent.get(concrete);
+            if (res.status !== 200) continue;
+            answered.add(key(route));
+            const parsed = route.response!.safeParse(res.body);
+            if (!parsed.success)
+              wrong.push(
+                `${role} ${concrete}: ${parsed.error.issues[0]?.path.join(".")} ${parsed.error.message}`,
+              );
+            // Parsing strips what the schema does not name, so an answer with an extra field differs from its parse.
+            else
+              try {
+                expect(parsed.data).toStrictEqual(res.body);
+              } catch {
+                wrong.push(`${role} ${concrete}: carries fields its schema does not declare`);
+              }
+            break;
+          }
+        }
+      }
+    }
+
+    expect(declared.length).toBeGreaterThan(0);
+    expect(wrong).toEqual([]);
+    expect(declared.map(key).filter((k) => !answered.has(k))).toEqual([]);
+  }, 240_000);
+});
