@@ -1,25 +1,17 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
 import { z } from "zod";
 import { api } from "@/lib/api-client.ts";
+import { reviewSchema } from "./review-shapes.ts";
 
 export const reportedReviewKeys = {
   all: ["reported-reviews"] as const,
   list: () => [...reportedReviewKeys.all, "list"] as const,
 };
 
-// Run-time check of shared/reviews/schemas.ts ReportedReviewDto.
-export const reportedReviewSchema = z.object({
-  id: z.number(),
-  workOrderId: z.number(),
-  technicianId: z.number(),
+// Run-time check of shared/reviews/schemas.ts ReportedReviewDto: a review as the public list shows it (without its
+// own reported flag, every one here being reported), with the report and its settlement.
+export const reportedReviewSchema = reviewSchema.omit({ reported: true }).extend({
   technicianName: z.string(),
-  shopName: z.string(),
-  authorName: z.string(),
-  stars: z.number(),
-  body: z.string(),
-  reply: z.string().nullable(),
-  repliedAt: z.string().nullable(),
-  createdAt: z.string(),
   reportedAt: z.string().nullable(),
   reportReason: z.string(),
   reportedBy: z.object({ id: z.number(), name: z.string() }),
