@@ -3,6 +3,7 @@ import { db } from "../db/sequelize.ts";
 import { computeStandings } from "../standing/compute-stored-standings.ts";
 import { loadStandingInputs, loadTargets } from "../standing/standing-inputs.ts";
 import type { StandingResult } from "../../shared/standing/standing-types.ts";
+import { jpegDataUrl } from "./photo.ts";
 import { checkBadgeToken, siteFromGateCode } from "./token.ts";
 
 export interface GateCheckDto {
@@ -89,7 +90,7 @@ export async function checkAtGate(
      VALUES ($1, $2, $3, $4, $5, $6)`,
     { bind: [row.technician_id, row.company_id, row.site_id, row.shop_company_id, state, now] },
   );
-  const photo = row.jpeg ? `data:image/jpeg;base64,${Buffer.from(row.jpeg).toString("base64")}` : null;
+  const photo = row.jpeg ? jpegDataUrl(row.jpeg) : null;
   return {
     state,
     checkedAt,

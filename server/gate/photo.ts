@@ -27,5 +27,9 @@ export async function technicianPhotoDataUrl(technicianId: number): Promise<stri
       type: QueryTypes.SELECT,
     },
   );
-  return row ? `data:image/jpeg;base64,${Buffer.from(row.jpeg).toString("base64")}` : null;
+  return row ? jpegDataUrl(row.jpeg) : null;
 }
+
+/** Stored JPEG bytes as the data URL the badge and the gate screen show. */
+export const jpegDataUrl = (jpeg: Buffer | Uint8Array) =>
+  `data:image/jpeg;base64,${Buffer.from(jpeg).toString("base64")}`;
