@@ -34,6 +34,7 @@ import { machinePhotoRoutes } from "./machines/photo-routes.ts";
 import { machineImportRoutes } from "./machines/import-routes.ts";
 import { machineTransferRoutes, machineTransferStartRoutes } from "./machines/transfer-routes.ts";
 import { maintenanceRoutes } from "./machines/maintenance-routes.ts";
+import { machineDowntimeRoutes } from "./machines/downtime-routes.ts";
 import { calendarRoutes } from "./calendar/routes.ts";
 import { createStorage } from "./storage/index.ts";
 import { createAbuseLimits } from "./accounts/abuse-limits.ts";
@@ -68,6 +69,7 @@ const apiRouters = [
   machineImportRoutes,
   machineRoutes,
   machineHistoryRoutes,
+  machineDowntimeRoutes,
   machinePhotoRoutes,
   machineTransferStartRoutes,
   machineTransferRoutes,

@@ -13,6 +13,7 @@ import { companiesWithClearedTechnician, rosterCompanyIds, routeRequest } from "
 import { tellCompany } from "./notify.ts";
 import { requestLink } from "./records.ts";
 import { insertReturningId, run, selectOne } from "./sql.ts";
+import { markDownBy } from "../machines/downtime.ts";
 
 const unknown = (path: string, message: string) =>
   new AppError("invalid_input", message, [{ path, message: "unknown or not yours" }]);
@@ -191,6 +192,13 @@ export async function raiseServiceRequest(
       ],
       transaction,
     );
+    if (input.machineState === "down" && targets.equipment)
+      await markDownBy(
+        targets.equipment.id,
+        { by: "service_request", userId: buyer.id, serviceRequestId: id },
+        asOf,
+        transaction,
+      );
     const area = siteArea(targets.site.postal_code);
     const state = machineStateLabels[input.machineState];
     for (const company of plan.companies) {

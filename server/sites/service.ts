@@ -6,6 +6,7 @@ import { recordAudit } from "../audit/index.ts";
 import { lookupPostalCode, type PostalPlace } from "../geo/index.ts";
 import { Equipment, Site } from "./model.ts";
 import { toEquipmentDto, toSiteDto } from "./dto.ts";
+import { followStateChange } from "../machines/downtime.ts";
 
 export function placeOfSite(postalCode: string): PostalPlace {
   const place = lookupPostalCode(postalCode);
@@ -218,6 +219,7 @@ export async function addEquipment(actor: Express.User, siteId: number, input: E
   const equipment = await db().transaction(async (transaction) => {
     await refuseTakenSerial(actor.companyId, input.builder, input.serialNumber, null, transaction);
     const e = await Equipment.create({ siteId, ...machineValues(input) }, { transaction });
+    await followStateChange(e.id, null, e.state, actor.id, new Date(), transaction);
     await recordAudit(
       {
         actorUserId: actor.id,
@@ -240,6 +242,7 @@ export async function editEquipment(actor: Express.User, equipmentId: number, in
     const before = e.toJSON();
     await refuseTakenSerial(actor.companyId, input.builder, input.serialNumber, e.id, transaction);
     await e.update(machineValues(input), { transaction });
+    await followStateChange(e.id, before.state ?? null, e.state, actor.id, new Date(), transaction);
     await recordAudit(
       {
         actorUserId: actor.id,

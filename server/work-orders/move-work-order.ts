@@ -20,6 +20,7 @@ import { standingSnapshotNow } from "./standing-now.ts";
 import { mailOtherSide, type WorkOrderNews } from "./work-order-emails.ts";
 import { onSiteDetailsOf, toWorkOrderDto } from "./dto.ts";
 import { movePlanForConfirmedWork } from "../machines/maintenance-completion.ts";
+import { runningAgainOnConfirm } from "../machines/downtime.ts";
 
 type Changes = Partial<
   Pick<
@@ -294,9 +295,11 @@ export function confirmWorkOrder(actor: Express.User, id: number, link: string) 
     id,
     "confirm",
     {
-      // Confirmed preventive maintenance moves its plan to the next due date in the same transaction.
-      changes: async (row, _now, transaction) => {
+      // Confirmed preventive maintenance moves its plan to the next due date, and a machine that was down for this
+      // work runs again, in the same transaction.
+      changes: async (row, now, transaction) => {
         await movePlanForConfirmedWork(row, actor.id, transaction);
+        await runningAgainOnConfirm(row, actor.id, now, transaction);
         return {};
       },
       news: (row, who) => ({

@@ -12,6 +12,7 @@ import { findEquipment, findRequirementSet, findSite, findTechnicianForWork } fr
 import { standingSnapshotNow } from "./standing-now.ts";
 import { mailOtherSide } from "./work-order-emails.ts";
 import { toWorkOrderDto } from "./dto.ts";
+import { markDownBy } from "../machines/downtime.ts";
 
 const unknown = (path: string, message: string) =>
   new AppError("invalid_input", message, [{ path, message: "unknown or not yours" }]);
@@ -166,8 +167,18 @@ export async function raiseWorkOrder(
   warningDays: number,
   link: (id: number) => string,
 ) {
-  const { row } = await db().transaction((transaction) =>
-    raiseWorkOrderWithin(buyer, input, warningDays, link, transaction),
-  );
+  const { row } = await db().transaction(async (transaction) => {
+    const raised = await raiseWorkOrderWithin(buyer, input, warningDays, link, transaction);
+    // Called straight to a technician for a machine that is down: its downtime runs from this call. (A work order that
+    // comes from an accepted estimate continues the request's period instead.)
+    if (raised.row.urgency === "down" && raised.row.equipmentId !== null)
+      await markDownBy(
+        raised.row.equipmentId,
+        { by: "work_order", userId: buyer.id, workOrderId: raised.row.id },
+        raised.row.createdAt,
+        transaction,
+      );
+    return raised;
+  });
   return toWorkOrderDto(row, "shop");
 }

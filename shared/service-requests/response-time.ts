@@ -1,3 +1,5 @@
+import { median } from "../stats/median.ts";
+
 /** How far back a company's answers count towards its typical response time. */
 export const RESPONSE_WINDOW_DAYS = 90;
 
@@ -8,13 +10,8 @@ export const RESPONSE_WINDOW_DAYS = 90;
 export function medianResponseMinutes(
   answers: readonly { invitedAt: Date; firstAnswerAt: Date }[],
 ): number | null {
-  if (answers.length === 0) return null;
-  const minutes = answers
-    .map((a) => (a.firstAnswerAt.getTime() - a.invitedAt.getTime()) / 60_000)
-    .sort((x, y) => x - y);
-  const middle = Math.floor(minutes.length / 2);
-  const value = minutes.length % 2 === 1 ? minutes[middle]! : (minutes[middle - 1]! + minutes[middle]!) / 2;
-  return Math.round(value);
+  const value = median(answers.map((a) => (a.firstAnswerAt.getTime() - a.invitedAt.getTime()) / 60_000));
+  return value === null ? null : Math.round(value);
 }
 
 /** Answers that count at `asOf`: invited within the window and answered. */

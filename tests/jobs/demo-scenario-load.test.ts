@@ -11,6 +11,7 @@ import { buildDemoWorld, loadDemoScenarioOnce } from "../../server/db/demo-scena
 import { migrate } from "../../server/db/migrate.ts";
 import { connectDatabase } from "../../server/db/sequelize.ts";
 import { listMachineHistory } from "../../server/machines/service-history.ts";
+import { readMachineDowntime } from "../../server/machines/downtime.ts";
 import { planDue, reminderThresholdFor } from "../../shared/machines/maintenance-due.ts";
 
 // The demo loads into an empty database only, so it gets a throw-away database of its own in the suite's cluster.
@@ -150,6 +151,22 @@ describe("loading the demo scenario", () => {
     expect(history.entries.map((e) => e.source)).toEqual(["platform", "shop_record"]);
     expect(history.entries[0]!.repeatOf).toBe(history.entries[1]!.key);
     expect(history.entries[0]!.standingSnapshot).not.toBeNull();
+  });
+
+  it("charts the mill's stoppages of the year, the last ended by the confirmed work order", async () => {
+    const [machine] = await rows<{ id: number }>(
+      "SELECT id FROM equipment WHERE serial_number = 'VM40-2209'",
+    );
+
+    const downtime = await readMachineDowntime(machine!.id, today);
+
+    expect(downtime.periods).toBe(3);
+    expect(downtime.downSince).toBeNull();
+    expect(downtime.months.filter((m) => m.hours > 0)).toHaveLength(3);
+    expect(downtime.recent[0]).toMatchObject({ openedBy: "work_order", closedBy: "confirmation" });
+    expect(downtime.companies).toEqual([
+      expect.objectContaining({ companyName: "Kestrel Ridge Machine Service LLC", workOrders: 1 }),
+    ]);
   });
 
   it("has a maintenance plan coming due that the next daily run reminds the shop of", async () => {

@@ -1,5 +1,6 @@
 import { insertDemoServiceRequests } from "./service-requests.ts";
 import { insertDemoMachineHistory } from "./machine-history.ts";
+import { insertDemoMachineDowntime } from "./machine-downtime.ts";
 import { insertDemoMaintenancePlans } from "./maintenance-plans.ts";
 import { hashPassword } from "../../accounts/passwords.ts";
 import { refreshAllStandings } from "../../standing/index.ts";
@@ -50,6 +51,7 @@ export async function loadDemoScenarioOnce({
       await afterDemoLoaded(today, transaction);
       await insertDemoServiceRequests(today, transaction);
       await insertDemoMachineHistory(today, transaction);
+      await insertDemoMachineDowntime(today, transaction);
       await insertDemoMaintenancePlans(today, transaction);
     });
   } catch (err) {

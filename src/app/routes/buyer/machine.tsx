@@ -16,6 +16,7 @@ import { MachineRecordForm } from "@/features/machines/components/machine-record
 import { ServiceHistory } from "@/features/machines/components/service-history.tsx";
 import { ShopRecordForm } from "@/features/machines/components/shop-record-form.tsx";
 import { MachinePhotos } from "@/features/machines/components/machine-photos.tsx";
+import { MachineDowntime } from "@/features/machines/components/machine-downtime.tsx";
 import { queryClient } from "@/lib/query-client.ts";
 import { machineIdOf } from "./machine-id.ts";
 
@@ -81,6 +82,7 @@ export function Component() {
               Sell or transfer
             </Link>
           </nav>
+          <MachineDowntime machineId={machine.id} state={machine.state ?? "running"} />
           <MachinePhotos machineId={machine.id} />
         </div>
         <div className="min-w-0 space-y-4">

@@ -10,6 +10,7 @@ export const machineKeys = {
   list: (filters: MachineFilters) => [...machineKeys.all, "list", filters] as const,
   detail: (id: number) => [...machineKeys.all, "detail", id] as const,
   history: (id: number) => [...machineKeys.all, "history", id] as const,
+  downtime: (id: number) => [...machineKeys.all, "downtime", id] as const,
   builders: () => [...machineKeys.all, "builders"] as const,
 };
 
