@@ -54,8 +54,10 @@ export async function requestPlannedService(
   const dueWords = due.dueOn
     ? `${due.estimated ? "projected due" : "due"} ${formatCalendarDate(due.dueOn)}`
     : `due at ${due.dueHours!.toLocaleString("en-US")} h`;
+  // The request's kind is shown beside it on every screen and heads the work order's problem: the text starts with
+  // the plan, or the work order read "Preventive maintenance (service request #3): Preventive maintenance: ...".
   const problem = [
-    `Preventive maintenance: ${plan.name} (${intervalWords(plan)}; ${lastDoneWords(plan)}; ${dueWords}).`,
+    `${plan.name} (${intervalWords(plan)}; ${lastDoneWords(plan)}; ${dueWords}).`,
     `Machine: ${machine.builder} ${machine.model}${machine.serial_number ? `, serial ${machine.serial_number}` : ""}.`,
     ...(input.note ? [input.note] : []),
   ].join("\n");

@@ -1,8 +1,9 @@
 import { useQuery } from "@tanstack/react-query";
-import { data, useParams, type LoaderFunctionArgs } from "react-router-dom";
+import { data, Link, useParams, type LoaderFunctionArgs } from "react-router-dom";
 import { LOCKOUT_CAUTION } from "@shared/safety/cautions.ts";
 import { idParam } from "@shared/credentials/schemas.ts";
 import { PageHeader } from "@/components/ui/page-header.tsx";
+import { hrefs } from "@/config/paths.ts";
 import { maintenancePlansQuery } from "@/features/machines/api/maintenance-keys.ts";
 import { MaintenancePlansPanel } from "@/features/machines/components/maintenance-plans-panel.tsx";
 import { queryClient } from "@/lib/query-client.ts";
@@ -24,6 +25,13 @@ export function Component() {
   const machine = list?.machine;
   return (
     <div className="min-w-0">
+      {/* A reminder lands here; the way back leads to the machine's record and history, not the browser's history. */}
+      <Link
+        to={hrefs.machine(machineId)}
+        className="mb-2 inline-flex min-h-11 items-center text-sm text-ink-700 underline underline-offset-2"
+      >
+        Back to the machine
+      </Link>
       <PageHeader
         title="Maintenance plans"
         description={

@@ -7,6 +7,7 @@ import { EmptyState } from "@/components/ui/empty-state.tsx";
 import { hrefs, paths } from "@/config/paths.ts";
 import { PageHeader } from "@/components/ui/page-header.tsx";
 import { usTimeZoneOptions } from "@/features/accounts/components/us-time-zones.ts";
+import { machineKeys } from "@/features/machines/api/machine-keys.ts";
 import { useArchiveSite } from "@/features/sites/api/archive-site.ts";
 import { sitesQuery } from "@/features/sites/api/get-sites.ts";
 import { useSaveSite } from "@/features/sites/api/save-site.ts";
@@ -68,7 +69,12 @@ function SiteCard({ site }: { site: Site }) {
           </div>
         </div>
       )}
-      <SiteEquipment siteId={site.id} siteName={site.name} />
+      <SiteEquipment
+        siteId={site.id}
+        siteName={site.name}
+        // The machines screen lists the same rows: without this it showed an added machine only once its cache aged.
+        onMachinesChanged={() => void queryClient.invalidateQueries({ queryKey: machineKeys.all })}
+      />
     </li>
   );
 }

@@ -252,7 +252,7 @@ export function MaintenancePlansPanel({ machineId }: { machineId: number }) {
       <section aria-labelledby="plans-heading" className="space-y-3">
         <div className="flex flex-wrap items-center justify-between gap-2">
           <h2 id="plans-heading" className="text-lg font-semibold text-ink-900">
-            Maintenance plans
+            Plans
           </h2>
           {!adding && (
             <Button variant="secondary" onClick={() => setAdding(true)}>

@@ -1,6 +1,7 @@
 import type { ServiceRequestDto } from "@shared/service-requests/schemas.ts";
 import { machineStateLabels, requestKindLabels } from "@shared/service-requests/schemas.ts";
 import { formatDateTime } from "@/lib/format-date-time.ts";
+import { formatIsoDate } from "@/lib/format-date.ts";
 import { RequestStatusBadge } from "./request-status-badge.tsx";
 
 /** What was asked: the machine, the site (the street only for those who may see it), the problem and the files. */
@@ -37,7 +38,7 @@ export function RequestFacts({ request }: { request: ServiceRequestDto }) {
           <dd>
             {request.timing === "soonest"
               ? "Soonest available"
-              : `Between ${request.windowStart} and ${request.windowEnd}`}
+              : `Between ${formatIsoDate(request.windowStart)} and ${formatIsoDate(request.windowEnd)}`}
           </dd>
         </div>
         <div>

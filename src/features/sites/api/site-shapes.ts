@@ -32,6 +32,8 @@ export const equipmentSchema = z.object({
   technology: z.enum(machineTechnologies),
   model: z.string(),
   serialNumber: z.string().nullable(),
+  building: z.string().nullable().optional(),
+  bay: z.string().nullable().optional(),
 });
 export type Equipment = z.infer<typeof equipmentSchema>;
 

@@ -16,7 +16,12 @@ const labels = {
   technology: "Technology",
   model: "Model",
   serialNumber: "Serial number",
+  building: "Building",
+  bay: "Bay",
 };
+
+// An empty field clears the value on an edit; on an add it simply leaves it unrecorded.
+const orNull = (v: string | undefined) => (v && v.trim() ? v : null);
 
 export const technologyOptions = machineTechnologies.map((t) => ({ value: t, label: technologyLabels[t] }));
 
@@ -28,7 +33,10 @@ type EquipmentFormProps = {
   onCancel?: () => void;
 };
 
-/** One machine at a site; what it says fills the directory's technology and control-family filters. */
+/**
+ * One machine at a site; what it says fills the directory's technology and control-family filters, and the building
+ * and bay tell a technician where on the site it stands.
+ */
 export function EquipmentForm({ equipment, pending, serverError, onSubmit, onCancel }: EquipmentFormProps) {
   const [invalid, setInvalid] = useState<unknown>(null);
   // A new key after each added machine starts the fields afresh (the pickers keep their own state).
@@ -43,6 +51,8 @@ export function EquipmentForm({ equipment, pending, serverError, onSubmit, onCan
     const parsed = equipmentInputSchema.safeParse({
       ...values,
       serialNumber: values.serialNumber || undefined,
+      building: orNull(values.building),
+      bay: orNull(values.bay),
     });
     if (!parsed.success) {
       setInvalid(parsed.error);
@@ -94,6 +104,20 @@ export function EquipmentForm({ equipment, pending, serverError, onSubmit, onCan
           defaultValue={equipment?.serialNumber ?? ""}
           hint="Optional"
           error={fields.serialNumber}
+        />
+        <TextField
+          label={labels.building}
+          name="building"
+          defaultValue={equipment?.building ?? ""}
+          hint="Optional"
+          error={fields.building}
+        />
+        <TextField
+          label={labels.bay}
+          name="bay"
+          defaultValue={equipment?.bay ?? ""}
+          hint="Optional"
+          error={fields.bay}
         />
       </div>
       <div className="flex flex-wrap gap-2">

@@ -9,8 +9,15 @@ import { useRemoveEquipment } from "../api/remove-equipment.ts";
 import { useSaveEquipment } from "../api/save-equipment.ts";
 import { EquipmentForm } from "./equipment-form.tsx";
 
+type SiteEquipmentProps = {
+  siteId: number;
+  siteName: string;
+  /** The page refreshes what other screens hold of the machines (the machines list) after each change. */
+  onMachinesChanged?: () => void;
+};
+
 /** The machines of one site, each editable, and a form to add another. */
-export function SiteEquipment({ siteId, siteName }: { siteId: number; siteName: string }) {
+export function SiteEquipment({ siteId, siteName, onMachinesChanged }: SiteEquipmentProps) {
   const equipment = useSiteEquipment(siteId);
   const save = useSaveEquipment();
   const remove = useRemoveEquipment();
@@ -35,7 +42,15 @@ export function SiteEquipment({ siteId, siteName }: { siteId: number; siteName: 
                   pending={save.isPending}
                   serverError={save.error}
                   onSubmit={(input) =>
-                    save.mutate({ siteId, equipmentId: m.id, input }, { onSuccess: () => setEditing(null) })
+                    save.mutate(
+                      { siteId, equipmentId: m.id, input },
+                      {
+                        onSuccess: () => {
+                          setEditing(null);
+                          onMachinesChanged?.();
+                        },
+                      },
+                    )
                   }
                   onCancel={() => setEditing(null)}
                 />
@@ -59,7 +74,9 @@ export function SiteEquipment({ siteId, siteName }: { siteId: number; siteName: 
                     <Button
                       variant="danger"
                       pending={remove.isPending && remove.variables?.equipmentId === m.id}
-                      onClick={() => remove.mutate({ siteId, equipmentId: m.id })}
+                      onClick={() =>
+                        remove.mutate({ siteId, equipmentId: m.id }, { onSuccess: onMachinesChanged })
+                      }
                       aria-label={`Remove ${m.builder} ${m.model}`}
                     >
                       Remove
@@ -75,7 +92,7 @@ export function SiteEquipment({ siteId, siteName }: { siteId: number; siteName: 
         <EquipmentForm
           pending={save.isPending}
           serverError={save.error}
-          onSubmit={(input) => save.mutate({ siteId, input })}
+          onSubmit={(input) => save.mutate({ siteId, input }, { onSuccess: onMachinesChanged })}
         />
       )}
     </section>
