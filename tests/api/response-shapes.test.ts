@@ -36,7 +36,6 @@ const notYetDeclared = new Set<string>([
   "get /api/sites",
   "get /api/sites/:siteId",
   "get /api/sites/:siteId/equipment",
-  "get /api/roster",
   "get /api/work-orders",
   "get /api/work-orders/:workOrderId",
   "get /api/work-orders/:workOrderId/standing-proof",
