@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { singleLineText } from "../api/text.ts";
+import { fieldMask } from "../api/field-mask.ts";
 import { postalCodeSchema } from "../accounts/schemas.ts";
 import { TECHNICIAN_FIELDS_BY_LEVEL } from "../visibility/technician-visibility.ts";
 
@@ -75,16 +76,13 @@ export const technicianDtoSchema = z.object({
 });
 export type TechnicianDto = z.infer<typeof technicianDtoSchema>;
 
-const maskOf = <K extends string>(keys: readonly K[]) =>
-  Object.fromEntries(keys.map((k) => [k, true])) as Record<K, true>;
-
 /**
  * One technician as the caller may see them: exactly the fields of the caller's level by the shared visibility rule
  * (the technician's own company and staff read them all, a shop only the directory or contact fields).
  */
 export const technicianViewDtoSchema = z.union([
   technicianDtoSchema.strict(),
-  technicianDtoSchema.pick(maskOf(TECHNICIAN_FIELDS_BY_LEVEL.contact)).strict(),
-  technicianDtoSchema.pick(maskOf(TECHNICIAN_FIELDS_BY_LEVEL.directory)).strict(),
+  technicianDtoSchema.pick(fieldMask(TECHNICIAN_FIELDS_BY_LEVEL.contact)).strict(),
+  technicianDtoSchema.pick(fieldMask(TECHNICIAN_FIELDS_BY_LEVEL.directory)).strict(),
 ]);
 export type TechnicianViewDto = z.infer<typeof technicianViewDtoSchema>;
