@@ -1,5 +1,9 @@
 import type { NextFunction, Request, Response } from "express";
+import { z } from "zod";
 import {
+  adminCompanyDtoSchema,
+  adminUserDtoSchema,
+  currentUserSchema,
   inviteUserSchema,
   userParamsSchema,
   requestPasswordResetSchema,
@@ -49,7 +53,7 @@ async function meOrThrow(userId: number) {
 
 authRoutes.post(
   "/sign-in",
-  { allow: anyone, before: [abuseLimit("signIn")], body: signInSchema },
+  { allow: anyone, before: [abuseLimit("signIn")], body: signInSchema, response: currentUserSchema },
   async (req, res, { body }) => {
     req.body = body;
     const user = await authenticate(req, res, () => undefined);
@@ -66,7 +70,9 @@ authRoutes.post("/sign-out", { allow: anyone }, async (req, res) => {
   res.status(204).end();
 });
 
-authRoutes.get("/me", { allow: signedIn }, async (req) => meOrThrow(req.user!.id));
+authRoutes.get("/me", { allow: signedIn, response: currentUserSchema }, async (req) =>
+  meOrThrow(req.user!.id),
+);
 
 authRoutes.post(
   "/sign-up",
@@ -96,8 +102,12 @@ authRoutes.post(
   },
 );
 
-adminUserRoutes.get("/users", { allow: canManageUsers }, () => listUsers());
-adminUserRoutes.get("/companies", { allow: canManageUsers }, () => listCompanies());
+adminUserRoutes.get("/users", { allow: canManageUsers, response: z.array(adminUserDtoSchema) }, () =>
+  listUsers(),
+);
+adminUserRoutes.get("/companies", { allow: canManageUsers, response: z.array(adminCompanyDtoSchema) }, () =>
+  listCompanies(),
+);
 adminUserRoutes.post(
   "/invitations",
   { allow: canManageUsers, body: inviteUserSchema },
@@ -110,12 +120,12 @@ adminUserRoutes.post(
 
 adminUserRoutes.post(
   "/users/:userId/deactivate",
-  { allow: canManageUsers, params: userParamsSchema },
+  { allow: canManageUsers, params: userParamsSchema, response: adminUserDtoSchema },
   (req, _res, { params }) => setUserActive(req.user!, params.userId, false),
 );
 
 adminUserRoutes.post(
   "/users/:userId/reactivate",
-  { allow: canManageUsers, params: userParamsSchema },
+  { allow: canManageUsers, params: userParamsSchema, response: adminUserDtoSchema },
   (req, _res, { params }) => setUserActive(req.user!, params.userId, true),
 );

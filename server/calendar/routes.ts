@@ -1,4 +1,9 @@
 import { z } from "zod";
+import {
+  calendarFeedStatusDtoSchema,
+  createdCalendarFeedDtoSchema,
+  stoppedCalendarFeedDtoSchema,
+} from "../../shared/calendar/schemas.ts";
 import { publicUrl } from "../config.ts";
 import { appConfig } from "../http/app-locals.ts";
 import { notFound } from "../http/app-error.ts";
@@ -13,17 +18,26 @@ const canManageCalendarFeed = requireRole("provider_admin", "buyer");
 
 const feedUrl = (base: string, secret: string) => new URL(`/api/calendar/${secret}.ics`, base).toString();
 
-calendarRoutes.get("/calendar-feed", { allow: canManageCalendarFeed }, (req) =>
-  calendarFeedStatus(req.user!),
+calendarRoutes.get(
+  "/calendar-feed",
+  { allow: canManageCalendarFeed, response: calendarFeedStatusDtoSchema },
+  (req) => calendarFeedStatus(req.user!),
 );
 
-calendarRoutes.post("/calendar-feed", { allow: canManageCalendarFeed }, async (req, res) => {
-  const { secret } = await rotateCalendarFeed(req.user!);
-  res.status(201).json({ active: true, url: feedUrl(publicUrl(appConfig(req)), secret) });
-});
+calendarRoutes.post(
+  "/calendar-feed",
+  { allow: canManageCalendarFeed, response: createdCalendarFeedDtoSchema },
+  async (req, res) => {
+    const { secret } = await rotateCalendarFeed(req.user!);
+    res.status(201);
+    return { active: true as const, url: feedUrl(publicUrl(appConfig(req)), secret) };
+  },
+);
 
-calendarRoutes.delete("/calendar-feed", { allow: canManageCalendarFeed }, (req) =>
-  stopCalendarFeed(req.user!),
+calendarRoutes.delete(
+  "/calendar-feed",
+  { allow: canManageCalendarFeed, response: stoppedCalendarFeedDtoSchema },
+  (req) => stopCalendarFeed(req.user!),
 );
 
 // Calendar programs fetch without cookies, so the unguessable secret in the address is the only key.

@@ -1,4 +1,5 @@
 import { credentialTypeByCode, type CredentialTypeDefinition } from "../../shared/credentials/catalogue.ts";
+import type { CredentialTypeDto } from "../../shared/credentials/credential-shapes.ts";
 import { AppError } from "../http/app-error.ts";
 import { CredentialType } from "./model.ts";
 import { recordAudit } from "../audit/index.ts";
@@ -30,6 +31,11 @@ export async function activeType(code: string, path = "body.typeCode"): Promise<
   return type;
 }
 
+function toCredentialTypeDto(r: CredentialType): CredentialTypeDto {
+  // Cautions are not admin-editable: they come from the code's catalog so each caution is written once.
+  return { ...toDefinition(r), caution: credentialTypeByCode.get(r.code)?.caution ?? null, active: r.active };
+}
+
 export async function listCredentialTypes() {
   const rows = await CredentialType.findAll({
     order: [
@@ -37,12 +43,7 @@ export async function listCredentialTypes() {
       ["name", "ASC"],
     ],
   });
-  // Cautions are not admin-editable: they come from the code's catalog so each caution is written once.
-  return rows.map((r) => ({
-    ...toDefinition(r),
-    caution: credentialTypeByCode.get(r.code)?.caution ?? null,
-    active: r.active,
-  }));
+  return rows.map(toCredentialTypeDto);
 }
 
 export async function editCredentialType(
@@ -75,5 +76,5 @@ export async function editCredentialType(
     before,
     after: type.toJSON(),
   });
-  return { ...toDefinition(type), active: type.active };
+  return toCredentialTypeDto(type);
 }

@@ -1,4 +1,4 @@
-import type { CredentialDto } from "../../shared/credentials/schemas.ts";
+import type { CredentialDto } from "../../shared/credentials/credential-shapes.ts";
 import { awaitsHolder, type FollowUpCandidate } from "../../shared/credentials/credential-kind.ts";
 import { Credential, CredentialType, Document } from "./model.ts";
 import { Company, Technician } from "../db/models.ts";

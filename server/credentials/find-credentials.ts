@@ -12,7 +12,13 @@ import type { Evidence } from "../../shared/credentials/locate-values.ts";
 import { workStatesOf } from "./work-states.ts";
 import { fieldsForBuyers } from "../../shared/credentials/fields-for-buyers.ts";
 import { Company, Technician, User } from "../db/models.ts";
-import { previousVerifiedVersion, type PreviousVersionDto } from "./previous-version.ts";
+import { previousVerifiedVersion } from "./previous-version.ts";
+import type {
+  CredentialDetailDto,
+  PreviousVersionDto,
+  QueuePageDto,
+  ReviewerWarningDto,
+} from "../../shared/credentials/credential-shapes.ts";
 
 /** The caller's credentials: the shared read scope narrowed by the filters, never widened by them. */
 export async function listOwnCredentials(
@@ -33,7 +39,7 @@ export async function listOwnCredentials(
 }
 
 /** One credential with its audit trail; reviewers also get the warnings computed beside the fields. */
-export async function findCredential(user: Express.User, id: number) {
+export async function findCredential(user: Express.User, id: number): Promise<CredentialDetailDto> {
   const row = await Credential.findByPk(id);
   if (!row) throw new AppError("not_found", "That credential was not found");
   const dto = await toCredentialDto(row);
@@ -55,7 +61,7 @@ export async function findCredential(user: Express.User, id: number) {
     attributes: ["id", "name"],
   });
   const actorName = new Map(actors.map((a) => [a.id, a.name]));
-  let warnings: { code: string; message: string }[] = [];
+  let warnings: ReviewerWarningDto[] = [];
   let evidence: Evidence = {};
   let previousVersion: PreviousVersionDto | null = null;
   if (user.role === "reviewer" || user.role === "admin") {
@@ -125,7 +131,7 @@ const SORT_SQL: Record<QueueQuery["sort"], string> = {
 };
 
 /** The reviewers' queue: submitted credentials, filtered, sorted and paged in SQL (oldest first by default). */
-export async function findQueue(q: QueueQuery, now = new Date()) {
+export async function findQueue(q: QueueQuery, now = new Date()): Promise<QueuePageDto> {
   const where = ["c.state = 'submitted'"];
   const replacements: Record<string, unknown> = { now, limit: q.pageSize, offset: (q.page - 1) * q.pageSize };
   if (q.typeCode) {
@@ -166,7 +172,7 @@ export async function findQueue(q: QueueQuery, now = new Date()) {
       ORDER BY page.position`,
     { replacements, type: QueryTypes.SELECT },
   );
-  const rows = found.filter((r) => r.id !== null);
+  const rows = found.filter((r): r is (typeof found)[number] & { id: number } => r.id !== null);
   const totals = found.slice(0, 1);
   return {
     rows: rows.map((r) => ({

@@ -1,14 +1,8 @@
 import { Op } from "sequelize";
-import { compareCredentialFields, type FieldChange } from "../../shared/credentials/compare-versions.ts";
+import { compareCredentialFields } from "../../shared/credentials/compare-versions.ts";
+import type { PreviousVersionDto } from "../../shared/credentials/credential-shapes.ts";
 import { Credential } from "./model.ts";
 import { sameCredentialScope } from "./same-credential-scope.ts";
-
-export interface PreviousVersionDto {
-  id: number;
-  state: "verified" | "superseded" | "lapsed";
-  decidedAt: string | null;
-  changes: FieldChange[];
-}
 
 /**
  * The version the reviewer measures this one against: the latest verified version of the same policy or card submitted

@@ -13,6 +13,12 @@ import {
   uploadDocumentSchema,
   verifyCredentialSchema,
 } from "../../shared/credentials/schemas.ts";
+import {
+  credentialDetailDtoSchema,
+  credentialDtoSchema,
+  credentialTypeDtoSchema,
+  queuePageDtoSchema,
+} from "../../shared/credentials/credential-shapes.ts";
 import { createRoutes } from "../http/route.ts";
 import { singleFileUpload } from "../http/upload.ts";
 import { linkBase } from "../http/app-locals.ts";
@@ -38,11 +44,20 @@ import { sendDocumentFile, sendPdfPage } from "./download-document.ts";
 
 export const credentialRoutes = createRoutes("/api");
 
-credentialRoutes.get("/credential-types", { allow: canReadCatalogue }, () => listCredentialTypes());
+credentialRoutes.get(
+  "/credential-types",
+  { allow: canReadCatalogue, response: z.array(credentialTypeDtoSchema) },
+  () => listCredentialTypes(),
+);
 
 credentialRoutes.patch(
   "/admin/credential-types/:code",
-  { allow: canEditCatalogue, params: credentialTypeParamsSchema, body: editCredentialTypeSchema },
+  {
+    allow: canEditCatalogue,
+    params: credentialTypeParamsSchema,
+    body: editCredentialTypeSchema,
+    response: credentialTypeDtoSchema,
+  },
   (req, _res, { params, body }) => editCredentialType(req.user!, params.code, body),
 );
 
@@ -93,19 +108,24 @@ credentialRoutes.post(
 
 credentialRoutes.get(
   "/credentials",
-  { allow: canListOwnCredentials, query: listCredentialsQuerySchema },
+  { allow: canListOwnCredentials, query: listCredentialsQuerySchema, response: z.array(credentialDtoSchema) },
   (req, _res, { query }) => listOwnCredentials(req.user!, query),
 );
 
 credentialRoutes.get(
   "/credentials/:credentialId",
-  { allow: canViewCredential, params: credentialParamsSchema },
+  { allow: canViewCredential, params: credentialParamsSchema, response: credentialDetailDtoSchema },
   (req, _res, { params }) => findCredential(req.user!, params.credentialId),
 );
 
 credentialRoutes.post(
   "/credentials/:credentialId/verify",
-  { allow: canReviewCredentials, params: credentialParamsSchema, body: verifyCredentialSchema },
+  {
+    allow: canReviewCredentials,
+    params: credentialParamsSchema,
+    body: verifyCredentialSchema,
+    response: credentialDtoSchema,
+  },
   async (req, _res, { params, body }) => {
     const dto = await verifyCredential(req.user!, params.credentialId, body, linkBase(req));
     kickOutbox(req.app.locals);
@@ -115,7 +135,12 @@ credentialRoutes.post(
 
 credentialRoutes.post(
   "/credentials/:credentialId/return",
-  { allow: canReviewCredentials, params: credentialParamsSchema, body: returnCredentialSchema },
+  {
+    allow: canReviewCredentials,
+    params: credentialParamsSchema,
+    body: returnCredentialSchema,
+    response: credentialDtoSchema,
+  },
   async (req, _res, { params, body }) => {
     const dto = await returnCredential(req.user!, params.credentialId, body.reason, linkBase(req));
     kickOutbox(req.app.locals);
@@ -125,12 +150,17 @@ credentialRoutes.post(
 
 credentialRoutes.patch(
   "/credentials/:credentialId/fields",
-  { allow: canReviewCredentials, params: credentialParamsSchema, body: editCredentialFieldsSchema },
+  {
+    allow: canReviewCredentials,
+    params: credentialParamsSchema,
+    body: editCredentialFieldsSchema,
+    response: credentialDtoSchema,
+  },
   (req, _res, { params, body }) => editCredentialFields(req.user!, params.credentialId, body.fields),
 );
 
 credentialRoutes.get(
   "/review/queue",
-  { allow: canReviewCredentials, query: queueQuerySchema },
+  { allow: canReviewCredentials, query: queueQuerySchema, response: queuePageDtoSchema },
   (_req, _res, { query }) => findQueue(query),
 );

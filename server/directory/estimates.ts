@@ -5,7 +5,7 @@ import {
   estimateDriveHours,
   estimateRoadMiles,
 } from "../../shared/directory/drive-time.ts";
-import type { DirectoryAssumptionsDto } from "../../shared/directory/schemas.ts";
+import type { DirectoryAssumptionsDto } from "../../shared/directory/directory-shapes.ts";
 import { EARTH_MEAN_RADIUS_KM, kmToMiles } from "../../shared/geo/great-circle-distance.ts";
 import { DEFAULT_PRIOR, rankingScore } from "../../shared/ranking/rating-score.ts";
 

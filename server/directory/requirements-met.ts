@@ -1,5 +1,5 @@
 import { QueryTypes } from "sequelize";
-import type { RequirementMetDto } from "../../shared/directory/schemas.ts";
+import type { RequirementMetDto } from "../../shared/directory/directory-shapes.ts";
 import type { RequirementResult } from "../../shared/standing/standing-types.ts";
 import { db } from "../db/sequelize.ts";
 

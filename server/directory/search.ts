@@ -4,11 +4,10 @@ import { QueryTypes } from "sequelize";
 import {
   DEFAULT_RADIUS_MILES,
   type DirectoryFilterName,
-  type DirectoryPageDto,
   type DirectoryQuery,
-  type DirectoryRowDto,
   type DirectorySort,
 } from "../../shared/directory/schemas.ts";
+import type { DirectoryPageDto, DirectoryRowDto } from "../../shared/directory/directory-shapes.ts";
 import { milesToKm } from "../../shared/geo/units.ts";
 import { DEFAULT_PRIOR } from "../../shared/ranking/rating-score.ts";
 import { db } from "../db/sequelize.ts";
@@ -26,7 +25,7 @@ import {
 } from "./search-filters.ts";
 import { SqlParams } from "./sql-params.ts";
 import { storedScoreIsCurrent } from "./stored-score.ts";
-import type { JudgedAgainstDto } from "../../shared/directory/schemas.ts";
+import type { JudgedAgainstDto } from "../../shared/directory/directory-shapes.ts";
 import { loadRequirementsMet } from "./requirements-met.ts";
 
 interface DirectoryRow {

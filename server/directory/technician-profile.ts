@@ -1,11 +1,11 @@
 import { QueryTypes } from "sequelize";
-import {
-  CERTIFICATE_CAUTION,
-  type DirectoryTechnicianDto,
-  type ProfileCredentialDto,
-  type ProfileReviewDto,
-  type ProfileStandingDto,
-} from "../../shared/directory/schemas.ts";
+import { CERTIFICATE_CAUTION } from "../../shared/directory/schemas.ts";
+import type {
+  DirectoryTechnicianDto,
+  ProfileCredentialDto,
+  ProfileReviewDto,
+  ProfileStandingDto,
+} from "../../shared/directory/directory-shapes.ts";
 import { greatCircleDistanceKm } from "../../shared/geo/great-circle-distance.ts";
 import type { Requirement } from "../../shared/standing/requirements.ts";
 import type { RequirementResult, Standing } from "../../shared/standing/standing-types.ts";

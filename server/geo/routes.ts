@@ -1,5 +1,4 @@
-import type { ZipPlaceDto } from "../../shared/geo/schemas.ts";
-import { zipParams } from "../../shared/geo/schemas.ts";
+import { zipParams, zipPlaceDtoSchema } from "../../shared/geo/schemas.ts";
 import { abuseLimit } from "../accounts/abuse-limits.ts";
 import { placeOfCompany } from "../companies/address.ts";
 import { createRoutes } from "../http/route.ts";
@@ -10,8 +9,8 @@ export const geoRoutes = createRoutes("/api");
 // Public, for the sign-up form: the same ZIP -> zone rule the account is created with, so what it shows is what it gets.
 geoRoutes.get(
   "/geo/zip/:zip",
-  { allow: anyone, before: [abuseLimit("zipLookup")], params: zipParams },
-  (_req, _res, { params }): ZipPlaceDto => {
+  { allow: anyone, before: [abuseLimit("zipLookup")], params: zipParams, response: zipPlaceDtoSchema },
+  (_req, _res, { params }) => {
     const place = placeOfCompany(params.zip, "params.zip");
     return { postalCode: place.postalCode, city: place.city, state: place.state, timeZone: place.timeZone };
   },

@@ -1,4 +1,5 @@
 import { QueryTypes } from "sequelize";
+import { livenessDtoSchema, readinessDtoSchema, type ReadinessDto } from "../../shared/health/schemas.ts";
 import { createRoutes } from "../http/route.ts";
 import { anyone } from "../http/policy.ts";
 import { primaryDb } from "../db/sequelize.ts";
@@ -27,23 +28,22 @@ async function databaseUp(): Promise<boolean> {
 
 // Readiness: a load balancer sends traffic only while this answers 200 (started, and the primary database answers).
 for (const path of ["/health", "/health/ready"]) {
-  healthRoutes.get(path, { allow: anyone }, async (req, res) => {
+  healthRoutes.get(path, { allow: anyone, response: readinessDtoSchema }, async (req, res) => {
     const starting = (req.app.locals.readiness as Readiness | undefined)?.starting ?? [];
     const [primaryUp, replica] = await Promise.all([databaseUp(), replicaHealth(DATABASE_CHECK_MS)]);
     const database = primaryUp ? "up" : "down";
     const status = starting.length ? "starting" : database === "up" ? "ok" : "degraded";
     // A replica that is down is reported but never fails readiness: its reads fall back to the primary.
-    const replicaPart = replica.replica === "none" ? {} : replica;
-    const body = starting.length
+    const replicaPart = replica.replica === "none" ? {} : { ...replica, replica: replica.replica };
+    const body: ReadinessDto = starting.length
       ? { status, database, ...replicaPart, starting }
       : { status, database, ...replicaPart };
-    if (status !== "ok") {
-      res.status(503).json(body);
-      return;
-    }
+    if (status !== "ok") res.status(503);
     return body;
   });
 }
 
 // Liveness: the process answers; restart it only when this fails (never because the database is down).
-healthRoutes.get("/health/live", { allow: anyone }, () => ({ status: "alive" }));
+healthRoutes.get("/health/live", { allow: anyone, response: livenessDtoSchema }, () => ({
+  status: "alive" as const,
+}));

@@ -1,3 +1,5 @@
+import { z } from "zod";
+import { caughtMailSchema } from "../../shared/accounts/schemas.ts";
 import { createRoutes } from "../http/route.ts";
 import { requireRole } from "../http/policy.ts";
 import { CaughtMail } from "./model.ts";
@@ -6,7 +8,7 @@ export const outboxRoutes = createRoutes("/api/admin");
 
 const canReadOutbox = requireRole("admin");
 
-outboxRoutes.get("/outbox", { allow: canReadOutbox }, async () => {
+outboxRoutes.get("/outbox", { allow: canReadOutbox, response: z.array(caughtMailSchema) }, async () => {
   const mails = await CaughtMail.findAll({ order: [["id", "DESC"]], limit: 200 });
   return mails.map((m) => ({
     id: m.id,

@@ -1,4 +1,9 @@
-import { listNotificationsQuerySchema, notificationParamsSchema } from "../../shared/notices/schemas.ts";
+import {
+  listNotificationsQuerySchema,
+  notificationDtoSchema,
+  notificationListDtoSchema,
+  notificationParamsSchema,
+} from "../../shared/notices/schemas.ts";
 import { signedIn } from "../http/policy.ts";
 import { createRoutes } from "../http/route.ts";
 import { listOwnNotifications, markAllNotificationsRead, markNotificationRead } from "./notifications.ts";
@@ -10,7 +15,11 @@ const canReadOwnNotifications = signedIn;
 
 noticeRoutes.get(
   "",
-  { allow: canReadOwnNotifications, query: listNotificationsQuerySchema },
+  {
+    allow: canReadOwnNotifications,
+    query: listNotificationsQuerySchema,
+    response: notificationListDtoSchema,
+  },
   (req, _res, { query }) => listOwnNotifications(req.user!, query.limit),
 );
 
@@ -20,6 +29,6 @@ noticeRoutes.post("/read-all", { allow: canReadOwnNotifications }, (req) =>
 
 noticeRoutes.post(
   "/:notificationId/read",
-  { allow: canReadOwnNotifications, params: notificationParamsSchema },
+  { allow: canReadOwnNotifications, params: notificationParamsSchema, response: notificationDtoSchema },
   (req, _res, { params }) => markNotificationRead(req.user!, params.notificationId),
 );

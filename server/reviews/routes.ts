@@ -1,10 +1,15 @@
+import { z } from "zod";
 import {
   excludeReviewSchema,
   replyToReviewSchema,
+  reportedReviewDtoSchema,
   reportReviewSchema,
+  reviewDtoSchema,
   reviewParamsSchema,
+  technicianReviewsDtoSchema,
   technicianReviewsParamsSchema,
   technicianReviewsQuerySchema,
+  workOrderReviewDtoSchema,
   writeReviewSchema,
 } from "../../shared/reviews/schemas.ts";
 import { workOrderParamsSchema } from "../../shared/work-orders/schemas.ts";
@@ -34,33 +39,47 @@ reviewRoutes.post(
 
 reviewRoutes.get(
   "/work-orders/:workOrderId/review",
-  { allow: canReadWorkOrderReview, params: workOrderParamsSchema },
+  { allow: canReadWorkOrderReview, params: workOrderParamsSchema, response: workOrderReviewDtoSchema },
   (_req, _res, { params }) => findWorkOrderReview(params.workOrderId),
 );
 
 reviewRoutes.post(
   "/reviews/:reviewId/reply",
-  { allow: canReplyToReview, params: reviewParamsSchema, body: replyToReviewSchema },
+  {
+    allow: canReplyToReview,
+    params: reviewParamsSchema,
+    body: replyToReviewSchema,
+    response: reviewDtoSchema,
+  },
   (req, _res, { params, body }) => replyToReview(req.user!, params.reviewId, body.body),
 );
 
 reviewRoutes.post(
   "/reviews/:reviewId/report",
-  { allow: canReportReview, params: reviewParamsSchema, body: reportReviewSchema },
+  { allow: canReportReview, params: reviewParamsSchema, body: reportReviewSchema, response: reviewDtoSchema },
   (req, _res, { params, body }) => reportReview(req.user!, params.reviewId, body.reason),
 );
 
-reviewRoutes.get("/admin/reviews/reported", { allow: canModerateReviews }, () => listReportedReviews());
+reviewRoutes.get(
+  "/admin/reviews/reported",
+  { allow: canModerateReviews, response: z.array(reportedReviewDtoSchema) },
+  () => listReportedReviews(),
+);
 
 reviewRoutes.post(
   "/admin/reviews/:reviewId/exclude",
-  { allow: canModerateReviews, params: reviewParamsSchema, body: excludeReviewSchema },
+  {
+    allow: canModerateReviews,
+    params: reviewParamsSchema,
+    body: excludeReviewSchema,
+    response: reportedReviewDtoSchema,
+  },
   (req, _res, { params, body }) => excludeReviewFromScore(req.user!, params.reviewId, body.reason),
 );
 
 reviewRoutes.post(
   "/admin/reviews/:reviewId/keep",
-  { allow: canModerateReviews, params: reviewParamsSchema },
+  { allow: canModerateReviews, params: reviewParamsSchema, response: reportedReviewDtoSchema },
   (req, _res, { params }) => keepReportedReview(req.user!, params.reviewId),
 );
 
@@ -70,6 +89,7 @@ reviewRoutes.get(
     allow: canReadTechnicianReviews,
     params: technicianReviewsParamsSchema,
     query: technicianReviewsQuerySchema,
+    response: technicianReviewsDtoSchema,
   },
   (_req, _res, { params, query }) => listTechnicianReviews(params.technicianId, query),
 );

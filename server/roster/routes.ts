@@ -1,4 +1,9 @@
-import { addRosterEntrySchema, rosterEntryParamsSchema } from "../../shared/roster/schemas.ts";
+import { z } from "zod";
+import {
+  addRosterEntrySchema,
+  rosterEntryDtoSchema,
+  rosterEntryParamsSchema,
+} from "../../shared/roster/schemas.ts";
 import { createRoutes } from "../http/route.ts";
 import { rosterToCsv } from "./csv-export.ts";
 import { canKeepRoster, canRemoveRosterEntry } from "./policy.ts";
@@ -6,7 +11,9 @@ import { addToRoster, listRoster, removeFromRoster } from "./service.ts";
 
 export const rosterRoutes = createRoutes("/api/roster");
 
-rosterRoutes.get("", { allow: canKeepRoster }, (req) => listRoster(req.user!.companyId));
+rosterRoutes.get("", { allow: canKeepRoster, response: z.array(rosterEntryDtoSchema) }, (req) =>
+  listRoster(req.user!.companyId),
+);
 
 rosterRoutes.get("/export.csv", { allow: canKeepRoster }, async (req, res) => {
   const csv = rosterToCsv(await listRoster(req.user!.companyId));

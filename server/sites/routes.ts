@@ -6,6 +6,7 @@ import {
   siteInputSchema,
   siteParamsSchema,
 } from "../../shared/sites/schemas.ts";
+import { postalPlaceDtoSchema } from "../../shared/geo/schemas.ts";
 import { createRoutes } from "../http/route.ts";
 import {
   canAddSite,
@@ -87,6 +88,6 @@ export const postalCodeRoutes = createRoutes("/api/postal-codes");
 
 postalCodeRoutes.get(
   "/:code",
-  { allow: canLookUpPostalCode, params: postalCodeParamsSchema },
+  { allow: canLookUpPostalCode, params: postalCodeParamsSchema, response: postalPlaceDtoSchema },
   (_req, _res, { params }) => findPostalPlace(params.code),
 );

@@ -1,5 +1,10 @@
 import { z } from "zod";
-import { technicianInputSchema, technicianParamsSchema } from "../../shared/technicians/schemas.ts";
+import {
+  technicianDtoSchema,
+  technicianInputSchema,
+  technicianParamsSchema,
+  technicianViewDtoSchema,
+} from "../../shared/technicians/schemas.ts";
 import { emailSchema } from "../../shared/accounts/schemas.ts";
 import { createRoutes } from "../http/route.ts";
 import { linkBase } from "../http/app-locals.ts";
@@ -25,7 +30,7 @@ import {
 
 export const technicianRoutes = createRoutes("/api/technicians");
 
-technicianRoutes.get("", { allow: canListOwnTechnicians }, (req) =>
+technicianRoutes.get("", { allow: canListOwnTechnicians, response: z.array(technicianDtoSchema) }, (req) =>
   listCompanyTechnicians(req.user!.companyId),
 );
 
@@ -61,25 +66,30 @@ technicianRoutes.post(
 
 technicianRoutes.get(
   "/:technicianId",
-  { allow: canViewTechnician, params: technicianParamsSchema },
+  { allow: canViewTechnician, params: technicianParamsSchema, response: technicianViewDtoSchema },
   (req, _res, { params }) => findTechnicianFor(req.user!, params.technicianId),
 );
 
 technicianRoutes.put(
   "/:technicianId",
-  { allow: canEditTechnician, params: technicianParamsSchema, body: technicianInputSchema },
+  {
+    allow: canEditTechnician,
+    params: technicianParamsSchema,
+    body: technicianInputSchema,
+    response: technicianDtoSchema,
+  },
   (req, _res, { params, body }) => editTechnician(req.user!, params.technicianId, body),
 );
 
 technicianRoutes.post(
   "/:technicianId/deactivate",
-  { allow: canEditTechnician, params: technicianParamsSchema },
+  { allow: canEditTechnician, params: technicianParamsSchema, response: technicianDtoSchema },
   (req, _res, { params }) => setTechnicianActive(req.user!, params.technicianId, false),
 );
 
 technicianRoutes.post(
   "/:technicianId/reactivate",
-  { allow: canEditTechnician, params: technicianParamsSchema },
+  { allow: canEditTechnician, params: technicianParamsSchema, response: technicianDtoSchema },
   (req, _res, { params }) => setTechnicianActive(req.user!, params.technicianId, true),
 );
 

@@ -1,4 +1,4 @@
-import type { TechnicianInput } from "../../shared/technicians/schemas.ts";
+import type { TechnicianInput, TechnicianViewDto } from "../../shared/technicians/schemas.ts";
 import { AppError } from "../http/app-error.ts";
 import { db } from "../db/sequelize.ts";
 import { recordAudit } from "../audit/index.ts";
@@ -50,7 +50,8 @@ export async function findTechnician(id: number) {
 export async function findTechnicianFor(user: Express.User, id: number) {
   const level = await viewLevelOf(user, id);
   if (level === "none") throw new AppError("not_found", "That technician was not found");
-  return pickTechnicianFields(await findTechnician(id), level);
+  // The pick keeps exactly the level's fields, which is what each member of the view schema lists.
+  return pickTechnicianFields(await findTechnician(id), level) as TechnicianViewDto;
 }
 
 export async function addTechnician(actor: Express.User, input: TechnicianInput) {

@@ -72,17 +72,18 @@ export const companyAddressSchema = z.object({
 });
 export type CompanyAddress = z.infer<typeof companyAddressSchema>;
 
-export interface CompanyProfileDto {
-  id: number;
-  name: string;
-  kind: CompanyKind;
-  addressLine: string | null;
-  postalCode: string | null;
-  city: string | null;
-  state: string | null;
+export const companyProfileDtoSchema = z.object({
+  id: z.number(),
+  name: z.string(),
+  kind: z.enum(companyKinds),
+  addressLine: z.string().nullable(),
+  postalCode: z.string().nullable(),
+  city: z.string().nullable(),
+  state: z.string().nullable(),
   /** Derived from the ZIP code; shown, never chosen. */
-  timeZone: string;
-}
+  timeZone: z.string(),
+});
+export type CompanyProfileDto = z.infer<typeof companyProfileDtoSchema>;
 
 export const requestPasswordResetSchema = z.object({ email: emailSchema });
 export type RequestPasswordReset = z.infer<typeof requestPasswordResetSchema>;
@@ -109,25 +110,27 @@ export const userParamsSchema = z.object({
 export const userStatuses = ["invited", "active", "deactivated"] as const;
 export type UserStatus = (typeof userStatuses)[number];
 
-export interface AdminUserDto {
-  id: number;
-  email: string;
-  name: string;
-  role: Role;
-  companyId: number;
-  companyName: string;
-  status: UserStatus;
-}
+export const adminUserDtoSchema = z.object({
+  id: z.number(),
+  email: z.string(),
+  name: z.string(),
+  role: roleSchema,
+  companyId: z.number(),
+  companyName: z.string(),
+  status: z.enum(userStatuses),
+});
+export type AdminUserDto = z.infer<typeof adminUserDtoSchema>;
 
-export interface AdminCompanyDto {
-  id: number;
-  name: string;
-  kind: CompanyKind;
-  createdAt: string;
-  users: number;
-  technicians: number;
-  sites: number;
-}
+export const adminCompanyDtoSchema = z.object({
+  id: z.number(),
+  name: z.string(),
+  kind: z.enum(companyKinds),
+  createdAt: z.string(),
+  users: z.number(),
+  technicians: z.number(),
+  sites: z.number(),
+});
+export type AdminCompanyDto = z.infer<typeof adminCompanyDtoSchema>;
 
 export const currentUserSchema = z.object({
   id: z.number(),

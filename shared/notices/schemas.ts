@@ -9,17 +9,20 @@ export const listNotificationsQuerySchema = z.object({
 
 export const notificationKinds = ["credential_lapsing", "credential_lapsed"] as const;
 
-export interface NotificationDto {
-  id: number;
-  kind: string;
-  title: string;
-  body: string;
-  link: string | null;
-  readAt: string | null;
-  createdAt: string;
-}
+export const notificationDtoSchema = z.object({
+  id: z.number(),
+  // Jobs and several domains write notifications (lapses, transfers, failed jobs...), so the kind stays open text.
+  kind: z.string(),
+  title: z.string(),
+  body: z.string(),
+  link: z.string().nullable(),
+  readAt: z.string().nullable(),
+  createdAt: z.string(),
+});
+export type NotificationDto = z.infer<typeof notificationDtoSchema>;
 
-export interface NotificationListDto {
-  unreadCount: number;
-  notifications: NotificationDto[];
-}
+export const notificationListDtoSchema = z.object({
+  unreadCount: z.number(),
+  notifications: z.array(notificationDtoSchema),
+});
+export type NotificationListDto = z.infer<typeof notificationListDtoSchema>;

@@ -1,9 +1,10 @@
-import type { SelfRatingSignal } from "./self-rating.ts";
 import { z } from "zod";
 import { multiLineText } from "../api/text.ts";
+import { fieldMask } from "../api/field-mask.ts";
 import { idParam } from "../credentials/schemas.ts";
-import type { ProfileReviewDto } from "../directory/schemas.ts";
-import type { PUBLIC_REVIEW_FIELDS } from "../visibility/technician-visibility.ts";
+import { profileReviewDtoSchema } from "../directory/directory-shapes.ts";
+import { PUBLIC_REVIEW_FIELDS } from "../visibility/technician-visibility.ts";
+import { selfRatingSignalKinds } from "./self-rating.ts";
 
 export const reviewParamsSchema = z.object({ reviewId: idParam });
 export const technicianReviewsParamsSchema = z.object({ technicianId: idParam });
@@ -39,38 +40,48 @@ export const technicianReviewsQuerySchema = z.object({
   before: idParam.optional(),
 });
 
-export interface ReviewDto {
-  id: number;
-  workOrderId: number;
-  technicianId: number;
-  shopName: string;
-  authorName: string;
-  stars: number;
-  body: string;
-  reply: string | null;
-  repliedAt: string | null;
-  reported: boolean;
-  createdAt: string;
-}
+// Response shapes: the server's DTO types are inferred from these and the client parses its answers with them.
+
+/** A review as the parties to the job read it. */
+export const reviewDtoSchema = z.object({
+  id: z.number(),
+  workOrderId: z.number(),
+  technicianId: z.number(),
+  shopName: z.string(),
+  authorName: z.string(),
+  stars: z.number(),
+  body: z.string(),
+  reply: z.string().nullable(),
+  repliedAt: z.string().nullable(),
+  reported: z.boolean(),
+  createdAt: z.string(),
+});
+export type ReviewDto = z.infer<typeof reviewDtoSchema>;
+
+/** The job's review, or null before the shop has written one. */
+export const workOrderReviewDtoSchema = z.object({ review: reviewDtoSchema.nullable() });
 
 /** What anyone outside the job reads of a review: the fields PUBLIC_REVIEW_FIELDS names in the shared visibility rule. */
-export type PublicReviewDto = Pick<ProfileReviewDto, (typeof PUBLIC_REVIEW_FIELDS)[number]>;
+export const publicReviewDtoSchema = profileReviewDtoSchema.pick(fieldMask(PUBLIC_REVIEW_FIELDS));
+export type PublicReviewDto = z.infer<typeof publicReviewDtoSchema>;
 
-export interface TechnicianReviewsDto {
+export const technicianReviewsDtoSchema = z.object({
   /** Mean stars, null when there are none; always shown with its count. */
-  average: number | null;
-  count: number;
-  items: PublicReviewDto[];
-}
+  average: z.number().nullable(),
+  count: z.number(),
+  items: z.array(publicReviewDtoSchema),
+});
+export type TechnicianReviewsDto = z.infer<typeof technicianReviewsDtoSchema>;
 
 /** A review the admin should look at: reported by a party, or flagged as possible self-rating, or both. */
-export interface ReportedReviewDto extends ReviewDto {
-  reportedAt: string | null;
-  selfRatingSignals: SelfRatingSignal[];
-  excluded: { at: string; reason: string; by: string } | null;
+export const reportedReviewDtoSchema = reviewDtoSchema.extend({
+  reportedAt: z.string().nullable(),
+  selfRatingSignals: z.array(z.enum(selfRatingSignalKinds)),
+  excluded: z.object({ at: z.string(), reason: z.string(), by: z.string() }).nullable(),
   /** An admin read the report and kept the review counted as it is. */
-  kept: { at: string; by: string } | null;
-  reportReason: string;
-  reportedBy: { id: number; name: string };
-  technicianName: string;
-}
+  kept: z.object({ at: z.string(), by: z.string() }).nullable(),
+  reportReason: z.string(),
+  reportedBy: z.object({ id: z.number(), name: z.string() }),
+  technicianName: z.string(),
+});
+export type ReportedReviewDto = z.infer<typeof reportedReviewDtoSchema>;

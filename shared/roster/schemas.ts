@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { idParam } from "../credentials/schemas.ts";
-import type { Standing } from "../standing/standing-types.ts";
+import { standings, type Standing } from "../standing/standing-types.ts";
 
 export const rosterEntryParamsSchema = z.object({ entryId: idParam });
 
@@ -19,29 +19,31 @@ export const ROSTER_LAPSE_ALERT_DAYS = 30;
 export const rosterAlertEvents = ["stopped_clearing", "lapse_within_30_days"] as const;
 export type RosterAlertEvent = (typeof rosterAlertEvents)[number];
 
-export interface RosterTechnicianDto {
-  technicianId: number;
-  name: string;
-  companyId: number;
-  companyName: string;
-  active: boolean;
+export const rosterTechnicianDtoSchema = z.object({
+  technicianId: z.number(),
+  name: z.string(),
+  companyId: z.number(),
+  companyName: z.string(),
+  active: z.boolean(),
   /** Stored baseline standing; null until the standing job has computed one. */
-  standing: Standing | null;
-  nextLapse: string | null;
-}
+  standing: z.enum(standings).nullable(),
+  nextLapse: z.string().nullable(),
+});
+export type RosterTechnicianDto = z.infer<typeof rosterTechnicianDtoSchema>;
 
-export interface RosterEntryDto {
-  id: number;
-  kind: "technician" | "company";
-  technicianId: number | null;
-  serviceCompanyId: number | null;
+export const rosterEntryDtoSchema = z.object({
+  id: z.number(),
+  kind: z.enum(["technician", "company"]),
+  technicianId: z.number().nullable(),
+  serviceCompanyId: z.number().nullable(),
   /** The technician's or the company's name. */
-  name: string;
-  companyName: string;
-  addedAt: string;
+  name: z.string(),
+  companyName: z.string(),
+  addedAt: z.string(),
   /** One for a technician entry; every technician of the company for a company entry. */
-  technicians: RosterTechnicianDto[];
-}
+  technicians: z.array(rosterTechnicianDtoSchema),
+});
+export type RosterEntryDto = z.infer<typeof rosterEntryDtoSchema>;
 
 export const rosterCsvColumns = ["technician", "company", "standing", "next lapse", "added at"] as const;
 

@@ -1,6 +1,8 @@
 import { z } from "zod";
 import { singleLineText } from "../api/text.ts";
+import { fieldMask } from "../api/field-mask.ts";
 import { postalCodeSchema } from "../accounts/schemas.ts";
+import { TECHNICIAN_FIELDS_BY_LEVEL } from "../visibility/technician-visibility.ts";
 
 export const machineTechnologies = [
   "mill",
@@ -53,22 +55,34 @@ export const technicianParamsSchema = z.object({
   technicianId: z.coerce.number().int().positive().max(2_147_483_647),
 });
 
-export interface TechnicianDto {
-  id: number;
-  companyId: number;
-  companyName: string;
-  name: string;
-  email: string | null;
-  phone: string | null;
-  technologies: string[];
-  controlFamilies: string[];
-  postalCode: string;
-  latitude: number | null;
-  longitude: number | null;
-  serviceRadiusKm: number;
-  hourlyRateCents: number;
-  travelRateCents: number;
-  mileageRateCents: number;
-  active: boolean;
-  hasAccount: boolean;
-}
+export const technicianDtoSchema = z.object({
+  id: z.number(),
+  companyId: z.number(),
+  companyName: z.string(),
+  name: z.string(),
+  email: z.string().nullable(),
+  phone: z.string().nullable(),
+  technologies: z.array(z.string()),
+  controlFamilies: z.array(z.string()),
+  postalCode: z.string(),
+  latitude: z.number().nullable(),
+  longitude: z.number().nullable(),
+  serviceRadiusKm: z.number(),
+  hourlyRateCents: z.number(),
+  travelRateCents: z.number(),
+  mileageRateCents: z.number(),
+  active: z.boolean(),
+  hasAccount: z.boolean(),
+});
+export type TechnicianDto = z.infer<typeof technicianDtoSchema>;
+
+/**
+ * One technician as the caller may see them: exactly the fields of the caller's level by the shared visibility rule
+ * (the technician's own company and staff read them all, a shop only the directory or contact fields).
+ */
+export const technicianViewDtoSchema = z.union([
+  technicianDtoSchema.strict(),
+  technicianDtoSchema.pick(fieldMask(TECHNICIAN_FIELDS_BY_LEVEL.contact)).strict(),
+  technicianDtoSchema.pick(fieldMask(TECHNICIAN_FIELDS_BY_LEVEL.directory)).strict(),
+]);
+export type TechnicianViewDto = z.infer<typeof technicianViewDtoSchema>;

@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { buildTestApp, type TestApp } from "../../support/test-app.ts";
-import { buildProvider } from "../../support/build-provider.ts";
+import { buildProvider, signedInAgent } from "../../support/build-provider.ts";
+import { credentialTypeDtoSchema } from "../../../shared/credentials/credential-shapes.ts";
 
 let t: TestApp;
 beforeAll(() => {
@@ -26,5 +27,18 @@ describe("the caution that comes with each credential type", () => {
     expect(cautionOf("machine_rigging")).toMatch(/training only.*lift plan/);
     expect(cautionOf("general_liability")).toMatch(/information only/);
     expect(cautionOf("workers_comp_exemption")).toMatch(/only the persons it names/);
+  });
+
+  it("comes back with an admin's edit of the type, as the catalogue lists it", async () => {
+    const { agent: admin } = await signedInAgent(t.app, "platform", "admin");
+    const listed = (await admin.get("/api/credential-types").expect(200)).body as { code: string }[];
+
+    // Setting a type active that is active already changes nothing but answers the edited type.
+    const res = await admin.patch("/api/admin/credential-types/arc_flash").send({ active: true });
+
+    expect(res.status).toBe(200);
+    expect(credentialTypeDtoSchema.strict().parse(res.body)).toEqual(
+      listed.find((type) => type.code === "arc_flash"),
+    );
   });
 });

@@ -1,5 +1,5 @@
 import { expect } from "vitest";
-import type { DirectoryPageDto, DirectoryRowDto } from "../../../shared/directory/schemas.ts";
+import type { DirectoryPageDto, DirectoryRowDto } from "../../../shared/directory/directory-shapes.ts";
 import type { agentFor } from "../../support/test-app.ts";
 
 type TestAgent = ReturnType<typeof agentFor>;

@@ -16,7 +16,7 @@ import { SelectField } from "@/components/ui/select-field.tsx";
 import { TextAreaField } from "@/components/ui/text-area-field.tsx";
 import { TextField } from "@/components/ui/text-field.tsx";
 import { useRoster } from "@/features/roster/api/get-roster.ts";
-import type { RosterEntry } from "@/features/roster/api/roster-shapes.ts";
+import type { RosterEntryDto as RosterEntry } from "@shared/roster/schemas.ts";
 import { requirementSetsQuery } from "@/features/standing/api/get-requirement-sets.ts";
 import { useSiteEquipment } from "@/features/sites/api/get-site-equipment.ts";
 import { sitesQuery } from "@/features/sites/api/get-sites.ts";

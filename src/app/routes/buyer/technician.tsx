@@ -13,7 +13,10 @@ import {
   directoryTechnicianQuery,
   estimateInputsOf,
 } from "@/features/directory/api/get-directory-technician.ts";
-import type { DirectoryTechnician, ProfileStanding } from "@/features/directory/api/directory-shapes.ts";
+import type {
+  DirectoryTechnicianDto as DirectoryTechnician,
+  ProfileStandingDto as ProfileStanding,
+} from "@shared/directory/directory-shapes.ts";
 import { DirectoryStandingBadge } from "@/features/directory/components/directory-standing-badge.tsx";
 import { ProfileCredentials } from "@/features/directory/components/profile-credentials.tsx";
 import { ProfileReviews } from "@/features/directory/components/profile-reviews.tsx";

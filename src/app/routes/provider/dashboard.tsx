@@ -4,7 +4,7 @@ import { Link } from "react-router-dom";
 import { hrefs } from "@/config/paths.ts";
 import { buttonStyles } from "@/components/ui/button-styles.ts";
 import { PageHeader } from "@/components/ui/page-header.tsx";
-import type { Credential } from "@/features/credentials/api/credential-shapes.ts";
+import type { CredentialDto as Credential } from "@shared/credentials/credential-shapes.ts";
 import { credentialsQuery } from "@/features/credentials/api/get-credentials.ts";
 import { LapseTimelineChart } from "@/features/credentials/components/lapse-timeline-chart.tsx";
 import { byWeek } from "@/features/credentials/components/lapse-window.ts";

@@ -8,7 +8,7 @@ import { PageHeader } from "@/components/ui/page-header.tsx";
 import { StatusKey } from "@/components/ui/status-key.tsx";
 import { SelectField } from "@/components/ui/select-field.tsx";
 import { statusWord } from "@/components/ui/status-badge.tsx";
-import type { Credential } from "@/features/credentials/api/credential-shapes.ts";
+import type { CredentialDto as Credential } from "@shared/credentials/credential-shapes.ts";
 import { credentialsQuery } from "@/features/credentials/api/get-credentials.ts";
 import { CredentialsTable } from "@/features/credentials/components/credentials-table.tsx";
 import { BrokerPanel } from "@/features/credentials/components/broker-panel.tsx";

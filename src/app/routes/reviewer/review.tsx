@@ -5,7 +5,7 @@ import { idParam } from "@shared/credentials/schemas.ts";
 import { hrefs, paths } from "@/config/paths.ts";
 import { CautionNote } from "@/components/ui/caution-note.tsx";
 import { PageHeader } from "@/components/ui/page-header.tsx";
-import type { Credential } from "@/features/credentials/api/credential-shapes.ts";
+import type { CredentialDto as Credential } from "@shared/credentials/credential-shapes.ts";
 import { credentialQuery } from "@/features/credentials/api/get-credential.ts";
 import { credentialTypesQuery } from "@/features/credentials/api/get-credential-types.ts";
 import { getReviewQueue } from "@/features/credentials/api/get-review-queue.ts";

@@ -5,7 +5,7 @@ import { buttonStyles } from "@/components/ui/button-styles.ts";
 import { EmptyState } from "@/components/ui/empty-state.tsx";
 import { PageHeader } from "@/components/ui/page-header.tsx";
 import { StatusKey, technicianPageStatuses } from "@/components/ui/status-key.tsx";
-import type { Credential } from "@/features/credentials/api/credential-shapes.ts";
+import type { CredentialDto as Credential } from "@shared/credentials/credential-shapes.ts";
 import { credentialsQuery } from "@/features/credentials/api/get-credentials.ts";
 import { CredentialsTable } from "@/features/credentials/components/credentials-table.tsx";
 import { StandingSection } from "@/features/standing/components/standing-section.tsx";

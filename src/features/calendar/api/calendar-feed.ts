@@ -1,14 +1,14 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
-import { z } from "zod";
+import { calendarFeedStatusDtoSchema, createdCalendarFeedDtoSchema } from "@shared/calendar/schemas.ts";
 import { api } from "@/lib/api-client.ts";
-
-const statusSchema = z.object({ active: z.boolean(), createdAt: z.string().nullable() });
-const createdSchema = z.object({ active: z.literal(true), url: z.string() });
 
 export const calendarFeedKeys = { status: ["calendar-feed"] as const };
 
 export const calendarFeedQuery = () =>
-  queryOptions({ queryKey: calendarFeedKeys.status, queryFn: () => api.get("/calendar-feed", statusSchema) });
+  queryOptions({
+    queryKey: calendarFeedKeys.status,
+    queryFn: () => api.get("/calendar-feed", calendarFeedStatusDtoSchema),
+  });
 
 export const useCalendarFeed = () => useQuery(calendarFeedQuery());
 
@@ -16,7 +16,7 @@ export const useCalendarFeed = () => useQuery(calendarFeedQuery());
 export function useRotateCalendarFeed() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: () => api.post("/calendar-feed", {}, createdSchema),
+    mutationFn: () => api.post("/calendar-feed", {}, createdCalendarFeedDtoSchema),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: calendarFeedKeys.status }),
   });
 }

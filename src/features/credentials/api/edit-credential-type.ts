@@ -3,12 +3,12 @@ import type { z } from "zod";
 import type { editCredentialTypeSchema } from "@shared/credentials/schemas.ts";
 import { api } from "@/lib/api-client.ts";
 import { credentialKeys } from "./credential-keys.ts";
-import { credentialTypeSchema } from "./credential-shapes.ts";
+import { credentialTypeDtoSchema } from "@shared/credentials/credential-shapes.ts";
 
 export type EditCredentialTypeInput = z.infer<typeof editCredentialTypeSchema> & { code: string };
 
 export const editCredentialType = ({ code, ...changes }: EditCredentialTypeInput) =>
-  api.patch(`/admin/credential-types/${encodeURIComponent(code)}`, changes, credentialTypeSchema);
+  api.patch(`/admin/credential-types/${encodeURIComponent(code)}`, changes, credentialTypeDtoSchema);
 
 export function useEditCredentialType() {
   const queryClient = useQueryClient();

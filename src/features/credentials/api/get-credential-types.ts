@@ -2,9 +2,9 @@ import { queryOptions, useQuery } from "@tanstack/react-query";
 import { z } from "zod";
 import { api } from "@/lib/api-client.ts";
 import { credentialKeys } from "./credential-keys.ts";
-import { credentialTypeSchema } from "./credential-shapes.ts";
+import { credentialTypeDtoSchema } from "@shared/credentials/credential-shapes.ts";
 
-export const getCredentialTypes = () => api.get("/credential-types", z.array(credentialTypeSchema));
+export const getCredentialTypes = () => api.get("/credential-types", z.array(credentialTypeDtoSchema));
 
 // The catalogue changes only when an admin edits it.
 export const credentialTypesQuery = () =>

@@ -2,7 +2,7 @@ import { queryOptions, useQuery } from "@tanstack/react-query";
 import { z } from "zod";
 import { api } from "@/lib/api-client.ts";
 import { credentialKeys, type CredentialFilters } from "./credential-keys.ts";
-import { credentialSchema } from "./credential-shapes.ts";
+import { credentialDtoSchema } from "@shared/credentials/credential-shapes.ts";
 
 export function getCredentials(filters: CredentialFilters = {}) {
   const query = new URLSearchParams();
@@ -10,7 +10,7 @@ export function getCredentials(filters: CredentialFilters = {}) {
   if (filters.state) query.set("state", filters.state);
   if (filters.holder) query.set("holder", filters.holder);
   const search = query.toString();
-  return api.get(`/credentials${search ? `?${search}` : ""}`, z.array(credentialSchema));
+  return api.get(`/credentials${search ? `?${search}` : ""}`, z.array(credentialDtoSchema));
 }
 
 export const credentialsQuery = (filters: CredentialFilters = {}) =>

@@ -2,7 +2,7 @@ import { keepPreviousData, queryOptions, useQuery } from "@tanstack/react-query"
 import type { QueueQuery } from "@shared/credentials/schemas.ts";
 import { api } from "@/lib/api-client.ts";
 import { credentialKeys } from "./credential-keys.ts";
-import { queuePageSchema } from "./credential-shapes.ts";
+import { queuePageDtoSchema } from "@shared/credentials/credential-shapes.ts";
 
 export function getReviewQueue(query: Partial<QueueQuery>) {
   const search = new URLSearchParams();
@@ -10,7 +10,7 @@ export function getReviewQueue(query: Partial<QueueQuery>) {
     if (value !== undefined && value !== "") search.set(key, String(value));
   }
   const text = search.toString();
-  return api.get(`/review/queue${text ? `?${text}` : ""}`, queuePageSchema);
+  return api.get(`/review/queue${text ? `?${text}` : ""}`, queuePageDtoSchema);
 }
 
 export const reviewQueueQuery = (query: Partial<QueueQuery>) =>

@@ -2,12 +2,12 @@ import { useMutation, useQueryClient } from "@tanstack/react-query";
 import type { ReturnCredential } from "@shared/credentials/schemas.ts";
 import { api } from "@/lib/api-client.ts";
 import { credentialKeys } from "./credential-keys.ts";
-import { credentialSchema } from "./credential-shapes.ts";
+import { credentialDtoSchema } from "@shared/credentials/credential-shapes.ts";
 
 export type ReturnCredentialInput = ReturnCredential & { id: number };
 
 export const returnCredential = ({ id, reason }: ReturnCredentialInput) =>
-  api.post(`/credentials/${id}/return`, { reason }, credentialSchema);
+  api.post(`/credentials/${id}/return`, { reason }, credentialDtoSchema);
 
 export function useReturnCredential() {
   const queryClient = useQueryClient();

@@ -1,15 +1,12 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { z } from "zod";
 import type { SubmitCoverages } from "@shared/credentials/schemas.ts";
 import { api } from "@/lib/api-client.ts";
 import { credentialKeys } from "./credential-keys.ts";
-import { credentialSchema } from "./credential-shapes.ts";
-
-const submittedCoveragesSchema = z.object({ credentials: z.array(credentialSchema) });
+import { submittedCoveragesDtoSchema } from "@shared/credentials/credential-shapes.ts";
 
 /** Step 2 for a certificate of insurance: every confirmed coverage in one request, saved together or not at all. */
 export const submitCoverages = (input: SubmitCoverages) =>
-  api.post("/credentials/coverages", input, submittedCoveragesSchema);
+  api.post("/credentials/coverages", input, submittedCoveragesDtoSchema);
 
 export function useSubmitCoverages() {
   const queryClient = useQueryClient();

@@ -2,11 +2,11 @@ import { useMutation, useQueryClient } from "@tanstack/react-query";
 import type { SubmitCredential } from "@shared/credentials/schemas.ts";
 import { api } from "@/lib/api-client.ts";
 import { credentialKeys } from "./credential-keys.ts";
-import { credentialSchema } from "./credential-shapes.ts";
+import { credentialDtoSchema } from "@shared/credentials/credential-shapes.ts";
 
 /** Step 2 of the upload: the checked fields become a credential awaiting verification. */
 export const submitCredential = (input: SubmitCredential) =>
-  api.post("/credentials", input, credentialSchema);
+  api.post("/credentials", input, credentialDtoSchema);
 
 export function useSubmitCredential() {
   const queryClient = useQueryClient();

@@ -1,6 +1,6 @@
 import { useMutation } from "@tanstack/react-query";
 import { uploadWithProgress } from "@/lib/upload-with-progress.ts";
-import { uploadedDocumentSchema } from "./credential-shapes.ts";
+import { uploadedDocumentDtoSchema } from "@shared/credentials/credential-shapes.ts";
 
 export type UploadDocumentInput = {
   file: File;
@@ -15,7 +15,7 @@ export function uploadDocument({ file, typeCode, technicianId, onProgress }: Upl
   form.set("typeCode", typeCode);
   if (technicianId) form.set("technicianId", String(technicianId));
   form.set("file", file);
-  return uploadWithProgress({ path: "/documents", form, schema: uploadedDocumentSchema, onProgress });
+  return uploadWithProgress({ path: "/documents", form, schema: uploadedDocumentDtoSchema, onProgress });
 }
 
 export const useUploadDocument = () => useMutation({ mutationFn: uploadDocument });

@@ -1,12 +1,12 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { api } from "@/lib/api-client.ts";
 import { credentialKeys } from "./credential-keys.ts";
-import { credentialSchema } from "./credential-shapes.ts";
+import { credentialDtoSchema } from "@shared/credentials/credential-shapes.ts";
 
 export type VerifyCredentialInput = { id: number; fields?: Record<string, unknown> | undefined };
 
 export const verifyCredential = ({ id, fields }: VerifyCredentialInput) =>
-  api.post(`/credentials/${id}/verify`, fields ? { fields } : {}, credentialSchema);
+  api.post(`/credentials/${id}/verify`, fields ? { fields } : {}, credentialDtoSchema);
 
 export function useVerifyCredential() {
   const queryClient = useQueryClient();

@@ -1,5 +1,5 @@
 import { formatDateTime } from "@/lib/format-date-time.ts";
-import type { AuditEvent } from "../api/credential-shapes.ts";
+import type { AuditEventDto as AuditEvent } from "@shared/credentials/credential-shapes.ts";
 
 const actionWords: Record<string, string> = {
   "credential.submitted": "Submitted",

@@ -4,7 +4,7 @@ import { FormError } from "@/components/ui/form-error.tsx";
 import { SelectField } from "@/components/ui/select-field.tsx";
 import { TextField } from "@/components/ui/text-field.tsx";
 import { fieldErrorsOf } from "@/lib/field-errors.ts";
-import type { Credential } from "../api/credential-shapes.ts";
+import type { CredentialDto as Credential } from "@shared/credentials/credential-shapes.ts";
 import {
   useBrokerContacts,
   useBrokerRequests,

@@ -1,7 +1,7 @@
 import { useMemo } from "react";
 import { Button } from "@/components/ui/button.tsx";
 import { DataTable, dataTableColumns } from "@/components/ui/data-table.tsx";
-import type { CredentialType } from "../api/credential-shapes.ts";
+import type { CredentialTypeDto as CredentialType } from "@shared/credentials/credential-shapes.ts";
 import { categoryLabels } from "./credential-type-select.tsx";
 
 export const validityWords = (validity: CredentialType["validity"]): string =>

@@ -5,7 +5,11 @@ import { fieldErrorsOf } from "@/lib/field-errors.ts";
 import { Button } from "@/components/ui/button.tsx";
 import { FormError } from "@/components/ui/form-error.tsx";
 import { TextField } from "@/components/ui/text-field.tsx";
-import type { Credential, ProposedCoverage, UploadedDocument } from "../api/credential-shapes.ts";
+import type {
+  CredentialDto as Credential,
+  ProposedCoverageDto as ProposedCoverage,
+  UploadedDocumentDto as UploadedDocument,
+} from "@shared/credentials/credential-shapes.ts";
 import { useSubmitCoverages } from "../api/submit-coverages.ts";
 import { CredentialFieldsForm } from "./credential-fields-form.tsx";
 import { fieldDefinitionsFor } from "./field-definitions.ts";

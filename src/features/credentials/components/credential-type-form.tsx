@@ -5,7 +5,7 @@ import { FormError } from "@/components/ui/form-error.tsx";
 import { TextAreaField } from "@/components/ui/text-area-field.tsx";
 import { TextField } from "@/components/ui/text-field.tsx";
 import { fieldErrorsOf } from "@/lib/field-errors.ts";
-import type { CredentialType } from "../api/credential-shapes.ts";
+import type { CredentialTypeDto as CredentialType } from "@shared/credentials/credential-shapes.ts";
 import { useEditCredentialType } from "../api/edit-credential-type.ts";
 import { validityWords } from "./catalogue-table.tsx";
 

@@ -1,7 +1,7 @@
 import { useId } from "react";
 import type { CredentialCategory } from "@shared/credentials/catalogue.ts";
 import { fieldInputStyles } from "@/components/ui/field-styles.ts";
-import type { CredentialType } from "../api/credential-shapes.ts";
+import type { CredentialTypeDto as CredentialType } from "@shared/credentials/credential-shapes.ts";
 
 export const categoryLabels: Record<CredentialCategory, string> = {
   insurance: "Insurance",

@@ -6,7 +6,7 @@ import { EmptyState } from "@/components/ui/empty-state.tsx";
 import { StatusBadge } from "@/components/ui/status-badge.tsx";
 import { credentialTypeByCode } from "@shared/credentials/catalogue.ts";
 import { lapseWords, readerTimeZone } from "@shared/standing/lapse-words.ts";
-import type { Credential } from "../api/credential-shapes.ts";
+import type { CredentialDto as Credential } from "@shared/credentials/credential-shapes.ts";
 import { documentUrls } from "./document-urls.ts";
 
 type CredentialsTableProps = {

@@ -1,4 +1,4 @@
-import type { UploadedDocument } from "../api/credential-shapes.ts";
+import type { UploadedDocumentDto as UploadedDocument } from "@shared/credentials/credential-shapes.ts";
 
 /** Says how the fields were filled in, so the uploader knows how much to trust and what to type. */
 export function ExtractionNote({

@@ -1,5 +1,5 @@
 import { MS_PER_DAY } from "@shared/standing/warning-windows.ts";
-import type { Credential } from "../api/credential-shapes.ts";
+import type { CredentialDto as Credential } from "@shared/credentials/credential-shapes.ts";
 
 export type WeekBucket = { weekStart: string; label: string; count: number; names: string[] };
 

@@ -2,7 +2,7 @@ import { Link } from "react-router-dom";
 import { buttonStyles } from "@/components/ui/button-styles.ts";
 import { StatusBadge } from "@/components/ui/status-badge.tsx";
 import { formatDateTime } from "@/lib/format-date-time.ts";
-import type { Credential } from "../api/credential-shapes.ts";
+import type { CredentialDto as Credential } from "@shared/credentials/credential-shapes.ts";
 
 type LapsedListProps = { credentials: Credential[]; renewHref: (credential: Credential) => string };
 

@@ -5,7 +5,7 @@ import { EmptyState } from "@/components/ui/empty-state.tsx";
 import { StatusBadge } from "@/components/ui/status-badge.tsx";
 import { formatInstantDate } from "@/lib/format-date.ts";
 import { OFFICE_LOOK_AHEAD_DAYS, daysUntil } from "@shared/standing/warning-windows.ts";
-import type { Credential } from "../api/credential-shapes.ts";
+import type { CredentialDto as Credential } from "@shared/credentials/credential-shapes.ts";
 
 type LapsingTableProps = {
   credentials: Credential[];

@@ -2,7 +2,7 @@ import { Link } from "react-router-dom";
 import { dataTableColumns } from "@/components/ui/data-table.tsx";
 import { formatDateTime } from "@/lib/format-date-time.ts";
 import { formatWaiting } from "@/lib/format-date.ts";
-import type { QueueRow } from "../api/credential-shapes.ts";
+import type { QueueRowDto as QueueRow } from "@shared/credentials/credential-shapes.ts";
 
 const column = dataTableColumns<QueueRow>();
 

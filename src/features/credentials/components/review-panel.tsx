@@ -5,7 +5,10 @@ import { isApiError } from "@/lib/api-client.ts";
 import { Button } from "@/components/ui/button.tsx";
 import { FormError } from "@/components/ui/form-error.tsx";
 import { StatusBadge } from "@/components/ui/status-badge.tsx";
-import type { Credential, CredentialDetail } from "../api/credential-shapes.ts";
+import type {
+  CredentialDto as Credential,
+  CredentialDetailDto as CredentialDetail,
+} from "@shared/credentials/credential-shapes.ts";
 import { useEditCredentialFields } from "../api/edit-credential-fields.ts";
 import { useReturnCredential } from "../api/return-credential.ts";
 import { useVerifyCredential } from "../api/verify-credential.ts";

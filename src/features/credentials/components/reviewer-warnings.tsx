@@ -1,4 +1,4 @@
-import type { ReviewerWarningView } from "../api/credential-shapes.ts";
+import type { ReviewerWarningDto as ReviewerWarningView } from "@shared/credentials/credential-shapes.ts";
 
 /** Checks that help a reviewer look twice; warnings, never refusals. */
 export function ReviewerWarnings({

@@ -1,7 +1,7 @@
 import { Link } from "react-router-dom";
 import { hrefs } from "@/config/paths.ts";
 import { StatusBadge } from "@/components/ui/status-badge.tsx";
-import type { CredentialDetail } from "../api/credential-shapes.ts";
+import type { CredentialDetailDto as CredentialDetail } from "@shared/credentials/credential-shapes.ts";
 
 /**
  * The other coverages sent from the same certificate: the reviewer reads the document once and verifies or

@@ -1,5 +1,5 @@
 import { Caution } from "@/components/ui/caution.tsx";
-import type { CredentialType } from "../api/credential-shapes.ts";
+import type { CredentialTypeDto as CredentialType } from "@shared/credentials/credential-shapes.ts";
 
 /** The chosen type's own caution (from the catalog), shown before the file is sent. */
 export function TypeCaution({ type }: { type: CredentialType }) {

@@ -3,7 +3,11 @@ import { isApiError } from "@/lib/api-client.ts";
 import { Button } from "@/components/ui/button.tsx";
 import { FormError } from "@/components/ui/form-error.tsx";
 import { SelectField } from "@/components/ui/select-field.tsx";
-import type { Credential, CredentialType, UploadedDocument } from "../api/credential-shapes.ts";
+import type {
+  CredentialDto as Credential,
+  CredentialTypeDto as CredentialType,
+  UploadedDocumentDto as UploadedDocument,
+} from "@shared/credentials/credential-shapes.ts";
 import { useSubmitCredential } from "../api/submit-credential.ts";
 import { useUploadDocument } from "../api/upload-document.ts";
 import { CertificateCoveragesForm } from "./certificate-coverages-form.tsx";

@@ -2,7 +2,7 @@ import { useMemo } from "react";
 import type { FieldSet } from "@shared/credentials/credential-fields.ts";
 import { formatIsoDate, formatInstantDate } from "@/lib/format-date.ts";
 import { formatDollars } from "@/lib/format-money.ts";
-import type { PreviousVersion } from "../api/credential-shapes.ts";
+import type { PreviousVersionDto as PreviousVersion } from "@shared/credentials/credential-shapes.ts";
 import { fieldDefinitionsFor, type FieldDefinition } from "./field-definitions.ts";
 
 type VersionComparisonProps = { previous: PreviousVersion | null; fieldSet: FieldSet; typeCode: string };

@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
 import { api } from "@/lib/api-client.ts";
 import { directoryKeys } from "./directory-keys.ts";
-import { directoryTechnicianSchema } from "./directory-shapes.ts";
+import { directoryTechnicianDtoSchema } from "@shared/directory/directory-shapes.ts";
 import { DEFAULT_ON_SITE_HOURS } from "@shared/directory/call-out-estimate.ts";
 
 /** The estimate inputs carried from the directory: hours on site and, when chosen, the site. */
@@ -28,7 +28,7 @@ export function estimateInputsOf(search: URLSearchParams): EstimateInputs {
 export const getDirectoryTechnician = (id: number, inputs: EstimateInputs) => {
   const query = new URLSearchParams({ onSiteHours: String(inputs.onSiteHours) });
   if (inputs.siteId !== null) query.set("siteId", String(inputs.siteId));
-  return api.get(`/directory/technicians/${id}?${query.toString()}`, directoryTechnicianSchema);
+  return api.get(`/directory/technicians/${id}?${query.toString()}`, directoryTechnicianDtoSchema);
 };
 
 export const directoryTechnicianQuery = (id: number, inputs: EstimateInputs = DEFAULT_INPUTS) =>

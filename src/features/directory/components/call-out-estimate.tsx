@@ -1,5 +1,5 @@
 import { formatCents } from "@/lib/format-money.ts";
-import type { CallOut } from "../api/directory-shapes.ts";
+import type { CallOutEstimateDto as CallOut } from "@shared/directory/directory-shapes.ts";
 
 type CallOutEstimateProps = {
   callOut: CallOut;

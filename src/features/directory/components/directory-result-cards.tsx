@@ -1,4 +1,7 @@
-import type { DirectoryRow, JudgedAgainst } from "../api/directory-shapes.ts";
+import type {
+  DirectoryRowDto as DirectoryRow,
+  JudgedAgainstDto as JudgedAgainst,
+} from "@shared/directory/directory-shapes.ts";
 import { CallOutEstimate } from "./call-out-estimate.tsx";
 import { DirectoryStandingBadge } from "./directory-standing-badge.tsx";
 import { DistanceText, RatesText, TechnicianLink } from "./directory-row-parts.tsx";

@@ -1,6 +1,9 @@
 import { useMemo } from "react";
 import { DataTable, dataTableColumns } from "@/components/ui/data-table.tsx";
-import type { DirectoryRow, JudgedAgainst } from "../api/directory-shapes.ts";
+import type {
+  DirectoryRowDto as DirectoryRow,
+  JudgedAgainstDto as JudgedAgainst,
+} from "@shared/directory/directory-shapes.ts";
 import { CallOutEstimate } from "./call-out-estimate.tsx";
 import { DirectoryStandingBadge } from "./directory-standing-badge.tsx";
 import { DistanceText, RatesText, TechnicianLink } from "./directory-row-parts.tsx";

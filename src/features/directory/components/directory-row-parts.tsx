@@ -1,7 +1,7 @@
 import { Link, useSearchParams } from "react-router-dom";
 import { hrefs } from "@/config/paths.ts";
 import { formatCents } from "@/lib/format-money.ts";
-import type { DirectoryRow } from "../api/directory-shapes.ts";
+import type { DirectoryRowDto as DirectoryRow } from "@shared/directory/directory-shapes.ts";
 import { formatMiles } from "@shared/geo/units.ts";
 import { formatDriveTime } from "./directory-format.ts";
 

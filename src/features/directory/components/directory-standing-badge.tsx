@@ -1,6 +1,6 @@
 import { StatusBadge } from "@/components/ui/status-badge.tsx";
 import { daysUntil } from "@shared/standing/warning-windows.ts";
-import type { JudgedAgainst } from "../api/directory-shapes.ts";
+import type { JudgedAgainstDto as JudgedAgainst } from "@shared/directory/directory-shapes.ts";
 
 type DirectoryStandingBadgeProps = {
   standing: "cleared" | "lapsing" | "not_cleared";

@@ -4,7 +4,7 @@ import { LIMIT_LABELS } from "@shared/credentials/limit-lines.ts";
 import { lapseWords, readerTimeZone } from "@shared/standing/lapse-words.ts";
 import { formatIsoDate } from "@/lib/format-date.ts";
 import { formatDollars } from "@/lib/format-money.ts";
-import type { ProfileCredential } from "../api/directory-shapes.ts";
+import type { ProfileCredentialDto as ProfileCredential } from "@shared/directory/directory-shapes.ts";
 
 const text = (v: unknown): string | null => (typeof v === "string" && v.trim() ? v : null);
 

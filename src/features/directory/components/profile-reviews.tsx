@@ -1,5 +1,5 @@
 import { formatInstantDate } from "@/lib/format-date.ts";
-import type { DirectoryTechnician } from "../api/directory-shapes.ts";
+import type { DirectoryTechnicianDto as DirectoryTechnician } from "@shared/directory/directory-shapes.ts";
 import { RatingSummary } from "./rating-summary.tsx";
 
 /** The rating with its count, then each review with the service company's reply. */

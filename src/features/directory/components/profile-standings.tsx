@@ -1,4 +1,4 @@
-import type { ProfileStanding } from "../api/directory-shapes.ts";
+import type { ProfileStandingDto as ProfileStanding } from "@shared/directory/directory-shapes.ts";
 import { DirectoryStandingBadge } from "./directory-standing-badge.tsx";
 
 /** The technician against each of the buyer's requirement sets, with the reason for every unmet requirement. */

@@ -1,4 +1,4 @@
-import type { RatingSummary as Rating } from "../api/directory-shapes.ts";
+import type { RatingSummaryDto as Rating } from "@shared/directory/directory-shapes.ts";
 import { ratingWords } from "./directory-format.ts";
 
 /** "4.7 (12)" with a star, or "No ratings yet"; the count is always there, and screen readers hear it in words. */

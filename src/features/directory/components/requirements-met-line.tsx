@@ -1,4 +1,4 @@
-import type { DirectoryRow } from "../api/directory-shapes.ts";
+import type { DirectoryRowDto as DirectoryRow } from "@shared/directory/directory-shapes.ts";
 
 /**
  * How each line of the chosen requirement set is met, folded into one line per result so the list stays scannable;

@@ -1,4 +1,4 @@
-import type { SiteEstimate } from "../api/directory-shapes.ts";
+import type { SiteEstimateDto as SiteEstimate } from "@shared/directory/directory-shapes.ts";
 import { CallOutEstimate } from "./call-out-estimate.tsx";
 import { formatMiles } from "@shared/geo/units.ts";
 import { formatDriveTime } from "./directory-format.ts";

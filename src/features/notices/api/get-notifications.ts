@@ -1,29 +1,21 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
-import { z } from "zod";
+import {
+  notificationListDtoSchema,
+  type NotificationDto,
+  type NotificationListDto,
+} from "@shared/notices/schemas.ts";
 import { api, isApiError } from "@/lib/api-client.ts";
 import { noticeKeys } from "./notice-keys.ts";
 
-const notificationSchema = z.object({
-  id: z.number(),
-  kind: z.string(),
-  title: z.string(),
-  body: z.string(),
-  link: z.string().nullable(),
-  readAt: z.string().nullable(),
-  createdAt: z.string(),
-});
-export type Notification = z.infer<typeof notificationSchema>;
-
-// shared/notices/schemas.ts NotificationListDto
-const notificationsSchema = z.object({ notifications: z.array(notificationSchema), unreadCount: z.number() });
-export type Notifications = z.infer<typeof notificationsSchema>;
+export type Notification = NotificationDto;
+export type Notifications = NotificationListDto;
 
 const none: Notifications = { notifications: [], unreadCount: 0 };
 
 /** The signed-in user's notifications; an empty list while the notices service is not there yet (404). */
 export async function getNotifications(): Promise<Notifications> {
   try {
-    return await api.get("/notifications", notificationsSchema);
+    return await api.get("/notifications", notificationListDtoSchema);
   } catch (error) {
     if (isApiError(error) && error.status === 404) return none;
     throw error;

@@ -1,10 +1,11 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { api } from "@/lib/api-client.ts";
-import { reportedReviewKeys, reportedReviewSchema } from "./get-reported-reviews.ts";
+import { reportedReviewDtoSchema } from "@shared/reviews/schemas.ts";
+import { reportedReviewKeys } from "./get-reported-reviews.ts";
 
 /** Settles a report by keeping the review counted as it is. */
 export const keepReview = (reviewId: number) =>
-  api.post(`/admin/reviews/${reviewId}/keep`, {}, reportedReviewSchema);
+  api.post(`/admin/reviews/${reviewId}/keep`, {}, reportedReviewDtoSchema);
 
 export function useKeepReview() {
   const queryClient = useQueryClient();

@@ -1,10 +1,10 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { api } from "@/lib/api-client.ts";
 import { reviewKeys } from "./review-keys.ts";
-import { reviewSchema } from "./review-shapes.ts";
+import { reviewDtoSchema } from "@shared/reviews/schemas.ts";
 
 export const replyToReview = (reviewId: number, body: string) =>
-  api.post(`/reviews/${reviewId}/reply`, { body }, reviewSchema);
+  api.post(`/reviews/${reviewId}/reply`, { body }, reviewDtoSchema);
 
 export function useReplyToReview() {
   const queryClient = useQueryClient();

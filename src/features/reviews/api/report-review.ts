@@ -1,11 +1,11 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { api } from "@/lib/api-client.ts";
 import { reviewKeys } from "./review-keys.ts";
-import { reviewSchema } from "./review-shapes.ts";
+import { reviewDtoSchema } from "@shared/reviews/schemas.ts";
 
 /** Flags a review for the platform's admin; nothing is hidden or deleted by it. */
 export const reportReview = (reviewId: number, reason: string) =>
-  api.post(`/reviews/${reviewId}/report`, { reason }, reviewSchema);
+  api.post(`/reviews/${reviewId}/report`, { reason }, reviewDtoSchema);
 
 export function useReportReview() {
   const queryClient = useQueryClient();

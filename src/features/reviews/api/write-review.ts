@@ -2,10 +2,10 @@ import { useMutation, useQueryClient } from "@tanstack/react-query";
 import type { WriteReview } from "@shared/reviews/schemas.ts";
 import { api } from "@/lib/api-client.ts";
 import { reviewKeys } from "./review-keys.ts";
-import { reviewSchema } from "./review-shapes.ts";
+import { reviewDtoSchema } from "@shared/reviews/schemas.ts";
 
 export const writeReview = (workOrderId: number, input: WriteReview) =>
-  api.post(`/work-orders/${workOrderId}/review`, input, reviewSchema);
+  api.post(`/work-orders/${workOrderId}/review`, input, reviewDtoSchema);
 
 export function useWriteReview(workOrderId: number) {
   const queryClient = useQueryClient();

@@ -4,7 +4,7 @@ import { Button } from "@/components/ui/button.tsx";
 import { formatDateTime } from "@/lib/format-date-time.ts";
 import { useReplyToReview } from "../api/reply-to-review.ts";
 import { useReportReview } from "../api/report-review.ts";
-import type { Review } from "../api/review-shapes.ts";
+import type { ReviewDto as Review } from "@shared/reviews/schemas.ts";
 import { ShortTextForm } from "./short-text-form.tsx";
 
 type ReviewViewProps = {

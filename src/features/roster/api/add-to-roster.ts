@@ -1,11 +1,10 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import type { AddRosterEntry } from "@shared/roster/schemas.ts";
+import { rosterEntryDtoSchema, type AddRosterEntry } from "@shared/roster/schemas.ts";
 import { api } from "@/lib/api-client.ts";
 import { directoryKeys } from "@/features/directory/api/directory-keys.ts";
 import { rosterKeys } from "./roster-keys.ts";
-import { rosterEntrySchema } from "./roster-shapes.ts";
 
-export const addToRoster = (entry: AddRosterEntry) => api.post("/roster", entry, rosterEntrySchema);
+export const addToRoster = (entry: AddRosterEntry) => api.post("/roster", entry, rosterEntryDtoSchema);
 
 export function useAddToRoster() {
   const queryClient = useQueryClient();

@@ -2,9 +2,9 @@ import { queryOptions, useQuery } from "@tanstack/react-query";
 import { z } from "zod";
 import { api } from "@/lib/api-client.ts";
 import { rosterKeys } from "./roster-keys.ts";
-import { rosterEntrySchema } from "./roster-shapes.ts";
+import { rosterEntryDtoSchema } from "@shared/roster/schemas.ts";
 
-export const getRoster = () => api.get("/roster", z.array(rosterEntrySchema));
+export const getRoster = () => api.get("/roster", z.array(rosterEntryDtoSchema));
 
 export const rosterQuery = () => queryOptions({ queryKey: rosterKeys.list(), queryFn: getRoster });
 

@@ -6,7 +6,7 @@ import { DataTable, dataTableColumns } from "@/components/ui/data-table.tsx";
 import { StatusBadge } from "@/components/ui/status-badge.tsx";
 import { formatInstantDate } from "@/lib/format-date.ts";
 import { daysUntil } from "@shared/standing/warning-windows.ts";
-import type { RosterEntry } from "../api/roster-shapes.ts";
+import type { RosterEntryDto as RosterEntry } from "@shared/roster/schemas.ts";
 
 /** One line per technician; a company entry contributes all of its technicians. */
 export type RosterRow = RosterEntry["technicians"][number] & {

@@ -1,10 +1,9 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import type { TechnicianInput } from "@shared/technicians/schemas.ts";
+import { technicianDtoSchema, type TechnicianInput } from "@shared/technicians/schemas.ts";
 import { api } from "@/lib/api-client.ts";
 import { technicianKeys } from "./technician-keys.ts";
-import { technicianSchema } from "./technician-shape.ts";
 
-export const addTechnician = (input: TechnicianInput) => api.post("/technicians", input, technicianSchema);
+export const addTechnician = (input: TechnicianInput) => api.post("/technicians", input, technicianDtoSchema);
 
 export function useAddTechnician() {
   const queryClient = useQueryClient();

@@ -1,10 +1,10 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { api } from "@/lib/api-client.ts";
 import { technicianKeys } from "./technician-keys.ts";
-import { technicianSchema } from "./technician-shape.ts";
+import { technicianDtoSchema } from "@shared/technicians/schemas.ts";
 
 export const deactivateTechnician = (id: number) =>
-  api.post(`/technicians/${id}/deactivate`, {}, technicianSchema);
+  api.post(`/technicians/${id}/deactivate`, {}, technicianDtoSchema);
 
 export function useDeactivateTechnician() {
   const queryClient = useQueryClient();

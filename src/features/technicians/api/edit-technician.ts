@@ -1,13 +1,12 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import type { TechnicianInput } from "@shared/technicians/schemas.ts";
+import { technicianDtoSchema, type TechnicianInput } from "@shared/technicians/schemas.ts";
 import { api } from "@/lib/api-client.ts";
 import { technicianKeys } from "./technician-keys.ts";
-import { technicianSchema } from "./technician-shape.ts";
 
 export type EditTechnicianInput = { id: number; input: TechnicianInput };
 
 export const editTechnician = ({ id, input }: EditTechnicianInput) =>
-  api.put(`/technicians/${id}`, input, technicianSchema);
+  api.put(`/technicians/${id}`, input, technicianDtoSchema);
 
 export function useEditTechnician() {
   const queryClient = useQueryClient();

@@ -5,7 +5,7 @@ import { Button } from "@/components/ui/button.tsx";
 import { FormError } from "@/components/ui/form-error.tsx";
 import { TextField } from "@/components/ui/text-field.tsx";
 import { fieldErrorsOf } from "@/lib/field-errors.ts";
-import type { Technician } from "../api/technician-shape.ts";
+import type { TechnicianDto as Technician } from "@shared/technicians/schemas.ts";
 import { useGiveSignIn } from "../api/give-sign-in.ts";
 
 const giveSignInSchema = z.object({ email: emailSchema });

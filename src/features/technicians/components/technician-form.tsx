@@ -4,6 +4,7 @@ import {
   machineTechnologies,
   technicianInputSchema,
   technologyLabels,
+  type TechnicianDto as Technician,
   type TechnicianInput,
 } from "@shared/technicians/schemas.ts";
 import { Button } from "@/components/ui/button.tsx";
@@ -11,7 +12,6 @@ import { FormError } from "@/components/ui/form-error.tsx";
 import { TextField } from "@/components/ui/text-field.tsx";
 import { fieldErrorsOf } from "@/lib/field-errors.ts";
 import { centsToInput, inputToCents } from "@/lib/format-money.ts";
-import type { Technician } from "../api/technician-shape.ts";
 
 const labels = {
   name: "Name",

@@ -1,10 +1,13 @@
 import { Link } from "react-router-dom";
 import { wholeMilesFromKm } from "@shared/geo/units.ts";
-import { technologyLabels, type MachineTechnology } from "@shared/technicians/schemas.ts";
+import {
+  technologyLabels,
+  type MachineTechnology,
+  type TechnicianDto as Technician,
+} from "@shared/technicians/schemas.ts";
 import { hrefs } from "@/config/paths.ts";
 import { DataTable, dataTableColumns } from "@/components/ui/data-table.tsx";
 import { formatCents } from "@/lib/format-money.ts";
-import type { Technician } from "../api/technician-shape.ts";
 
 export const technologyWords = (technologies: readonly string[]): string =>
   technologies.map((t) => technologyLabels[t as MachineTechnology] ?? t).join(", ") || "—";
