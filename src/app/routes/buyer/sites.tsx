@@ -10,7 +10,7 @@ import { usTimeZoneOptions } from "@/features/accounts/components/us-time-zones.
 import { useArchiveSite } from "@/features/sites/api/archive-site.ts";
 import { sitesQuery } from "@/features/sites/api/get-sites.ts";
 import { useSaveSite } from "@/features/sites/api/save-site.ts";
-import type { Site } from "@/features/sites/api/site-shapes.ts";
+import type { SiteDto as Site } from "@shared/sites/schemas.ts";
 import { SiteEquipment } from "@/features/sites/components/site-equipment.tsx";
 import { SiteForm } from "@/features/sites/components/site-form.tsx";
 import { queryClient } from "@/lib/query-client.ts";
