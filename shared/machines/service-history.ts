@@ -40,6 +40,13 @@ export const partUsedSchema = z.object({
   quantity: z.number().int().min(1, "At least 1").max(9999).default(1),
 });
 export type PartUsed = z.infer<typeof partUsedSchema>;
+/** A part as an answer carries it: stored parts are read back as they were saved, without the input's limits. */
+export const partUsedDtoSchema = z.object({
+  description: z.string(),
+  // Parts saved without a number carry none, or null.
+  partNumber: z.string().nullable().optional(),
+  quantity: z.number(),
+});
 export const MAX_PARTS_USED = 50;
 export const partsUsedSchema = z.array(partUsedSchema).max(MAX_PARTS_USED, `At most ${MAX_PARTS_USED} parts`);
 

@@ -20,6 +20,7 @@ const notJson = new Set([
   "get /api/roster/export.csv", // CSV
   "get /api/machines/:machineId/history.csv", // CSV
   "get /api/machines/:machineId/history/print", // HTML print page
+  "get /api/work-orders/:workOrderId/standing-proof", // HTML print page
   "get /api/machines/:machineId/photos/:photoId", // image
   "get /api/work-orders/:workOrderId/messages/:messageId/file", // attachment
   "get /api/work-orders/:workOrderId/messages/:messageId/thumbnail", // image
@@ -50,10 +51,6 @@ const notYetDeclared = new Set<string>([
   "get /api/review/queue",
   "get /api/postal-codes/:code",
   "get /api/roster",
-  "get /api/work-orders",
-  "get /api/work-orders/:workOrderId",
-  "get /api/work-orders/:workOrderId/standing-proof",
-  "get /api/work-orders/:workOrderId/messages",
   "get /api/service-requests",
   "get /api/service-requests/follow-up",
   "get /api/service-requests/:requestId",
