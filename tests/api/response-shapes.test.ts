@@ -51,11 +51,6 @@ const notYetDeclared = new Set<string>([
   "get /api/review/queue",
   "get /api/postal-codes/:code",
   "get /api/roster",
-  "get /api/service-requests",
-  "get /api/service-requests/follow-up",
-  "get /api/service-requests/:requestId",
-  "get /api/service-requests/:requestId/comparison",
-  "get /api/service-requests/:requestId/threads/:companyId",
   "get /api/directory",
   "get /api/directory/technicians/:technicianId",
   "get /api/broker-contacts",
@@ -119,6 +114,39 @@ beforeAll(async () => {
     zip: await ids("SELECT DISTINCT postal_code AS id FROM sites"),
   };
 }, 240_000);
+
+// Path values the demo data has no row or column for: each thread is named by an invited company, and an upload link
+// and a machine transfer are made through the product's own API so their answers are parsed for real.
+beforeAll(async () => {
+  candidates.companyId = await ids(
+    "SELECT DISTINCT company_id AS id FROM service_request_invitations ORDER BY 1",
+  );
+
+  const office = agents.get("provider_admin")![0]!;
+  const brokerEmail = "broker-shapes@agency.example.test";
+  await office
+    .put("/api/broker-contacts")
+    .send({ agency: "Harrow Lane Insurance Agency", contactName: "Odile Prentiss", email: brokerEmail })
+    .expect(200);
+  await office.post("/api/broker-requests").send({ typeCode: "general_liability" }).expect(201);
+  // The link exists only in the e-mail to the broker, so it is read from the queued message.
+  const [mail] = await db().query<{ text_body: string }>(
+    "SELECT text_body FROM outbox_messages WHERE to_address = $1 ORDER BY id DESC LIMIT 1",
+    { bind: [brokerEmail], type: QueryTypes.SELECT },
+  );
+  const token = /\/broker-upload\/([A-Za-z0-9_-]+)/.exec(mail?.text_body ?? "")?.[1];
+  expect(token).toBeDefined();
+  candidates.token = [token!];
+
+  const [seller, receiver] = agents.get("buyer")!;
+  const [machine] = (await seller!.get("/api/machines").expect(200)).body as { id: number }[];
+  const receiverEmail = ((await receiver!.get("/api/auth/me").expect(200)).body as { email: string }).email;
+  await seller!
+    .post(`/api/machines/${machine!.id}/transfers`)
+    .send({ email: receiverEmail, note: "Sold with the spare chuck" })
+    .expect(201);
+  candidates.transferId = await ids("SELECT id FROM machine_transfers ORDER BY id");
+}, 60_000);
 
 afterAll(async () => {
   await t?.close();
