@@ -71,6 +71,10 @@ export const equipmentDtoSchema = z.object({
 });
 export type EquipmentDto = z.infer<typeof equipmentDtoSchema>;
 
+/** A machine as the shop's machine pages read it: its site's equipment row and the site's name. */
+export const machineDtoSchema = equipmentDtoSchema.extend({ siteName: z.string() });
+export type MachineDto = z.infer<typeof machineDtoSchema>;
+
 export const siteDtoSchema = z.object({
   id: z.number(),
   companyId: z.number(),

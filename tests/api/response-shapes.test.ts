@@ -64,16 +64,6 @@ const notYetDeclared = new Set<string>([
   "get /api/geo/zip/:zip",
   "get /api/gate/check",
   "get /api/gate/checks",
-  "get /api/machine-catalog",
-  "get /api/machines",
-  "get /api/machines/:machineId",
-  "get /api/machines/:machineId/history",
-  "get /api/machines/:machineId/photos",
-  "get /api/machines/:machineId/transfers",
-  "get /api/machines/:machineId/ownership",
-  "get /api/machine-transfers",
-  "get /api/machine-transfers/:transferId",
-  "get /api/machines/:machineId/maintenance-plans",
   "get /api/calendar-feed",
 ]);
 
