@@ -3,7 +3,12 @@ import { z } from "zod";
 import { typeCodeSchema } from "../../shared/credentials/schemas.ts";
 import {
   askForCertificateSchema,
+  brokerContactDtoSchema,
+  brokerCoverageDtoSchema,
+  brokerRequestDtoSchema,
   brokerTokenParamsSchema,
+  brokerUploadPageDtoSchema,
+  shopCertificateRequestsDtoSchema,
   requestBrokerCertificateSchema,
   saveBrokerContactSchema,
 } from "../../shared/credentials/broker-schemas.ts";
@@ -41,11 +46,15 @@ const linkStillOpen: RequestHandler = (req, _res, next) => {
 
 export const brokerRoutes = createRoutes("/api");
 
-brokerRoutes.get("/broker-contacts", { allow: canManageBroker }, (req) => listBrokerContacts(req.user!));
+brokerRoutes.get(
+  "/broker-contacts",
+  { allow: canManageBroker, response: z.array(brokerContactDtoSchema) },
+  (req) => listBrokerContacts(req.user!),
+);
 
 brokerRoutes.put(
   "/broker-contacts",
-  { allow: canManageBroker, body: saveBrokerContactSchema },
+  { allow: canManageBroker, body: saveBrokerContactSchema, response: brokerContactDtoSchema },
   (req, _res, { body }) => saveBrokerContact(req.user!, body),
 );
 
@@ -55,9 +64,17 @@ brokerRoutes.delete(
   (req, _res, { params }) => removeCoverageBroker(req.user!, params.typeCode),
 );
 
-brokerRoutes.get("/broker-requests", { allow: canManageBroker }, (req) => listBrokerRequests(req.user!));
+brokerRoutes.get(
+  "/broker-requests",
+  { allow: canManageBroker, response: z.array(brokerRequestDtoSchema) },
+  (req) => listBrokerRequests(req.user!),
+);
 
-brokerRoutes.get("/broker-coverages", { allow: canManageBroker }, (req) => listBrokerCoverages(req.user!));
+brokerRoutes.get(
+  "/broker-coverages",
+  { allow: canManageBroker, response: z.array(brokerCoverageDtoSchema) },
+  (req) => listBrokerCoverages(req.user!),
+);
 
 brokerRoutes.post(
   "/broker-requests",
@@ -75,6 +92,7 @@ brokerRoutes.get(
     allow: brokerLinkHolder,
     before: [abuseLimit("brokerLink"), linkStillOpen],
     params: brokerTokenParamsSchema,
+    response: brokerUploadPageDtoSchema,
   },
   (_req, _res, { params }) => showBrokerUpload(params.token),
 );
@@ -94,8 +112,10 @@ brokerRoutes.post(
 // A shop asks through the platform; it never sees the broker's contact or the link, only how its request stands.
 const canAskForCertificate = requireRole("buyer");
 
-brokerRoutes.get("/certificate-requests", { allow: canAskForCertificate }, (req) =>
-  listShopCertificateRequests(req.user!),
+brokerRoutes.get(
+  "/certificate-requests",
+  { allow: canAskForCertificate, response: shopCertificateRequestsDtoSchema },
+  (req) => listShopCertificateRequests(req.user!),
 );
 
 brokerRoutes.post(

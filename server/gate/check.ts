@@ -3,18 +3,9 @@ import { db } from "../db/sequelize.ts";
 import { computeStandings } from "../standing/compute-stored-standings.ts";
 import { loadStandingInputs, loadTargets } from "../standing/standing-inputs.ts";
 import type { StandingResult } from "../../shared/standing/standing-types.ts";
+import type { GateCheckDto } from "../../shared/gate/check-answer.ts";
 import { jpegDataUrl } from "./photo.ts";
 import { checkBadgeToken, siteFromGateCode } from "./token.ts";
-
-export interface GateCheckDto {
-  state: "cleared" | "not_cleared" | "expired" | "invalid";
-  checkedAt: string;
-  technician?: { name: string; company: string; photo?: string };
-  site?: { name: string } | null;
-  against?: string;
-  lines?: { requirement: string; status: string }[];
-  workOrder?: { id: number; technology: string } | null;
-}
 
 interface GateRow {
   technician_id: number;

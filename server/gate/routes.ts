@@ -10,7 +10,8 @@ import { isOwnSite } from "../sites/policy.ts";
 import { notFound } from "../http/app-error.ts";
 import { checkAtGate } from "./check.ts";
 import { listGateChecks } from "./check-log.ts";
-import { gateCheckLogQuerySchema } from "../../shared/gate/check-log.ts";
+import { gateCheckLogQuerySchema, gateCheckLogSchema } from "../../shared/gate/check-log.ts";
+import { gateCheckDtoSchema } from "../../shared/gate/check-answer.ts";
 import { saveTechnicianPhoto, technicianPhotoDataUrl } from "./photo.ts";
 import { singleFileUpload } from "../http/upload.ts";
 import { BADGE_TOKEN_TTL_MS, issueBadgeToken, siteGateCode } from "./token.ts";
@@ -59,6 +60,7 @@ gateRoutes.get(
     allow: anyone,
     before: [abuseLimit("gateCheck")],
     query: z.object({ token: tokenText, site: siteCodeText }),
+    response: gateCheckDtoSchema,
   },
   (req, _res, { query }) => checkAtGate(gateSecret(appConfig(req)), query.token, query.site),
 );
@@ -95,6 +97,10 @@ gateRoutes.get(
 // The shop sees the checks at its own sites only, never the same technician's checks at other shops.
 gateRoutes.get(
   "/gate/checks",
-  { allow: requireRole("provider_admin", "buyer"), query: gateCheckLogQuerySchema },
+  {
+    allow: requireRole("provider_admin", "buyer"),
+    query: gateCheckLogQuerySchema,
+    response: gateCheckLogSchema,
+  },
   (req, _res, { query }) => listGateChecks(req.user!, query),
 );

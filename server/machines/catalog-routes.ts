@@ -1,4 +1,6 @@
+import { z } from "zod";
 import {
+  catalogEntryDtoSchema,
   catalogEntryInputSchema,
   catalogEntryParamsSchema,
   catalogListQuerySchema,
@@ -10,8 +12,10 @@ import { addCatalogEntry, editCatalogEntry, listCatalog } from "./catalog-servic
 export const machineCatalogRoutes = createRoutes("/api/machine-catalog");
 
 // Every form that names a builder or control picks from this list, so every signed-in role reads it.
-machineCatalogRoutes.get("", { allow: signedIn, query: catalogListQuerySchema }, (_req, _res, { query }) =>
-  listCatalog(query.kind),
+machineCatalogRoutes.get(
+  "",
+  { allow: signedIn, query: catalogListQuerySchema, response: z.array(catalogEntryDtoSchema) },
+  (_req, _res, { query }) => listCatalog(query.kind),
 );
 
 machineCatalogRoutes.post(
@@ -24,6 +28,11 @@ machineCatalogRoutes.post(
 
 machineCatalogRoutes.put(
   "/:entryId",
-  { allow: requireRole("admin"), params: catalogEntryParamsSchema, body: catalogEntryInputSchema },
+  {
+    allow: requireRole("admin"),
+    params: catalogEntryParamsSchema,
+    body: catalogEntryInputSchema,
+    response: catalogEntryDtoSchema,
+  },
   (req, _res, { params, body }) => editCatalogEntry(req.user!, params.entryId, body),
 );

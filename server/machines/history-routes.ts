@@ -1,7 +1,7 @@
 import type { Response } from "express";
 import { z } from "zod";
 import { idParam } from "../../shared/credentials/schemas.ts";
-import { recordShopServiceSchema } from "../../shared/machines/service-history.ts";
+import { machineHistoryDtoSchema, recordShopServiceSchema } from "../../shared/machines/service-history.ts";
 import { createRoutes } from "../http/route.ts";
 import { requireOwnership, requireRole } from "../http/policy.ts";
 import { hasOwnedMachine } from "./ownership.ts";
@@ -34,7 +34,7 @@ const fileName = (serial: string | null, id: number) =>
 
 machineHistoryRoutes.get(
   "/:machineId/history",
-  { allow: canReadMachineHistory, params: machineParamsSchema },
+  { allow: canReadMachineHistory, params: machineParamsSchema, response: machineHistoryDtoSchema },
   (req, _res, { params }) => listMachineHistory(params.machineId, req.user!.companyId),
 );
 

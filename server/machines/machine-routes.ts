@@ -1,7 +1,7 @@
 import { z } from "zod";
 import { QueryTypes } from "sequelize";
 import { idParam } from "../../shared/credentials/schemas.ts";
-import { machineStates } from "../../shared/sites/schemas.ts";
+import { machineDtoSchema, machineStates } from "../../shared/sites/schemas.ts";
 import { machineTechnologies } from "../../shared/technicians/schemas.ts";
 import { singleLineText } from "../../shared/api/text.ts";
 import { matchKeysFor } from "../../shared/machines/catalog.ts";
@@ -40,7 +40,7 @@ export const canOpenMachine = requireOwnership(
 // The shop's machines across all its sites; the builder filter takes any catalog name or alias.
 machineRoutes.get(
   "",
-  { allow: requireRole("buyer"), query: listQuerySchema },
+  { allow: requireRole("buyer"), query: listQuerySchema, response: z.array(machineDtoSchema) },
   async (req, _res, { query }) => {
     const builderKeys =
       query.builder !== undefined ? matchKeysFor(await listCatalog("builder"), query.builder) : null;
@@ -71,7 +71,7 @@ machineRoutes.get(
 
 machineRoutes.get(
   "/:machineId",
-  { allow: canOpenMachine, params: machineParamsSchema },
+  { allow: canOpenMachine, params: machineParamsSchema, response: machineDtoSchema },
   async (req, _res, { params }) => {
     const found = await ownMachine(req.user!.companyId, params.machineId);
     if (!found) throw new AppError("not_found", "That machine was not found");

@@ -1,5 +1,7 @@
 import {
   hourReadingInputSchema,
+  maintenancePlanListSchema,
+  maintenancePlanSchema,
   machineParamsSchema,
   maintenancePlanInputSchema,
   maintenancePlanParamsSchema,
@@ -30,7 +32,7 @@ const canPlanMaintenance = requireOwnership(
 
 maintenanceRoutes.get(
   "/:machineId/maintenance-plans",
-  { allow: canPlanMaintenance, params: machineParamsSchema },
+  { allow: canPlanMaintenance, params: machineParamsSchema, response: maintenancePlanListSchema },
   (req, _res, { params }) => listPlans(req.user!, params.machineId),
 );
 
@@ -44,7 +46,12 @@ maintenanceRoutes.post(
 
 maintenanceRoutes.put(
   "/:machineId/maintenance-plans/:planId",
-  { allow: canPlanMaintenance, params: maintenancePlanParamsSchema, body: maintenancePlanInputSchema },
+  {
+    allow: canPlanMaintenance,
+    params: maintenancePlanParamsSchema,
+    body: maintenancePlanInputSchema,
+    response: maintenancePlanSchema,
+  },
   (req, _res, { params, body }) => changePlan(req.user!, params.machineId, params.planId, body),
 );
 

@@ -1,5 +1,7 @@
+import { z } from "zod";
 import {
   addMachinePhotoSchema,
+  machinePhotoSchema,
   machineParamsSchema,
   machinePhotoParamsSchema,
 } from "../../shared/machines/photos.ts";
@@ -12,7 +14,7 @@ export const machinePhotoRoutes = createRoutes("/api/machines");
 
 machinePhotoRoutes.get(
   "/:machineId/photos",
-  { allow: canManageMachinePhotos, params: machineParamsSchema },
+  { allow: canManageMachinePhotos, params: machineParamsSchema, response: z.array(machinePhotoSchema) },
   (_req, _res, { params }) => listMachinePhotos(params.machineId),
 );
 

@@ -1,7 +1,11 @@
 import { machineParamsSchema } from "../../shared/machines/photos.ts";
+import { z } from "zod";
 import {
   acceptTransferSchema,
   declineTransferSchema,
+  machineTransferListSchema,
+  machineTransferSchema,
+  ownershipViewSchema,
   startTransferSchema,
   transferParamsSchema,
 } from "../../shared/machines/transfers.ts";
@@ -25,7 +29,7 @@ export const machineTransferStartRoutes = createRoutes("/api/machines");
 
 machineTransferStartRoutes.get(
   "/:machineId/transfers",
-  { allow: canTransferMachine, params: machineParamsSchema },
+  { allow: canTransferMachine, params: machineParamsSchema, response: z.array(machineTransferSchema) },
   (req, _res, { params }) => listMachineTransfers(req.user!.companyId, params.machineId),
 );
 
@@ -41,23 +45,30 @@ machineTransferStartRoutes.post(
 
 machineTransferStartRoutes.get(
   "/:machineId/ownership",
-  { allow: canSeeMachineOwnership, params: machineParamsSchema },
+  { allow: canSeeMachineOwnership, params: machineParamsSchema, response: ownershipViewSchema },
   (req, _res, { params }) => ownershipView(req.user!.companyId, params.machineId),
 );
 
 export const machineTransferRoutes = createRoutes("/api/machine-transfers");
 
-machineTransferRoutes.get("", { allow: canListTransfers }, (req) => listShopTransfers(req.user!.companyId));
+machineTransferRoutes.get("", { allow: canListTransfers, response: machineTransferListSchema }, (req) =>
+  listShopTransfers(req.user!.companyId),
+);
 
 machineTransferRoutes.get(
   "/:transferId",
-  { allow: canSeeTransfer, params: transferParamsSchema },
+  { allow: canSeeTransfer, params: transferParamsSchema, response: machineTransferSchema },
   (req, _res, { params }) => findTransfer(req.user!.companyId, params.transferId),
 );
 
 machineTransferRoutes.post(
   "/:transferId/accept",
-  { allow: canAnswerTransfer, params: transferParamsSchema, body: acceptTransferSchema },
+  {
+    allow: canAnswerTransfer,
+    params: transferParamsSchema,
+    body: acceptTransferSchema,
+    response: machineTransferSchema,
+  },
   async (req, _res, { params, body }) => {
     const transfer = await acceptTransfer(req.user!, params.transferId, body, linkBase(req));
     kickOutbox(req.app.locals);
@@ -67,7 +78,12 @@ machineTransferRoutes.post(
 
 machineTransferRoutes.post(
   "/:transferId/decline",
-  { allow: canAnswerTransfer, params: transferParamsSchema, body: declineTransferSchema },
+  {
+    allow: canAnswerTransfer,
+    params: transferParamsSchema,
+    body: declineTransferSchema,
+    response: machineTransferSchema,
+  },
   async (req, _res, { params, body }) => {
     const transfer = await declineTransfer(req.user!, params.transferId, body.reason, linkBase(req));
     kickOutbox(req.app.locals);
@@ -77,7 +93,7 @@ machineTransferRoutes.post(
 
 machineTransferRoutes.post(
   "/:transferId/withdraw",
-  { allow: canWithdrawTransfer, params: transferParamsSchema },
+  { allow: canWithdrawTransfer, params: transferParamsSchema, response: machineTransferSchema },
   async (req, _res, { params }) => {
     const transfer = await withdrawTransfer(req.user!, params.transferId, linkBase(req));
     kickOutbox(req.app.locals);

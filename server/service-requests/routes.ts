@@ -1,6 +1,13 @@
 import type { Request } from "express";
+import { z } from "zod";
 import {
   attachmentParamsSchema,
+  comparisonDtoSchema,
+  followUpRowDtoSchema,
+  requestMessageDtoSchema,
+  routingPreviewDtoSchema,
+  serviceRequestDtoSchema,
+  serviceRequestSummaryDtoSchema,
   cancelRequestSchema,
   estimateInputSchema,
   estimateParamsSchema,
@@ -50,7 +57,7 @@ const kick = (req: Request) => kickOutbox(req.app.locals);
 
 serviceRequestRoutes.post(
   "/preview",
-  { allow: canRaiseServiceRequests, body: raiseServiceRequestSchema },
+  { allow: canRaiseServiceRequests, body: raiseServiceRequestSchema, response: routingPreviewDtoSchema },
   (req, _res, { body }) => previewServiceRequest(req.user!, body),
 );
 
@@ -64,19 +71,25 @@ serviceRequestRoutes.post(
   },
 );
 
-serviceRequestRoutes.get("", { allow: canListServiceRequests }, (req) => listRequests(req.user!));
+serviceRequestRoutes.get(
+  "",
+  { allow: canListServiceRequests, response: z.array(serviceRequestSummaryDtoSchema) },
+  (req) => listRequests(req.user!),
+);
 
-serviceRequestRoutes.get("/follow-up", { allow: canFollowUp }, () => listFollowUps());
+serviceRequestRoutes.get("/follow-up", { allow: canFollowUp, response: z.array(followUpRowDtoSchema) }, () =>
+  listFollowUps(),
+);
 
 serviceRequestRoutes.get(
   "/:requestId",
-  { allow: canSeeServiceRequest, params: serviceRequestParamsSchema },
+  { allow: canSeeServiceRequest, params: serviceRequestParamsSchema, response: serviceRequestDtoSchema },
   (req, _res, { params }) => viewRequest(req.user!, params.requestId),
 );
 
 serviceRequestRoutes.get(
   "/:requestId/comparison",
-  { allow: canDecideServiceRequest, params: serviceRequestParamsSchema },
+  { allow: canDecideServiceRequest, params: serviceRequestParamsSchema, response: comparisonDtoSchema },
   (req, _res, { params }) => compareEstimates(req.user!, params.requestId, warningDays(req)),
 );
 
@@ -113,7 +126,12 @@ serviceRequestRoutes.post(
 
 serviceRequestRoutes.put(
   "/:requestId/estimates/:estimateId",
-  { allow: canAnswerServiceRequest, params: estimateParamsSchema, body: estimateInputSchema },
+  {
+    allow: canAnswerServiceRequest,
+    params: estimateParamsSchema,
+    body: estimateInputSchema,
+    response: serviceRequestDtoSchema,
+  },
   async (req, _res, { params, body }) => {
     await reviseEstimate(
       req.user!,
@@ -130,7 +148,7 @@ serviceRequestRoutes.put(
 
 serviceRequestRoutes.post(
   "/:requestId/estimates/:estimateId/withdraw",
-  { allow: canAnswerServiceRequest, params: estimateParamsSchema },
+  { allow: canAnswerServiceRequest, params: estimateParamsSchema, response: serviceRequestDtoSchema },
   async (req, _res, { params }) => {
     await withdrawEstimate(req.user!, params.requestId, params.estimateId, linkBase(req));
     kick(req);
@@ -140,7 +158,12 @@ serviceRequestRoutes.post(
 
 serviceRequestRoutes.post(
   "/:requestId/pass",
-  { allow: canAnswerServiceRequest, params: serviceRequestParamsSchema, body: passSchema },
+  {
+    allow: canAnswerServiceRequest,
+    params: serviceRequestParamsSchema,
+    body: passSchema,
+    response: serviceRequestDtoSchema,
+  },
   async (req, _res, { params, body }) => {
     await passRequest(req.user!, params.requestId, body.reason);
     return viewRequest(req.user!, params.requestId);
@@ -149,7 +172,7 @@ serviceRequestRoutes.post(
 
 serviceRequestRoutes.post(
   "/:requestId/estimates/:estimateId/accept",
-  { allow: canDecideServiceRequest, params: estimateParamsSchema },
+  { allow: canDecideServiceRequest, params: estimateParamsSchema, response: serviceRequestDtoSchema },
   async (req, _res, { params }) => {
     await acceptEstimate(req.user!, params.requestId, params.estimateId, warningDays(req), linkBase(req));
     kick(req);
@@ -159,7 +182,12 @@ serviceRequestRoutes.post(
 
 serviceRequestRoutes.post(
   "/:requestId/cancel",
-  { allow: canDecideServiceRequest, params: serviceRequestParamsSchema, body: cancelRequestSchema },
+  {
+    allow: canDecideServiceRequest,
+    params: serviceRequestParamsSchema,
+    body: cancelRequestSchema,
+    response: serviceRequestDtoSchema,
+  },
   async (req, _res, { params, body }) => {
     await cancelRequest(req.user!, params.requestId, body.reason, linkBase(req));
     kick(req);
@@ -175,7 +203,7 @@ serviceRequestRoutes.post(
 
 serviceRequestRoutes.get(
   "/:requestId/threads/:companyId",
-  { allow: canSeeThread, params: threadParamsSchema },
+  { allow: canSeeThread, params: threadParamsSchema, response: z.array(requestMessageDtoSchema) },
   (req, _res, { params }) => listThread(req.user!, params.requestId, params.companyId),
 );
 

@@ -188,7 +188,7 @@ async function buildRequestDto(user: Express.User, row: RequestRow, side: Side):
   ]);
   let invitations: InvitationDto[];
   let estimates: EstimateDto[];
-  let actions: string[];
+  let actions: ServiceRequestDto["actions"];
   let chosen = false;
   if (side === "service") {
     const invitation = await findInvitation(row.id, user.companyId);

@@ -1,8 +1,11 @@
+import { z } from "zod";
 import {
+  equipmentDtoSchema,
   equipmentInputSchema,
   equipmentParamsSchema,
   listSitesQuerySchema,
   postalCodeParamsSchema,
+  siteDtoSchema,
   siteInputSchema,
   siteParamsSchema,
 } from "../../shared/sites/schemas.ts";
@@ -30,21 +33,25 @@ import {
 
 export const siteRoutes = createRoutes("/api/sites");
 
-siteRoutes.get("", { allow: canListSites, query: listSitesQuerySchema }, (req, _res, { query }) =>
-  listShopSites(req.user!.companyId, query.includeArchived),
+siteRoutes.get(
+  "",
+  { allow: canListSites, query: listSitesQuerySchema, response: z.array(siteDtoSchema) },
+  (req, _res, { query }) => listShopSites(req.user!.companyId, query.includeArchived),
 );
 
 siteRoutes.post("", { allow: canAddSite, body: siteInputSchema }, async (req, res, { body }) => {
   res.status(201).json(await addSite(req.user!, body));
 });
 
-siteRoutes.get("/:siteId", { allow: canManageSite, params: siteParamsSchema }, (_req, _res, { params }) =>
-  findSite(params.siteId),
+siteRoutes.get(
+  "/:siteId",
+  { allow: canManageSite, params: siteParamsSchema, response: siteDtoSchema },
+  (_req, _res, { params }) => findSite(params.siteId),
 );
 
 siteRoutes.put(
   "/:siteId",
-  { allow: canManageSite, params: siteParamsSchema, body: siteInputSchema },
+  { allow: canManageSite, params: siteParamsSchema, body: siteInputSchema, response: siteDtoSchema },
   (req, _res, { params, body }) => editSite(req.user!, params.siteId, body),
 );
 
@@ -58,7 +65,7 @@ siteRoutes.delete(
 
 siteRoutes.get(
   "/:siteId/equipment",
-  { allow: canManageSite, params: siteParamsSchema },
+  { allow: canManageSite, params: siteParamsSchema, response: z.array(equipmentDtoSchema) },
   (_req, _res, { params }) => listSiteEquipment(params.siteId),
 );
 
@@ -72,7 +79,12 @@ siteRoutes.post(
 
 siteRoutes.put(
   "/:siteId/equipment/:equipmentId",
-  { allow: canManageEquipment, params: equipmentParamsSchema, body: equipmentInputSchema },
+  {
+    allow: canManageEquipment,
+    params: equipmentParamsSchema,
+    body: equipmentInputSchema,
+    response: equipmentDtoSchema,
+  },
   (req, _res, { params, body }) => editEquipment(req.user!, params.equipmentId, body),
 );
 

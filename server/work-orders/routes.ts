@@ -1,3 +1,4 @@
+import { z } from "zod";
 import {
   acceptWorkOrderSchema,
   cancelWorkOrderSchema,
@@ -10,7 +11,10 @@ import {
   postMessageSchema,
   raiseWorkOrderSchema,
   standingProofQuerySchema,
+  workOrderDtoSchema,
+  workOrderMessageDtoSchema,
   workOrderParamsSchema,
+  workOrderSummaryDtoSchema,
 } from "../../shared/work-orders/schemas.ts";
 import type { Request } from "express";
 import { createRoutes } from "../http/route.ts";
@@ -61,19 +65,28 @@ workOrderRoutes.post(
 
 workOrderRoutes.get(
   "",
-  { allow: canListWorkOrders, query: listWorkOrdersQuerySchema },
+  {
+    allow: canListWorkOrders,
+    query: listWorkOrdersQuerySchema,
+    response: z.array(workOrderSummaryDtoSchema),
+  },
   (req, _res, { query }) => listWorkOrders(req.user!, query.status),
 );
 
 workOrderRoutes.get(
   "/:workOrderId",
-  { allow: canSeeWorkOrder, params: workOrderParamsSchema },
+  { allow: canSeeWorkOrder, params: workOrderParamsSchema, response: workOrderDtoSchema },
   (req, _res, { params }) => findWorkOrder(req.user!, params.workOrderId),
 );
 
 workOrderRoutes.post(
   "/:workOrderId/accept",
-  { allow: canSeeWorkOrder, params: workOrderParamsSchema, body: acceptWorkOrderSchema },
+  {
+    allow: canSeeWorkOrder,
+    params: workOrderParamsSchema,
+    body: acceptWorkOrderSchema,
+    response: workOrderDtoSchema,
+  },
   (req, _res, { params, body }) =>
     thenSend(
       req,
@@ -83,14 +96,24 @@ workOrderRoutes.post(
 
 workOrderRoutes.post(
   "/:workOrderId/decline",
-  { allow: canSeeWorkOrder, params: workOrderParamsSchema, body: declineWorkOrderSchema },
+  {
+    allow: canSeeWorkOrder,
+    params: workOrderParamsSchema,
+    body: declineWorkOrderSchema,
+    response: workOrderDtoSchema,
+  },
   (req, _res, { params, body }) =>
     thenSend(req, declineWorkOrder(req.user!, params.workOrderId, body, linkToThis(req, params))),
 );
 
 workOrderRoutes.post(
   "/:workOrderId/complete",
-  { allow: canSeeWorkOrder, params: workOrderParamsSchema, body: completeWorkOrderSchema },
+  {
+    allow: canSeeWorkOrder,
+    params: workOrderParamsSchema,
+    body: completeWorkOrderSchema,
+    response: workOrderDtoSchema,
+  },
   (req, _res, { params, body }) =>
     thenSend(
       req,
@@ -100,21 +123,31 @@ workOrderRoutes.post(
 
 workOrderRoutes.post(
   "/:workOrderId/confirm",
-  { allow: canSeeWorkOrder, params: workOrderParamsSchema },
+  { allow: canSeeWorkOrder, params: workOrderParamsSchema, response: workOrderDtoSchema },
   (req, _res, { params }) =>
     thenSend(req, confirmWorkOrder(req.user!, params.workOrderId, linkToThis(req, params))),
 );
 
 workOrderRoutes.post(
   "/:workOrderId/dispute",
-  { allow: canSeeWorkOrder, params: workOrderParamsSchema, body: disputeWorkOrderSchema },
+  {
+    allow: canSeeWorkOrder,
+    params: workOrderParamsSchema,
+    body: disputeWorkOrderSchema,
+    response: workOrderDtoSchema,
+  },
   (req, _res, { params, body }) =>
     thenSend(req, disputeWorkOrder(req.user!, params.workOrderId, body.reason, linkToThis(req, params))),
 );
 
 workOrderRoutes.post(
   "/:workOrderId/cancel",
-  { allow: canSeeWorkOrder, params: workOrderParamsSchema, body: cancelWorkOrderSchema },
+  {
+    allow: canSeeWorkOrder,
+    params: workOrderParamsSchema,
+    body: cancelWorkOrderSchema,
+    response: workOrderDtoSchema,
+  },
   (req, _res, { params, body }) =>
     thenSend(req, cancelWorkOrder(req.user!, params.workOrderId, body.reason, linkToThis(req, params))),
 );
@@ -138,7 +171,7 @@ workOrderRoutes.get(
 
 workOrderRoutes.get(
   "/:workOrderId/messages",
-  { allow: canSeeWorkOrder, params: workOrderParamsSchema },
+  { allow: canSeeWorkOrder, params: workOrderParamsSchema, response: z.array(workOrderMessageDtoSchema) },
   (req, _res, { params }) => listMessages(req.user!, params.workOrderId),
 );
 

@@ -2,6 +2,7 @@ import { z } from "zod";
 import { singleLineText } from "../api/text.ts";
 import { emailSchema } from "../accounts/schemas.ts";
 import { idParam, typeCodeSchema } from "./schemas.ts";
+import { credentialStates } from "../standing/standing-types.ts";
 
 /** How long a broker's upload link works: two weeks covers a renewal turned round by an agency (common practice). */
 export const BROKER_LINK_DAYS = 14;
@@ -70,71 +71,91 @@ export type AskForCertificate = z.infer<typeof askForCertificateSchema>;
 // one, with nothing to tell a guesser.
 export const brokerTokenParamsSchema = z.object({ token: z.string().regex(/^[A-Za-z0-9_-]{1,100}$/) });
 
-export interface BrokerContactDto {
-  id: number;
-  typeCode: string | null;
-  agency: string;
-  contactName: string;
-  email: string;
-}
+// Response shapes: the server's DTO types are inferred from these and the client parses its answers with them.
 
-export interface BrokerRequestDto {
-  id: number;
-  typeCode: string;
-  credentialId: number | null;
-  shopCompanyId: number | null;
-  agency: string;
-  contactName: string;
-  brokerEmail: string;
-  expiresAt: string;
-  usedAt: string | null;
-  documentId: number | null;
-  createdAt: string;
-  coverageName: string;
-  holderRole: HolderRole;
-  origin: BrokerRequestOrigin;
+export const brokerContactDtoSchema = z.object({
+  id: z.number(),
+  /** Null: the broker for every coverage. */
+  typeCode: z.string().nullable(),
+  agency: z.string(),
+  contactName: z.string(),
+  email: z.string(),
+});
+export type BrokerContactDto = z.infer<typeof brokerContactDtoSchema>;
+
+export const brokerRequestDtoSchema = z.object({
+  id: z.number(),
+  typeCode: z.string(),
+  credentialId: z.number().nullable(),
+  shopCompanyId: z.number().nullable(),
+  agency: z.string(),
+  contactName: z.string(),
+  brokerEmail: z.string(),
+  expiresAt: z.string(),
+  usedAt: z.string().nullable(),
+  documentId: z.number().nullable(),
+  createdAt: z.string(),
+  coverageName: z.string(),
+  holderRole: z.enum(holderRoles),
+  origin: z.enum(brokerRequestOrigins),
   /** The shop to be named, by name, for the office's own list. */
-  shopName: string | null;
-  linkState: BrokerLinkState;
-  reminders: { daysBefore: number; sentAt: string }[];
-}
+  shopName: z.string().nullable(),
+  linkState: z.enum(brokerLinkStates),
+  reminders: z.array(z.object({ daysBefore: z.number(), sentAt: z.string() })),
+});
+export type BrokerRequestDto = z.infer<typeof brokerRequestDtoSchema>;
 
 /** What the shop that asked sees of its request: no broker contact, no token, nothing of other shops. */
-export interface ShopCertificateRequestDto {
-  id: number;
-  companyName: string;
-  coverageName: string;
-  holderRole: HolderRole;
-  linkState: BrokerLinkState;
-  createdAt: string;
-  expiresAt: string;
-  receivedAt: string | null;
-  verifiedAt: string | null;
-}
+export const shopCertificateRequestDtoSchema = z.object({
+  id: z.number(),
+  companyName: z.string(),
+  coverageName: z.string(),
+  holderRole: z.enum(holderRoles),
+  linkState: z.enum(brokerLinkStates),
+  createdAt: z.string(),
+  expiresAt: z.string(),
+  receivedAt: z.string().nullable(),
+  verifiedAt: z.string().nullable(),
+});
+export type ShopCertificateRequestDto = z.infer<typeof shopCertificateRequestDtoSchema>;
 
-export interface ShopCertificateRequestsDto {
-  requests: ShopCertificateRequestDto[];
+export const shopCertificateRequestsDtoSchema = z.object({
+  requests: z.array(shopCertificateRequestDtoSchema),
   /** The service companies this shop works with (on its roster or in a work order), which it may ask. */
-  companies: { id: number; name: string }[];
-  coverages: { code: string; name: string }[];
-}
+  companies: z.array(z.object({ id: z.number(), name: z.string() })),
+  coverages: z.array(z.object({ code: z.string(), name: z.string() })),
+});
+export type ShopCertificateRequestsDto = z.infer<typeof shopCertificateRequestsDtoSchema>;
 
 /** One coverage on the office's broker screen: who its broker is, the policy on file, and every request for it. */
-export interface BrokerCoverageDto {
-  typeCode: string;
-  coverageName: string;
+export const brokerCoverageDtoSchema = z.object({
+  typeCode: z.string(),
+  coverageName: z.string(),
   /** The broker a request for this coverage goes to: its own, else the company's, else none yet. */
-  broker: { source: "coverage" | "company"; agency: string; contactName: string; email: string } | null;
+  broker: brokerContactDtoSchema
+    .omit({ id: true, typeCode: true })
+    .extend({ source: z.enum(["coverage", "company"]) })
+    .nullable(),
   /** The latest policy on file for this coverage, if any (a request from here renews it). */
-  coverage: { credentialId: number; state: string; lapsesAt: string | null } | null;
-  requests: BrokerRequestDto[];
-}
+  coverage: z
+    .object({ credentialId: z.number(), state: z.enum(credentialStates), lapsesAt: z.string().nullable() })
+    .nullable(),
+  requests: z.array(brokerRequestDtoSchema),
+});
+export type BrokerCoverageDto = z.infer<typeof brokerCoverageDtoSchema>;
 
 /** What the broker's page shows: only what the link was made for. */
-export interface BrokerUploadPageDto {
-  companyName: string;
-  coverageName: string;
-  certificateHolder: string | null;
-  holderRole: HolderRole;
-  expiresAt: string;
-}
+export const brokerUploadPageDtoSchema = z.object({
+  companyName: z.string(),
+  coverageName: z.string(),
+  certificateHolder: z.string().nullable(),
+  holderRole: z.enum(holderRoles),
+  expiresAt: z.string(),
+});
+export type BrokerUploadPageDto = z.infer<typeof brokerUploadPageDtoSchema>;
+
+/** The broker's one upload, received: the file's name and size, nothing of where it went. */
+export const brokerUploadReceivedDtoSchema = z.object({
+  received: z.literal(true),
+  document: z.object({ name: z.string(), sizeBytes: z.number() }),
+});

@@ -5,13 +5,14 @@ import { idParam } from "../credentials/schemas.ts";
 export const catalogKinds = ["builder", "control_family"] as const;
 export type CatalogKind = (typeof catalogKinds)[number];
 
-export interface CatalogEntryDto {
-  id: number;
-  kind: CatalogKind;
-  name: string;
-  aliases: string[];
-  active: boolean;
-}
+export const catalogEntryDtoSchema = z.object({
+  id: z.number(),
+  kind: z.enum(catalogKinds),
+  name: z.string(),
+  aliases: z.array(z.string()),
+  active: z.boolean(),
+});
+export type CatalogEntryDto = z.infer<typeof catalogEntryDtoSchema>;
 
 /** The key two spellings of one name share: case and runs of white space do not count. */
 export function catalogKey(text: string): string {

@@ -2,7 +2,7 @@ import { z } from "zod";
 import { multiLineText, singleLineText } from "../api/text.ts";
 import { isoDateSchema } from "../credentials/credential-fields.ts";
 import { requestKinds, type RequestKind } from "../service-requests/schemas.ts";
-import type { StandingSnapshot } from "../work-orders/standing-snapshot.ts";
+import { standingSnapshotSchema } from "../work-orders/standing-snapshot.ts";
 
 /** The kinds of work a history entry records: the same words as a service request. */
 export const workKinds = requestKinds;
@@ -40,6 +40,13 @@ export const partUsedSchema = z.object({
   quantity: z.number().int().min(1, "At least 1").max(9999).default(1),
 });
 export type PartUsed = z.infer<typeof partUsedSchema>;
+/** A part as an answer carries it: stored parts are read back as they were saved, without the input's limits. */
+export const partUsedDtoSchema = z.object({
+  description: z.string(),
+  // Parts saved without a number carry none, or null.
+  partNumber: z.string().nullable().optional(),
+  quantity: z.number(),
+});
 export const MAX_PARTS_USED = 50;
 export const partsUsedSchema = z.array(partUsedSchema).max(MAX_PARTS_USED, `At most ${MAX_PARTS_USED} parts`);
 
@@ -88,43 +95,46 @@ export const historySourceLabels: Record<HistorySource, string> = {
   shop_record: "Recorded by the shop",
 };
 
-export interface HistoryAttachmentDto {
-  documentId: number;
-  name: string;
-  mime: string;
-  sizeBytes: number;
-  url: string;
-}
+export const historyAttachmentDtoSchema = z.object({
+  documentId: z.number(),
+  name: z.string(),
+  mime: z.string(),
+  sizeBytes: z.number(),
+  url: z.string(),
+});
+export type HistoryAttachmentDto = z.infer<typeof historyAttachmentDtoSchema>;
 
-export interface HistoryEntryDto {
+export const historyEntryDtoSchema = z.object({
   /** "wo-12" or "rec-4": unique across both sources. */
-  key: string;
-  source: HistorySource;
-  workOrderId: number | null;
+  key: z.string(),
+  source: z.enum(historySources),
+  workOrderId: z.number().nullable(),
   /** The calendar day of the work at the site (YYYY-MM-DD). */
-  date: string;
-  kind: WorkKind | null;
-  problemArea: ProblemArea | null;
-  serviceCompanyName: string | null;
-  technicianName: string | null;
-  hoursOnSite: number | null;
-  travelHours: number | null;
+  date: z.string(),
+  kind: z.enum(workKinds).nullable(),
+  problemArea: z.enum(problemAreas).nullable(),
+  serviceCompanyName: z.string().nullable(),
+  technicianName: z.string().nullable(),
+  hoursOnSite: z.number().nullable(),
+  travelHours: z.number().nullable(),
   /** What was done: the completion note, or the shop's own words. */
-  note: string | null;
+  note: z.string().nullable(),
   /** The problem as the shop described it when raising the work order. */
-  problem: string | null;
-  partsUsed: PartUsed[];
-  attachments: HistoryAttachmentDto[];
+  problem: z.string().nullable(),
+  partsUsed: z.array(partUsedDtoSchema),
+  attachments: z.array(historyAttachmentDtoSchema),
   /** The technician's standing when the work was completed (platform entries only). */
-  standingSnapshot: StandingSnapshot | null;
+  standingSnapshot: standingSnapshotSchema.nullable(),
   /** Set when the same kind of problem came back within the repeat window: the key of the earlier entry. */
-  repeatOf: string | null;
-}
+  repeatOf: z.string().nullable(),
+});
+export type HistoryEntryDto = z.infer<typeof historyEntryDtoSchema>;
 
-export interface MachineHistoryDto {
-  machineId: number;
-  entries: HistoryEntryDto[];
-}
+export const machineHistoryDtoSchema = z.object({
+  machineId: z.number(),
+  entries: z.array(historyEntryDtoSchema),
+});
+export type MachineHistoryDto = z.infer<typeof machineHistoryDtoSchema>;
 
 /** A repeat fault: the same problem back on the same machine within this many days (common practice in maintenance). */
 export const REPEAT_FAULT_WINDOW_DAYS = 90;

@@ -1,7 +1,9 @@
 import type { EstimateStatus, RequestStatus } from "./schemas.ts";
 
-export type RequestAction = "accept" | "cancel" | "expire";
-export type CompanyAction = "estimate" | "pass" | "revise" | "withdraw" | "message";
+export const requestActions = ["accept", "cancel", "expire"] as const;
+export type RequestAction = (typeof requestActions)[number];
+export const companyActionNames = ["estimate", "pass", "revise", "withdraw", "message"] as const;
+export type CompanyAction = (typeof companyActionNames)[number];
 
 /** A request's own moves: who may take each, the status it needs and the one it leaves. */
 export const REQUEST_TRANSITIONS: Record<

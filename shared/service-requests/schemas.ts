@@ -3,7 +3,8 @@ import { z } from "zod";
 import { idParam } from "../credentials/schemas.ts";
 import { isoDateSchema } from "../credentials/credential-fields.ts";
 import { machineTechnologies } from "../technicians/schemas.ts";
-import type { StandingSnapshot } from "../work-orders/standing-snapshot.ts";
+import { requirementStatuses, standings } from "../standing/standing-types.ts";
+import { companyActionNames, requestActions } from "./request-transitions.ts";
 
 export const requestKinds = ["repair", "preventive_maintenance", "installation", "parts_only"] as const;
 export type RequestKind = (typeof requestKinds)[number];
@@ -115,188 +116,219 @@ export const followUpNoteSchema = z.object({
 });
 export const requestMessageSchema = z.object({ body: multiLineText().trim().min(1).max(5000) });
 
-export interface RoutedCompanyDto {
-  companyId: number;
-  companyName: string;
-  clearedTechnicians: number;
-  oemTrained: boolean;
-  nearestMiles: number | null;
-  source: "routing" | "buyer";
-}
+// Response shapes: the server's DTO types are inferred from these and the client parses its answers with them.
 
-export interface RoutingPreviewDto {
-  count: number;
-  companies: RoutedCompanyDto[];
+const invitationSources = ["routing", "buyer"] as const;
+const threadSides = ["shop", "service"] as const;
+const answers = ["estimate", "pass"] as const;
+
+export const routedCompanyDtoSchema = z.object({
+  companyId: z.number(),
+  companyName: z.string(),
+  clearedTechnicians: z.number(),
+  oemTrained: z.boolean(),
+  nearestMiles: z.number().nullable(),
+  source: z.enum(invitationSources),
+});
+export type RoutedCompanyDto = z.infer<typeof routedCompanyDtoSchema>;
+
+export const routingPreviewDtoSchema = z.object({
+  count: z.number(),
+  companies: z.array(routedCompanyDtoSchema),
   /** Roster companies the buyer asked for that cannot be invited, with the reason. */
-  refused: { companyId: number; reason: string }[];
-}
+  refused: z.array(z.object({ companyId: z.number(), reason: z.string() })),
+});
+export type RoutingPreviewDto = z.infer<typeof routingPreviewDtoSchema>;
 
-export interface EstimateTotalDto {
-  travelCents: number;
-  labourCents: number;
-  mileageCents: number;
-  partsCents: number;
-  totalCents: number;
+export const estimateTotalDtoSchema = z.object({
+  travelCents: z.number(),
+  labourCents: z.number(),
+  mileageCents: z.number(),
+  partsCents: z.number(),
+  totalCents: z.number(),
   /** Parts listed without a price: the total leaves them out. */
-  unpricedParts: number;
-  basis: "before tax";
-}
+  unpricedParts: z.number(),
+  basis: z.literal("before tax"),
+});
+export type EstimateTotalDto = z.infer<typeof estimateTotalDtoSchema>;
 
-export interface EstimateRevisionDto {
-  revision: number;
-  technicianId: number;
-  technicianName: string;
-  hourlyRateCents: number;
-  travelRateCents: number;
-  mileageRateCents: number;
-  onSiteHours: number;
-  earliestArrival: string;
-  parts: EstimatePart[];
-  note: string | null;
-  validUntil: string;
-  distanceMiles: number;
-  driveHours: number;
-  total: EstimateTotalDto;
-  createdAt: string;
-}
+/** A part as the stored estimate carries it (the input's defaults already applied). */
+const estimatePartDtoSchema = z.object({
+  description: z.string(),
+  quantity: z.number(),
+  unitPriceCents: z.number().nullable(),
+});
 
-export interface EstimateDto {
-  id: number;
-  requestId: number;
-  companyId: number;
-  companyName: string;
-  status: EstimateStatus;
-  current: EstimateRevisionDto;
-  revisions: EstimateRevisionDto[];
-}
+export const estimateRevisionDtoSchema = z.object({
+  revision: z.number(),
+  technicianId: z.number(),
+  technicianName: z.string(),
+  hourlyRateCents: z.number(),
+  travelRateCents: z.number(),
+  mileageRateCents: z.number(),
+  onSiteHours: z.number(),
+  earliestArrival: z.string(),
+  parts: z.array(estimatePartDtoSchema),
+  note: z.string().nullable(),
+  validUntil: z.string(),
+  distanceMiles: z.number(),
+  driveHours: z.number(),
+  total: estimateTotalDtoSchema,
+  createdAt: z.string(),
+});
+export type EstimateRevisionDto = z.infer<typeof estimateRevisionDtoSchema>;
 
-export interface AttachmentDto {
-  id: number;
-  name: string;
-  mime: string;
-  sizeBytes: number;
-  url: string;
-}
+export const estimateDtoSchema = z.object({
+  id: z.number(),
+  requestId: z.number(),
+  companyId: z.number(),
+  companyName: z.string(),
+  status: z.enum(estimateStatuses),
+  current: estimateRevisionDtoSchema,
+  revisions: z.array(estimateRevisionDtoSchema),
+});
+export type EstimateDto = z.infer<typeof estimateDtoSchema>;
 
-export interface RequestMessageDto {
-  id: number;
-  side: "shop" | "service";
-  author: string;
-  body: string;
-  attachment: { name: string; mime: string; sizeBytes: number; url: string } | null;
-  createdAt: string;
-}
+/** A file the shop attached to its request (the POST answers its id and link only). */
+export const attachmentAddedDtoSchema = z.object({ id: z.number(), url: z.string() });
 
-export interface InvitationDto {
-  companyId: number;
-  companyName: string;
-  source: "routing" | "buyer";
-  invitedAt: string;
-  firstAnswerAt: string | null;
-  answer: "estimate" | "pass" | null;
-  passReason: string | null;
-}
+export const attachmentDtoSchema = attachmentAddedDtoSchema.extend({
+  name: z.string(),
+  mime: z.string(),
+  sizeBytes: z.number(),
+});
+export type AttachmentDto = z.infer<typeof attachmentDtoSchema>;
 
-export interface TimelineEventDto {
-  id: number;
-  kind: string;
-  actor: string | null;
-  thresholdHours: number | null;
-  note: string | null;
-  createdAt: string;
-}
+export const requestMessageDtoSchema = z.object({
+  id: z.number(),
+  side: z.enum(threadSides),
+  author: z.string(),
+  body: z.string(),
+  attachment: attachmentDtoSchema.omit({ id: true }).nullable(),
+  createdAt: z.string(),
+});
+export type RequestMessageDto = z.infer<typeof requestMessageDtoSchema>;
 
-export interface ServiceRequestDto {
-  id: number;
-  status: RequestStatus;
-  kind: RequestKind;
-  machineState: MachineState;
-  timing: "soonest" | "window";
-  windowStart: string | null;
-  windowEnd: string | null;
-  technology: string;
-  builder: string | null;
-  controlFamily: string | null;
-  problem: string;
-  requirementSet: { id: number | null; name: string };
-  machine: { id: number; builder: string; controlFamily: string; model: string } | null;
+export const invitationDtoSchema = z.object({
+  companyId: z.number(),
+  companyName: z.string(),
+  source: z.enum(invitationSources),
+  invitedAt: z.string(),
+  firstAnswerAt: z.string().nullable(),
+  answer: z.enum(answers).nullable(),
+  passReason: z.string().nullable(),
+});
+export type InvitationDto = z.infer<typeof invitationDtoSchema>;
+
+export const timelineEventDtoSchema = z.object({
+  id: z.number(),
+  kind: z.string(),
+  actor: z.string().nullable(),
+  thresholdHours: z.number().nullable(),
+  note: z.string().nullable(),
+  createdAt: z.string(),
+});
+export type TimelineEventDto = z.infer<typeof timelineEventDtoSchema>;
+
+export const serviceRequestDtoSchema = z.object({
+  id: z.number(),
+  status: z.enum(requestStatuses),
+  kind: z.enum(requestKinds),
+  machineState: z.enum(machineStates),
+  timing: z.enum(["soonest", "window"]),
+  windowStart: z.string().nullable(),
+  windowEnd: z.string().nullable(),
+  technology: z.string(),
+  builder: z.string().nullable(),
+  controlFamily: z.string().nullable(),
+  problem: z.string(),
+  requirementSet: z.object({ id: z.number().nullable(), name: z.string() }),
+  machine: z
+    .object({ id: z.number(), builder: z.string(), controlFamily: z.string(), model: z.string() })
+    .nullable(),
   /** The street appears only for the shop, and for the chosen company once accepted. */
-  site: {
-    id: number;
-    name: string | null;
-    city: string;
-    state: string;
-    postalCode: string;
-    street: string | null;
-    timeZone: string;
-  };
-  sentAt: string;
-  decidedAt: string | null;
-  cancelReason: string | null;
-  workOrderId: number | null;
-  attachments: AttachmentDto[];
-  /** What the caller may do now, decided by the server. */
-  actions: string[];
+  site: z.object({
+    id: z.number(),
+    name: z.string().nullable(),
+    city: z.string(),
+    state: z.string(),
+    postalCode: z.string(),
+    street: z.string().nullable(),
+    timeZone: z.string(),
+  }),
+  sentAt: z.string(),
+  decidedAt: z.string().nullable(),
+  cancelReason: z.string().nullable(),
+  workOrderId: z.number().nullable(),
+  attachments: z.array(attachmentDtoSchema),
+  /** What the caller may do now, decided by the server (a coordinator may only log a follow-up). */
+  actions: z.array(z.enum([...requestActions, ...companyActionNames, "log_follow_up"])),
   /** Shop: everyone invited. Company: its own invitation only. */
-  invitations: InvitationDto[];
+  invitations: z.array(invitationDtoSchema),
   /** Shop: every estimate. Company: its own. */
-  estimates: EstimateDto[];
-  timeline: TimelineEventDto[];
-}
+  estimates: z.array(estimateDtoSchema),
+  timeline: z.array(timelineEventDtoSchema),
+});
+export type ServiceRequestDto = z.infer<typeof serviceRequestDtoSchema>;
 
-export interface ServiceRequestSummaryDto {
-  id: number;
-  status: RequestStatus;
-  kind: RequestKind;
-  machineState: MachineState;
-  problem: string;
-  siteArea: string;
-  sentAt: string;
-  invited: number;
-  estimates: number;
+export const serviceRequestSummaryDtoSchema = z.object({
+  id: z.number(),
+  status: z.enum(requestStatuses),
+  kind: z.enum(requestKinds),
+  machineState: z.enum(machineStates),
+  problem: z.string(),
+  siteArea: z.string(),
+  sentAt: z.string(),
+  invited: z.number(),
+  estimates: z.number(),
   /** Company side: its own answer. */
-  answer: "estimate" | "pass" | null;
-}
+  answer: z.enum(answers).nullable(),
+});
+export type ServiceRequestSummaryDto = z.infer<typeof serviceRequestSummaryDtoSchema>;
 
-export interface ComparisonRequirementDto {
-  label: string;
-  status: string;
-  detail: string;
-}
+export const comparisonRequirementDtoSchema = z.object({
+  label: z.string(),
+  status: z.enum(requirementStatuses),
+  detail: z.string(),
+});
+export type ComparisonRequirementDto = z.infer<typeof comparisonRequirementDtoSchema>;
 
-export interface ComparisonRowDto {
-  estimateId: number;
-  companyId: number;
-  companyName: string;
-  technicianId: number;
-  technicianName: string;
-  standing: StandingSnapshot["standing"];
-  requirements: ComparisonRequirementDto[];
-  distanceMiles: number;
-  driveHours: number;
-  earliestArrival: string;
-  total: EstimateTotalDto;
-  revision: number;
-  rating: { count: number; average: number | null; score: number };
-  medianResponseMinutes: number | null;
-  acceptedEstimates: number;
-  validUntil: string;
-}
+export const comparisonRowDtoSchema = z.object({
+  estimateId: z.number(),
+  companyId: z.number(),
+  companyName: z.string(),
+  technicianId: z.number(),
+  technicianName: z.string(),
+  standing: z.enum(standings),
+  requirements: z.array(comparisonRequirementDtoSchema),
+  distanceMiles: z.number(),
+  driveHours: z.number(),
+  earliestArrival: z.string(),
+  total: estimateTotalDtoSchema,
+  revision: z.number(),
+  rating: z.object({ count: z.number(), average: z.number().nullable(), score: z.number() }),
+  medianResponseMinutes: z.number().nullable(),
+  acceptedEstimates: z.number(),
+  validUntil: z.string(),
+});
+export type ComparisonRowDto = z.infer<typeof comparisonRowDtoSchema>;
 
-export interface ComparisonDto {
-  requestId: number;
-  timeZone: string;
-  rows: ComparisonRowDto[];
-}
+export const comparisonDtoSchema = z.object({
+  requestId: z.number(),
+  timeZone: z.string(),
+  rows: z.array(comparisonRowDtoSchema),
+});
+export type ComparisonDto = z.infer<typeof comparisonDtoSchema>;
 
-export interface FollowUpRowDto {
-  requestId: number;
-  shopName: string;
-  machineState: MachineState;
-  siteArea: string;
-  sentAt: string;
-  invited: number;
-  answered: number;
-  remindersSent: number;
-  lastAction: string | null;
-}
+export const followUpRowDtoSchema = z.object({
+  requestId: z.number(),
+  shopName: z.string(),
+  machineState: z.enum(machineStates),
+  siteArea: z.string(),
+  sentAt: z.string(),
+  invited: z.number(),
+  answered: z.number(),
+  remindersSent: z.number(),
+  lastAction: z.string().nullable(),
+});
+export type FollowUpRowDto = z.infer<typeof followUpRowDtoSchema>;

@@ -4,7 +4,7 @@ import { isoDateSchema } from "../credentials/credential-fields.ts";
 import { postalCodeSchema, timeZoneSchema } from "../accounts/schemas.ts";
 import { idParam } from "../credentials/schemas.ts";
 import { onSiteDetailsInputSchema, phoneSchema } from "../work-orders/schemas.ts";
-import { machineTechnologies, type MachineTechnology } from "../technicians/schemas.ts";
+import { machineTechnologies } from "../technicians/schemas.ts";
 
 export const siteParamsSchema = z.object({ siteId: idParam });
 export const equipmentParamsSchema = z.object({ siteId: idParam, equipmentId: idParam });
@@ -51,43 +51,53 @@ export type EquipmentInput = z.infer<typeof equipmentInputSchema>;
 export const machineStates = ["running", "down", "out_of_service", "sold"] as const;
 export type MachineState = (typeof machineStates)[number];
 
-export interface EquipmentDto {
-  id: number;
-  siteId: number;
-  builder: string;
-  controlFamily: string;
-  technology: MachineTechnology;
-  model: string;
-  serialNumber: string | null;
-  yearBuilt?: number | null;
-  inServiceOn?: string | null;
-  building?: string | null;
-  bay?: string | null;
-  notes?: string | null;
-  state?: MachineState;
-}
+// Response shapes: the server's DTO types are inferred from these and the client parses its answers with them.
 
-export interface SiteDto {
-  id: number;
-  companyId: number;
-  name: string;
-  addressLine: string;
-  postalCode: string;
-  city: string | null;
-  state: string | null;
-  timeZone: string;
-  latitude: number;
-  longitude: number;
-  contactName: string | null;
-  contactPhone: string | null;
-  safetyInductionNote: string | null;
-  defaultPoNumber: string | null;
-  defaultNotToExceedCents: number | null;
-  active: boolean;
-  equipmentCount: number;
-  createdAt: string;
-  updatedAt: string;
-}
+/** One machine at a site, as the site page and the machine record read it. */
+export const equipmentDtoSchema = z.object({
+  id: z.number(),
+  siteId: z.number(),
+  builder: z.string(),
+  controlFamily: z.string(),
+  technology: z.enum(machineTechnologies),
+  model: z.string(),
+  serialNumber: z.string().nullable(),
+  yearBuilt: z.number().nullable(),
+  inServiceOn: z.string().nullable(),
+  building: z.string().nullable(),
+  bay: z.string().nullable(),
+  notes: z.string().nullable(),
+  state: z.enum(machineStates),
+});
+export type EquipmentDto = z.infer<typeof equipmentDtoSchema>;
+
+/** A machine as the shop's machine pages read it: its site's equipment row and the site's name. */
+export const machineDtoSchema = equipmentDtoSchema.extend({ siteName: z.string() });
+export type MachineDto = z.infer<typeof machineDtoSchema>;
+
+export const siteDtoSchema = z.object({
+  id: z.number(),
+  companyId: z.number(),
+  name: z.string(),
+  addressLine: z.string(),
+  postalCode: z.string(),
+  // From the offline ZIP table: null for a code it does not hold.
+  city: z.string().nullable(),
+  state: z.string().nullable(),
+  timeZone: z.string(),
+  latitude: z.number(),
+  longitude: z.number(),
+  contactName: z.string().nullable(),
+  contactPhone: z.string().nullable(),
+  safetyInductionNote: z.string().nullable(),
+  defaultPoNumber: z.string().nullable(),
+  defaultNotToExceedCents: z.number().nullable(),
+  active: z.boolean(),
+  equipmentCount: z.number(),
+  createdAt: z.string(),
+  updatedAt: z.string(),
+});
+export type SiteDto = z.infer<typeof siteDtoSchema>;
 
 /** What an offline ZIP lookup tells the site form: the place and a suggested time zone. */
 export interface PostalPlaceDto {

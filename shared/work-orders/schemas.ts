@@ -2,15 +2,8 @@ import { z } from "zod";
 import { singleLineText, multiLineText } from "../api/text.ts";
 import { idParam } from "../credentials/schemas.ts";
 import { isoDateSchema } from "../credentials/credential-fields.ts";
-import type { StandingSnapshot } from "./standing-snapshot.ts";
-import {
-  partsUsedSchema,
-  problemAreas,
-  workKinds,
-  type PartUsed,
-  type ProblemArea,
-  type WorkKind,
-} from "../machines/service-history.ts";
+import { standingSnapshotSchema } from "./standing-snapshot.ts";
+import { partUsedDtoSchema, partsUsedSchema, problemAreas, workKinds } from "../machines/service-history.ts";
 
 export const workOrderStatuses = [
   "requested",
@@ -144,104 +137,121 @@ export const standingProofQuerySchema = z.object({
   at: z.enum(["accepted", "completed"]).optional(),
 });
 
-export interface WorkOrderSummaryDto {
-  id: number;
-  status: WorkOrderStatus;
-  urgency: Urgency;
-  technology: string;
-  problem: string;
-  shopName: string;
-  siteName: string;
-  technicianName: string;
-  serviceCompanyName: string;
-  createdAt: string;
-  updatedAt: string;
-}
+// Response shapes: the server's DTO types are inferred from these and the client parses its answers with them.
 
-export interface WorkOrderEquipmentDto {
-  id: number;
-  builder: string;
-  controlFamily: string | null;
-  technology: string;
-  model: string | null;
-  serialNumber: string | null;
-}
+const personRefSchema = z.object({ id: z.number(), name: z.string() });
 
-export interface OnSiteDetailsDto {
-  addressLine: string;
-  city: string | null;
-  state: string | null;
-  postalCode: string | null;
-  siteContactName: string | null;
-  siteContactPhone: string | null;
-  poNumber: string | null;
-  notToExceedCents: number | null;
-  safetyInductionNote: string | null;
-}
+export const workOrderSummaryDtoSchema = z.object({
+  id: z.number(),
+  status: z.enum(workOrderStatuses),
+  urgency: z.enum(urgencies),
+  technology: z.string(),
+  problem: z.string(),
+  shopName: z.string(),
+  siteName: z.string(),
+  technicianName: z.string(),
+  serviceCompanyName: z.string(),
+  createdAt: z.string(),
+  updatedAt: z.string(),
+});
+export type WorkOrderSummaryDto = z.infer<typeof workOrderSummaryDtoSchema>;
 
-export interface WorkOrderDto {
-  id: number;
-  status: WorkOrderStatus;
+/** The machine as the work order names it; a machine removed from its site leaves only its id and technology. */
+export const workOrderEquipmentDtoSchema = z.object({
+  id: z.number(),
+  builder: z.string(),
+  controlFamily: z.string().nullable(),
+  technology: z.string(),
+  model: z.string().nullable(),
+  serialNumber: z.string().nullable(),
+});
+export type WorkOrderEquipmentDto = z.infer<typeof workOrderEquipmentDtoSchema>;
+
+export const onSiteDetailsDtoSchema = z.object({
+  addressLine: z.string(),
+  city: z.string().nullable(),
+  state: z.string().nullable(),
+  postalCode: z.string().nullable(),
+  siteContactName: z.string().nullable(),
+  siteContactPhone: z.string().nullable(),
+  poNumber: z.string().nullable(),
+  notToExceedCents: z.number().nullable(),
+  safetyInductionNote: z.string().nullable(),
+});
+export type OnSiteDetailsDto = z.infer<typeof onSiteDetailsDtoSchema>;
+
+export const workOrderDtoSchema = z.object({
+  id: z.number(),
+  status: z.enum(workOrderStatuses),
   /** Which side the caller is on, and what the caller may do next. */
-  yourSide: WorkOrderSide;
-  actions: WorkOrderAction[];
-  urgency: Urgency;
-  technology: string;
-  problem: string;
-  preferredDates: string[];
-  shop: { companyId: number; name: string };
-  site: { id: number; name: string; postalCode: string | null; timeZone: string | null };
-  equipment: WorkOrderEquipmentDto | null;
-  technician: { id: number; name: string; companyId: number; companyName: string };
-  requirementSet: { id: number; name: string } | null;
+  yourSide: z.enum(workOrderSides),
+  actions: z.array(z.enum(workOrderActions)),
+  urgency: z.enum(urgencies),
+  technology: z.string(),
+  problem: z.string(),
+  preferredDates: z.array(z.string()),
+  shop: z.object({ companyId: z.number(), name: z.string() }),
+  site: z.object({
+    id: z.number(),
+    name: z.string(),
+    postalCode: z.string().nullable(),
+    timeZone: z.string().nullable(),
+  }),
+  equipment: workOrderEquipmentDtoSchema.nullable(),
+  technician: z.object({ id: z.number(), name: z.string(), companyId: z.number(), companyName: z.string() }),
+  requirementSet: z.object({ id: z.number(), name: z.string() }).nullable(),
   /** Left out for the service side until it has accepted the job. */
-  onSite?: OnSiteDetailsDto;
-  declineReason: string | null;
-  proposedDate: string | null;
-  arrivalAt: string | null;
-  cancelReason: string | null;
-  disputeReason: string | null;
+  onSite: onSiteDetailsDtoSchema.optional(),
+  declineReason: z.string().nullable(),
+  proposedDate: z.string().nullable(),
+  arrivalAt: z.string().nullable(),
+  cancelReason: z.string().nullable(),
+  disputeReason: z.string().nullable(),
   /** The job this one was copied from, and (shop side only) the copies sent on after a decline. */
-  copiedFromId: number | null;
-  copies: number[];
-  canSendAgain: boolean;
-  hoursWorked: number | null;
-  travelHours: number | null;
-  completionNote: string | null;
+  copiedFromId: z.number().nullable(),
+  copies: z.array(z.number()),
+  canSendAgain: z.boolean(),
+  hoursWorked: z.number().nullable(),
+  travelHours: z.number().nullable(),
+  completionNote: z.string().nullable(),
   /** For the machine's history: the kind of work, where the trouble was, and the parts fitted at completion. */
-  kind: WorkKind | null;
-  problemArea: ProblemArea | null;
-  partsUsed: PartUsed[];
-  snapshotAccepted: StandingSnapshot | null;
-  snapshotCompleted: StandingSnapshot | null;
-  createdBy: { id: number; name: string };
-  createdAt: string;
-  acceptedAt: string | null;
-  declinedAt: string | null;
-  completedAt: string | null;
-  confirmedAt: string | null;
-  cancelledAt: string | null;
-  disputedAt: string | null;
-  updatedAt: string;
-}
+  kind: z.enum(workKinds).nullable(),
+  problemArea: z.enum(problemAreas).nullable(),
+  partsUsed: z.array(partUsedDtoSchema),
+  snapshotAccepted: standingSnapshotSchema.nullable(),
+  snapshotCompleted: standingSnapshotSchema.nullable(),
+  createdBy: personRefSchema,
+  createdAt: z.string(),
+  acceptedAt: z.string().nullable(),
+  declinedAt: z.string().nullable(),
+  completedAt: z.string().nullable(),
+  confirmedAt: z.string().nullable(),
+  cancelledAt: z.string().nullable(),
+  disputedAt: z.string().nullable(),
+  updatedAt: z.string(),
+});
+export type WorkOrderDto = z.infer<typeof workOrderDtoSchema>;
 
-export interface WorkOrderMessageDto {
-  id: number;
-  workOrderId: number;
-  author: { id: number; name: string };
-  side: WorkOrderSide;
-  body: string;
-  attachment: {
-    documentId: number;
-    name: string;
-    mime: string;
-    sizeBytes: number;
-    url: string;
-    /** A small picture made at upload for an image attachment, with its pixel size so the page does not jump. */
-    thumbnail: { url: string; width: number; height: number } | null;
-  } | null;
-  createdAt: string;
-}
+export const workOrderMessageDtoSchema = z.object({
+  id: z.number(),
+  workOrderId: z.number(),
+  author: personRefSchema,
+  side: z.enum(workOrderSides),
+  body: z.string(),
+  attachment: z
+    .object({
+      documentId: z.number(),
+      name: z.string(),
+      mime: z.string(),
+      sizeBytes: z.number(),
+      url: z.string(),
+      /** A small picture made at upload for an image attachment, with its pixel size so the page does not jump. */
+      thumbnail: z.object({ url: z.string(), width: z.number(), height: z.number() }).nullable(),
+    })
+    .nullable(),
+  createdAt: z.string(),
+});
+export type WorkOrderMessageDto = z.infer<typeof workOrderMessageDtoSchema>;
 
 /** The 409 body's `fields` name each unmet requirement when a technician is not cleared. */
 export interface NotClearedProblem {

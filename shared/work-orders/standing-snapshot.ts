@@ -1,49 +1,60 @@
+import { z } from "zod";
 import type { CredentialFields } from "../credentials/credential-fields.ts";
-import type { RequirementStatus, Standing, StandingResult, UnmetReason } from "../standing/standing-types.ts";
+import {
+  requirementStatuses,
+  standings,
+  unmetReasons,
+  type Standing,
+  type StandingResult,
+} from "../standing/standing-types.ts";
 
 /** A credential as the snapshot names it: enough to find the document again and to show what it said. */
-export interface SnapshotCredential {
-  id: number;
-  typeCode: string;
-  typeName: string;
+export const snapshotCredentialSchema = z.object({
+  id: z.number(),
+  typeCode: z.string(),
+  typeName: z.string(),
   /** Policy number, card number, license or certificate number: whatever the document is known by. */
-  reference: string | null;
+  reference: z.string().nullable(),
   /** The field the reference was read from (policyNumber, cardNumber...), so each reader's field rule can apply to it. */
-  referenceField?: string | null;
+  referenceField: z.string().nullable().optional(),
   /** First instant it no longer counts (ISO), null = never. */
-  lapsesAt: string | null;
-}
+  lapsesAt: z.string().nullable(),
+});
+export type SnapshotCredential = z.infer<typeof snapshotCredentialSchema>;
 
-export interface SnapshotRequirement {
-  label: string;
-  status: RequirementStatus;
-  reason: UnmetReason | null;
-  detail: string;
+export const snapshotRequirementSchema = z.object({
+  label: z.string(),
+  status: z.enum(requirementStatuses),
+  reason: z.enum(unmetReasons).nullable(),
+  detail: z.string(),
   /** How it was met ("GL $1M + umbrella $4M each occurrence"); null when unmet. Absent on snapshots taken before. */
-  metBy?: string | null;
+  metBy: z.string().nullable().optional(),
   /** The credential that met it (or, when unmet, the closest one on file). */
-  credential: SnapshotCredential | null;
-}
+  credential: snapshotCredentialSchema.nullable(),
+});
+export type SnapshotRequirement = z.infer<typeof snapshotRequirementSchema>;
 
-export interface SnapshotTarget {
+export const snapshotTargetSchema = z.object({
   /** Null = the platform baseline. */
-  requirementSetId: number | null;
-  name: string;
-  standing: Standing;
-  earliestLapse: string | null;
-  requirements: SnapshotRequirement[];
-}
+  requirementSetId: z.number().nullable(),
+  name: z.string(),
+  standing: z.enum(standings),
+  earliestLapse: z.string().nullable(),
+  requirements: z.array(snapshotRequirementSchema),
+});
+export type SnapshotTarget = z.infer<typeof snapshotTargetSchema>;
 
 /** Proof of a technician's standing at one instant, kept on the work order whatever changes later. */
-export interface StandingSnapshot {
-  takenAt: string;
-  technicianId: number;
-  technicianName: string;
-  companyName: string;
+export const standingSnapshotSchema = z.object({
+  takenAt: z.string(),
+  technicianId: z.number(),
+  technicianName: z.string(),
+  companyName: z.string(),
   /** The worst of the targets' standings. */
-  standing: Standing;
-  targets: SnapshotTarget[];
-}
+  standing: z.enum(standings),
+  targets: z.array(snapshotTargetSchema),
+});
+export type StandingSnapshot = z.infer<typeof standingSnapshotSchema>;
 
 export interface SnapshotCredentialSource {
   id: number;

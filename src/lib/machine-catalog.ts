@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
 import { z } from "zod";
-import { catalogKinds, type CatalogKind } from "@shared/machines/catalog.ts";
+import { catalogEntryDtoSchema, type CatalogEntryDto, type CatalogKind } from "@shared/machines/catalog.ts";
 import { api } from "@/lib/api-client.ts";
 
 /** Builders and control families every machine form picks from; read by every signed-in role. */
@@ -9,17 +9,9 @@ export const machineCatalogKeys = {
   list: () => [...machineCatalogKeys.all, "list"] as const,
 };
 
-// Run-time check of shared/machines/catalog.ts CatalogEntryDto.
-export const catalogEntrySchema = z.object({
-  id: z.number(),
-  kind: z.enum(catalogKinds),
-  name: z.string(),
-  aliases: z.array(z.string()),
-  active: z.boolean(),
-});
-export type CatalogEntry = z.infer<typeof catalogEntrySchema>;
+export type CatalogEntry = CatalogEntryDto;
 
-export const getMachineCatalog = () => api.get("/machine-catalog", z.array(catalogEntrySchema));
+export const getMachineCatalog = () => api.get("/machine-catalog", z.array(catalogEntryDtoSchema));
 
 export const machineCatalogQuery = () =>
   queryOptions({ queryKey: machineCatalogKeys.list(), queryFn: getMachineCatalog, staleTime: 5 * 60_000 });

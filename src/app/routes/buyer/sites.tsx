@@ -11,7 +11,7 @@ import { machineKeys } from "@/features/machines/api/machine-keys.ts";
 import { useArchiveSite } from "@/features/sites/api/archive-site.ts";
 import { sitesQuery } from "@/features/sites/api/get-sites.ts";
 import { useSaveSite } from "@/features/sites/api/save-site.ts";
-import type { Site } from "@/features/sites/api/site-shapes.ts";
+import type { SiteDto as Site } from "@shared/sites/schemas.ts";
 import { SiteEquipment } from "@/features/sites/components/site-equipment.tsx";
 import { SiteForm } from "@/features/sites/components/site-form.tsx";
 import { queryClient } from "@/lib/query-client.ts";

@@ -1,18 +1,8 @@
 import { useQuery } from "@tanstack/react-query";
 import { useSearchParams } from "react-router-dom";
-import { z } from "zod";
+import { gateCheckDtoSchema } from "@shared/gate/check-answer.ts";
 import { api } from "@/lib/api-client.ts";
 import { formatDateTime } from "@/lib/format-date-time.ts";
-
-const checkSchema = z.object({
-  state: z.enum(["cleared", "not_cleared", "expired", "invalid"]),
-  checkedAt: z.string(),
-  technician: z.object({ name: z.string(), company: z.string(), photo: z.string().optional() }).optional(),
-  site: z.object({ name: z.string() }).nullable().optional(),
-  against: z.string().optional(),
-  lines: z.array(z.object({ requirement: z.string(), status: z.string() })).optional(),
-  workOrder: z.object({ id: z.number(), technology: z.string() }).nullable().optional(),
-});
 
 const headline = {
   cleared: "Cleared right now",
@@ -31,9 +21,11 @@ export function Component() {
   if (search.get("site")) query.set("site", search.get("site")!);
   const check = useQuery({
     queryKey: ["gate-check", query.toString()],
-    queryFn: () => api.get(`/gate/check?${query.toString()}`, checkSchema),
+    queryFn: () => api.get(`/gate/check?${query.toString()}`, gateCheckDtoSchema),
     retry: false,
   });
+  // A code that is not a badge, or has run out, answers only its state and the time.
+  const read = check.data && "technician" in check.data ? check.data : null;
   return (
     <main className="mx-auto max-w-lg p-6">
       <h1 className="text-2xl font-semibold">Gate check</h1>
@@ -47,37 +39,36 @@ export function Component() {
           >
             {headline[check.data.state]}
           </p>
-          {check.data.technician?.photo && (
+          {read?.technician.photo && (
             <img
-              src={check.data.technician.photo}
-              alt={`Photo of ${check.data.technician.name}`}
+              src={read.technician.photo}
+              alt={`Photo of ${read.technician.name}`}
               className="h-40 w-40 rounded object-cover"
             />
           )}
-          {check.data.technician && (
+          {read && (
             <p>
-              <span className="font-semibold">{check.data.technician.name}</span>,{" "}
-              {check.data.technician.company}
+              <span className="font-semibold">{read.technician.name}</span>, {read.technician.company}
             </p>
           )}
-          {check.data.against && (
+          {read && (
             <p>
-              Against {check.data.against}
-              {check.data.site ? ` at ${check.data.site.name}` : ""}
+              Against {read.against}
+              {read.site ? ` at ${read.site.name}` : ""}
             </p>
           )}
-          {check.data.lines && (
+          {read && (
             <ul className="list-disc pl-6">
-              {check.data.lines.map((l) => (
+              {read.lines.map((l) => (
                 <li key={l.requirement}>
                   {l.requirement}: {lineState[l.status] ?? l.status}
                 </li>
               ))}
             </ul>
           )}
-          {check.data.workOrder && (
+          {read?.workOrder && (
             <p>
-              Expected today: work order #{check.data.workOrder.id} ({check.data.workOrder.technology})
+              Expected today: work order #{read.workOrder.id} ({read.workOrder.technology})
             </p>
           )}
           <p className="text-sm text-slate-700">Checked {formatDateTime(check.data.checkedAt)}</p>

@@ -14,6 +14,7 @@ import { RequestFacts } from "@/features/service-requests/components/request-fac
 import { requestIdOf } from "@/features/service-requests/components/request-id.ts";
 import { RequestStatusBadge } from "@/features/service-requests/components/request-status-badge.tsx";
 import { RequestThread } from "@/features/service-requests/components/request-thread.tsx";
+import type { ServiceRequestDto } from "@shared/service-requests/schemas.ts";
 import { formatCents } from "@/lib/format-money.ts";
 import { formatDateTime } from "@/lib/format-date-time.ts";
 import { queryClient } from "@/lib/query-client.ts";
@@ -34,7 +35,7 @@ export function Component() {
   const [reason, setReason] = useState("");
   const estimate = request.estimates[0] ?? null;
   const companyId = request.invitations[0]!.companyId;
-  const can = (action: string) => request.actions.includes(action);
+  const can = (action: ServiceRequestDto["actions"][number]) => request.actions.includes(action);
   return (
     <>
       <PageHeader title={`Service request #${request.id}`} />

@@ -16,7 +16,7 @@ import { ReviewForm } from "@/features/reviews/components/review-form.tsx";
 import { ReviewView } from "@/features/reviews/components/review-view.tsx";
 import { workOrderMessagesQuery } from "@/features/work-orders/api/get-work-order-messages.ts";
 import { workOrderQuery } from "@/features/work-orders/api/get-work-order.ts";
-import type { WorkOrder } from "@/features/work-orders/api/work-order-shapes.ts";
+import type { WorkOrderDto as WorkOrder } from "@shared/work-orders/schemas.ts";
 import { MessageThread } from "@/features/work-orders/components/message-thread.tsx";
 import { StandingSnapshotView } from "@/features/work-orders/components/standing-snapshot-view.tsx";
 import { useDirectorySearch } from "@/features/directory/api/search-directory.ts";

@@ -1,61 +1,19 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { z } from "zod";
 import {
-  brokerLinkStates,
-  brokerRequestOrigins,
-  holderRoles,
+  brokerContactDtoSchema,
+  brokerCoverageDtoSchema,
+  brokerRequestDtoSchema,
+  type BrokerCoverageDto,
+  type BrokerRequestDto,
   type RequestBrokerCertificate,
   type SaveBrokerContact,
 } from "@shared/credentials/broker-schemas.ts";
 import { api } from "@/lib/api-client.ts";
 import { credentialKeys } from "./credential-keys.ts";
 
-const brokerContactSchema = z.object({
-  id: z.number(),
-  typeCode: z.string().nullable(),
-  agency: z.string(),
-  contactName: z.string(),
-  email: z.string(),
-});
-
-const brokerRequestSchema = z.object({
-  id: z.number(),
-  typeCode: z.string(),
-  credentialId: z.number().nullable(),
-  shopCompanyId: z.number().nullable(),
-  agency: z.string(),
-  contactName: z.string(),
-  brokerEmail: z.string(),
-  expiresAt: z.string(),
-  usedAt: z.string().nullable(),
-  documentId: z.number().nullable(),
-  createdAt: z.string(),
-  coverageName: z.string(),
-  holderRole: z.enum(holderRoles),
-  origin: z.enum(brokerRequestOrigins),
-  shopName: z.string().nullable(),
-  linkState: z.enum(brokerLinkStates),
-  reminders: z.array(z.object({ daysBefore: z.number(), sentAt: z.string() })),
-});
-export type BrokerRequest = z.infer<typeof brokerRequestSchema>;
-
-const brokerCoverageSchema = z.object({
-  typeCode: z.string(),
-  coverageName: z.string(),
-  broker: z
-    .object({
-      source: z.enum(["coverage", "company"]),
-      agency: z.string(),
-      contactName: z.string(),
-      email: z.string(),
-    })
-    .nullable(),
-  coverage: z
-    .object({ credentialId: z.number(), state: z.string(), lapsesAt: z.string().nullable() })
-    .nullable(),
-  requests: z.array(brokerRequestSchema),
-});
-export type BrokerCoverage = z.infer<typeof brokerCoverageSchema>;
+export type BrokerRequest = BrokerRequestDto;
+export type BrokerCoverage = BrokerCoverageDto;
 
 const brokerKeys = {
   all: [...credentialKeys.all, "broker"] as const,
@@ -67,7 +25,7 @@ const brokerKeys = {
 export const brokerCoveragesQuery = () =>
   queryOptions({
     queryKey: brokerKeys.coverages(),
-    queryFn: () => api.get("/broker-coverages", z.array(brokerCoverageSchema)),
+    queryFn: () => api.get("/broker-coverages", z.array(brokerCoverageDtoSchema)),
   });
 
 export const useBrokerCoverages = () => useQuery(brokerCoveragesQuery());
@@ -83,13 +41,13 @@ export function useRemoveCoverageBroker() {
 export const brokerContactsQuery = () =>
   queryOptions({
     queryKey: brokerKeys.contacts(),
-    queryFn: () => api.get("/broker-contacts", z.array(brokerContactSchema)),
+    queryFn: () => api.get("/broker-contacts", z.array(brokerContactDtoSchema)),
   });
 
 export const brokerRequestsQuery = () =>
   queryOptions({
     queryKey: brokerKeys.requests(),
-    queryFn: () => api.get("/broker-requests", z.array(brokerRequestSchema)),
+    queryFn: () => api.get("/broker-requests", z.array(brokerRequestDtoSchema)),
   });
 
 export const useBrokerContacts = () => useQuery(brokerContactsQuery());
@@ -98,7 +56,7 @@ export const useBrokerRequests = () => useQuery(brokerRequestsQuery());
 export function useSaveBrokerContact() {
   const client = useQueryClient();
   return useMutation({
-    mutationFn: (input: SaveBrokerContact) => api.put("/broker-contacts", input, brokerContactSchema),
+    mutationFn: (input: SaveBrokerContact) => api.put("/broker-contacts", input, brokerContactDtoSchema),
     onSuccess: () => client.invalidateQueries({ queryKey: brokerKeys.all }),
   });
 }
@@ -106,7 +64,8 @@ export function useSaveBrokerContact() {
 export function useRequestBrokerCertificate() {
   const client = useQueryClient();
   return useMutation({
-    mutationFn: (input: RequestBrokerCertificate) => api.post("/broker-requests", input, brokerRequestSchema),
+    mutationFn: (input: RequestBrokerCertificate) =>
+      api.post("/broker-requests", input, brokerRequestDtoSchema),
     onSuccess: () => client.invalidateQueries({ queryKey: brokerKeys.all }),
   });
 }

@@ -1,27 +1,18 @@
 import { queryOptions, useMutation, useQuery } from "@tanstack/react-query";
-import { z } from "zod";
+import {
+  brokerUploadPageDtoSchema,
+  brokerUploadReceivedDtoSchema,
+} from "@shared/credentials/broker-schemas.ts";
 import { api } from "@/lib/api-client.ts";
 import { uploadWithProgress } from "@/lib/upload-with-progress.ts";
 import { credentialKeys } from "./credential-keys.ts";
-
-const brokerUploadPageSchema = z.object({
-  companyName: z.string(),
-  coverageName: z.string(),
-  certificateHolder: z.string().nullable(),
-  expiresAt: z.string(),
-});
-
-const receivedSchema = z.object({
-  received: z.literal(true),
-  document: z.object({ name: z.string(), sizeBytes: z.number() }),
-});
 
 const tokenPath = (token: string) => `/broker-uploads/${encodeURIComponent(token)}`;
 
 export const brokerUploadQuery = (token: string) =>
   queryOptions({
     queryKey: credentialKeys.brokerUpload(token),
-    queryFn: () => api.get(tokenPath(token), brokerUploadPageSchema),
+    queryFn: () => api.get(tokenPath(token), brokerUploadPageDtoSchema),
     // A spent or unknown link stays so; asking again only spends the address's allowance.
     retry: false,
   });
@@ -39,7 +30,12 @@ export function sendBrokerCertificate({
 }) {
   const form = new FormData();
   form.set("file", file);
-  return uploadWithProgress({ path: tokenPath(token), form, schema: receivedSchema, onProgress });
+  return uploadWithProgress({
+    path: tokenPath(token),
+    form,
+    schema: brokerUploadReceivedDtoSchema,
+    onProgress,
+  });
 }
 
 export const useSendBrokerCertificate = () => useMutation({ mutationFn: sendBrokerCertificate });

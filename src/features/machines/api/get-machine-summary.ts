@@ -1,21 +1,11 @@
 import { queryOptions } from "@tanstack/react-query";
-import { z } from "zod";
-import { machineTechnologies } from "@shared/technicians/schemas.ts";
+import { machineDtoSchema } from "@shared/sites/schemas.ts";
 import { api } from "@/lib/api-client.ts";
 
-/** The few fields of the machine record the transfer page names the machine by. */
-const machineSummarySchema = z.object({
-  id: z.number(),
-  builder: z.string(),
-  model: z.string(),
-  controlFamily: z.string(),
-  technology: z.enum(machineTechnologies),
-  serialNumber: z.string().nullable(),
-  siteName: z.string(),
-});
+// The transfer page names the machine by a few fields of its record, read in the record's one shape.
 
 export const machineSummaryQuery = (machineId: number) =>
   queryOptions({
     queryKey: ["machines", "detail", machineId, "summary"] as const,
-    queryFn: () => api.get(`/machines/${machineId}`, machineSummarySchema),
+    queryFn: () => api.get(`/machines/${machineId}`, machineDtoSchema),
   });

@@ -2,7 +2,7 @@ import { queryOptions } from "@tanstack/react-query";
 import { z } from "zod";
 import { api } from "@/lib/api-client.ts";
 import { machineKeys, type MachineFilters } from "./machine-keys.ts";
-import { machineSchema } from "./machine-shapes.ts";
+import { machineDtoSchema } from "@shared/sites/schemas.ts";
 
 export const getMachines = (filters: MachineFilters) => {
   const query = new URLSearchParams();
@@ -10,7 +10,7 @@ export const getMachines = (filters: MachineFilters) => {
     if (value !== undefined && value !== "") query.set(key, String(value));
   }
   const search = query.toString();
-  return api.get(`/machines${search ? `?${search}` : ""}`, z.array(machineSchema));
+  return api.get(`/machines${search ? `?${search}` : ""}`, z.array(machineDtoSchema));
 };
 
 export const machinesQuery = (filters: MachineFilters) =>

@@ -1,12 +1,11 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import type { RecordShopService } from "@shared/machines/service-history.ts";
+import { type RecordShopService, historyEntryDtoSchema } from "@shared/machines/service-history.ts";
 import { api } from "@/lib/api-client.ts";
 import { machineKeys } from "./machine-keys.ts";
-import { historyEntrySchema } from "./machine-shapes.ts";
 
 /** Work done outside the platform, written into the machine's history as the shop's own record. */
 export const recordShopService = (machineId: number, input: RecordShopService) =>
-  api.post(`/machines/${machineId}/history`, input, historyEntrySchema);
+  api.post(`/machines/${machineId}/history`, input, historyEntryDtoSchema);
 
 export function useRecordShopService(machineId: number) {
   const queryClient = useQueryClient();

@@ -1,13 +1,14 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import type { CatalogEntryInput } from "@shared/machines/catalog.ts";
 import { api } from "@/lib/api-client.ts";
-import { catalogEntrySchema, machineCatalogKeys } from "@/lib/machine-catalog.ts";
+import { catalogEntryDtoSchema } from "@shared/machines/catalog.ts";
+import { machineCatalogKeys } from "@/lib/machine-catalog.ts";
 
 export const addCatalogEntry = (input: CatalogEntryInput) =>
-  api.post("/machine-catalog", input, catalogEntrySchema);
+  api.post("/machine-catalog", input, catalogEntryDtoSchema);
 
 export const editCatalogEntry = ({ id, input }: { id: number; input: CatalogEntryInput }) =>
-  api.put(`/machine-catalog/${id}`, input, catalogEntrySchema);
+  api.put(`/machine-catalog/${id}`, input, catalogEntryDtoSchema);
 
 export function useAddCatalogEntry() {
   const queryClient = useQueryClient();

@@ -1,5 +1,10 @@
 import { useState, type FormEvent } from "react";
-import { equipmentInputSchema, machineStates, type EquipmentInput } from "@shared/sites/schemas.ts";
+import {
+  equipmentInputSchema,
+  machineStates,
+  type EquipmentInput,
+  type MachineDto as Machine,
+} from "@shared/sites/schemas.ts";
 import { machineTechnologies, technologyLabels } from "@shared/technicians/schemas.ts";
 import { machineStateLabels } from "@shared/machines/machine-states.ts";
 import { Button } from "@/components/ui/button.tsx";
@@ -9,7 +14,6 @@ import { TextAreaField } from "@/components/ui/text-area-field.tsx";
 import { TextField } from "@/components/ui/text-field.tsx";
 import { fieldErrorsOf } from "@/lib/field-errors.ts";
 import { readForm } from "@/lib/read-form.ts";
-import type { Machine } from "../api/machine-shapes.ts";
 
 const labels = {
   builder: "Machine builder",

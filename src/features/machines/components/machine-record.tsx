@@ -1,7 +1,7 @@
 import { technologyLabels } from "@shared/technicians/schemas.ts";
 import { machineStateLabels } from "@shared/machines/machine-states.ts";
 import { formatIsoDate } from "@/lib/format-date.ts";
-import type { Machine } from "../api/machine-shapes.ts";
+import type { MachineDto as Machine } from "@shared/sites/schemas.ts";
 
 /** The machine's record as the maintenance manager reads it. */
 export function MachineRecord({ machine }: { machine: Machine }) {

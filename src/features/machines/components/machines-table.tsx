@@ -3,7 +3,7 @@ import { technologyLabels } from "@shared/technicians/schemas.ts";
 import { machineStateLabels } from "@shared/machines/machine-states.ts";
 import { hrefs } from "@/config/paths.ts";
 import { DataTable, dataTableColumns } from "@/components/ui/data-table.tsx";
-import type { Machine } from "../api/machine-shapes.ts";
+import type { MachineDto as Machine } from "@shared/sites/schemas.ts";
 
 const column = dataTableColumns<Machine>();
 const columns = column.columns([

@@ -1,5 +1,10 @@
 import { Link } from "react-router-dom";
-import { historySourceLabels, problemAreaLabels } from "@shared/machines/service-history.ts";
+import {
+  historySourceLabels,
+  problemAreaLabels,
+  type HistoryEntryDto as HistoryEntry,
+  type MachineHistoryDto as MachineHistory,
+} from "@shared/machines/service-history.ts";
 import { requestKindLabels } from "@shared/service-requests/schemas.ts";
 import { hrefs } from "@/config/paths.ts";
 import { buttonStyles } from "@/components/ui/button-styles.ts";
@@ -7,7 +12,6 @@ import { EmptyState } from "@/components/ui/empty-state.tsx";
 import { StatusBadge } from "@/components/ui/status-badge.tsx";
 import { formatIsoDate } from "@/lib/format-date.ts";
 import { machineHistoryCsvUrl, machineHistoryPrintUrl } from "../api/machine-keys.ts";
-import type { HistoryEntry, MachineHistory } from "../api/machine-shapes.ts";
 
 const hoursWords = (e: HistoryEntry) =>
   e.hoursOnSite === null && e.travelHours === null

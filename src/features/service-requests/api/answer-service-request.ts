@@ -1,9 +1,8 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import type { z } from "zod";
-import type { estimateInputSchema } from "@shared/service-requests/schemas.ts";
+import { type estimateInputSchema, serviceRequestDtoSchema } from "@shared/service-requests/schemas.ts";
 import { api } from "@/lib/api-client.ts";
 import { serviceRequestKeys } from "./service-request-keys.ts";
-import { serviceRequestSchema } from "./service-request-shapes.ts";
 
 export type EstimateFormInput = z.input<typeof estimateInputSchema>;
 
@@ -18,13 +17,13 @@ export function answerServiceRequest(id: number, answer: Answer) {
   const base = `/service-requests/${id}`;
   switch (answer.kind) {
     case "estimate":
-      return api.post(`${base}/estimates`, answer.input, serviceRequestSchema);
+      return api.post(`${base}/estimates`, answer.input, serviceRequestDtoSchema);
     case "revise":
-      return api.put(`${base}/estimates/${answer.estimateId}`, answer.input, serviceRequestSchema);
+      return api.put(`${base}/estimates/${answer.estimateId}`, answer.input, serviceRequestDtoSchema);
     case "withdraw":
-      return api.post(`${base}/estimates/${answer.estimateId}/withdraw`, {}, serviceRequestSchema);
+      return api.post(`${base}/estimates/${answer.estimateId}/withdraw`, {}, serviceRequestDtoSchema);
     case "pass":
-      return api.post(`${base}/pass`, { reason: answer.reason }, serviceRequestSchema);
+      return api.post(`${base}/pass`, { reason: answer.reason }, serviceRequestDtoSchema);
   }
 }
 

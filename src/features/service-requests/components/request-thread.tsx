@@ -1,5 +1,7 @@
 import { useState, type FormEvent } from "react";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { z } from "zod";
+import { requestMessageDtoSchema } from "@shared/service-requests/schemas.ts";
 import { Button } from "@/components/ui/button.tsx";
 import { FormError } from "@/components/ui/form-error.tsx";
 import { TextAreaField } from "@/components/ui/text-area-field.tsx";
@@ -7,7 +9,6 @@ import { api } from "@/lib/api-client.ts";
 import { formatDateTime } from "@/lib/format-date-time.ts";
 import { uploadWithProgress } from "@/lib/upload-with-progress.ts";
 import { serviceRequestKeys } from "../api/service-request-keys.ts";
-import { requestMessageSchema, requestThreadSchema } from "../api/service-request-shapes.ts";
 
 type Props = { requestId: number; companyId: number; title: string; readOnly: boolean };
 
@@ -17,7 +18,7 @@ export function RequestThread({ requestId, companyId, title, readOnly }: Props) 
   const path = `/service-requests/${requestId}/threads/${companyId}`;
   const thread = useQuery({
     queryKey: serviceRequestKeys.thread(requestId, companyId),
-    queryFn: () => api.get(path, requestThreadSchema),
+    queryFn: () => api.get(path, z.array(requestMessageDtoSchema)),
   });
   const [body, setBody] = useState("");
   const [file, setFile] = useState<File | null>(null);
@@ -26,7 +27,7 @@ export function RequestThread({ requestId, companyId, title, readOnly }: Props) 
       const form = new FormData();
       form.set("body", body);
       if (file) form.set("file", file);
-      return uploadWithProgress({ path, form, schema: requestMessageSchema });
+      return uploadWithProgress({ path, form, schema: requestMessageDtoSchema });
     },
     onSuccess: () => {
       setBody("");

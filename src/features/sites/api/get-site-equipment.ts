@@ -2,10 +2,10 @@ import { queryOptions, useQuery } from "@tanstack/react-query";
 import { z } from "zod";
 import { api } from "@/lib/api-client.ts";
 import { siteKeys } from "./site-keys.ts";
-import { equipmentSchema } from "./site-shapes.ts";
+import { equipmentDtoSchema } from "@shared/sites/schemas.ts";
 
 export const getSiteEquipment = (siteId: number) =>
-  api.get(`/sites/${siteId}/equipment`, z.array(equipmentSchema));
+  api.get(`/sites/${siteId}/equipment`, z.array(equipmentDtoSchema));
 
 export const siteEquipmentQuery = (siteId: number) =>
   queryOptions({ queryKey: siteKeys.equipment(siteId), queryFn: () => getSiteEquipment(siteId) });

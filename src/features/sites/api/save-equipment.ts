@@ -1,16 +1,15 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import type { EquipmentInput } from "@shared/sites/schemas.ts";
+import { equipmentDtoSchema, type EquipmentInput } from "@shared/sites/schemas.ts";
 import { api } from "@/lib/api-client.ts";
 import { siteKeys } from "./site-keys.ts";
-import { equipmentSchema } from "./site-shapes.ts";
 
 type SaveEquipment = { siteId: number; equipmentId?: number | undefined; input: EquipmentInput };
 
 /** Adds a machine to a site, or revises one when `equipmentId` is given. */
 export const saveEquipment = ({ siteId, equipmentId, input }: SaveEquipment) =>
   equipmentId
-    ? api.put(`/sites/${siteId}/equipment/${equipmentId}`, input, equipmentSchema)
-    : api.post(`/sites/${siteId}/equipment`, input, equipmentSchema);
+    ? api.put(`/sites/${siteId}/equipment/${equipmentId}`, input, equipmentDtoSchema)
+    : api.post(`/sites/${siteId}/equipment`, input, equipmentDtoSchema);
 
 export function useSaveEquipment() {
   const queryClient = useQueryClient();

@@ -1,12 +1,11 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import type { SiteInput } from "@shared/sites/schemas.ts";
+import { siteDtoSchema, type SiteInput } from "@shared/sites/schemas.ts";
 import { api } from "@/lib/api-client.ts";
 import { siteKeys } from "./site-keys.ts";
-import { siteSchema } from "./site-shapes.ts";
 
 /** Adds a site, or revises one when `siteId` is given. */
 export const saveSite = ({ siteId, input }: { siteId?: number | undefined; input: SiteInput }) =>
-  siteId ? api.put(`/sites/${siteId}`, input, siteSchema) : api.post("/sites", input, siteSchema);
+  siteId ? api.put(`/sites/${siteId}`, input, siteDtoSchema) : api.post("/sites", input, siteDtoSchema);
 
 export function useSaveSite() {
   const queryClient = useQueryClient();

@@ -1,5 +1,9 @@
 import { useState, type FormEvent } from "react";
-import { equipmentInputSchema, type EquipmentInput } from "@shared/sites/schemas.ts";
+import {
+  equipmentInputSchema,
+  type EquipmentDto as Equipment,
+  type EquipmentInput,
+} from "@shared/sites/schemas.ts";
 import { machineTechnologies, technologyLabels } from "@shared/technicians/schemas.ts";
 import { Button } from "@/components/ui/button.tsx";
 import { CatalogCombobox } from "@/components/ui/catalog-combobox.tsx";
@@ -8,7 +12,6 @@ import { SelectField } from "@/components/ui/select-field.tsx";
 import { TextField } from "@/components/ui/text-field.tsx";
 import { fieldErrorsOf } from "@/lib/field-errors.ts";
 import { readForm } from "@/lib/read-form.ts";
-import type { Equipment } from "../api/site-shapes.ts";
 
 const labels = {
   builder: "Machine builder",

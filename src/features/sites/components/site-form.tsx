@@ -1,5 +1,5 @@
 import { useState, type FormEvent } from "react";
-import { siteInputSchema, type SiteInput } from "@shared/sites/schemas.ts";
+import { siteInputSchema, type SiteDto as Site, type SiteInput } from "@shared/sites/schemas.ts";
 import { Button } from "@/components/ui/button.tsx";
 import { FormError } from "@/components/ui/form-error.tsx";
 import { SelectField, type SelectOption } from "@/components/ui/select-field.tsx";
@@ -9,7 +9,6 @@ import { fieldErrorsOf } from "@/lib/field-errors.ts";
 import { readForm } from "@/lib/read-form.ts";
 import { centsToInput, inputToCents } from "@/lib/format-money.ts";
 import { usePostalPlace } from "../api/look-up-postal-code.ts";
-import type { Site } from "../api/site-shapes.ts";
 
 const labels = {
   name: "Site name",

@@ -2,10 +2,10 @@ import { queryOptions, useQuery } from "@tanstack/react-query";
 import { z } from "zod";
 import { api } from "@/lib/api-client.ts";
 import { workOrderKeys } from "./work-order-keys.ts";
-import { workOrderMessageSchema } from "./work-order-shapes.ts";
+import { workOrderMessageDtoSchema } from "@shared/work-orders/schemas.ts";
 
 export const getWorkOrderMessages = (id: number) =>
-  api.get(`/work-orders/${id}/messages`, z.array(workOrderMessageSchema));
+  api.get(`/work-orders/${id}/messages`, z.array(workOrderMessageDtoSchema));
 
 export const workOrderMessagesQuery = (id: number) =>
   queryOptions({ queryKey: workOrderKeys.messages(id), queryFn: () => getWorkOrderMessages(id) });

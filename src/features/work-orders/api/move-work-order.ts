@@ -1,8 +1,12 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import type { AcceptWorkOrder, CompleteWorkOrder, DeclineWorkOrder } from "@shared/work-orders/schemas.ts";
+import {
+  type AcceptWorkOrder,
+  type CompleteWorkOrder,
+  type DeclineWorkOrder,
+  workOrderDtoSchema,
+} from "@shared/work-orders/schemas.ts";
 import { api } from "@/lib/api-client.ts";
 import { workOrderKeys } from "./work-order-keys.ts";
-import { workOrderSchema } from "./work-order-shapes.ts";
 
 /** One step of the work order's life; the server decides whether the caller's side may take it. */
 export type WorkOrderMove =
@@ -17,7 +21,7 @@ const bodyOf = (move: WorkOrderMove) =>
   "input" in move ? move.input : "reason" in move ? { reason: move.reason } : {};
 
 export const moveWorkOrder = (id: number, move: WorkOrderMove) =>
-  api.post(`/work-orders/${id}/${move.action}`, bodyOf(move), workOrderSchema);
+  api.post(`/work-orders/${id}/${move.action}`, bodyOf(move), workOrderDtoSchema);
 
 export function useMoveWorkOrder(id: number) {
   const queryClient = useQueryClient();

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { uploadWithProgress } from "@/lib/upload-with-progress.ts";
 import { workOrderKeys } from "./work-order-keys.ts";
-import { workOrderMessageSchema } from "./work-order-shapes.ts";
+import { workOrderMessageDtoSchema } from "@shared/work-orders/schemas.ts";
 
 export type PostMessageInput = {
   body: string;
@@ -17,7 +17,7 @@ export function postWorkOrderMessage(id: number, { body, file, onProgress }: Pos
   return uploadWithProgress({
     path: `/work-orders/${id}/messages`,
     form,
-    schema: workOrderMessageSchema,
+    schema: workOrderMessageDtoSchema,
     onProgress,
   });
 }

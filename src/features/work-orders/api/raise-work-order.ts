@@ -1,11 +1,10 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import type { RaiseWorkOrder } from "@shared/work-orders/schemas.ts";
+import { type RaiseWorkOrder, workOrderDtoSchema } from "@shared/work-orders/schemas.ts";
 import { api } from "@/lib/api-client.ts";
 import { workOrderKeys } from "./work-order-keys.ts";
-import { workOrderSchema } from "./work-order-shapes.ts";
 
 /** A 409 answer names each requirement the technician does not meet right now. */
-export const raiseWorkOrder = (input: RaiseWorkOrder) => api.post("/work-orders", input, workOrderSchema);
+export const raiseWorkOrder = (input: RaiseWorkOrder) => api.post("/work-orders", input, workOrderDtoSchema);
 
 export function useRaiseWorkOrder() {
   const queryClient = useQueryClient();

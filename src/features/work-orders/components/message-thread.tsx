@@ -1,12 +1,14 @@
 import { useRef, useState, type FormEvent } from "react";
-import { postMessageSchema } from "@shared/work-orders/schemas.ts";
+import {
+  postMessageSchema,
+  type WorkOrderMessageDto as WorkOrderMessage,
+} from "@shared/work-orders/schemas.ts";
 import { Button } from "@/components/ui/button.tsx";
 import { FormError } from "@/components/ui/form-error.tsx";
 import { fieldErrorsOf } from "@/lib/field-errors.ts";
 import { formatDateTime } from "@/lib/format-date-time.ts";
 import { formatFileSize } from "@/lib/format-file-size.ts";
 import { usePostWorkOrderMessage } from "../api/post-work-order-message.ts";
-import type { WorkOrderMessage } from "../api/work-order-shapes.ts";
 import { DOCUMENT_ACCEPT } from "@shared/credentials/upload-limits.ts";
 
 type MessageThreadProps = {

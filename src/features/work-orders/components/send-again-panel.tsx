@@ -4,7 +4,7 @@ import { FormError } from "@/components/ui/form-error.tsx";
 import { SelectField, type SelectOption } from "@/components/ui/select-field.tsx";
 import { formatIsoDate } from "@/lib/format-date.ts";
 import { useSendWorkOrderAgain } from "../api/send-work-order-again.ts";
-import type { WorkOrder } from "../api/work-order-shapes.ts";
+import type { WorkOrderDto as WorkOrder } from "@shared/work-orders/schemas.ts";
 
 type SendAgainPanelProps = {
   workOrder: WorkOrder;

@@ -3,7 +3,7 @@ import { buttonStyles } from "@/components/ui/button-styles.ts";
 import { formatDateTime } from "@/lib/format-date-time.ts";
 import { formatInstantDate } from "@/lib/format-date.ts";
 import { standingProofUrl } from "../api/work-order-keys.ts";
-import type { StandingSnapshot } from "../api/work-order-shapes.ts";
+import type { StandingSnapshot } from "@shared/work-orders/standing-snapshot.ts";
 
 type StandingSnapshotViewProps = {
   workOrderId: number;

@@ -5,6 +5,7 @@ import {
   completeWorkOrderSchema,
   declineWorkOrderSchema,
   disputeWorkOrderSchema,
+  type WorkOrderDto as WorkOrder,
 } from "@shared/work-orders/schemas.ts";
 import { readPartLines } from "@shared/machines/service-history.ts";
 import { Button } from "@/components/ui/button.tsx";
@@ -13,7 +14,6 @@ import { TextAreaField } from "@/components/ui/text-area-field.tsx";
 import { TextField } from "@/components/ui/text-field.tsx";
 import { fieldErrorsOf } from "@/lib/field-errors.ts";
 import { useMoveWorkOrder } from "../api/move-work-order.ts";
-import type { WorkOrder } from "../api/work-order-shapes.ts";
 
 const labels = {
   hoursWorked: "Hours worked on site",

@@ -2,7 +2,7 @@ import { Link } from "react-router-dom";
 import { hrefs } from "@/config/paths.ts";
 import { DataTable, dataTableColumns } from "@/components/ui/data-table.tsx";
 import { formatDateTime } from "@/lib/format-date-time.ts";
-import type { WorkOrderSummary } from "../api/work-order-shapes.ts";
+import type { WorkOrderSummaryDto as WorkOrderSummary } from "@shared/work-orders/schemas.ts";
 import { WorkOrderStatusBadge } from "./work-order-status-badge.tsx";
 import { urgencyWords } from "./work-order-words.ts";
 
