@@ -132,4 +132,37 @@ describe("a maintenance manager reads a machine's service history", () => {
       await expect(seriousAccessibilityProblems(phone)).resolves.toEqual([]);
     },
   );
+  it(
+    "reads the mill's year of downtime, marks it down from the page and running again",
+    { timeout: 90_000 },
+    async () => {
+      const page = await signedInPage(1280);
+      await page.goto(`${server.url}/machines`);
+      await page.getByRole("link", { name: MILL }).click();
+      const panel = page.getByRole("region", { name: "Downtime, last 12 months" });
+      await panel.getByText("Running now.").waitFor();
+      const bars = await panel.locator("rect[data-month]").count();
+      const monthsWithStops = await panel.locator("rect[data-month][height]:not([height='0'])").count();
+      const companies = await panel.getByRole("row").allInnerTexts();
+      await screenshot(page, "machine-history-5-downtime");
+
+      await panel.getByRole("button", { name: "Mark down" }).click();
+      await panel.getByText(/^Down since /).waitFor();
+      const stateWhileDown = await page
+        .getByRole("region", { name: "Record" })
+        .getByText("Down", { exact: true })
+        .count();
+      await expect(seriousAccessibilityProblems(page)).resolves.toEqual([]);
+      await screenshot(page, "machine-history-6-marked-down");
+      await panel.getByRole("button", { name: "Running again" }).click();
+      await panel.getByText("Running now.").waitFor();
+
+      // The demo mill stood down three times this year (seven months, 100 days and 42 days ago).
+      expect(bars).toBe(12);
+      expect(monthsWithStops).toBe(3);
+      expect(companies.some((row) => row.includes("Kestrel Ridge Machine Service LLC"))).toBe(true);
+      expect(stateWhileDown).toBe(1);
+      await expect(panel.getByText("Stoppages (4)").count()).resolves.toBe(1);
+    },
+  );
 });
