@@ -19,6 +19,9 @@ const configSchema = z
       .regex(/^postgres(ql)?:\/\//, "must be a postgres:// or postgresql:// address")
       .optional(),
     READ_YOUR_WRITES_SECONDS: z.coerce.number().int().min(0).max(3600).default(10),
+    // Parse every answer of a route that declares its response schema and answer 500 on a mismatch: on in the tests,
+    // off in production (the parse costs time and the schema is already checked by the type system).
+    CHECK_RESPONSE_SHAPES: booleanText.default(false),
     PG_PORT: z.coerce.number().int().min(1024).max(65535).default(54329),
     SMTP_URL: z.string().optional(),
     SMTP_CATCHER_PORT: z.coerce.number().int().min(1024).max(65535).default(2525),

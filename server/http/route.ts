@@ -6,6 +6,7 @@ import { zodToAppError } from "./error-handler.ts";
 import type { Policy, SignedInUser } from "./policy.ts";
 import { noteWrite, readFromReplica, wroteRecently } from "../db/replica.ts";
 import { appConfig } from "./app-locals.ts";
+import { checkDeclaredAnswer } from "./response-check.ts";
 
 type Schemas = { params?: z.ZodType; query?: z.ZodType; body?: z.ZodType };
 type Maybe = z.ZodType | undefined;
@@ -119,7 +120,11 @@ export function createRoutes(prefix: string) {
         : await handler(req, res, input);
       if (!res.headersSent) {
         if (result === undefined) res.status(204).end();
-        else res.json(result);
+        else {
+          if (options.response && appConfig(req).CHECK_RESPONSE_SHAPES)
+            checkDeclaredAnswer(`${method.toUpperCase()} ${prefix + path}`, options.response, result);
+          res.json(result);
+        }
       }
       void next;
     };

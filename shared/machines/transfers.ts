@@ -2,7 +2,7 @@ import { z } from "zod";
 import { multiLineText, singleLineText } from "../api/text.ts";
 import { emailSchema } from "../accounts/schemas.ts";
 import { idParam } from "../credentials/schemas.ts";
-import { machineTechnologies } from "../technicians/schemas.ts";
+import { equipmentDtoSchema } from "../sites/schemas.ts";
 
 /** A transfer waits for the receiving shop, then ends one way: taken over, turned down, or called back by the seller. */
 export const transferStates = ["open", "accepted", "declined", "withdrawn"] as const;
@@ -56,14 +56,14 @@ export const declineTransferSchema = z.object({
 });
 
 /** The machine as it was named when the transfer started: what both shops agree is changing hands. */
-export const transferMachineSchema = z.object({
-  builder: z.string(),
-  controlFamily: z.string(),
-  technology: z.enum(machineTechnologies),
-  model: z.string(),
-  serialNumber: z.string().nullable(),
-  yearBuilt: z.number().nullable(),
-  inServiceOn: z.string().nullable(),
+export const transferMachineSchema = equipmentDtoSchema.pick({
+  builder: true,
+  controlFamily: true,
+  technology: true,
+  model: true,
+  serialNumber: true,
+  yearBuilt: true,
+  inServiceOn: true,
 });
 
 /** What the seller had on its own record when the machine left (its read-only copy); never shown to the receiver. */

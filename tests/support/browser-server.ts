@@ -31,6 +31,7 @@ export async function startBrowserServer(
   // A database and an uploads folder of its own: the start-up sweep must not see other tests' files.
   const uploadsDir = path.join(path.dirname(process.env.UPLOADS_DIR!), `uploads-${name}`);
   const config = loadConfig({
+    CHECK_RESPONSE_SHAPES: "true",
     ...process.env,
     DATABASE_URL: databaseUrl,
     UPLOADS_DIR: uploadsDir,

@@ -19,7 +19,7 @@ let connected = false;
 
 /** The real app on the suite's PostgreSQL, without listening (supertest drives it). */
 export function buildTestApp(overrides: Record<string, string> = {}): TestApp {
-  const config = loadConfig({ ...process.env, ...overrides });
+  const config = loadConfig({ CHECK_RESPONSE_SHAPES: "true", ...process.env, ...overrides });
   configureLog(config.LOG_LEVEL);
   setPasswordCost(config.BCRYPT_COST);
   setHashConcurrency(config.HASH_CONCURRENCY, config.HASH_QUEUE);
