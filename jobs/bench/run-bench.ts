@@ -54,6 +54,19 @@ if (process.argv.includes("--growth")) {
   process.exit(0);
 }
 
+if (process.argv.includes("--help")) {
+  say(
+    [
+      "npm run bench [-- MODE]: every figure in one run (bench/results/latest.json and latest.md) when no mode is given.",
+      "  --plans   the directory statements' plans and one-connection timings, no HTTP load",
+      "  --growth  the directory, routing, queue and lapse job at scales 0.3, 1 and 3 (BENCH_GROWTH_SCALES)",
+      "  --lapse   the lapse job against its floor only (bench/results/lapse.json, explain-lapse-job.txt)",
+      "  --scale X the data set at that scale (with --lapse or --plans; seed:large takes it too)",
+    ].join("\n"),
+  );
+  process.exit(0);
+}
+
 const cluster = await startBenchCluster(say);
 // An unexpected crash still stops the cluster and the child servers.
 process.on("uncaughtException", (err) => {
@@ -87,6 +100,15 @@ try {
     out("explain-lapse-job.txt"),
     say,
   );
+  if (process.argv.includes("--lapse")) {
+    // `npm run bench -- --lapse`: only the job against its floor, on the same data set as a full run.
+    writeFileSync(out("lapse.json"), `${JSON.stringify(lapse, null, 2)}\n`);
+    say(
+      `  job ${lapse.jobMs} ms, floor ${lapse.floorMs} ms: ${lapse.ratio}x (steps ms: ${JSON.stringify(lapse.jobSteps)})`,
+    );
+    for (const stop of stopAll) await stop();
+    process.exit(0);
+  }
 
   say("Directory SQL captured from the server's search code; EXPLAIN (ANALYZE, BUFFERS)...");
   initModels(connectDatabase(largeUrl));

@@ -15,7 +15,11 @@ import { assumptions, estimateTrip, ratingSummary, SCORE_SOURCE } from "./estima
 import { computeStandingNow } from "./live-standing.ts";
 import { fieldsForBuyers } from "../../shared/credentials/fields-for-buyers.ts";
 import { invitationsInWindowSql, medianOfInvitations } from "../service-requests/index.ts";
-import { buyerMayDownload } from "../../shared/visibility/technician-visibility.ts";
+import {
+  atLeast,
+  buyerMayDownload,
+  technicianViewLevel,
+} from "../../shared/visibility/technician-visibility.ts";
 
 const select = <T extends object>(sql: string, bind: unknown[]) =>
   db().query<T>(sql, { bind, type: QueryTypes.SELECT });
@@ -72,7 +76,9 @@ interface TechnicianRow {
   mileage_rate_cents: number;
   latitude: number | null;
   longitude: number | null;
-  standing: "cleared" | "lapsing";
+  active: boolean;
+  /** Stored baseline standing (null = never computed): with `active`, the facts of the shared visibility rule. */
+  standing: Standing | null;
   earliest_lapse: Date | null;
   review_count: number;
   star_sum: number;
@@ -87,7 +93,8 @@ interface TechnicianRow {
 }
 
 /**
- * The whole page in one round trip: the listed technician ($1) with, as JSON arrays, the verified credentials in force
+ * The whole page in one round trip, access check included: the technician ($1) with the facts the shared visibility
+ * rule decides from (active, stored baseline standing) with, as JSON arrays, the verified credentials in force
  * at $3 (their own and their company's), the standing against each active requirement set of the shop ($2), the
  * latest 100 reviews, the shop's active sites, each in the order the page shows them, and the company's invitations of
  * the response-time window (its median response, by the shared rule).
@@ -95,7 +102,7 @@ interface TechnicianRow {
 const PAGE_SQL = `
   SELECT t.id, t.name, t.company_id, c.name AS company_name, c.time_zone, t.technologies, t.control_families,
          t.service_radius_km, t.hourly_rate_cents, t.travel_rate_cents, t.mileage_rate_cents, t.latitude, t.longitude,
-         b.standing, b.earliest_lapse, coalesce(r.review_count, 0)::int AS review_count, coalesce(r.star_sum, 0)::int AS star_sum,
+         t.active, b.standing, b.earliest_lapse, coalesce(r.review_count, 0)::int AS review_count, coalesce(r.star_sum, 0)::int AS star_sum,
          (SELECT coalesce(json_agg(x ORDER BY x.category, x.type_name, x.id), '[]'::json) FROM (
             SELECT cr.id, cr.type_code, ct.name AS type_name, ct.category, cr.technician_id, cr.fields, cr.decided_at,
                    cr.lapses_at, cr.document_id
@@ -123,9 +130,30 @@ const PAGE_SQL = `
          ${invitationsInWindowSql("t.company_id", "$3")} AS invitations
     FROM technicians t
     JOIN companies c ON c.id = t.company_id
-    JOIN technician_standings b ON b.technician_id = t.id AND b.requirement_set_id IS NULL AND b.standing IN ('cleared','lapsing')
+    LEFT JOIN technician_standings b ON b.technician_id = t.id AND b.requirement_set_id IS NULL
     LEFT JOIN technician_ratings r ON r.technician_id = t.id
-   WHERE t.id = $1 AND t.active`;
+   WHERE t.id = $1`;
+
+/**
+ * The shared rule on the page's own row: a technician it hides from this buyer (inactive, not cleared, unknown) answers
+ * the 404 of a missing id. A work order with the shop only raises "directory" to "contact", so it is not read here.
+ */
+function mayView(
+  buyer: Express.User,
+  t: TechnicianRow | undefined,
+): t is TechnicianRow & { standing: "cleared" | "lapsing" } {
+  if (!t) return false;
+  const level = technicianViewLevel(
+    {
+      role: buyer.role,
+      sameCompany: t.company_id === buyer.companyId,
+      isSelf: buyer.technicianId !== null && buyer.technicianId === t.id,
+      engaged: false,
+    },
+    { active: t.active, baseline: t.standing },
+  );
+  return atLeast(level, "directory");
+}
 
 function toCredentials(rows: CredentialRow[]): ProfileCredentialDto[] {
   return rows.map((r) => ({
@@ -218,7 +246,7 @@ export async function findDirectoryTechnician(
   siteId?: number,
 ): Promise<DirectoryTechnicianDto> {
   const [t] = await select<TechnicianRow>(PAGE_SQL, [technicianId, buyer.companyId, asOf]);
-  if (!t) throw new AppError("not_found", "That technician was not found");
+  if (!mayView(buyer, t)) throw new AppError("not_found", "That record was not found");
   // A set the standing job has not stored yet is computed now (one more query, only then).
   const requirementSets = await toStandings(t, asOf);
   return {

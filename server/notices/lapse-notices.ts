@@ -107,12 +107,26 @@ export async function findNoticeRecipients(
   }));
 }
 
-// Rows per bulk insert: each statement binds one JSON array.
+// Rows per bulk insert: each statement binds one array per column.
 const INSERT_CHUNK = 2_000;
 
 /**
- * Each recipient of each new notice gets an outbox row (e-mail) and an in-app notification, written as two bulk
- * INSERT ... SELECT statements per chunk, in the job's transaction: if the run rolls back, nothing is queued.
+ * The outbox e-mails and in-app notifications of one chunk in one statement: column arrays unnested side by side
+ * (PostgreSQL's multi-argument unnest), cheaper to bind and read than one JSON document of the same rows.
+ */
+const QUEUE_CHUNK_SQL = `WITH m AS (
+       SELECT * FROM unnest($1::text[], $2::text[], $3::text[], $4::text[], $5::int[], $6::text[], $7::text[], $8::text[], $9::text[], $10::int[])
+         AS m(to_address, subject, text_body, html_body, user_id, kind, title, body, link, notice_id)
+     ), mail AS (
+       INSERT INTO outbox_messages (to_address, subject, text_body, html_body)
+       SELECT to_address, subject, text_body, html_body FROM m
+     )
+     INSERT INTO notifications (user_id, kind, title, body, link, notice_id)
+     SELECT user_id, kind, title, body, link, notice_id FROM m`;
+
+/**
+ * Each recipient of each new notice gets an outbox row (e-mail) and an in-app notification, written by one bulk
+ * statement per chunk, in the job's transaction: if the run rolls back, nothing is queued.
  */
 export async function queueNoticeMessages(
   transaction: Transaction,
@@ -120,43 +134,14 @@ export async function queueNoticeMessages(
   options: { asOf: Date; publicUrl: string },
 ): Promise<{ emails: number; notifications: number }> {
   for (let i = 0; i < recipients.length; i += INSERT_CHUNK) {
-    const rendered = recipients
-      .slice(i, i + INSERT_CHUNK)
-      .map((r) => ({ r, m: renderLapseNotice(r, options.asOf, options.publicUrl) }));
-    await runStatement(
-      transaction,
-      `INSERT INTO outbox_messages (to_address, subject, text_body, html_body)
-       SELECT to_address, subject, text_body, html_body
-         FROM jsonb_to_recordset($1::jsonb) AS m(to_address text, subject text, text_body text, html_body text)`,
-      [
-        JSON.stringify(
-          rendered.map(({ r, m }) => ({
-            to_address: r.email,
-            subject: m.subject,
-            text_body: m.text,
-            html_body: m.html,
-          })),
-        ),
-      ],
-    );
-    await runStatement(
-      transaction,
-      `INSERT INTO notifications (user_id, kind, title, body, link, notice_id)
-       SELECT user_id, kind, title, body, link, notice_id
-         FROM jsonb_to_recordset($1::jsonb) AS m(user_id int, kind text, title text, body text, link text, notice_id int)`,
-      [
-        JSON.stringify(
-          rendered.map(({ r, m }) => ({
-            user_id: r.userId,
-            kind: m.kind,
-            title: m.title,
-            body: m.body,
-            link: m.link,
-            notice_id: r.noticeId,
-          })),
-        ),
-      ],
-    );
+    const chunk = recipients.slice(i, i + INSERT_CHUNK);
+    const columns: (string | number)[][] = Array.from({ length: 10 }, () => []);
+    for (const r of chunk) {
+      const m = renderLapseNotice(r, options.asOf, options.publicUrl);
+      const row = [r.email, m.subject, m.text, m.html, r.userId, m.kind, m.title, m.body, m.link, r.noticeId];
+      row.forEach((value, c) => columns[c]!.push(value));
+    }
+    await runStatement(transaction, QUEUE_CHUNK_SQL, columns);
   }
   return { emails: recipients.length, notifications: recipients.length };
 }

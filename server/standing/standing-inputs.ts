@@ -1,6 +1,8 @@
 import type { Transaction } from "sequelize";
 import type { CredentialTypeDefinition } from "../../shared/credentials/catalogue.ts";
 import { fieldSetSchemas } from "../../shared/credentials/credential-fields.ts";
+import { underlyingTypeCodesFor } from "../../shared/standing/compute-standing.ts";
+import { wantsStackedLimits } from "../../shared/standing/requirement-content.ts";
 import type { Requirement } from "../../shared/standing/requirements.ts";
 import type { CredentialState, StandingCredential } from "../../shared/standing/standing-types.ts";
 import { log } from "../log.ts";
@@ -97,13 +99,44 @@ async function loadTechnicians(
 // engine can say why a requirement is unmet.
 const CREDENTIALS_SQL = `SELECT id, type_code, company_id, technician_id, state, fields FROM credentials WHERE state <> 'superseded'`;
 
-async function loadCredentials(technicians: StandingTechnician[], all: boolean, transaction: Transaction) {
-  if (all) return selectRows<StandingCredentialRow>(transaction, CREDENTIALS_SQL);
+const UMBRELLA = "umbrella_liability";
+
+/**
+ * The credential types the shared engine can read for these targets: each requirement's own types, the policies an
+ * umbrella stands over (underlyingTypeCodesFor), and umbrellas where a line may stack one over a primary policy. A
+ * credential of any other type never changes a standing against them, so it is neither read nor validated (on the
+ * large data set the baseline reads 2 types of 11: about 50,000 cards fewer per lapse run).
+ */
+export function typesReadFor(targets: readonly StandingTarget[]): string[] {
+  const codes = new Set<string>();
+  for (const target of targets) {
+    for (const requirement of target.requirements) {
+      for (const code of requirement.typeCodes) codes.add(code);
+      if (wantsStackedLimits(requirement)) codes.add(UMBRELLA);
+    }
+    for (const code of underlyingTypeCodesFor(target.requirements)) codes.add(code);
+  }
+  return [...codes];
+}
+
+async function loadCredentials(
+  technicians: StandingTechnician[],
+  all: boolean,
+  typeCodes: string[],
+  transaction: Transaction,
+) {
+  if (all)
+    return selectRows<StandingCredentialRow>(
+      transaction,
+      `${CREDENTIALS_SQL} AND type_code = ANY($1::text[])`,
+      [typeCodes],
+    );
   const companyIds = [...new Set(technicians.map((t) => t.companyId))];
   return selectRows<StandingCredentialRow>(
     transaction,
-    `${CREDENTIALS_SQL} AND ((technician_id IS NULL AND company_id = ANY($1::int[])) OR technician_id = ANY($2::int[]))`,
-    [companyIds, technicians.map((t) => t.id)],
+    `${CREDENTIALS_SQL} AND type_code = ANY($3::text[])
+       AND ((technician_id IS NULL AND company_id = ANY($1::int[])) OR technician_id = ANY($2::int[]))`,
+    [companyIds, technicians.map((t) => t.id), typeCodes],
   );
 }
 
@@ -180,7 +213,9 @@ export async function loadStandingInputs(
     loadCredentialTypes(transaction),
     options.targets ? Promise.resolve(options.targets) : loadTargets(transaction),
   ]);
-  const rows = technicians.length ? await loadCredentials(technicians, selection === "all", transaction) : [];
+  const rows = technicians.length
+    ? await loadCredentials(technicians, selection === "all", typesReadFor(targets), transaction)
+    : [];
   const companyCredentials = new Map<number, StandingCredential[]>();
   const technicianCredentials = new Map<number, StandingCredential[]>();
   for (const row of rows) {

@@ -8,11 +8,20 @@ const MS_PER_MINUTE = 60_000;
  * The zone's standard UTC offset in minutes for a year: the smaller (more negative) of its offsets on 1 January and
  * 1 July, because daylight saving time always adds to the standard offset (standard time all year, ISO CG DS 01 wording, from memory).
  */
+// (zone, year) -> minutes: the engine asks for the same few zones and years for every policy of every holder, and each
+// luxon zone lookup formats a date through Intl; tz rules for a year do not change while the process runs.
+const standardOffsets = new Map<string, number>();
+
 export function standardOffsetMinutes(timeZone: string, year: number): number {
+  const key = `${timeZone}|${year}`;
+  const known = standardOffsets.get(key);
+  if (known !== undefined) return known;
   const january = DateTime.fromObject({ year, month: 1, day: 1 }, { zone: timeZone });
   const july = DateTime.fromObject({ year, month: 7, day: 1 }, { zone: timeZone });
   if (!january.isValid || !july.isValid) throw new RangeError(`Unknown IANA time zone: ${timeZone}`);
-  return Math.min(january.offset, july.offset);
+  const minutes = Math.min(january.offset, july.offset);
+  standardOffsets.set(key, minutes);
+  return minutes;
 }
 
 /**

@@ -126,7 +126,12 @@ describe("authorisation matrix", () => {
 
   it("checks ownership on every route that names a record, unless its service scopes the record by the caller", () => {
     // Each of these looks its record up only among the caller's own rows (the cross-company walk proves it).
-    const scopedByCaller = new Set(["post /api/notifications/:notificationId/read"]);
+    // The directory page reads the shared visibility rule's facts in its own statement and answers a hidden
+    // technician with the 404 of a missing id (tests/api/directory/technician-page.test.ts).
+    const scopedByCaller = new Set([
+      "post /api/notifications/:notificationId/read",
+      "get /api/directory/technicians/:technicianId",
+    ]);
     // Reviewers and admins work on every company's records by their role; only company roles need an ownership check.
     const platformOnly = (r: (typeof routeTable)[number]) =>
       Array.isArray(r.policy.roles) &&

@@ -100,6 +100,20 @@ describe("technician page for buyers", () => {
     expect(res.status).toBe(404);
   });
 
+  it("answers an inactive or not cleared technician exactly as a missing id, for every hidden one", async () => {
+    const hidden = world.technicians
+      .filter((x) => x.baseline === "not_cleared" || x.baseline === null || !x.active)
+      .slice(0, 40);
+    const missing = await buyer.get("/api/directory/technicians/99999999");
+
+    expect(hidden.length).toBeGreaterThan(0);
+    expect(missing.status).toBe(404);
+    for (const h of hidden) {
+      const res = await buyer.get(`/api/directory/technicians/${h.id}`);
+      expect([res.status, res.body]).toEqual([404, missing.body]);
+    }
+  });
+
   it("answers 401 signed out and 403 to a provider", async () => {
     const { users } = await buildCompany("service", ["provider_admin"]);
     const provider = agentFor(t.app);
