@@ -138,6 +138,7 @@ export const router = createBrowserRouter([
               { path: paths.buyer.serviceRequest, lazy: () => import("./routes/buyer/service-request.tsx") },
               { path: paths.buyer.machines, lazy: () => import("./routes/buyer/machines.tsx") },
               { path: paths.buyer.machine, lazy: () => import("./routes/buyer/machine.tsx") },
+              { path: paths.buyer.machineCopy, lazy: () => import("./routes/buyer/machine-copy.tsx") },
               {
                 path: paths.buyer.machineTransfer,
                 lazy: () => import("./routes/buyer/machine-transfer.tsx"),

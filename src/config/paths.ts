@@ -55,6 +55,8 @@ export const paths = {
     machines: "/machines",
     machine: "/machines/:machineId",
     machineTransfer: "/machines/:machineId/transfer",
+    /** A machine the shop sold: its read-only copy of the history up to the handover. */
+    machineCopy: "/machines/:machineId/copy",
     machineTransfers: "/machine-transfers",
     machinesImport: "/machines/import",
     machineMaintenance: "/machines/:machineId/maintenance",
@@ -91,6 +93,7 @@ export const hrefs = {
   providerServiceRequest: (id: number) => `/provider/service-requests/${id}`,
   machine: (id: number) => `/machines/${id}`,
   machineTransfer: (machineId: number) => `/machines/${machineId}/transfer`,
+  machineCopy: (machineId: number) => `/machines/${machineId}/copy`,
   /** With the site the buyer searched from, so the work order starts on that site and its requirement set. */
   workOrderNew: (technicianId: number, siteId?: number | null) =>
     `/work-orders/new?technicianId=${technicianId}${siteId ? `&siteId=${siteId}` : ""}`,

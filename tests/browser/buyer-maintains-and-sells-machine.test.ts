@@ -319,5 +319,20 @@ describe("a maintenance manager keeps a machine serviced and then sells it", () 
     await receiverAgent.get(`/api/service-requests/${requestId}`).expect(404);
     const messages = await receiverAgent.get(`/api/work-orders/${workOrderId}/messages`);
     expect(messages.status).toBe(404);
+
+    // 8. The seller keeps a read-only copy of the history up to the handover, in full, without the exports.
+    await seller.goto(`${server.url}/machine-transfers`);
+    await seller.getByRole("link", { name: "Read your copy" }).click();
+    await seller.getByRole("heading", { level: 1, name: MACHINE }).waitFor();
+    const copy = seller.getByRole("region", { name: "Service history" });
+    const copyEntry = copy.getByRole("listitem").filter({ hasText: COMPLETION_NOTE });
+    await copyEntry.waitFor();
+    await expect(seriousAccessibilityProblems(seller)).resolves.toEqual([]);
+    await screenshot(seller, "maintains-and-sells-8-seller-copy");
+
+    await expect(seller.getByText(/Sold to .* Your read-only copy of its history/).count()).resolves.toBe(1);
+    await expect(copyEntry.innerText()).resolves.toContain(technician!.name);
+    await expect(copy.getByRole("link", { name: "Download CSV" }).count()).resolves.toBe(0);
+    await expect(seller.getByRole("button", { name: "Record outside work" }).count()).resolves.toBe(0);
   }, 180_000);
 });

@@ -103,7 +103,14 @@ function Entry({ entry, earlier }: { entry: HistoryEntry; earlier: HistoryEntry 
 }
 
 /** Every confirmed work order on the machine and the shop's own records, newest first. */
-export function ServiceHistory({ history }: { history: MachineHistory }) {
+export function ServiceHistory({
+  history,
+  exports = true,
+}: {
+  history: MachineHistory;
+  /** The CSV and printable page are the current owner's; a seller's read-only copy shows the entries only. */
+  exports?: boolean;
+}) {
   const byKey = new Map(history.entries.map((e) => [e.key, e]));
   return (
     <section aria-labelledby="service-history" className="space-y-3">
@@ -111,19 +118,21 @@ export function ServiceHistory({ history }: { history: MachineHistory }) {
         <h2 id="service-history" className="text-lg font-semibold text-ink-900">
           Service history
         </h2>
-        <div className="flex flex-wrap gap-2">
-          <a href={machineHistoryCsvUrl(history.machineId)} className={buttonStyles("secondary")} download>
-            Download CSV
-          </a>
-          <a
-            href={machineHistoryPrintUrl(history.machineId)}
-            target="_blank"
-            rel="noopener"
-            className={buttonStyles("secondary")}
-          >
-            Printable page
-          </a>
-        </div>
+        {exports && (
+          <div className="flex flex-wrap gap-2">
+            <a href={machineHistoryCsvUrl(history.machineId)} className={buttonStyles("secondary")} download>
+              Download CSV
+            </a>
+            <a
+              href={machineHistoryPrintUrl(history.machineId)}
+              target="_blank"
+              rel="noopener"
+              className={buttonStyles("secondary")}
+            >
+              Printable page
+            </a>
+          </div>
+        )}
       </div>
       <p className="text-sm text-ink-700">
         Entries recorded by the shop are its own notes of outside work: they never count toward a technician's

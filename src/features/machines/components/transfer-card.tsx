@@ -1,6 +1,8 @@
 import type { ReactNode } from "react";
 import { transferStatusMarks, type MachineTransferDto } from "@shared/machines/transfers.ts";
 import { technologyLabels } from "@shared/technicians/schemas.ts";
+import { Link } from "react-router-dom";
+import { hrefs } from "@/config/paths.ts";
 import { StatusBadge } from "@/components/ui/status-badge.tsx";
 import { formatInstantDate } from "@/lib/format-date.ts";
 
@@ -75,7 +77,13 @@ export function TransferCard({ transfer, children }: { transfer: MachineTransfer
           Your record when it left: {transfer.sellerRecord.siteName}
           {transfer.sellerRecord.building ? `, ${transfer.sellerRecord.building}` : ""}
           {transfer.sellerRecord.bay ? `, ${transfer.sellerRecord.bay}` : ""}. You keep a read-only copy of
-          its history up to {formatInstantDate(transfer.decidedAt)}.
+          its history up to {formatInstantDate(transfer.decidedAt)}.{" "}
+          <Link
+            to={hrefs.machineCopy(transfer.machineId)}
+            className="text-ink-900 underline underline-offset-2"
+          >
+            Read your copy
+          </Link>
         </p>
       )}
       {children}
