@@ -102,8 +102,9 @@ function reminderContent(owed: Owed, base: string) {
 
 /**
  * The daily job's maintenance step: reminds each shop's buyers 30 and 7 days before a plan falls due, once per plan,
- * due occurrence and threshold (kept by a unique constraint, so reruns and a second job process add nothing), with a
- * bell notification and an e-mail in HTML and text. A fixed number of statements whatever the number of plans.
+ * due occurrence, threshold and owning shop (kept by a unique constraint, so reruns and a second job process add
+ * nothing, while a machine's buyer still hears of a due date its seller was told of), with a bell notification and an
+ * e-mail in HTML and text. A fixed number of statements whatever the number of plans.
  */
 export async function remindMaintenanceDue(
   transaction: Transaction,
@@ -112,9 +113,9 @@ export async function remindMaintenanceDue(
   const owed = owedReminders(await candidates(transaction, asOf), asOf);
   const kept = await selectRows<{ plan_id: number; due_key: string; threshold_days: number }>(
     transaction,
-    `INSERT INTO maintenance_reminders (plan_id, due_key, threshold_days, due_on, job_run_id)
-     SELECT x.plan_id, x.due_key, x.threshold_days, x.due_on::date, $2
-       FROM jsonb_to_recordset($1::jsonb) AS x(plan_id int, due_key text, threshold_days int, due_on text)
+    `INSERT INTO maintenance_reminders (plan_id, due_key, threshold_days, due_on, job_run_id, shop_company_id)
+     SELECT x.plan_id, x.due_key, x.threshold_days, x.due_on::date, $2, x.shop_company_id
+       FROM jsonb_to_recordset($1::jsonb) AS x(plan_id int, due_key text, threshold_days int, due_on text, shop_company_id int)
      ON CONFLICT ON CONSTRAINT maintenance_reminders_once DO NOTHING
      RETURNING plan_id, due_key, threshold_days`,
     [
@@ -124,6 +125,7 @@ export async function remindMaintenanceDue(
           due_key: o.due.dueKey,
           threshold_days: o.threshold,
           due_on: o.due.dueOn,
+          shop_company_id: o.plan.company_id,
         })),
       ),
       jobRunId,

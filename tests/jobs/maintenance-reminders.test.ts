@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { buildTestApp, type TestApp } from "../support/test-app.ts";
 import { startTestMailCatcher } from "../support/mail-catcher.ts";
 import { buildClearedCompany, buildShop, type Shop } from "../fixtures/build-service-request-world.ts";
+import { buildMachineShop } from "../fixtures/build-machine-shop.ts";
 import { runLapseJob } from "../../jobs/lapse.ts";
 import { JOB_DEPS, rows, runJobCli } from "./job-support.ts";
 
@@ -162,6 +163,41 @@ describe("maintenance reminders in the daily job", () => {
     expect(await remindersOf(planId)).toEqual([]);
     expect(await bellOf(shop.user.id)).toEqual([]);
   }, 60_000);
+
+  it("reminds the shop that bought the machine of a due date its seller was already reminded of, once", async () => {
+    const seller = await buildShop(t.app);
+    const buyer = await buildMachineShop(t.app, { machine: false });
+    const planId = await planOn(seller, {
+      name: "Ballbar test",
+      intervalKind: "months",
+      intervalMonths: 12,
+      lastDoneOn: "2026-05-31",
+    });
+    await runAt("2027-05-03T18:00:00Z");
+    const transfer = await seller.agent
+      .post(`/api/machines/${seller.equipmentId}/transfers`)
+      .send({ email: buyer.user.email })
+      .expect(201);
+    await buyer.agent
+      .post(`/api/machine-transfers/${transfer.body.id}/accept`)
+      .send({ siteId: buyer.siteId })
+      .expect(200);
+
+    await runAt("2027-05-04T18:00:00Z");
+    await runAt("2027-05-05T18:00:00Z");
+
+    // Due 2027-05-31; the seller had its 30-day reminder before the sale, the buyer gets its own the next day.
+    expect((await bellOf(seller.user.id)).map((n) => n.title)).toEqual([
+      expect.stringContaining("Maintenance due in 28 days (May 31, 2027): Ballbar test"),
+    ]);
+    expect((await bellOf(buyer.user.id)).map((n) => n.title)).toEqual([
+      expect.stringContaining("Maintenance due in 27 days (May 31, 2027): Ballbar test"),
+    ]);
+    // Beside the transfer's own e-mail, one reminder.
+    expect((await mailTo(buyer.user.email)).filter((m) => m.subject.includes("Ballbar test"))).toHaveLength(
+      1,
+    );
+  });
 
   it("sends each reminder once when two job processes run at the same instant", async () => {
     const shop = await buildShop(t.app);
