@@ -167,7 +167,7 @@ describe("maintenance reminders in the daily job", () => {
   it("reminds the shop that bought the machine of a due date its seller was already reminded of, once", async () => {
     const seller = await buildShop(t.app);
     const buyer = await buildMachineShop(t.app, { machine: false });
-    const planId = await planOn(seller, {
+    await planOn(seller, {
       name: "Ballbar test",
       intervalKind: "months",
       intervalMonths: 12,
