@@ -66,7 +66,9 @@ export function tsvToPositionedText(tsv: string, page: number, levelDegrees = 0)
   const parsed = parseTsv(tsv);
   const { pageWidth, pageHeight } = parsed;
   if (!pageWidth || !pageHeight) return [];
-  const words = levelDegrees ? levelled(parsed.words, levelDegrees, pageWidth, pageHeight) : parsed.words;
+  const words = joinedAtHyphens(
+    levelDegrees ? levelled(parsed.words, levelDegrees, pageWidth, pageHeight) : parsed.words,
+  );
   const lines = new Map<string, { top: number; bottom: number }>();
   for (const word of words) {
     const line = lines.get(word.key);
@@ -89,6 +91,38 @@ export function tsvToPositionedText(tsv: string, page: number, levelDegrees = 0)
       em: lineHeight / 1.2 / pageWidth,
     };
   });
+}
+
+// Tesseract often splits a hyphenated number at its hyphen ("WC-" "956167") though the print has no space there; a
+// gap under half the letters' height is that kerning, not a space a person would read.
+const HYPHEN_JOIN_GAP = 0.5;
+
+/** Neighbouring words of one line that meet at a hyphen, joined back into the one word printed. */
+function joinedAtHyphens(words: TsvWord[]): TsvWord[] {
+  const out: TsvWord[] = [];
+  for (const word of words) {
+    const last = out[out.length - 1];
+    const meets =
+      last &&
+      last.key === word.key &&
+      ((/[A-Za-z0-9]-$/.test(last.text) && /^[A-Za-z0-9]/.test(word.text)) ||
+        (/[A-Za-z0-9]$/.test(last.text) && /^-[A-Za-z0-9]/.test(word.text)));
+    const gap = last ? word.left - (last.left + last.width) : Infinity;
+    if (last && meets && gap < HYPHEN_JOIN_GAP * Math.max(last.height, word.height)) {
+      const right = Math.max(last.left + last.width, word.left + word.width);
+      const top = Math.min(last.top, word.top);
+      const bottom = Math.max(last.top + last.height, word.top + word.height);
+      out[out.length - 1] = {
+        ...last,
+        text: last.text + word.text,
+        width: right - last.left,
+        top,
+        height: bottom - top,
+        conf: Math.min(last.conf, word.conf),
+      };
+    } else out.push(word);
+  }
+  return out;
 }
 
 /**

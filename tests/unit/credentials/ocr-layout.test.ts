@@ -69,6 +69,25 @@ describe("tesseract word boxes for the layout reader", () => {
     });
   });
 
+  it("joins a number tesseract split at its hyphen, but not words a space apart", () => {
+    const split = tsv([
+      [1, 40, 100, 80, 20, 95, "Policy"],
+      [1, 300, 100, 36, 20, 91, "WC-"],
+      [1, 340, 100, 70, 20, 88, "956167"],
+      [2, 40, 140, 60, 20, 90, "Mid-"],
+      [2, 140, 140, 60, 20, 90, "West"],
+    ]);
+    expect(tsvToPositionedText(split, 1).map((item) => item.text)).toEqual([
+      "Policy",
+      "WC-956167",
+      "Mid-",
+      "West",
+    ]);
+    const joined = tsvToPositionedText(split, 1)[1]!;
+    expect(joined.x).toBeCloseTo(0.3);
+    expect(joined.w).toBeCloseTo(0.11);
+  });
+
   it("gives nothing for output without a page row", () => {
     expect(tsvToPositionedText("not a tsv", 1)).toEqual([]);
   });
