@@ -47,6 +47,8 @@ const emptyTally = (): Tally =>
   ) as Tally;
 
 const failures: string[] = [];
+// Which path is being scored, so each listed miss says whether the text layer, the scan or the photo missed it.
+let scoredPath = "text";
 /**
  * `others` holds the same field's printed values on the document's other coverages: a value taken from one of them
  * is the worst miss (it looks right to a reader), so it is counted on its own and not as a plain wrong value.
@@ -63,7 +65,7 @@ function count(
   else if (got === expected) tally[kind].right += 1;
   else if (others.includes(got)) tally[kind].other += 1;
   else tally[kind].wrong += 1;
-  if (got !== expected) failures.push(`${where}: ${String(got)} != ${String(expected)}`);
+  if (got !== expected) failures.push(`${scoredPath} ${where}: ${String(got)} != ${String(expected)}`);
 }
 
 function scoreCertificate(tally: Tally, truth: CertificateTruth, text: string, id: string) {
@@ -169,6 +171,7 @@ say(
   `Corpus split "${split}": ${corpus.length} documents from ${families.size} families, ${twoPage} of two pages`,
 );
 for (const path of withOcr ? (["text", "ocr", "photo"] as const) : (["text"] as const)) {
+  scoredPath = path;
   const all = { tally: emptyTally(), times: [] as number[], docs: 0 };
   const byGenerator = new Map<string, typeof all>();
   for (const [index, doc] of corpus.entries()) {

@@ -2,6 +2,7 @@ import { describe, expect, it } from "vitest";
 import { layoutText } from "../../../shared/credentials/locate-values.ts";
 import {
   readingQuality,
+  readsUpright,
   skewDegrees,
   tsvToPositionedText,
   uprightTurn,
@@ -68,6 +69,25 @@ describe("tesseract word boxes for the layout reader", () => {
     });
   });
 
+  it("joins a number tesseract split at its hyphen, but not words a space apart", () => {
+    const split = tsv([
+      [1, 40, 100, 80, 20, 95, "Policy"],
+      [1, 300, 100, 36, 20, 91, "WC-"],
+      [1, 340, 100, 70, 20, 88, "956167"],
+      [2, 40, 140, 60, 20, 90, "Mid-"],
+      [2, 140, 140, 60, 20, 90, "West"],
+    ]);
+    expect(tsvToPositionedText(split, 1).map((item) => item.text)).toEqual([
+      "Policy",
+      "WC-956167",
+      "Mid-",
+      "West",
+    ]);
+    const joined = tsvToPositionedText(split, 1)[1]!;
+    expect(joined.x).toBeCloseTo(0.3);
+    expect(joined.w).toBeCloseTo(0.11);
+  });
+
   it("gives nothing for output without a page row", () => {
     expect(tsvToPositionedText("not a tsv", 1)).toEqual([]);
   });
@@ -116,5 +136,50 @@ describe("skew and reading quality", () => {
     ]);
     expect(readingQuality(upright)).toBe(2);
     expect(readingQuality(upsideDown)).toBe(0);
+  });
+
+  it("takes a reading as upright only when most of its words are sure, not on a dozen sure fragments", () => {
+    type Word = [number, number, number, number, number, number, string];
+    const words = (sure: number, unsure: number): Word[] => [
+      ...Array.from({ length: sure }, (_, n): Word => [1, n * 10, 0, 8, 20, 90, "Policy"]),
+      ...Array.from({ length: unsure }, (_, n): Word => [2, n * 10, 40, 8, 20, 30, "oq"]),
+    ];
+    expect(readsUpright(tsv(words(74, 10)))).toBe(true);
+    // The counts of a blurred certificate photographed sideways and read at the wrong quarter turn.
+    expect(readsUpright(tsv(words(12, 81)))).toBe(false);
+    // Every word sure, but too few to tell a sparse upright page from stray marks.
+    expect(readsUpright(tsv(words(5, 0)))).toBe(false);
+  });
+});
+
+describe("levelling the word boxes of a tilted page", () => {
+  const fall = Math.tan((3 * Math.PI) / 180);
+  type Word = [number, number, number, number, number, number, string];
+  // Two lines of five words, 200 px apart, falling 3 degrees to the right.
+  const tilted = tsv(
+    [0, 1].flatMap((line) =>
+      [0, 1, 2, 3, 4].map((n): Word => [
+        line + 1,
+        50 + n * 190,
+        150 + line * 200 + Math.round(n * 190 * fall),
+        150,
+        20,
+        90,
+        "word",
+      ]),
+    ),
+  );
+
+  it("puts each line's words at one height when given the measured tilt", () => {
+    const skew = skewDegrees(tilted);
+    expect(skew).toBeCloseTo(3, 0);
+    const asRead = tsvToPositionedText(tilted, 1);
+    const level = tsvToPositionedText(tilted, 1, skew);
+    // Read as it came, a line's box spans the whole fall (about 40 px of 600); levelled, one word's height (20 px).
+    expect(asRead[0]!.h * 600).toBeGreaterThan(55);
+    expect(level[0]!.h * 600).toBeCloseTo(20, -1);
+    expect(level[0]!.h * 600).toBeLessThan(25);
+    // Lines keep their order and their distance apart.
+    expect((level[5]!.y - level[0]!.y) * 600).toBeCloseTo(200, -1);
   });
 });
