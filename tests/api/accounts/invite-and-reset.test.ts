@@ -1,19 +1,11 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { randomUUID } from "node:crypto";
-import { agentFor, buildTestApp, type TestApp } from "../../support/test-app.ts";
+import { agentFor, buildTestApp, useTestApp } from "../../support/test-app.ts";
 import { buildCompany, TEST_PASSWORD } from "../../support/build-company.ts";
-import { startTestMailCatcher } from "../../support/mail-catcher.ts";
+import { useMailCatcher } from "../../support/mail-catcher.ts";
 
-let t: TestApp;
-let mail: Awaited<ReturnType<typeof startTestMailCatcher>>;
-beforeAll(async () => {
-  t = buildTestApp();
-  mail = await startTestMailCatcher();
-});
-afterAll(async () => {
-  await t.close();
-  await mail.close();
-});
+const t = useTestApp();
+const mail = useMailCatcher();
 
 const linkToken = (text: string) => /set-password\?token=([A-Za-z0-9_-]+)/.exec(text)?.[1];
 

@@ -1,24 +1,15 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import Papa from "papaparse";
-import { buildTestApp, type TestApp } from "../../support/test-app.ts";
+import { agentFor, useTestApp } from "../../support/test-app.ts";
 import { buildProvider } from "../../support/build-provider.ts";
 import { buildCompany, TEST_PASSWORD } from "../../support/build-company.ts";
-import { agentFor } from "../../support/test-app.ts";
-import { startTestMailCatcher } from "../../support/mail-catcher.ts";
+import { useMailCatcher } from "../../support/mail-catcher.ts";
 import { Technician } from "../../../server/technicians/model.ts";
 import { User } from "../../../server/accounts/model.ts";
 import { countStored } from "../../support/count-uploads.ts";
 
-let t: TestApp;
-let mail: Awaited<ReturnType<typeof startTestMailCatcher>>;
-beforeAll(async () => {
-  t = buildTestApp();
-  mail = await startTestMailCatcher();
-});
-afterAll(async () => {
-  await t.close();
-  await mail.close();
-});
+const t = useTestApp();
+const mail = useMailCatcher();
 
 const header = [
   "Name",
