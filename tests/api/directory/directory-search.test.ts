@@ -1,8 +1,8 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import request from "supertest";
-import { agentFor, buildTestApp, type TestApp } from "../../support/test-app.ts";
+import { agentFor, useTestApp } from "../../support/test-app.ts";
 import { buildCompany, TEST_PASSWORD } from "../../support/build-company.ts";
-import { buildDirectoryWorld, type DirectoryWorld } from "../../fixtures/build-directory-world.ts";
+import { useDirectoryWorld } from "../../support/directory-suite.ts";
 import { greatCircleDistanceKm } from "../../../shared/geo/great-circle-distance.ts";
 import { milesToKm } from "../../../shared/geo/units.ts";
 import { bayesianAverage } from "../../../shared/ranking/rating-score.ts";
@@ -10,20 +10,8 @@ import { Equipment } from "../../../server/sites/model.ts";
 import { bruteForceDirectory, toQuery } from "./brute-force-directory.ts";
 import { readAllPages } from "./directory-pages.ts";
 
-let t: TestApp;
-let world: DirectoryWorld;
-let buyer: ReturnType<typeof agentFor>;
-
-beforeAll(async () => {
-  t = buildTestApp();
-  world = await buildDirectoryWorld({ seed: 7 });
-  buyer = agentFor(t.app);
-  await buyer
-    .post("/api/auth/sign-in")
-    .send({ email: world.buyerEmail, password: TEST_PASSWORD })
-    .expect(200);
-});
-afterAll(() => t.close());
+const t = useTestApp();
+const { world, buyer } = useDirectoryWorld(t, { seed: 7 });
 
 const ours = (ids: number[]) => {
   const world_ = new Set(world.technicians.map((x) => x.id));

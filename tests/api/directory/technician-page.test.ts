@@ -1,24 +1,12 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import request from "supertest";
 import { QueryTypes } from "sequelize";
-import { agentFor, buildTestApp, sequelize, type TestApp } from "../../support/test-app.ts";
+import { agentFor, useTestApp, sequelize } from "../../support/test-app.ts";
 import { buildCompany, TEST_PASSWORD } from "../../support/build-company.ts";
-import { buildDirectoryWorld, type DirectoryWorld } from "../../fixtures/build-directory-world.ts";
+import { useDirectoryWorld } from "../../support/directory-suite.ts";
 
-let t: TestApp;
-let world: DirectoryWorld;
-let buyer: ReturnType<typeof agentFor>;
-
-beforeAll(async () => {
-  t = buildTestApp();
-  world = await buildDirectoryWorld({ seed: 5, count: 12, companies: 3 });
-  buyer = agentFor(t.app);
-  await buyer
-    .post("/api/auth/sign-in")
-    .send({ email: world.buyerEmail, password: TEST_PASSWORD })
-    .expect(200);
-});
-afterAll(() => t.close());
+const t = useTestApp();
+const { world, buyer } = useDirectoryWorld(t, { seed: 5, count: 12, companies: 3 });
 
 const listed = () =>
   world.technicians.filter((x) => x.active && (x.baseline === "cleared" || x.baseline === "lapsing"));
