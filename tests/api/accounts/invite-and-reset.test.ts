@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { randomUUID } from "node:crypto";
-import { agentFor, buildTestApp, useTestApp } from "../../support/test-app.ts";
+import { agentFor, buildTestApp, useTestApp, signedInAs } from "../../support/test-app.ts";
 import { buildCompany, TEST_PASSWORD } from "../../support/build-company.ts";
 import { useMailCatcher } from "../../support/mail-catcher.ts";
 
@@ -11,11 +11,7 @@ const linkToken = (text: string) => /set-password\?token=([A-Za-z0-9_-]+)/.exec(
 
 async function adminAgent() {
   const { users } = await buildCompany("platform", ["admin"]);
-  const agent = agentFor(t.app);
-  await agent
-    .post("/api/auth/sign-in")
-    .send({ email: users.admin!.email, password: TEST_PASSWORD })
-    .expect(200);
+  const agent = await signedInAs(t.app, users.admin!.email);
   return agent;
 }
 
@@ -115,11 +111,7 @@ describe("after a password reset", () => {
     const elsewhere = agentFor(quick.app);
     await elsewhere.post("/api/auth/sign-in").send({ email, password: TEST_PASSWORD }).expect(200);
     const bystander = (await buildCompany("shop", ["buyer"])).users.buyer!;
-    const other = agentFor(quick.app);
-    await other
-      .post("/api/auth/sign-in")
-      .send({ email: bystander.email, password: TEST_PASSWORD })
-      .expect(200);
+    const other = await signedInAs(quick.app, bystander.email);
     await agentFor(quick.app).post("/api/auth/password-reset").send({ email }).expect(202);
     await agentFor(quick.app).post("/api/auth/password-reset").send({ email }).expect(202);
     await mail.deliver();

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import request from "supertest";
-import { agentFor, useTestApp } from "../../support/test-app.ts";
-import { buildCompany, TEST_PASSWORD } from "../../support/build-company.ts";
+import { useTestApp, signedInAs } from "../../support/test-app.ts";
+import { buildCompany } from "../../support/build-company.ts";
 import { useDirectoryWorld } from "../../support/directory-suite.ts";
 import { greatCircleDistanceKm } from "../../../shared/geo/great-circle-distance.ts";
 import { milesToKm } from "../../../shared/geo/units.ts";
@@ -220,11 +220,7 @@ describe("directory: access", () => {
 
   it("answers 403 to a service company's admin", async () => {
     const { users } = await buildCompany("service", ["provider_admin"]);
-    const agent = agentFor(t.app);
-    await agent
-      .post("/api/auth/sign-in")
-      .send({ email: users.provider_admin!.email, password: TEST_PASSWORD })
-      .expect(200);
+    const agent = await signedInAs(t.app, users.provider_admin!.email);
 
     const res = await agent.get("/api/directory");
 
@@ -233,11 +229,7 @@ describe("directory: access", () => {
 
   it("answers 404 for another shop's site or requirement set", async () => {
     const { users } = await buildCompany("shop", ["buyer"]);
-    const other = agentFor(t.app);
-    await other
-      .post("/api/auth/sign-in")
-      .send({ email: users.buyer!.email, password: TEST_PASSWORD })
-      .expect(200);
+    const other = await signedInAs(t.app, users.buyer!.email);
 
     const site = await other.get("/api/directory").query({ siteId: world.site.id });
     const set = await other.get("/api/directory").query({ requirementSetId: world.requirementSetId });

@@ -1,8 +1,8 @@
 import { describe, expect, it } from "vitest";
 import request from "supertest";
 import { QueryTypes } from "sequelize";
-import { agentFor, useTestApp, sequelize } from "../../support/test-app.ts";
-import { buildCompany, TEST_PASSWORD } from "../../support/build-company.ts";
+import { useTestApp, sequelize, signedInAs } from "../../support/test-app.ts";
+import { buildCompany } from "../../support/build-company.ts";
 import { useDirectoryWorld } from "../../support/directory-suite.ts";
 
 const t = useTestApp();
@@ -90,11 +90,7 @@ describe("technician page for buyers", () => {
 
   it("answers 401 signed out and 403 to a provider", async () => {
     const { users } = await buildCompany("service", ["provider_admin"]);
-    const provider = agentFor(t.app);
-    await provider
-      .post("/api/auth/sign-in")
-      .send({ email: users.provider_admin!.email, password: TEST_PASSWORD })
-      .expect(200);
+    const provider = await signedInAs(t.app, users.provider_admin!.email);
     const id = listed()[0]!.id;
 
     const anonymous = await request(t.app).get(`/api/directory/technicians/${id}`);

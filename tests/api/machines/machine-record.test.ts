@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { agentFor, buildTestApp, type TestApp } from "../../support/test-app.ts";
-import { buildCompany, TEST_PASSWORD } from "../../support/build-company.ts";
+import { buildTestApp, type TestApp, signedInAs } from "../../support/test-app.ts";
+import { buildCompany } from "../../support/build-company.ts";
 
 let t: TestApp;
 beforeAll(() => {
@@ -10,11 +10,7 @@ afterAll(() => t.close());
 
 async function shop() {
   const { users } = await buildCompany("shop", ["buyer"]);
-  const agent = agentFor(t.app);
-  await agent
-    .post("/api/auth/sign-in")
-    .send({ email: users.buyer!.email, password: TEST_PASSWORD })
-    .expect(200);
+  const agent = await signedInAs(t.app, users.buyer!.email);
   const site = await agent
     .post("/api/sites")
     .send({ name: "East Works", addressLine: "12 Spindle Road", postalCode: "60601" })

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { agentFor, useTestApp } from "../../support/test-app.ts";
-import { buildCompany, TEST_PASSWORD } from "../../support/build-company.ts";
+import { agentFor, useTestApp, signedInAs } from "../../support/test-app.ts";
+import { buildCompany } from "../../support/build-company.ts";
 import { useDirectoryWorld } from "../../support/directory-suite.ts";
 
 const t = useTestApp();
@@ -11,11 +11,7 @@ const listed = () =>
 
 async function otherShopBuyer() {
   const { users } = await buildCompany("shop", ["buyer"]);
-  const agent = agentFor(t.app);
-  await agent
-    .post("/api/auth/sign-in")
-    .send({ email: users.buyer!.email, password: TEST_PASSWORD })
-    .expect(200);
+  const agent = await signedInAs(t.app, users.buyer!.email);
   return agent;
 }
 

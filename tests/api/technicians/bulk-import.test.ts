@@ -1,8 +1,8 @@
 import { describe, expect, it } from "vitest";
 import Papa from "papaparse";
-import { agentFor, useTestApp } from "../../support/test-app.ts";
+import { agentFor, useTestApp, signedInAs } from "../../support/test-app.ts";
 import { buildProvider } from "../../support/build-provider.ts";
-import { buildCompany, TEST_PASSWORD } from "../../support/build-company.ts";
+import { buildCompany } from "../../support/build-company.ts";
 import { useMailCatcher } from "../../support/mail-catcher.ts";
 import { Technician } from "../../../server/technicians/model.ts";
 import { User } from "../../../server/accounts/model.ts";
@@ -180,11 +180,7 @@ describe("a service company imports its technicians from a CSV", () => {
   it("lets only a service company's admin import; a shop or a technician is refused", async () => {
     const provider = await buildProvider(t.app);
     const { users } = await buildCompany("shop", ["buyer"]);
-    const shop = agentFor(t.app);
-    await shop
-      .post("/api/auth/sign-in")
-      .send({ email: users.buyer!.email, password: TEST_PASSWORD })
-      .expect(200);
+    const shop = await signedInAs(t.app, users.buyer!.email);
     const csv = Papa.unparse([header, ["Anyone Here", "", "", "53202", "", "10", "1", "1"]]);
 
     const byShop = await upload(shop, "/api/technicians/import", csv);
