@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { buildTestApp, type TestApp, signedInAs } from "../../support/test-app.ts";
-import { buildCompany } from "../../support/build-company.ts";
+import { buildTestApp, type TestApp } from "../../support/test-app.ts";
+import { buildMachineShop } from "../../fixtures/build-machine-shop.ts";
 
 let t: TestApp;
 beforeAll(() => {
@@ -8,15 +8,7 @@ beforeAll(() => {
 });
 afterAll(() => t.close());
 
-async function shop() {
-  const { users } = await buildCompany("shop", ["buyer"]);
-  const agent = await signedInAs(t.app, users.buyer!.email);
-  const site = await agent
-    .post("/api/sites")
-    .send({ name: "East Works", addressLine: "12 Spindle Road", postalCode: "60601" })
-    .expect(201);
-  return { agent, siteId: site.body.id as number };
-}
+const shop = () => buildMachineShop(t.app, { machine: false });
 
 let serialSeq = 0;
 const nextSerial = () => `VX-${process.pid}-${++serialSeq}`;
