@@ -1,21 +1,13 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { buildTestApp, type TestApp } from "../support/test-app.ts";
-import { startTestMailCatcher } from "../support/mail-catcher.ts";
+import { describe, expect, it } from "vitest";
+import { useTestApp } from "../support/test-app.ts";
+import { useMailCatcher } from "../support/mail-catcher.ts";
 import { buildClearedCompany, buildShop, type Shop } from "../fixtures/build-service-request-world.ts";
 import { buildMachineShop } from "../fixtures/build-machine-shop.ts";
 import { runLapseJob } from "../../jobs/lapse.ts";
 import { JOB_DEPS, rows, runJobCli } from "./job-support.ts";
 
-let t: TestApp;
-let catcher: Awaited<ReturnType<typeof startTestMailCatcher>>;
-beforeAll(async () => {
-  t = buildTestApp();
-  catcher = await startTestMailCatcher();
-});
-afterAll(async () => {
-  await catcher.close();
-  await t.close();
-});
+const t = useTestApp();
+const catcher = useMailCatcher();
 
 async function planOn(shop: Shop, body: Record<string, unknown>) {
   const res = await shop.agent.post(`/api/machines/${shop.equipmentId}/maintenance-plans`).send(body);

@@ -1,23 +1,16 @@
 import { DateTime } from "luxon";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { buildTestApp, type TestApp } from "../support/test-app.ts";
-import { startTestMailCatcher } from "../support/mail-catcher.ts";
+import { describe, expect, it } from "vitest";
+import { useTestApp } from "../support/test-app.ts";
+import { useMailCatcher } from "../support/mail-catcher.ts";
 import { buildCompany } from "../support/build-company.ts";
 import { buildProvider, buildCredentialRow, insuranceFields } from "../fixtures/build-credential-row.ts";
 import { runReviewerDigest } from "../../jobs/reviewer-digest.ts";
 import { Credential } from "../../server/credentials/model.ts";
 import { deliverAll } from "./job-support.ts";
 
-let t: TestApp;
-let catcher: Awaited<ReturnType<typeof startTestMailCatcher>>;
-beforeAll(async () => {
-  t = buildTestApp();
-  catcher = await startTestMailCatcher();
-});
-afterAll(async () => {
-  await catcher.close();
-  await t.close();
-});
+// The app is built for its database connection; the digest reads and writes through the models.
+useTestApp();
+const catcher = useMailCatcher();
 
 const deps = { timeZone: "America/Chicago", publicUrl: "https://clearbench.test" };
 

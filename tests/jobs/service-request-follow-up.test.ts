@@ -1,6 +1,6 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { buildTestApp, sequelize, type TestApp } from "../support/test-app.ts";
-import { startTestMailCatcher } from "../support/mail-catcher.ts";
+import { describe, expect, it } from "vitest";
+import { sequelize, useTestApp } from "../support/test-app.ts";
+import { useMailCatcher } from "../support/mail-catcher.ts";
 import { signedInAgent } from "../support/build-provider.ts";
 import {
   buildClearedCompany,
@@ -13,16 +13,8 @@ import { addBusinessHours } from "../../shared/service-requests/business-hours.t
 import { runServiceRequestFollowUp } from "../../jobs/service-request-follow-up.ts";
 import { deliverAll, rows, runJobCli, HOUR } from "./job-support.ts";
 
-let t: TestApp;
-let catcher: Awaited<ReturnType<typeof startTestMailCatcher>>;
-beforeAll(async () => {
-  t = buildTestApp();
-  catcher = await startTestMailCatcher();
-});
-afterAll(async () => {
-  await catcher.close();
-  await t.close();
-});
+const t = useTestApp();
+const catcher = useMailCatcher();
 
 const DEPS = {
   SERVICE_REQUEST_REMINDER_HOURS: 3,

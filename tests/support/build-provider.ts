@@ -1,6 +1,6 @@
 import { Technician } from "../../server/technicians/model.ts";
 import { User } from "../../server/accounts/model.ts";
-import { agentFor } from "./test-app.ts";
+import { agentFor, signedInAs } from "./test-app.ts";
 import { buildCompany, TEST_PASSWORD } from "./build-company.ts";
 import type { Express } from "express";
 
@@ -29,11 +29,7 @@ export async function buildProvider(app: Express, name?: string) {
     passwordHash: users.provider_admin!.passwordHash,
     technicianId: technician.id,
   });
-  const admin = agentFor(app);
-  await admin
-    .post("/api/auth/sign-in")
-    .send({ email: users.provider_admin!.email, password: TEST_PASSWORD })
-    .expect(200);
+  const admin = await signedInAs(app, users.provider_admin!.email);
   const tech = agentFor(app);
   await tech.post("/api/auth/sign-in").send({ email: techUser.email, password: TEST_PASSWORD }).expect(200);
   return { company, technician, admin, tech, adminUser: users.provider_admin!, techUser };
@@ -45,10 +41,6 @@ export async function signedInAgent(
   role: "reviewer" | "admin" | "buyer",
 ) {
   const { users, company } = await buildCompany(kind, [role]);
-  const agent = agentFor(app);
-  await agent
-    .post("/api/auth/sign-in")
-    .send({ email: users[role]!.email, password: TEST_PASSWORD })
-    .expect(200);
+  const agent = await signedInAs(app, users[role]!.email);
   return { agent, user: users[role]!, company };
 }

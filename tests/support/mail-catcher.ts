@@ -1,6 +1,7 @@
 import { startSmtpCatcher, type CaughtMessage } from "../../server/mail/smtp-catcher.ts";
 import { createSmtpMailer } from "../../server/mail/mailer.ts";
 import { deliverDueMail } from "../../server/mail/outbox.ts";
+import { useForFile } from "./suite-hooks.ts";
 
 /** A real SMTP server on loopback; `deliver()` runs the outbox sender against it. */
 export async function startTestMailCatcher() {
@@ -29,4 +30,11 @@ export async function startTestMailCatcher() {
       await catcher.close();
     },
   };
+}
+
+export type TestMailCatcher = Awaited<ReturnType<typeof startTestMailCatcher>>;
+
+/** A mail catcher for the whole file: started in beforeAll, closed in afterAll. */
+export function useMailCatcher(): TestMailCatcher {
+  return useForFile("the mail catcher", startTestMailCatcher, (catcher) => catcher.close());
 }

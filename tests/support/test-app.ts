@@ -8,6 +8,8 @@ import { initModels } from "../../server/db/associations.ts";
 import { createApp } from "../../server/app.ts";
 import { setHashConcurrency, setPasswordCost } from "../../server/accounts/passwords.ts";
 import { CSRF_HEADER, CSRF_HEADER_VALUE } from "../../shared/api/error-body.ts";
+import { TEST_PASSWORD } from "./build-company.ts";
+import { useForFile } from "./suite-hooks.ts";
 
 export interface TestApp {
   app: Express;
@@ -38,11 +40,27 @@ export function buildTestApp(overrides: Record<string, string> = {}): TestApp {
   };
 }
 
+/** The test app for the whole file: built in beforeAll, its session pool closed in afterAll. */
+export function useTestApp(overrides: Record<string, string> = {}): TestApp {
+  return useForFile(
+    "the test app",
+    () => buildTestApp(overrides),
+    (t) => t.close(),
+  );
+}
+
 export const sequelize = () => db();
 
 /** A supertest agent that keeps cookies and sends the CSRF header on every request. */
 export function agentFor(app: Express) {
   const agent = request.agent(app);
   agent.set(CSRF_HEADER, CSRF_HEADER_VALUE);
+  return agent;
+}
+
+/** An agent signed in as the user with this e-mail and the suite's password. */
+export async function signedInAs(app: Express, email: string) {
+  const agent = agentFor(app);
+  await agent.post("/api/auth/sign-in").send({ email, password: TEST_PASSWORD }).expect(200);
   return agent;
 }

@@ -1,29 +1,17 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { randomUUID } from "node:crypto";
-import { agentFor, buildTestApp, type TestApp } from "../../support/test-app.ts";
+import { agentFor, buildTestApp, useTestApp, signedInAs } from "../../support/test-app.ts";
 import { buildCompany, TEST_PASSWORD } from "../../support/build-company.ts";
-import { startTestMailCatcher } from "../../support/mail-catcher.ts";
+import { useMailCatcher } from "../../support/mail-catcher.ts";
 
-let t: TestApp;
-let mail: Awaited<ReturnType<typeof startTestMailCatcher>>;
-beforeAll(async () => {
-  t = buildTestApp();
-  mail = await startTestMailCatcher();
-});
-afterAll(async () => {
-  await t.close();
-  await mail.close();
-});
+const t = useTestApp();
+const mail = useMailCatcher();
 
 const linkToken = (text: string) => /set-password\?token=([A-Za-z0-9_-]+)/.exec(text)?.[1];
 
 async function adminAgent() {
   const { users } = await buildCompany("platform", ["admin"]);
-  const agent = agentFor(t.app);
-  await agent
-    .post("/api/auth/sign-in")
-    .send({ email: users.admin!.email, password: TEST_PASSWORD })
-    .expect(200);
+  const agent = await signedInAs(t.app, users.admin!.email);
   return agent;
 }
 
@@ -123,11 +111,7 @@ describe("after a password reset", () => {
     const elsewhere = agentFor(quick.app);
     await elsewhere.post("/api/auth/sign-in").send({ email, password: TEST_PASSWORD }).expect(200);
     const bystander = (await buildCompany("shop", ["buyer"])).users.buyer!;
-    const other = agentFor(quick.app);
-    await other
-      .post("/api/auth/sign-in")
-      .send({ email: bystander.email, password: TEST_PASSWORD })
-      .expect(200);
+    const other = await signedInAs(quick.app, bystander.email);
     await agentFor(quick.app).post("/api/auth/password-reset").send({ email }).expect(202);
     await agentFor(quick.app).post("/api/auth/password-reset").send({ email }).expect(202);
     await mail.deliver();

@@ -1,24 +1,16 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import request from "supertest";
-import { buildTestApp, type TestApp } from "../../support/test-app.ts";
+import { useTestApp } from "../../support/test-app.ts";
 import { buildProvider, signedInAgent } from "../../support/build-provider.ts";
 import { submitLiabilityCertificate } from "../../support/submit-credential.ts";
-import { startTestMailCatcher } from "../../support/mail-catcher.ts";
+import { useMailCatcher } from "../../support/mail-catcher.ts";
 import { Credential } from "../../../server/credentials/model.ts";
 import { BrokerUploadRequest } from "../../../server/credentials/broker-model.ts";
 import { remindBrokers } from "../../../server/credentials/broker-reminders.ts";
 import { db } from "../../../server/db/sequelize.ts";
 
-let t: TestApp;
-let mail: Awaited<ReturnType<typeof startTestMailCatcher>>;
-beforeAll(async () => {
-  t = buildTestApp();
-  mail = await startTestMailCatcher();
-});
-afterAll(async () => {
-  await t.close();
-  await mail.close();
-});
+const t = useTestApp();
+const mail = useMailCatcher();
 
 const DAY_MS = 24 * 3600 * 1000;
 type Row = {

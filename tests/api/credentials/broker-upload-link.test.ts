@@ -1,11 +1,11 @@
 import { createHash } from "node:crypto";
 import { readdir } from "node:fs/promises";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import request from "supertest";
-import { buildTestApp, type TestApp } from "../../support/test-app.ts";
+import { useTestApp } from "../../support/test-app.ts";
 import { buildProvider, signedInAgent } from "../../support/build-provider.ts";
 import { submitLiabilityCertificate, certificateFields } from "../../support/submit-credential.ts";
-import { startTestMailCatcher } from "../../support/mail-catcher.ts";
+import { useMailCatcher } from "../../support/mail-catcher.ts";
 import { buildCertificatePdf } from "../../fixtures/build-certificate-pdf.ts";
 import { CSRF_HEADER, CSRF_HEADER_VALUE } from "../../../shared/api/error-body.ts";
 import { Document } from "../../../server/credentials/model.ts";
@@ -13,16 +13,8 @@ import { BrokerUploadRequest } from "../../../server/credentials/broker-model.ts
 import { Notification } from "../../../server/notices/model.ts";
 import { remindBrokers } from "../../../server/credentials/broker-reminders.ts";
 
-let t: TestApp;
-let mail: Awaited<ReturnType<typeof startTestMailCatcher>>;
-beforeAll(async () => {
-  t = buildTestApp();
-  mail = await startTestMailCatcher();
-});
-afterAll(async () => {
-  await t.close();
-  await mail.close();
-});
+const t = useTestApp();
+const mail = useMailCatcher();
 
 type Provider = Awaited<ReturnType<typeof buildProvider>>;
 

@@ -1,31 +1,17 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { agentFor, buildTestApp, type TestApp } from "../../support/test-app.ts";
-import { TEST_PASSWORD } from "../../support/build-company.ts";
+import { useTestApp } from "../../support/test-app.ts";
 import {
-  buildDirectoryWorld,
   WORLD_BUILDERS,
   WORLD_CONTROL_FAMILIES,
   WORLD_TECHNOLOGIES,
-  type DirectoryWorld,
 } from "../../fixtures/build-directory-world.ts";
+import { useDirectoryWorld } from "../../support/directory-suite.ts";
 import { bruteForceDirectory, toQuery, type DrawnFilters } from "./brute-force-directory.ts";
 import { readAllPages } from "./directory-pages.ts";
 
-let t: TestApp;
-let world: DirectoryWorld;
-let buyer: ReturnType<typeof agentFor>;
-
-beforeAll(async () => {
-  t = buildTestApp();
-  world = await buildDirectoryWorld({ seed: 11, count: 30 });
-  buyer = agentFor(t.app);
-  await buyer
-    .post("/api/auth/sign-in")
-    .send({ email: world.buyerEmail, password: TEST_PASSWORD })
-    .expect(200);
-});
-afterAll(() => t.close());
+const t = useTestApp();
+const { world, buyer } = useDirectoryWorld(t, { seed: 11, count: 30 });
 
 const filterValues = {
   credentialTypes: fc.subarray(["arc_flash", "lockout_tagout", "general_liability", "auto_liability"], {

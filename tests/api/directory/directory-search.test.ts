@@ -1,8 +1,8 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import request from "supertest";
-import { agentFor, buildTestApp, type TestApp } from "../../support/test-app.ts";
-import { buildCompany, TEST_PASSWORD } from "../../support/build-company.ts";
-import { buildDirectoryWorld, type DirectoryWorld } from "../../fixtures/build-directory-world.ts";
+import { useTestApp, signedInAs } from "../../support/test-app.ts";
+import { buildCompany } from "../../support/build-company.ts";
+import { useDirectoryWorld } from "../../support/directory-suite.ts";
 import { greatCircleDistanceKm } from "../../../shared/geo/great-circle-distance.ts";
 import { milesToKm } from "../../../shared/geo/units.ts";
 import { bayesianAverage } from "../../../shared/ranking/rating-score.ts";
@@ -10,20 +10,8 @@ import { Equipment } from "../../../server/sites/model.ts";
 import { bruteForceDirectory, toQuery } from "./brute-force-directory.ts";
 import { readAllPages } from "./directory-pages.ts";
 
-let t: TestApp;
-let world: DirectoryWorld;
-let buyer: ReturnType<typeof agentFor>;
-
-beforeAll(async () => {
-  t = buildTestApp();
-  world = await buildDirectoryWorld({ seed: 7 });
-  buyer = agentFor(t.app);
-  await buyer
-    .post("/api/auth/sign-in")
-    .send({ email: world.buyerEmail, password: TEST_PASSWORD })
-    .expect(200);
-});
-afterAll(() => t.close());
+const t = useTestApp();
+const { world, buyer } = useDirectoryWorld(t, { seed: 7 });
 
 const ours = (ids: number[]) => {
   const world_ = new Set(world.technicians.map((x) => x.id));
@@ -232,11 +220,7 @@ describe("directory: access", () => {
 
   it("answers 403 to a service company's admin", async () => {
     const { users } = await buildCompany("service", ["provider_admin"]);
-    const agent = agentFor(t.app);
-    await agent
-      .post("/api/auth/sign-in")
-      .send({ email: users.provider_admin!.email, password: TEST_PASSWORD })
-      .expect(200);
+    const agent = await signedInAs(t.app, users.provider_admin!.email);
 
     const res = await agent.get("/api/directory");
 
@@ -245,11 +229,7 @@ describe("directory: access", () => {
 
   it("answers 404 for another shop's site or requirement set", async () => {
     const { users } = await buildCompany("shop", ["buyer"]);
-    const other = agentFor(t.app);
-    await other
-      .post("/api/auth/sign-in")
-      .send({ email: users.buyer!.email, password: TEST_PASSWORD })
-      .expect(200);
+    const other = await signedInAs(t.app, users.buyer!.email);
 
     const site = await other.get("/api/directory").query({ siteId: world.site.id });
     const set = await other.get("/api/directory").query({ requirementSetId: world.requirementSetId });

@@ -1,23 +1,11 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { QueryTypes } from "sequelize";
-import { agentFor, buildTestApp, sequelize, type TestApp } from "../../support/test-app.ts";
-import { buildCompany, TEST_PASSWORD } from "../../support/build-company.ts";
-import { buildDirectoryWorld, type DirectoryWorld } from "../../fixtures/build-directory-world.ts";
+import { useTestApp, sequelize } from "../../support/test-app.ts";
+import { buildCompany } from "../../support/build-company.ts";
+import { useDirectoryWorld } from "../../support/directory-suite.ts";
 
-let t: TestApp;
-let world: DirectoryWorld;
-let buyer: ReturnType<typeof agentFor>;
-
-beforeAll(async () => {
-  t = buildTestApp();
-  world = await buildDirectoryWorld({ seed: 23, count: 12, companies: 3 });
-  buyer = agentFor(t.app);
-  await buyer
-    .post("/api/auth/sign-in")
-    .send({ email: world.buyerEmail, password: TEST_PASSWORD })
-    .expect(200);
-});
-afterAll(() => t.close());
+const t = useTestApp();
+const { world, buyer } = useDirectoryWorld(t, { seed: 23, count: 12, companies: 3 });
 
 async function firstRowNearSite(onSiteHours: number) {
   const res = await buyer

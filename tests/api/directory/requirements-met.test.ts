@@ -1,27 +1,14 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { buildTestApp, agentFor, type TestApp } from "../../support/test-app.ts";
-import { TEST_PASSWORD } from "../../support/build-company.ts";
-import { buildDirectoryWorld, type DirectoryWorld } from "../../fixtures/build-directory-world.ts";
+import { describe, expect, it } from "vitest";
+import { useTestApp } from "../../support/test-app.ts";
+import { useDirectoryWorld } from "../../support/directory-suite.ts";
 import { db } from "../../../server/db/sequelize.ts";
 import { evaluateRequirement } from "../../../shared/standing/evaluate-requirement.ts";
 import type { Requirement } from "../../../shared/standing/requirements.ts";
 import { buildInsuranceCredential } from "../../unit/standing/build-standing-credential.ts";
 import { readAllPages } from "./directory-pages.ts";
 
-let t: TestApp;
-let world: DirectoryWorld;
-let buyer: ReturnType<typeof agentFor>;
-
-beforeAll(async () => {
-  t = buildTestApp();
-  world = await buildDirectoryWorld({ seed: 11 });
-  buyer = agentFor(t.app);
-  await buyer
-    .post("/api/auth/sign-in")
-    .send({ email: world.buyerEmail, password: TEST_PASSWORD })
-    .expect(200);
-});
-afterAll(() => t.close());
+const t = useTestApp();
+const { world, buyer } = useDirectoryWorld(t, { seed: 11 });
 
 // Common practice: an umbrella of $4,000,000 over general liability of $1,000,000 meets $5,000,000 each occurrence.
 const fiveMillion: Requirement = {

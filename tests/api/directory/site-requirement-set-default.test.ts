@@ -1,23 +1,10 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { buildTestApp, agentFor, type TestApp } from "../../support/test-app.ts";
-import { TEST_PASSWORD } from "../../support/build-company.ts";
-import { buildDirectoryWorld, type DirectoryWorld } from "../../fixtures/build-directory-world.ts";
+import { describe, expect, it } from "vitest";
+import { useTestApp } from "../../support/test-app.ts";
+import { useDirectoryWorld } from "../../support/directory-suite.ts";
 import { readAllPages } from "./directory-pages.ts";
 
-let t: TestApp;
-let world: DirectoryWorld;
-let buyer: ReturnType<typeof agentFor>;
-
-beforeAll(async () => {
-  t = buildTestApp();
-  world = await buildDirectoryWorld({ seed: 23 });
-  buyer = agentFor(t.app);
-  await buyer
-    .post("/api/auth/sign-in")
-    .send({ email: world.buyerEmail, password: TEST_PASSWORD })
-    .expect(200);
-});
-afterAll(() => t.close());
+const t = useTestApp();
+const { world, buyer } = useDirectoryWorld(t, { seed: 23 });
 
 const passes = (s: string | null) => s === "cleared" || s === "lapsing";
 

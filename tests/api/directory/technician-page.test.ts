@@ -1,24 +1,12 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import request from "supertest";
 import { QueryTypes } from "sequelize";
-import { agentFor, buildTestApp, sequelize, type TestApp } from "../../support/test-app.ts";
-import { buildCompany, TEST_PASSWORD } from "../../support/build-company.ts";
-import { buildDirectoryWorld, type DirectoryWorld } from "../../fixtures/build-directory-world.ts";
+import { useTestApp, sequelize, signedInAs } from "../../support/test-app.ts";
+import { buildCompany } from "../../support/build-company.ts";
+import { useDirectoryWorld } from "../../support/directory-suite.ts";
 
-let t: TestApp;
-let world: DirectoryWorld;
-let buyer: ReturnType<typeof agentFor>;
-
-beforeAll(async () => {
-  t = buildTestApp();
-  world = await buildDirectoryWorld({ seed: 5, count: 12, companies: 3 });
-  buyer = agentFor(t.app);
-  await buyer
-    .post("/api/auth/sign-in")
-    .send({ email: world.buyerEmail, password: TEST_PASSWORD })
-    .expect(200);
-});
-afterAll(() => t.close());
+const t = useTestApp();
+const { world, buyer } = useDirectoryWorld(t, { seed: 5, count: 12, companies: 3 });
 
 const listed = () =>
   world.technicians.filter((x) => x.active && (x.baseline === "cleared" || x.baseline === "lapsing"));
@@ -116,11 +104,7 @@ describe("technician page for buyers", () => {
 
   it("answers 401 signed out and 403 to a provider", async () => {
     const { users } = await buildCompany("service", ["provider_admin"]);
-    const provider = agentFor(t.app);
-    await provider
-      .post("/api/auth/sign-in")
-      .send({ email: users.provider_admin!.email, password: TEST_PASSWORD })
-      .expect(200);
+    const provider = await signedInAs(t.app, users.provider_admin!.email);
     const id = listed()[0]!.id;
 
     const anonymous = await request(t.app).get(`/api/directory/technicians/${id}`);

@@ -1,27 +1,16 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { agentFor, buildTestApp, type TestApp } from "../../support/test-app.ts";
-import { TEST_PASSWORD } from "../../support/build-company.ts";
+import { beforeAll, describe, expect, it } from "vitest";
+import { agentFor, useTestApp } from "../../support/test-app.ts";
 import { signedInAgent } from "../../support/build-provider.ts";
-import { buildDirectoryWorld, type DirectoryWorld } from "../../fixtures/build-directory-world.ts";
+import { useDirectoryWorld } from "../../support/directory-suite.ts";
 import { bruteForceDirectory } from "../directory/brute-force-directory.ts";
 import { readAllPages } from "../directory/directory-pages.ts";
 
-let t: TestApp;
-let world: DirectoryWorld;
-let buyer: ReturnType<typeof agentFor>;
+const t = useTestApp();
+const { world, buyer } = useDirectoryWorld(t, { seed: 11 });
 let admin: ReturnType<typeof agentFor>;
-
 beforeAll(async () => {
-  t = buildTestApp();
-  world = await buildDirectoryWorld({ seed: 11 });
-  buyer = agentFor(t.app);
-  await buyer
-    .post("/api/auth/sign-in")
-    .send({ email: world.buyerEmail, password: TEST_PASSWORD })
-    .expect(200);
   admin = (await signedInAgent(t.app, "platform", "admin")).agent;
 });
-afterAll(() => t.close());
 
 const ours = (ids: number[]) => {
   const mine = new Set(world.technicians.map((x) => x.id));

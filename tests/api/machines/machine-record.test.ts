@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { agentFor, buildTestApp, type TestApp } from "../../support/test-app.ts";
-import { buildCompany, TEST_PASSWORD } from "../../support/build-company.ts";
+import { buildTestApp, type TestApp } from "../../support/test-app.ts";
+import { buildMachineShop } from "../../fixtures/build-machine-shop.ts";
 
 let t: TestApp;
 beforeAll(() => {
@@ -8,19 +8,7 @@ beforeAll(() => {
 });
 afterAll(() => t.close());
 
-async function shop() {
-  const { users } = await buildCompany("shop", ["buyer"]);
-  const agent = agentFor(t.app);
-  await agent
-    .post("/api/auth/sign-in")
-    .send({ email: users.buyer!.email, password: TEST_PASSWORD })
-    .expect(200);
-  const site = await agent
-    .post("/api/sites")
-    .send({ name: "East Works", addressLine: "12 Spindle Road", postalCode: "60601" })
-    .expect(201);
-  return { agent, siteId: site.body.id as number };
-}
+const shop = () => buildMachineShop(t.app, { machine: false });
 
 let serialSeq = 0;
 const nextSerial = () => `VX-${process.pid}-${++serialSeq}`;

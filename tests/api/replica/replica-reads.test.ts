@@ -1,8 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import pg from "pg";
 import request from "supertest";
-import { agentFor, buildTestApp, type TestApp } from "../../support/test-app.ts";
-import { TEST_PASSWORD } from "../../support/build-company.ts";
+import { agentFor, buildTestApp, type TestApp, signedInAs } from "../../support/test-app.ts";
 import { startReplicatedPostgres, type ReplicatedPostgres } from "../../support/replicated-postgres.ts";
 import { buildDirectoryWorld, type DirectoryWorld } from "../../fixtures/build-directory-world.ts";
 import { closeReplica, connectReplica } from "../../../server/db/replica.ts";
@@ -21,11 +20,7 @@ const listed = (world: DirectoryWorld) => bruteForceDirectory(world, {}, new Dat
 const plant = { name: "Replica Plant", addressLine: "12 Spindle Road", postalCode: "60601" };
 
 async function signIn(app: TestApp, world: DirectoryWorld) {
-  const agent = agentFor(app.app);
-  await agent
-    .post("/api/auth/sign-in")
-    .send({ email: world.buyerEmail, password: TEST_PASSWORD })
-    .expect(200);
+  const agent = await signedInAs(app.app, world.buyerEmail);
   return agent;
 }
 

@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { QueryTypes } from "sequelize";
-import { agentFor, buildTestApp, sequelize, type TestApp } from "../../support/test-app.ts";
-import { buildCompany, TEST_PASSWORD } from "../../support/build-company.ts";
+import { buildTestApp, sequelize, type TestApp, signedInAs } from "../../support/test-app.ts";
+import { buildCompany } from "../../support/build-company.ts";
 import { emitStandingsChanged, type ChangedStanding } from "../../../server/standing/index.ts";
 import { sweepRosterAlerts } from "../../../server/roster/index.ts";
 import { Technician } from "../../../server/technicians/model.ts";
@@ -17,11 +17,7 @@ const DAY = 86_400_000;
 
 async function shopWithRoster() {
   const { users, company } = await buildCompany("shop", ["buyer"]);
-  const agent = agentFor(t.app);
-  await agent
-    .post("/api/auth/sign-in")
-    .send({ email: users.buyer!.email, password: TEST_PASSWORD })
-    .expect(200);
+  const agent = await signedInAs(t.app, users.buyer!.email);
   const provider = await buildCompany("service", []);
   const technician = await Technician.create({
     companyId: provider.company.id,

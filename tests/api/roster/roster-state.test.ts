@@ -1,33 +1,17 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { agentFor, buildTestApp, type TestApp } from "../../support/test-app.ts";
-import { buildCompany, TEST_PASSWORD } from "../../support/build-company.ts";
-import { buildDirectoryWorld, type DirectoryWorld } from "../../fixtures/build-directory-world.ts";
+import { describe, expect, it } from "vitest";
+import { agentFor, useTestApp, signedInAs } from "../../support/test-app.ts";
+import { buildCompany } from "../../support/build-company.ts";
+import { useDirectoryWorld } from "../../support/directory-suite.ts";
 
-let t: TestApp;
-let world: DirectoryWorld;
-let buyer: ReturnType<typeof agentFor>;
-
-beforeAll(async () => {
-  t = buildTestApp();
-  world = await buildDirectoryWorld({ seed: 11, count: 10, companies: 3 });
-  buyer = agentFor(t.app);
-  await buyer
-    .post("/api/auth/sign-in")
-    .send({ email: world.buyerEmail, password: TEST_PASSWORD })
-    .expect(200);
-});
-afterAll(() => t.close());
+const t = useTestApp();
+const { world, buyer } = useDirectoryWorld(t, { seed: 11, count: 10, companies: 3 });
 
 const listed = () =>
   world.technicians.filter((x) => x.active && (x.baseline === "cleared" || x.baseline === "lapsing"));
 
 async function otherShopBuyer() {
   const { users } = await buildCompany("shop", ["buyer"]);
-  const agent = agentFor(t.app);
-  await agent
-    .post("/api/auth/sign-in")
-    .send({ email: users.buyer!.email, password: TEST_PASSWORD })
-    .expect(200);
+  const agent = await signedInAs(t.app, users.buyer!.email);
   return agent;
 }
 

@@ -1,8 +1,8 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import request from "supertest";
 import Papa from "papaparse";
-import { agentFor, buildTestApp, sequelize, type TestApp } from "../../support/test-app.ts";
-import { buildCompany, TEST_PASSWORD } from "../../support/build-company.ts";
+import { buildTestApp, sequelize, type TestApp, signedInAs } from "../../support/test-app.ts";
+import { buildCompany } from "../../support/build-company.ts";
 import { Technician } from "../../../server/technicians/model.ts";
 import type { Standing } from "../../../shared/standing/standing-types.ts";
 
@@ -14,11 +14,7 @@ afterAll(() => t.close());
 
 async function signedInBuyer() {
   const { users, company } = await buildCompany("shop", ["buyer"]);
-  const agent = agentFor(t.app);
-  await agent
-    .post("/api/auth/sign-in")
-    .send({ email: users.buyer!.email, password: TEST_PASSWORD })
-    .expect(200);
+  const agent = await signedInAs(t.app, users.buyer!.email);
   return { agent, company, user: users.buyer! };
 }
 
@@ -143,11 +139,7 @@ describe("roster", () => {
     const entry = (await owner.agent.post("/api/roster").send({ technicianId: technician.id }).expect(201))
       .body;
     const { users } = await buildCompany("service", ["provider_admin"]);
-    const provider = agentFor(t.app);
-    await provider
-      .post("/api/auth/sign-in")
-      .send({ email: users.provider_admin!.email, password: TEST_PASSWORD })
-      .expect(200);
+    const provider = await signedInAs(t.app, users.provider_admin!.email);
 
     const anonymous = await request(t.app).get("/api/roster");
     const forbidden = await provider.get("/api/roster/export.csv");

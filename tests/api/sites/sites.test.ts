@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import request from "supertest";
-import { agentFor, buildTestApp, type TestApp } from "../../support/test-app.ts";
-import { buildCompany, TEST_PASSWORD } from "../../support/build-company.ts";
+import { buildTestApp, type TestApp, signedInAs } from "../../support/test-app.ts";
+import { buildCompany } from "../../support/build-company.ts";
 import type { CompanyKind, Role } from "../../../shared/accounts/schemas.ts";
 
 let t: TestApp;
@@ -12,11 +12,7 @@ afterAll(() => t.close());
 
 async function signedIn(kind: CompanyKind, role: Role) {
   const { users, company } = await buildCompany(kind, [role]);
-  const agent = agentFor(t.app);
-  await agent
-    .post("/api/auth/sign-in")
-    .send({ email: users[role]!.email, password: TEST_PASSWORD })
-    .expect(200);
+  const agent = await signedInAs(t.app, users[role]!.email);
   return { agent, company };
 }
 

@@ -1,24 +1,15 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import Papa from "papaparse";
-import { buildTestApp, type TestApp } from "../../support/test-app.ts";
+import { agentFor, useTestApp, signedInAs } from "../../support/test-app.ts";
 import { buildProvider } from "../../support/build-provider.ts";
-import { buildCompany, TEST_PASSWORD } from "../../support/build-company.ts";
-import { agentFor } from "../../support/test-app.ts";
-import { startTestMailCatcher } from "../../support/mail-catcher.ts";
+import { buildCompany } from "../../support/build-company.ts";
+import { useMailCatcher } from "../../support/mail-catcher.ts";
 import { Technician } from "../../../server/technicians/model.ts";
 import { User } from "../../../server/accounts/model.ts";
 import { countStored } from "../../support/count-uploads.ts";
 
-let t: TestApp;
-let mail: Awaited<ReturnType<typeof startTestMailCatcher>>;
-beforeAll(async () => {
-  t = buildTestApp();
-  mail = await startTestMailCatcher();
-});
-afterAll(async () => {
-  await t.close();
-  await mail.close();
-});
+const t = useTestApp();
+const mail = useMailCatcher();
 
 const header = [
   "Name",
@@ -189,11 +180,7 @@ describe("a service company imports its technicians from a CSV", () => {
   it("lets only a service company's admin import; a shop or a technician is refused", async () => {
     const provider = await buildProvider(t.app);
     const { users } = await buildCompany("shop", ["buyer"]);
-    const shop = agentFor(t.app);
-    await shop
-      .post("/api/auth/sign-in")
-      .send({ email: users.buyer!.email, password: TEST_PASSWORD })
-      .expect(200);
+    const shop = await signedInAs(t.app, users.buyer!.email);
     const csv = Papa.unparse([header, ["Anyone Here", "", "", "53202", "", "10", "1", "1"]]);
 
     const byShop = await upload(shop, "/api/technicians/import", csv);
