@@ -370,7 +370,10 @@ export async function receiveBrokerUpload(
       );
     },
   });
-  return { received: true, document: { name: result.document.name, sizeBytes: result.document.sizeBytes } };
+  return {
+    received: true as const,
+    document: { name: result.document.name, sizeBytes: result.document.sizeBytes },
+  };
 }
 
 /**

@@ -32,6 +32,10 @@ import {
 } from "./broker-requests.ts";
 import { listBrokerCoverages } from "./broker-coverages.ts";
 import { askForCertificate, listShopCertificateRequests } from "./shop-certificate-requests.ts";
+import {
+  brokerUploadReceivedDtoSchema,
+  shopCertificateRequestDtoSchema,
+} from "../../shared/credentials/broker-schemas.ts";
 
 // A company's insurance is handled by its office; the broker's own routes need no account, only the link.
 const canManageBroker = requireRole("provider_admin");
@@ -78,11 +82,12 @@ brokerRoutes.get(
 
 brokerRoutes.post(
   "/broker-requests",
-  { allow: canManageBroker, body: requestBrokerCertificateSchema },
+  { allow: canManageBroker, body: requestBrokerCertificateSchema, response: brokerRequestDtoSchema },
   async (req, res, { body }) => {
     const dto = await requestBrokerCertificate(req.user!, body, linkBase(req));
     kickOutbox(req.app.locals);
-    res.status(201).json(dto);
+    res.status(201);
+    return dto;
   },
 );
 
@@ -103,9 +108,11 @@ brokerRoutes.post(
     allow: brokerLinkHolder,
     before: [abuseLimit("brokerLink"), linkStillOpen, singleFileUpload],
     params: brokerTokenParamsSchema,
+    response: brokerUploadReceivedDtoSchema,
   },
   async (req, res, { params }) => {
-    res.status(201).json(await receiveBrokerUpload(params.token, req.file, appStorage(req)));
+    res.status(201);
+    return await receiveBrokerUpload(params.token, req.file, appStorage(req));
   },
 );
 
@@ -120,10 +127,11 @@ brokerRoutes.get(
 
 brokerRoutes.post(
   "/certificate-requests",
-  { allow: canAskForCertificate, body: askForCertificateSchema },
+  { allow: canAskForCertificate, body: askForCertificateSchema, response: shopCertificateRequestDtoSchema },
   async (req, res, { body }) => {
     const dto = await askForCertificate(req.user!, body, linkBase(req));
     kickOutbox(req.app.locals);
-    res.status(201).json(dto);
+    res.status(201);
+    return dto;
   },
 );

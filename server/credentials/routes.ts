@@ -41,6 +41,10 @@ import { submitCoverages } from "./submit-coverages.ts";
 import { editCredentialFields, returnCredential, verifyCredential } from "./decide-credential.ts";
 import { findCredential, findQueue, listOwnCredentials } from "./find-credentials.ts";
 import { sendDocumentFile, sendPdfPage } from "./download-document.ts";
+import {
+  submittedCoveragesDtoSchema,
+  uploadedDocumentDtoSchema,
+} from "../../shared/credentials/credential-shapes.ts";
 
 export const credentialRoutes = createRoutes("/api");
 
@@ -63,9 +67,15 @@ credentialRoutes.patch(
 
 credentialRoutes.post(
   "/documents",
-  { allow: canUploadDocuments, before: [singleFileUpload], body: uploadDocumentSchema },
+  {
+    allow: canUploadDocuments,
+    before: [singleFileUpload],
+    body: uploadDocumentSchema,
+    response: uploadedDocumentDtoSchema,
+  },
   async (req, res, { body }) => {
-    res.status(201).json(await uploadDocument(req.user!, body, req.file, appStorage(req)));
+    res.status(201);
+    return await uploadDocument(req.user!, body, req.file, appStorage(req));
   },
 );
 
@@ -91,18 +101,20 @@ credentialRoutes.get(
 
 credentialRoutes.post(
   "/credentials",
-  { allow: canUploadDocuments, body: submitCredentialSchema },
+  { allow: canUploadDocuments, body: submitCredentialSchema, response: credentialDtoSchema },
   async (req, res, { body }) => {
-    res.status(201).json(await submitCredential(req.user!, body));
+    res.status(201);
+    return await submitCredential(req.user!, body);
   },
 );
 
 // Every coverage of one certificate in one request: all are saved, or none.
 credentialRoutes.post(
   "/credentials/coverages",
-  { allow: canSubmitCoverages, body: submitCoveragesSchema },
+  { allow: canSubmitCoverages, body: submitCoveragesSchema, response: submittedCoveragesDtoSchema },
   async (req, res, { body }) => {
-    res.status(201).json(await submitCoverages(req.user!, body));
+    res.status(201);
+    return await submitCoverages(req.user!, body);
   },
 );
 

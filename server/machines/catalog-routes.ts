@@ -20,9 +20,10 @@ machineCatalogRoutes.get(
 
 machineCatalogRoutes.post(
   "",
-  { allow: requireRole("admin"), body: catalogEntryInputSchema },
+  { allow: requireRole("admin"), body: catalogEntryInputSchema, response: catalogEntryDtoSchema },
   async (req, res, { body }) => {
-    res.status(201).json(await addCatalogEntry(req.user!, body));
+    res.status(201);
+    return await addCatalogEntry(req.user!, body);
   },
 );
 

@@ -11,6 +11,7 @@ import { canOpenMachine, ownMachine } from "./machine-routes.ts";
 import { listMachineHistory } from "./service-history.ts";
 import { recordShopService } from "./record-shop-service.ts";
 import { historyToCsv, renderHistoryPage } from "./history-export.ts";
+import { historyEntryDtoSchema } from "../../shared/machines/service-history.ts";
 
 export const machineHistoryRoutes = createRoutes("/api/machines");
 
@@ -40,12 +41,20 @@ machineHistoryRoutes.get(
 
 machineHistoryRoutes.post(
   "/:machineId/history",
-  { allow: canOpenMachine, params: machineParamsSchema, body: recordShopServiceSchema },
+  {
+    allow: canOpenMachine,
+    params: machineParamsSchema,
+    body: recordShopServiceSchema,
+    response: historyEntryDtoSchema,
+  },
   async (req, res, { params, body }) => {
     const { machine } = await machineOf(req.user!, params.machineId);
     const { key } = await recordShopService(req.user!, machine, body);
     const history = await listMachineHistory(machine.id, req.user!.companyId);
-    res.status(201).json(history.entries.find((e) => e.key === key));
+    const entry = history.entries.find((e) => e.key === key);
+    if (!entry) throw new Error(`The shop record ${key} just saved is missing from the history`);
+    res.status(201);
+    return entry;
   },
 );
 

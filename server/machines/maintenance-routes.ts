@@ -38,9 +38,15 @@ maintenanceRoutes.get(
 
 maintenanceRoutes.post(
   "/:machineId/maintenance-plans",
-  { allow: canPlanMaintenance, params: machineParamsSchema, body: maintenancePlanInputSchema },
+  {
+    allow: canPlanMaintenance,
+    params: machineParamsSchema,
+    body: maintenancePlanInputSchema,
+    response: maintenancePlanSchema,
+  },
   async (req, res, { params, body }) => {
-    res.status(201).json(await addPlan(req.user!, params.machineId, body));
+    res.status(201);
+    return await addPlan(req.user!, params.machineId, body);
   },
 );
 

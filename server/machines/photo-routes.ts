@@ -25,9 +25,11 @@ machinePhotoRoutes.post(
     before: [singleFileUpload],
     params: machineParamsSchema,
     body: addMachinePhotoSchema,
+    response: machinePhotoSchema,
   },
   async (req, res, { params, body }) => {
-    res.status(201).json(await addMachinePhoto(req.user!, params.machineId, req.file, body.caption));
+    res.status(201);
+    return await addMachinePhoto(req.user!, params.machineId, req.file, body.caption);
   },
 );
 

@@ -35,11 +35,17 @@ machineTransferStartRoutes.get(
 
 machineTransferStartRoutes.post(
   "/:machineId/transfers",
-  { allow: canTransferMachine, params: machineParamsSchema, body: startTransferSchema },
+  {
+    allow: canTransferMachine,
+    params: machineParamsSchema,
+    body: startTransferSchema,
+    response: machineTransferSchema,
+  },
   async (req, res, { params, body }) => {
     const transfer = await startTransfer(req.user!, params.machineId, body, linkBase(req));
     kickOutbox(req.app.locals);
-    res.status(201).json(transfer);
+    res.status(201);
+    return transfer;
   },
 );
 

@@ -31,9 +31,15 @@ export const reviewRoutes = createRoutes("/api");
 
 reviewRoutes.post(
   "/work-orders/:workOrderId/review",
-  { allow: canWriteReview, params: workOrderParamsSchema, body: writeReviewSchema },
+  {
+    allow: canWriteReview,
+    params: workOrderParamsSchema,
+    body: writeReviewSchema,
+    response: reviewDtoSchema,
+  },
   async (req, res, { params, body }) => {
-    res.status(201).json(await writeReview(req.user!, params.workOrderId, body));
+    res.status(201);
+    return await writeReview(req.user!, params.workOrderId, body);
   },
 );
 

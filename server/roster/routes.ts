@@ -20,9 +20,14 @@ rosterRoutes.get("/export.csv", { allow: canKeepRoster }, async (req, res) => {
   res.type("text/csv; charset=utf-8").attachment("roster.csv").send(csv);
 });
 
-rosterRoutes.post("", { allow: canKeepRoster, body: addRosterEntrySchema }, async (req, res, { body }) => {
-  res.status(201).json(await addToRoster(req.user!, body));
-});
+rosterRoutes.post(
+  "",
+  { allow: canKeepRoster, body: addRosterEntrySchema, response: rosterEntryDtoSchema },
+  async (req, res, { body }) => {
+    res.status(201);
+    return await addToRoster(req.user!, body);
+  },
+);
 
 rosterRoutes.delete(
   "/:entryId",

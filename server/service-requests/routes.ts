@@ -63,11 +63,12 @@ serviceRequestRoutes.post(
 
 serviceRequestRoutes.post(
   "",
-  { allow: canRaiseServiceRequests, body: raiseServiceRequestSchema },
+  { allow: canRaiseServiceRequests, body: raiseServiceRequestSchema, response: serviceRequestDtoSchema },
   async (req, res, { body }) => {
     const created = await raiseServiceRequest(req.user!, body, linkBase(req));
     kick(req);
-    res.status(201).json(await viewRequest(req.user!, created.id));
+    res.status(201);
+    return await viewRequest(req.user!, created.id);
   },
 );
 

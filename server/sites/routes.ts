@@ -39,9 +39,14 @@ siteRoutes.get(
   (req, _res, { query }) => listShopSites(req.user!.companyId, query.includeArchived),
 );
 
-siteRoutes.post("", { allow: canAddSite, body: siteInputSchema }, async (req, res, { body }) => {
-  res.status(201).json(await addSite(req.user!, body));
-});
+siteRoutes.post(
+  "",
+  { allow: canAddSite, body: siteInputSchema, response: siteDtoSchema },
+  async (req, res, { body }) => {
+    res.status(201);
+    return await addSite(req.user!, body);
+  },
+);
 
 siteRoutes.get(
   "/:siteId",
@@ -71,9 +76,15 @@ siteRoutes.get(
 
 siteRoutes.post(
   "/:siteId/equipment",
-  { allow: canManageSite, params: siteParamsSchema, body: equipmentInputSchema },
+  {
+    allow: canManageSite,
+    params: siteParamsSchema,
+    body: equipmentInputSchema,
+    response: equipmentDtoSchema,
+  },
   async (req, res, { params, body }) => {
-    res.status(201).json(await addEquipment(req.user!, params.siteId, body));
+    res.status(201);
+    return await addEquipment(req.user!, params.siteId, body);
   },
 );
 

@@ -61,9 +61,10 @@ standingRoutes.get(
 
 standingRoutes.post(
   "/requirement-sets",
-  { allow: canListRequirementSets, body: requirementSetInputSchema },
+  { allow: canListRequirementSets, body: requirementSetInputSchema, response: requirementSetDtoSchema },
   async (req, res, { body }) => {
-    res.status(201).json(await defineRequirementSet(req.user!, body));
+    res.status(201);
+    return await defineRequirementSet(req.user!, body);
   },
 );
 

@@ -58,9 +58,10 @@ technicianRoutes.post(
 
 technicianRoutes.post(
   "",
-  { allow: canManageTechnicians, body: technicianInputSchema },
+  { allow: canManageTechnicians, body: technicianInputSchema, response: technicianDtoSchema },
   async (req, res, { body }) => {
-    res.status(201).json(await addTechnician(req.user!, body));
+    res.status(201);
+    return await addTechnician(req.user!, body);
   },
 );
 

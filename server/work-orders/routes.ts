@@ -55,11 +55,12 @@ async function thenSend<T>(req: Request, move: Promise<T>): Promise<T> {
 
 workOrderRoutes.post(
   "",
-  { allow: canRaiseWorkOrders, body: raiseWorkOrderSchema },
+  { allow: canRaiseWorkOrders, body: raiseWorkOrderSchema, response: workOrderDtoSchema },
   async (req, res, { body }) => {
     const dto = await raiseWorkOrder(req.user!, body, warningDays(req), linkTo(req));
     kickOutbox(req.app.locals);
-    res.status(201).json(dto);
+    res.status(201);
+    return dto;
   },
 );
 
@@ -155,11 +156,17 @@ workOrderRoutes.post(
 // The copy is a new work order (201); the declined one stays as it was, pointing at its copies.
 workOrderRoutes.post(
   "/:workOrderId/send-again",
-  { allow: canSeeWorkOrder, params: workOrderParamsSchema, body: sendAgainSchema },
+  {
+    allow: canSeeWorkOrder,
+    params: workOrderParamsSchema,
+    body: sendAgainSchema,
+    response: workOrderDtoSchema,
+  },
   async (req, res, { params, body }) => {
     const dto = await sendAgain(req.user!, params.workOrderId, body, warningDays(req), linkTo(req));
     kickOutbox(req.app.locals);
-    res.status(201).json(dto);
+    res.status(201);
+    return dto;
   },
 );
 

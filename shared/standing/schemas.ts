@@ -110,3 +110,14 @@ export const jobRunDtoSchema = z.object({
   startedBy: z.object({ id: z.number(), name: z.string() }).nullable(),
 });
 export type JobRunDto = z.infer<typeof jobRunDtoSchema>;
+
+/** What "Run the daily job now" answers: the run's id and what it did. */
+export const manualJobRunDtoSchema = z.object({
+  jobRunId: z.number(),
+  asOf: z.string(),
+  lapsed: z.number(),
+  noticesCreated: z.number(),
+  emailsQueued: z.number(),
+  changedStandings: z.number(),
+});
+export type ManualJobRunDto = z.infer<typeof manualJobRunDtoSchema>;

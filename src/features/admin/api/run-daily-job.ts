@@ -1,20 +1,12 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { z } from "zod";
+import { manualJobRunDtoSchema } from "@shared/standing/schemas.ts";
 import { api } from "@/lib/api-client.ts";
 import { jobRunKeys } from "./get-job-runs.ts";
 
-const manualRunSchema = z.object({
-  jobRunId: z.number(),
-  asOf: z.string(),
-  lapsed: z.number(),
-  noticesCreated: z.number(),
-  emailsQueued: z.number(),
-  changedStandings: z.number(),
-});
-export type ManualRun = z.infer<typeof manualRunSchema>;
+export type { ManualJobRunDto as ManualRun } from "@shared/standing/schemas.ts";
 
 /** The daily lapse round, judged as of now (the server's clock; no other day can be chosen). */
-export const runDailyJob = () => api.post("/admin/job-runs/lapse", {}, manualRunSchema);
+export const runDailyJob = () => api.post("/admin/job-runs/lapse", {}, manualJobRunDtoSchema);
 
 export function useRunDailyJob() {
   const queryClient = useQueryClient();
