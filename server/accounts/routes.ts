@@ -3,6 +3,7 @@ import { z } from "zod";
 import {
   adminCompanyDtoSchema,
   adminUserDtoSchema,
+  invitedUserDtoSchema,
   currentUserSchema,
   inviteUserSchema,
   userParamsSchema,
@@ -76,11 +77,12 @@ authRoutes.get("/me", { allow: signedIn, response: currentUserSchema }, async (r
 
 authRoutes.post(
   "/sign-up",
-  { allow: anyone, before: [abuseLimit("signUp")], body: signUpSchema },
+  { allow: anyone, before: [abuseLimit("signUp")], body: signUpSchema, response: currentUserSchema },
   async (req, res, { body }) => {
     const user = await signUpCompany(body);
     await logIn(req, toSessionUser(user));
-    res.status(201).json(await meOrThrow(user.id));
+    res.status(201);
+    return await meOrThrow(user.id);
   },
 );
 
@@ -110,11 +112,12 @@ adminUserRoutes.get("/companies", { allow: canManageUsers, response: z.array(adm
 );
 adminUserRoutes.post(
   "/invitations",
-  { allow: canManageUsers, body: inviteUserSchema },
+  { allow: canManageUsers, body: inviteUserSchema, response: invitedUserDtoSchema },
   async (req, res, { body }) => {
     const invited = await inviteUser(req.user!, body, linkBase(req));
     kickOutbox(req.app.locals);
-    res.status(201).json(invited);
+    res.status(201);
+    return invited;
   },
 );
 

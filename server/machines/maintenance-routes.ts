@@ -1,3 +1,4 @@
+import { raisedMaintenanceRequestSchema } from "../../shared/machines/maintenance-schemas.ts";
 import {
   hourReadingInputSchema,
   maintenancePlanListSchema,
@@ -77,7 +78,12 @@ maintenanceRoutes.post(
 
 maintenanceRoutes.post(
   "/:machineId/maintenance-plans/:planId/service-request",
-  { allow: canPlanMaintenance, params: maintenancePlanParamsSchema, body: maintenanceRequestInputSchema },
+  {
+    allow: canPlanMaintenance,
+    params: maintenancePlanParamsSchema,
+    body: maintenanceRequestInputSchema,
+    response: raisedMaintenanceRequestSchema,
+  },
   async (req, res, { params, body }) => {
     const raised = await requestPlannedService(
       req.user!,
@@ -87,6 +93,7 @@ maintenanceRoutes.post(
       linkBase(req),
     );
     kickOutbox(req.app.locals);
-    res.status(201).json(raised);
+    res.status(201);
+    return raised;
   },
 );

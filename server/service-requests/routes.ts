@@ -117,11 +117,17 @@ serviceRequestRoutes.get(
 
 serviceRequestRoutes.post(
   "/:requestId/estimates",
-  { allow: canAnswerServiceRequest, params: serviceRequestParamsSchema, body: estimateInputSchema },
+  {
+    allow: canAnswerServiceRequest,
+    params: serviceRequestParamsSchema,
+    body: estimateInputSchema,
+    response: serviceRequestDtoSchema,
+  },
   async (req, res, { params, body }) => {
     await sendEstimate(req.user!, params.requestId, body, warningDays(req), linkBase(req));
     kick(req);
-    res.status(201).json(await viewRequest(req.user!, params.requestId));
+    res.status(201);
+    return await viewRequest(req.user!, params.requestId);
   },
 );
 

@@ -1,3 +1,4 @@
+import { invitedUserDtoSchema } from "../../shared/accounts/schemas.ts";
 import { z } from "zod";
 import {
   technicianDtoSchema,
@@ -97,10 +98,16 @@ technicianRoutes.post(
 // Gives the technician a sign-in of their own, linked to this record, by an e-mailed one-time link.
 technicianRoutes.post(
   "/:technicianId/account",
-  { allow: canEditTechnician, params: technicianParamsSchema, body: z.object({ email: emailSchema }) },
+  {
+    allow: canEditTechnician,
+    params: technicianParamsSchema,
+    body: z.object({ email: emailSchema }),
+    response: invitedUserDtoSchema,
+  },
   async (req, res, { params, body }) => {
     const user = await inviteTechnicianAccount(req.user!, params.technicianId, body.email, linkBase(req));
     kickOutbox(req.app.locals);
-    res.status(201).json(user);
+    res.status(201);
+    return user;
   },
 );

@@ -121,6 +121,16 @@ export const adminUserDtoSchema = z.object({
 });
 export type AdminUserDto = z.infer<typeof adminUserDtoSchema>;
 
+/** The account an invitation just opened: who it is for, before they set a password. */
+export const invitedUserDtoSchema = adminUserDtoSchema.pick({
+  id: true,
+  email: true,
+  name: true,
+  role: true,
+  companyId: true,
+});
+export type InvitedUserDto = z.infer<typeof invitedUserDtoSchema>;
+
 export const adminCompanyDtoSchema = z.object({
   id: z.number(),
   name: z.string(),
