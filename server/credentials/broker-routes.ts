@@ -109,11 +109,9 @@ brokerRoutes.post(
     before: [abuseLimit("brokerLink"), linkStillOpen, singleFileUpload],
     params: brokerTokenParamsSchema,
     response: brokerUploadReceivedDtoSchema,
+    status: 201,
   },
-  async (req, res, { params }) => {
-    res.status(201);
-    return await receiveBrokerUpload(params.token, req.file, appStorage(req));
-  },
+  (req, _res, { params }) => receiveBrokerUpload(params.token, req.file, appStorage(req)),
 );
 
 // A shop asks through the platform; it never sees the broker's contact or the link, only how its request stands.

@@ -72,11 +72,9 @@ credentialRoutes.post(
     before: [singleFileUpload],
     body: uploadDocumentSchema,
     response: uploadedDocumentDtoSchema,
+    status: 201,
   },
-  async (req, res, { body }) => {
-    res.status(201);
-    return await uploadDocument(req.user!, body, req.file, appStorage(req));
-  },
+  (req, _res, { body }) => uploadDocument(req.user!, body, req.file, appStorage(req)),
 );
 
 credentialRoutes.get(
@@ -101,21 +99,20 @@ credentialRoutes.get(
 
 credentialRoutes.post(
   "/credentials",
-  { allow: canUploadDocuments, body: submitCredentialSchema, response: credentialDtoSchema },
-  async (req, res, { body }) => {
-    res.status(201);
-    return await submitCredential(req.user!, body);
-  },
+  { allow: canUploadDocuments, body: submitCredentialSchema, response: credentialDtoSchema, status: 201 },
+  (req, _res, { body }) => submitCredential(req.user!, body),
 );
 
 // Every coverage of one certificate in one request: all are saved, or none.
 credentialRoutes.post(
   "/credentials/coverages",
-  { allow: canSubmitCoverages, body: submitCoveragesSchema, response: submittedCoveragesDtoSchema },
-  async (req, res, { body }) => {
-    res.status(201);
-    return await submitCoverages(req.user!, body);
+  {
+    allow: canSubmitCoverages,
+    body: submitCoveragesSchema,
+    response: submittedCoveragesDtoSchema,
+    status: 201,
   },
+  (req, _res, { body }) => submitCoverages(req.user!, body),
 );
 
 credentialRoutes.get(

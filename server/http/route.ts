@@ -40,6 +40,8 @@ export interface RouteOptions<
    * return type is checked against it, and a test parses every GET answer on the demo data with it.
    */
   response?: R;
+  /** The status of a JSON answer when it is not 200: 201 for a record the call created. */
+  status?: 201 | 202;
 }
 
 type Answer<R extends Maybe> = R extends z.ZodType ? z.input<R> : unknown;
@@ -123,6 +125,7 @@ export function createRoutes(prefix: string) {
         else {
           if (options.response && appConfig(req).CHECK_RESPONSE_SHAPES)
             checkDeclaredAnswer(`${method.toUpperCase()} ${prefix + path}`, options.response, result);
+          if (options.status) res.status(options.status);
           res.json(result);
         }
       }

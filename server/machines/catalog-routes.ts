@@ -20,11 +20,13 @@ machineCatalogRoutes.get(
 
 machineCatalogRoutes.post(
   "",
-  { allow: requireRole("admin"), body: catalogEntryInputSchema, response: catalogEntryDtoSchema },
-  async (req, res, { body }) => {
-    res.status(201);
-    return await addCatalogEntry(req.user!, body);
+  {
+    allow: requireRole("admin"),
+    body: catalogEntryInputSchema,
+    response: catalogEntryDtoSchema,
+    status: 201,
   },
+  (req, _res, { body }) => addCatalogEntry(req.user!, body),
 );
 
 machineCatalogRoutes.put(

@@ -44,11 +44,9 @@ maintenanceRoutes.post(
     params: machineParamsSchema,
     body: maintenancePlanInputSchema,
     response: maintenancePlanSchema,
+    status: 201,
   },
-  async (req, res, { params, body }) => {
-    res.status(201);
-    return await addPlan(req.user!, params.machineId, body);
-  },
+  (req, _res, { params, body }) => addPlan(req.user!, params.machineId, body),
 );
 
 maintenanceRoutes.put(

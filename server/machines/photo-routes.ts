@@ -26,11 +26,9 @@ machinePhotoRoutes.post(
     params: machineParamsSchema,
     body: addMachinePhotoSchema,
     response: machinePhotoSchema,
+    status: 201,
   },
-  async (req, res, { params, body }) => {
-    res.status(201);
-    return await addMachinePhoto(req.user!, params.machineId, req.file, body.caption);
-  },
+  (req, _res, { params, body }) => addMachinePhoto(req.user!, params.machineId, req.file, body.caption),
 );
 
 machinePhotoRoutes.get(

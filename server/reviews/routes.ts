@@ -36,11 +36,9 @@ reviewRoutes.post(
     params: workOrderParamsSchema,
     body: writeReviewSchema,
     response: reviewDtoSchema,
+    status: 201,
   },
-  async (req, res, { params, body }) => {
-    res.status(201);
-    return await writeReview(req.user!, params.workOrderId, body);
-  },
+  (req, _res, { params, body }) => writeReview(req.user!, params.workOrderId, body),
 );
 
 reviewRoutes.get(

@@ -22,11 +22,8 @@ rosterRoutes.get("/export.csv", { allow: canKeepRoster }, async (req, res) => {
 
 rosterRoutes.post(
   "",
-  { allow: canKeepRoster, body: addRosterEntrySchema, response: rosterEntryDtoSchema },
-  async (req, res, { body }) => {
-    res.status(201);
-    return await addToRoster(req.user!, body);
-  },
+  { allow: canKeepRoster, body: addRosterEntrySchema, response: rosterEntryDtoSchema, status: 201 },
+  (req, _res, { body }) => addToRoster(req.user!, body),
 );
 
 rosterRoutes.delete(

@@ -41,11 +41,8 @@ siteRoutes.get(
 
 siteRoutes.post(
   "",
-  { allow: canAddSite, body: siteInputSchema, response: siteDtoSchema },
-  async (req, res, { body }) => {
-    res.status(201);
-    return await addSite(req.user!, body);
-  },
+  { allow: canAddSite, body: siteInputSchema, response: siteDtoSchema, status: 201 },
+  (req, _res, { body }) => addSite(req.user!, body),
 );
 
 siteRoutes.get(
@@ -81,11 +78,9 @@ siteRoutes.post(
     params: siteParamsSchema,
     body: equipmentInputSchema,
     response: equipmentDtoSchema,
+    status: 201,
   },
-  async (req, res, { params, body }) => {
-    res.status(201);
-    return await addEquipment(req.user!, params.siteId, body);
-  },
+  (req, _res, { params, body }) => addEquipment(req.user!, params.siteId, body),
 );
 
 siteRoutes.put(

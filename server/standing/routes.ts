@@ -61,11 +61,13 @@ standingRoutes.get(
 
 standingRoutes.post(
   "/requirement-sets",
-  { allow: canListRequirementSets, body: requirementSetInputSchema, response: requirementSetDtoSchema },
-  async (req, res, { body }) => {
-    res.status(201);
-    return await defineRequirementSet(req.user!, body);
+  {
+    allow: canListRequirementSets,
+    body: requirementSetInputSchema,
+    response: requirementSetDtoSchema,
+    status: 201,
   },
+  (req, _res, { body }) => defineRequirementSet(req.user!, body),
 );
 
 standingRoutes.post(

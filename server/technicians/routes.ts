@@ -59,11 +59,8 @@ technicianRoutes.post(
 
 technicianRoutes.post(
   "",
-  { allow: canManageTechnicians, body: technicianInputSchema, response: technicianDtoSchema },
-  async (req, res, { body }) => {
-    res.status(201);
-    return await addTechnician(req.user!, body);
-  },
+  { allow: canManageTechnicians, body: technicianInputSchema, response: technicianDtoSchema, status: 201 },
+  (req, _res, { body }) => addTechnician(req.user!, body),
 );
 
 technicianRoutes.get(
