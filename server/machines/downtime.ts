@@ -7,6 +7,7 @@ import {
 } from "../../shared/machines/downtime.ts";
 import type { MachineDowntimeDto } from "../../shared/machines/downtime-schemas.ts";
 import { db } from "../db/sequelize.ts";
+import { selectRows } from "../db/sql.ts";
 import { recordAudit } from "../audit/index.ts";
 
 type Opener =
@@ -15,8 +16,18 @@ type Opener =
   | { by: "work_order"; userId: number; workOrderId: number };
 type Closer = { by: "hand"; userId: number } | { by: "confirmation"; userId: number; workOrderId: number };
 
-async function write(sql: string, bind: unknown[], transaction: Transaction) {
-  return db().query(sql, { bind, transaction, type: QueryTypes.SELECT });
+/** The audit event of a period opening or ending, in the same transaction. */
+function auditPeriod(
+  action: "machine.down" | "machine.running",
+  equipmentId: number,
+  userId: number,
+  after: Record<string, unknown>,
+  transaction: Transaction,
+) {
+  return recordAudit(
+    { actorUserId: userId, action, subjectType: "equipment", subjectId: equipmentId, after },
+    transaction,
+  );
 }
 
 /**
@@ -30,7 +41,8 @@ export async function openDowntime(
   at: Date,
   transaction: Transaction,
 ): Promise<boolean> {
-  const rows = (await write(
+  const rows = await selectRows<{ id: number }>(
+    transaction,
     `INSERT INTO machine_downtime (equipment_id, started_at, opened_by, opened_by_user_id, service_request_id, work_order_id)
      VALUES ($1, $2, $3, $4, $5, $6)
      ON CONFLICT (equipment_id) WHERE ended_at IS NULL DO NOTHING RETURNING id`,
@@ -42,18 +54,14 @@ export async function openDowntime(
       opener.by === "service_request" ? opener.serviceRequestId : null,
       opener.by === "work_order" ? opener.workOrderId : null,
     ],
-    transaction,
-  )) as { id: number }[];
+  );
   const opened = rows[0];
   if (opened)
-    await recordAudit(
-      {
-        actorUserId: opener.userId,
-        action: "machine.down",
-        subjectType: "equipment",
-        subjectId: equipmentId,
-        after: { downtimeId: opened.id, startedAt: at.toISOString(), openedBy: opener.by },
-      },
+    await auditPeriod(
+      "machine.down",
+      equipmentId,
+      opener.userId,
+      { downtimeId: opened.id, startedAt: at.toISOString(), openedBy: opener.by },
       transaction,
     );
   return opened !== undefined;
@@ -66,27 +74,20 @@ export async function closeDowntime(
   at: Date,
   transaction: Transaction,
 ): Promise<boolean> {
-  const rows = (await write(
+  const rows = await selectRows<{ id: number; ended_at: Date }>(
+    transaction,
     `UPDATE machine_downtime SET ended_at = GREATEST($2::timestamptz, started_at), closed_by = $3,
             closed_by_user_id = $4, closed_work_order_id = $5
       WHERE equipment_id = $1 AND ended_at IS NULL RETURNING id, ended_at`,
     [equipmentId, at, closer.by, closer.userId, closer.by === "confirmation" ? closer.workOrderId : null],
-    transaction,
-  )) as { id: number; ended_at: Date }[];
+  );
   const closed = rows[0];
   if (closed)
-    await recordAudit(
-      {
-        actorUserId: closer.userId,
-        action: "machine.running",
-        subjectType: "equipment",
-        subjectId: equipmentId,
-        after: {
-          downtimeId: closed.id,
-          endedAt: new Date(closed.ended_at).toISOString(),
-          closedBy: closer.by,
-        },
-      },
+    await auditPeriod(
+      "machine.running",
+      equipmentId,
+      closer.userId,
+      { downtimeId: closed.id, endedAt: new Date(closed.ended_at).toISOString(), closedBy: closer.by },
       transaction,
     );
   return closed !== undefined;
@@ -102,11 +103,11 @@ export async function markDownBy(
   at: Date,
   transaction: Transaction,
 ): Promise<void> {
-  const [machine] = (await write(
+  const [machine] = await selectRows<{ id: number }>(
+    transaction,
     "UPDATE equipment SET state = 'down', updated_at = $2 WHERE id = $1 AND state IN ('running','down') RETURNING id",
     [equipmentId, at],
-    transaction,
-  )) as { id: number }[];
+  );
   if (machine) await openDowntime(equipmentId, opener, at, transaction);
 }
 
@@ -121,11 +122,11 @@ export async function runningAgainOnConfirm(
   transaction: Transaction,
 ): Promise<void> {
   if (workOrder.equipmentId === null || workOrder.urgency !== "down") return;
-  const [machine] = (await write(
+  const [machine] = await selectRows<{ id: number }>(
+    transaction,
     "UPDATE equipment SET state = 'running', updated_at = $2 WHERE id = $1 AND state = 'down' RETURNING id",
     [workOrder.equipmentId, now],
-    transaction,
-  )) as { id: number }[];
+  );
   if (!machine) return;
   await closeDowntime(
     workOrder.equipmentId,
@@ -208,7 +209,7 @@ export async function readMachineDowntime(machineId: number, now: Date): Promise
   return {
     machineId,
     timeZone,
-    months: downtimeByMonth(asPeriods, now, timeZone),
+    months: summary.months,
     totalHours: summary.totalHours,
     periods: summary.periods,
     medianHoursToRestore: summary.medianHoursToRestore,

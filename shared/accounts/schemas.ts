@@ -131,15 +131,14 @@ export const invitedUserDtoSchema = adminUserDtoSchema.pick({
 });
 export type InvitedUserDto = z.infer<typeof invitedUserDtoSchema>;
 
-export const adminCompanyDtoSchema = z.object({
-  id: z.number(),
-  name: z.string(),
-  kind: z.enum(companyKinds),
-  createdAt: z.string(),
-  users: z.number(),
-  technicians: z.number(),
-  sites: z.number(),
-});
+export const adminCompanyDtoSchema = companyProfileDtoSchema
+  .pick({ id: true, name: true, kind: true })
+  .extend({
+    createdAt: z.string(),
+    users: z.number(),
+    technicians: z.number(),
+    sites: z.number(),
+  });
 export type AdminCompanyDto = z.infer<typeof adminCompanyDtoSchema>;
 
 export const currentUserSchema = z.object({

@@ -63,6 +63,8 @@ export function downtimeByMonth(
 }
 
 export interface DowntimeSummary {
+  /** The chart the figures are taken from. */
+  months: MonthOfDowntime[];
   /** Hours down within the charted months. */
   totalHours: number;
   /** Periods that began within the charted months. */
@@ -89,6 +91,7 @@ export function summariseDowntime(
   );
   const toRestore = median(restored);
   return {
+    months: chart,
     totalHours: tenths(chart.reduce((sum, m) => sum + m.hours, 0)),
     periods: inWindow.length,
     medianHoursToRestore: toRestore === null ? null : tenths(toRestore),
