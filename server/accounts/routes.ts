@@ -7,6 +7,7 @@ import {
   currentUserSchema,
   inviteUserSchema,
   userParamsSchema,
+  passwordResetAnswerSchema,
   requestPasswordResetSchema,
   setPasswordSchema,
   signInSchema,
@@ -88,11 +89,17 @@ authRoutes.post(
 
 authRoutes.post(
   "/password-reset",
-  { allow: anyone, before: [abuseLimit("passwordReset")], body: requestPasswordResetSchema },
-  async (req, res, { body }) => {
+  {
+    allow: anyone,
+    before: [abuseLimit("passwordReset")],
+    body: requestPasswordResetSchema,
+    response: passwordResetAnswerSchema,
+    status: 202,
+  },
+  async (req, _res, { body }) => {
     await requestPasswordReset(body.email, linkBase(req), req.app.locals.config as Config);
     kickOutbox(req.app.locals);
-    res.status(202).json({ message: "If that e-mail has an account, a reset link is on its way." });
+    return { message: "If that e-mail has an account, a reset link is on its way." };
   },
 );
 

@@ -1,6 +1,7 @@
 import QRCode from "qrcode";
 import { z } from "zod";
 import { singleLineText } from "../../shared/api/text.ts";
+import { badgeDtoSchema, badgePhotoSavedDtoSchema, gateSignDtoSchema } from "../../shared/gate/badge.ts";
 import { gateSecret, publicUrl } from "../config.ts";
 import { abuseLimit } from "../accounts/abuse-limits.ts";
 import { appConfig } from "../http/app-locals.ts";
@@ -34,7 +35,7 @@ const canShowOwnBadge = requireRole("technician");
 
 gateRoutes.get(
   "/badge",
-  { allow: canShowOwnBadge, query: z.object({ site: siteCodeText }) },
+  { allow: canShowOwnBadge, query: z.object({ site: siteCodeText }), response: badgeDtoSchema },
   async (req, _res, { query }) => {
     const config = appConfig(req);
     const issuedAt = new Date();
@@ -65,8 +66,10 @@ gateRoutes.get(
   (req, _res, { query }) => checkAtGate(gateSecret(appConfig(req)), query.token, query.site),
 );
 
-gateRoutes.post("/badge/photo", { allow: canShowOwnBadge, before: [singleFileUpload] }, (req) =>
-  saveTechnicianPhoto(req.user!.technicianId!, req.file),
+gateRoutes.post(
+  "/badge/photo",
+  { allow: canShowOwnBadge, before: [singleFileUpload], response: badgePhotoSavedDtoSchema },
+  (req) => saveTechnicianPhoto(req.user!.technicianId!, req.file),
 );
 
 const canPrintGateSign = requireOwnership(
@@ -77,7 +80,11 @@ const canPrintGateSign = requireOwnership(
 
 gateRoutes.get(
   "/sites/:siteId/gate-sign",
-  { allow: canPrintGateSign, params: z.object({ siteId: z.coerce.number().int().positive() }) },
+  {
+    allow: canPrintGateSign,
+    params: z.object({ siteId: z.coerce.number().int().positive() }),
+    response: gateSignDtoSchema,
+  },
   async (req, _res, { params }) => {
     const site = await Site.findByPk(params.siteId, { attributes: ["id", "name"] });
     if (!site) throw notFound("That site");

@@ -123,7 +123,7 @@ export function createRoutes(prefix: string) {
       if (!res.headersSent) {
         if (result === undefined) res.status(204).end();
         else {
-          if (options.response && appConfig(req).CHECK_RESPONSE_SHAPES)
+          if (appConfig(req).CHECK_RESPONSE_SHAPES)
             checkDeclaredAnswer(`${method.toUpperCase()} ${prefix + path}`, options.response, result);
           if (options.status) res.status(options.status);
           res.json(result);

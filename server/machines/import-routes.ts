@@ -1,6 +1,10 @@
 import { z } from "zod";
 import { singleLineText } from "../../shared/api/text.ts";
-import { machineImportTemplateCsv } from "../../shared/machines/machine-import.ts";
+import {
+  machineImportPreviewSchema,
+  machineImportReportSchema,
+  machineImportTemplateCsv,
+} from "../../shared/machines/machine-import.ts";
 import { createRoutes } from "../http/route.ts";
 import { requireRole } from "../http/policy.ts";
 import { singleFileUpload } from "../http/upload.ts";
@@ -26,14 +30,23 @@ machineImportRoutes.get("/template", { allow: canImportMachines }, (_req, res) =
 
 machineImportRoutes.post(
   "/preview",
-  { allow: canImportMachines, before: [singleFileUpload], body: importBodySchema },
+  {
+    allow: canImportMachines,
+    before: [singleFileUpload],
+    body: importBodySchema,
+    response: machineImportPreviewSchema,
+  },
   (req, _res, { body }) => previewMachineImport(req.user!, req.file, body),
 );
 
 machineImportRoutes.post(
   "",
-  { allow: canImportMachines, before: [singleFileUpload], body: importBodySchema },
-  async (req, res, { body }) => {
-    res.status(201).json(await commitMachineImport(req.user!, req.file, body));
+  {
+    allow: canImportMachines,
+    before: [singleFileUpload],
+    body: importBodySchema,
+    response: machineImportReportSchema,
+    status: 201,
   },
+  (req, _res, { body }) => commitMachineImport(req.user!, req.file, body),
 );

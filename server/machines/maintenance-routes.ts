@@ -68,10 +68,14 @@ maintenanceRoutes.delete(
 
 maintenanceRoutes.post(
   "/:machineId/hour-readings",
-  { allow: canPlanMaintenance, params: machineParamsSchema, body: hourReadingInputSchema },
-  async (req, res, { params, body }) => {
-    res.status(201).json(await recordHourReading(req.user!, params.machineId, body));
+  {
+    allow: canPlanMaintenance,
+    params: machineParamsSchema,
+    body: hourReadingInputSchema,
+    response: maintenancePlanListSchema,
+    status: 201,
   },
+  (req, _res, { params, body }) => recordHourReading(req.user!, params.machineId, body),
 );
 
 maintenanceRoutes.post(

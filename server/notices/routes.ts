@@ -1,5 +1,6 @@
 import {
   listNotificationsQuerySchema,
+  markedReadDtoSchema,
   notificationDtoSchema,
   notificationListDtoSchema,
   notificationParamsSchema,
@@ -23,7 +24,7 @@ noticeRoutes.get(
   (req, _res, { query }) => listOwnNotifications(req.user!, query.limit),
 );
 
-noticeRoutes.post("/read-all", { allow: canReadOwnNotifications }, (req) =>
+noticeRoutes.post("/read-all", { allow: canReadOwnNotifications, response: markedReadDtoSchema }, (req) =>
   markAllNotificationsRead(req.user!),
 );
 

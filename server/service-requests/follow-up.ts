@@ -216,6 +216,6 @@ export async function logFollowUp(admin: Express.User, requestId: number, note: 
       },
       transaction,
     );
-    return { requestId, logged: true };
+    return { requestId, logged: true as const };
   });
 }

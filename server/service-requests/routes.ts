@@ -3,6 +3,8 @@ import { z } from "zod";
 import {
   attachmentParamsSchema,
   comparisonDtoSchema,
+  attachmentAddedDtoSchema,
+  followUpLoggedDtoSchema,
   followUpRowDtoSchema,
   requestMessageDtoSchema,
   routingPreviewDtoSchema,
@@ -96,12 +98,16 @@ serviceRequestRoutes.get(
 
 serviceRequestRoutes.post(
   "/:requestId/attachments",
-  { allow: canDecideServiceRequest, params: serviceRequestParamsSchema, before: [singleFileUpload] },
-  async (req, res, { params }) => {
+  {
+    allow: canDecideServiceRequest,
+    params: serviceRequestParamsSchema,
+    before: [singleFileUpload],
+    response: attachmentAddedDtoSchema,
+    status: 201,
+  },
+  async (req, _res, { params }) => {
     try {
-      res
-        .status(201)
-        .json(await addRequestAttachment(req.user!, params.requestId, req.file, appStorage(req)));
+      return await addRequestAttachment(req.user!, params.requestId, req.file, appStorage(req));
     } finally {
       await removeUpload(req.file);
     }
@@ -204,7 +210,12 @@ serviceRequestRoutes.post(
 
 serviceRequestRoutes.post(
   "/:requestId/follow-up",
-  { allow: canFollowUp, params: serviceRequestParamsSchema, body: followUpNoteSchema },
+  {
+    allow: canFollowUp,
+    params: serviceRequestParamsSchema,
+    body: followUpNoteSchema,
+    response: followUpLoggedDtoSchema,
+  },
   (req, _res, { params, body }) => logFollowUp(req.user!, params.requestId, body.note),
 );
 
@@ -217,8 +228,14 @@ serviceRequestRoutes.get(
 // JSON or multipart (field `body`, optional part `file`), checked inside so a refused field still removes the upload.
 serviceRequestRoutes.post(
   "/:requestId/threads/:companyId",
-  { allow: canSeeThread, params: threadParamsSchema, before: [singleFileUpload] },
-  async (req, res, { params }) => {
+  {
+    allow: canSeeThread,
+    params: threadParamsSchema,
+    before: [singleFileUpload],
+    response: requestMessageDtoSchema,
+    status: 201,
+  },
+  async (req, _res, { params }) => {
     try {
       const { body } = requestMessageSchema.parse(req.body ?? {});
       const dto = await postThreadMessage(
@@ -231,7 +248,7 @@ serviceRequestRoutes.post(
         linkBase(req),
       );
       kick(req);
-      res.status(201).json(dto);
+      return dto;
     } finally {
       await removeUpload(req.file);
     }

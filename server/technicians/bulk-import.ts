@@ -16,6 +16,8 @@ import {
   importFields,
   type CheckedRow,
   type ColumnMapping,
+  type TechnicianImportPreview,
+  type TechnicianImportReport,
 } from "../../shared/technicians/bulk-import.ts";
 import { Company, User } from "../db/models.ts";
 
@@ -25,14 +27,6 @@ interface UploadedFile {
   path: string;
   originalname: string;
   mimetype: string;
-}
-
-export interface ImportPreview {
-  headers: string[];
-  mapping: ColumnMapping;
-  rows: { line: number; name: string; email: string | null; problems: string[] }[];
-  goodCount: number;
-  badCount: number;
 }
 
 async function checkFile(companyId: number, file: UploadedFile | undefined, mappingRaw: string | undefined) {
@@ -81,7 +75,7 @@ async function checkFile(companyId: number, file: UploadedFile | undefined, mapp
   return { headers, mapping, rows };
 }
 
-function summarize(headers: string[], mapping: ColumnMapping, rows: CheckedRow[]): ImportPreview {
+function summarize(headers: string[], mapping: ColumnMapping, rows: CheckedRow[]): TechnicianImportPreview {
   const shown = rows.map((r) => ({
     line: r.line,
     name: r.input?.name ?? "",
@@ -97,19 +91,13 @@ export async function previewImport(actor: Express.User, file: UploadedFile | un
   return summarize(headers, used, rows);
 }
 
-export interface ImportReport {
-  imported: number;
-  invited: number;
-  skipped: { line: number; problems: string[] }[];
-}
-
 /** Imports every good row and invites those with e-mail, all in one transaction: all of them or none. */
 export async function runImport(
   actor: Express.User,
   file: UploadedFile | undefined,
   mapping: string | undefined,
   linkBase: string,
-): Promise<ImportReport> {
+): Promise<TechnicianImportReport> {
   const { rows } = await checkFile(actor.companyId, file, mapping);
   const good = rows.flatMap((r) => (r.input ? [r.input] : []));
   const company = await Company.findByPk(actor.companyId);

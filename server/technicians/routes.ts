@@ -11,7 +11,11 @@ import { createRoutes } from "../http/route.ts";
 import { linkBase } from "../http/app-locals.ts";
 import { kickOutbox } from "../mail/outbox.ts";
 import { singleFileUpload } from "../http/upload.ts";
-import { importTemplateCsv } from "../../shared/technicians/bulk-import.ts";
+import {
+  importTemplateCsv,
+  technicianImportPreviewSchema,
+  technicianImportReportSchema,
+} from "../../shared/technicians/bulk-import.ts";
 import { singleLineText } from "../../shared/api/text.ts";
 import { previewImport, runImport } from "./bulk-import.ts";
 import {
@@ -43,17 +47,28 @@ technicianRoutes.get("/import/template", { allow: canManageTechnicians }, (_req,
 
 technicianRoutes.post(
   "/import/preview",
-  { allow: canManageTechnicians, before: [singleFileUpload], body: importBodySchema },
+  {
+    allow: canManageTechnicians,
+    before: [singleFileUpload],
+    body: importBodySchema,
+    response: technicianImportPreviewSchema,
+  },
   (req, _res, { body }) => previewImport(req.user!, req.file, body.mapping),
 );
 
 technicianRoutes.post(
   "/import",
-  { allow: canManageTechnicians, before: [singleFileUpload], body: importBodySchema },
-  async (req, res, { body }) => {
+  {
+    allow: canManageTechnicians,
+    before: [singleFileUpload],
+    body: importBodySchema,
+    response: technicianImportReportSchema,
+    status: 201,
+  },
+  async (req, _res, { body }) => {
     const report = await runImport(req.user!, req.file, body.mapping, linkBase(req));
     kickOutbox(req.app.locals);
-    res.status(201).json(report);
+    return report;
   },
 );
 

@@ -186,8 +186,14 @@ workOrderRoutes.get(
 // field still removes multer's temporary file before the answer goes out.
 workOrderRoutes.post(
   "/:workOrderId/messages",
-  { allow: canSeeWorkOrder, params: workOrderParamsSchema, before: [singleFileUpload] },
-  async (req, res, { params }) => {
+  {
+    allow: canSeeWorkOrder,
+    params: workOrderParamsSchema,
+    before: [singleFileUpload],
+    response: workOrderMessageDtoSchema,
+    status: 201,
+  },
+  async (req, _res, { params }) => {
     try {
       const { body } = postMessageSchema.parse(req.body ?? {});
       const dto = await postMessage(
@@ -199,7 +205,7 @@ workOrderRoutes.post(
         linkTo(req)(params.workOrderId),
       );
       kickOutbox(req.app.locals);
-      res.status(201).json(dto);
+      return dto;
     } finally {
       await removeUpload(req.file);
     }

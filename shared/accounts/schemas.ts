@@ -88,6 +88,9 @@ export type CompanyProfileDto = z.infer<typeof companyProfileDtoSchema>;
 export const requestPasswordResetSchema = z.object({ email: emailSchema });
 export type RequestPasswordReset = z.infer<typeof requestPasswordResetSchema>;
 
+/** The same words whether or not the address has an account, so the answer cannot be used to probe for accounts. */
+export const passwordResetAnswerSchema = z.object({ message: z.string() });
+
 export const setPasswordSchema = z.object({
   token: singleLineText().min(20).max(200),
   password: passwordSchema,

@@ -26,3 +26,6 @@ export const notificationListDtoSchema = z.object({
   notifications: z.array(notificationDtoSchema),
 });
 export type NotificationListDto = z.infer<typeof notificationListDtoSchema>;
+
+/** How many notifications "mark all read" turned read. */
+export const markedReadDtoSchema = z.object({ marked: z.number() });

@@ -332,3 +332,6 @@ export const followUpRowDtoSchema = z.object({
   lastAction: z.string().nullable(),
 });
 export type FollowUpRowDto = z.infer<typeof followUpRowDtoSchema>;
+
+/** The answer to a coordinator's note: which request's timeline it joined. */
+export const followUpLoggedDtoSchema = z.object({ requestId: z.number(), logged: z.literal(true) });

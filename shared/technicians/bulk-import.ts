@@ -22,6 +22,31 @@ export const columnMappingSchema = z.partialRecord(
 );
 export type ColumnMapping = z.infer<typeof columnMappingSchema>;
 
+/** The preview answer: each row with its problems, before anything is saved. */
+export const technicianImportPreviewSchema = z.object({
+  headers: z.array(z.string()),
+  mapping: columnMappingSchema,
+  rows: z.array(
+    z.object({
+      line: z.number(),
+      name: z.string(),
+      email: z.string().nullable(),
+      problems: z.array(z.string()),
+    }),
+  ),
+  goodCount: z.number(),
+  badCount: z.number(),
+});
+export type TechnicianImportPreview = z.infer<typeof technicianImportPreviewSchema>;
+
+/** The import's answer: how many were added and invited, and the rows left out with why. */
+export const technicianImportReportSchema = z.object({
+  imported: z.number(),
+  invited: z.number(),
+  skipped: z.array(z.object({ line: z.number(), problems: z.array(z.string()) })),
+});
+export type TechnicianImportReport = z.infer<typeof technicianImportReportSchema>;
+
 const normalize = (s: string) =>
   s
     .trim()

@@ -27,13 +27,25 @@ const notJson = new Set([
   "get /api/service-requests/:requestId/attachments/:attachmentId", // attachment
   "get /api/service-requests/:requestId/threads/:companyId/messages/:messageId/file", // attachment
   "get /api/calendar/:secret.ics", // ICS
-  "get /api/sites/:siteId/gate-sign", // printable sign
-  "get /api/badge", // printable badge
 ]);
 
 // JSON answers whose shape is still declared only as a TypeScript interface; each leaves this list when its domain
 // declares its response schema in shared/. A new route cannot join it silently: the list is closed.
 const notYetDeclared = new Set<string>([]);
+
+// Writes whose success is the status alone (204 No Content): nothing for a schema to describe. The route table's shape
+// check also refuses a JSON answer from any route without a schema, so a route on this list cannot start sending one.
+const answersNothing = new Set([
+  "post /api/auth/sign-out",
+  "post /api/auth/set-password",
+  "delete /api/requirement-sets/:requirementSetId",
+  "delete /api/sites/:siteId",
+  "delete /api/sites/:siteId/equipment/:equipmentId",
+  "delete /api/roster/:entryId",
+  "delete /api/broker-contacts/:typeCode",
+  "delete /api/machines/:machineId/photos/:photoId",
+  "delete /api/machines/:machineId/maintenance-plans/:planId",
+]);
 
 const key = (r: RouteEntry) => `${r.method} ${r.path}`;
 
@@ -141,6 +153,14 @@ describe("response shapes on the demo data", () => {
     const missing = gets.filter((r) => !r.response && !notJson.has(key(r)) && !notYetDeclared.has(key(r)));
     const stale = [...notYetDeclared].filter((k) => gets.some((r) => key(r) === k && r.response));
     const unknown = [...notJson, ...notYetDeclared].filter((k) => !gets.some((r) => key(r) === k));
+    // Writes answer either a declared shape or nothing at all (204); the list of bodiless ones is closed too.
+    const writes = routeTable.filter((r) => r.method !== "get");
+    const undeclaredWrites = writes.filter((r) => !r.response && !answersNothing.has(key(r)));
+    const noLongerBodiless = [...answersNothing].filter(
+      (k) => !writes.some((r) => key(r) === k && !r.response),
+    );
+    expect(undeclaredWrites.map(key)).toEqual([]);
+    expect(noLongerBodiless).toEqual([]);
 
     expect(missing.map(key)).toEqual([]);
     expect(stale).toEqual([]);

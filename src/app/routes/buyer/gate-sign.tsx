@@ -1,23 +1,16 @@
 import { useQuery } from "@tanstack/react-query";
 import { Link, useParams } from "react-router-dom";
-import { z } from "zod";
 import { Button } from "@/components/ui/button.tsx";
 import { paths } from "@/config/paths.ts";
 import { api } from "@/lib/api-client.ts";
-
-const gateSignSchema = z.object({
-  siteName: z.string(),
-  code: z.string(),
-  badgeUrl: z.string(),
-  qrPng: z.string(),
-});
+import { gateSignDtoSchema } from "@shared/gate/badge.ts";
 
 /** A sheet for the gate or front-office window; the header and buttons drop out when printed. */
 export function Component() {
   const { siteId } = useParams();
   const sign = useQuery({
     queryKey: ["gate-sign", siteId],
-    queryFn: () => api.get(`/sites/${encodeURIComponent(siteId ?? "")}/gate-sign`, gateSignSchema),
+    queryFn: () => api.get(`/sites/${encodeURIComponent(siteId ?? "")}/gate-sign`, gateSignDtoSchema),
     retry: false,
   });
   return (

@@ -10,31 +10,14 @@ import { ImportPageHeader, ImportStep, SpreadsheetFileInput } from "@/components
 import { useSpreadsheetImport } from "@/components/imports/use-spreadsheet-import.ts";
 import { uploadWithProgress } from "@/lib/upload-with-progress.ts";
 import {
-  columnMappingSchema,
   guessMapping,
   importFields,
+  technicianImportPreviewSchema,
+  technicianImportReportSchema,
   type ColumnMapping,
+  type TechnicianImportPreview,
+  type TechnicianImportReport,
 } from "@shared/technicians/bulk-import.ts";
-
-const previewSchema = z.object({
-  headers: z.array(z.string()),
-  mapping: columnMappingSchema,
-  goodCount: z.number(),
-  badCount: z.number(),
-  rows: z.array(
-    z.object({
-      line: z.number(),
-      name: z.string(),
-      email: z.string().nullable(),
-      problems: z.array(z.string()),
-    }),
-  ),
-});
-const reportSchema = z.object({
-  imported: z.number(),
-  invited: z.number(),
-  skipped: z.array(z.object({ line: z.number(), problems: z.array(z.string()) })),
-});
 
 function formFor(file: File, mapping: ColumnMapping | null) {
   const form = new FormData();
@@ -44,9 +27,6 @@ function formFor(file: File, mapping: ColumnMapping | null) {
   return form;
 }
 
-type Preview = z.infer<typeof previewSchema>;
-type Report = z.infer<typeof reportSchema>;
-
 const sender =
   <S extends z.ZodType>(path: string, schema: S) =>
   (file: File, mapping: ColumnMapping | null) =>
@@ -54,7 +34,9 @@ const sender =
 
 export function Component() {
   const queryClient = useQueryClient();
-  const flow = useSpreadsheetImport<ColumnMapping, Preview, Report>(guessMapping);
+  const flow = useSpreadsheetImport<ColumnMapping, TechnicianImportPreview, TechnicianImportReport>(
+    guessMapping,
+  );
   const { preview, report } = flow;
 
   const problemRows = preview?.rows.filter((r) => r.problems.length > 0) ?? [];
@@ -68,7 +50,7 @@ export function Component() {
       <div className="space-y-6">
         <SpreadsheetFileInput
           onChoose={(chosen) =>
-            void flow.choose(chosen, sender("/technicians/import/preview", previewSchema))
+            void flow.choose(chosen, sender("/technicians/import/preview", technicianImportPreviewSchema))
           }
         />
 
@@ -84,7 +66,9 @@ export function Component() {
               pending={flow.pending}
               pendingLabel="Checking…"
               onClick={async () => {
-                const result = await flow.run(sender("/technicians/import/preview", previewSchema));
+                const result = await flow.run(
+                  sender("/technicians/import/preview", technicianImportPreviewSchema),
+                );
                 if (result) flow.setPreview(result);
               }}
             >
@@ -130,7 +114,7 @@ export function Component() {
               pending={flow.pending}
               pendingLabel="Importing…"
               onClick={async () => {
-                const result = await flow.run(sender("/technicians/import", reportSchema));
+                const result = await flow.run(sender("/technicians/import", technicianImportReportSchema));
                 if (result) {
                   flow.setReport(result);
                   void queryClient.invalidateQueries();

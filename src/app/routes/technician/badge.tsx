@@ -1,20 +1,12 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { useSearchParams } from "react-router-dom";
-import { z } from "zod";
 import { Button } from "@/components/ui/button.tsx";
 import { FormError } from "@/components/ui/form-error.tsx";
 import { PageHeader } from "@/components/ui/page-header.tsx";
 import { uploadWithProgress } from "@/lib/upload-with-progress.ts";
 import { api } from "@/lib/api-client.ts";
+import { badgeDtoSchema, badgePhotoSavedDtoSchema } from "@shared/gate/badge.ts";
 import { formatDateTime } from "@/lib/format-date-time.ts";
-
-const badgeSchema = z.object({
-  url: z.string(),
-  qrPng: z.string(),
-  issuedAt: z.string(),
-  expiresAt: z.string(),
-  photo: z.string().nullable(),
-});
 
 function PhotoForm({ hasPhoto }: { hasPhoto: boolean }) {
   const queryClient = useQueryClient();
@@ -23,7 +15,7 @@ function PhotoForm({ hasPhoto }: { hasPhoto: boolean }) {
       uploadWithProgress({
         path: "/badge/photo",
         form,
-        schema: z.object({ width: z.number(), height: z.number() }),
+        schema: badgePhotoSavedDtoSchema,
       }),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: ["badge"] }),
   });
@@ -67,7 +59,7 @@ export function Component() {
   const path = site ? `/badge?site=${encodeURIComponent(site)}` : "/badge";
   const badge = useQuery({
     queryKey: ["badge", site],
-    queryFn: () => api.get(path, badgeSchema),
+    queryFn: () => api.get(path, badgeDtoSchema),
     refetchInterval: REFRESH_MS,
     refetchIntervalInBackground: false,
     refetchOnWindowFocus: "always",

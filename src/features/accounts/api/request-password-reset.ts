@@ -1,9 +1,9 @@
 import { useMutation } from "@tanstack/react-query";
-import type { RequestPasswordReset } from "@shared/accounts/schemas.ts";
+import { passwordResetAnswerSchema, type RequestPasswordReset } from "@shared/accounts/schemas.ts";
 import { api } from "@/lib/api-client.ts";
 
 /** The server answers 202 whether or not the address is known, so nobody can probe for accounts. */
 export const requestPasswordReset = (input: RequestPasswordReset) =>
-  api.send("POST", "/auth/password-reset", input);
+  api.post("/auth/password-reset", input, passwordResetAnswerSchema);
 
 export const useRequestPasswordReset = () => useMutation({ mutationFn: requestPasswordReset });
