@@ -13,7 +13,7 @@ export const addRosterEntrySchema = z
   });
 export type AddRosterEntry = z.infer<typeof addRosterEntrySchema>;
 
-/** Days before a lapse at which a rostered technician raises an alert to the shop (issue: "within 30 days of a lapse"). */
+/** Days before a lapse at which a rostered technician raises an alert to the shop: a month's notice (common practice). */
 export const ROSTER_LAPSE_ALERT_DAYS = 30;
 
 export const rosterAlertEvents = ["stopped_clearing", "lapse_within_30_days"] as const;
