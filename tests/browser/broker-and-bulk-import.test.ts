@@ -1,20 +1,10 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser } from "playwright-core";
-import { startBrowserServer } from "../support/browser-server.ts";
-import { launchChromium, screenshot, signIn } from "../support/browser.ts";
+import { describe, expect, it } from "vitest";
+import { useBrowserSuite } from "../support/browser-suite.ts";
+import { screenshot, signIn } from "../support/browser.ts";
 import { seriousAccessibilityProblems } from "../support/axe.ts";
 import { DEMO_PASSWORD, demoSignIns } from "../../server/db/demo-scenario/index.ts";
 
-let server: Awaited<ReturnType<typeof startBrowserServer>>;
-let browser: Browser;
-beforeAll(async () => {
-  server = await startBrowserServer();
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const suite = useBrowserSuite();
 
 const office = demoSignIns.find((s) => s.email === "office@kestrel-ridge.test")!;
 
@@ -29,12 +19,12 @@ const csv = [
 
 describe("a service company's office imports technicians from a CSV", () => {
   it("matches the columns, previews each row's problems and imports the good rows", async () => {
-    const context = await browser.newContext({ viewport: { width: 1280, height: 800 } });
+    const context = await suite.newContext({ viewport: { width: 1280, height: 800 } });
     const page = await context.newPage();
-    await signIn(page, server.url, office.email, DEMO_PASSWORD);
+    await signIn(page, suite.url, office.email, DEMO_PASSWORD);
     await page.getByRole("heading", { name: "Dashboard" }).waitFor();
 
-    await page.goto(`${server.url}/provider/technicians`);
+    await page.goto(`${suite.url}/provider/technicians`);
     await page.getByRole("link", { name: "Import from CSV" }).click();
     await page.getByRole("heading", { name: "Import technicians" }).waitFor();
     await page.getByLabel("Spreadsheet (.xlsx or CSV)").setInputFiles({

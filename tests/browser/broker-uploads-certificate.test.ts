@@ -1,22 +1,12 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import pg from "pg";
-import type { Browser } from "playwright-core";
-import { startBrowserServer } from "../support/browser-server.ts";
-import { launchChromium, screenshot, signIn } from "../support/browser.ts";
+import { useBrowserSuite } from "../support/browser-suite.ts";
+import { screenshot, signIn } from "../support/browser.ts";
 import { seriousAccessibilityProblems } from "../support/axe.ts";
 import { writeCertificateFile } from "../support/certificate-file.ts";
 import { DEMO_PASSWORD, demoSignIns } from "../../server/db/demo-scenario/index.ts";
 
-let server: Awaited<ReturnType<typeof startBrowserServer>>;
-let browser: Browser;
-beforeAll(async () => {
-  server = await startBrowserServer();
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const suite = useBrowserSuite();
 
 const office = demoSignIns.find((s) => s.email === "office@kestrel-ridge.test")!;
 const brokerEmail = "wren.halloway@brightwater-agency.test";
@@ -40,10 +30,10 @@ async function linkMailedToBroker(databaseUrl: string): Promise<string> {
 
 describe("a broker uploads a certificate through the office's link", () => {
   it("records the broker, sends the link, takes one PDF without an account, and refuses the link after", async () => {
-    const context = await browser.newContext({ viewport: { width: 1280, height: 800 } });
+    const context = await suite.newContext({ viewport: { width: 1280, height: 800 } });
     const page = await context.newPage();
-    await signIn(page, server.url, office.email, DEMO_PASSWORD);
-    await page.goto(`${server.url}/provider/documents`);
+    await signIn(page, suite.url, office.email, DEMO_PASSWORD);
+    await page.goto(`${suite.url}/provider/documents`);
     const panel = page.getByRole("region", { name: "Certificates from your broker" });
     await panel.getByLabel("Agency").fill("Brightwater Insurance Agency");
     await panel.getByLabel("Contact").fill("Wren Halloway");
@@ -58,8 +48,8 @@ describe("a broker uploads a certificate through the office's link", () => {
     await context.close();
 
     // The broker: a fresh browser with no session, only the link from the e-mail.
-    const link = (await linkMailedToBroker(server.databaseUrl)).replace(/^https?:\/\/[^/]+/, server.url);
-    const broker = await browser.newContext({ viewport: { width: 390, height: 844 } });
+    const link = (await linkMailedToBroker(suite.server.databaseUrl)).replace(/^https?:\/\/[^/]+/, suite.url);
+    const broker = await suite.newContext({ viewport: { width: 390, height: 844 } });
     const brokerPage = await broker.newPage();
     await brokerPage.goto(link);
     await brokerPage.getByRole("heading", { name: "Upload a certificate of insurance" }).waitFor();

@@ -1,20 +1,11 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser, Page } from "playwright-core";
-import { startBrowserServer } from "../support/browser-server.ts";
-import { launchChromium, screenshot, signIn } from "../support/browser.ts";
+import { describe, expect, it } from "vitest";
+import type { Page } from "playwright-core";
+import { useBrowserSuite } from "../support/browser-suite.ts";
+import { screenshot, signIn } from "../support/browser.ts";
 import { seriousAccessibilityProblems } from "../support/axe.ts";
 import { DEMO_PASSWORD } from "../../server/db/demo-scenario/index.ts";
 
-let server: Awaited<ReturnType<typeof startBrowserServer>>;
-let browser: Browser;
-beforeAll(async () => {
-  server = await startBrowserServer();
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const suite = useBrowserSuite();
 
 const SELLER = "buyer@tamsin-gear.test";
 const RECEIVER = "buyer@marlow-precision.test";
@@ -52,9 +43,9 @@ const hasNoSidewaysScroll = (page: Page) =>
 
 describe("a shop sells a machine and the buying shop takes it over", () => {
   it("starts the transfer on a phone, and the receiver accepts it onto a site of its own", async () => {
-    const sellerContext = await browser.newContext({ viewport: PHONE });
+    const sellerContext = await suite.newContext({ viewport: PHONE });
     const seller = await sellerContext.newPage();
-    await signIn(seller, server.url, SELLER, DEMO_PASSWORD);
+    await signIn(seller, suite.url, SELLER, DEMO_PASSWORD);
     const siteId = await aSiteOf(seller, "Tamsin Gear Works");
     const serial = `BRW-${Date.now()}`;
     const machine = await call(seller, "POST", `/api/sites/${siteId}/equipment`, {
@@ -67,7 +58,7 @@ describe("a shop sells a machine and the buying shop takes it over", () => {
     expect(machine.status).toBe(201);
     const machineId = (machine.body as { id: number }).id;
 
-    await seller.goto(`${server.url}/machines/${machineId}/transfer`);
+    await seller.goto(`${suite.url}/machines/${machineId}/transfer`);
     await seller.getByRole("heading", { name: "Transfer a machine" }).waitFor();
     await seller.getByLabel("E-mail of a buyer at the buying shop").fill(RECEIVER);
     await seller
@@ -80,11 +71,11 @@ describe("a shop sells a machine and the buying shop takes it over", () => {
     await screenshot(seller, "machine-transfer-1-started");
     expect(await seriousAccessibilityProblems(seller)).toEqual([]);
 
-    const receiverContext = await browser.newContext({ viewport: PHONE });
+    const receiverContext = await suite.newContext({ viewport: PHONE });
     const receiver = await receiverContext.newPage();
-    await signIn(receiver, server.url, RECEIVER, DEMO_PASSWORD);
+    await signIn(receiver, suite.url, RECEIVER, DEMO_PASSWORD);
     await aSiteOf(receiver, "Marlow Precision, Plant 1");
-    await receiver.goto(`${server.url}/machine-transfers`);
+    await receiver.goto(`${suite.url}/machine-transfers`);
     await receiver.getByRole("heading", { name: "Machine transfers" }).waitFor();
     const card = receiver.getByRole("article", { name: "Halden Axis Systems HL-220" });
     await card.waitFor();

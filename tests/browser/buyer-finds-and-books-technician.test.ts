@@ -1,9 +1,8 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser, BrowserContext, Page } from "playwright-core";
+import { describe, expect, it } from "vitest";
+import type { Page } from "playwright-core";
 import { seriousAccessibilityProblems } from "../support/axe.ts";
-import { startBrowserServer } from "../support/browser-server.ts";
-import { launchChromium, screenshot, signIn } from "../support/browser.ts";
-import { DEMO_PASSWORD } from "../../server/db/demo-scenario/index.ts";
+import { useBrowserSuite } from "../support/browser-suite.ts";
+import { screenshot } from "../support/browser.ts";
 
 const BUYER = "buyer@marlow-precision.test";
 const PROVIDER = "office@kestrel-ridge.test";
@@ -28,35 +27,14 @@ function arrivalTomorrow(): string {
   return `${d.toISOString().slice(0, 10)}T08:30`;
 }
 
-let server: Awaited<ReturnType<typeof startBrowserServer>>;
-let browser: Browser;
-const contexts: BrowserContext[] = [];
-
-beforeAll(async () => {
-  server = await startBrowserServer();
-  browser = await launchChromium();
-}, 180_000);
-afterAll(async () => {
-  for (const context of contexts) await context.close();
-  await browser?.close();
-  await server?.close();
-});
-
-async function signedInPage(email: string): Promise<Page> {
-  // AxeBuilder needs a page from browser.newContext(), not browser.newPage(): it throws "Please use browser.newContext()" otherwise.
-  const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
-  contexts.push(context);
-  const page = await context.newPage();
-  await signIn(page, server.url, email, DEMO_PASSWORD);
-  return page;
-}
+const suite = useBrowserSuite();
 
 describe("a buyer finds a cleared technician and books the job", () => {
   it("goes from a site and a credential filter to a confirmed, rated work order", async () => {
-    const buyer = await signedInPage(BUYER);
+    const buyer = await suite.signedInPage(BUYER);
 
     // The shop's site, found by its ZIP code, and one machine at it.
-    await buyer.goto(`${server.url}/sites`);
+    await buyer.goto(`${suite.url}/sites`);
     await buyer.getByRole("button", { name: "Add a site" }).first().click();
     await buyer.getByLabel("Site name").fill("Rockford main plant");
     await buyer.getByLabel("Street address").fill("400 Millrace Avenue");
@@ -78,7 +56,7 @@ describe("a buyer finds a cleared technician and books the job", () => {
     await buyer.getByText("Vantor Machine Works VM-40 vertical mill").waitFor();
     await screenshot(buyer, "buyer-books-1-site");
 
-    await buyer.goto(`${server.url}/directory`);
+    await buyer.goto(`${suite.url}/directory`);
     await buyer.getByLabel("Site", { exact: true }).selectOption({ label: "Rockford main plant" });
     await buyer.getByLabel("Electrical safety (arc flash) training").check();
     await buyer.getByText("Machine builder training, insurance limits and estimate").click();
@@ -169,7 +147,7 @@ describe("a buyer finds a cleared technician and books the job", () => {
 
     await expect(seriousAccessibilityProblems(buyer)).resolves.toEqual([]);
 
-    const provider = await signedInPage(PROVIDER);
+    const provider = await suite.signedInPage(PROVIDER);
     await provider.goto(workOrderUrl);
     await provider.getByRole("button", { name: "Accept…" }).click();
     await provider.getByLabel("Arrival at the site").fill(arrivalTomorrow());

@@ -1,35 +1,14 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser, BrowserContext, Page } from "playwright-core";
+import { describe, expect, it } from "vitest";
+import type { Page } from "playwright-core";
 import { seriousAccessibilityProblems } from "../support/axe.ts";
-import { startBrowserServer } from "../support/browser-server.ts";
-import { launchChromium, screenshot, signIn } from "../support/browser.ts";
-import { DEMO_PASSWORD } from "../../server/db/demo-scenario/index.ts";
+import { useBrowserSuite } from "../support/browser-suite.ts";
+import { screenshot } from "../support/browser.ts";
 
 // The demo shop whose Joliet mill carries a service history.
 const BUYER = "buyer@tamsin-gear.test";
 const MILL = "Vantor Machine Works VM-40 vertical mill";
 
-let server: Awaited<ReturnType<typeof startBrowserServer>>;
-let browser: Browser;
-const contexts: BrowserContext[] = [];
-
-beforeAll(async () => {
-  server = await startBrowserServer();
-  browser = await launchChromium();
-}, 180_000);
-afterAll(async () => {
-  for (const context of contexts) await context.close();
-  await browser?.close();
-  await server?.close();
-});
-
-async function signedInPage(width: number): Promise<Page> {
-  const context = await browser.newContext({ viewport: { width, height: 900 } });
-  contexts.push(context);
-  const page = await context.newPage();
-  await signIn(page, server.url, BUYER, DEMO_PASSWORD);
-  return page;
-}
+const suite = useBrowserSuite();
 
 const overflow = (page: Page) =>
   page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
@@ -39,7 +18,7 @@ describe("a maintenance manager reads a machine's service history", () => {
     "goes from the machines list to the machine page, reads the history and downloads it (desktop)",
     { timeout: 90_000 },
     async () => {
-      const page = await signedInPage(1280);
+      const page = await suite.signedInPage(BUYER);
 
       await page.getByRole("link", { name: "Machines", exact: true }).click();
       await page.getByRole("heading", { level: 1, name: "Machines" }).waitFor();
@@ -57,8 +36,8 @@ describe("a maintenance manager reads a machine's service history", () => {
       await history.getByText("Recorded by the shop", { exact: true }).waitFor();
       const csvHref = await page.getByRole("link", { name: "Download CSV" }).getAttribute("href");
       const printHref = await page.getByRole("link", { name: "Printable page" }).getAttribute("href");
-      const csv = await page.context().request.get(`${server.url}${csvHref}`);
-      const printable = await page.context().request.get(`${server.url}${printHref}`);
+      const csv = await page.context().request.get(`${suite.url}${csvHref}`);
+      const printable = await page.context().request.get(`${suite.url}${printHref}`);
 
       await expect(history.getByText("Work order on Clearbench", { exact: true }).count()).resolves.toBe(1);
       await expect(history.getByText(/Repeat fault:/).count()).resolves.toBe(1);
@@ -83,8 +62,8 @@ describe("a maintenance manager reads a machine's service history", () => {
     "records outside work from the machine page and shows it marked as the shop's own",
     { timeout: 90_000 },
     async () => {
-      const page = await signedInPage(1280);
-      await page.goto(`${server.url}/machines`);
+      const page = await suite.signedInPage(BUYER);
+      await page.goto(`${suite.url}/machines`);
       await page.getByRole("link", { name: MILL }).click();
       await page.getByRole("heading", { level: 1, name: MILL }).waitFor();
 
@@ -111,9 +90,9 @@ describe("a maintenance manager reads a machine's service history", () => {
     "fits a 390 px phone without sideways scrolling on the list and the machine page",
     { timeout: 90_000 },
     async () => {
-      const phone = await signedInPage(390);
+      const phone = await suite.signedInPage(BUYER, { viewport: { width: 390, height: 900 } });
 
-      await phone.goto(`${server.url}/machines`);
+      await phone.goto(`${suite.url}/machines`);
       await phone.getByRole("link", { name: MILL }).waitFor();
       const listOverflow = await overflow(phone);
       await screenshot(phone, "machine-history-3-list-390");
@@ -136,8 +115,8 @@ describe("a maintenance manager reads a machine's service history", () => {
     "reads the mill's year of downtime, marks it down from the page and running again",
     { timeout: 90_000 },
     async () => {
-      const page = await signedInPage(1280);
-      await page.goto(`${server.url}/machines`);
+      const page = await suite.signedInPage(BUYER);
+      await page.goto(`${suite.url}/machines`);
       await page.getByRole("link", { name: MILL }).click();
       const panel = page.getByRole("region", { name: "Downtime, last 12 months" });
       await panel.getByText("Running now.").waitFor();

@@ -1,15 +1,11 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { QueryTypes } from "sequelize";
-import request from "supertest";
-import type { Browser, BrowserContext, Page } from "playwright-core";
 import { seriousAccessibilityProblems } from "../support/axe.ts";
-import { startBrowserServer } from "../support/browser-server.ts";
-import { launchChromium, screenshot, signIn } from "../support/browser.ts";
-import { startTestMailCatcher } from "../support/mail-catcher.ts";
+import { useBrowserSuite } from "../support/browser-suite.ts";
+import { screenshot } from "../support/browser.ts";
+import { useMailCatcher } from "../support/mail-catcher.ts";
 import { runLapseJob } from "../../jobs/lapse.ts";
-import { DEMO_PASSWORD } from "../../server/db/demo-scenario/index.ts";
 import { db } from "../../server/db/sequelize.ts";
-import { CSRF_HEADER, CSRF_HEADER_VALUE } from "../../shared/api/error-body.ts";
 import { calendarDateIn } from "../../shared/dates/local-time.ts";
 import { addCalendarDays } from "../../shared/standing/iso-date.ts";
 import { addCalendarMonths } from "../../shared/standing/training-validity.ts";
@@ -27,43 +23,11 @@ const SELLER_MESSAGE = "Night shift gate code is 4471; ask for Priya at the tool
 // Due 20 days ahead: inside the 30-day reminder and before the 7-day one (the reminders of the maintenance plans).
 const DUE_IN_DAYS = 20;
 
-let server: Awaited<ReturnType<typeof startBrowserServer>>;
-let catcher: Awaited<ReturnType<typeof startTestMailCatcher>>;
-let browser: Browser;
-const contexts: BrowserContext[] = [];
-
-beforeAll(async () => {
-  server = await startBrowserServer();
-  catcher = await startTestMailCatcher();
-  browser = await launchChromium();
-}, 180_000);
-afterAll(async () => {
-  for (const context of contexts) await context.close();
-  await browser?.close();
-  await catcher?.close();
-  await server?.close();
-});
+const suite = useBrowserSuite();
+const catcher = useMailCatcher();
 
 async function rows<T extends object>(sql: string, bind: unknown[] = []): Promise<T[]> {
   return db().query<T>(sql, { bind, type: QueryTypes.SELECT });
-}
-
-async function signedInPage(email: string): Promise<Page> {
-  const context = await browser.newContext({
-    viewport: { width: 1280, height: 900 },
-    timezoneId: SITE_ZONE,
-  });
-  contexts.push(context);
-  const page = await context.newPage();
-  await signIn(page, server.url, email, DEMO_PASSWORD);
-  return page;
-}
-
-async function signedInAgent(email: string) {
-  const agent = request.agent(server.url);
-  agent.set(CSRF_HEADER, CSRF_HEADER_VALUE);
-  await agent.post("/api/auth/sign-in").send({ email, password: DEMO_PASSWORD }).expect(200);
-  return agent;
 }
 
 /** An invited company's office admin and one of its technicians cleared for the baseline who serves mills. */
@@ -96,7 +60,7 @@ describe("a maintenance manager keeps a machine serviced and then sells it", () 
     const today = calendarDateIn(new Date(), SITE_ZONE);
     const lastDoneOn = addCalendarDays(addCalendarMonths(today, -12), DUE_IN_DAYS);
     const dueOn = addCalendarMonths(lastDoneOn, 12);
-    const seller = await signedInPage(SELLER);
+    const seller = await suite.signedInPage(SELLER, { timezoneId: SITE_ZONE });
 
     // 1. The machine, from the machines screen to the plant's page, builder and control picked from the catalog.
     await seller.getByRole("link", { name: "Machines", exact: true }).click();
@@ -146,12 +110,12 @@ describe("a maintenance manager keeps a machine serviced and then sells it", () 
     );
 
     // 3. The daily job runs now; the buyer gets the 30-day reminder by e-mail and in the bell.
-    const run = await runLapseJob({ asOf: new Date() }, { publicUrl: server.url });
+    const run = await runLapseJob({ asOf: new Date() }, { publicUrl: suite.url });
     await catcher.deliver();
     const subject = `Maintenance due in ${DUE_IN_DAYS} days (${dateWords(dueOn)}): ${PLAN} on Vantor Machine Works VM-55 vertical mill`;
     const mail = catcher.to(SELLER).filter((m) => m.subject === subject);
-    const planLink = `${server.url}/machines/${machineId}/maintenance?plan=`;
-    await seller.goto(`${server.url}/machines`);
+    const planLink = `${suite.url}/machines/${machineId}/maintenance?plan=`;
+    await seller.goto(`${suite.url}/machines`);
     const bell = seller.getByRole("button", { name: /^Notifications, [1-9]\d* unread$/ });
     await bell.click();
     const reminder = seller.getByRole("link", { name: subject });
@@ -193,7 +157,7 @@ describe("a maintenance manager keeps a machine serviced and then sells it", () 
 
     // 5. An invited company estimates; the shop accepts, the company completes, the shop confirms.
     const company = await anInvitedCompany(requestId);
-    const office = await signedInAgent(company.email);
+    const office = await suite.signedInAgent(company.email);
     await office
       .post(`/api/service-requests/${requestId}/estimates`)
       .send({
@@ -216,7 +180,7 @@ describe("a maintenance manager keeps a machine serviced and then sells it", () 
       .post(`/api/work-orders/${workOrderId}/messages`)
       .send({ body: "Arriving at the north gate at eight." })
       .expect(201);
-    const sellerAgent = await signedInAgent(SELLER);
+    const sellerAgent = await suite.signedInAgent(SELLER);
     await sellerAgent
       .post(`/api/work-orders/${workOrderId}/messages`)
       .send({ body: SELLER_MESSAGE })
@@ -238,7 +202,7 @@ describe("a maintenance manager keeps a machine serviced and then sells it", () 
     await screenshot(seller, "maintains-and-sells-5-confirmed");
 
     // 6. The machine's history shows the work; the plan starts again from the day it was done.
-    await seller.goto(`${server.url}/machines/${machineId}`);
+    await seller.goto(`${suite.url}/machines/${machineId}`);
     const history = seller.getByRole("region", { name: "Service history" });
     const entry = history.getByRole("listitem").filter({ hasText: COMPLETION_NOTE });
     await entry.waitFor();
@@ -268,13 +232,13 @@ describe("a maintenance manager keeps a machine serviced and then sells it", () 
     await seller.getByRole("button", { name: "Start transfer" }).click();
     await seller.getByRole("heading", { name: "Waiting for the buying shop" }).waitFor();
     await screenshot(seller, "maintains-and-sells-7-transfer-started");
-    const receiver = await signedInPage(RECEIVER);
-    await receiver.goto(`${server.url}/machine-transfers`);
+    const receiver = await suite.signedInPage(RECEIVER, { timezoneId: SITE_ZONE });
+    await receiver.goto(`${suite.url}/machine-transfers`);
     const offer = receiver.getByRole("article", { name: "Vantor Machine Works VM-55 vertical mill" });
     await offer.getByLabel("Your site for this machine").selectOption({ index: 1 });
     await offer.getByRole("button", { name: "Accept transfer" }).click();
     await offer.getByText("Taken over").first().waitFor();
-    await receiver.goto(`${server.url}/machines/${machineId}`);
+    await receiver.goto(`${suite.url}/machines/${machineId}`);
     await receiver.getByRole("heading", { level: 1, name: MACHINE }).waitFor();
     const carried = receiver.getByRole("region", { name: "Service history" });
     const carriedEntry = carried.getByRole("listitem").filter({ hasText: COMPLETION_NOTE });
@@ -284,7 +248,7 @@ describe("a maintenance manager keeps a machine serviced and then sells it", () 
     const [technician] = await rows<{ name: string }>("SELECT name FROM technicians WHERE id = $1", [
       company.technician_id,
     ]);
-    const receiverAgent = await signedInAgent(RECEIVER);
+    const receiverAgent = await suite.signedInAgent(RECEIVER);
     await expect(seriousAccessibilityProblems(receiver)).resolves.toEqual([]);
     await screenshot(receiver, "maintains-and-sells-7-receiver-history");
 
@@ -321,7 +285,7 @@ describe("a maintenance manager keeps a machine serviced and then sells it", () 
     expect(messages.status).toBe(404);
 
     // 8. The seller keeps a read-only copy of the history up to the handover, in full, without the exports.
-    await seller.goto(`${server.url}/machine-transfers`);
+    await seller.goto(`${suite.url}/machine-transfers`);
     await seller.getByRole("link", { name: "Read your copy" }).click();
     await seller.getByRole("heading", { level: 1, name: MACHINE }).waitFor();
     const copy = seller.getByRole("region", { name: "Service history" });

@@ -1,9 +1,8 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import pg from "pg";
-import type { Browser } from "playwright-core";
 import { seriousAccessibilityProblems } from "../support/axe.ts";
-import { startBrowserServer } from "../support/browser-server.ts";
-import { launchChromium, screenshot, signIn } from "../support/browser.ts";
+import { useBrowserSuite } from "../support/browser-suite.ts";
+import { screenshot, signIn } from "../support/browser.ts";
 import { DEMO_PASSWORD } from "../../server/db/demo-scenario/index.ts";
 import { calendarDateIn } from "../../shared/dates/local-time.ts";
 import { addCalendarDays } from "../../shared/standing/iso-date.ts";
@@ -11,19 +10,14 @@ import { addCalendarMonths } from "../../shared/standing/training-validity.ts";
 
 const BUYER = "buyer@marlow-precision.test";
 
-let server: Awaited<ReturnType<typeof startBrowserServer>>;
-let browser: Browser;
 let client: pg.Client;
+const suite = useBrowserSuite();
 beforeAll(async () => {
-  server = await startBrowserServer();
-  browser = await launchChromium();
-  client = new pg.Client({ connectionString: server.databaseUrl });
+  client = new pg.Client({ connectionString: suite.server.databaseUrl });
   await client.connect();
 }, 180_000);
 afterAll(async () => {
   await client?.end();
-  await browser?.close();
-  await server?.close();
 });
 
 /** A Chicago site with one mill for the demo shop, as the sites page would store it. */
@@ -52,11 +46,11 @@ describe("maintenance plans page", () => {
     // Done eleven months and ten days ago, so the annual inspection falls due in about three weeks.
     const lastDoneOn = addCalendarDays(addCalendarMonths(today, -11), -10);
     const dueOn = addCalendarMonths(lastDoneOn, 12);
-    const context = await browser.newContext({ viewport: { width: 390, height: 844 } });
+    const context = await suite.newContext({ viewport: { width: 390, height: 844 } });
     const page = await context.newPage();
-    await signIn(page, server.url, BUYER, DEMO_PASSWORD);
+    await signIn(page, suite.url, BUYER, DEMO_PASSWORD);
 
-    await page.goto(`${server.url}/machines/${machineId}/maintenance`);
+    await page.goto(`${suite.url}/machines/${machineId}/maintenance`);
     await page.getByRole("heading", { name: "Maintenance plans", level: 1 }).waitFor();
     await page.getByRole("button", { name: "Add a plan" }).click();
     const form = page.getByRole("form", { name: "Add a maintenance plan" });

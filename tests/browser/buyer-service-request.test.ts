@@ -1,40 +1,24 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import pg from "pg";
-import type { Browser, BrowserContext, Page } from "playwright-core";
+import type { Page } from "playwright-core";
 import { seriousAccessibilityProblems } from "../support/axe.ts";
-import { startBrowserServer } from "../support/browser-server.ts";
-import { launchChromium, screenshot, signIn } from "../support/browser.ts";
-import { DEMO_PASSWORD } from "../../server/db/demo-scenario/index.ts";
+import { useBrowserSuite } from "../support/browser-suite.ts";
+import { screenshot } from "../support/browser.ts";
 import { addCalendarDays } from "../../shared/standing/iso-date.ts";
 import { tinyPng } from "../fixtures/build-service-request-world.ts";
 
 const BUYER = "buyer@marlow-precision.test";
 
-let server: Awaited<ReturnType<typeof startBrowserServer>>;
-let browser: Browser;
 let client: pg.Client;
-const contexts: BrowserContext[] = [];
 
+const suite = useBrowserSuite();
 beforeAll(async () => {
-  server = await startBrowserServer();
-  browser = await launchChromium();
-  client = new pg.Client({ connectionString: server.databaseUrl });
+  client = new pg.Client({ connectionString: suite.server.databaseUrl });
   await client.connect();
 }, 180_000);
 afterAll(async () => {
-  for (const context of contexts) await context.close();
   await client?.end();
-  await browser?.close();
-  await server?.close();
 });
-
-async function signedInPage(email: string, width = 1280): Promise<Page> {
-  const context = await browser.newContext({ viewport: { width, height: 900 } });
-  contexts.push(context);
-  const page = await context.newPage();
-  await signIn(page, server.url, email, DEMO_PASSWORD);
-  return page;
-}
 
 /** A Chicago site with one mill for the demo shop, as the sites page would store it. */
 async function addSiteWithMill() {
@@ -89,9 +73,9 @@ async function sendEstimate(page: Page, technician: string, hours: string) {
 describe("a buyer with a machine down asks every cleared company at once", () => {
   it("raises the request with a photo, gets two estimates (one revised), compares and accepts one", async () => {
     await addSiteWithMill();
-    const buyer = await signedInPage(BUYER);
+    const buyer = await suite.signedInPage(BUYER);
 
-    await buyer.goto(`${server.url}/buyer/service-requests/new`);
+    await buyer.goto(`${suite.url}/buyer/service-requests/new`);
     await buyer.getByLabel("Site", { exact: true }).selectOption({ label: "Marlow east bay" });
     await buyer
       .getByLabel("Machine", { exact: true })
@@ -115,8 +99,8 @@ describe("a buyer with a machine down asks every cleared company at once", () =>
     expect(second).toBeDefined();
 
     // The first company answers from a phone, then revises.
-    const phone = await signedInPage(first!.email, 390);
-    await phone.goto(`${server.url}/provider/service-requests/${requestId}`);
+    const phone = await suite.signedInPage(first!.email, { viewport: { width: 390, height: 900 } });
+    await phone.goto(`${suite.url}/provider/service-requests/${requestId}`);
     await phone.getByText("Chicago, IL 60601").first().waitFor();
     await expect(phone.getByText("18 Quarry Lane").count()).resolves.toBe(0);
     await sendEstimate(phone, first!.technician, "2");
@@ -130,8 +114,8 @@ describe("a buyer with a machine down asks every cleared company at once", () =>
     await phone.getByRole("button", { name: "Send revision" }).click();
     await phone.getByText(/Revision 2:/).waitFor();
 
-    const other = await signedInPage(second!.email);
-    await other.goto(`${server.url}/provider/service-requests/${requestId}`);
+    const other = await suite.signedInPage(second!.email);
+    await other.goto(`${suite.url}/provider/service-requests/${requestId}`);
     await sendEstimate(other, second!.technician, "2");
     await other.getByRole("button", { name: "Send estimate" }).click();
     await other.getByText(/Revision 1:/).waitFor();

@@ -1,36 +1,15 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser, BrowserContext, Page } from "playwright-core";
+import { describe, expect, it } from "vitest";
+import type { Page } from "playwright-core";
 import { seriousAccessibilityProblems } from "../support/axe.ts";
-import { startBrowserServer } from "../support/browser-server.ts";
-import { launchChromium, screenshot, signIn } from "../support/browser.ts";
-import { DEMO_PASSWORD } from "../../server/db/demo-scenario/index.ts";
+import { useBrowserSuite } from "../support/browser-suite.ts";
+import { screenshot } from "../support/browser.ts";
 
 const BUYER = "buyer@marlow-precision.test";
 const PROVIDER = "office@kestrel-ridge.test";
 const TECHNICIAN = "Tobias Wren";
 const CSRF = { "x-clearbench-csrf": "1" };
 
-let server: Awaited<ReturnType<typeof startBrowserServer>>;
-let browser: Browser;
-const contexts: BrowserContext[] = [];
-
-beforeAll(async () => {
-  server = await startBrowserServer();
-  browser = await launchChromium();
-}, 180_000);
-afterAll(async () => {
-  for (const context of contexts) await context.close();
-  await browser?.close();
-  await server?.close();
-});
-
-async function signedInPage(email: string, timezoneId = "America/Chicago"): Promise<Page> {
-  const context = await browser.newContext({ viewport: { width: 1280, height: 900 }, timezoneId });
-  contexts.push(context);
-  const page = await context.newPage();
-  await signIn(page, server.url, email, DEMO_PASSWORD);
-  return page;
-}
+const suite = useBrowserSuite();
 
 /** Axe finds nothing serious, at desktop width and at 390 px, where nothing may be wider than the screen. */
 async function checkedAtBothWidths(page: Page, name: string) {
@@ -51,7 +30,7 @@ async function checkedAtBothWidths(page: Page, name: string) {
 const dayAhead = (days: number) => new Date(Date.now() + days * 86_400_000).toISOString().slice(0, 10);
 
 async function raiseFromForm(buyer: Page, technicianId: number, siteId: number, problem: string) {
-  await buyer.goto(`${server.url}/work-orders/new?technicianId=${technicianId}&siteId=${siteId}`);
+  await buyer.goto(`${suite.url}/work-orders/new?technicianId=${technicianId}&siteId=${siteId}`);
   await buyer.getByRole("heading", { level: 1, name: "Raise a work order" }).waitFor();
   await buyer.getByLabel("Technology").selectOption({ index: 1 });
   await buyer.getByLabel("What is wrong").fill(problem);
@@ -60,8 +39,8 @@ async function raiseFromForm(buyer: Page, technicianId: number, siteId: number, 
 
 describe("a buyer and a service office decide a work order together", () => {
   it("raise → accept with arrival → complete → dispute → complete again → confirm, and cancel, and take a proposed date", async () => {
-    const buyer = await signedInPage(BUYER);
-    const site = await buyer.request.post(`${server.url}/api/sites`, {
+    const buyer = await suite.signedInPage(BUYER, { timezoneId: "America/Chicago" });
+    const site = await buyer.request.post(`${suite.url}/api/sites`, {
       headers: CSRF,
       data: {
         name: "Rockford east plant",
@@ -75,7 +54,7 @@ describe("a buyer and a service office decide a work order together", () => {
     expect(site.status()).toBe(201);
     const siteId = ((await site.json()) as { id: number }).id;
     const found = await buyer.request.get(
-      `${server.url}/api/directory?siteId=${siteId}&q=${encodeURIComponent(TECHNICIAN)}`,
+      `${suite.url}/api/directory?siteId=${siteId}&q=${encodeURIComponent(TECHNICIAN)}`,
     );
     const row = ((await found.json()) as { rows: { technicianId: number; name: string }[] }).rows.find(
       (r) => r.name === TECHNICIAN,
@@ -100,7 +79,7 @@ describe("a buyer and a service office decide a work order together", () => {
 
     // The service side sees no address, contact or PO until it accepts.
     // The office reads times in its own zone, an hour ahead of the Chicago-zone site.
-    const provider = await signedInPage(PROVIDER, "America/New_York");
+    const provider = await suite.signedInPage(PROVIDER, { timezoneId: "America/New_York" });
     await provider.goto(workOrderUrl);
     await provider.getByText(/arrive here once you accept/).waitFor();
     await expect(provider.getByText("1180 Millrace Avenue", { exact: false }).count()).resolves.toBe(0);
@@ -167,7 +146,7 @@ describe("a buyer and a service office decide a work order together", () => {
     await buyer.getByText("Cancelled", { exact: true }).first().waitFor();
     await expect(buyer.getByText(/fixed in house/).count()).resolves.toBeGreaterThan(0);
     await checkedAtBothWidths(buyer, "decisions-5-buyer-cancelled");
-    const bell = await provider.request.get(`${server.url}/api/notifications`);
+    const bell = await provider.request.get(`${suite.url}/api/notifications`);
     expect(JSON.stringify(await bell.json())).toContain("cancelled by the shop");
 
     // Decline with a proposed date; the buyer takes it with one click and lands on the copy.

@@ -1,20 +1,10 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser } from "playwright-core";
-import { startBrowserServer } from "../support/browser-server.ts";
-import { launchChromium, screenshot, signIn } from "../support/browser.ts";
+import { describe, expect, it } from "vitest";
+import { useBrowserSuite } from "../support/browser-suite.ts";
+import { screenshot, signIn } from "../support/browser.ts";
 import { writeCertificateFile } from "../support/certificate-file.ts";
 import { DEMO_PASSWORD, demoSignIns } from "../../server/db/demo-scenario/index.ts";
 
-let server: Awaited<ReturnType<typeof startBrowserServer>>;
-let browser: Browser;
-beforeAll(async () => {
-  server = await startBrowserServer();
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const suite = useBrowserSuite();
 
 const office = demoSignIns.find((s) => s.email === "office@kestrel-ridge.test")!;
 const reviewer = demoSignIns.find((s) => s.role === "reviewer")!;
@@ -33,10 +23,10 @@ describe("one certificate with four coverages, from upload to decisions", () => 
     const certificate = await writeCertificateFile(51, office.company, new Date(), {
       everyCoverageInForce: true,
     });
-    const officeContext = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+    const officeContext = await suite.newContext({ viewport: { width: 1280, height: 900 } });
     const page = await officeContext.newPage();
-    await signIn(page, server.url, office.email, DEMO_PASSWORD);
-    await page.goto(`${server.url}/provider/documents/new`);
+    await signIn(page, suite.url, office.email, DEMO_PASSWORD);
+    await page.goto(`${suite.url}/provider/documents/new`);
     await page.getByLabel("Type of document").selectOption({ label: "Commercial general liability" });
     await page.getByLabel("Choose a file").setInputFiles(certificate.file);
     const form = page.getByRole("form", { name: "Check the coverages" });
@@ -51,11 +41,11 @@ describe("one certificate with four coverages, from upload to decisions", () => 
     await page.getByRole("status").filter({ hasText: "were sent for verification" }).waitFor();
     await officeContext.close();
 
-    const reviewerContext = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+    const reviewerContext = await suite.newContext({ viewport: { width: 1280, height: 900 } });
     const review = await reviewerContext.newPage();
-    await signIn(review, server.url, reviewer.email, DEMO_PASSWORD);
+    await signIn(review, suite.url, reviewer.email, DEMO_PASSWORD);
     const queue = await reviewerContext.request.get(
-      `${server.url}/api/review/queue?pageSize=100&sort=submittedAt&dir=desc`,
+      `${suite.url}/api/review/queue?pageSize=100&sort=submittedAt&dir=desc`,
     );
     const rows = (
       (await queue.json()) as { rows: { id: number; typeName: string; companyName: string }[] }
@@ -64,7 +54,7 @@ describe("one certificate with four coverages, from upload to decisions", () => 
       .slice(0, 4);
     const idOf = (name: string) => rows.find((row) => row.typeName === name)!.id;
 
-    await review.goto(`${server.url}/review/${idOf(coverageNames[0]!)}`);
+    await review.goto(`${suite.url}/review/${idOf(coverageNames[0]!)}`);
     const siblings = review.getByRole("navigation", { name: "Coverages on this document" });
     await siblings.waitFor();
     await expect(siblings.getByRole("listitem").count()).resolves.toBe(4);
@@ -73,18 +63,18 @@ describe("one certificate with four coverages, from upload to decisions", () => 
     await review.getByTestId("read-here").waitFor();
     await screenshot(review, "four-coverages-2-review");
     for (const name of coverageNames.slice(0, 3)) {
-      await review.goto(`${server.url}/review/${idOf(name)}`);
+      await review.goto(`${suite.url}/review/${idOf(name)}`);
       await review.getByRole("button", { name: "Verify", exact: true }).click();
       await review.waitForURL((url) => !url.pathname.endsWith(`/review/${idOf(name)}`));
     }
-    await review.goto(`${server.url}/review/${idOf(coverageNames[3]!)}`);
+    await review.goto(`${suite.url}/review/${idOf(coverageNames[3]!)}`);
     await review
       .getByLabel("Reason for returning")
       .fill("The employer's liability limits are cut off; send the full page.");
     await review.getByRole("button", { name: "Return to uploader" }).click();
     await review.waitForURL((url) => !url.pathname.endsWith(`/review/${idOf(coverageNames[3]!)}`));
 
-    await review.goto(`${server.url}/review/${idOf(coverageNames[0]!)}`);
+    await review.goto(`${suite.url}/review/${idOf(coverageNames[0]!)}`);
     const decided = review.getByRole("navigation", { name: "Coverages on this document" });
     await decided.waitFor();
     await screenshot(review, "four-coverages-3-decided");
@@ -93,15 +83,15 @@ describe("one certificate with four coverages, from upload to decisions", () => 
     await reviewerContext.close();
 
     // A buyer sees the company's three verified coverages on its technician's page; the returned one is absent.
-    const buyerContext = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+    const buyerContext = await suite.newContext({ viewport: { width: 1280, height: 900 } });
     const shop = await buyerContext.newPage();
-    await signIn(shop, server.url, buyer.email, DEMO_PASSWORD);
+    await signIn(shop, suite.url, buyer.email, DEMO_PASSWORD);
     const found = await buyerContext.request.get(
-      `${server.url}/api/directory?limit=50&q=${encodeURIComponent(office.company)}`,
+      `${suite.url}/api/directory?limit=50&q=${encodeURIComponent(office.company)}`,
     );
     const listed = ((await found.json()) as { rows: { technicianId: number; companyName: string }[] }).rows;
     const technicianId = listed.find((row) => row.companyName === office.company)!.technicianId;
-    await shop.goto(`${server.url}/directory/technicians/${technicianId}`);
+    await shop.goto(`${suite.url}/directory/technicians/${technicianId}`);
     const onFile = shop.getByRole("region", { name: "Verified credentials" });
     await onFile.waitFor();
     const policies = coverageCodes.map((code) => certificate.coverages[code]!.policyNumber);

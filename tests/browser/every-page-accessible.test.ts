@@ -1,20 +1,11 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser, Page } from "playwright-core";
-import { startBrowserServer } from "../support/browser-server.ts";
-import { launchChromium, signIn } from "../support/browser.ts";
+import { describe, expect, it } from "vitest";
+import type { Page } from "playwright-core";
+import { useBrowserSuite } from "../support/browser-suite.ts";
+import { signIn } from "../support/browser.ts";
 import { seriousAccessibilityProblems } from "../support/axe.ts";
 import { DEMO_PASSWORD } from "../../server/db/demo-scenario/index.ts";
 
-let server: Awaited<ReturnType<typeof startBrowserServer>>;
-let browser: Browser;
-beforeAll(async () => {
-  server = await startBrowserServer();
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const suite = useBrowserSuite();
 
 // The main pages of each role, with a heading to wait for; the journeys cover the pages that need data first.
 const pagesByRole: { who: string; email: string | null; pages: string[] }[] = [
@@ -94,16 +85,16 @@ describe("accessibility of every main page (axe-core, WCAG 2 A and AA)", () => {
   it.each(pagesByRole)(
     "has no serious or critical violation on the $who pages",
     async ({ email, pages }) => {
-      const context = await browser.newContext({ viewport: { width: 1280, height: 800 } });
+      const context = await suite.newContext({ viewport: { width: 1280, height: 800 } });
       const page = await context.newPage();
-      if (email) await signIn(page, server.url, email, DEMO_PASSWORD);
+      if (email) await signIn(page, suite.url, email, DEMO_PASSWORD);
       const problems: string[] = [];
 
       for (const pattern of pages) {
         const path = pattern.includes(":firstSiteId")
           ? pattern.replace(":firstSiteId", String(await firstSiteId(page)))
           : pattern;
-        await page.goto(`${server.url}${path}`);
+        await page.goto(`${suite.url}${path}`);
         await page.getByRole("heading", { level: 1 }).first().waitFor();
         await page.waitForLoadState("networkidle");
         problems.push(...(await seriousAccessibilityProblems(page)).map((p) => `${path}: ${p}`));

@@ -1,21 +1,12 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser, Page } from "playwright-core";
-import { startBrowserServer } from "../support/browser-server.ts";
-import { launchChromium, screenshot, signIn } from "../support/browser.ts";
+import { describe, expect, it } from "vitest";
+import type { Page } from "playwright-core";
+import { useBrowserSuite } from "../support/browser-suite.ts";
+import { screenshot, signIn } from "../support/browser.ts";
 import { seriousAccessibilityProblems } from "../support/axe.ts";
 import { DEMO_PASSWORD } from "../../server/db/demo-scenario/index.ts";
 import { demoBuyerRequirements } from "../../server/db/demo-scenario/buyer-site.ts";
 
-let server: Awaited<ReturnType<typeof startBrowserServer>>;
-let browser: Browser;
-beforeAll(async () => {
-  server = await startBrowserServer();
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const suite = useBrowserSuite();
 
 const WIDTHS = [
   { name: "desktop", width: 1280, height: 900 },
@@ -51,7 +42,7 @@ const roles: { role: string; email: string; pages: string[] }[] = [
 ];
 
 async function firstDirectoryTechnician(page: Page): Promise<string> {
-  await page.goto(`${server.url}/directory`);
+  await page.goto(`${suite.url}/directory`);
   const link = page.locator('a[href^="/directory/technicians/"]:visible').first();
   await link.waitFor();
   return (await link.getAttribute("href"))!;
@@ -80,16 +71,16 @@ describe("every role's daily screens at desktop and phone width", () => {
     "has no sideways scrolling and no serious axe problem on the $role screens",
     async ({ role, email, pages }) => {
       const problems: string[] = [];
-      const context = await browser.newContext({
+      const context = await suite.newContext({
         viewport: { width: WIDTHS[0].width, height: WIDTHS[0].height },
       });
       const page = await context.newPage();
-      await signIn(page, server.url, email, DEMO_PASSWORD);
+      await signIn(page, suite.url, email, DEMO_PASSWORD);
       for (const size of WIDTHS) {
         await page.setViewportSize({ width: size.width, height: size.height });
         for (const pattern of pages) {
           const path = pattern === ":technician" ? await firstDirectoryTechnician(page) : pattern;
-          await page.goto(`${server.url}${path}`);
+          await page.goto(`${suite.url}${path}`);
           await page.getByRole("heading", { level: 1 }).first().waitFor();
           await page.waitForLoadState("networkidle");
           const wider = await overflow(page);
@@ -115,11 +106,11 @@ describe("every role's daily screens at desktop and phone width", () => {
 
 describe("the demo buyer's first directory search", () => {
   it("opens on the buyer's site and judges against that site's requirement set", async () => {
-    const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+    const context = await suite.newContext({ viewport: { width: 1280, height: 900 } });
     const page = await context.newPage();
-    await signIn(page, server.url, "buyer@marlow-precision.test", DEMO_PASSWORD);
+    await signIn(page, suite.url, "buyer@marlow-precision.test", DEMO_PASSWORD);
 
-    await page.goto(`${server.url}/directory`);
+    await page.goto(`${suite.url}/directory`);
     const judged = page.getByTestId("directory-judged-against");
     await judged.waitFor();
 
@@ -131,10 +122,10 @@ describe("the demo buyer's first directory search", () => {
   });
 
   it("folds the filters behind a button that counts them at phone width, and opens them on request", async () => {
-    const context = await browser.newContext({ viewport: { width: 390, height: 844 } });
+    const context = await suite.newContext({ viewport: { width: 390, height: 844 } });
     const page = await context.newPage();
-    await signIn(page, server.url, "buyer@marlow-precision.test", DEMO_PASSWORD);
-    await page.goto(`${server.url}/directory`);
+    await signIn(page, suite.url, "buyer@marlow-precision.test", DEMO_PASSWORD);
+    await page.goto(`${suite.url}/directory`);
     const toggle = page.getByRole("button", { name: /Show filters/ });
     await toggle.waitFor();
     const filters = page.getByRole("search", { name: "Directory filters" });
@@ -161,10 +152,10 @@ describe("the demo buyer's first directory search", () => {
   }, 60_000);
 
   it("offers the catalog's builder for a short name typed in the builder filter, in any case", async () => {
-    const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+    const context = await suite.newContext({ viewport: { width: 1280, height: 900 } });
     const page = await context.newPage();
-    await signIn(page, server.url, "buyer@marlow-precision.test", DEMO_PASSWORD);
-    await page.goto(`${server.url}/directory`);
+    await signIn(page, suite.url, "buyer@marlow-precision.test", DEMO_PASSWORD);
+    await page.goto(`${suite.url}/directory`);
     await page.getByText("Machine builder training, insurance limits and estimate").click();
     const builder = page.getByRole("combobox", { name: "Machine builder" });
 

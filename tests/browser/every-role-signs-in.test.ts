@@ -1,19 +1,9 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser } from "playwright-core";
-import { startBrowserServer } from "../support/browser-server.ts";
-import { launchChromium, screenshot, signIn } from "../support/browser.ts";
+import { describe, expect, it } from "vitest";
+import { useBrowserSuite } from "../support/browser-suite.ts";
+import { screenshot, signIn } from "../support/browser.ts";
 import { DEMO_PASSWORD } from "../../server/db/demo-scenario/index.ts";
 
-let server: Awaited<ReturnType<typeof startBrowserServer>>;
-let browser: Browser;
-beforeAll(async () => {
-  server = await startBrowserServer();
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const suite = useBrowserSuite();
 
 // Each role sees only what it may use.
 const journeys = [
@@ -51,10 +41,10 @@ const journeys = [
 
 describe("signing in as each demo role", () => {
   it.each(journeys)("shows $role only that role's navigation", async ({ role, email, sees, hidden }) => {
-    const context = await browser.newContext({ viewport: { width: 1280, height: 800 } });
+    const context = await suite.newContext({ viewport: { width: 1280, height: 800 } });
     const page = await context.newPage();
 
-    await signIn(page, server.url, email, DEMO_PASSWORD);
+    await signIn(page, suite.url, email, DEMO_PASSWORD);
     const nav = page.getByRole("navigation", { name: /main/i });
     await nav.getByRole("link").first().waitFor();
     await screenshot(page, `sign-in-${role}`);

@@ -1,27 +1,17 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser } from "playwright-core";
-import { startBrowserServer } from "../support/browser-server.ts";
-import { launchChromium, screenshot, signIn } from "../support/browser.ts";
+import { describe, expect, it } from "vitest";
+import { useBrowserSuite } from "../support/browser-suite.ts";
+import { screenshot, signIn } from "../support/browser.ts";
 import { readQr } from "../support/read-qr.ts";
 import { DEMO_PASSWORD } from "../../server/db/demo-scenario/index.ts";
 
-let server: Awaited<ReturnType<typeof startBrowserServer>>;
-let browser: Browser;
-beforeAll(async () => {
-  server = await startBrowserServer();
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const suite = useBrowserSuite();
 
 describe("gate badge", () => {
   it("shows a QR on the technician's badge page that a front desk opens without signing in", async () => {
-    const techContext = await browser.newContext({ viewport: { width: 390, height: 844 } });
+    const techContext = await suite.newContext({ viewport: { width: 390, height: 844 } });
     const tech = await techContext.newPage();
-    await signIn(tech, server.url, "tobias@kestrel-ridge.test", DEMO_PASSWORD);
-    await tech.goto(`${server.url}/badge`);
+    await signIn(tech, suite.url, "tobias@kestrel-ridge.test", DEMO_PASSWORD);
+    await tech.goto(`${suite.url}/badge`);
     const image = tech.getByRole("img", { name: "Gate badge code to scan" });
     await image.waitFor();
     const src = await image.getAttribute("src");
@@ -30,9 +20,9 @@ describe("gate badge", () => {
     await techContext.close();
 
     expect(url.pathname).toBe("/gate/check");
-    const deskContext = await browser.newContext();
+    const deskContext = await suite.newContext();
     const desk = await deskContext.newPage();
-    await desk.goto(`${server.url}${url.pathname}${url.search}`);
+    await desk.goto(`${suite.url}${url.pathname}${url.search}`);
     const verdict = desk.locator("[data-state]");
     await verdict.waitFor();
     await screenshot(desk, "gate-check");
@@ -44,9 +34,9 @@ describe("gate badge", () => {
   });
 
   it("answers a forged code as not a badge", async () => {
-    const context = await browser.newContext();
+    const context = await suite.newContext();
     const page = await context.newPage();
-    await page.goto(`${server.url}/gate/check?token=1.abc.not-signed`);
+    await page.goto(`${suite.url}/gate/check?token=1.abc.not-signed`);
     const verdict = page.locator("[data-state]");
     await verdict.waitFor();
 

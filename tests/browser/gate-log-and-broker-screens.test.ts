@@ -1,21 +1,12 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser, BrowserContext, Page } from "playwright-core";
-import { startBrowserServer } from "../support/browser-server.ts";
-import { launchChromium, screenshot, signIn } from "../support/browser.ts";
+import { describe, expect, it } from "vitest";
+import type { BrowserContext, Page } from "playwright-core";
+import { useBrowserSuite } from "../support/browser-suite.ts";
+import { screenshot, signIn } from "../support/browser.ts";
 import { seriousAccessibilityProblems } from "../support/axe.ts";
 import { CSRF_HEADER, CSRF_HEADER_VALUE } from "../../shared/api/error-body.ts";
 import { DEMO_PASSWORD } from "../../server/db/demo-scenario/index.ts";
 
-let server: Awaited<ReturnType<typeof startBrowserServer>>;
-let browser: Browser;
-beforeAll(async () => {
-  server = await startBrowserServer();
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const suite = useBrowserSuite();
 
 const OFFICE = "office@kestrel-ridge.test";
 const TECHNICIAN = "tobias@kestrel-ridge.test";
@@ -30,9 +21,9 @@ async function signedIn(
   email: string,
   viewport = viewports[0]!,
 ): Promise<{ context: BrowserContext; page: Page }> {
-  const context = await browser.newContext({ viewport: { width: viewport.width, height: viewport.height } });
+  const context = await suite.newContext({ viewport: { width: viewport.width, height: viewport.height } });
   const page = await context.newPage();
-  await signIn(page, server.url, email, DEMO_PASSWORD);
+  await signIn(page, suite.url, email, DEMO_PASSWORD);
   return { context, page };
 }
 
@@ -50,18 +41,18 @@ describe("gate check log, shop certificate requests and the office's broker scre
   it("shows a scan at the shop's site to the office and to the shop, filtered by site, at desktop and phone width", async () => {
     // A real scan: the shop's sign code, the technician's badge, the public check.
     const shop = await signedIn(SHOP);
-    const sites = (await (await shop.page.request.get(`${server.url}/api/sites`)).json()) as {
+    const sites = (await (await shop.page.request.get(`${suite.url}/api/sites`)).json()) as {
       id: number;
       name: string;
     }[];
     const site = sites[0]!;
-    const sign = await (await shop.page.request.get(`${server.url}/api/sites/${site.id}/gate-sign`)).json();
+    const sign = await (await shop.page.request.get(`${suite.url}/api/sites/${site.id}/gate-sign`)).json();
     const tech = await signedIn(TECHNICIAN);
     const badge = await (
-      await tech.page.request.get(`${server.url}/api/badge?site=${encodeURIComponent(sign.code)}`)
+      await tech.page.request.get(`${suite.url}/api/badge?site=${encodeURIComponent(sign.code)}`)
     ).json();
     const checkUrl = new URL(badge.url);
-    const check = await tech.page.request.get(`${server.url}/api${checkUrl.pathname}${checkUrl.search}`);
+    const check = await tech.page.request.get(`${suite.url}/api${checkUrl.pathname}${checkUrl.search}`);
     expect(check.status()).toBe(200);
     const technicianName = (await check.json()).technician.name as string;
     await tech.context.close();
@@ -69,7 +60,7 @@ describe("gate check log, shop certificate requests and the office's broker scre
 
     for (const viewport of viewports) {
       const office = await signedIn(OFFICE, viewport);
-      await office.page.goto(`${server.url}/provider/gate-checks`);
+      await office.page.goto(`${suite.url}/provider/gate-checks`);
       await office.page.getByRole("heading", { level: 1, name: "Gate checks" }).waitFor();
       const officeTable = office.page.getByRole("table", { name: "Gate checks, newest first" });
       await officeTable.getByRole("cell", { name: technicianName }).first().waitFor();
@@ -79,7 +70,7 @@ describe("gate check log, shop certificate requests and the office's broker scre
       await office.context.close();
 
       const theShop = await signedIn(SHOP, viewport);
-      await theShop.page.goto(`${server.url}/gate-checks`);
+      await theShop.page.goto(`${suite.url}/gate-checks`);
       const shopTable = theShop.page.getByRole("table", { name: "Gate checks, newest first" });
       await shopTable.getByRole("cell", { name: technicianName }).first().waitFor();
       await theShop.page.getByLabel("Site").selectOption(String(site.id));
@@ -97,15 +88,15 @@ describe("gate check log, shop certificate requests and the office's broker scre
 
   it("lets the office record a coverage's broker, the shop ask it for a certificate, and both follow the request", async () => {
     const office = await signedIn(OFFICE);
-    const company = await (await office.page.request.get(`${server.url}/api/company`)).json();
+    const company = await (await office.page.request.get(`${suite.url}/api/company`)).json();
     const shop = await signedIn(SHOP);
-    const rostered = await shop.page.request.post(`${server.url}/api/roster`, {
+    const rostered = await shop.page.request.post(`${suite.url}/api/roster`, {
       ...writes,
       data: { serviceCompanyId: company.id },
     });
     expect(rostered.status()).toBeLessThan(300);
 
-    await office.page.goto(`${server.url}/provider/brokers`);
+    await office.page.goto(`${suite.url}/provider/brokers`);
     const liability = office.page.getByRole("region", { name: "Commercial general liability" });
     await liability.getByRole("button", { name: /broker for this coverage|this coverage's broker/ }).click();
     await liability.getByLabel("Agency").fill("Bellwether Row Insurance Agency");
@@ -114,7 +105,7 @@ describe("gate check log, shop certificate requests and the office's broker scre
     await liability.getByRole("button", { name: "Save this coverage's broker" }).click();
     await liability.getByText(/Marguerite Oyelaran, Bellwether Row Insurance Agency/).waitFor();
 
-    await shop.page.goto(`${server.url}/certificate-requests`);
+    await shop.page.goto(`${suite.url}/certificate-requests`);
     await shop.page.getByRole("heading", { level: 1, name: "Certificates from brokers" }).waitFor();
     await shop.page.getByLabel("Service company").selectOption(String(company.id));
     await shop.page.getByLabel("Coverage", { exact: true }).selectOption("general_liability");
@@ -140,7 +131,7 @@ describe("gate check log, shop certificate requests and the office's broker scre
 
     for (const viewport of viewports) {
       const o = await signedIn(OFFICE, viewport);
-      await o.page.goto(`${server.url}/provider/brokers`);
+      await o.page.goto(`${suite.url}/provider/brokers`);
       await o.page
         .getByRole("region", { name: "Commercial general liability" })
         .getByText("Timeline")
@@ -150,7 +141,7 @@ describe("gate check log, shop certificate requests and the office's broker scre
       await o.context.close();
 
       const s = await signedIn(SHOP, viewport);
-      await s.page.goto(`${server.url}/certificate-requests`);
+      await s.page.goto(`${suite.url}/certificate-requests`);
       await s.page
         .getByRole("table", { name: "Certificates you asked for" })
         .getByRole("row")

@@ -1,31 +1,21 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser } from "playwright-core";
-import { startBrowserServer } from "../support/browser-server.ts";
-import { launchChromium, screenshot, signIn } from "../support/browser.ts";
+import { describe, expect, it } from "vitest";
+import { useBrowserSuite } from "../support/browser-suite.ts";
+import { screenshot, signIn } from "../support/browser.ts";
 import { Jimp } from "jimp";
 import { readQr } from "../support/read-qr.ts";
 import { DEMO_PASSWORD } from "../../server/db/demo-scenario/index.ts";
 
-let server: Awaited<ReturnType<typeof startBrowserServer>>;
-let browser: Browser;
-beforeAll(async () => {
-  server = await startBrowserServer();
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const suite = useBrowserSuite();
 
 // The test server's public address is a placeholder; the feed's path is what a calendar program would fetch.
-const onServer = (url: string) => `${server.url}${new URL(url).pathname}`;
+const onServer = (url: string) => `${suite.url}${new URL(url).pathname}`;
 
 describe("a shop's gate sign and lapse calendar screens", () => {
   it("prints a site's sign whose QR opens the badge page tied to that site", async () => {
-    const context = await browser.newContext();
+    const context = await suite.newContext();
     const page = await context.newPage();
-    await signIn(page, server.url, "buyer@tamsin-gear.test", DEMO_PASSWORD);
-    await page.goto(`${server.url}/sites`);
+    await signIn(page, suite.url, "buyer@tamsin-gear.test", DEMO_PASSWORD);
+    await page.goto(`${suite.url}/sites`);
     const firstSite = page.getByRole("link", { name: /^Print the gate sign for / }).first();
     const label = (await firstSite.getAttribute("aria-label"))!;
     const siteName = label.replace("Print the gate sign for ", "");
@@ -47,10 +37,10 @@ describe("a shop's gate sign and lapse calendar screens", () => {
   });
 
   it("shows the roster's calendar address once, and a new address stops the old one", async () => {
-    const context = await browser.newContext();
+    const context = await suite.newContext();
     const page = await context.newPage();
-    await signIn(page, server.url, "buyer@marlow-precision.test", DEMO_PASSWORD);
-    await page.goto(`${server.url}/roster`);
+    await signIn(page, suite.url, "buyer@marlow-precision.test", DEMO_PASSWORD);
+    await page.goto(`${suite.url}/roster`);
     await page.getByRole("button", { name: "Make a subscription address" }).click();
     const field = page.getByLabel(/^Subscription address/);
     await field.waitFor();
@@ -79,10 +69,10 @@ describe("a shop's gate sign and lapse calendar screens", () => {
 
 describe("the technician's photo at the gate", () => {
   it("is added on the badge page and shown to the front desk after a scan", async () => {
-    const techContext = await browser.newContext({ viewport: { width: 390, height: 844 } });
+    const techContext = await suite.newContext({ viewport: { width: 390, height: 844 } });
     const tech = await techContext.newPage();
-    await signIn(tech, server.url, "tobias@kestrel-ridge.test", DEMO_PASSWORD);
-    await tech.goto(`${server.url}/badge`);
+    await signIn(tech, suite.url, "tobias@kestrel-ridge.test", DEMO_PASSWORD);
+    await tech.goto(`${suite.url}/badge`);
     const png = await new Jimp({ width: 900, height: 900, color: 0x884422ff }).getBuffer("image/png");
     await tech
       .getByLabel(/photo \(JPEG or PNG\)/)
@@ -93,9 +83,9 @@ describe("the technician's photo at the gate", () => {
     const url = new URL(await readQr(src!));
     await techContext.close();
 
-    const deskContext = await browser.newContext();
+    const deskContext = await suite.newContext();
     const desk = await deskContext.newPage();
-    await desk.goto(`${server.url}${url.pathname}${url.search}`);
+    await desk.goto(`${suite.url}${url.pathname}${url.search}`);
     const photo = desk.getByRole("img", { name: /^Photo of / });
     await photo.waitFor();
     // The desk gets the stored JPEG, not the PNG that was sent (JPEG SOI marker, ISO/IEC 10918-1).

@@ -1,18 +1,16 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { DateTime } from "luxon";
 import { QueryTypes } from "sequelize";
 import request from "supertest";
-import type { Browser, BrowserContext, Page } from "playwright-core";
+import type { Page } from "playwright-core";
 import { seriousAccessibilityProblems } from "../support/axe.ts";
-import { startBrowserServer } from "../support/browser-server.ts";
-import { launchChromium, screenshot, signIn } from "../support/browser.ts";
-import { startTestMailCatcher } from "../support/mail-catcher.ts";
+import { useBrowserSuite } from "../support/browser-suite.ts";
+import { screenshot } from "../support/browser.ts";
+import { useMailCatcher } from "../support/mail-catcher.ts";
 import { certificateFields } from "../support/submit-credential.ts";
 import { buildCertificatePdf, type CoverageCode } from "../fixtures/build-certificate-pdf.ts";
 import { runLapseJob } from "../../jobs/lapse.ts";
-import { DEMO_PASSWORD } from "../../server/db/demo-scenario/index.ts";
 import { db } from "../../server/db/sequelize.ts";
-import { CSRF_HEADER, CSRF_HEADER_VALUE } from "../../shared/api/error-body.ts";
 
 const BUYER = "buyer@marlow-precision.test";
 const PROVIDER = "office@kestrel-ridge.test";
@@ -25,41 +23,11 @@ const RADIUS_MILES = "62";
 // America/Chicago's standard offset (CST, UTC-6), used all year for the policy cut-off (standard time all year, ISO CG DS 01 wording, from memory).
 const CHICAGO_STANDARD_TIME = "UTC-6";
 
-let server: Awaited<ReturnType<typeof startBrowserServer>>;
-let catcher: Awaited<ReturnType<typeof startTestMailCatcher>>;
-let browser: Browser;
-const contexts: BrowserContext[] = [];
-
-beforeAll(async () => {
-  server = await startBrowserServer();
-  catcher = await startTestMailCatcher();
-  browser = await launchChromium();
-}, 180_000);
-afterAll(async () => {
-  for (const context of contexts) await context.close();
-  await browser?.close();
-  await catcher?.close();
-  await server?.close();
-});
+const suite = useBrowserSuite();
+const catcher = useMailCatcher();
 
 async function rows<T extends object>(sql: string, bind: unknown[] = []): Promise<T[]> {
   return db().query<T>(sql, { bind, type: QueryTypes.SELECT });
-}
-
-async function signedInPage(email: string): Promise<Page> {
-  // AxeBuilder needs a page from browser.newContext(), not browser.newPage(): it throws "Please use browser.newContext()" otherwise.
-  const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
-  contexts.push(context);
-  const page = await context.newPage();
-  await signIn(page, server.url, email, DEMO_PASSWORD);
-  return page;
-}
-
-async function signedInAgent(email: string) {
-  const agent = request.agent(server.url);
-  agent.set(CSRF_HEADER, CSRF_HEADER_VALUE);
-  await agent.post("/api/auth/sign-in").send({ email, password: DEMO_PASSWORD }).expect(200);
-  return agent;
 }
 
 /** Uploads a certificate naming Kestrel Ridge whose one coverage line runs over the given dates, and submits it. */
@@ -90,7 +58,7 @@ async function submitRenewal(
 }
 
 async function searchDirectory(buyer: Page, siteName: string) {
-  await buyer.goto(`${server.url}/directory`);
+  await buyer.goto(`${suite.url}/directory`);
   await buyer.getByLabel("Site", { exact: true }).selectOption({ label: siteName });
   await buyer.getByLabel("Radius (miles)").fill(RADIUS_MILES);
   await buyer.getByRole("button", { name: "Search" }).click();
@@ -119,14 +87,14 @@ describe("the daily lapse job takes a technician out of the buyer's directory", 
     );
     const cutOff = DateTime.fromISO(`${policy!.expiration_date}T00:01`, { zone: CHICAGO_STANDARD_TIME });
     const asOf = cutOff.plus({ minutes: 1 }).toJSDate();
-    const buyer = await signedInPage(BUYER);
+    const buyer = await suite.signedInPage(BUYER);
 
     // The stored lapse instant is 12:01 a.m. standard time at the insured's address on the expiration date
     // (the CGL declarations' standard time, ISO CG DS 01 wording, from memory).
     expect(new Date(policy!.lapses_at).getTime()).toBe(cutOff.toMillis());
 
     // Step 1 (now): a Chicago site, and the technician is listed within the radius.
-    await buyer.goto(`${server.url}/sites`);
+    await buyer.goto(`${suite.url}/sites`);
     await buyer.getByRole("button", { name: "Add a site" }).first().click();
     await buyer.getByLabel("Site name").fill("Chicago river works");
     await buyer.getByLabel("Street address").fill("12 Wharfside Lane");
@@ -181,18 +149,18 @@ describe("the daily lapse job takes a technician out of the buyer's directory", 
     await expect(rosterAlerts()).resolves.toHaveLength(1);
 
     // Step 4: the provider sees the lapsed policy and the technician's standing.
-    const provider = await signedInPage(PROVIDER);
+    const provider = await suite.signedInPage(PROVIDER);
     // The dashboard lists what lapsed and has no renewal yet (the dashboard shows it lapsed).
-    await provider.goto(`${server.url}/provider`);
+    await provider.goto(`${suite.url}/provider`);
     const lapsedSection = provider.getByRole("region", { name: /^Lapsed/ });
     await lapsedSection.getByText(policy!.type_name).first().waitFor();
     await screenshot(provider, "lapse-4-provider-dashboard");
-    await provider.goto(`${server.url}/provider/documents`);
+    await provider.goto(`${suite.url}/provider/documents`);
     const policyRow = provider.getByRole("row", { name: new RegExp(`${policy!.type_name}.*Lapsed`) });
     await policyRow.first().waitFor();
     await screenshot(provider, "lapse-4-provider-documents");
     const lapsedRows = await policyRow.count();
-    await provider.goto(`${server.url}/provider/technicians`);
+    await provider.goto(`${suite.url}/provider/technicians`);
     await provider.getByRole("link", { name: TECHNICIAN }).first().click();
     await provider.getByRole("heading", { level: 1, name: TECHNICIAN }).waitFor();
     await provider.getByText("Not cleared").first().waitFor();
@@ -206,8 +174,8 @@ describe("the daily lapse job takes a technician out of the buyer's directory", 
     // recomputes the standing, and at asOf; they end 45 days after asOf, inside the 60-day lapsing window at asOf only.
     const effectiveDate = DateTime.now().setZone("America/Chicago").minus({ days: 1 }).toISODate()!;
     const expirationDate = DateTime.fromISO(policy!.expiration_date).plus({ days: 45 }).toISODate()!;
-    const office = await signedInAgent(PROVIDER);
-    const reviewer = await signedInAgent(REVIEWER);
+    const office = await suite.signedInAgent(PROVIDER);
+    const reviewer = await suite.signedInAgent(REVIEWER);
     for (const [code, seed] of [
       ["general_liability", 801],
       ["workers_comp", 802],

@@ -1,14 +1,13 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { beforeAll, describe, expect, it } from "vitest";
 import { Jimp } from "jimp";
 import { writeFile } from "node:fs/promises";
 import path from "node:path";
 import { QueryTypes } from "sequelize";
-import type { Browser, BrowserContext, Page } from "playwright-core";
+import type { Page } from "playwright-core";
 import { seriousAccessibilityProblems } from "../support/axe.ts";
-import { startBrowserServer } from "../support/browser-server.ts";
-import { launchChromium, screenshot, signIn } from "../support/browser.ts";
+import { useBrowserSuite } from "../support/browser-suite.ts";
+import { screenshot } from "../support/browser.ts";
 import { buildSizedPdf } from "../fixtures/build-sized-pdf.ts";
-import { DEMO_PASSWORD } from "../../server/db/demo-scenario/index.ts";
 import { db } from "../../server/db/sequelize.ts";
 import { CSRF_HEADER, CSRF_HEADER_VALUE } from "../../shared/api/error-body.ts";
 import { THUMBNAIL_MAX_PX } from "../../server/work-orders/attachment-thumbnail.ts";
@@ -26,9 +25,6 @@ const WIDTHS = [
   { name: "phone", viewport: { width: 390, height: 844 } },
 ] as const;
 
-let server: Awaited<ReturnType<typeof startBrowserServer>>;
-let browser: Browser;
-const contexts: BrowserContext[] = [];
 let facts: { technicianId: number; siteId: number; equipmentId: number; renewalId: number };
 
 const one = async <T extends object>(sql: string, bind: unknown[] = []): Promise<T> => {
@@ -37,9 +33,8 @@ const one = async <T extends object>(sql: string, bind: unknown[] = []): Promise
   return rows[0];
 };
 
+const suite = useBrowserSuite();
 beforeAll(async () => {
-  server = await startBrowserServer();
-  browser = await launchChromium();
   const technician = await one<{ id: number }>("SELECT id FROM technicians WHERE name = $1", [TECHNICIAN]);
   const shop = await one<{ company_id: number }>("SELECT company_id FROM users WHERE email = $1", [BUYER]);
   const site = await one<{ id: number }>(
@@ -60,23 +55,10 @@ beforeAll(async () => {
   );
   facts = { technicianId: technician.id, siteId: site.id, equipmentId: equipment.id, renewalId: renewal.id };
 }, 180_000);
-afterAll(async () => {
-  for (const context of contexts) await context.close();
-  await browser?.close();
-  await server?.close();
-});
-
-async function signedInPage(email: string, viewport: { width: number; height: number }): Promise<Page> {
-  const context = await browser.newContext({ viewport });
-  contexts.push(context);
-  const page = await context.newPage();
-  await signIn(page, server.url, email, DEMO_PASSWORD);
-  return page;
-}
 
 const api = (page: Page) => ({
   post: (url: string, options: Parameters<Page["request"]["post"]>[1] = {}) =>
-    page.request.post(`${server.url}${url}`, {
+    page.request.post(`${suite.url}${url}`, {
       ...options,
       headers: { [CSRF_HEADER]: CSRF_HEADER_VALUE, ...(options.headers ?? {}) },
     }),
@@ -92,7 +74,7 @@ const cautions = (page: Page, name: string) => page.getByRole("complementary", {
 describe("the service office's daily desk", () => {
   for (const { name, viewport } of WIDTHS) {
     it(`lists a new work order on the dashboard and in the bell, with a thumbnail in its thread (${name})`, async () => {
-      const buyer = await signedInPage(BUYER, viewport);
+      const buyer = await suite.signedInPage(BUYER, { viewport: viewport });
       const raised = await api(buyer).post("/api/work-orders", {
         data: {
           technicianId: facts.technicianId,
@@ -114,8 +96,8 @@ describe("the service office's daily desk", () => {
       });
       expect(posted.status()).toBe(201);
 
-      const office = await signedInPage(OFFICE, viewport);
-      await office.goto(`${server.url}/provider`);
+      const office = await suite.signedInPage(OFFICE, { viewport: viewport });
+      await office.goto(`${suite.url}/provider`);
       const toAnswer = office.getByRole("region", { name: /Work orders to answer/ });
       await toAnswer.getByRole("link", { name: `Work order #${workOrderId}` }).waitFor();
       expect(await cautions(office, CERTIFICATE)).toBe(0);
@@ -134,7 +116,7 @@ describe("the service office's daily desk", () => {
       await screenshot(office, `office-desk-${name}-2-bell`);
       await bell.click();
 
-      await office.goto(`${server.url}/work-orders/${workOrderId}`);
+      await office.goto(`${suite.url}/work-orders/${workOrderId}`);
       const thumbnail = office.locator(
         `img[src$="/messages/${((await posted.json()) as { id: number }).id}/thumbnail"]`,
       );
@@ -159,7 +141,7 @@ describe("the service office's daily desk", () => {
       await screenshot(office, `office-desk-${name}-3-thread`);
       await fitsAndIsClean(office, viewport);
 
-      await office.goto(`${server.url}/provider/documents`);
+      await office.goto(`${suite.url}/provider/documents`);
       await office.getByRole("heading", { level: 1 }).first().waitFor();
       expect(await cautions(office, CERTIFICATE)).toBe(0);
     }, 240_000);
@@ -168,9 +150,9 @@ describe("the service office's daily desk", () => {
       const card = path.join(process.env.TMPDIR ?? "/tmp", `blank-card-${name}.pdf`);
       // A page with no name on it: the holder name then starts from the chosen technician's record.
       await writeFile(card, await buildSizedPdf([[612, 792]]));
-      const office = await signedInPage(OFFICE, viewport);
+      const office = await suite.signedInPage(OFFICE, { viewport: viewport });
 
-      await office.goto(`${server.url}/provider/documents/new?technicianId=${facts.technicianId}`);
+      await office.goto(`${suite.url}/provider/documents/new?technicianId=${facts.technicianId}`);
       await office.getByLabel("Type of document").selectOption({ label: "First aid / CPR / AED" });
       await expect(office.getByLabel("Whose card is it?").inputValue()).resolves.toBe(
         String(facts.technicianId),
@@ -195,9 +177,9 @@ describe("the service office's daily desk", () => {
     it(`keeps a technician's own card in their name, with the name on the card started from it (${name})`, async () => {
       const card = path.join(process.env.TMPDIR ?? "/tmp", `own-card-${name}.pdf`);
       await writeFile(card, await buildSizedPdf([[612, 792]]));
-      const technician = await signedInPage(TECHNICIAN_SIGN_IN, viewport);
+      const technician = await suite.signedInPage(TECHNICIAN_SIGN_IN, { viewport: viewport });
 
-      await technician.goto(`${server.url}/technician/upload-card`);
+      await technician.goto(`${suite.url}/technician/upload-card`);
       await technician.getByLabel("Type of document").selectOption({ label: "First aid / CPR / AED" });
       await technician.getByLabel("Choose a file").setInputFiles(card);
       await technician.getByRole("form", { name: "Check the fields" }).waitFor();
@@ -212,9 +194,9 @@ describe("the service office's daily desk", () => {
     }, 240_000);
 
     it(`offers ready-made return reasons and shows what changed since the verified policy (${name})`, async () => {
-      const reviewer = await signedInPage(REVIEWER, viewport);
+      const reviewer = await suite.signedInPage(REVIEWER, { viewport: viewport });
 
-      await reviewer.goto(`${server.url}/review/${facts.renewalId}`);
+      await reviewer.goto(`${suite.url}/review/${facts.renewalId}`);
       const comparison = reviewer.getByRole("region", { name: "Compared with the last verified version" });
       await comparison.waitFor();
       await comparison.getByRole("rowheader", { name: "Expiration date" }).waitFor();

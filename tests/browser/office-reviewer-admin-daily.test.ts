@@ -1,9 +1,8 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser, BrowserContext, Page } from "playwright-core";
+import { describe, expect, it } from "vitest";
+import type { Page } from "playwright-core";
 import { seriousAccessibilityProblems } from "../support/axe.ts";
-import { startBrowserServer } from "../support/browser-server.ts";
-import { launchChromium, screenshot, signIn } from "../support/browser.ts";
-import { DEMO_PASSWORD } from "../../server/db/demo-scenario/index.ts";
+import { useBrowserSuite } from "../support/browser-suite.ts";
+import { screenshot } from "../support/browser.ts";
 
 // A Copperline technician: the demo company's general liability lapsed days ago and its renewal waits for a reviewer.
 const COPPERLINE_TECHNICIAN = "saoirse@copperline-field.test";
@@ -11,28 +10,7 @@ const COPPERLINE_TECHNICIAN = "saoirse@copperline-field.test";
 const PHONE = { width: 390, height: 844 };
 const DESKTOP = { width: 1280, height: 900 };
 
-let server: Awaited<ReturnType<typeof startBrowserServer>>;
-let browser: Browser;
-const contexts: BrowserContext[] = [];
-
-beforeAll(async () => {
-  server = await startBrowserServer();
-  browser = await launchChromium();
-}, 180_000);
-afterAll(async () => {
-  for (const context of contexts) await context.close();
-  await browser?.close();
-  await server?.close();
-});
-
-async function signedInPage(email: string, viewport: { width: number; height: number }): Promise<Page> {
-  // AxeBuilder needs a page from browser.newContext(), not browser.newPage().
-  const context = await browser.newContext({ viewport });
-  contexts.push(context);
-  const page = await context.newPage();
-  await signIn(page, server.url, email, DEMO_PASSWORD);
-  return page;
-}
+const suite = useBrowserSuite();
 
 const pageWidth = (page: Page) => page.evaluate(() => document.documentElement.scrollWidth);
 
@@ -42,8 +20,8 @@ describe("a technician's own standing page", () => {
     ["phone", PHONE],
   ] as const) {
     it(`says at ${label} width that only the office can renew the company's lapsed policy, with the lapse column in view`, async () => {
-      const page = await signedInPage(COPPERLINE_TECHNICIAN, viewport);
-      await page.goto(`${server.url}/technician`);
+      const page = await suite.signedInPage(COPPERLINE_TECHNICIAN, { viewport: viewport });
+      await page.goto(`${suite.url}/technician`);
       await page.getByRole("heading", { name: "My standing" }).waitFor();
       const liability = page
         .getByRole("listitem")

@@ -1,21 +1,11 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser } from "playwright-core";
-import { startBrowserServer } from "../support/browser-server.ts";
-import { launchChromium, screenshot, signIn } from "../support/browser.ts";
+import { describe, expect, it } from "vitest";
+import { useBrowserSuite } from "../support/browser-suite.ts";
+import { screenshot, signIn } from "../support/browser.ts";
 import { seriousAccessibilityProblems } from "../support/axe.ts";
 import { writeCertificateFile } from "../support/certificate-file.ts";
 import { DEMO_PASSWORD, demoSignIns } from "../../server/db/demo-scenario/index.ts";
 
-let server: Awaited<ReturnType<typeof startBrowserServer>>;
-let browser: Browser;
-beforeAll(async () => {
-  server = await startBrowserServer();
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const suite = useBrowserSuite();
 
 const office = demoSignIns.find((s) => s.email === "office@kestrel-ridge.test")!;
 const dollars = (amount: number | undefined) => (amount ?? 0).toLocaleString("en-US");
@@ -31,14 +21,14 @@ describe("a service company's office uploads a certificate of insurance", () => 
     "pre-fills every coverage the PDF lists and sends them together ($name)",
     async ({ name, seed, viewport }) => {
       const certificate = await writeCertificateFile(seed, office.company);
-      const context = await browser.newContext({ viewport });
+      const context = await suite.newContext({ viewport });
       const page = await context.newPage();
-      await signIn(page, server.url, office.email, DEMO_PASSWORD);
+      await signIn(page, suite.url, office.email, DEMO_PASSWORD);
       await page.getByRole("heading", { name: "Dashboard" }).waitFor();
       await screenshot(page, `provider-upload-${name}-1-dashboard`);
       expect(await seriousAccessibilityProblems(page)).toEqual([]);
 
-      await page.goto(`${server.url}/provider/documents/new`);
+      await page.goto(`${suite.url}/provider/documents/new`);
       await page.getByLabel("Type of document").selectOption({ label: "Commercial general liability" });
       await screenshot(page, `provider-upload-${name}-2-choose`);
       expect(await seriousAccessibilityProblems(page)).toEqual([]);

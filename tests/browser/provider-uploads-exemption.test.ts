@@ -1,23 +1,13 @@
 import { mkdtemp, writeFile } from "node:fs/promises";
 import { tmpdir } from "node:os";
 import path from "node:path";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser } from "playwright-core";
-import { startBrowserServer } from "../support/browser-server.ts";
-import { launchChromium, screenshot, signIn } from "../support/browser.ts";
+import { describe, expect, it } from "vitest";
+import { useBrowserSuite } from "../support/browser-suite.ts";
+import { screenshot, signIn } from "../support/browser.ts";
 import { buildTrainingCardPdf } from "../fixtures/build-training-card.ts";
 import { DEMO_PASSWORD } from "../../server/db/demo-scenario/index.ts";
 
-let server: Awaited<ReturnType<typeof startBrowserServer>>;
-let browser: Browser;
-beforeAll(async () => {
-  server = await startBrowserServer();
-  browser = await launchChromium();
-}, 180_000);
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const suite = useBrowserSuite();
 
 const OFFICE = "office@kestrel-ridge.test";
 
@@ -26,14 +16,14 @@ describe("a service company's office uploads a workers' compensation exemption",
     "shows the exemption's caution and sends the technicians ticked as the persons it names",
     { timeout: 90_000 },
     async () => {
-      const context = await browser.newContext({ viewport: { width: 390, height: 844 } });
+      const context = await suite.newContext({ viewport: { width: 390, height: 844 } });
       const page = await context.newPage();
-      await signIn(page, server.url, OFFICE, DEMO_PASSWORD);
-      const listed = await context.request.get(`${server.url}/api/technicians`);
+      await signIn(page, suite.url, OFFICE, DEMO_PASSWORD);
+      const listed = await context.request.get(`${suite.url}/api/technicians`);
       const technicians = (await listed.json()) as { id: number; name: string; active: boolean }[];
       const named = technicians.find((x) => x.active)!;
 
-      await page.goto(`${server.url}/provider/documents/new`);
+      await page.goto(`${suite.url}/provider/documents/new`);
       await page.getByLabel("Type of document").selectOption({ label: "Workers' compensation exemption" });
       const caution = page.getByRole("complementary", { name: "Caution: Workers' compensation exemption" });
       await expect(caution.innerText()).resolves.toContain("only the persons it names");

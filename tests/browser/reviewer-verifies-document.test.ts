@@ -1,24 +1,15 @@
 import { readFileSync } from "node:fs";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser, BrowserContext } from "playwright-core";
+import { describe, expect, it } from "vitest";
+import type { BrowserContext } from "playwright-core";
 import pg from "pg";
 import { CSRF_HEADER, CSRF_HEADER_VALUE } from "../../shared/api/error-body.ts";
-import { startBrowserServer } from "../support/browser-server.ts";
-import { launchChromium, screenshot, signIn } from "../support/browser.ts";
+import { useBrowserSuite } from "../support/browser-suite.ts";
+import { screenshot, signIn } from "../support/browser.ts";
 import { seriousAccessibilityProblems } from "../support/axe.ts";
 import { writeCertificateFile } from "../support/certificate-file.ts";
 import { DEMO_PASSWORD, demoSignIns } from "../../server/db/demo-scenario/index.ts";
 
-let server: Awaited<ReturnType<typeof startBrowserServer>>;
-let browser: Browser;
-beforeAll(async () => {
-  server = await startBrowserServer();
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const suite = useBrowserSuite();
 
 const office = demoSignIns.find((s) => s.email === "office@kestrel-ridge.test")!;
 const reviewer = demoSignIns.find((s) => s.role === "reviewer")!;
@@ -28,7 +19,7 @@ const technician = demoSignIns.find((s) => s.email === "tobias@kestrel-ridge.tes
 async function submitCertificate(context: BrowserContext, seed: number) {
   const certificate = await writeCertificateFile(seed, office.company);
   const headers = { [CSRF_HEADER]: CSRF_HEADER_VALUE };
-  const uploaded = await context.request.post(`${server.url}/api/documents`, {
+  const uploaded = await context.request.post(`${suite.url}/api/documents`, {
     headers,
     multipart: {
       typeCode: "general_liability",
@@ -44,7 +35,7 @@ async function submitCertificate(context: BrowserContext, seed: number) {
     document: { id: number };
     extraction: { fields: Record<string, unknown> };
   };
-  const submitted = await context.request.post(`${server.url}/api/credentials`, {
+  const submitted = await context.request.post(`${suite.url}/api/credentials`, {
     headers,
     data: { documentId: document.id, typeCode: "general_liability", fields: extraction.fields },
   });
@@ -66,7 +57,7 @@ const shownDate = (isoDate: string) =>
   }).format(new Date(`${isoDate}T12:00:00Z`));
 
 async function mailsTo(address: string, subjectStart: string): Promise<number> {
-  const client = new pg.Client({ connectionString: server.databaseUrl });
+  const client = new pg.Client({ connectionString: suite.server.databaseUrl });
   await client.connect();
   try {
     const { rows } = await client.query<{ n: number }>(
@@ -82,14 +73,14 @@ async function mailsTo(address: string, subjectStart: string): Promise<number> {
 
 describe("a compliance reviewer verifies a submitted certificate", () => {
   it("shows the page beside its fields; the office then sees it verified and is told by e-mail, and the technician's standing counts it", async () => {
-    const officeContext = await browser.newContext({ viewport: { width: 1280, height: 800 } });
+    const officeContext = await suite.newContext({ viewport: { width: 1280, height: 800 } });
     const officePage = await officeContext.newPage();
-    await signIn(officePage, server.url, office.email, DEMO_PASSWORD);
+    await signIn(officePage, suite.url, office.email, DEMO_PASSWORD);
     const { id: credentialId, expirationDate } = await submitCertificate(officeContext, 77);
-    const reviewerContext = await browser.newContext({ viewport: { width: 1440, height: 900 } });
+    const reviewerContext = await suite.newContext({ viewport: { width: 1440, height: 900 } });
     const page = await reviewerContext.newPage();
 
-    await signIn(page, server.url, reviewer.email, DEMO_PASSWORD);
+    await signIn(page, suite.url, reviewer.email, DEMO_PASSWORD);
     await page.getByRole("heading", { name: "Verification queue" }).waitFor();
     const row = page.getByRole("row").filter({ has: page.locator(`a[href="/review/${credentialId}"]`) });
     await row.waitFor();
@@ -112,10 +103,10 @@ describe("a compliance reviewer verifies a submitted certificate", () => {
     await page.waitForURL((url) => url.pathname !== `/review/${credentialId}`);
     await screenshot(page, "reviewer-verify-3-next");
 
-    await officePage.goto(`${server.url}/provider/documents`);
+    await officePage.goto(`${suite.url}/provider/documents`);
     await officePage.getByRole("heading", { name: "Credentials" }).waitFor();
     await screenshot(officePage, "reviewer-verify-4-office-documents");
-    const verifiedState = await officeContext.request.get(`${server.url}/api/credentials/${credentialId}`);
+    const verifiedState = await officeContext.request.get(`${suite.url}/api/credentials/${credentialId}`);
     expect(((await verifiedState.json()) as { state: string }).state).toBe("verified");
     const newPolicy = officePage
       .getByRole("row")
@@ -126,9 +117,9 @@ describe("a compliance reviewer verifies a submitted certificate", () => {
     await officeContext.close();
     await reviewerContext.close();
 
-    const phone = await browser.newContext({ viewport: { width: 390, height: 844 } });
+    const phone = await suite.newContext({ viewport: { width: 390, height: 844 } });
     const technicianPage = await phone.newPage();
-    await signIn(technicianPage, server.url, technician.email, DEMO_PASSWORD);
+    await signIn(technicianPage, suite.url, technician.email, DEMO_PASSWORD);
     const liability = technicianPage.getByRole("listitem").filter({ hasText: "General liability in force" });
     await liability.waitFor();
     await screenshot(technicianPage, "reviewer-verify-5-technician-standing-390");

@@ -1,25 +1,15 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser } from "playwright-core";
-import { startBrowserServer } from "../support/browser-server.ts";
-import { launchChromium, screenshot } from "../support/browser.ts";
+import { describe, expect, it } from "vitest";
+import { useBrowserSuite } from "../support/browser-suite.ts";
+import { screenshot } from "../support/browser.ts";
 
-let server: Awaited<ReturnType<typeof startBrowserServer>>;
-let browser: Browser;
-beforeAll(async () => {
-  server = await startBrowserServer();
-  browser = await launchChromium();
-}, 180_000);
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const suite = useBrowserSuite();
 
 // A policy period runs on standard time at the insured's mailing address (ISO CG DS 01 wording, from memory).
 describe("signing up", () => {
   it("shows the zone the ZIP code gives before the account is made, and that only the address changes it", async () => {
-    const context = await browser.newContext({ viewport: { width: 390, height: 844 } });
+    const context = await suite.newContext({ viewport: { width: 390, height: 844 } });
     const page = await context.newPage();
-    await page.goto(`${server.url}/sign-up`);
+    await page.goto(`${suite.url}/sign-up`);
     await page.getByLabel("ZIP code").fill("85004");
     const note = page.getByRole("status").filter({ hasText: "America/Phoenix" });
     await note.waitFor();
