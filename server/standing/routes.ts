@@ -99,7 +99,7 @@ standingRoutes.put(
 
 standingRoutes.delete(
   "/requirement-sets/:requirementSetId",
-  { allow: canManageRequirementSet, params: requirementSetParamsSchema },
+  { allow: canManageRequirementSet, params: requirementSetParamsSchema, response: requirementSetDtoSchema },
   (req, _res, { params }) => archiveRequirementSet(req.user!, params.requirementSetId),
 );
 

@@ -38,7 +38,6 @@ const notYetDeclared = new Set<string>([]);
 const answersNothing = new Set([
   "post /api/auth/sign-out",
   "post /api/auth/set-password",
-  "delete /api/requirement-sets/:requirementSetId",
   "delete /api/sites/:siteId",
   "delete /api/sites/:siteId/equipment/:equipmentId",
   "delete /api/roster/:entryId",

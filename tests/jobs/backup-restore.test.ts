@@ -1,18 +1,14 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { mkdtempSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
-import { buildTestApp, type TestApp } from "../support/test-app.ts";
+import { useTestApp } from "../support/test-app.ts";
 import { buildProvider } from "../support/build-provider.ts";
 import { submitLiabilityCertificate } from "../support/submit-credential.ts";
 import { backup, countRows, restore } from "../../server/db/backup.ts";
 import { createTestDatabase } from "../support/test-database.ts";
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
 
 const freshDatabase = async () => (await createTestDatabase("restore")).url;
 

@@ -1,16 +1,12 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { buildTestApp, type TestApp } from "../support/test-app.ts";
+import { describe, expect, it } from "vitest";
+import { useTestApp } from "../support/test-app.ts";
 import { buildClearedProvider, buildTechnician } from "../fixtures/build-credential-row.ts";
 import { runLapseJob } from "../../jobs/lapse.ts";
 import { checkStandingConsistency } from "../../server/standing/index.ts";
 import { db } from "../../server/db/sequelize.ts";
 import { JOB_DEPS, rows } from "./job-support.ts";
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+useTestApp();
 
 const check = (technicianIds?: number[]) =>
   db().transaction((tx) => checkStandingConsistency(tx, { technicianIds }));

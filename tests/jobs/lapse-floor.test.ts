@@ -1,16 +1,12 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import pg from "pg";
-import { buildTestApp, type TestApp } from "../support/test-app.ts";
+import { useTestApp } from "../support/test-app.ts";
 import { buildClearedProvider } from "../fixtures/build-credential-row.ts";
 import { runLapseJob } from "../../jobs/lapse.ts";
 import { measureLapseFloor } from "../../jobs/bench/lapse-floor.ts";
 import { JOB_DEPS } from "./job-support.ts";
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
 
 // The bench's floor must do the job's work, no less, or its ratio flatters nobody: same lapses, notices and e-mails.
 describe("lapse job floor", () => {

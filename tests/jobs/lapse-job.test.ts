@@ -1,5 +1,5 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { buildTestApp, type TestApp } from "../support/test-app.ts";
+import { describe, expect, it } from "vitest";
+import { useTestApp } from "../support/test-app.ts";
 import {
   buildClearedProvider,
   buildCredentialRow,
@@ -11,11 +11,7 @@ import { Credential } from "../../server/credentials/model.ts";
 import { dueThreshold } from "../../shared/standing/warning-windows.ts";
 import { DAY, JOB_DEPS, noticeThresholds, rows, storedStanding } from "./job-support.ts";
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+useTestApp();
 
 async function run(asOf: string | Date): Promise<LapseJobReport> {
   const result = await runLapseJob({ asOf: new Date(asOf) }, JOB_DEPS);

@@ -1,5 +1,5 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { buildTestApp, type TestApp } from "../support/test-app.ts";
+import { describe, expect, it } from "vitest";
+import { useTestApp } from "../support/test-app.ts";
 import {
   buildClearedProvider,
   buildCredentialRow,
@@ -10,11 +10,7 @@ import {
 import { runLapseJob } from "../../jobs/lapse.ts";
 import { JOB_DEPS, storedStanding } from "./job-support.ts";
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+useTestApp();
 
 const run = (asOf: string) => runLapseJob({ asOf: new Date(asOf) }, JOB_DEPS);
 

@@ -1,8 +1,8 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { access, rm, utimes, writeFile } from "node:fs/promises";
 import path from "node:path";
 import { randomUUID } from "node:crypto";
-import { buildTestApp, sequelize, type TestApp } from "../support/test-app.ts";
+import { sequelize, useTestApp } from "../support/test-app.ts";
 import { buildProvider } from "../support/build-provider.ts";
 import { buildCertificatePdf } from "../fixtures/build-certificate-pdf.ts";
 import { certificateFields } from "../support/submit-credential.ts";
@@ -11,11 +11,7 @@ import type { FileStorage } from "../../server/storage/index.ts";
 import { Document } from "../../server/credentials/model.ts";
 import { DAY, HOUR, rows } from "./job-support.ts";
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
 
 const exists = (file: string) =>
   access(file).then(

@@ -1,18 +1,14 @@
 import { randomUUID } from "node:crypto";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { Company } from "../../../server/companies/model.ts";
 import { Credential } from "../../../server/credentials/model.ts";
-import { agentFor, buildTestApp, type TestApp } from "../../support/test-app.ts";
+import { agentFor, useTestApp } from "../../support/test-app.ts";
 import { buildProvider } from "../../support/build-provider.ts";
 import { buildCredentialRow, insuranceFields } from "../../fixtures/build-credential-row.ts";
 
 // The policy period runs on standard time at the named insured's mailing address (the standard CGL declarations,
 // ISO CG DS 01: "12:01 A.M. standard time at your mailing address", wording from memory), so the company's zone follows its ZIP code.
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
 
 const form = (postalCode: string) => ({
   kind: "service",

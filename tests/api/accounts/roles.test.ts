@@ -1,14 +1,10 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import request from "supertest";
-import { agentFor, buildTestApp, type TestApp } from "../../support/test-app.ts";
+import { agentFor, useTestApp } from "../../support/test-app.ts";
 import { buildCompany, TEST_PASSWORD } from "../../support/build-company.ts";
 import type { Role } from "../../../shared/accounts/schemas.ts";
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
 
 async function signedInAs(role: Role) {
   const kind = role === "buyer" ? "shop" : role === "admin" || role === "reviewer" ? "platform" : "service";

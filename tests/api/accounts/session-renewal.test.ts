@@ -1,13 +1,9 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { QueryTypes } from "sequelize";
-import { agentFor, buildTestApp, sequelize, type TestApp } from "../../support/test-app.ts";
+import { agentFor, sequelize, useTestApp } from "../../support/test-app.ts";
 import { buildCompany, TEST_PASSWORD } from "../../support/build-company.ts";
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
 
 const HOUR = 3_600_000;
 

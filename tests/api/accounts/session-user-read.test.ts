@@ -1,14 +1,10 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { agentFor, buildTestApp, sequelize, type TestApp } from "../../support/test-app.ts";
+import { describe, expect, it } from "vitest";
+import { agentFor, sequelize, useTestApp } from "../../support/test-app.ts";
 import { buildCompany, TEST_PASSWORD } from "../../support/build-company.ts";
 
 // The session row and its user are read in one statement; these checks hold that read to what the separate user
 // look-up guaranteed: the account as it is now, not as it was when the session began (common practice).
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
 
 async function signedInBuyer() {
   const { users } = await buildCompany("shop", ["buyer"]);

@@ -1,9 +1,9 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { readFileSync } from "node:fs";
 import path from "node:path";
 import pg from "pg";
 import request from "supertest";
-import { agentFor, buildTestApp, type TestApp } from "../../support/test-app.ts";
+import { agentFor, buildTestApp, useTestApp } from "../../support/test-app.ts";
 import { buildCompany, TEST_PASSWORD } from "../../support/build-company.ts";
 import { ensureClientBuild } from "../../support/browser-server.ts";
 import { createApp } from "../../../server/app.ts";
@@ -11,11 +11,7 @@ import { loadConfig } from "../../../server/config.ts";
 import { issueToken } from "../../../server/accounts/tokens.ts";
 import { OneTimeToken } from "../../../server/accounts/model.ts";
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
 
 describe("session cookie and headers in production", () => {
   it("sets the session cookie HttpOnly, Secure and SameSite=Lax", async () => {

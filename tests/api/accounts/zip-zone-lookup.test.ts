@@ -1,14 +1,10 @@
 import request from "supertest";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { buildTestApp, type TestApp } from "../../support/test-app.ts";
+import { describe, expect, it } from "vitest";
+import { useTestApp } from "../../support/test-app.ts";
 
 // The policy period runs on standard time at the named insured's mailing address (ISO CG DS 01 wording, from memory),
 // so the sign-up form shows the zone the ZIP gives before the account is made.
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
 
 describe("the public ZIP look-up the sign-up form uses", () => {
   it("answers the city, state and zone a new company with this ZIP would get, signed out", async () => {

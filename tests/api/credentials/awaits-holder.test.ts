@@ -1,13 +1,9 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { buildTestApp, type TestApp } from "../../support/test-app.ts";
+import { describe, expect, it } from "vitest";
+import { useTestApp } from "../../support/test-app.ts";
 import { buildProvider, signedInAgent } from "../../support/build-provider.ts";
 import { submitLiabilityCertificate } from "../../support/submit-credential.ts";
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
 
 const awaiting = async (agent: Awaited<ReturnType<typeof buildProvider>>["admin"]) => {
   const res = await agent.get("/api/credentials");

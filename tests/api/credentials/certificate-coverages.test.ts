@@ -1,5 +1,5 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { buildTestApp, type TestApp } from "../../support/test-app.ts";
+import { describe, expect, it } from "vitest";
+import { useTestApp } from "../../support/test-app.ts";
 import { buildProvider, signedInAgent } from "../../support/build-provider.ts";
 import { countStored } from "../../support/count-uploads.ts";
 import {
@@ -10,11 +10,7 @@ import {
 import { certificateFields } from "../../support/submit-credential.ts";
 import { Credential } from "../../../server/credentials/model.ts";
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
 
 type Box = { page: number; x: number; y: number; w: number; h: number };
 type Proposed = {

@@ -1,5 +1,5 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { buildTestApp, agentFor, type TestApp } from "../../support/test-app.ts";
+import { describe, expect, it } from "vitest";
+import { agentFor, useTestApp } from "../../support/test-app.ts";
 import { buildProvider } from "../../support/build-provider.ts";
 import { TEST_PASSWORD } from "../../support/build-company.ts";
 import { buildCertificatePdf } from "../../fixtures/build-certificate-pdf.ts";
@@ -10,11 +10,7 @@ import { Technician } from "../../../server/technicians/model.ts";
 import { User } from "../../../server/accounts/model.ts";
 import { Credential } from "../../../server/credentials/model.ts";
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
 
 type Provider = Awaited<ReturnType<typeof buildProvider>>;
 

@@ -1,15 +1,11 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { QueryTypes } from "sequelize";
-import { buildTestApp, sequelize, type TestApp } from "../../support/test-app.ts";
+import { sequelize, useTestApp } from "../../support/test-app.ts";
 import { buildProvider } from "../../support/build-provider.ts";
 import { buildCertificatePdf } from "../../fixtures/build-certificate-pdf.ts";
 import { certificateFields } from "../../support/submit-credential.ts";
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
 
 async function uploadedCertificate(seed: number) {
   const { admin, company } = await buildProvider(t.app);

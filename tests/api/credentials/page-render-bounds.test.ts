@@ -1,8 +1,8 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { writeFile } from "node:fs/promises";
 import path from "node:path";
 import { createHash, randomUUID } from "node:crypto";
-import { buildTestApp, type TestApp } from "../../support/test-app.ts";
+import { useTestApp } from "../../support/test-app.ts";
 import { buildProvider } from "../../support/build-provider.ts";
 import { countStored } from "../../support/count-uploads.ts";
 import { buildSizedPdf } from "../../fixtures/build-sized-pdf.ts";
@@ -10,11 +10,7 @@ import { Document } from "../../../server/credentials/model.ts";
 import type { FileStorage } from "../../../server/storage/index.ts";
 import { MAX_PREVIEW_PIXELS } from "../../../server/credentials/extraction/render-bounds.ts";
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
 
 /** Width and height from a PNG's IHDR chunk. */
 function pngSize(png: Buffer) {

@@ -1,15 +1,11 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { buildTestApp, type TestApp } from "../../support/test-app.ts";
+import { describe, expect, it } from "vitest";
+import { useTestApp } from "../../support/test-app.ts";
 import { buildProvider, signedInAgent } from "../../support/build-provider.ts";
 import { certificateFields, submitLiabilityCertificate } from "../../support/submit-credential.ts";
 import { buildCertificatePdf } from "../../fixtures/build-certificate-pdf.ts";
 import { Credential } from "../../../server/credentials/model.ts";
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
 
 describe("the reviewer's comparison with the previous verified version", () => {
   it("lists what changed since the verified version of the same policy, and nothing for a first upload", async () => {

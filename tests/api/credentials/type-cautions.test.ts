@@ -1,13 +1,9 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { buildTestApp, type TestApp } from "../../support/test-app.ts";
+import { describe, expect, it } from "vitest";
+import { useTestApp } from "../../support/test-app.ts";
 import { buildProvider, signedInAgent } from "../../support/build-provider.ts";
 import { credentialTypeDtoSchema } from "../../../shared/credentials/credential-shapes.ts";
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
 
 describe("the caution that comes with each credential type", () => {
   it("names the rule each safety card defers to, for the upload screens to show", async () => {

@@ -1,6 +1,6 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import request from "supertest";
-import { buildTestApp, type TestApp } from "../../support/test-app.ts";
+import { useTestApp } from "../../support/test-app.ts";
 import { buildProvider } from "../../support/build-provider.ts";
 import { countStored } from "../../support/count-uploads.ts";
 import { buildCertificatePdf } from "../../fixtures/build-certificate-pdf.ts";
@@ -8,11 +8,7 @@ import { certificateFields } from "../../support/submit-credential.ts";
 import { buildTrainingCardPdf } from "../../fixtures/build-training-card.ts";
 import { CSRF_HEADER, CSRF_HEADER_VALUE } from "../../../shared/api/error-body.ts";
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
 
 describe("uploading a certificate of insurance", () => {
   it("stores the file and proposes the dates and limits written on it", async () => {

@@ -1,15 +1,11 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { buildTestApp, type TestApp } from "../../support/test-app.ts";
+import { describe, expect, it } from "vitest";
+import { useTestApp } from "../../support/test-app.ts";
 import { buildProvider } from "../../support/build-provider.ts";
 import { countStored } from "../../support/count-uploads.ts";
 import { buildCertificatePdf } from "../../fixtures/build-certificate-pdf.ts";
 import { buildWorkOrderWorld, workOrderAt } from "../../fixtures/build-work-order-world.ts";
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
 
 describe("a refused upload leaves no file behind", () => {
   const refusals: [string, Record<string, string>, number][] = [

@@ -1,5 +1,5 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { buildTestApp, type TestApp } from "../../support/test-app.ts";
+import { describe, expect, it } from "vitest";
+import { useTestApp } from "../../support/test-app.ts";
 import {
   buildClearedProvider,
   buildCredentialRow,
@@ -12,11 +12,7 @@ import { JOB_DEPS, rows, storedStanding } from "../../jobs/job-support.ts";
 
 // The directory reads "listed by the baseline / by set N" from technicians.cleared_sets, kept by a trigger on
 // technician_standings; these checks hold it to the stored standing it mirrors through a lapse and a renewal.
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+useTestApp();
 
 async function clearedSets(technicianId: number): Promise<number[]> {
   const [row] = await rows<{ cleared_sets: number[] }>("SELECT cleared_sets FROM technicians WHERE id = $1", [

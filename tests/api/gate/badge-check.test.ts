@@ -1,6 +1,6 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import request from "supertest";
-import { buildTestApp, type TestApp } from "../../support/test-app.ts";
+import { useTestApp } from "../../support/test-app.ts";
 import { buildCompany } from "../../support/build-company.ts";
 import { buildClearedProvider, buildProvider } from "../../fixtures/build-credential-row.ts";
 import { runLapseJob } from "../../../jobs/lapse.ts";
@@ -13,11 +13,7 @@ import { issueBadgeToken } from "../../../server/gate/token.ts";
 import { signIn } from "../standing/sign-in-as.ts";
 import { readQr } from "../../support/read-qr.ts";
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
 
 function pathOf(url: string): string {
   const u = new URL(url);

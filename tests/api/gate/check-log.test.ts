@@ -1,17 +1,13 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import request from "supertest";
-import { buildTestApp, type TestApp } from "../../support/test-app.ts";
+import { useTestApp } from "../../support/test-app.ts";
 import { buildCompany } from "../../support/build-company.ts";
 import { buildProvider, buildTechnician } from "../../fixtures/build-credential-row.ts";
 import { Site } from "../../../server/sites/model.ts";
 import { db } from "../../../server/db/sequelize.ts";
 import { signIn } from "../standing/sign-in-as.ts";
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
 
 const site = (companyId: number, name: string) =>
   Site.create({

@@ -1,8 +1,8 @@
 import { createRequire } from "node:module";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import request from "supertest";
 import { Jimp } from "jimp";
-import { buildTestApp, type TestApp } from "../../support/test-app.ts";
+import { useTestApp } from "../../support/test-app.ts";
 import { buildClearedProvider } from "../../fixtures/build-credential-row.ts";
 import { db } from "../../../server/db/sequelize.ts";
 import { signIn } from "../standing/sign-in-as.ts";
@@ -14,11 +14,7 @@ const ExifParser = createRequire(import.meta.url)("exif-parser") as {
 };
 const exifTags = (bytes: Buffer) => ExifParser.create(bytes).parse().tags;
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
 
 const photoBytes = async (technicianId: number) => {
   const [row] = (await db().query("SELECT jpeg FROM technician_photos WHERE technician_id = $1", {

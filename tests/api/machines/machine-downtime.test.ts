@@ -1,6 +1,6 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { QueryTypes } from "sequelize";
-import { buildTestApp, sequelize, type TestApp } from "../../support/test-app.ts";
+import { sequelize, useTestApp } from "../../support/test-app.ts";
 import { buildProvider } from "../../support/build-provider.ts";
 import { acceptBody, buildWorkOrderWorld, raiseBody } from "../../fixtures/build-work-order-world.ts";
 import {
@@ -12,11 +12,7 @@ import {
 } from "../../fixtures/build-service-request-world.ts";
 import { buildMachineShop, machineBody, nextMachineSerial } from "../../fixtures/build-machine-shop.ts";
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
 
 interface PeriodRow {
   started_at: Date;

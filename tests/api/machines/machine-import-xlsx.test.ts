@@ -1,15 +1,11 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import ExcelJS from "exceljs";
 import { QueryTypes } from "sequelize";
-import { buildTestApp, sequelize, type TestApp } from "../../support/test-app.ts";
+import { sequelize, useTestApp } from "../../support/test-app.ts";
 import { buildMachineShop, nextMachineSerial } from "../../fixtures/build-machine-shop.ts";
 import { countStored } from "../../support/count-uploads.ts";
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
 
 // The media type registered for Office Open XML workbooks (ECMA-376 Part 2, IANA media types).
 const XLSX = "application/vnd.openxmlformats-officedocument.spreadsheetml.sheet";

@@ -1,16 +1,12 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { QueryTypes } from "sequelize";
 import type request from "supertest";
-import { buildTestApp, sequelize, type TestApp } from "../../support/test-app.ts";
+import { sequelize, useTestApp } from "../../support/test-app.ts";
 import { buildMachineShop, machineBody, nextMachineSerial } from "../../fixtures/build-machine-shop.ts";
 import { buildProvider } from "../../support/build-provider.ts";
 import { countStored } from "../../support/count-uploads.ts";
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
 
 type Agent = ReturnType<typeof request.agent>;
 

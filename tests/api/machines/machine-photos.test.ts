@@ -1,8 +1,8 @@
 import { createRequire } from "node:module";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { Jimp } from "jimp";
 import { QueryTypes } from "sequelize";
-import { buildTestApp, sequelize, type TestApp } from "../../support/test-app.ts";
+import { sequelize, useTestApp } from "../../support/test-app.ts";
 import { buildMachineShop } from "../../fixtures/build-machine-shop.ts";
 import { buildProvider } from "../../support/build-provider.ts";
 import { cameraPhoto } from "../../fixtures/build-camera-photo.ts";
@@ -13,11 +13,7 @@ const ExifParser = createRequire(import.meta.url)("exif-parser") as {
   create(bytes: Buffer): { parse(): { tags: Record<string, unknown> } };
 };
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
 
 const photoRows = async (machineId: number) =>
   sequelize().query<{ id: number; jpeg: Buffer }>(

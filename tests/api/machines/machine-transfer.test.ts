@@ -1,6 +1,6 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { QueryTypes } from "sequelize";
-import { buildTestApp, sequelize, type TestApp } from "../../support/test-app.ts";
+import { sequelize, useTestApp } from "../../support/test-app.ts";
 import { buildMachineShop, machineBody, nextMachineSerial } from "../../fixtures/build-machine-shop.ts";
 import { buildProvider } from "../../support/build-provider.ts";
 import { buildWorkOrderWorld, workOrderAt } from "../../fixtures/build-work-order-world.ts";
@@ -8,11 +8,7 @@ import { cameraPhoto } from "../../fixtures/build-camera-photo.ts";
 import { ownershipPeriods } from "../../../server/machines/ownership.ts";
 import { historyAccess } from "../../../shared/machines/ownership-periods.ts";
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
 
 type Shop = Awaited<ReturnType<typeof buildMachineShop>>;
 

@@ -1,7 +1,7 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import request from "supertest";
 import { QueryTypes } from "sequelize";
-import { buildTestApp, sequelize, type TestApp } from "../../support/test-app.ts";
+import { sequelize, useTestApp } from "../../support/test-app.ts";
 import {
   buildClearedCompany,
   buildShop,
@@ -13,11 +13,7 @@ import { addCalendarDays } from "../../../shared/standing/iso-date.ts";
 import { addCalendarMonths } from "../../../shared/standing/training-validity.ts";
 import { maintenanceWindow } from "../../../shared/machines/maintenance-due.ts";
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
 
 const SITE_ZONE = "America/Chicago";
 const todayAtSite = () => calendarDateIn(new Date(), SITE_ZONE);

@@ -1,7 +1,7 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { QueryTypes } from "sequelize";
 import request from "supertest";
-import { buildTestApp, sequelize, type TestApp } from "../../support/test-app.ts";
+import { sequelize, useTestApp } from "../../support/test-app.ts";
 import { signedInAgent } from "../../support/build-provider.ts";
 import {
   acceptBody,
@@ -13,11 +13,7 @@ import { CSRF_HEADER, CSRF_HEADER_VALUE } from "../../../shared/api/error-body.t
 import { AuditEvent } from "../../../server/audit/model.ts";
 import { buildCertificatePdf } from "../../fixtures/build-certificate-pdf.ts";
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
 
 /** Raises a work order on the world's machine and walks it to confirmed, with parts and a note at completion. */
 async function confirmedOnMachine(world: WorkOrderWorld, extra: Record<string, unknown> = {}) {

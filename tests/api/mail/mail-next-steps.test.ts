@@ -1,16 +1,12 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { Op } from "sequelize";
-import { buildTestApp, type TestApp } from "../../support/test-app.ts";
+import { useTestApp } from "../../support/test-app.ts";
 import { buildWorkOrderWorld, raiseBody, acceptBody } from "../../fixtures/build-work-order-world.ts";
 import { OutboxMessage } from "../../../server/mail/model.ts";
 import { inviteMail } from "../../../server/accounts/emails.ts";
 import { composeMail } from "../../../server/mail/index.ts";
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
 
 const mailsTo = (address: string, workOrderId: number) =>
   OutboxMessage.findAll({

@@ -1,17 +1,13 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { QueryTypes } from "sequelize";
 import type request from "supertest";
-import { buildTestApp, type TestApp } from "../../support/test-app.ts";
+import { useTestApp } from "../../support/test-app.ts";
 import { signedInAgent } from "../../support/build-provider.ts";
 import { submitLiabilityCertificate } from "../../support/submit-credential.ts";
 import { acceptBody, buildWorkOrderWorld, raiseBody } from "../../fixtures/build-work-order-world.ts";
 import { db } from "../../../server/db/sequelize.ts";
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
 
 type Agent = ReturnType<typeof request.agent>;
 

@@ -1,17 +1,13 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import request from "supertest";
 import { QueryTypes } from "sequelize";
-import { buildTestApp, sequelize, type TestApp } from "../../support/test-app.ts";
+import { sequelize, useTestApp } from "../../support/test-app.ts";
 import { signedInAgent } from "../../support/build-provider.ts";
 import { buildWorkOrderWorld, workOrderAt } from "../../fixtures/build-work-order-world.ts";
 import { JobReview } from "../../../server/reviews/model.ts";
 import { CSRF_HEADER, CSRF_HEADER_VALUE } from "../../../shared/api/error-body.ts";
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
 
 const REVIEW = { stars: 4, body: "Found the worn drawbar spring within the hour; tidy work." };
 

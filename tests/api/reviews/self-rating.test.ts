@@ -1,6 +1,6 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { QueryTypes } from "sequelize";
-import { buildTestApp, sequelize, type TestApp } from "../../support/test-app.ts";
+import { sequelize, useTestApp } from "../../support/test-app.ts";
 import { signedInAgent } from "../../support/build-provider.ts";
 import {
   buildWorkOrderWorld,
@@ -12,11 +12,7 @@ import { User } from "../../../server/accounts/model.ts";
 import { Company } from "../../../server/companies/model.ts";
 import { AuditEvent } from "../../../server/audit/model.ts";
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
 
 /** Gives the shop contacts of its own (the test builders share one mail domain and one street for every company). */
 async function keepApart(world: WorkOrderWorld, shopDomain: string) {

@@ -1,17 +1,13 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { QueryTypes } from "sequelize";
-import { buildTestApp, sequelize, type TestApp, signedInAs } from "../../support/test-app.ts";
+import { sequelize, signedInAs, useTestApp } from "../../support/test-app.ts";
 import { buildCompany } from "../../support/build-company.ts";
 import { emitStandingsChanged, type ChangedStanding } from "../../../server/standing/index.ts";
 import { sweepRosterAlerts } from "../../../server/roster/index.ts";
 import { Technician } from "../../../server/technicians/model.ts";
 import type { Standing } from "../../../shared/standing/standing-types.ts";
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
 
 const DAY = 86_400_000;
 

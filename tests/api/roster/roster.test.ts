@@ -1,16 +1,12 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import request from "supertest";
 import Papa from "papaparse";
-import { buildTestApp, sequelize, type TestApp, signedInAs } from "../../support/test-app.ts";
+import { sequelize, signedInAs, useTestApp } from "../../support/test-app.ts";
 import { buildCompany } from "../../support/build-company.ts";
 import { Technician } from "../../../server/technicians/model.ts";
 import type { Standing } from "../../../shared/standing/standing-types.ts";
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
 
 async function signedInBuyer() {
   const { users, company } = await buildCompany("shop", ["buyer"]);

@@ -1,5 +1,5 @@
-import { afterAll, afterEach, beforeAll, describe, expect, it, vi } from "vitest";
-import { buildTestApp, sequelize, type TestApp } from "../../support/test-app.ts";
+import { afterEach, describe, expect, it, vi } from "vitest";
+import { sequelize, useTestApp } from "../../support/test-app.ts";
 import {
   buildClearedCompany,
   buildShop,
@@ -10,11 +10,7 @@ import {
 import { addCalendarDays } from "../../../shared/standing/iso-date.ts";
 import { policyEndInstant } from "../../../shared/standing/policy-period.ts";
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
 afterEach(() => {
   vi.useRealTimers();
 });

@@ -1,6 +1,6 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { QueryTypes } from "sequelize";
-import { buildTestApp, sequelize, type TestApp } from "../../support/test-app.ts";
+import { sequelize, useTestApp } from "../../support/test-app.ts";
 import {
   buildClearedCompany,
   buildShop,
@@ -10,11 +10,7 @@ import {
 } from "../../fixtures/build-service-request-world.ts";
 import { minimalXlsx, storedZip } from "../../fixtures/tiny-zip.ts";
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
 
 async function count(sql: string, bind: unknown[]) {
   const [row] = await sequelize().query<{ n: number }>(sql, { bind, type: QueryTypes.SELECT });

@@ -1,6 +1,6 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { QueryTypes } from "sequelize";
-import { buildTestApp, sequelize, type TestApp } from "../../support/test-app.ts";
+import { sequelize, useTestApp } from "../../support/test-app.ts";
 import {
   buildClearedCompany,
   buildShop,
@@ -11,11 +11,7 @@ import {
   tinyPng,
 } from "../../fixtures/build-service-request-world.ts";
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
 
 async function rows<T extends object>(sql: string, bind: unknown[]) {
   return sequelize().query<T>(sql, { bind, type: QueryTypes.SELECT });

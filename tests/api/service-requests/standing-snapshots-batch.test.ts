@@ -1,5 +1,5 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { buildTestApp, type TestApp } from "../../support/test-app.ts";
+import { describe, expect, it } from "vitest";
+import { useTestApp } from "../../support/test-app.ts";
 import {
   buildClearedProvider,
   buildCredentialRow,
@@ -13,11 +13,7 @@ import { storedStanding } from "../../jobs/job-support.ts";
 
 // The estimate comparison builds every technician's snapshot in one batch; each must still be judged on its own
 // credentials and its own company's, and agree with the standing the refresh code stores for the same instant.
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+useTestApp();
 
 const AS_OF = new Date("2027-03-01T12:00:00Z");
 

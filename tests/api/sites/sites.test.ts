@@ -1,14 +1,10 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import request from "supertest";
-import { buildTestApp, type TestApp, signedInAs } from "../../support/test-app.ts";
+import { signedInAs, useTestApp } from "../../support/test-app.ts";
 import { buildCompany } from "../../support/build-company.ts";
 import type { CompanyKind, Role } from "../../../shared/accounts/schemas.ts";
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
 
 async function signedIn(kind: CompanyKind, role: Role) {
   const { users, company } = await buildCompany(kind, [role]);

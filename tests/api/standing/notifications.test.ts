@@ -1,15 +1,11 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import request from "supertest";
-import { buildTestApp, type TestApp } from "../../support/test-app.ts";
+import { useTestApp } from "../../support/test-app.ts";
 import { buildProvider } from "../../fixtures/build-credential-row.ts";
 import { Notification } from "../../../server/notices/index.ts";
 import { signIn } from "./sign-in-as.ts";
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
 
 async function notify(userId: number, title: string, createdAt: Date) {
   return Notification.create({

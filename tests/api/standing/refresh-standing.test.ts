@@ -1,5 +1,5 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { buildTestApp, type TestApp } from "../../support/test-app.ts";
+import { describe, expect, it } from "vitest";
+import { useTestApp } from "../../support/test-app.ts";
 import { buildClearedProvider, buildTechnician } from "../../fixtures/build-credential-row.ts";
 import {
   onStandingsChanged,
@@ -9,11 +9,7 @@ import {
 import { Credential } from "../../../server/credentials/model.ts";
 import { db } from "../../../server/db/sequelize.ts";
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+useTestApp();
 
 const AS_OF = new Date("2027-03-01T12:00:00Z");
 

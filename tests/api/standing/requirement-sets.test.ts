@@ -1,7 +1,7 @@
 import { randomUUID } from "node:crypto";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import request from "supertest";
-import { buildTestApp, type TestApp } from "../../support/test-app.ts";
+import { useTestApp } from "../../support/test-app.ts";
 import { buildCompany } from "../../support/build-company.ts";
 import {
   buildClearedProvider,
@@ -18,14 +18,14 @@ import { loadStandingInputs } from "../../../server/standing/standing-inputs.ts"
 import { computeStandings } from "../../../server/standing/compute-stored-standings.ts";
 import { MAX_ACTIVE_REQUIREMENT_SETS_PER_SHOP } from "../../../shared/standing/requirement-set-limits.ts";
 import { addCalendarDays } from "../../../shared/standing/iso-date.ts";
+import { calendarDateIn } from "../../../shared/dates/local-time.ts";
 import type { Requirement } from "../../../shared/standing/requirements.ts";
 import { signIn } from "./sign-in-as.ts";
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
+
+// The providers built here keep their books in Chicago: "today" is the date there, which trails UTC's in the evening.
+const todayInChicago = () => calendarDateIn(new Date(), "America/Chicago");
 
 async function buyer() {
   const { company, users } = await buildCompany("shop", ["buyer", "provider_admin"]);
@@ -60,7 +60,7 @@ async function qualifiedTechnician(builder: string) {
   await buildCredentialRow({
     ...base,
     typeCode: "arc_flash",
-    fields: trainingFields({ issueDate: new Date().toISOString().slice(0, 10) }),
+    fields: trainingFields({ issueDate: todayInChicago() }),
   });
   await buildCredentialRow({
     ...base,
@@ -322,7 +322,7 @@ describe("the preview of an unsaved set", () => {
 
   it("counts what the full engine counts: lapsing soon, carried by a renewal, below the level, awaiting verification", async () => {
     const builder = `Orrin Works ${randomUUID().slice(0, 6)}`;
-    const today = new Date().toISOString().slice(0, 10);
+    const today = todayInChicago();
     const cleared = await qualifiedTechnician(builder);
     const lapsing = await qualifiedTechnician(builder);
     const renewed = await qualifiedTechnician(builder);

@@ -1,17 +1,13 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import request from "supertest";
-import { buildTestApp, type TestApp } from "../../support/test-app.ts";
+import { useTestApp } from "../../support/test-app.ts";
 import { buildCompany } from "../../support/build-company.ts";
 import { buildClearedProvider, buildProvider } from "../../fixtures/build-credential-row.ts";
 import { runLapseJob } from "../../../jobs/lapse.ts";
 import { defaultBaseline } from "../../../shared/standing/requirements.ts";
 import { signIn } from "./sign-in-as.ts";
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
 
 describe("technician standing", () => {
   it("shows the provider admin each baseline requirement with its status, reason, detail and lapse date", async () => {

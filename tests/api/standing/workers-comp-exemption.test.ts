@@ -1,16 +1,12 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { buildTestApp, type TestApp } from "../../support/test-app.ts";
+import { describe, expect, it } from "vitest";
+import { useTestApp } from "../../support/test-app.ts";
 import { buildProvider, signedInAgent } from "../../support/build-provider.ts";
 import { buildTechnician } from "../../fixtures/build-credential-row.ts";
 import { buildCertificatePdf } from "../../fixtures/build-certificate-pdf.ts";
 
 // Common practice, varies by state: a state's workers' compensation exemption names persons (a sole proprietor or
 // officers) and clears only them, never the company's employees; none printed, it counts 24 months from issue.
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
 
 type Agent = Awaited<ReturnType<typeof buildProvider>>["admin"];
 

@@ -1,16 +1,12 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import ExcelJS from "exceljs";
-import { buildTestApp, type TestApp } from "../../support/test-app.ts";
+import { useTestApp } from "../../support/test-app.ts";
 import { buildProvider } from "../../support/build-provider.ts";
 import { agentFor } from "../../support/test-app.ts";
 import { Technician } from "../../../server/technicians/model.ts";
 import { countStored } from "../../support/count-uploads.ts";
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
 
 const XLSX = "application/vnd.openxmlformats-officedocument.spreadsheetml.sheet";
 const header = [

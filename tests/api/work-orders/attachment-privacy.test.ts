@@ -1,16 +1,12 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { buildTestApp, type TestApp } from "../../support/test-app.ts";
+import { describe, expect, it } from "vitest";
+import { useTestApp } from "../../support/test-app.ts";
 import { signedInAgent } from "../../support/build-provider.ts";
 import { buildWorkOrderWorld, workOrderAt } from "../../fixtures/build-work-order-world.ts";
 import { buildCertificatePdf } from "../../fixtures/build-certificate-pdf.ts";
 import { submitLiabilityCertificate } from "../../support/submit-credential.ts";
 import { AuditEvent } from "../../../server/audit/model.ts";
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
 
 async function attachmentWorld(seed: number) {
   const world = await buildWorkOrderWorld(t.app);

@@ -1,8 +1,8 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { Jimp } from "jimp";
 import request from "supertest";
 import { QueryTypes } from "sequelize";
-import { buildTestApp, type TestApp } from "../../support/test-app.ts";
+import { useTestApp } from "../../support/test-app.ts";
 import { buildWorkOrderWorld, workOrderAt } from "../../fixtures/build-work-order-world.ts";
 import { buildCertificatePdf } from "../../fixtures/build-certificate-pdf.ts";
 import { imageDimensionsFromHeader } from "../../../server/credentials/index.ts";
@@ -13,11 +13,7 @@ import {
 } from "../../../server/work-orders/attachment-thumbnail.ts";
 import { db } from "../../../server/db/sequelize.ts";
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
 
 async function photoPng(width: number, height: number): Promise<Buffer> {
   const image = new Jimp({ width, height, color: 0x3366aaff });

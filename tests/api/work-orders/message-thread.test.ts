@@ -1,16 +1,12 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { buildTestApp, sequelize, type TestApp } from "../../support/test-app.ts";
+import { describe, expect, it } from "vitest";
+import { sequelize, useTestApp } from "../../support/test-app.ts";
 import { countStored } from "../../support/count-uploads.ts";
 import { buildWorkOrderWorld, workOrderAt } from "../../fixtures/build-work-order-world.ts";
 import { buildCertificatePdf } from "../../fixtures/build-certificate-pdf.ts";
 import { WorkOrderMessage } from "../../../server/work-orders/model.ts";
 import { Document } from "../../../server/credentials/model.ts";
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
 
 async function storedNow() {
   return { ...(await countStored(t.config.UPLOADS_DIR)), messages: await WorkOrderMessage.count() };

@@ -1,6 +1,6 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { Op } from "sequelize";
-import { buildTestApp, type TestApp } from "../../support/test-app.ts";
+import { useTestApp } from "../../support/test-app.ts";
 import {
   acceptBody,
   buildWorkOrderWorld,
@@ -9,11 +9,7 @@ import {
 } from "../../fixtures/build-work-order-world.ts";
 import { OutboxMessage } from "../../../server/mail/model.ts";
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
 
 const DETAILS = {
   siteContactName: "Marisol Okafor",

@@ -1,14 +1,10 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { QueryTypes } from "sequelize";
-import { buildTestApp, sequelize, type TestApp } from "../../support/test-app.ts";
+import { sequelize, useTestApp } from "../../support/test-app.ts";
 import { buildWorkOrderWorld, raiseBody } from "../../fixtures/build-work-order-world.ts";
 import { addCalendarDays } from "../../../shared/standing/iso-date.ts";
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
 
 const today = () => new Date().toISOString().slice(0, 10);
 

@@ -1,6 +1,6 @@
-import { afterAll, afterEach, beforeAll, describe, expect, it, vi } from "vitest";
+import { afterEach, describe, expect, it, vi } from "vitest";
 import { QueryTypes } from "sequelize";
-import { buildTestApp, sequelize, type TestApp } from "../../support/test-app.ts";
+import { sequelize, useTestApp } from "../../support/test-app.ts";
 import {
   buildWorkOrderWorld,
   raiseBody,
@@ -9,11 +9,7 @@ import {
 import { addCalendarDays } from "../../../shared/standing/iso-date.ts";
 import { policyEndInstant } from "../../../shared/standing/policy-period.ts";
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
 afterEach(() => {
   vi.useRealTimers();
 });

@@ -1,6 +1,6 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { Op, QueryTypes } from "sequelize";
-import { buildTestApp, sequelize, type TestApp } from "../../support/test-app.ts";
+import { sequelize, useTestApp } from "../../support/test-app.ts";
 import { buildProvider, signedInAgent } from "../../support/build-provider.ts";
 import {
   acceptBody,
@@ -15,11 +15,7 @@ import { addCalendarDays } from "../../../shared/standing/iso-date.ts";
 import { calendarDateIn } from "../../../shared/dates/local-time.ts";
 import { instantFromLocal } from "../../../shared/dates/zoned-instant.ts";
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
 
 const REVIEW = { stars: 2, body: "The axis still drifted after the visit; we had to call again." };
 const chicagoDay = (ahead: number) => addCalendarDays(calendarDateIn(new Date(), "America/Chicago"), ahead);

@@ -1,17 +1,13 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { Op } from "sequelize";
-import { buildTestApp, type TestApp } from "../../support/test-app.ts";
+import { useTestApp } from "../../support/test-app.ts";
 import { buildWorkOrderWorld, raiseBody, acceptBody } from "../../fixtures/build-work-order-world.ts";
 import { OutboxMessage } from "../../../server/mail/model.ts";
 import { AuditEvent } from "../../../server/audit/model.ts";
 import { Technician } from "../../../server/technicians/model.ts";
 import { policyEndInstant } from "../../../shared/standing/policy-period.ts";
 
-let t: TestApp;
-beforeAll(() => {
-  t = buildTestApp();
-});
-afterAll(() => t.close());
+const t = useTestApp();
 
 const mailsFor = (address: string, workOrderId: number) =>
   OutboxMessage.findAll({
