@@ -74,14 +74,15 @@ export async function standingSnapshotsNow(
   const ids = [...new Set(technicianIds)];
   if (ids.length === 0) return out;
   // Superseded credentials never count; lapsed and returned ones stay so the engine can say why a requirement is unmet.
-  const [technicians, rows, types, targets] = await Promise.all([
+  const readTechnicians = () =>
     select<TechnicianRow>(
       `SELECT t.id, t.name, t.company_id, co.name AS company_name, co.time_zone,
               (SELECT count(*)::int FROM technicians x WHERE x.company_id = t.company_id AND x.active) AS headcount
          FROM technicians t JOIN companies co ON co.id = t.company_id WHERE t.id = ANY($1::int[])`,
       [ids],
       transaction,
-    ),
+    );
+  const readCredentials = () =>
     select<CredentialRow & { company_id: number }>(
       `SELECT c.id, c.type_code, c.technician_id, c.company_id, c.state, c.fields FROM credentials c
         WHERE c.state <> 'superseded'
@@ -90,8 +91,8 @@ export async function standingSnapshotsNow(
         ORDER BY c.id`,
       [ids],
       transaction,
-    ),
-    loadCatalogue(),
+    );
+  const readTargets = () =>
     select<TargetRow>(
       `SELECT NULL::int AS id, 'Platform baseline' AS name, requirements FROM platform_baseline
        UNION ALL
@@ -99,8 +100,11 @@ export async function standingSnapshotsNow(
        ORDER BY id NULLS FIRST`,
       [requirementSetId ?? 0],
       transaction,
-    ),
-  ]);
+    );
+  // One client runs one statement at a time: inside a transaction the reads go in turn, outside it side by side.
+  const [technicians, rows, types, targets] = transaction
+    ? [await readTechnicians(), await readCredentials(), await loadCatalogue(), await readTargets()]
+    : await Promise.all([readTechnicians(), readCredentials(), loadCatalogue(), readTargets()]);
 
   // Each row parsed once; a credential whose fields no longer parse cannot count, exactly as in the stored standings.
   const parsedRows: {
