@@ -3,7 +3,11 @@ import path from "node:path";
 export const BENCH_GATE_SECRET = "bench-gate-secret-0123456789abcdef012345";
 
 /** The environment of the server under test: production mode on the large data set (full run and `--hot` alike). */
-export function benchServerEnv(databaseUrl: string, scratch: string, clientDir?: string): Record<string, string> {
+export function benchServerEnv(
+  databaseUrl: string,
+  scratch: string,
+  clientDir?: string,
+): Record<string, string> {
   return {
     NODE_ENV: "production",
     SESSION_SECRET: "bench-session-secret-0123456789abcdef",

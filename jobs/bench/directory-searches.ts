@@ -63,7 +63,9 @@ export async function captureDirectoryStatements(
   };
   // The hot statements go to the pool's pg client directly (preparedRows): each client handed out records them too.
   type Client = { query: (config: { text: string; values?: unknown[] }) => Promise<unknown> };
-  const manager = sequelize.connectionManager as unknown as { getConnection: (o?: unknown) => Promise<Client> };
+  const manager = sequelize.connectionManager as unknown as {
+    getConnection: (o?: unknown) => Promise<Client>;
+  };
   const getConnection = manager.getConnection.bind(manager);
   const clientQuery = new Map<Client, Client["query"]>();
   manager.getConnection = async (o?: unknown) => {

@@ -56,7 +56,11 @@ export async function runHotPaths(
       },
     });
     const perRequest = (s: number) => Math.round(((s * 1000) / Math.max(1, r.requests)) * 100) / 100;
-    const result = { ...r, serverCpuMsPerRequest: perRequest(cpu), postgresCpuMsPerRequest: perRequest(pgCpu) };
+    const result = {
+      ...r,
+      serverCpuMsPerRequest: perRequest(cpu),
+      postgresCpuMsPerRequest: perRequest(pgCpu),
+    };
     results.push(result);
     say(
       `  ${r.name}: ${r.requestsPerSecond} req/s, p50 ${r.p50} ms, p95 ${r.p95} ms, errors ${r.errors}; ` +

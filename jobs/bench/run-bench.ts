@@ -94,7 +94,10 @@ try {
   if (process.argv.includes("--hot")) {
     // `npm run bench -- --hot`: the paths with throughput targets and the CPU each request costs, nothing else.
     const hot = await runHotPaths(largeUrl, scratch, say);
-    writeFileSync(out("hot.json"), `${JSON.stringify({ finishedAt: new Date().toISOString(), hot }, null, 2)}\n`);
+    writeFileSync(
+      out("hot.json"),
+      `${JSON.stringify({ finishedAt: new Date().toISOString(), hot }, null, 2)}\n`,
+    );
     for (const stop of stopAll) await stop();
     process.exit(0);
   }

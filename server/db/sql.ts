@@ -90,7 +90,9 @@ export async function preparedRows<T extends object>(sql: string, bind: unknown[
     return result.rows as T[];
   } catch (err) {
     if ((err as { code?: string }).code === "ECONNRESET") client._invalid = true;
-    throw err instanceof BaseError ? err : new DatabaseError(err as Error & { sql: string; parameters: object });
+    throw err instanceof BaseError
+      ? err
+      : new DatabaseError(err as Error & { sql: string; parameters: object });
   } finally {
     manager.releaseConnection(client);
   }

@@ -1,4 +1,3 @@
-import { QueryTypes } from "sequelize";
 import { db } from "../db/sequelize.ts";
 import { preparedRows } from "../db/sql.ts";
 import { computeStandings } from "../standing/compute-stored-standings.ts";
