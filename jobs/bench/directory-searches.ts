@@ -62,7 +62,8 @@ export async function captureDirectoryStatements(
     return (original as (s: string, o?: unknown) => Promise<unknown>)(sql, options);
   };
   // The hot statements go to the pool's pg client directly (preparedRows): each client handed out records them too.
-  type Client = { query: (config: { text: string; values?: unknown[] }) => Promise<unknown> };
+  // Sequelize's own calls (text, values, callback) pass through untouched; only preparedRows' config objects are recorded.
+  type Client = { query: (...args: unknown[]) => unknown };
   const manager = sequelize.connectionManager as unknown as {
     getConnection: (o?: unknown) => Promise<Client>;
   };
@@ -73,10 +74,11 @@ export async function captureDirectoryStatements(
     if (!clientQuery.has(client)) {
       const query = client.query.bind(client);
       clientQuery.set(client, query);
-      client.query = (config) => {
-        if (typeof config === "object" && config !== null && "text" in config)
+      client.query = (...args: unknown[]) => {
+        const config = args[0] as { text?: unknown; values?: unknown[] } | null;
+        if (typeof config === "object" && config !== null && typeof config.text === "string")
           seen.push({ sql: config.text, bind: config.values ?? [] });
-        return query(config);
+        return query(...args);
       };
     }
     return client;
