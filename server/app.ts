@@ -2,13 +2,11 @@ import { existsSync } from "node:fs";
 import path from "node:path";
 import express, { type Express } from "express";
 import helmet from "helmet";
-import { pinoHttp } from "pino-http";
-import { randomUUID } from "node:crypto";
 import type pg from "pg";
 import { publicUrl, type Config } from "./config.ts";
-import { log, logSerializers } from "./log.ts";
 import { passport, renewSessionNearExpiry, sessionMiddleware } from "./http/auth.ts";
 import { requireCsrfHeader } from "./http/csrf.ts";
+import { requestLog } from "./http/request-log.ts";
 import { apiNotFound, errorHandler } from "./http/error-handler.ts";
 import { healthRoutes } from "./health/routes.ts";
 import { Readiness, refuseWhileStarting } from "./health/readiness.ts";
@@ -102,21 +100,8 @@ export function createApp({ config, sessionPool, clientDir }: AppDeps): Express 
       },
     }),
   );
-  app.use(
-    pinoHttp({
-      logger: log,
-      serializers: logSerializers,
-      genReqId: (req) => (req.headers["x-request-id"] as string | undefined) ?? randomUUID(),
-      autoLogging: { ignore: (req) => !req.url?.startsWith("/api") },
-      // In production a line per successful API request costs throughput for nothing: failures (4xx, 5xx) still log.
-      customLogLevel: (_req, res, err) =>
-        err || res.statusCode >= 500
-          ? "error"
-          : res.statusCode < 400 && config.NODE_ENV === "production"
-            ? "silent"
-            : "info",
-    }),
-  );
+  // In production a line per successful API request costs throughput for nothing: failures (4xx, 5xx) still log.
+  app.use(requestLog(config.NODE_ENV === "production"));
   app.use("/api", refuseWhileStarting);
   app.use("/api", express.json({ limit: "100kb" }));
   app.use("/api", sessionMiddleware(config, sessionPool));

@@ -27,7 +27,13 @@ if (process.env.DATABASE_URL && process.env.DIRECTORY_SQL_FILE) {
       res.status(404).end();
       return;
     }
-    const { rows } = await pool.query(statement.sql, statement.bind);
+    // Prepared per connection, as the server sends its directory statements (server/db/sql.ts preparedRows), so B1
+    // stays the ceiling of the same statements sent the same way.
+    const { rows } = await pool.query({
+      name: `b1_${req.params.name}`,
+      text: statement.sql,
+      values: statement.bind,
+    });
     res.json({ rows });
   });
 }

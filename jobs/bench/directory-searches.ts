@@ -61,6 +61,28 @@ export async function captureDirectoryStatements(
     seen.push({ sql, bind: options?.bind ?? [] });
     return (original as (s: string, o?: unknown) => Promise<unknown>)(sql, options);
   };
+  // The hot statements go to the pool's pg client directly (preparedRows): each client handed out records them too.
+  // Sequelize's own calls (text, values, callback) pass through untouched; only preparedRows' config objects are recorded.
+  type Client = { query: (...args: unknown[]) => unknown };
+  const manager = sequelize.connectionManager as unknown as {
+    getConnection: (o?: unknown) => Promise<Client>;
+  };
+  const getConnection = manager.getConnection.bind(manager);
+  const clientQuery = new Map<Client, Client["query"]>();
+  manager.getConnection = async (o?: unknown) => {
+    const client = await getConnection(o);
+    if (!clientQuery.has(client)) {
+      const query = client.query.bind(client);
+      clientQuery.set(client, query);
+      client.query = (...args: unknown[]) => {
+        const config = args[0] as { text?: unknown; values?: unknown[] } | null;
+        if (typeof config === "object" && config !== null && typeof config.text === "string")
+          seen.push({ sql: config.text, bind: config.values ?? [] });
+        return query(...args);
+      };
+    }
+    return client;
+  };
   const out: Record<string, CapturedStatement> = {};
   try {
     for (const search of DIRECTORY_SEARCHES) {
@@ -77,6 +99,8 @@ export async function captureDirectoryStatements(
     }
   } finally {
     (sequelize as unknown as { query: unknown }).query = original;
+    manager.getConnection = getConnection;
+    for (const [client, query] of clientQuery) client.query = query;
   }
   return out;
 }

@@ -58,14 +58,20 @@ function run(target: LoadTarget, seconds: number, record?: (ms: number, status: 
  * A warm-up, then the measured run at the bench's connection count. Latency percentiles come from every response time
  * (autocannon's own summary has p97.5 but no p95); non-2xx answers count as errors.
  */
-export async function measureLoad(target: LoadTarget): Promise<LoadResult> {
+export async function measureLoad(
+  target: LoadTarget,
+  /** Called right before and right after the measured run (not the warm-up), e.g. to read CPU counters. */
+  around?: { start(): void; stop(): void },
+): Promise<LoadResult> {
   await run(target, benchSettings.warmupSeconds);
   const times: number[] = [];
+  around?.start();
   let errors = 0;
   const result = await run(target, benchSettings.seconds, (ms, status) => {
     times.push(ms);
     if (status < 200 || status >= 300) errors += 1;
   });
+  around?.stop();
   times.sort((a, b) => a - b);
   return {
     name: target.name,

@@ -10,6 +10,8 @@ import { benchSettings } from "./bench-settings.ts";
 import { startBenchCluster, withDatabase } from "./bench-cluster.ts";
 import { machineInfo, renderMarkdown, type BenchResults } from "./bench-report.ts";
 import { startChildServer } from "./child-server.ts";
+import { BENCH_GATE_SECRET, benchServerEnv } from "./bench-server-env.ts";
+import { runHotPaths } from "./hot-paths.ts";
 import { buildClient, measureClientSize } from "./client-size.ts";
 import {
   BENCH_BUYER,
@@ -61,6 +63,8 @@ if (process.argv.includes("--help")) {
       "  --plans   the directory statements' plans and one-connection timings, no HTTP load",
       "  --growth  the directory, routing, queue and lapse job at scales 0.3, 1 and 3 (BENCH_GROWTH_SCALES)",
       "  --lapse   the lapse job against its floor only (bench/results/lapse.json, explain-lapse-job.txt)",
+      "  --hot     B0, B1, the directory API, technician page, queue and gate check with CPU per request (hot.json);",
+      "            --only TEXT measures only the scenarios whose name contains TEXT",
       "  --scale X the data set at that scale (with --lapse or --plans; seed:large takes it too)",
     ].join("\n"),
   );
@@ -87,6 +91,16 @@ try {
   const applied = await migrate(migrator);
   await migrator.close();
   if (applied.length) say(`Applied migrations to the large data set: ${applied.join(", ")}`);
+  if (process.argv.includes("--hot")) {
+    // `npm run bench -- --hot`: the paths with throughput targets and the CPU each request costs, nothing else.
+    const hot = await runHotPaths(largeUrl, scratch, say);
+    writeFileSync(
+      out("hot.json"),
+      `${JSON.stringify({ finishedAt: new Date().toISOString(), hot }, null, 2)}\n`,
+    );
+    for (const stop of stopAll) await stop();
+    process.exit(0);
+  }
 
   // The job first: its copies need the template database free of connections.
   const lapseAsOf = new Date(info.anchor.getTime() + 7 * DAY + 6 * 3_600_000);
@@ -160,25 +174,7 @@ try {
   say("The server in production mode...");
   const server = await startChildServer(
     "jobs/bench/bench-server-entry.ts",
-    {
-      NODE_ENV: "production",
-      SESSION_SECRET: "bench-session-secret-0123456789abcdef",
-      GATE_SECRET: "bench-gate-secret-0123456789abcdef012345",
-      DATABASE_URL: largeUrl,
-      UPLOADS_DIR: path.join(scratch, "uploads"),
-      CLIENT_DIR: clientDir,
-      RUN_SCHEDULE: "false",
-      LOG_LEVEL: "info",
-      SMTP_URL: "",
-      // The sign-in scenario's 20 connections all wait for a hash at once; a queue that holds them all measures
-      // hashing throughput rather than the 503s that shed load beyond the default queue of 16.
-      HASH_QUEUE: "32",
-      // All load comes from one address: a shed sign-in (503) counts as a failure, and the address limit would then
-      // refuse the browser's own sign-in later in the run. Non-2xx answers are still counted per scenario.
-      SIGN_IN_FAILURES_PER_IP_PER_15_MIN: "1000000",
-      // The same for the gate check's per-address limit: the load is one machine standing in for many gates.
-      GATE_CHECKS_PER_IP_PER_MINUTE: "100000000",
-    },
+    benchServerEnv(largeUrl, scratch, clientDir),
     "/api/health",
     benchSettings.serverNodeFlags,
   );
@@ -228,7 +224,7 @@ try {
   });
   // The anonymous gate check: fresh badge codes (they live five minutes) of the first page's technicians, scanned at
   // the bench site's gate sign.
-  const gateSecret = "bench-gate-secret-0123456789abcdef012345";
+  const gateSecret = BENCH_GATE_SECRET;
   const gateSite = siteGateCode(gateSecret, BENCH_BUYER.siteId);
   await measure({
     name: "anonymous gate check API",

@@ -1,7 +1,6 @@
-import { QueryTypes } from "sequelize";
 import type { RequirementMetDto } from "../../shared/directory/directory-shapes.ts";
 import type { RequirementResult } from "../../shared/standing/standing-types.ts";
-import { db } from "../db/sequelize.ts";
+import { preparedRows } from "../db/sql.ts";
 
 /**
  * How each line of the chosen requirement set is met, for one page of results only: read from the standings the job
@@ -14,10 +13,10 @@ export async function loadRequirementsMet(
 ): Promise<Map<number, RequirementMetDto[]>> {
   const out = new Map<number, RequirementMetDto[]>();
   if (technicianIds.length === 0) return out;
-  const rows = await db().query<{ technician_id: number; results: RequirementResult[] }>(
+  const rows = await preparedRows<{ technician_id: number; results: RequirementResult[] }>(
     `SELECT technician_id, results FROM technician_standings
       WHERE requirement_set_id = $1 AND technician_id = ANY($2::int[])`,
-    { bind: [requirementSetId, [...technicianIds]], type: QueryTypes.SELECT },
+    [requirementSetId, [...technicianIds]],
   );
   for (const row of rows) {
     out.set(

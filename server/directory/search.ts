@@ -11,6 +11,7 @@ import type { DirectoryPageDto, DirectoryRowDto } from "../../shared/directory/d
 import { milesToKm } from "../../shared/geo/units.ts";
 import { DEFAULT_PRIOR } from "../../shared/ranking/rating-score.ts";
 import { db } from "../db/sequelize.ts";
+import { preparedRows } from "../db/sql.ts";
 import { AppError } from "../http/app-error.ts";
 import { findShopEquipment } from "../sites/index.ts";
 import { decodeCursor, encodeCursor } from "./cursor.ts";
@@ -52,12 +53,9 @@ interface DirectoryRow {
 const NEVER_LAPSES_EPOCH = 1e12;
 
 async function ownRequirementSet(companyId: number, id: number): Promise<string> {
-  const rows = await db().query<{ id: number; name: string }>(
+  const rows = await preparedRows<{ id: number; name: string }>(
     "SELECT id, name FROM requirement_sets WHERE id = $1 AND company_id = $2",
-    {
-      bind: [id, companyId],
-      type: QueryTypes.SELECT,
-    },
+    [id, companyId],
   );
   const row = rows[0];
   if (!row) throw new AppError("not_found", "That requirement set was not found");
@@ -69,7 +67,7 @@ async function ownRequirementSet(companyId: number, id: number): Promise<string>
  * the site is missing or another company's.
  */
 async function siteWithRequirementSet(companyId: number, siteId: number) {
-  const rows = await db().query<{
+  const rows = await preparedRows<{
     latitude: number;
     longitude: number;
     set_id: number | null;
@@ -80,7 +78,7 @@ async function siteWithRequirementSet(companyId: number, siteId: number) {
        LEFT JOIN LATERAL (SELECT id, name FROM requirement_sets
                            WHERE site_id = s.id AND company_id = $2 AND active ORDER BY id LIMIT 1) rs ON true
       WHERE s.id = $1 AND s.company_id = $2`,
-    { bind: [siteId, companyId], type: QueryTypes.SELECT },
+    [siteId, companyId],
   );
   return rows[0] ?? null;
 }
@@ -317,7 +315,8 @@ export async function searchDirectory(
   const limit = p.add(query.limit + 1);
   const nearest =
     sort === "distance" && criteria.site ? nearestFirst(p, where, criteria.site, cursor, limit) : null;
-  const rows = await db().query<DirectoryRow>(
+  // Prepared like the other hot statements; a new combination of filters past the per-connection cap runs unnamed.
+  const rows = await preparedRows<DirectoryRow>(
     `${nearest?.with ?? ""}SELECT x.* FROM (
        SELECT t.id, t.name, t.company_id, c.name AS company_name, t.technologies, t.control_families, t.service_radius_km,
               t.hourly_rate_cents, t.travel_rate_cents, t.mileage_rate_cents, ${standingCols},
@@ -327,7 +326,7 @@ export async function searchDirectory(
      ) x ${after}
      ORDER BY x.sort_key, x.id
      LIMIT ${limit}`,
-    { bind: p.values, type: QueryTypes.SELECT },
+    p.values,
   );
 
   const page = rows.slice(0, query.limit);

@@ -1,4 +1,3 @@
-import { QueryTypes } from "sequelize";
 import { CERTIFICATE_CAUTION } from "../../shared/directory/schemas.ts";
 import type {
   DirectoryTechnicianDto,
@@ -9,7 +8,7 @@ import type {
 import { greatCircleDistanceKm } from "../../shared/geo/great-circle-distance.ts";
 import type { Requirement } from "../../shared/standing/requirements.ts";
 import type { RequirementResult, Standing } from "../../shared/standing/standing-types.ts";
-import { db } from "../db/sequelize.ts";
+import { preparedRows } from "../db/sql.ts";
 import { AppError } from "../http/app-error.ts";
 import { assumptions, estimateTrip, ratingSummary, SCORE_SOURCE } from "./estimates.ts";
 import { computeStandingNow } from "./live-standing.ts";
@@ -20,9 +19,6 @@ import {
   buyerMayDownload,
   technicianViewLevel,
 } from "../../shared/visibility/technician-visibility.ts";
-
-const select = <T extends object>(sql: string, bind: unknown[]) =>
-  db().query<T>(sql, { bind, type: QueryTypes.SELECT });
 
 interface CredentialRow {
   id: number;
@@ -245,7 +241,7 @@ export async function findDirectoryTechnician(
   asOf = new Date(),
   siteId?: number,
 ): Promise<DirectoryTechnicianDto> {
-  const [t] = await select<TechnicianRow>(PAGE_SQL, [technicianId, buyer.companyId, asOf]);
+  const [t] = await preparedRows<TechnicianRow>(PAGE_SQL, [technicianId, buyer.companyId, asOf]);
   if (!mayView(buyer, t)) throw new AppError("not_found", "That record was not found");
   // A set the standing job has not stored yet is computed now (one more query, only then).
   const requirementSets = await toStandings(t, asOf);

@@ -1,5 +1,5 @@
-import { QueryTypes } from "sequelize";
 import { db } from "../db/sequelize.ts";
+import { preparedRows } from "../db/sql.ts";
 import { computeStandings } from "../standing/compute-stored-standings.ts";
 import { loadStandingInputs, loadTargets } from "../standing/standing-inputs.ts";
 import type { StandingResult } from "../../shared/standing/standing-types.ts";
@@ -23,11 +23,15 @@ interface GateRow {
   jpeg: Buffer | null;
 }
 
+/** Standings the front desk shows as cleared (lapsing is cleared until its lapse instant). */
+const CLEARED_AT_GATE = ["cleared", "lapsing"];
+
 /**
  * Everything the gate shows, in one statement: the technician and company, the site with its active set, the stored
  * standing against that set (or the baseline when the site has none), the accepted order with the site's today among
  * its dates, and the photo. "Today" is the site's calendar date, so a check at 7 a.m. in Chicago is not matched against
- * the date already begun in UTC.
+ * the date already begun in UTC. When the standing is stored, the same statement records the check ($4: the standings
+ * shown as cleared); `logged` says it did, and only a standing not stored yet leaves the INSERT to checkAtGate.
  */
 const GATE_SQL = `
   WITH site AS (
@@ -35,7 +39,8 @@ const GATE_SQL = `
       FROM sites s
       LEFT JOIN LATERAL (SELECT id, name FROM requirement_sets
                           WHERE site_id = s.id AND active ORDER BY id LIMIT 1) rs ON true
-     WHERE s.id = $2::int)
+     WHERE s.id = $2::int),
+  found AS (
   SELECT t.id AS technician_id, t.name AS technician_name, t.company_id, c.name AS company_name,
          site.id AS site_id, site.name AS site_name, site.company_id AS shop_company_id,
          site.set_id, site.set_name, st.standing, st.results,
@@ -50,12 +55,20 @@ const GATE_SQL = `
     LEFT JOIN site ON true
     LEFT JOIN technician_standings st
       ON st.technician_id = t.id AND coalesce(st.requirement_set_id, 0) = coalesce(site.set_id, 0)
-   WHERE t.id = $1::int`;
+   WHERE t.id = $1::int),
+  logged AS (
+    INSERT INTO gate_checks (technician_id, service_company_id, site_id, shop_company_id, state, checked_at)
+    SELECT technician_id, company_id, site_id, shop_company_id,
+           CASE WHEN standing = ANY($4::text[]) THEN 'cleared' ELSE 'not_cleared' END, $3::timestamptz
+      FROM found WHERE standing IS NOT NULL
+    RETURNING technician_id)
+  SELECT found.*, EXISTS (SELECT 1 FROM logged) AS logged FROM found`;
 
 /**
  * What the front desk sees for a scanned badge: who, for which company, and whether cleared at this instant against the
  * site's requirement set (or the platform baseline). Nothing else about the technician, the company or other shops.
- * One read and the INSERT of the check record; a standing not stored yet is computed for that one target only.
+ * One statement reads and records the check; a standing not stored yet is computed for that one target only, then
+ * recorded by an INSERT of its own.
  */
 export async function checkAtGate(
   secret: string,
@@ -67,20 +80,23 @@ export async function checkAtGate(
   const verdict = checkBadgeToken(secret, token, now);
   if (verdict.state !== "valid") return { state: verdict.state, checkedAt };
   const siteId = siteCode ? siteFromGateCode(secret, siteCode) : null;
-  const [row] = await db().query<GateRow>(GATE_SQL, {
-    bind: [verdict.technicianId, siteId, now],
-    type: QueryTypes.SELECT,
-  });
+  const [row] = await preparedRows<GateRow & { logged: boolean }>(GATE_SQL, [
+    verdict.technicianId,
+    siteId,
+    now,
+    CLEARED_AT_GATE,
+  ]);
   if (!row) return { state: "invalid", checkedAt };
   const chosen = row.standing
     ? { standing: row.standing, results: row.results ?? [] }
     : await computeOneStanding(row.technician_id, row.set_id, now);
-  const state = chosen?.standing === "cleared" || chosen?.standing === "lapsing" ? "cleared" : "not_cleared";
-  await db().query(
-    `INSERT INTO gate_checks (technician_id, service_company_id, site_id, shop_company_id, state, checked_at)
-     VALUES ($1, $2, $3, $4, $5, $6)`,
-    { bind: [row.technician_id, row.company_id, row.site_id, row.shop_company_id, state, now] },
-  );
+  const state = chosen && CLEARED_AT_GATE.includes(chosen.standing) ? "cleared" : "not_cleared";
+  if (!row.logged)
+    await db().query(
+      `INSERT INTO gate_checks (technician_id, service_company_id, site_id, shop_company_id, state, checked_at)
+       VALUES ($1, $2, $3, $4, $5, $6)`,
+      { bind: [row.technician_id, row.company_id, row.site_id, row.shop_company_id, state, now] },
+    );
   const photo = row.jpeg ? jpegDataUrl(row.jpeg) : null;
   return {
     state,

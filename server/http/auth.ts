@@ -91,15 +91,17 @@ function sessionUserStore(pool: pg.Pool) {
   return class SessionUserStore extends PgStore {
     override get(sid: string, fn: (err: unknown, sess?: session.SessionData | null) => void): void {
       pool
-        .query<{ sess: session.SessionData | string; user: PrefetchedUser | null }>(
-          `SELECT s.sess, CASE WHEN u.id IS NULL THEN NULL ELSE json_build_object('id', u.id, 'email', u.email,
+        .query<{ sess: session.SessionData | string; user: PrefetchedUser | null }>({
+          // Prepared once per connection: it runs on every signed-in request.
+          name: "clearbench_session_user",
+          text: `SELECT s.sess, CASE WHEN u.id IS NULL THEN NULL ELSE json_build_object('id', u.id, 'email', u.email,
                   'name', u.name, 'role', u.role, 'companyId', u.company_id, 'technicianId', u.technician_id) END AS user
              FROM session s
              LEFT JOIN users u ON jsonb_typeof(s.sess::jsonb #> '{passport,user}') = 'number'
               AND u.id = (s.sess::jsonb #>> '{passport,user}')::int AND u.active
             WHERE s.sid = $1 AND s.expire >= CURRENT_TIMESTAMP`,
-          [sid],
-        )
+          values: [sid],
+        })
         .then(
           ({ rows }) => {
             const row = rows[0];

@@ -7,6 +7,7 @@ import {
   type CatalogKind,
 } from "../../shared/machines/catalog.ts";
 import { db } from "../db/sequelize.ts";
+import { preparedRows } from "../db/sql.ts";
 import { AppError } from "../http/app-error.ts";
 import { recordAudit } from "../audit/index.ts";
 
@@ -19,11 +20,12 @@ interface Row {
 }
 
 export async function listCatalog(kind?: CatalogKind, transaction?: Transaction): Promise<CatalogEntryDto[]> {
-  const rows = await db().query<Row>(
-    `SELECT id, kind, name, aliases, active FROM machine_catalog_entries
-      WHERE ($1::varchar IS NULL OR kind = $1) ORDER BY kind, lower(name), id`,
-    { bind: [kind ?? null], type: QueryTypes.SELECT, transaction },
-  );
+  const sql = `SELECT id, kind, name, aliases, active FROM machine_catalog_entries
+      WHERE ($1::varchar IS NULL OR kind = $1) ORDER BY kind, lower(name), id`;
+  // Outside a transaction (the directory reads it on every builder or control search) as a prepared statement.
+  const rows = transaction
+    ? await db().query<Row>(sql, { bind: [kind ?? null], type: QueryTypes.SELECT, transaction })
+    : await preparedRows<Row>(sql, [kind ?? null]);
   return rows.map((r) => ({
     id: r.id,
     kind: r.kind,
