@@ -1,12 +1,7 @@
 import type { Sequelize, Transaction } from "sequelize";
 import { loadConfig, publicUrl } from "../server/config.ts";
 import { db } from "../server/db/sequelize.ts";
-import {
-  createWarningNotices,
-  findNoticeRecipients,
-  queueNoticeMessages,
-  type HolderCount,
-} from "../server/notices/index.ts";
+import { createWarningNotices, queueNoticeMessages, type HolderCount } from "../server/notices/index.ts";
 import { lapsingWindowDays, refreshStandings, type ChangedStanding } from "../server/standing/index.ts";
 import { countStatements, selectRows } from "../server/db/sql.ts";
 import { remindMaintenanceDue } from "../server/machines/maintenance-reminders.ts";
@@ -175,9 +170,8 @@ export async function runLapseJob(
       const warned = await timed("warn", () =>
         createWarningNotices(transaction, { asOf, thresholds: warningDays, jobRunId }),
       );
-      const recipients = await timed("recipients", () => findNoticeRecipients(transaction, jobRunId));
       const queued = await timed("queue", () =>
-        queueNoticeMessages(transaction, recipients, { asOf, publicUrl: base }),
+        queueNoticeMessages(transaction, { jobRunId, asOf, publicUrl: base }),
       );
       const unstored = await timed("unstored", () => techniciansWithoutStanding(transaction));
       const starting = await timed("starting", () => holdersComingIntoForce(transaction, asOf, jobRunId));

@@ -1,3 +1,4 @@
+import { credentialTypeByCode } from "../credentials/catalogue.ts";
 import { evaluateRequirement } from "./evaluate-requirement.ts";
 import type { Requirement } from "./requirements.ts";
 import type {
@@ -77,4 +78,16 @@ export function computeTechnicianStanding(input: TechnicianStandingInput): Stand
     technician: input.technician,
     companyHeadcount: input.companyHeadcount,
   });
+}
+
+/**
+ * Whether a standing over these credentials can depend on who the technician is. The engine reads the technician (and
+ * the company's headcount) only to match a workers' compensation exemption to the persons it names, so with no
+ * exemption among them, every technician of a company who holds no credential of their own stands alike.
+ */
+export function standingReadsTechnician(
+  credentials: readonly StandingCredential[],
+  types: StandingOptions["types"] = credentialTypeByCode,
+): boolean {
+  return credentials.some((c) => types.get(c.typeCode)?.fieldSet === "exemption");
 }

@@ -6,10 +6,12 @@ import { freePort } from "../support/free-port.ts";
 import {
   buildClearedProvider,
   buildCredentialRow,
+  insuranceFields,
   trainingFields,
 } from "../fixtures/build-credential-row.ts";
 import { runLapseJob } from "../../jobs/lapse.ts";
 import { runSendOutbox } from "../../jobs/send-outbox.ts";
+import { db } from "../../server/db/sequelize.ts";
 import { createSmtpMailer } from "../../server/mail/index.ts";
 import { deliverAll, JOB_DEPS, rows } from "./job-support.ts";
 
@@ -190,6 +192,122 @@ describe("lapse notices by e-mail", () => {
         link: "https://clearbench.test/technician/upload-card?type=arc_flash",
       },
     ]);
+  });
+});
+
+describe("lapse notice wording", () => {
+  it("words every e-mail and notification in full, escaping the HTML and taking the link base with or without its slash", async () => {
+    const p = await providerWithCard("2024-05-15");
+    await db().query(
+      "UPDATE credentials SET state = 'superseded' WHERE company_id = $1 AND type_code = 'general_liability'",
+      {
+        bind: [p.company.id],
+      },
+    );
+    const gl = await buildCredentialRow({
+      companyId: p.company.id,
+      typeCode: "general_liability",
+      fields: insuranceFields({ expirationDate: "2027-05-09" }),
+      submittedBy: p.admin.id,
+      timeZone: p.company.timeZone,
+    });
+    await db().query("UPDATE companies SET name = 'Birch & Pike <Tools>' WHERE id = $1", {
+      bind: [p.company.id],
+    });
+    await db().query(`UPDATE technicians SET name = 'Rhian O''Neil "Rook"' WHERE id = $1`, {
+      bind: [p.technician.id],
+    });
+    await db().query("UPDATE users SET name = 'Ana & Bo' WHERE id = $1", { bind: [p.admin.id] });
+    await db().query("UPDATE users SET name = 'Rhian' WHERE id = $1", { bind: [p.technicianUser.id] });
+
+    // Chicago (the fixture's zone): the card counts through 2027-05-15 (NFPA 70E 110.6(A)(3): 36 months), so it stops at
+    // 2027-05-16 00:00 CDT, 6 days 18 h after the run: "7 days" (whole days of 24 h, rounded up). The policy ends at
+    // 12:01 a.m. standard time on 2027-05-09, 1:01 AM CDT (ISO CG DS 01 wording, from memory), before the run.
+    const report = await runLapseJob(
+      { asOf: new Date("2027-05-09T11:00:00Z") },
+      { ...JOB_DEPS, publicUrl: "https://clearbench.test/" },
+    );
+    await deliverAll(catcher);
+
+    expect(report.skipped).toBe(false);
+    const cardLink = `https://clearbench.test/provider/documents/new?type=arc_flash&technicianId=${p.technician.id}`;
+    const glLink = "https://clearbench.test/provider/documents/new?type=general_liability";
+    const holder = 'Rhian O\'Neil "Rook" (Birch & Pike <Tools>)';
+    const cardBody = `Electrical safety (arc flash) training held by ${holder} lapses on Sunday, May 16, 2027 at 12:00 AM CDT. If no verified renewal is on file by then, Rhian O'Neil "Rook" is hidden from shops in the directory and cannot take new work orders.`;
+    const glBody =
+      "Commercial general liability held by Birch & Pike <Tools> lapsed on Sunday, May 9, 2027 at 1:01 AM CDT. It no longer counts: every technician of Birch & Pike <Tools> who needs it is hidden from shops in the directory and cannot take new work orders until a renewal is uploaded and a Clearbench reviewer verifies it.";
+    const lapsingNext = "Upload the renewal before then, leaving a reviewer time to verify it.";
+    const lapsedNext = "Upload the renewal now; once a reviewer verifies it, the standing is restored.";
+    const text = (name: string, body: string, next: string, link: string) =>
+      `Hello ${name},\n\n${body}\n\n${next}\n\nUpload the renewal: ${link}\n\nClearbench`;
+    const html = (name: string, body: string, next: string, link: string) =>
+      [
+        `<p>Hello ${name},</p>`,
+        `<p>${body}</p>`,
+        `<p><strong>${next}</strong></p>`,
+        `<p><a href="${link}">Upload the renewal</a></p>`,
+        "<p>Clearbench</p>",
+      ].join("\n");
+    const cardBodyHtml = `Electrical safety (arc flash) training held by Rhian O&#39;Neil &quot;Rook&quot; (Birch &amp; Pike &lt;Tools&gt;) lapses on Sunday, May 16, 2027 at 12:00 AM CDT. If no verified renewal is on file by then, Rhian O&#39;Neil &quot;Rook&quot; is hidden from shops in the directory and cannot take new work orders.`;
+    const glBodyHtml =
+      "Commercial general liability held by Birch &amp; Pike &lt;Tools&gt; lapsed on Sunday, May 9, 2027 at 1:01 AM CDT. It no longer counts: every technician of Birch &amp; Pike &lt;Tools&gt; who needs it is hidden from shops in the directory and cannot take new work orders until a renewal is uploaded and a Clearbench reviewer verifies it.";
+
+    const office = catcher.to(p.admin.email).map((m) => ({ subject: m.subject, text: m.text, html: m.html }));
+    expect(office).toEqual(
+      expect.arrayContaining([
+        {
+          subject: "Lapsed: Commercial general liability for Birch & Pike <Tools>",
+          text: text("Ana & Bo", glBody, lapsedNext, glLink),
+          html: html("Ana &amp; Bo", glBodyHtml, lapsedNext, glLink),
+        },
+        {
+          subject: `Electrical safety (arc flash) training for ${holder} lapses in 7 days`,
+          text: text("Ana & Bo", cardBody, lapsingNext, cardLink),
+          html: html("Ana &amp; Bo", cardBodyHtml, lapsingNext, cardLink.replace("&", "&amp;")),
+        },
+      ]),
+    );
+    expect(office).toHaveLength(2);
+    const own = catcher.to(p.technicianUser.email);
+    const ownLink = "https://clearbench.test/technician/upload-card?type=arc_flash";
+    expect(own.map((m) => ({ subject: m.subject, text: m.text, html: m.html }))).toEqual([
+      {
+        subject: `Electrical safety (arc flash) training for ${holder} lapses in 7 days`,
+        text: text("Rhian", cardBody, lapsingNext, ownLink),
+        html: html("Rhian", cardBodyHtml, lapsingNext, ownLink),
+      },
+    ]);
+    const notes = await rows<{ user_id: number; kind: string; title: string; body: string; link: string }>(
+      `SELECT n.user_id, n.kind, n.title, n.body, n.link FROM notifications n JOIN notices x ON x.id = n.notice_id
+        WHERE x.credential_id = ANY($1::int[]) ORDER BY n.id`,
+      [[gl.id, p.card.id]],
+    );
+    expect(notes).toEqual(
+      expect.arrayContaining([
+        {
+          user_id: p.admin.id,
+          kind: "credential_lapsed",
+          title: "Lapsed: Commercial general liability for Birch & Pike <Tools>",
+          body: glBody,
+          link: glLink,
+        },
+        {
+          user_id: p.admin.id,
+          kind: "credential_lapsing",
+          title: `Electrical safety (arc flash) training for ${holder} lapses in 7 days`,
+          body: cardBody,
+          link: cardLink,
+        },
+        {
+          user_id: p.technicianUser.id,
+          kind: "credential_lapsing",
+          title: `Electrical safety (arc flash) training for ${holder} lapses in 7 days`,
+          body: cardBody,
+          link: ownLink,
+        },
+      ]),
+    );
+    expect(notes).toHaveLength(3);
   });
 });
 
