@@ -5,6 +5,7 @@ import { join } from "node:path";
 import { loadJimp } from "../../http/jimp.ts";
 import { imageDimensionsOfFile } from "./image-dimensions.ts";
 import { pageOrientation } from "./page-orientation.ts";
+import { edgeSteepness, greyOf, turnedGrey, unsharpGrey, type GreyPixels } from "./grey-pixels.ts";
 import { layoutText, type PositionedText } from "../../../shared/credentials/locate-values.ts";
 import {
   readingQuality,
@@ -48,6 +49,10 @@ const MAX_DESKEW_DEGREES = 15;
 const MAX_BOX_LEVEL_DEGREES = 2;
 // A measured turn that reads this few sure words may be wrong rather than blurred: orientation detection is asked.
 const MIN_MEASURED_QUALITY = 12;
+// Edge steepness (sharpen-grey.ts) under which a photo's print is sharpened, gently, and under which it is blurred
+// enough to be sharpened hard: crisp photos measure 1.5 and more, ones softened by a pixel 0.4 to 0.6, by two 0.15 to 0.35.
+const SOFT_PRINT_STEEPNESS = 1;
+const BLURRED_PRINT_STEEPNESS = 0.37;
 // One thread per page: tesseract's OpenMP threads cost more than they save on small pages and cannot be timed out cleanly.
 const CHILD_ENV = { OMP_THREAD_LIMIT: "1", PATH: "/usr/bin:/bin" };
 const MAX_OUTPUT_BYTES = 4 * 1024 * 1024;
@@ -98,7 +103,7 @@ export interface OcrReading {
   items: PositionedText[];
 }
 
-/** The page image decoded (Jimp), after its declared size is checked against the pixel cap. */
+/** The page image decoded (Jimp) to grey, after its declared size is checked against the pixel cap. */
 async function decoded(path: string) {
   // Checked from the header before decoding: the decode itself runs in this process, outside the children's caps.
   const declared = await imageDimensionsOfFile(path);
@@ -107,25 +112,39 @@ async function decoded(path: string) {
   const image = await (await loadJimp()).read(path);
   if (image.bitmap.width * image.bitmap.height > MAX_OCR_PIXELS)
     throw new DocumentUnreadableError("corrupt", "image too large to read");
-  return image;
+  return greyOf(image.bitmap);
 }
-type DecodedImage = Awaited<ReturnType<typeof decoded>>;
+
 
 /**
- * Writes the image turned counter-clockwise by `degrees` (white corners) as a grey PGM, and returns its path: tesseract
- * reads grey anyway, and a PGM is written in a few milliseconds where encoding a PNG in this process takes far longer.
+ * Writes the grey image turned counter-clockwise by `degrees` (white corners), sharpened when asked, as a PGM, and
+ * returns its path: tesseract reads grey anyway, and a PGM is written in milliseconds where a PNG takes far longer.
  */
-async function writeTurned(image: DecodedImage, degrees: number, out: string): Promise<string> {
-  const copy = degrees ? image.clone() : image;
-  copy.background = 0xffffffff;
-  if (degrees) copy.rotate(degrees);
-  const { width, height, data } = copy.bitmap;
-  const header = Buffer.from(`P5\n${width} ${height}\n255\n`, "ascii");
-  const grey = Buffer.alloc(width * height);
-  for (let i = 0; i < grey.length; i += 1)
-    grey[i] = Math.round((data[i * 4]! + data[i * 4 + 1]! + data[i * 4 + 2]!) / 3);
-  await writeFile(out, Buffer.concat([header, grey]));
+async function writeTurned(
+  image: GreyPixels,
+  degrees: number,
+  sharpen: Sharpening | undefined,
+  out: string,
+): Promise<string> {
+  let pixels = degrees ? turnedGrey(image, degrees) : image;
+  if (sharpen) pixels = unsharpGrey(pixels, sharpen.amount, sharpen.radius);
+  const header = Buffer.from(`P5\n${pixels.width} ${pixels.height}\n255\n`, "ascii");
+  await writeFile(out, Buffer.concat([header, pixels.grey]));
   return out;
+}
+
+interface Sharpening {
+  amount: number;
+  radius: number;
+}
+
+/** How much a photo's print is sharpened before it is read, from how soft it is (grey-pixels.ts). */
+function sharpeningFor(image: GreyPixels): Sharpening | undefined {
+  const steepness = edgeSteepness(image);
+  if (steepness >= Number(process.env.SHARP_SOFT ?? SOFT_PRINT_STEEPNESS)) return undefined;
+  if (steepness < Number(process.env.SHARP_BLURRED ?? BLURRED_PRINT_STEEPNESS))
+    return { amount: Number(process.env.SHARP_A2 ?? 1.5), radius: Number(process.env.SHARP_R2 ?? 3) };
+  return { amount: Number(process.env.SHARP_A1 ?? 1), radius: Number(process.env.SHARP_R1 ?? 2) };
 }
 
 /**
@@ -143,18 +162,25 @@ async function readPageImage(
   tesseract: string,
   measureFirst: boolean,
 ): Promise<OcrReading> {
-  let image: DecodedImage | undefined;
+  let image: GreyPixels | undefined;
+  // Photos only: a scan's print is as sharp as the scanner made it.
+  const sharpen = measureFirst ? sharpeningFor((image = await decoded(imagePath))) : undefined;
   const read = async (degrees: number) => {
     const path =
-      degrees === 0
+      degrees === 0 && !sharpen
         ? imagePath
-        : await writeTurned((image ??= await decoded(imagePath)), degrees, join(dir, `turn-${page}.pgm`));
+        : await writeTurned(
+            (image ??= await decoded(imagePath)),
+            degrees,
+            sharpen,
+            join(dir, `turn-${page}.pgm`),
+          );
     const tsv = await run(tesseract, [path, "stdout", ...TESSERACT_ARGS, "tsv"], deadline - Date.now());
     return { degrees, tsv, quality: readingQuality(tsv), upright: readsUpright(tsv) };
   };
   /** The measured turn, with a tilt tesseract reads well left to the word boxes (levelled below). */
   const measuredTurn = async () => {
-    const measure = pageOrientation((image ??= await decoded(imagePath)).bitmap);
+    const measure = pageOrientation((image ??= await decoded(imagePath)));
     const quarter = Math.round(measure.degrees / 90) * 90;
     const degrees = Math.abs(measure.degrees - quarter) <= MAX_BOX_LEVEL_DEGREES ? quarter : measure.degrees;
     return { degrees: ((degrees % 360) + 360) % 360, sure: measure.sure };

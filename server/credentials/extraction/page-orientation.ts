@@ -9,12 +9,7 @@
  * the band of small letters, descenders only a little below it, so an upright line's ink sits low in its stripe.
  */
 
-export interface GreyImage {
-  width: number;
-  height: number;
-  /** RGBA bytes, row by row (Jimp's bitmap). */
-  data: Uint8Array | Buffer;
-}
+import type { GreyPixels } from "./grey-pixels.ts";
 
 export interface PageOrientation {
   /** Counter-clockwise degrees that make the page upright and level, in (-180, 180]. */
@@ -42,7 +37,7 @@ interface Ink {
 }
 
 /** Ink pixels of a downscaled copy (darkest of each block, so thin strokes survive), centred on the page. */
-function inkOf(image: GreyImage): { ink: Ink; width: number; height: number } {
+function inkOf(image: GreyPixels): { ink: Ink; width: number; height: number } {
   const step = Math.max(1, Math.round(Math.max(image.width, image.height) / ANALYSIS_LONG_SIDE));
   const width = Math.floor(image.width / step);
   const height = Math.floor(image.height / step);
@@ -52,8 +47,7 @@ function inkOf(image: GreyImage): { ink: Ink; width: number; height: number } {
       let darkest = 255;
       for (let dy = 0; dy < step; dy += 1)
         for (let dx = 0; dx < step; dx += 1) {
-          const at = ((y * step + dy) * image.width + x * step + dx) * 4;
-          const value = (image.data[at]! + image.data[at + 1]! + image.data[at + 2]!) / 3;
+          const value = image.grey[(y * step + dy) * image.width + x * step + dx]!;
           if (value < darkest) darkest = value;
         }
       grey[y * width + x] = darkest;
@@ -169,7 +163,7 @@ const normalised = (degrees: number) => {
 };
 
 /** The counter-clockwise turn that makes a photographed page upright and level (see the top of this file). */
-export function pageOrientation(image: GreyImage): PageOrientation {
+export function pageOrientation(image: GreyPixels): PageOrientation {
   const { ink, width, height } = inkOf(image);
   if (ink.count < 500) return { degrees: 0, sure: false };
   const span = Math.ceil(Math.hypot(width, height) / 2) + 1;

@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { Jimp } from "jimp";
 import { pageOrientation } from "../../../server/credentials/extraction/page-orientation.ts";
+import { greyOf, turnedGrey } from "../../../server/credentials/extraction/grey-pixels.ts";
 import { buildCertificatePdf } from "../../fixtures/build-certificate-pdf.ts";
 import { buildPageImages } from "../../fixtures/build-page-images.ts";
 import { buildCardPng } from "../../fixtures/build-training-card.ts";
@@ -19,9 +20,12 @@ describe("the turn and tilt of a photographed page, from its pixels", () => {
       // Jimp turns counter-clockwise, as the measure answers.
       if (degrees) image.rotate(degrees);
 
-      const measured = pageOrientation(image.bitmap);
+      const measured = pageOrientation(greyOf(image.bitmap));
+      const levelled = pageOrientation(turnedGrey(greyOf(image.bitmap), measured.degrees));
 
       expect(apart(measured.degrees, -degrees)).toBeLessThanOrEqual(0.5);
+      // Turned by the measure, the page measures upright and level.
+      expect(apart(levelled.degrees, 0)).toBeLessThanOrEqual(0.5);
     },
   );
 
@@ -30,13 +34,13 @@ describe("the turn and tilt of a photographed page, from its pixels", () => {
     const upright = await Jimp.read(Buffer.from(bytes));
     const upsideDown = upright.clone().rotate(180);
 
-    expect(apart(pageOrientation(upright.bitmap).degrees, 0)).toBeLessThanOrEqual(0.5);
-    expect(apart(pageOrientation(upsideDown.bitmap).degrees, 180)).toBeLessThanOrEqual(0.5);
+    expect(apart(pageOrientation(greyOf(upright.bitmap)).degrees, 0)).toBeLessThanOrEqual(0.5);
+    expect(apart(pageOrientation(greyOf(upsideDown.bitmap)).degrees, 180)).toBeLessThanOrEqual(0.5);
   });
 
   it("is not sure of a blank page", async () => {
     const blank = new Jimp({ width: 400, height: 500, color: 0xffffffff });
 
-    expect(pageOrientation(blank.bitmap)).toEqual({ degrees: 0, sure: false });
+    expect(pageOrientation(greyOf(blank.bitmap))).toEqual({ degrees: 0, sure: false });
   });
 });
