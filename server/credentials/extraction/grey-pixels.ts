@@ -16,7 +16,15 @@ export interface GreyPixels {
 }
 
 /** The grey of Jimp's RGBA bitmap: the mean of the three colours. */
-export function greyOf({ width, height, data }: { width: number; height: number; data: Uint8Array }): GreyPixels {
+export function greyOf({
+  width,
+  height,
+  data,
+}: {
+  width: number;
+  height: number;
+  data: Uint8Array;
+}): GreyPixels {
   const grey = new Uint8Array(width * height);
   for (let i = 0; i < grey.length; i += 1)
     grey[i] = Math.round((data[i * 4]! + data[i * 4 + 1]! + data[i * 4 + 2]!) / 3);

@@ -115,7 +115,6 @@ async function decoded(path: string) {
   return greyOf(image.bitmap);
 }
 
-
 /**
  * Writes the grey image turned counter-clockwise by `degrees` (white corners), sharpened when asked, as a PGM, and
  * returns its path: tesseract reads grey anyway, and a PGM is written in milliseconds where a PNG takes far longer.

@@ -7,7 +7,7 @@ import { buildPageImages } from "../../fixtures/build-page-images.ts";
 import { buildCardPng } from "../../fixtures/build-training-card.ts";
 
 /** The angle between two turns, whichever way round, in degrees (0 to 180). */
-const apart = (a: number, b: number) => Math.abs((((a - b) % 360) + 540) % 360 - 180);
+const apart = (a: number, b: number) => Math.abs(((((a - b) % 360) + 540) % 360) - 180);
 
 describe("the turn and tilt of a photographed page, from its pixels", () => {
   it.each([0, 3.5, -2.6, 88.5, 93.4, 177.2, 183.6, -91, 268])(
