@@ -64,11 +64,12 @@ export async function remindBrokers(asOf: Date, linkBase: string): Promise<Broke
         Math.max(request.expiresAt.getTime(), asOf.getTime() + BROKER_LINK_DAYS * DAY_MS),
       );
       await request.update({ tokenSha256: digestOf(token), expiresAt }, { transaction });
-      const [company, type, shop] = await Promise.all([
-        Company.findByPk(request.companyId, { transaction }),
-        CredentialType.findByPk(request.typeCode, { transaction }),
-        request.shopCompanyId ? Company.findByPk(request.shopCompanyId, { transaction }) : null,
-      ]);
+      // In turn: the transaction's one connection runs one statement at a time.
+      const company = await Company.findByPk(request.companyId, { transaction });
+      const type = await CredentialType.findByPk(request.typeCode, { transaction });
+      const shop = request.shopCompanyId
+        ? await Company.findByPk(request.shopCompanyId, { transaction })
+        : null;
       await enqueueMail(
         brokerReminderMail({
           to: request.brokerEmail,

@@ -424,11 +424,13 @@ export async function tellShopOfVerifiedCertificate(
     lock: transaction.LOCK.UPDATE,
   });
   for (const request of requests) {
-    const [company, type, buyers] = await Promise.all([
-      Company.findByPk(request.companyId, { transaction }),
-      CredentialType.findByPk(credential.typeCode, { transaction }),
-      User.findAll({ where: { companyId: request.shopCompanyId!, role: "buyer" }, transaction }),
-    ]);
+    // In turn: the transaction's one connection runs one statement at a time.
+    const company = await Company.findByPk(request.companyId, { transaction });
+    const type = await CredentialType.findByPk(credential.typeCode, { transaction });
+    const buyers = await User.findAll({
+      where: { companyId: request.shopCompanyId!, role: "buyer" },
+      transaction,
+    });
     for (const buyer of buyers) {
       await tellPerson(
         shopCertificateMail(

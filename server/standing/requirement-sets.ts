@@ -214,18 +214,17 @@ export async function previewUnsavedRequirementSet(
             OR ${inForce("cr.company_id = t.company_id AND cr.technician_id IS NULL", r.typeCodes)})`,
       )
       .join(" AND ");
-    const [total, candidates] = await Promise.all([
-      selectRows<{ count: number }>(
-        transaction,
-        "SELECT count(*)::int AS count FROM technicians WHERE active",
-      ),
-      selectRows<{ id: number; company_id: number; time_zone: string }>(
-        transaction,
-        `SELECT t.id, t.company_id, co.time_zone FROM technicians t JOIN companies co ON co.id = t.company_id
-          WHERE t.active AND ${everyRequirement}`,
-        bind,
-      ),
-    ]);
+    // In turn: the transaction's one connection runs one statement at a time.
+    const total = await selectRows<{ count: number }>(
+      transaction,
+      "SELECT count(*)::int AS count FROM technicians WHERE active",
+    );
+    const candidates = await selectRows<{ id: number; company_id: number; time_zone: string }>(
+      transaction,
+      `SELECT t.id, t.company_id, co.time_zone FROM technicians t JOIN companies co ON co.id = t.company_id
+        WHERE t.active AND ${everyRequirement}`,
+      bind,
+    );
     const technicians = candidates.map((c) => ({ id: c.id, companyId: c.company_id, timeZone: c.time_zone }));
     const rows = technicians.length
       ? await selectRows<StandingCredentialRow>(

@@ -209,10 +209,9 @@ export async function loadStandingInputs(
   options: { targets?: StandingTarget[] } = {},
 ): Promise<StandingInputs> {
   const technicians = await loadTechnicians(selection, transaction);
-  const [types, targets] = await Promise.all([
-    loadCredentialTypes(transaction),
-    options.targets ? Promise.resolve(options.targets) : loadTargets(transaction),
-  ]);
+  // In turn: the transaction's one connection runs one statement at a time.
+  const types = await loadCredentialTypes(transaction);
+  const targets = options.targets ?? (await loadTargets(transaction));
   const rows = technicians.length
     ? await loadCredentials(technicians, selection === "all", typesReadFor(targets), transaction)
     : [];

@@ -68,10 +68,9 @@ export async function insertDemoMachineHistory(today: Date, transaction: Transac
   const accepted = daysAgo(41);
   const completed = daysAgo(40);
   const warningDays = Math.max(...DEFAULT_WARNING_DAYS);
-  const [atAccept, atCompletion] = await Promise.all([
-    standingSnapshotNow(tech.id, null, accepted, warningDays, transaction),
-    standingSnapshotNow(tech.id, null, completed, warningDays, transaction),
-  ]);
+  // One transaction is one connection, which runs one statement at a time: read in turn.
+  const atAccept = await standingSnapshotNow(tech.id, null, accepted, warningDays, transaction);
+  const atCompletion = await standingSnapshotNow(tech.id, null, completed, warningDays, transaction);
   await db().query(
     `INSERT INTO work_orders (shop_company_id, site_id, equipment_id, technician_id, service_company_id, technology,
        problem, urgency, preferred_dates, status, hours_worked, travel_hours, completion_note, snapshot_accepted,

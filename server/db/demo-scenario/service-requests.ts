@@ -58,11 +58,10 @@ export async function insertDemoServiceRequests(today: Date, transaction: Transa
       [name],
       transaction,
     );
-  const [tobias, henrik, saoirse] = await Promise.all([
-    tech("Tobias Wren"),
-    tech("Henrik Solberg-Paz"),
-    tech("Saoirse Vandeleur"),
-  ]);
+  // In turn: the three reads share the transaction's one connection.
+  const tobias = await tech("Tobias Wren");
+  const henrik = await tech("Henrik Solberg-Paz");
+  const saoirse = await tech("Saoirse Vandeleur");
   const day = today.toISOString().slice(0, 10);
 
   const request = async (state: string, problem: string, sentHoursAgo: number) =>
