@@ -104,6 +104,29 @@ describe("every role's daily screens at desktop and phone width", () => {
   );
 });
 
+describe("every role's header between phone and desktop width", () => {
+  // A small laptop and a tablet held sideways (common practice for layout checks): a role's whole bar of pages
+  // has to fit or fold into the menu, never push the page sideways.
+  it.each(roles)("fits the $role header at 1024 and 800 pixels", async ({ email, pages }) => {
+    const context = await suite.newContext({ viewport: { width: 1024, height: 768 } });
+    const page = await context.newPage();
+    await signIn(page, suite.url, email, DEMO_PASSWORD);
+    const path = pages[0]!;
+    const problems: string[] = [];
+    for (const width of [1024, 800]) {
+      await page.setViewportSize({ width, height: 768 });
+      await page.goto(`${suite.url}${path}`);
+      await page.getByRole("heading", { level: 1 }).first().waitFor();
+      await page.waitForLoadState("networkidle");
+      const wider = await overflow(page);
+      if (wider > 0)
+        problems.push(`${width} ${path}: ${wider}px wider than the screen (${await pastTheEdge(page)})`);
+    }
+    await context.close();
+    expect(problems).toEqual([]);
+  });
+});
+
 describe("the demo buyer's first directory search", () => {
   it("opens on the buyer's site and judges against that site's requirement set", async () => {
     const context = await suite.newContext({ viewport: { width: 1280, height: 900 } });

@@ -26,15 +26,15 @@ export function AppHeader({ items, user, homeHref, onSignOut, signingOut, tools 
         >
           <Wordmark />
         </Link>
-        <nav aria-label="Main" className="hidden flex-1 md:block">
+        <nav aria-label="Main" className="hidden flex-1 xl:block">
           <MainNav items={items} layout="bar" />
         </nav>
         <div className="ml-auto flex items-center gap-2">
           {tools}
-          <div className="hidden md:block">
+          <div className="hidden xl:block">
             <UserMenu user={user} onSignOut={onSignOut} signingOut={signingOut} />
           </div>
-          <div className="md:hidden">
+          <div className="xl:hidden">
             <MobileMenu items={items} user={user} onSignOut={onSignOut} signingOut={signingOut} />
           </div>
         </div>

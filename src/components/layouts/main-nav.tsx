@@ -6,7 +6,7 @@ type MainNavProps = { items: readonly NavItem[]; onNavigate?: () => void; layout
 // The bar sits in the ink header on wide screens; the stack fills the phone menu with large targets.
 const linkStyles = {
   bar:
-    "rounded-md px-3 py-2 text-sm font-medium text-ink-100 hover:bg-ink-800 hover:text-white " +
+    "block rounded-md px-3 py-2 text-center text-sm leading-tight font-medium text-ink-100 hover:bg-ink-800 hover:text-white " +
     "aria-[current=page]:bg-ink-700 aria-[current=page]:text-white aria-[current=page]:shadow-[inset_0_-3px_0_var(--color-accent-400)] " +
     "focus-visible:outline-2 focus-visible:outline-offset-2 focus-visible:outline-accent-400",
   stack:

@@ -41,7 +41,8 @@ export function UserMenu({ user, onSignOut, signingOut }: UserMenuProps) {
           {initialsOf(user.name)}
         </span>
         <span className="sr-only">User menu for </span>
-        <span className="max-w-40 truncate">{user.name}</span>
+        {/* The name shows beside the initials only where the widest bar (a shop's ten pages) leaves room. */}
+        <span className="sr-only 2xl:not-sr-only 2xl:max-w-40 2xl:truncate">{user.name}</span>
         <svg viewBox="0 0 10 6" className="size-2.5" aria-hidden="true" focusable="false">
           <path d="m1 1 4 4 4-4" className="fill-none stroke-current" strokeWidth="1.5" />
         </svg>
