@@ -1,5 +1,6 @@
 import type { DirectoryFilterName } from "../../shared/directory/schemas.ts";
-import { EARTH_MEAN_RADIUS_KM } from "../../shared/geo/great-circle-distance.ts";
+import { EARTH_MEAN_RADIUS_KM, unitChordForKm } from "../../shared/geo/great-circle-distance.ts";
+import { spherePointSql, withinCubeSql } from "../db/sphere-sql.ts";
 import { containsPattern, type SqlParams } from "./sql-params.ts";
 
 /** A search with its references resolved (site location, machine) and its instant fixed. */
@@ -64,15 +65,9 @@ export function distanceSql(p: SqlParams, site: { latitude: number; longitude: n
     + cos(radians(${lat}::float8)) * cos(radians(t.latitude)) * power(sin(radians(t.longitude - ${lon}::float8) / 2), 2)))))`;
 }
 
-/**
- * The site as a point on the unit sphere, computed by the same expression as the technicians.sphere_point column, so
- * both ends of a chord come from the same arithmetic.
- */
+/** The site as a point on the unit sphere (see server/db/sphere-sql.ts). */
 export function sitePointSql(p: SqlParams, site: { latitude: number; longitude: number }): string {
-  const lat = p.add(site.latitude);
-  const lon = p.add(site.longitude);
-  return `cube(ARRAY[cos(radians(${lat}::float8)) * cos(radians(${lon}::float8)),
-    cos(radians(${lat}::float8)) * sin(radians(${lon}::float8)), sin(radians(${lat}::float8))])`;
+  return spherePointSql(p.add(site.latitude), p.add(site.longitude));
 }
 
 /**
@@ -88,9 +83,7 @@ export function chordSql(p: SqlParams, site: { latitude: number; longitude: numb
  * distance, plus a hair): the GiST index's prefilter before the exact haversine test.
  */
 function radiusBoxSql(p: SqlParams, site: { latitude: number; longitude: number; radiusKm: number }): string {
-  const angular = Math.min(Math.PI, site.radiusKm / EARTH_MEAN_RADIUS_KM);
-  const halfSide = 2 * Math.sin(angular / 2) + 1e-9;
-  return `t.sphere_point <@ cube_enlarge(${sitePointSql(p, site)}, ${p.add(halfSide)}::float8, 3)`;
+  return withinCubeSql(sitePointSql(p, site), `${p.add(unitChordForKm(site.radiusKm) + 1e-9)}::float8`);
 }
 
 /** One SQL condition per filter the search uses, each named for the empty state. */

@@ -12,6 +12,7 @@ import { milesToKm } from "../../shared/geo/units.ts";
 import { DEFAULT_PRIOR } from "../../shared/ranking/rating-score.ts";
 import { db } from "../db/sequelize.ts";
 import { preparedRows } from "../db/sql.ts";
+import { withinCubeSql } from "../db/sphere-sql.ts";
 import { AppError } from "../http/app-error.ts";
 import { findShopEquipment } from "../sites/index.ts";
 import { decodeCursor, encodeCursor } from "./cursor.ts";
@@ -203,7 +204,7 @@ function nearestFirst(
   return {
     with: `WITH walk AS MATERIALIZED (SELECT t.id, ${chord} AS key ${DIRECTORY_FROM}${where}${after} ORDER BY 2 LIMIT ${limit}),
      nearest_ids AS (SELECT id FROM walk UNION SELECT t.id ${DIRECTORY_FROM}${where}${after}
-        AND t.sphere_point <@ cube_enlarge(${sitePointSql(p, site)}, (SELECT max(key) FROM walk) + ${margin}::float8, 3)
+        AND ${withinCubeSql(sitePointSql(p, site), `(SELECT max(key) FROM walk) + ${margin}::float8`)}
         AND ${chord} = (SELECT max(key) FROM walk))
      `,
     where: " AND t.id IN (SELECT id FROM nearest_ids)",

@@ -1,7 +1,8 @@
 import type { Transaction } from "sequelize";
 import { DEFAULT_RADIUS_MILES } from "../../shared/directory/schemas.ts";
 import { milesToKm } from "../../shared/geo/units.ts";
-import { EARTH_MEAN_RADIUS_KM, kmToMiles } from "../../shared/geo/great-circle-distance.ts";
+import { EARTH_MEAN_RADIUS_KM, kmToMiles, unitChordForKm } from "../../shared/geo/great-circle-distance.ts";
+import { spherePointSql, withinCubeSql } from "../db/sphere-sql.ts";
 import type { RoutedCompanyDto } from "../../shared/service-requests/schemas.ts";
 import { select } from "./sql.ts";
 
@@ -64,6 +65,7 @@ export async function routeRequest(
   criteria: RoutingCriteria,
   transaction?: Transaction,
 ): Promise<RoutedCompanyDto[]> {
+  const reachKm = criteria.radiusKm ?? milesToKm(DEFAULT_RADIUS_MILES);
   const rows = await select<CompanyRow>(
     `SELECT t.company_id, c.name AS company_name, count(*)::int AS cleared,
             bool_or(${OEM}) AS oem, min(${DISTANCE}) AS nearest_km
@@ -73,6 +75,10 @@ export async function routeRequest(
         AND t.technologies @> ARRAY[$6::varchar]
         AND (coalesce($8::text, '') = '' OR EXISTS (SELECT 1 FROM unnest(t.control_families) cf WHERE lower(cf) = lower($8::text)))
         AND ${DISTANCE} <= least(t.service_radius_km::float8, $9::float8)
+        -- Implied by the two lines above (the stored standing lists the baseline; the site is inside the shop's
+        -- reach), and they let the GiST index of listed technicians drop the far ones before the exact test.
+        AND t.cleared_sets @> '{0}'::integer[]
+        AND ${withinCubeSql(spherePointSql("$3", "$4"), "$10::float8")}
       GROUP BY t.company_id, c.name
       ORDER BY bool_or(${OEM}) DESC, min(${DISTANCE}), c.name, t.company_id`,
     [
@@ -84,7 +90,8 @@ export async function routeRequest(
       criteria.technology,
       criteria.builder ?? null,
       criteria.controlFamily ?? null,
-      criteria.radiusKm ?? milesToKm(DEFAULT_RADIUS_MILES),
+      reachKm,
+      unitChordForKm(reachKm) + 1e-9,
     ],
     transaction,
   );

@@ -44,3 +44,12 @@ export function isWithinReach(
 ): boolean {
   return distanceMiles <= Math.min(serviceRadiusMiles, searchRadiusMiles);
 }
+
+/**
+ * The straight-line distance through the unit sphere between two points `distanceKm` apart on the surface
+ * (chord = 2·sin(θ/2), θ the central angle): the half-side of a cube that holds every point within that distance, so a
+ * spatial index can drop far points before the exact great-circle test.
+ */
+export function unitChordForKm(distanceKm: number): number {
+  return 2 * Math.sin(Math.min(Math.PI, distanceKm / EARTH_MEAN_RADIUS_KM) / 2);
+}

@@ -7,6 +7,7 @@ import {
   greatCircleDistanceKm,
   greatCircleDistanceMiles,
   isWithinReach,
+  unitChordForKm,
 } from "../../../shared/geo/great-circle-distance.ts";
 
 // Ed Williams, Aviation Formulary V1.46, worked example (east longitude positive here, so west is negative).
@@ -86,5 +87,39 @@ describe("great-circle distance", () => {
     expect(inside).toBe(true);
     expect(outsideService).toBe(false);
     expect(outsideSearch).toBe(false);
+  });
+});
+
+describe("the chord a spatial index prefilters by", () => {
+  // Elementary geometry: a chord of a unit circle spanning the central angle θ is 2·sin(θ/2); 60° spans a side of the
+  // inscribed regular hexagon, exactly one radius long, and the antipode spans the diameter.
+  it("is 0 at the point, 1 at a 60-degree arc and 2 at the antipode, and never shrinks past it", () => {
+    const arcKm = (degrees: number) => (EARTH_MEAN_RADIUS_KM * degrees * Math.PI) / 180;
+    expect(unitChordForKm(0)).toBe(0);
+    expect(unitChordForKm(arcKm(60))).toBeCloseTo(1, 12);
+    expect(unitChordForKm(arcKm(180))).toBeCloseTo(2, 12);
+    expect(unitChordForKm(arcKm(270))).toBeCloseTo(2, 12);
+  });
+
+  it("holds every point within the distance: the straight line between two places never exceeds it", () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: -89, max: 89, noNaN: true }),
+        fc.double({ min: -179, max: 179, noNaN: true }),
+        fc.double({ min: -89, max: 89, noNaN: true }),
+        fc.double({ min: -179, max: 179, noNaN: true }),
+        (lat1, lon1, lat2, lon2) => {
+          const point = (lat: number, lon: number) => {
+            const [φ, λ] = [(lat * Math.PI) / 180, (lon * Math.PI) / 180];
+            return [Math.cos(φ) * Math.cos(λ), Math.cos(φ) * Math.sin(λ), Math.sin(φ)];
+          };
+          const [a, b] = [point(lat1, lon1), point(lat2, lon2)];
+          const straight = Math.hypot(a[0]! - b[0]!, a[1]! - b[1]!, a[2]! - b[2]!);
+          const km = greatCircleDistanceKm({ lat: lat1, lon: lon1 }, { lat: lat2, lon: lon2 });
+          // The cube's half-side is this chord plus 1e-9 in SQL; each axis difference is at most the straight line.
+          expect(straight).toBeLessThanOrEqual(unitChordForKm(km) + 1e-9);
+        },
+      ),
+    );
   });
 });
