@@ -11,6 +11,13 @@ declare module "node:http" {
 
 type Level = "silent" | "info" | "error";
 
+// A caller's id is kept only when it looks like one (a proxy's UUID or token), so a header cannot fill log lines.
+const CALLER_REQUEST_ID = /^[\w.:-]{1,128}$/;
+
+export function requestIdOf(header: string | string[] | undefined): string {
+  return typeof header === "string" && CALLER_REQUEST_ID.test(header) ? header : randomUUID();
+}
+
 /**
  * One line per API request when it finishes, through the one logger and its serializers (so its redaction), with the
  * shape pino-http gave it ({ req, res, responseTime }). A successful request in production writes nothing, and then
@@ -21,7 +28,7 @@ export function requestLog(production: boolean): RequestHandler {
   const levelOf = (res: Response, failed: boolean): Level =>
     failed || res.statusCode >= 500 ? "error" : res.statusCode < 400 && production ? "silent" : "info";
   return (req, res, next) => {
-    req.id = (req.headers["x-request-id"] as string | undefined) ?? randomUUID();
+    req.id = requestIdOf(req.headers["x-request-id"]);
     if (!req.url.startsWith("/api")) return next();
     const started = Date.now();
     const finished = (err?: unknown) => {
