@@ -327,3 +327,22 @@ describe("reading two columns that do not start on the same line", () => {
     expect(workers.policyNumber).toBe("WC-146290");
   });
 });
+
+describe("reading a limit printed under its label", () => {
+  // Common practice: auto liability's combined single limit is printed with its qualifier "(each accident)".
+  it("takes the amount on the next line when the label's line carries only a qualifier and no figure", () => {
+    const text = [
+      "AUTOMOBILE LIABILITY",
+      "Pol #",
+      "CA 139 7332",
+      "Combined Single Limit (ea accident)",
+      "1MM",
+      "Additional Insured",
+      "N",
+    ].join("\n");
+
+    const fields = proposeFields("auto_liability", "insurance", text).fields;
+
+    expect(fields.limits).toEqual({ combinedSingleLimit: 1_000_000 });
+  });
+});
