@@ -211,12 +211,11 @@ function readLimits(code: InsuranceCoverageCode, section: string[], scale: numbe
     hits.forEach((hit, i) => {
       const from = hit.match.index + hit.match[0].length;
       const rest = line.slice(from, hits[i + 1]?.match.index ?? line.length);
-      // A label alone on its line ("Each occurrence" / "$1M" below it): the amount is the whole next line.
+      // A label alone on its line ("Each occurrence" / "$1M" below it), or with only a qualifier and no figure after
+      // it ("Combined single limit (ea accident)"): the amount is the whole next line.
       const below = section[at + 1]?.trim() ?? "";
       const fragment =
-        rest.trim() === "" && hits.length === 1 && /^\$?\s?[\d,.]+\s?(?:MM|M|K)?$/i.test(below)
-          ? below
-          : rest;
+        !/\d/.test(rest) && hits.length === 1 && /^\$?\s?[\d,.]+\s?(?:MM|M|K)?$/i.test(below) ? below : rest;
       const amount = parseScaledAmount(fragment, scale);
       if (amount !== undefined && limits[hit.name] === undefined) limits[hit.name] = amount;
     });

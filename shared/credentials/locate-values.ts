@@ -30,7 +30,7 @@ const CELL_GAP_EMS = 1.5;
 /**
  * The page's text rebuilt from positioned items: items on one baseline form a line, read left to right, and a wide
  * gap between two items becomes three spaces, so the readers see "Name   Odile Carrack" as a label and a value in two
- * cells, as they would in a table, rather than one run of words.
+ * cells, as they would in a table, rather than one run of words. A cell wrapped onto the next line is joined back.
  */
 export function layoutText(items: readonly PositionedText[]): string {
   const order = [...items].sort((a, b) => a.page - b.page || a.y - b.y || a.x - b.x);
@@ -42,27 +42,105 @@ export function layoutText(items: readonly PositionedText[]): string {
       last.push(item);
     else baselines.push([item]);
   }
-  const lines = splitColumns(baselines);
+  const lines = joinWrappedCells(splitColumns(baselines).map(toCells));
   const out: string[] = [];
-  let page = order[0]?.page ?? 1;
+  let page = lines[0]?.page ?? 1;
   for (const line of lines) {
-    if (line[0]!.page !== page) {
+    if (line.page !== page) {
       out.push("");
-      page = line[0]!.page;
+      page = line.page;
     }
-    const cells = [...line].sort((a, b) => a.x - b.x);
-    let text = "";
-    let right = 0;
-    for (const item of cells) {
-      const em = item.em ?? item.h / 1.2;
-      const gap = item.x - right;
-      if (text !== "") text += gap > CELL_GAP_EMS * em ? "   " : gap > em * 0.15 ? " " : "";
-      text += item.text;
-      right = Math.max(right, item.x + item.w);
-    }
-    out.push(text.trimEnd());
+    out.push(
+      line.cells
+        .map((cell) => cell.text)
+        .join("   ")
+        .trimEnd(),
+    );
   }
   return out.join("\n");
+}
+
+interface Cell {
+  x: number;
+  text: string;
+}
+interface CellLine {
+  page: number;
+  y: number;
+  h: number;
+  em: number;
+  cells: Cell[];
+}
+
+function toCells(line: readonly PositionedText[]): CellLine {
+  const sorted = [...line].sort((a, b) => a.x - b.x);
+  const cells: Cell[] = [];
+  let right = 0;
+  for (const item of sorted) {
+    const em = item.em ?? item.h / 1.2;
+    const gap = item.x - right;
+    const cell = cells[cells.length - 1];
+    if (!cell || gap > CELL_GAP_EMS * em) cells.push({ x: item.x, text: item.text });
+    else cell.text += (gap > em * 0.15 ? " " : "") + item.text;
+    right = Math.max(right, item.x + item.w);
+  }
+  const first = sorted[0]!;
+  return {
+    page: first.page,
+    y: Math.min(...sorted.map((item) => item.y)),
+    h: Math.max(...sorted.map((item) => item.h)),
+    em: first.em ?? first.h / 1.2,
+    cells,
+  };
+}
+
+// Two cells start in the same place when their left edges are within half a font size (OCR boxes wander a little).
+const ALIGN_EMS = 0.5;
+// A wrapped line sits one line below the last; rows of a table or form are spaced wider than this.
+const WRAP_PITCH_LINES = 1.5;
+// A wrapped label or phrase carries on mid-sentence, in lower case; a new row's label starts with a capital.
+const CARRIES_ON = /^[a-z][a-z]/;
+// A line of its own label ("Expires: ...") is a new row even when it starts under a value.
+const OWN_LABEL = /^[A-Za-z][^:]{0,30}:/;
+
+/**
+ * A cell wrapped onto the line below is joined back to its cell, so a reader that sees lines gets the whole value:
+ * a line whose only cell starts under the last cell of the line above (the label column left blank) continues that
+ * value; a line whose cells start under the cells of the line above, the first carrying on in lower case, continues
+ * each of them (a label and its value both wrapped). Only a line one line-height below is taken, never a row.
+ */
+function joinWrappedCells(lines: CellLine[]): CellLine[] {
+  const out: CellLine[] = [];
+  for (const line of lines) {
+    const above = out[out.length - 1];
+    const near =
+      above !== undefined &&
+      above.page === line.page &&
+      line.y > above.y &&
+      line.y - above.y < WRAP_PITCH_LINES * Math.max(above.h, line.h);
+    const aligned = (a: Cell, b: Cell) => Math.abs(a.x - b.x) < ALIGN_EMS * line.em;
+    const last = above?.cells[above.cells.length - 1];
+    const first = line.cells[0]!;
+    if (near && last && above!.cells.length > 1 && line.cells.length === 1 && aligned(first, last)) {
+      if (!OWN_LABEL.test(first.text)) {
+        last.text += ` ${first.text}`;
+        above!.y = line.y;
+        continue;
+      }
+    }
+    if (
+      near &&
+      CARRIES_ON.test(first.text) &&
+      line.cells.length <= above!.cells.length &&
+      line.cells.every((cell, i) => aligned(cell, above!.cells[i]!))
+    ) {
+      line.cells.forEach((cell, i) => (above!.cells[i]!.text += ` ${cell.text}`));
+      above!.y = line.y;
+      continue;
+    }
+    out.push(line);
+  }
+  return out;
 }
 
 // A column must be repeated on at least this many lines before a page is read as side-by-side columns.
@@ -91,12 +169,18 @@ function cellStarts(line: readonly PositionedText[]): PositionedText[] {
  */
 function splitColumns(lines: PositionedText[][]): PositionedText[][] {
   const votes = new Map<string, number>();
-  for (const line of lines) {
+  const openings = lines.map((line) => firstWord(cellStarts(line)[0]?.text ?? ""));
+  for (const [at, line] of lines.entries()) {
     const starts = cellStarts(line);
-    const opening = firstWord(starts[0]?.text ?? "");
-    if (!opening) continue;
+    // The right block may start a line lower or higher than the left (a heading wrapped in one of them), so its
+    // label word is looked for as the opening of this line or of the one above or below.
+    const near = [at - 1, at, at + 1]
+      .filter((i) => lines[i]?.[0]?.page === line[0]?.page)
+      .map((i) => openings[i])
+      .filter((word): word is string => word !== undefined);
+    if (near.length === 0) continue;
     for (const cell of starts.slice(1))
-      if (cell.x > 0.3 && firstWord(cell.text) === opening) {
+      if (cell.x > 0.3 && near.includes(firstWord(cell.text) ?? "")) {
         const key = `${cell.page}:${cell.x.toFixed(2)}`;
         votes.set(key, (votes.get(key) ?? 0) + 1);
       }
@@ -120,13 +204,34 @@ function splitColumns(lines: PositionedText[][]): PositionedText[][] {
       continue;
     }
     const run: PositionedText[][] = [];
-    while (index < lines.length && lines[index]![0]!.page === line[0]!.page && !crosses(lines[index]!))
+    while (
+      index < lines.length &&
+      lines[index]![0]!.page === line[0]!.page &&
+      !crosses(lines[index]!) &&
+      !(run.length > 0 && belowColumns(run, lines[index]!, gutter!))
+    )
       run.push(lines[(index += 1) - 1]!);
     const left = run.map((l) => l.filter((item) => item.x < gutter!)).filter((l) => l.length > 0);
     const right = run.map((l) => l.filter((item) => item.x >= gutter!)).filter((l) => l.length > 0);
     out.push(...left, ...right);
   }
   return out;
+}
+
+// A gap of more than this many line heights under both columns ends them: what follows spans the page.
+const BELOW_COLUMNS_LINES = 1.5;
+
+/**
+ * A heading printed under the columns ("Description of operations") is short enough to sit left of the gutter, but
+ * it follows the two blocks, not the left one: a line with nothing right of the gutter, set off by a wider gap than
+ * a line's from everything above it, ends the run of columns.
+ */
+function belowColumns(run: PositionedText[][], line: PositionedText[], gutter: number): boolean {
+  if (line.some((item) => item.x >= gutter)) return false;
+  const top = Math.min(...line.map((item) => item.y));
+  const above = Math.max(...run.flat().map((item) => item.y));
+  const height = Math.max(...line.map((item) => item.h));
+  return top - above > BELOW_COLUMNS_LINES * height;
 }
 
 interface Line {

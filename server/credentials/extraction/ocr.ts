@@ -49,7 +49,7 @@ const MAX_DESKEW_DEGREES = 15;
 const MAX_BOX_LEVEL_DEGREES = 2;
 // A measured turn that reads this few sure words may be wrong rather than blurred: orientation detection is asked.
 const MIN_MEASURED_QUALITY = 12;
-// Edge steepness (sharpen-grey.ts) under which a photo's print is sharpened, gently, and under which it is blurred
+// Edge steepness (grey-pixels.ts) under which a photo's print is sharpened, gently, and under which it is blurred
 // enough to be sharpened hard: crisp photos measure 1.5 and more, ones softened by a pixel 0.4 to 0.6, by two 0.15 to 0.35.
 const SOFT_PRINT_STEEPNESS = 1;
 const BLURRED_PRINT_STEEPNESS = 0.37;

@@ -183,3 +183,166 @@ describe("reading two coverages printed side by side", () => {
     expect(layoutText(table)).toBe("Policy number   GL-204411");
   });
 });
+
+describe("reading cells wrapped onto the next line", () => {
+  // Common practice: narrow cards and two-column certificates wrap a long value (or label) inside its own cell.
+  const at = (text: string, x: number, y: number) => ({
+    page: 1,
+    text,
+    x,
+    y,
+    w: text.length * 0.006,
+    h: 0.012,
+  });
+
+  it("joins a line that starts under the value, with the label column blank, to that value", () => {
+    const items = [
+      at("Participant", 0.05, 0.1),
+      at("Corwin Vellacott", 0.4, 0.1),
+      at("Training", 0.05, 0.12),
+      at("Powered Industrial Truck", 0.4, 0.12),
+      at("Operator Evaluation", 0.4, 0.132),
+      at("Issued", 0.05, 0.152),
+      at("04/14/2025", 0.4, 0.152),
+    ];
+
+    const text = layoutText(items);
+    const fields = proposeFields("forklift", "training", text).fields;
+
+    expect(text.split("\n")[1]).toBe("Training   Powered Industrial Truck Operator Evaluation");
+    expect(fields.course).toBe("Powered Industrial Truck Operator Evaluation");
+    expect(fields.issueDate).toBe("2025-04-14");
+  });
+
+  it("keeps a line under the value as its own row when it is a row's spacing below, or carries its own label", () => {
+    const spaced = [at("Training", 0.05, 0.1), at("Rigging", 0.4, 0.1), at("Forklift", 0.4, 0.125)];
+    const labelled = [
+      at("Issued", 0.05, 0.1),
+      at("04/14/2025", 0.4, 0.1),
+      at("Expires: 04/14/2026", 0.4, 0.112),
+    ];
+
+    expect(layoutText(spaced).split("\n")).toEqual(["Training   Rigging", "Forklift"]);
+    expect(layoutText(labelled).split("\n")).toEqual(["Issued   04/14/2025", "Expires: 04/14/2026"]);
+  });
+
+  it("joins a label and its value both wrapped when the label carries on in lower case", () => {
+    const items = [
+      at("Commercial General Liability", 0.05, 0.08),
+      at("Insurer affording", 0.05, 0.1),
+      at("Cobblestone Mutual Casualty", 0.3, 0.1),
+      at("coverage", 0.05, 0.112),
+      at("Co., NAIC 03463", 0.3, 0.112),
+      at("Policy number", 0.05, 0.132),
+      at("GL-124932", 0.3, 0.132),
+    ];
+
+    const text = layoutText(items);
+    const fields = proposeFields("general_liability", "insurance", text).fields;
+
+    expect(text.split("\n")[1]).toBe(
+      "Insurer affording coverage   Cobblestone Mutual Casualty Co., NAIC 03463",
+    );
+    expect(fields.insurerName).toBe("Cobblestone Mutual Casualty Co.");
+    expect(fields.naic).toBe("03463");
+    expect(fields.policyNumber).toBe("GL-124932");
+  });
+});
+
+describe("reading two columns that do not start on the same line", () => {
+  // Common practice: side-by-side coverage blocks whose headings wrap differently, with a full-width heading under them.
+  const at = (text: string, x: number, y: number) => ({
+    page: 1,
+    text,
+    x,
+    y,
+    w: text.length * 0.006,
+    h: 0.012,
+  });
+  const left: Array<[string, string]> = [
+    ["Insurer", "Wrenfold Assurance Corp., NAIC 09856"],
+    ["Pol #", "UX-470187"],
+    ["Eff date", "02/26/2026"],
+    ["Exp date", "02/26/2027"],
+    ["Additional insured", "Y"],
+  ];
+  const right: Array<[string, string]> = [
+    ["Insurer", "Saltmarsh Assurance Corp., NAIC 03133"],
+    ["Pol #", "WC-146290"],
+    ["Eff date", "03/24/2026"],
+    ["Exp date", "03/24/2027"],
+    ["Additional insured", "N"],
+  ];
+  const items = [
+    at("UMBRELLA LIABILITY", 0.05, 0.1),
+    at("WORKERS COMPENSATION AND EMPLOYERS'", 0.55, 0.1),
+    at("LIABILITY", 0.55, 0.12),
+    ...left.flatMap(([label, value], i) => [
+      at(label, 0.05, 0.12 + i * 0.02),
+      at(value, 0.22, 0.12 + i * 0.02),
+    ]),
+    ...right.flatMap(([label, value], i) => [
+      at(label, 0.55, 0.14 + i * 0.02),
+      at(value, 0.72, 0.14 + i * 0.02),
+    ]),
+    at("DESCRIPTION OF OPERATIONS", 0.05, 0.28),
+    at("Repair and calibration of CNC machine tools at the holder's plant.", 0.05, 0.3),
+  ];
+
+  it("finds the gutter when the right block runs a line lower, and reads each block with its own values", () => {
+    const text = layoutText(items);
+    const umbrella = proposeFields("umbrella_liability", "insurance", text).fields;
+    const workers = proposeFields("workers_comp", "insurance", text).fields;
+
+    expect(umbrella.policyNumber).toBe("UX-470187");
+    expect(umbrella.naic).toBe("09856");
+    expect(umbrella.additionalInsured).toBe(true);
+    expect(workers.policyNumber).toBe("WC-146290");
+    expect(workers.naic).toBe("03133");
+    expect(workers.effectiveDate).toBe("2026-03-24");
+    expect(workers.additionalInsured).toBe(false);
+  });
+
+  it("reads a heading under both columns after the right block, so the right block's coverage is not cut off", () => {
+    const level = [
+      at("UMBRELLA LIABILITY", 0.05, 0.1),
+      at("WORKERS COMPENSATION", 0.55, 0.1),
+      ...left.flatMap(([label, value], i) => [
+        at(label, 0.05, 0.12 + i * 0.02),
+        at(value, 0.22, 0.12 + i * 0.02),
+      ]),
+      ...right.flatMap(([label, value], i) => [
+        at(label, 0.55, 0.12 + i * 0.02),
+        at(value, 0.72, 0.12 + i * 0.02),
+      ]),
+      at("DESCRIPTION OF OPERATIONS", 0.05, 0.26),
+      at("Repair and calibration of CNC machine tools at the holder's plant.", 0.05, 0.28),
+    ];
+
+    const text = layoutText(level);
+    const lines = text.split("\n");
+    const workers = proposeFields("workers_comp", "insurance", text).fields;
+
+    expect(lines.indexOf("DESCRIPTION OF OPERATIONS")).toBeGreaterThan(lines.indexOf("Pol #   WC-146290"));
+    expect(workers.policyNumber).toBe("WC-146290");
+  });
+});
+
+describe("reading a limit printed under its label", () => {
+  // Common practice: auto liability's combined single limit is printed with its qualifier "(each accident)".
+  it("takes the amount on the next line when the label's line carries only a qualifier and no figure", () => {
+    const text = [
+      "AUTOMOBILE LIABILITY",
+      "Pol #",
+      "CA 139 7332",
+      "Combined Single Limit (ea accident)",
+      "1MM",
+      "Additional Insured",
+      "N",
+    ].join("\n");
+
+    const fields = proposeFields("auto_liability", "insurance", text).fields;
+
+    expect(fields.limits).toEqual({ combinedSingleLimit: 1_000_000 });
+  });
+});
