@@ -53,6 +53,9 @@ const MIN_MEASURED_QUALITY = 12;
 // enough to be sharpened hard: crisp photos measure 1.5 and more, ones softened by a pixel 0.4 to 0.6, by two 0.15 to 0.35.
 const SOFT_PRINT_STEEPNESS = 1;
 const BLURRED_PRINT_STEEPNESS = 0.37;
+// On a blurred photo, even sharpened, ink spreads into grey that Sauvola's default k (0.34) drops as paper, breaking
+// thin strokes; a lower k keeps more of it as ink. Crisp and softened pages keep the default, which reads them best.
+const BLURRED_PRINT_SAUVOLA_K = 0.2;
 // One thread per page: tesseract's OpenMP threads cost more than they save on small pages and cannot be timed out cleanly.
 const CHILD_ENV = { OMP_THREAD_LIMIT: "1", PATH: "/usr/bin:/bin" };
 const MAX_OUTPUT_BYTES = 4 * 1024 * 1024;
@@ -135,14 +138,20 @@ async function writeTurned(
 interface Sharpening {
   amount: number;
   radius: number;
+  /** Sauvola's k for this page when it differs from tesseract's own (0.34). */
+  thresholdK?: number;
 }
 
 /** How much a photo's print is sharpened before it is read, from how soft it is (grey-pixels.ts). */
-function sharpeningFor(image: GreyPixels): Sharpening | undefined {
+export function sharpeningFor(image: GreyPixels): Sharpening | undefined {
   const steepness = edgeSteepness(image);
   if (steepness >= Number(process.env.SHARP_SOFT ?? SOFT_PRINT_STEEPNESS)) return undefined;
   if (steepness < Number(process.env.SHARP_BLURRED ?? BLURRED_PRINT_STEEPNESS))
-    return { amount: Number(process.env.SHARP_A2 ?? 1.5), radius: Number(process.env.SHARP_R2 ?? 3) };
+    return {
+      amount: Number(process.env.SHARP_A2 ?? 1.5),
+      radius: Number(process.env.SHARP_R2 ?? 3),
+      thresholdK: BLURRED_PRINT_SAUVOLA_K,
+    };
   return { amount: Number(process.env.SHARP_A1 ?? 1), radius: Number(process.env.SHARP_R1 ?? 2) };
 }
 
@@ -174,7 +183,12 @@ async function readPageImage(
             sharpen,
             join(dir, `turn-${page}.pgm`),
           );
-    const tsv = await run(tesseract, [path, "stdout", ...TESSERACT_ARGS, "tsv"], deadline - Date.now());
+    const threshold = sharpen?.thresholdK ? ["-c", `thresholding_kfactor=${sharpen.thresholdK}`] : [];
+    const tsv = await run(
+      tesseract,
+      [path, "stdout", ...TESSERACT_ARGS, ...threshold, "tsv"],
+      deadline - Date.now(),
+    );
     return { degrees, tsv, quality: readingQuality(tsv), upright: readsUpright(tsv) };
   };
   /** The measured turn, with a tilt tesseract reads well left to the word boxes (levelled below). */
