@@ -135,6 +135,11 @@ async function writeTurned(
   return out;
 }
 
+// Unsharp-mask amount and radius (pixels) for softened print, and for print blurred by two pixels or more: chosen on
+// the extraction corpus's tune part.
+const GENTLE_SHARPENING = { amount: 1, radius: 2 } as const;
+const HARD_SHARPENING = { amount: 1.5, radius: 3 } as const;
+
 interface Sharpening {
   amount: number;
   radius: number;
@@ -145,14 +150,9 @@ interface Sharpening {
 /** How much a photo's print is sharpened before it is read, from how soft it is (grey-pixels.ts). */
 export function sharpeningFor(image: GreyPixels): Sharpening | undefined {
   const steepness = edgeSteepness(image);
-  if (steepness >= Number(process.env.SHARP_SOFT ?? SOFT_PRINT_STEEPNESS)) return undefined;
-  if (steepness < Number(process.env.SHARP_BLURRED ?? BLURRED_PRINT_STEEPNESS))
-    return {
-      amount: Number(process.env.SHARP_A2 ?? 1.5),
-      radius: Number(process.env.SHARP_R2 ?? 3),
-      thresholdK: BLURRED_PRINT_SAUVOLA_K,
-    };
-  return { amount: Number(process.env.SHARP_A1 ?? 1), radius: Number(process.env.SHARP_R1 ?? 2) };
+  if (steepness >= SOFT_PRINT_STEEPNESS) return undefined;
+  if (steepness < BLURRED_PRINT_STEEPNESS) return { ...HARD_SHARPENING, thresholdK: BLURRED_PRINT_SAUVOLA_K };
+  return GENTLE_SHARPENING;
 }
 
 /**
