@@ -97,8 +97,16 @@ export function edgeSteepness({ width, height, grey }: GreyPixels): number {
   return contrast > 0 ? percentile(steps, 0.995) / contrast : 1;
 }
 
-/** The grey pixels with an unsharp mask of the given strength over a square neighbourhood of `radius` pixels. */
-export function unsharpGrey({ width, height, grey }: GreyPixels, amount: number, radius: number): GreyPixels {
+/**
+ * The mean grey of each pixel's square neighbourhood of `radius` pixels (cut at the edges), from an integral image, so
+ * the cost does not grow with the radius.
+ */
+export function localMeans(
+  width: number,
+  height: number,
+  grey: ArrayLike<number>,
+  radius: number,
+): Float64Array {
   const stride = width + 1;
   const sums = new Float64Array(stride * (height + 1));
   for (let y = 0; y < height; y += 1) {
@@ -108,22 +116,31 @@ export function unsharpGrey({ width, height, grey }: GreyPixels, amount: number,
       sums[(y + 1) * stride + x + 1] = sums[y * stride + x + 1]! + row;
     }
   }
-  const out = new Uint8Array(width * height);
+  const means = new Float64Array(width * height);
   for (let y = 0; y < height; y += 1) {
     const top = Math.max(0, y - radius);
     const bottom = Math.min(height, y + radius + 1);
     for (let x = 0; x < width; x += 1) {
       const left = Math.max(0, x - radius);
       const right = Math.min(width, x + radius + 1);
-      const mean =
+      means[y * width + x] =
         (sums[bottom * stride + right]! -
           sums[top * stride + right]! -
           sums[bottom * stride + left]! +
           sums[top * stride + left]!) /
         ((bottom - top) * (right - left));
-      const value = grey[y * width + x]!;
-      out[y * width + x] = Math.max(0, Math.min(255, Math.round(value + amount * (value - mean))));
     }
+  }
+  return means;
+}
+
+/** The grey pixels with an unsharp mask of the given strength over a square neighbourhood of `radius` pixels. */
+export function unsharpGrey({ width, height, grey }: GreyPixels, amount: number, radius: number): GreyPixels {
+  const means = localMeans(width, height, grey, radius);
+  const out = new Uint8Array(width * height);
+  for (let i = 0; i < out.length; i += 1) {
+    const value = grey[i]!;
+    out[i] = Math.max(0, Math.min(255, Math.round(value + amount * (value - means[i]!))));
   }
   return { width, height, grey: out };
 }

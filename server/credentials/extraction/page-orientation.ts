@@ -9,7 +9,7 @@
  * the band of small letters, descenders only a little below it, so an upright line's ink sits low in its stripe.
  */
 
-import type { GreyPixels } from "./grey-pixels.ts";
+import { localMeans, type GreyPixels } from "./grey-pixels.ts";
 
 export interface PageOrientation {
   /** Counter-clockwise degrees that make the page upright and level, in (-180, 180]. */
@@ -52,30 +52,12 @@ function inkOf(image: GreyPixels): { ink: Ink; width: number; height: number } {
         }
       grey[y * width + x] = darkest;
     }
-  // Integral image for the neighbourhood means.
-  const sums = new Float64Array((width + 1) * (height + 1));
-  for (let y = 0; y < height; y += 1) {
-    let row = 0;
-    for (let x = 0; x < width; x += 1) {
-      row += grey[y * width + x]!;
-      sums[(y + 1) * (width + 1) + x + 1] = sums[y * (width + 1) + x + 1]! + row;
-    }
-  }
+  const means = localMeans(width, height, grey, WINDOW);
   const xs: number[] = [];
   const ys: number[] = [];
   for (let y = 0; y < height; y += 1) {
-    const top = Math.max(0, y - WINDOW);
-    const bottom = Math.min(height, y + WINDOW + 1);
     for (let x = 0; x < width; x += 1) {
-      const left = Math.max(0, x - WINDOW);
-      const right = Math.min(width, x + WINDOW + 1);
-      const area = (bottom - top) * (right - left);
-      const sum =
-        sums[bottom * (width + 1) + right]! -
-        sums[top * (width + 1) + right]! -
-        sums[bottom * (width + 1) + left]! +
-        sums[top * (width + 1) + left]!;
-      const mean = sum / area;
+      const mean = means[y * width + x]!;
       const value = grey[y * width + x]!;
       if (value < mean * INK_CONTRAST && mean - value > 24) {
         xs.push(x - width / 2);
