@@ -1,10 +1,8 @@
-import type { TooltipContentProps, TooltipValueType } from "recharts";
 import type { WeekBucket } from "./lapse-window.ts";
 
 /** The hover card for one week's bar; an empty week has no bar to hover, so it shows nothing. */
-export function LapseTooltip({ active, payload }: TooltipContentProps<TooltipValueType, string | number>) {
-  const week = payload?.[0]?.payload as WeekBucket | undefined;
-  if (!active || !week || week.count === 0) return null;
+export function LapseTooltip({ week }: { week: WeekBucket | null }) {
+  if (!week || week.count === 0) return null;
   return (
     <div className="rounded-md border border-ink-100 bg-white px-3 py-2 text-sm text-ink-900 shadow-md">
       <p className="font-semibold">Week of {week.label}</p>
